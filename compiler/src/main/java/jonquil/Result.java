@@ -1,0 +1,36 @@
+package jonquil;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import jonquil.analysis.RequirementOutcome;
+import jonquil.analysis.RequirementStatus;
+import jonquil.diag.Diagnostic;
+import jonquil.diag.Severity;
+import jonquil.source.SourceFile;
+
+/**
+ * Everything one check produced: the texts it read, its diagnostics (sorted), and the
+ * verdict on every requirement. CLI formats, reports and the language server all read
+ * this one value, so they cannot disagree.
+ */
+public record Result(Map<Path, SourceFile> files, List<Diagnostic> diagnostics, List<RequirementOutcome> requirements) {
+  public Result {
+    files = Map.copyOf(files);
+    diagnostics = diagnostics.stream().sorted(Diagnostic.ORDER).toList();
+    requirements = List.copyOf(requirements);
+  }
+
+  public long count(Severity severity) {
+    return diagnostics.stream().filter(d -> d.severity() == severity).count();
+  }
+
+  public long count(RequirementStatus status) {
+    return requirements.stream().filter(r -> r.status() == status).count();
+  }
+
+  /** True when the CI gate must fail: any error (failed requirements are errors too), or any warning when strict. */
+  public boolean fails(boolean strict) {
+    return count(Severity.ERROR) > 0 || count(RequirementStatus.FAIL) > 0 || (strict && count(Severity.WARNING) > 0);
+  }
+}

@@ -1,0 +1,49 @@
+package jonquil;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Map;
+
+/**
+ * Where a check reads its files from: a project root (no `use` may leave it) and a
+ * reader that sees the disk, optionally overlaid with unsaved editor buffers.
+ */
+public record Workspace(Path root, Reader reader) {
+
+  /** Reads the text of one file; throws when it does not exist or cannot be read. */
+  @FunctionalInterface
+  public interface Reader {
+    String read(Path file) throws IOException;
+
+    default boolean exists(Path file) {
+      return Files.isRegularFile(file);
+    }
+  }
+
+  public Workspace {
+    root = root.toAbsolutePath().normalize();
+  }
+
+  public static Workspace onDisk(Path root) {
+    return new Workspace(root, file -> Files.readString(file, StandardCharsets.UTF_8));
+  }
+
+  /** The disk, with open buffers taking precedence over what is saved. */
+  public static Workspace withOverlay(Path root, Map<Path, String> buffers) {
+    Map<Path, String> copy = Map.copyOf(buffers);
+    return new Workspace(root, new Reader() {
+      @Override
+      public String read(Path file) throws IOException {
+        String open = copy.get(file.toAbsolutePath().normalize());
+        return open != null ? open : Files.readString(file, StandardCharsets.UTF_8);
+      }
+
+      @Override
+      public boolean exists(Path file) {
+        return copy.containsKey(file.toAbsolutePath().normalize()) || Files.isRegularFile(file);
+      }
+    });
+  }
+}
