@@ -2,7 +2,7 @@
 // Newlines are tokens: one fact per line is the language's unit of layout.
 lexer grammar JonquilLexer;
 
-channels { COMMENTS }
+channels { COMMENTS, ERRORS }
 
 // Structural keywords.
 USE         : 'use' ;
@@ -65,12 +65,12 @@ UNTERMINATED_STRING : '"' (~["\\\r\n] | '\\' ~[\r\n])* ;
 
 LINE_COMMENT  : '//' ~[\r\n]* -> channel(COMMENTS) ;
 BLOCK_COMMENT : '/*' .*? '*/' -> channel(COMMENTS) ;
-UNTERMINATED_COMMENT : '/*' .*? EOF ;
+UNTERMINATED_COMMENT : '/*' .*? EOF -> channel(ERRORS) ;
 
 NL          : '\r'? '\n' | '\r' ;
 WS          : [ \t\f\uFEFF]+ -> skip ;
-// Anything else becomes one token that the checker reports in plain words.
-ERROR_CHAR  : . ;
+// Anything else becomes one token, kept out of the parser's way, that the checker reports in plain words.
+ERROR_CHAR  : . -> channel(ERRORS) ;
 
 fragment DIGITS   : [0-9]+ ;
 fragment EXPONENT : [eE] [+\-]? DIGITS ;

@@ -1,0 +1,199 @@
+package jonquil.syntax;
+
+import java.util.ArrayDeque;
+import java.util.ArrayList;
+import java.util.Deque;
+import java.util.List;
+import jonquil.diag.DiagnosticCode;
+import jonquil.diag.Related;
+import jonquil.grammar.internal.JonquilLexer;
+import jonquil.grammar.internal.JonquilParser;
+import jonquil.source.SourceFile;
+import jonquil.source.TextRange;
+import org.antlr.v4.runtime.CharStreams;
+import org.antlr.v4.runtime.CommonToken;
+import org.antlr.v4.runtime.CommonTokenStream;
+import org.antlr.v4.runtime.ListTokenSource;
+import org.antlr.v4.runtime.Token;
+import org.antlr.v4.runtime.misc.ParseCancellationException;
+
+/**
+ * Text to syntax tree. Never throws on user input: every problem becomes a diagnostic,
+ * and the tree holds whatever could still be read.
+ */
+public final class SpecParser {
+  /** Specs are hand-written; a larger file is almost surely not a spec (precedent: editor caps of 1 MiB). */
+  public static final int MAX_CHARS = 4 * 1024 * 1024;
+  static final int MAX_NUMBER_CHARS = 100;
+
+  private SpecParser() {}
+
+  public static ParseResult parse(SourceFile source) {
+    SyntaxReporter reporter = new SyntaxReporter(source.path(), source.lines());
+    if (source.text().length() > MAX_CHARS) {
+      reporter.lexical(DiagnosticCode.FILE_TOO_LARGE, TextRange.EMPTY,
+          "file is larger than " + (MAX_CHARS / (1024 * 1024)) + " MiB; a spec this size is not supported", null);
+      return new ParseResult(source, SpecFile.empty(source.path()), reporter.diagnostics());
+    }
+    OffsetMap offsets = new OffsetMap(source.text());
+    JonquilLexer lexer = new JonquilLexer(CharStreams.fromString(source.text(), source.path().toString()));
+    lexer.removeErrorListeners();
+    CommonTokenStream lexed = new CommonTokenStream(lexer);
+    lexed.fill();
+    List<TextRange> comments = new ArrayList<>();
+    List<Token> repaired = scanTokens(source, lexed.getTokens(), offsets, reporter, comments);
+
+    JonquilParser parser = new JonquilParser(new CommonTokenStream(new ListTokenSource(repaired)));
+    parser.removeErrorListeners();
+    parser.setErrorHandler(new SyntaxErrorStrategy(reporter, offsets));
+    JonquilParser.FileContext tree = null;
+    try {
+      tree = parser.file();
+    } catch (ParseCancellationException stop) {
+      reporter.lexical(DiagnosticCode.TOO_MANY_ERRORS, TextRange.EMPTY,
+          "stopped reading this file after " + SyntaxReporter.MAX_DIAGNOSTICS + " syntax errors", null);
+    }
+    SpecFile ast = tree == null
+        ? SpecFile.empty(source.path())
+        : new AstBuilder(source, offsets, comments).build(tree);
+    return new ParseResult(source, ast, reporter.diagnostics());
+  }
+
+  /**
+   * Reports lexical problems and brace balance before parsing, so messages can be exact,
+   * and returns the tokens repaired for the parser: a block left open gets its '}' just
+   * before the line where the next block starts, and a stray '}' is dropped. The errors
+   * are reported here; the parser then reads the rest of the file as the writer meant it.
+   */
+  private static List<Token> scanTokens(
+      SourceFile source, List<Token> tokens, OffsetMap offsets, SyntaxReporter reporter, List<TextRange> comments) {
+    List<Token> repaired = new ArrayList<>(tokens.size() + 4);
+    int lineStartIndex = 0; // index in 'repaired' of the first token of the current line
+    Deque<Token> open = new ArrayDeque<>();
+    Token errorRunStart = null;
+    Token errorRunEnd = null;
+    for (Token t : tokens) {
+      TextRange range = range(t, offsets);
+      if (t.getType() == JonquilLexer.ERROR_CHAR) {
+        if (errorRunEnd != null && errorRunEnd.getStopIndex() + 1 == t.getStartIndex()) {
+          errorRunEnd = t;
+          continue;
+        }
+        flushErrorRun(source, errorRunStart, errorRunEnd, offsets, reporter);
+        errorRunStart = t;
+        errorRunEnd = t;
+        continue;
+      }
+      boolean keep = true;
+      switch (t.getType()) {
+        case JonquilLexer.LINE_COMMENT, JonquilLexer.BLOCK_COMMENT -> comments.add(range);
+        case JonquilLexer.UNTERMINATED_STRING -> reporter.lexical(DiagnosticCode.UNTERMINATED_STRING, range,
+            "string is not closed: add '\"' before the end of the line", null);
+        case JonquilLexer.UNTERMINATED_COMMENT -> reporter.lexical(DiagnosticCode.UNTERMINATED_COMMENT,
+            new TextRange(range.start(), Math.min(range.end(), range.start() + 2)),
+            "comment is never closed: add '*/' where it should end", null);
+        case JonquilLexer.NUMBER -> checkNumber(t, range, reporter);
+        case JonquilLexer.LBRACE -> {
+          if (!open.isEmpty()) {
+            Token outer = open.pop();
+            reporter.lexical(DiagnosticCode.UNCLOSED_BRACE, range(outer, offsets),
+                "unclosed '{' opened at " + where(source, offsets, outer) + ": a new block starts at " + where(source, offsets, t)
+                    + " before this one ends with '}'",
+                new Related(source.path(), range, "the next block starts here"));
+            int at = repaired.size();
+            if (lineStartIndex < at && repaired.get(lineStartIndex).getStartIndex() > outer.getStartIndex()) {
+              at = lineStartIndex - 1; // before the newline that ends the previous line
+            }
+            repaired.add(at, closingBrace(at < repaired.size() ? repaired.get(at) : t));
+          }
+          open.push(t);
+        }
+        case JonquilLexer.RBRACE -> {
+          if (open.isEmpty()) {
+            reporter.lexical(DiagnosticCode.UNMATCHED_CLOSE, range, "'}' without a matching '{'", null);
+            keep = false;
+          } else {
+            open.pop();
+          }
+        }
+        case JonquilLexer.LPAREN, JonquilLexer.RPAREN -> reporter.lexical(DiagnosticCode.SYNTAX_UNEXPECTED, range,
+            "parentheses are not used in Jonquil; write values one after another, separated by commas", null);
+        default -> { }
+      }
+      if (t.getType() == Token.EOF) {
+        flushErrorRun(source, errorRunStart, errorRunEnd, offsets, reporter);
+        errorRunStart = null;
+        errorRunEnd = null;
+        int end = source.text().length();
+        for (Token unclosed : open) {
+          reporter.lexical(DiagnosticCode.UNCLOSED_BRACE, range(unclosed, offsets),
+              "unclosed '{' opened at " + where(source, offsets, unclosed) + ": add '}' to end the block",
+              new Related(source.path(), new TextRange(end, end), "the file ends here"));
+          repaired.add(closingBrace(t));
+        }
+        open.clear();
+      }
+      if (keep && t.getChannel() == Token.DEFAULT_CHANNEL) {
+        repaired.add(t);
+        if (t.getType() == JonquilLexer.NL) {
+          lineStartIndex = repaired.size();
+        }
+      }
+    }
+    return repaired;
+  }
+
+  /** A zero-width '}' placed before {@code next}, standing in for one the writer forgot. */
+  private static Token closingBrace(Token next) {
+    CommonToken brace = new CommonToken(JonquilLexer.RBRACE, "}");
+    brace.setStartIndex(next.getStartIndex());
+    brace.setStopIndex(next.getStartIndex() - 1);
+    brace.setLine(next.getLine());
+    brace.setCharPositionInLine(next.getCharPositionInLine());
+    return brace;
+  }
+
+  private static void flushErrorRun(
+      SourceFile source, Token start, Token end, OffsetMap offsets, SyntaxReporter reporter) {
+    if (start == null) {
+      return;
+    }
+    TextRange range = new TextRange(offsets.toUtf16(start.getStartIndex()), offsets.toUtf16(end.getStopIndex() + 1));
+    String text = source.slice(range);
+    String shown = text.codePoints().limit(8).mapToObj(SpecParser::visible).reduce("", String::concat);
+    String more = text.codePointCount(0, text.length()) > 8 ? "..." : "";
+    reporter.lexical(DiagnosticCode.BAD_CHARACTER, range,
+        (range.length() == 1 ? "unexpected character '" : "unexpected characters '") + shown + more
+            + "': not part of the Jonquil language", null);
+  }
+
+  private static String visible(int cp) {
+    if (Character.isISOControl(cp) || Character.getType(cp) == Character.FORMAT || !Character.isDefined(cp)) {
+      return String.format("U+%04X", cp);
+    }
+    return new String(Character.toChars(cp));
+  }
+
+  private static void checkNumber(Token t, TextRange range, SyntaxReporter reporter) {
+    String text = t.getText();
+    if (text.length() > MAX_NUMBER_CHARS) {
+      reporter.lexical(DiagnosticCode.BAD_NUMBER, range,
+          "number has more than " + MAX_NUMBER_CHARS + " characters", null);
+    } else if (Double.isInfinite(Double.parseDouble(text))) {
+      reporter.lexical(DiagnosticCode.BAD_NUMBER, range, "number '" + TokenText.shorten(text) + "' is too large", null);
+    }
+  }
+
+  static TextRange range(Token t, OffsetMap offsets) {
+    if (t.getType() == Token.EOF) {
+      int at = offsets.toUtf16(t.getStartIndex());
+      return new TextRange(at, at);
+    }
+    return new TextRange(offsets.toUtf16(t.getStartIndex()), offsets.toUtf16(t.getStopIndex() + 1));
+  }
+
+  private static String where(SourceFile source, OffsetMap offsets, Token t) {
+    int offset = offsets.toUtf16(t.getStartIndex());
+    return source.humanLine(offset) + ":" + source.humanColumn(offset);
+  }
+}

@@ -1,0 +1,61 @@
+package jonquil.syntax;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Set;
+import jonquil.diag.Diagnostic;
+import jonquil.diag.DiagnosticCode;
+import jonquil.diag.Related;
+import jonquil.source.TextRange;
+
+/**
+ * Collects syntax diagnostics for one file, keeping one per line and none at tokens that
+ * the lexical pre-scan already explained (so a stray '}' is reported once, not thrice).
+ */
+final class SyntaxReporter {
+  static final int MAX_DIAGNOSTICS = 100;
+
+  private final Path file;
+  private final jonquil.source.LineIndex lines;
+  private final List<Diagnostic> diagnostics = new ArrayList<>();
+  private final Set<Integer> explainedOffsets = new HashSet<>();
+  private final Set<Integer> linesWithParseError = new HashSet<>();
+
+  SyntaxReporter(Path file, jonquil.source.LineIndex lines) {
+    this.file = file;
+    this.lines = lines;
+  }
+
+  /** Reported by the lexical pre-scan; parser errors at this token are then redundant. */
+  void lexical(DiagnosticCode code, TextRange range, String message, Related related) {
+    explainedOffsets.add(range.start());
+    Diagnostic d = Diagnostic.of(code, file, range, message);
+    add(related == null ? d : d.withRelated(related));
+  }
+
+  void parse(DiagnosticCode code, TextRange range, String message) {
+    if (explainedOffsets.contains(range.start())) {
+      return;
+    }
+    if (!linesWithParseError.add(lines.line(range.start()))) {
+      return;
+    }
+    add(Diagnostic.of(code, file, range, message));
+  }
+
+  private void add(Diagnostic d) {
+    if (diagnostics.size() < MAX_DIAGNOSTICS) {
+      diagnostics.add(d);
+    }
+  }
+
+  boolean full() {
+    return diagnostics.size() >= MAX_DIAGNOSTICS;
+  }
+
+  List<Diagnostic> diagnostics() {
+    return diagnostics;
+  }
+}
