@@ -1,0 +1,83 @@
+package jonquil.resolve;
+
+import java.util.Arrays;
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * Every kind of declaration the language knows, with the word that introduces it, its
+ * role, its output ports and its parameter table (see {@link KindTables}).
+ * To add a kind: add a constant here, its table in KindTables, and a test case.
+ */
+public enum ElementKind {
+  SOURCE("source", Category.SOURCE, List.of("out")),
+  MATERIAL("material", Category.MATERIAL, List.of()),
+  COATING("coating", Category.COATING, List.of()),
+  INTERFACE("interface", Category.OPTIC, List.of("through", "reflected")),
+  POLARIZER("polarizer", Category.OPTIC, List.of("out")),
+  WAVEPLATE("waveplate", Category.OPTIC, List.of("out")),
+  ROTATOR("rotator", Category.OPTIC, List.of("out")),
+  SPLITTER("splitter", Category.OPTIC, List.of("through", "reflected")),
+  DEPOLARIZER("depolarizer", Category.OPTIC, List.of("out")),
+  MIRROR("mirror", Category.OPTIC, List.of("out")),
+  WINDOW("window", Category.OPTIC, List.of("through", "reflected")),
+  PLATE("plate", Category.OPTIC, List.of("through", "reflected")),
+  LENS("lens", Category.OPTIC, List.of("out")),
+  APERTURE("aperture", Category.OPTIC, List.of("out")),
+  FILTER("filter", Category.OPTIC, List.of("out")),
+  RHOMB("rhomb", Category.OPTIC, List.of("out")),
+  PROBE("probe", Category.PROBE, List.of("out")),
+  DETECTOR("detector", Category.TERMINAL, List.of()),
+  DUMP("dump", Category.TERMINAL, List.of());
+
+  private final String word;
+  private final Category category;
+  private final List<String> ports;
+
+  ElementKind(String word, Category category, List<String> ports) {
+    this.word = word;
+    this.category = category;
+    this.ports = ports;
+  }
+
+  public String word() {
+    return word;
+  }
+
+  public Category category() {
+    return category;
+  }
+
+  /** Output ports; the first is where the beam goes when a path names no port. */
+  public List<String> ports() {
+    return ports;
+  }
+
+  /**
+   * Ports whose light is a designed output: if no branch follows one, the writer most
+   * likely forgot it. (A window's 'reflected' port is a ghost, expected to go unfollowed.)
+   */
+  public List<String> primaryPorts() {
+    return this == SPLITTER ? ports : List.of();
+  }
+
+  public List<ParamSpec> params() {
+    return KindTables.params(this);
+  }
+
+  public KindRules rules() {
+    return KindTables.rules(this);
+  }
+
+  public Optional<ParamSpec> param(String name) {
+    return params().stream().filter(p -> p.name().equals(name)).findFirst();
+  }
+
+  public static Optional<ElementKind> byWord(String word) {
+    return Arrays.stream(values()).filter(k -> k.word.equals(word)).findFirst();
+  }
+
+  public static List<String> words() {
+    return Arrays.stream(values()).map(ElementKind::word).toList();
+  }
+}

@@ -1,0 +1,30 @@
+package jonquil.resolve;
+
+import java.nio.file.Path;
+import java.util.Optional;
+import jonquil.syntax.Declaration;
+import jonquil.syntax.Name;
+
+/**
+ * Something a name can refer to: a declaration in some file, a train, or an entry of the
+ * built-in material catalog (which has no declaration and no file).
+ */
+public record Symbol(String name, Category category, Optional<ElementKind> kind, Path file, Optional<Name> nameNode,
+    Optional<Declaration> declaration) {
+
+  public static Symbol catalog(String name) {
+    return new Symbol(name, Category.MATERIAL, Optional.of(ElementKind.MATERIAL), null, Optional.empty(), Optional.empty());
+  }
+
+  public boolean isCatalog() {
+    return file == null;
+  }
+
+  /** How the symbol is named in messages: "mirror 'm1'", "catalog material 'water'". */
+  public String describe() {
+    if (isCatalog()) {
+      return "catalog material '" + name + "'";
+    }
+    return kind.map(k -> k.word() + " '" + name + "'").orElse(category.phrase() + " '" + name + "'");
+  }
+}

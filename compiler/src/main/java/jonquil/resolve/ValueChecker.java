@@ -1,0 +1,399 @@
+package jonquil.resolve;
+
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import jonquil.diag.DiagnosticCode;
+import jonquil.diag.Edit;
+import jonquil.diag.Fix;
+import jonquil.source.TextRange;
+import jonquil.syntax.Arg;
+import jonquil.units.Dimension;
+import jonquil.units.QuantityFormat;
+import jonquil.units.Scale;
+import jonquil.units.Unit;
+import jonquil.units.UnitParse;
+import jonquil.units.UnitParser;
+
+/**
+ * Turns matched arguments into checked SI values: units parsed and dimension-checked,
+ * physical ranges enforced, names resolved. Every problem becomes a diagnostic at the
+ * literal that caused it; the value is then left out and checking goes on.
+ */
+final class ValueChecker {
+  private final Sink sink;
+  private final Scope scope;
+
+  ValueChecker(Sink sink, Scope scope) {
+    this.sink = sink;
+    this.scope = scope;
+  }
+
+  /** Match {@code args} against {@code shape} and check every bound value; empty if the form is wrong. */
+  Optional<Value.Group> check(Shape shape, List<Arg> args, String what, TextRange whole) {
+    ShapeMatcher.Outcome outcome = ShapeMatcher.match(shape, args);
+    if (!outcome.matched()) {
+      reportMismatch(outcome, args, what, whole);
+      return Optional.empty();
+    }
+    Map<String, Value> slots = new HashMap<>();
+    Map<Integer, Map<String, Value>> items = new java.util.TreeMap<>();
+    for (ShapeMatcher.Binding b : outcome.bindings()) {
+      Optional<Value> v = value(b.leaf(), b.arg(), what);
+      if (v.isEmpty()) {
+        continue;
+      }
+      String slot = slotOf(b.leaf());
+      if (slot == null) {
+        continue;
+      }
+      if (b.item() >= 0) {
+        items.computeIfAbsent(b.item(), k -> new HashMap<>()).put(slot, v.get());
+      } else {
+        slots.put(slot, v.get());
+      }
+    }
+    List<Value.Group> itemGroups = items.values().stream()
+        .map(m -> new Value.Group(m, List.of(), whole)).toList();
+    return Optional.of(new Value.Group(slots, itemGroups, whole));
+  }
+
+  private void reportMismatch(ShapeMatcher.Outcome outcome, List<Arg> args, String what, TextRange whole) {
+    String expected = ShapeMatcher.quoteFree(outcome.expected());
+    if (outcome.failedArg() == null) {
+      TextRange at = args.isEmpty() ? whole : new TextRange(whole.end(), whole.end());
+      String after = args.isEmpty() ? "" : " more";
+      sink.report(DiagnosticCode.MISSING_ARGUMENT, args.isEmpty() ? whole : at,
+          "'" + what + "' needs" + after + " " + expected);
+      return;
+    }
+    Arg bad = outcome.failedArg();
+    String hint = "";
+    if (bad instanceof Arg.RefArg ref) {
+      List<String> words = outcome.expected().stream()
+          .flatMap(e -> java.util.Arrays.stream(e.split("'")).filter(x -> x.matches("[a-z_0-9]+"))).toList();
+      hint = Suggest.hint(ref.name().text(), words);
+    }
+    String found = describeArg(bad);
+    if (expected.equals("nothing more")) {
+      sink.report(DiagnosticCode.BAD_ARGUMENT, TextRange.span(bad.range(), args.get(args.size() - 1).range()),
+          "unexpected " + found + ": '" + what + "' takes no more values here");
+    } else {
+      sink.report(DiagnosticCode.BAD_ARGUMENT, bad.range(),
+          "expected " + expected + " in '" + what + "', found " + found + hint);
+    }
+  }
+
+  static String describeArg(Arg a) {
+    if (a instanceof Arg.RefArg r) {
+      return "'" + r.text() + "'";
+    }
+    if (a instanceof Arg.QuantityArg q) {
+      return "'" + q.number().text() + q.unit().map(u -> " " + u.text()).orElse("") + "'";
+    }
+    if (a instanceof Arg.StringArg) {
+      return "a quoted string";
+    }
+    if (a instanceof Arg.CommaArg) {
+      return "','";
+    }
+    return "a range";
+  }
+
+  private static String slotOf(Shape leaf) {
+    if (leaf instanceof Shape.Quantity q) {
+      return q.slot();
+    } else if (leaf instanceof Shape.Ratio r) {
+      return r.slot();
+    } else if (leaf instanceof Shape.PowerRatio r) {
+      return r.slot();
+    } else if (leaf instanceof Shape.Count c) {
+      return c.slot();
+    } else if (leaf instanceof Shape.Density d) {
+      return d.slot();
+    } else if (leaf instanceof Shape.Span s) {
+      return s.low().slot() + ".." + s.high().slot();
+    } else if (leaf instanceof Shape.Word w) {
+      return w.slot();
+    } else if (leaf instanceof Shape.Reference r) {
+      return r.slot();
+    } else if (leaf instanceof Shape.Text t) {
+      return t.slot();
+    }
+    return null;
+  }
+
+  private Optional<Value> value(Shape leaf, Arg arg, String what) {
+    if (leaf instanceof Shape.Quantity q) {
+      return quantity((Arg.QuantityArg) arg, q.dimensions(), q.bounds(), q.example(), what).map(v -> v);
+    } else if (leaf instanceof Shape.Ratio r) {
+      return ratio((Arg.QuantityArg) arg, r.bounds(), what).map(v -> v);
+    } else if (leaf instanceof Shape.PowerRatio r) {
+      return powerRatio((Arg.QuantityArg) arg, r.bounds(), what).map(v -> v);
+    } else if (leaf instanceof Shape.Count c) {
+      return count((Arg.QuantityArg) arg, c, what).map(v -> v);
+    } else if (leaf instanceof Shape.Density) {
+      return density((Arg.QuantityArg) arg, what).map(v -> v);
+    } else if (leaf instanceof Shape.Span s) {
+      return span((Arg.RangeArg) arg, s, what);
+    } else if (leaf instanceof Shape.Word) {
+      Arg.RefArg ref = (Arg.RefArg) arg;
+      return Optional.of(new Value.Word(ref.name().text(), ref.range()));
+    } else if (leaf instanceof Shape.Reference r) {
+      return reference((Arg.RefArg) arg, r.categories(), what).map(v -> v);
+    } else if (leaf instanceof Shape.Text) {
+      Arg.StringArg s = (Arg.StringArg) arg;
+      return Optional.of(new Value.Text(s.value(), s.range()));
+    }
+    return Optional.empty();
+  }
+
+  private Optional<Value> span(Arg.RangeArg arg, Shape.Span s, String what) {
+    Optional<Value.Num> low = quantity((Arg.QuantityArg) arg.low(), s.low().dimensions(), s.low().bounds(),
+        s.low().example(), what);
+    Optional<Value.Num> high = quantity((Arg.QuantityArg) arg.high(), s.high().dimensions(), s.high().bounds(),
+        s.high().example(), what);
+    if (low.isEmpty() || high.isEmpty()) {
+      return Optional.empty();
+    }
+    if (low.get().si() > high.get().si()) {
+      sink.report(DiagnosticCode.INVERTED_RANGE, arg.range(),
+          "the range in '" + what + "' runs backwards: its low end is above its high end");
+      return Optional.empty();
+    }
+    return Optional.of(new Value.Group(Map.of("low", low.get(), "high", high.get()), List.of(), arg.range()));
+  }
+
+  /** A dimensioned quantity, converted to SI and checked against its bounds. */
+  Optional<Value.Num> quantity(Arg.QuantityArg a, List<Dimension> dims, Bounds bounds, String example, String what) {
+    Optional<Unit> unit = unitOf(a);
+    if (unit == null) {
+      return Optional.empty();
+    }
+    double si;
+    Dimension dim;
+    if (unit.isEmpty()) {
+      if (!dims.contains(Dimension.DIMENSIONLESS)) {
+        sink.report(DiagnosticCode.MISSING_UNIT, a.range(),
+            "'" + a.number().text() + "' needs a unit: '" + what + "' is " + ShapeMatcher.describeDimensions(dims)
+                + ", e.g. '" + example + "'");
+        return Optional.empty();
+      }
+      si = a.number().value();
+      dim = Dimension.DIMENSIONLESS;
+    } else {
+      Unit u = unit.get();
+      if (!dims.contains(u.dimension())) {
+        sink.report(DiagnosticCode.WRONG_DIMENSION, a.unit().get().range(),
+            "'" + a.unit().get().text() + "' is a unit of " + u.dimension().describe() + ", but '" + what + "' is "
+                + ShapeMatcher.describeDimensions(dims) + ", e.g. '" + example + "'");
+        return Optional.empty();
+      }
+      si = u.toSi(a.number().value());
+      dim = u.dimension();
+    }
+    if (!bounds.contains(si)) {
+      sink.report(DiagnosticCode.OUT_OF_RANGE, a.range(),
+          "'" + what + "' must be " + describe(bounds, dim) + "; got '" + written(a) + "'");
+      return Optional.empty();
+    }
+    return Optional.of(new Value.Num(si, dim, tolerance(a, unit.orElse(null), si, dim, what), a.range()));
+  }
+
+  private OptionalDouble tolerance(Arg.QuantityArg a, Unit valueUnit, double si, Dimension dim, String what) {
+    if (a.tolerance().isEmpty()) {
+      return OptionalDouble.empty();
+    }
+    Arg.Tolerance t = a.tolerance().get();
+    double halfWidth;
+    if (t.unit().isEmpty()) {
+      halfWidth = Math.abs(t.number().value()) * (valueUnit == null ? 1 : valueUnit.factor());
+    } else {
+      UnitParse parsed = UnitParser.parse(t.unit().get().text());
+      if (parsed instanceof UnitParse.Failure f) {
+        sink.report(DiagnosticCode.UNKNOWN_UNIT, t.unit().get().range(), f.message());
+        return OptionalDouble.empty();
+      }
+      Unit u = ((UnitParse.Ok) parsed).unit();
+      if (u.symbol().equals("%") && !dim.isDimensionless()) {
+        halfWidth = Math.abs(si) * t.number().value() / 100;
+      } else if (!u.dimension().equals(dim) || u.scale() != Scale.LINEAR) {
+        sink.report(DiagnosticCode.TOLERANCE_MISMATCH, t.unit().get().range(),
+            "the tolerance of '" + what + "' is in '" + t.unit().get().text() + "', which does not fit a value of "
+                + dim.describe() + "; use the value's unit or '%'");
+        return OptionalDouble.empty();
+      } else {
+        halfWidth = Math.abs(t.number().value()) * u.factor();
+      }
+    }
+    if (t.number().value() < 0) {
+      sink.report(DiagnosticCode.OUT_OF_RANGE, t.range(), "a tolerance is a ± half-width and cannot be negative");
+      return OptionalDouble.empty();
+    }
+    return OptionalDouble.of(halfWidth);
+  }
+
+  /** A fraction: '95 %', '200 ppm' or a plain number from 0 to 1. */
+  Optional<Value.Num> ratio(Arg.QuantityArg a, Bounds bounds, String what) {
+    Optional<Unit> unit = unitOf(a);
+    if (unit == null) {
+      return Optional.empty();
+    }
+    double si = a.number().value();
+    if (unit.isPresent()) {
+      Unit u = unit.get();
+      if (!u.dimension().isDimensionless() || u.scale() != Scale.LINEAR) {
+        sink.report(DiagnosticCode.WRONG_DIMENSION, a.unit().get().range(),
+            "'" + what + "' is a fraction, written like '95 %'; '" + a.unit().get().text() + "' does not fit");
+        return Optional.empty();
+      }
+      si = u.toSi(si);
+    } else if (!bounds.contains(si) && bounds.contains(si / 100)) {
+      TextRange at = new TextRange(a.number().range().end(), a.number().range().end());
+      sink.report(DiagnosticCode.OUT_OF_RANGE, a.range(),
+          "'" + what + "' is a fraction from 0 to 1; did you mean '" + a.number().text() + " %'?",
+          new Fix("write '" + a.number().text() + " %'", List.of(new Edit(sink.file, at, " %"))));
+      return Optional.empty();
+    }
+    if (!bounds.contains(si)) {
+      sink.report(DiagnosticCode.OUT_OF_RANGE, a.range(),
+          "'" + what + "' must be between " + percent(bounds.min()) + " and " + percent(bounds.max()) + "; got '"
+              + written(a) + "'");
+      return Optional.empty();
+    }
+    return Optional.of(new Value.Num(si, Dimension.DIMENSIONLESS, OptionalDouble.empty(), a.range()));
+  }
+
+  /** A power ratio: plain (1000) or in dB (30 dB). */
+  Optional<Value.Num> powerRatio(Arg.QuantityArg a, Bounds bounds, String what) {
+    Optional<Unit> unit = unitOf(a);
+    if (unit == null) {
+      return Optional.empty();
+    }
+    double si = a.number().value();
+    if (unit.isPresent()) {
+      Unit u = unit.get();
+      if (u.scale() != Scale.DECIBEL) {
+        sink.report(DiagnosticCode.WRONG_DIMENSION, a.unit().get().range(),
+            "'" + what + "' is a ratio, written as a plain number ('1000') or in decibels ('30 dB'); '"
+                + a.unit().get().text() + "' does not fit");
+        return Optional.empty();
+      }
+      si = u.toSi(si);
+    }
+    if (!bounds.contains(si)) {
+      sink.report(DiagnosticCode.OUT_OF_RANGE, a.range(),
+          "'" + what + "' must be " + describe(bounds, Dimension.DIMENSIONLESS) + "; got '" + written(a) + "'");
+      return Optional.empty();
+    }
+    return Optional.of(new Value.Num(si, Dimension.DIMENSIONLESS, OptionalDouble.empty(), a.range()));
+  }
+
+  private Optional<Value.Num> count(Arg.QuantityArg a, Shape.Count c, String what) {
+    if (a.unit().isPresent()) {
+      sink.report(DiagnosticCode.UNEXPECTED_UNIT, a.unit().get().range(),
+          "'" + what + "' is a plain number; remove the unit '" + a.unit().get().text() + "'");
+      return Optional.empty();
+    }
+    double v = a.number().value();
+    if (c.integer() && v != Math.rint(v)) {
+      sink.report(DiagnosticCode.OUT_OF_RANGE, a.range(), "'" + what + "' must be a whole number; got '" + written(a) + "'");
+      return Optional.empty();
+    }
+    if (!c.bounds().contains(v)) {
+      sink.report(DiagnosticCode.OUT_OF_RANGE, a.range(),
+          "'" + what + "' must be " + describe(c.bounds(), Dimension.DIMENSIONLESS) + "; got '" + written(a) + "'");
+      return Optional.empty();
+    }
+    return Optional.of(new Value.Num(v, Dimension.DIMENSIONLESS, OptionalDouble.empty(), a.range()));
+  }
+
+  private Optional<Value.Num> density(Arg.QuantityArg a, String what) {
+    if (a.unit().isPresent() && !a.unit().get().text().equals("OD")) {
+      sink.report(DiagnosticCode.WRONG_DIMENSION, a.unit().get().range(),
+          "'" + what + "' is an optical density, written 'OD 3' or '3'; '" + a.unit().get().text() + "' does not fit");
+      return Optional.empty();
+    }
+    if (a.number().value() < 0) {
+      sink.report(DiagnosticCode.OUT_OF_RANGE, a.range(), "an optical density cannot be negative; got '" + written(a) + "'");
+      return Optional.empty();
+    }
+    return Optional.of(new Value.Num(a.number().value(), Dimension.DIMENSIONLESS, OptionalDouble.empty(), a.range()));
+  }
+
+  /** Resolves a name to a declaration or catalog entry of an allowed category. */
+  Optional<Value.Ref> reference(Arg.RefArg ref, List<Category> categories, String what) {
+    String name = ref.name().text();
+    Optional<Symbol> found = scope.lookup(name);
+    if (found.isEmpty() && categories.contains(Category.MATERIAL)) {
+      found = CatalogNames.lookup(name).map(e -> Symbol.catalog(e.name()));
+    }
+    if (found.isEmpty()) {
+      sink.report(DiagnosticCode.UNDEFINED_NAME, ref.range(),
+          "unknown name '" + name + "' in '" + what + "'" + Suggest.hint(name, scope.namesOf(categories)));
+      return Optional.empty();
+    }
+    Symbol s = found.get();
+    if (!categories.contains(s.category())) {
+      sink.report(DiagnosticCode.WRONG_KIND, ref.range(),
+          "'" + name + "' is " + s.describe() + ", but '" + what + "' needs the name of "
+              + String.join(" or ", categories.stream().map(Category::phrase).toList()));
+      return Optional.empty();
+    }
+    if (what.equals("metal") && s.isCatalog()
+        && CatalogNames.lookup(s.name()).map(e -> e.materialClass() != CatalogNames.MaterialClass.METAL).orElse(false)) {
+      sink.report(DiagnosticCode.WRONG_KIND, ref.range(), "'" + name + "' is not a metal; the catalog metals are "
+          + String.join(", ", CatalogNames.entries().stream()
+              .filter(e -> e.materialClass() == CatalogNames.MaterialClass.METAL).map(CatalogNames.Entry::name).toList()));
+      return Optional.empty();
+    }
+    sink.refs.add(new ResolvedRef(sink.file, ref.name().range(), s));
+    return Optional.of(new Value.Ref(s, ref.range()));
+  }
+
+  /** The literal's unit: empty when none was written, null when it is unknown (already reported). */
+  private Optional<Unit> unitOf(Arg.QuantityArg a) {
+    if (a.unit().isEmpty()) {
+      return Optional.empty();
+    }
+    UnitParse parsed = UnitParser.parse(a.unit().get().text());
+    if (parsed instanceof UnitParse.Failure f) {
+      sink.report(DiagnosticCode.UNKNOWN_UNIT, a.unit().get().range(), f.message());
+      return null;
+    }
+    return Optional.of(((UnitParse.Ok) parsed).unit());
+  }
+
+  static String written(Arg.QuantityArg a) {
+    return a.number().text() + a.unit().map(u -> " " + u.text()).orElse("");
+  }
+
+  private static String percent(double fraction) {
+    return QuantityFormat.format(fraction * 100, Dimension.DIMENSIONLESS) + " %";
+  }
+
+  static String describe(Bounds b, Dimension dim) {
+    String min = QuantityFormat.format(b.min(), dim);
+    String max = QuantityFormat.format(b.max(), dim);
+    boolean finiteMin = Double.isFinite(b.min());
+    boolean finiteMax = Double.isFinite(b.max());
+    if (b.nonZero() && !finiteMin && !finiteMax) {
+      return "non-zero";
+    }
+    if (finiteMin && !finiteMax) {
+      if (b.min() == 0) {
+        return b.minInclusive() ? "zero or more" : "positive";
+      }
+      return (b.minInclusive() ? "at least " : "more than ") + min;
+    }
+    if (!finiteMin && finiteMax) {
+      return (b.maxInclusive() ? "at most " : "less than ") + max;
+    }
+    if (finiteMin && finiteMax) {
+      return b.maxInclusive() ? "between " + min + " and " + max : "from " + min + " up to (not including) " + max;
+    }
+    return "a number";
+  }
+}
