@@ -1,0 +1,156 @@
+package jonquil.cli;
+
+import java.io.PrintStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import jonquil.Checker;
+import jonquil.Result;
+import jonquil.Workspace;
+import jonquil.diag.Diagnostic;
+import jonquil.diag.DiagnosticCode;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.ParameterException;
+import picocli.CommandLine.Spec;
+
+/** {@code jonquil check}: the CI gate and the one command people run by hand. */
+@Command(
+    name = "check",
+    sortOptions = false,
+    description = {
+      "Checks .jonq spec files and reports every finding.",
+      "",
+      "The text format prints one line per finding:",
+      "  PATH:LINE:COLUMN: SEVERITY: MESSAGE [CODE]",
+      "PATH is relative to the current directory. LINE and COLUMN start at 1;",
+      "COLUMN counts Unicode code points, so every character counts once,",
+      "even one outside the Basic Multilingual Plane. A summary line follows.",
+      ""
+    },
+    footer = {
+      "",
+      "Project root: --root, else the nearest directory at or above the first PATH",
+      "that holds .git or a .jonquil-root file, else the current directory.",
+      "JSON and SARIF paths are relative to it.",
+      "",
+      "Exit status:",
+      "  0  no error and no failed requirement (warnings too with --strict)",
+      "  1  an error, a failed requirement, or with --strict a warning",
+      "  2  bad usage, an input that cannot be read, or an internal error",
+      ""
+    })
+final class CheckCommand implements Callable<Integer> {
+  private final PrintStream out;
+  private final PrintStream err;
+  private final Path cwd;
+
+  @Spec CommandSpec spec;
+
+  @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
+      converter = OutputFormat.Converter.class,
+      description = "Report format: text, json or sarif (default: ${DEFAULT-VALUE}).")
+  OutputFormat format;
+
+  @Option(names = "--strict", description = "Fail on warnings as well as on errors.")
+  boolean strict;
+
+  @Option(names = "--exit-zero",
+      description = "Exit 0 even when there are findings; trouble running still exits 2.")
+  boolean exitZero;
+
+  @Option(names = "--root", paramLabel = "DIR", description = "The project root; see below.")
+  String root;
+
+  @Option(names = "--debug", description = "Print the stack trace of an internal error.")
+  boolean debug;
+
+  @Option(names = {"-h", "--help"}, usageHelp = true, description = "Show this help and exit.")
+  boolean help;
+
+  @Parameters(paramLabel = "PATH", arity = "1..*",
+      description = "A .jonq file, or a directory: every .jonq file below it, in sorted order.")
+  List<String> paths = new ArrayList<>();
+
+  CheckCommand(PrintStream out, PrintStream err, Path cwd) {
+    this.out = out;
+    this.err = err;
+    this.cwd = cwd.toAbsolutePath().normalize();
+  }
+
+  @Override
+  public Integer call() {
+    try {
+      return check().code();
+    } catch (ParameterException e) {
+      throw e;
+    } catch (RuntimeException | StackOverflowError e) {
+      Cli.reportInternalError(e, debug, err);
+      return ExitCode.TROUBLE.code();
+    }
+  }
+
+  private ExitCode check() {
+    Path projectRoot = projectRoot();
+    Inputs inputs = Inputs.collect(paths, cwd);
+    List<String> problems = new ArrayList<>(inputs.problems());
+    Result result = new Result(Map.of(), List.of(), List.of());
+    if (!inputs.files().isEmpty()) {
+      result = withoutUnreadable(Checker.check(Workspace.onDisk(projectRoot), inputs.files()), problems);
+    }
+    problems.forEach(err::println);
+    err.flush();
+    if (result.files().isEmpty() && !problems.isEmpty()) {
+      return ExitCode.TROUBLE; // nothing was checked, so there is nothing to report
+    }
+    CheckRun run = new CheckRun(result, projectRoot, cwd, problems);
+    switch (format) {
+      case TEXT -> TextReport.write(run, out);
+      case JSON -> writeUtf8(JsonReport.render(run));
+      case SARIF -> writeUtf8(SarifReport.render(run));
+    }
+    return ExitCode.of(result, strict, exitZero, !problems.isEmpty());
+  }
+
+  private Path projectRoot() {
+    if (root == null) {
+      return ProjectRoot.discover(cwd.resolve(paths.get(0)), cwd);
+    }
+    Path dir = cwd.resolve(root).toAbsolutePath().normalize();
+    if (!Files.isDirectory(dir)) {
+      throw new ParameterException(spec.commandLine(), "--root '" + root + "' is not a directory");
+    }
+    return dir;
+  }
+
+  /**
+   * A file the checker could not read is trouble running, not a finding about the specs:
+   * it goes to stderr and exit status 2, and stays out of the report and its counts.
+   */
+  private Result withoutUnreadable(Result result, List<String> problems) {
+    List<Diagnostic> kept = new ArrayList<>();
+    for (Diagnostic d : result.diagnostics()) {
+      if (d.code() == DiagnosticCode.UNREADABLE_FILE) {
+        problems.add("jonquil: " + d.message());
+      } else {
+        kept.add(d);
+      }
+    }
+    return kept.size() == result.diagnostics().size()
+        ? result
+        : new Result(result.files(), kept, result.requirements());
+  }
+
+  /** JSON and SARIF are UTF-8 by definition, whatever the platform's console encoding. */
+  private void writeUtf8(String document) {
+    byte[] bytes = document.getBytes(StandardCharsets.UTF_8);
+    out.write(bytes, 0, bytes.length);
+    out.flush();
+  }
+}

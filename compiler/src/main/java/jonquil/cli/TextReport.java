@@ -1,0 +1,59 @@
+package jonquil.cli;
+
+import java.io.PrintStream;
+import jonquil.Result;
+import jonquil.analysis.RequirementStatus;
+import jonquil.diag.Diagnostic;
+import jonquil.diag.Related;
+import jonquil.diag.Severity;
+
+/**
+ * The default report: one compiler-style line per finding, which editors and CI log
+ * viewers already know how to turn into links, then one summary line.
+ */
+final class TextReport {
+  private TextReport() {}
+
+  static void write(CheckRun run, PrintStream out) {
+    Result result = run.result();
+    for (Diagnostic d : result.diagnostics()) {
+      out.println(line(run, d));
+      for (Related r : d.related()) {
+        // Printed as a note on its own line so that the same tools can jump to it.
+        out.println(location(run, r.file(), r.range().start()) + ": note: " + oneLine(r.message())
+            + " [" + d.code().id() + "]");
+      }
+    }
+    out.println(summary(result));
+    out.flush();
+  }
+
+  static String line(CheckRun run, Diagnostic d) {
+    return location(run, d.file(), d.range().start()) + ": " + d.severity().word() + ": "
+        + oneLine(d.message()) + " [" + d.code().id() + "]";
+  }
+
+  static String summary(Result result) {
+    return "checked " + count(result.files().size(), "file") + ": "
+        + count(result.count(Severity.ERROR), "error") + ", "
+        + count(result.count(Severity.WARNING), "warning") + ", "
+        + count(result.count(Severity.NOTE), "note") + "; requirements: "
+        + result.count(RequirementStatus.PASS) + " pass, "
+        + result.count(RequirementStatus.FAIL) + " fail, "
+        + result.count(RequirementStatus.NOT_EVALUATED) + " not evaluated";
+  }
+
+  private static String location(CheckRun run, java.nio.file.Path file, int offset) {
+    Position p = Position.of(run.result().files(), file, offset);
+    return PathText.relative(run.cwd(), file) + ":" + p.line() + ":" + p.column();
+  }
+
+  /** A line break inside a message would split one finding into two for every log parser. */
+  private static String oneLine(String message) {
+    return message.replaceAll("\\R", " ").strip();
+  }
+
+  private static String count(long n, String noun) {
+    return n + " " + noun + (n == 1 ? "" : "s");
+  }
+}
