@@ -7,18 +7,29 @@ import jonquil.analysis.RequirementOutcome;
 import jonquil.analysis.RequirementStatus;
 import jonquil.diag.Diagnostic;
 import jonquil.diag.Severity;
+import jonquil.resolve.ResolvedModel;
 import jonquil.source.SourceFile;
 
 /**
  * Everything one check produced: the texts it read, its diagnostics (sorted), and the
- * verdict on every requirement. CLI formats, reports and the language server all read
+ * verdict on every requirement, plus the resolved model of each checked root. CLI formats, reports and the language server all read
  * this one value, so they cannot disagree.
  */
-public record Result(Map<Path, SourceFile> files, List<Diagnostic> diagnostics, List<RequirementOutcome> requirements) {
+public record Result(
+    Map<Path, SourceFile> files,
+    List<Diagnostic> diagnostics,
+    List<RequirementOutcome> requirements,
+    Map<Path, ResolvedModel> models) {
   public Result {
     files = Map.copyOf(files);
     diagnostics = diagnostics.stream().sorted(Diagnostic.ORDER).toList();
     requirements = List.copyOf(requirements);
+    models = Map.copyOf(models);
+  }
+
+  /** A result without resolved models, e.g. when nothing could be read. */
+  public Result(Map<Path, SourceFile> files, List<Diagnostic> diagnostics, List<RequirementOutcome> requirements) {
+    this(files, diagnostics, requirements, Map.of());
   }
 
   public long count(Severity severity) {

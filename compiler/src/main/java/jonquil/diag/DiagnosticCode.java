@@ -64,7 +64,6 @@ public enum DiagnosticCode {
   ELEMENT_PLACED_TWICE("J512", Severity.ERROR, "An element is placed in two paths"),
   EMPTY_TRAIN("J513", Severity.WARNING, "A train without beam paths"),
   PORT_ON_ELEMENT_WITHOUT_PORTS("J514", Severity.ERROR, "A port named on an element with a single output"),
-  DISTANCE_MEDIUM_NOT_MATERIAL("J515", Severity.ERROR, "A distance runs 'in' something that is not a material"),
 
   // Requirements: J6xx
   UNKNOWN_MEASURE("J601", Severity.ERROR, "A requirement on a quantity Jonquil does not know"),

@@ -40,8 +40,15 @@ final class ValueChecker {
     }
     Map<String, Value> slots = new HashMap<>();
     Map<Integer, Map<String, Value>> items = new java.util.TreeMap<>();
+    String clause = null;
     for (ShapeMatcher.Binding b : outcome.bindings()) {
-      Optional<Value> v = value(b.leaf(), b.arg(), what);
+      if (b.leaf() instanceof Shape.Literal l) {
+        clause = l.word();
+      }
+      String slotName = slotOf(b.leaf());
+      // Inside a keyed clause ('beam waist 1 mm, m2 1.1') name the clause: "'m2' in 'beam'".
+      String label = clause != null && clause.equals(slotName) ? slotName + "' in '" + what : what;
+      Optional<Value> v = value(b.leaf(), b.arg(), label);
       if (v.isEmpty()) {
         continue;
       }
@@ -375,8 +382,10 @@ final class ValueChecker {
   }
 
   static String describe(Bounds b, Dimension dim) {
-    String min = QuantityFormat.format(b.min(), dim);
     String max = QuantityFormat.format(b.max(), dim);
+    // Zero prints in the unit of the other end: "from 0° up to 90°", not "from 0 rad".
+    String min = b.min() == 0 && Double.isFinite(b.max()) ? "0" + max.replaceFirst("^[-+0-9.eE]+", "")
+        : QuantityFormat.format(b.min(), dim);
     boolean finiteMin = Double.isFinite(b.min());
     boolean finiteMax = Double.isFinite(b.max());
     if (b.nonZero() && !finiteMin && !finiteMax) {

@@ -1,0 +1,147 @@
+package jonquil.resolve;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import jonquil.diag.Diagnostic;
+import jonquil.diag.DiagnosticCode;
+import jonquil.diag.Related;
+import jonquil.source.TextRange;
+import jonquil.syntax.Declaration;
+import jonquil.syntax.RequireDecl;
+import jonquil.syntax.SpecFile;
+import jonquil.syntax.TrainDecl;
+
+/**
+ * Resolution of a spec rooted at one file: a pure function of the parsed files and their
+ * 'use' edges. Each file sees its own names and those of the files it uses directly.
+ */
+public final class Resolver {
+  private Resolver() {}
+
+  public static ResolvedModel resolve(Path root, Map<Path, SpecFile> files, Map<Path, List<UseEdge>> uses) {
+    Map<Path, Sink> sinks = new LinkedHashMap<>();
+    files.keySet().forEach(p -> sinks.put(p, new Sink(p)));
+    Map<Path, Map<String, Symbol>> own = new LinkedHashMap<>();
+    files.forEach((path, file) -> own.put(path, declare(file, sinks.get(path))));
+
+    Map<Path, Scope> scopes = new LinkedHashMap<>();
+    for (Path path : files.keySet()) {
+      scopes.put(path, scope(path, own, uses.getOrDefault(path, List.of()), sinks.get(path)));
+    }
+
+    Map<Symbol, ResolvedElement> elements = new LinkedHashMap<>();
+    files.forEach((path, file) -> {
+      DeclarationChecker checker = new DeclarationChecker(sinks.get(path), scopes.get(path));
+      for (Declaration decl : file.declarations()) {
+        Symbol symbol = own.get(path).get(decl.name().text());
+        if (symbol == null || symbol.declaration().orElse(null) != decl || symbol.kind().isEmpty()) {
+          continue; // duplicate or unknown kind: already reported
+        }
+        elements.put(symbol, checker.check(symbol, symbol.kind().get(), decl));
+      }
+    });
+
+    uses.forEach((from, edges) -> edges.forEach(edge -> {
+      SpecFile lib = files.get(edge.target());
+      if (lib != null && !edge.target().equals(root)) {
+        Sink sink = sinks.get(edge.target());
+        for (TrainDecl t : lib.trains()) {
+          sink.report(DiagnosticCode.USED_FILE_HAS_TRAIN, t.range(), "this file is used as a part library by '"
+              + from.getFileName() + "', so it may only declare parts; move the train to the main spec");
+        }
+        for (RequireDecl r : lib.requires()) {
+          sink.report(DiagnosticCode.USED_FILE_HAS_TRAIN, r.range(), "this file is used as a part library by '"
+              + from.getFileName() + "', so it may only declare parts; move the requirements to the main spec");
+        }
+      }
+    }));
+
+    List<ResolvedTrain> trains = List.of();
+    List<ResolvedRequirement> requirements = new ArrayList<>();
+    SpecFile rootFile = files.get(root);
+    if (rootFile != null) {
+      Sink sink = sinks.get(root);
+      TrainResolver trainResolver = new TrainResolver(sink, scopes.get(root));
+      trains = trainResolver.resolve(rootFile.trains());
+      RequirementResolver reqs = new RequirementResolver(sink, scopes.get(root), trainResolver.placedElements());
+      for (RequireDecl block : rootFile.requires()) {
+        block.requirements().forEach(r -> requirements.add(reqs.resolve(r)));
+      }
+    }
+
+    List<Diagnostic> diagnostics = new ArrayList<>();
+    List<ResolvedRef> refs = new ArrayList<>();
+    for (Sink s : sinks.values()) {
+      diagnostics.addAll(s.diagnostics);
+      refs.addAll(s.refs);
+    }
+    return new ResolvedModel(root, scopes, elements, trains, requirements, refs, diagnostics);
+  }
+
+  /** The symbols a file declares itself; duplicates within the file are reported here. */
+  private static Map<String, Symbol> declare(SpecFile file, Sink sink) {
+    Map<String, Symbol> symbols = new LinkedHashMap<>();
+    for (Declaration decl : file.declarations()) {
+      Optional<ElementKind> kind = ElementKind.byWord(decl.kind().text());
+      if (kind.isEmpty()) {
+        sink.report(DiagnosticCode.UNKNOWN_KIND, decl.kind().range(), "unknown kind '" + decl.kind().text() + "'"
+            + Suggest.closest(decl.kind().text(), ElementKind.words()).map(k -> "; did you mean '" + k + "'?")
+                .orElse("; the kinds are " + String.join(", ", ElementKind.words())));
+      }
+      Category category = kind.map(ElementKind::category).orElse(Category.OPTIC);
+      Symbol symbol = new Symbol(decl.name().text(), category, kind, file.path(), Optional.of(decl.name()),
+          Optional.of(decl));
+      add(symbols, symbol, decl.name().range(), sink);
+    }
+    for (TrainDecl train : file.trains()) {
+      train.name().ifPresent(n -> add(symbols,
+          new Symbol(n.text(), Category.TRAIN, Optional.empty(), file.path(), Optional.of(n), Optional.empty()),
+          n.range(), sink));
+    }
+    return symbols;
+  }
+
+  private static void add(Map<String, Symbol> symbols, Symbol symbol, TextRange at, Sink sink) {
+    Symbol earlier = symbols.putIfAbsent(symbol.name(), symbol);
+    if (earlier != null) {
+      var d = sink.report(DiagnosticCode.DUPLICATE_NAME, at,
+          "'" + symbol.name() + "' is already declared in this file; names must be unique");
+      sink.replace(d, d.withRelated(new Related(sink.file, earlier.nameNode().get().range(), "first declared here")));
+    }
+  }
+
+  private static Scope scope(Path path, Map<Path, Map<String, Symbol>> own, List<UseEdge> edges, Sink sink) {
+    Map<String, Symbol> visible = new HashMap<>(own.getOrDefault(path, Map.of()));
+    Map<String, UseEdge> via = new HashMap<>();
+    for (UseEdge edge : edges) {
+      for (Symbol s : own.getOrDefault(edge.target(), Map.of()).values()) {
+        if (s.category() == Category.TRAIN) {
+          continue;
+        }
+        Symbol mine = own.getOrDefault(path, Map.of()).get(s.name());
+        if (mine != null) {
+          var d = sink.report(DiagnosticCode.DUPLICATE_NAME, mine.nameNode().get().range(),
+              "'" + s.name() + "' is also declared in '" + edge.decl().target() + "', which this file uses; rename one");
+          sink.replace(d, d.withRelated(new Related(s.file(), s.nameNode().get().range(), "also declared here")));
+          continue;
+        }
+        Symbol other = visible.get(s.name());
+        if (other != null && !other.equals(s)) {
+          UseEdge first = via.get(s.name());
+          sink.report(DiagnosticCode.DUPLICATE_NAME, edge.decl().range(),
+              "'" + s.name() + "' is declared both in '" + first.decl().target() + "' and in '" + edge.decl().target()
+                  + "'; rename one");
+          continue;
+        }
+        visible.put(s.name(), s);
+        via.putIfAbsent(s.name(), edge);
+      }
+    }
+    return new Scope(visible);
+  }
+}

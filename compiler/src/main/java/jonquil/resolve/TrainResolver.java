@@ -1,0 +1,246 @@
+package jonquil.resolve;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.Set;
+import jonquil.diag.DiagnosticCode;
+import jonquil.diag.Related;
+import jonquil.source.TextRange;
+import jonquil.syntax.Arg;
+import jonquil.syntax.TrainDecl;
+import jonquil.units.Dimension;
+
+/**
+ * Resolves the beam paths of a file's trains into a graph and checks that it is well
+ * formed: paths start at a source or a port, every element sits in one place, ports
+ * exist and are followed at most once, and paths end where the beam is stopped.
+ */
+final class TrainResolver {
+  private final Sink sink;
+  private final Scope scope;
+  private final ValueChecker values;
+  /** Where each element is placed: the step that placed it. */
+  private final Map<Symbol, ResolvedTrain.Element> placed = new LinkedHashMap<>();
+  /** Output ports already followed, with where. */
+  private final Map<String, TextRange> followedPorts = new HashMap<>();
+  private final List<Pending> branches = new ArrayList<>();
+
+  private record Pending(ResolvedTrain.PortRef port) {}
+
+  TrainResolver(Sink sink, Scope scope) {
+    this.sink = sink;
+    this.scope = scope;
+    this.values = new ValueChecker(sink, scope);
+  }
+
+  List<ResolvedTrain> resolve(List<TrainDecl> trains) {
+    List<ResolvedTrain> out = new ArrayList<>();
+    for (TrainDecl train : trains) {
+      if (train.paths().isEmpty()) {
+        sink.report(DiagnosticCode.EMPTY_TRAIN, train.range(),
+            "train" + train.name().map(n -> " '" + n.text() + "'").orElse("") + " has no beam paths");
+      }
+      List<ResolvedTrain.BeamPath> paths = new ArrayList<>();
+      for (TrainDecl.BeamPath path : train.paths()) {
+        path(path).ifPresent(paths::add);
+      }
+      out.add(new ResolvedTrain(sink.file, train.name().map(n -> n.text()), paths, train.range()));
+    }
+    checkBranches();
+    checkUnfollowedPorts();
+    return out;
+  }
+
+  /** Elements placed in some path, including sources; requirements warn about targets not here. */
+  Set<Symbol> placedElements() {
+    return placed.keySet();
+  }
+
+  private Optional<ResolvedTrain.BeamPath> path(TrainDecl.BeamPath path) {
+    List<ResolvedTrain.Step> steps = new ArrayList<>();
+    Optional<ResolvedTrain.PortRef> branchFrom = Optional.empty();
+    Set<Symbol> inThisPath = new HashSet<>();
+    List<TrainDecl.Step> written = path.steps();
+    for (int i = 0; i < written.size(); i++) {
+      TrainDecl.Step step = written.get(i);
+      boolean first = i == 0;
+      boolean last = i == written.size() - 1;
+      if (step instanceof TrainDecl.Distance d) {
+        if (first) {
+          sink.report(DiagnosticCode.PATH_START_NOT_SOURCE, d.range(),
+              "a beam path cannot start with a distance: start it at a source, or at a port such as 'bs1.reflected'");
+          return Optional.empty();
+        }
+        gap(d).ifPresent(steps::add);
+        if (last) {
+          sink.report(DiagnosticCode.PATH_ENDS_WITH_DISTANCE, d.range(),
+              "the path ends in empty space after this distance: end it at a dump, a detector or a probe");
+        }
+        continue;
+      }
+      Arg.RefArg ref = ((TrainDecl.Place) step).ref();
+      Optional<Symbol> symbol = placeable(ref);
+      if (symbol.isEmpty()) {
+        continue;
+      }
+      Symbol s = symbol.get();
+      ElementKind kind = s.kind().orElseThrow();
+      if (first && ref.port().isPresent()) {
+        portOf(ref, kind).ifPresent(port -> {
+          ResolvedTrain.PortRef start = new ResolvedTrain.PortRef(s, port, ref.range());
+          branches.add(new Pending(start));
+        });
+        branchFrom = portOf(ref, kind).map(port -> new ResolvedTrain.PortRef(s, port, ref.range()));
+        inThisPath.add(s);
+        continue;
+      }
+      if (first && kind.category() != Category.SOURCE) {
+        sink.report(DiagnosticCode.PATH_START_NOT_SOURCE, ref.range(),
+            "a beam path starts at a source, or at an output port such as 'bs1.reflected'; '" + s.name()
+                + "' is " + s.describe());
+        return Optional.empty();
+      }
+      if (!first && kind.category() == Category.SOURCE) {
+        sink.report(DiagnosticCode.SOURCE_INSIDE_PATH, ref.range(),
+            "source '" + s.name() + "' can only start a path; a beam cannot pass through it");
+        continue;
+      }
+      if (!inThisPath.add(s)) {
+        sink.report(DiagnosticCode.ELEMENT_TWICE_IN_PATH, ref.range(),
+            "'" + s.name() + "' appears twice in this path; for a second pass, declare a second element");
+        continue;
+      }
+      ResolvedTrain.Element already = placed.get(s);
+      if (already != null) {
+        var diag = sink.report(DiagnosticCode.ELEMENT_PLACED_TWICE, ref.range(),
+            "'" + s.name() + "' is already placed in another path; to continue from it, start the path at one of its ports"
+                + (kind.ports().size() > 1 ? " such as '" + s.name() + "." + kind.ports().get(1) + "'" : ""));
+        sink.replace(diag, diag.withRelated(new Related(sink.file, already.range(), "placed here")));
+        continue;
+      }
+      if (kind.category() == Category.TERMINAL && !last) {
+        sink.report(DiagnosticCode.TERMINAL_INSIDE_PATH, ref.range(),
+            kind.word() + " '" + s.name() + "' stops the beam, so nothing can follow it in the path");
+      }
+      String exit;
+      if (ref.port().isPresent()) {
+        Optional<String> port = portOf(ref, kind);
+        if (port.isEmpty()) {
+          continue;
+        }
+        exit = port.get();
+      } else {
+        exit = kind.ports().isEmpty() ? "" : kind.ports().get(0);
+      }
+      ResolvedTrain.Element element = new ResolvedTrain.Element(s, exit, ref.range());
+      placed.put(s, element);
+      if (!exit.isEmpty() && !last) {
+        followedPorts.put(s.name() + "." + exit, ref.range());
+      }
+      steps.add(element);
+      if (last && kind.category() != Category.TERMINAL && kind.category() != Category.PROBE) {
+        sink.report(DiagnosticCode.UNTERMINATED_BRANCH, ref.range(),
+            "the beam leaving " + s.describe() + " goes nowhere: end the path at a dump, a detector or a probe"
+                + " (until then its light counts as stray)");
+      }
+    }
+    return Optional.of(new ResolvedTrain.BeamPath(branchFrom, steps, path.range()));
+  }
+
+  private Optional<ResolvedTrain.Step> gap(TrainDecl.Distance d) {
+    Optional<Value.Num> length = values.quantity(d.length(), List.of(Dimension.LENGTH), Bounds.POSITIVE, "150 mm",
+        "distance");
+    Optional<Symbol> medium = Optional.empty();
+    if (d.medium().isPresent()) {
+      Optional<Value.Ref> ref = values.reference(d.medium().get(), List.of(Category.MATERIAL), "distance");
+      if (ref.isEmpty()) {
+        return Optional.empty();
+      }
+      medium = Optional.of(ref.get().symbol());
+    }
+    if (length.isEmpty()) {
+      return Optional.empty();
+    }
+    OptionalDouble tol = length.get().tolerance();
+    return Optional.of(new ResolvedTrain.Gap(length.get().si(), tol, medium, d.range()));
+  }
+
+  private Optional<Symbol> placeable(Arg.RefArg ref) {
+    String name = ref.name().text();
+    Optional<Symbol> found = scope.lookup(name);
+    if (found.isEmpty()) {
+      String hint = Suggest.hint(name, scope.namesOf(List.of(Category.SOURCE, Category.OPTIC, Category.PROBE,
+          Category.TERMINAL)));
+      sink.report(DiagnosticCode.UNDEFINED_NAME, ref.name().range(), "unknown element '" + name + "'" + hint);
+      return Optional.empty();
+    }
+    Symbol s = found.get();
+    sink.refs.add(new ResolvedRef(sink.file, ref.name().range(), s));
+    if (!s.category().placeable() || s.kind().isEmpty()) {
+      sink.report(DiagnosticCode.NOT_PLACEABLE, ref.name().range(),
+          "'" + name + "' is " + s.describe() + ", which cannot stand in a beam path"
+              + (s.category() == Category.MATERIAL ? "; to run a distance in it, write '10 mm in " + name + "'" : ""));
+      return Optional.empty();
+    }
+    return found;
+  }
+
+  private Optional<String> portOf(Arg.RefArg ref, ElementKind kind) {
+    if (ref.port().isEmpty()) {
+      return Optional.empty();
+    }
+    String port = ref.port().get().text();
+    if (kind.ports().size() <= 1) {
+      sink.report(DiagnosticCode.PORT_ON_ELEMENT_WITHOUT_PORTS, ref.port().get().range(),
+          kind.word() + " '" + ref.name().text() + "' has a single output; write '" + ref.name().text() + "' without a port");
+      return Optional.empty();
+    }
+    if (!kind.ports().contains(port)) {
+      sink.report(DiagnosticCode.UNKNOWN_PORT, ref.port().get().range(),
+          kind.word() + " '" + ref.name().text() + "' has no port '" + port + "'"
+              + Suggest.closest(port, kind.ports()).map(x -> "; did you mean '" + x + "'?")
+                  .orElse("; its ports are " + ShapeMatcher.quoteList(kind.ports())));
+      return Optional.empty();
+    }
+    return Optional.of(port);
+  }
+
+  private void checkBranches() {
+    for (Pending p : branches) {
+      ResolvedTrain.PortRef port = p.port();
+      if (!placed.containsKey(port.element())) {
+        sink.report(DiagnosticCode.BRANCH_FROM_UNPLACED, port.range(),
+            "this path branches from '" + port.element().name() + "', but no path places '" + port.element().name()
+                + "' in the beam");
+        continue;
+      }
+      String key = port.element().name() + "." + port.port();
+      TextRange earlier = followedPorts.putIfAbsent(key, port.range());
+      if (earlier != null) {
+        var d = sink.report(DiagnosticCode.PORT_USED_TWICE, port.range(),
+            "port '" + key + "' is already followed by another path; each output port feeds one path");
+        sink.replace(d, d.withRelated(new Related(sink.file, earlier, "already followed here")));
+      }
+    }
+  }
+
+  private void checkUnfollowedPorts() {
+    for (ResolvedTrain.Element e : placed.values()) {
+      ElementKind kind = e.symbol().kind().orElseThrow();
+      for (String port : kind.primaryPorts()) {
+        String key = e.symbol().name() + "." + port;
+        if (!followedPorts.containsKey(key)) {
+          sink.report(DiagnosticCode.PORT_NOT_FOLLOWED, e.range(),
+              "light leaving '" + key + "' is not followed by any path; add one such as '" + key
+                  + " -> 50 mm -> dump1' (until then it counts as stray)");
+        }
+      }
+    }
+  }
+}
