@@ -126,10 +126,16 @@ public final class SpecParser {
         errorRunEnd = null;
         int end = source.text().length();
         for (Token unclosed : open) {
+          int at = outdentedLineAfter(repaired, unclosed);
+          TextRange endsAt = at < 0 ? new TextRange(end, end) : range(repaired.get(at), offsets);
           reporter.lexical(DiagnosticCode.UNCLOSED_BRACE, range(unclosed, offsets),
               "unclosed '{' opened at " + where(source, offsets, unclosed) + ": add '}' to end the block",
-              new Related(source.path(), new TextRange(end, end), "the file ends here"));
-          repaired.add(closingBrace(t));
+              new Related(source.path(), endsAt, at < 0 ? "the file ends here" : "the block seems to end before this line"));
+          if (at < 0) {
+            repaired.add(closingBrace(t));
+          } else {
+            repaired.add(at - 1, closingBrace(repaired.get(at)));
+          }
         }
         open.clear();
       }
@@ -141,6 +147,34 @@ public final class SpecParser {
       }
     }
     return repaired;
+  }
+
+  /**
+   * Index of the first line after an unclosed '{' that is indented no deeper than the line
+   * that opened it: where the writer most likely meant the block to end. -1 if none.
+   */
+  private static int outdentedLineAfter(List<Token> tokens, Token brace) {
+    int openerColumn = -1;
+    int braceIndex = -1;
+    for (int i = 0; i < tokens.size(); i++) {
+      Token t = tokens.get(i);
+      if (t == brace) {
+        braceIndex = i;
+        break;
+      }
+      if (i == 0 || tokens.get(i - 1).getType() == JonquilLexer.NL) {
+        openerColumn = t.getCharPositionInLine();
+      }
+    }
+    for (int i = braceIndex + 1; i < tokens.size(); i++) {
+      Token t = tokens.get(i);
+      boolean lineStart = tokens.get(i - 1).getType() == JonquilLexer.NL;
+      if (lineStart && t.getType() != JonquilLexer.NL && t.getType() != JonquilLexer.RBRACE
+          && t.getType() != Token.EOF && t.getCharPositionInLine() <= openerColumn) {
+        return i;
+      }
+    }
+    return -1;
   }
 
   /** A zero-width '}' placed before {@code next}, standing in for one the writer forgot. */

@@ -1,0 +1,20 @@
+package jonquil.testing;
+
+import java.nio.file.Path;
+
+/** Where the repository is, for tests that read samples/ and the test corpora. */
+public final class Repo {
+  private Repo() {}
+
+  public static Path root() {
+    return Path.of(System.getProperty("jonquil.repo", "..")).toAbsolutePath().normalize();
+  }
+
+  public static Path samples() {
+    return root().resolve("samples");
+  }
+
+  public static Path testResources() {
+    return root().resolve("compiler/src/test/resources");
+  }
+}
