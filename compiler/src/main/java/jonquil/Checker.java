@@ -25,8 +25,8 @@ import jonquil.syntax.ParseResult;
  * a J901 diagnostic on the file being checked.
  */
 public final class Checker {
-  /** Diagnostics shown per file; more usually repeat one mistake (precedent: compilers cap at ~100). */
-  static final int MAX_DIAGNOSTICS_PER_FILE = 100;
+  /** Diagnostics shown per file; more usually repeat one mistake (precedent: compilers cap at ~100 errors). */
+  static final int MAX_DIAGNOSTICS_PER_FILE = 150;
 
   private Checker() {}
 
@@ -53,8 +53,8 @@ public final class Checker {
         models.put(root, model);
         for (ResolvedRequirement r : model.requirements()) {
           requirements.add(RequirementOutcome.notEvaluated(r.file(), r.syntax().range(), r.syntax().text(),
-              r.valid() ? "this version checks the requirement's form but does not yet compute "
-                  + r.measure().map(m -> m.word()).orElse("it")
+              r.valid() ? "form checked; this version does not compute "
+                  + r.measure().map(m -> m.word()).orElse("it") + " yet"
                   : "the requirement has errors"));
         }
       } catch (RuntimeException | StackOverflowError e) {

@@ -2,6 +2,7 @@ package jonquil.cli;
 
 import java.io.PrintStream;
 import jonquil.Result;
+import jonquil.analysis.RequirementOutcome;
 import jonquil.analysis.RequirementStatus;
 import jonquil.diag.Diagnostic;
 import jonquil.diag.Related;
@@ -24,8 +25,29 @@ final class TextReport {
             + " [" + d.code().id() + "]");
       }
     }
+    for (RequirementOutcome r : result.requirements()) {
+      out.println(requirement(run, r));
+    }
     out.println(summary(result));
     out.flush();
+  }
+
+  /**
+   * One line per requirement verdict, after the findings. The word "requirement" stands
+   * where findings have a severity, so quickfix parsers skip these lines.
+   */
+  static String requirement(CheckRun run, RequirementOutcome r) {
+    StringBuilder line = new StringBuilder(location(run, r.file(), r.range().start()))
+        .append(": requirement ").append(r.status().word()).append(": ").append(oneLine(r.text()));
+    if (r.value().isPresent()) {
+      line.append(" (value ").append(r.value().getAsDouble()).append(' ').append(r.siUnit());
+      r.margin().ifPresent(m -> line.append(", margin ").append(m));
+      line.append(')');
+    }
+    if (r.reason() != null && !r.reason().isBlank()) {
+      line.append(" — ").append(oneLine(r.reason()));
+    }
+    return line.toString();
   }
 
   static String line(CheckRun run, Diagnostic d) {

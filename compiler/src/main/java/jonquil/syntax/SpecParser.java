@@ -50,8 +50,7 @@ public final class SpecParser {
     try {
       tree = parser.file();
     } catch (ParseCancellationException stop) {
-      reporter.lexical(DiagnosticCode.TOO_MANY_ERRORS, TextRange.EMPTY,
-          "stopped reading this file after " + SyntaxReporter.MAX_DIAGNOSTICS + " syntax errors", null);
+      reporter.stopped();
     }
     SpecFile ast = tree == null
         ? SpecFile.empty(source.path())
@@ -101,7 +100,9 @@ public final class SpecParser {
                     + " before this one ends with '}'",
                 new Related(source.path(), range, "the next block starts here"));
             int at = repaired.size();
-            if (lineStartIndex < at && repaired.get(lineStartIndex).getStartIndex() > outer.getStartIndex()) {
+            // Past the diagnostic cap the input is hostile, not hand-written: append, never shift the list.
+            if (!reporter.full() && lineStartIndex < at
+                && repaired.get(lineStartIndex).getStartIndex() > outer.getStartIndex()) {
               at = lineStartIndex - 1; // before the newline that ends the previous line
             }
             repaired.add(at, closingBrace(at < repaired.size() ? repaired.get(at) : t));

@@ -22,6 +22,7 @@ final class SyntaxReporter {
   private final List<Diagnostic> diagnostics = new ArrayList<>();
   private final Set<Integer> explainedOffsets = new HashSet<>();
   private final Set<Integer> linesWithParseError = new HashSet<>();
+  private boolean dropped;
 
   SyntaxReporter(Path file, jonquil.source.LineIndex lines) {
     this.file = file;
@@ -48,11 +49,25 @@ final class SyntaxReporter {
   private void add(Diagnostic d) {
     if (diagnostics.size() < MAX_DIAGNOSTICS) {
       diagnostics.add(d);
+    } else if (!dropped) {
+      dropped = true;
+      diagnostics.add(Diagnostic.of(DiagnosticCode.TOO_MANY_ERRORS, file, d.range(),
+          "stopped reporting syntax errors in this file after " + MAX_DIAGNOSTICS + "; fix the first ones and check again"));
+    }
+  }
+
+  /** Parsing gave up early: say so once, even if the cap was not reached. */
+  void stopped() {
+    if (!dropped) {
+      dropped = true;
+      TextRange at = diagnostics.isEmpty() ? TextRange.EMPTY : diagnostics.get(diagnostics.size() - 1).range();
+      diagnostics.add(Diagnostic.of(DiagnosticCode.TOO_MANY_ERRORS, file, at,
+          "stopped reading this file after too many syntax errors; fix the first ones and check again"));
     }
   }
 
   boolean full() {
-    return diagnostics.size() >= MAX_DIAGNOSTICS;
+    return dropped || diagnostics.size() >= MAX_DIAGNOSTICS;
   }
 
   List<Diagnostic> diagnostics() {
