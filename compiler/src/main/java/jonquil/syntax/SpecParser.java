@@ -15,6 +15,7 @@ import org.antlr.v4.runtime.CommonToken;
 import org.antlr.v4.runtime.CommonTokenStream;
 import org.antlr.v4.runtime.ListTokenSource;
 import org.antlr.v4.runtime.Token;
+import org.antlr.v4.runtime.misc.Pair;
 import org.antlr.v4.runtime.misc.ParseCancellationException;
 
 /**
@@ -180,9 +181,10 @@ public final class SpecParser {
 
   /** A zero-width '}' placed before {@code next}, standing in for one the writer forgot. */
   private static Token closingBrace(Token next) {
-    CommonToken brace = new CommonToken(JonquilLexer.RBRACE, "}");
-    brace.setStartIndex(next.getStartIndex());
-    brace.setStopIndex(next.getStartIndex() - 1);
+    // Keep the lexer as the token's source: ANTLR's recovery asks every token for its input stream.
+    CommonToken brace = new CommonToken(new Pair<>(next.getTokenSource(), next.getInputStream()),
+        JonquilLexer.RBRACE, Token.DEFAULT_CHANNEL, next.getStartIndex(), next.getStartIndex() - 1);
+    brace.setText("}");
     brace.setLine(next.getLine());
     brace.setCharPositionInLine(next.getCharPositionInLine());
     return brace;

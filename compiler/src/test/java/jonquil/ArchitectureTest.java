@@ -1,0 +1,72 @@
+package jonquil;
+
+import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
+
+import com.tngtech.archunit.core.domain.JavaClasses;
+import com.tngtech.archunit.core.importer.ClassFileImporter;
+import com.tngtech.archunit.core.importer.ImportOption;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The layering of DEVELOPERS.md, enforced: text → syntax → resolved model → physics →
+ * analyses → findings, one direction; ANTLR only in syntax; no protocol types anywhere.
+ */
+class ArchitectureTest {
+  static JavaClasses classes;
+
+  @BeforeAll
+  static void importClasses() {
+    classes = new ClassFileImporter().withImportOption(ImportOption.Predefined.DO_NOT_INCLUDE_TESTS)
+        .importPackages("jonquil");
+  }
+
+  @Test
+  void onlySyntaxTouchesAntlr() {
+    noClasses().that().resideOutsideOfPackages("jonquil.syntax..", "jonquil.grammar..")
+        .should().dependOnClassesThat().resideInAnyPackage("org.antlr..", "jonquil.grammar..")
+        .check(classes);
+  }
+
+  @Test
+  void noProtocolTypesInTheCompiler() {
+    noClasses().should().dependOnClassesThat().resideInAnyPackage("org.eclipse.lsp4j..").check(classes);
+  }
+
+  @Test
+  void unitsAndSourceKnowNothingAbove() {
+    noClasses().that().resideInAnyPackage("jonquil.units..", "jonquil.source..")
+        .should().dependOnClassesThat().resideInAnyPackage("jonquil.syntax..", "jonquil.resolve..", "jonquil.analysis..",
+            "jonquil.cli..", "jonquil.diag..")
+        .check(classes);
+  }
+
+  @Test
+  void syntaxDoesNotKnowResolutionOrLater() {
+    noClasses().that().resideInAPackage("jonquil.syntax..")
+        .should().dependOnClassesThat().resideInAnyPackage("jonquil.resolve..", "jonquil.analysis..", "jonquil.cli..")
+        .check(classes);
+  }
+
+  @Test
+  void resolutionDoesNotKnowAnalysesOrTheCli() {
+    noClasses().that().resideInAPackage("jonquil.resolve..")
+        .should().dependOnClassesThat().resideInAnyPackage("jonquil.analysis..", "jonquil.cli..")
+        .check(classes);
+  }
+
+  @Test
+  void diagnosticsDependOnlyOnSourceRanges() {
+    noClasses().that().resideInAPackage("jonquil.diag..")
+        .should().dependOnClassesThat().resideInAnyPackage("jonquil.syntax..", "jonquil.resolve..",
+            "jonquil.analysis..", "jonquil.cli..")
+        .check(classes);
+  }
+
+  @Test
+  void onlyTheCliDoesConsoleOutput() {
+    noClasses().that().resideOutsideOfPackage("jonquil.cli..")
+        .should().accessField(System.class, "out")
+        .check(classes);
+  }
+}
