@@ -124,8 +124,12 @@ final class SpecLoader {
       return null;
     }
     if (!workspace.reader().exists(target)) {
-      report(file, DiagnosticCode.USE_NOT_FOUND, use, "file '" + written + "' not found (looked for '"
-          + workspace.root().relativize(target).toString().replace('\\', '/') + "' in the project)");
+      String resolved = workspace.root().relativize(target).toString().replace('\\', '/');
+      java.util.List<String> nearby = workspace.reader().specsIn(target.getParent()).stream()
+          .map(p -> file.getParent().relativize(p).toString().replace('\\', '/')).toList();
+      report(file, DiagnosticCode.USE_NOT_FOUND, use, "file '" + written + "' not found"
+          + (resolved.equals(written) ? "" : " (it would be '" + resolved + "' from the project root)")
+          + jonquil.resolve.Suggest.hint(written, nearby));
       return null;
     }
     return target;

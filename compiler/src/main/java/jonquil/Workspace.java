@@ -20,6 +20,15 @@ public record Workspace(Path root, Reader reader) {
     default boolean exists(Path file) {
       return Files.isRegularFile(file);
     }
+
+    /** The spec files in a folder, for "did you mean" on a mistyped 'use' path. */
+    default java.util.List<Path> specsIn(Path folder) {
+      try (var files = Files.list(folder)) {
+        return files.filter(f -> f.toString().endsWith(".jonq")).sorted().toList();
+      } catch (IOException | RuntimeException e) {
+        return java.util.List.of();
+      }
+    }
   }
 
   public Workspace {

@@ -18,10 +18,12 @@ import jonquil.syntax.Property;
 final class DeclarationChecker {
   private final Sink sink;
   private final ValueChecker values;
+  private final jonquil.syntax.SpecFile file;
 
-  DeclarationChecker(Sink sink, Scope scope) {
+  DeclarationChecker(Sink sink, Scope scope, jonquil.syntax.SpecFile file) {
     this.sink = sink;
     this.values = new ValueChecker(sink, scope);
+    this.file = file;
   }
 
   ResolvedElement check(Symbol symbol, ElementKind kind, Declaration decl) {
@@ -57,9 +59,13 @@ final class DeclarationChecker {
       values.check(spec.get().shape(), p.args(), key, p.range())
           .ifPresent(g -> params.computeIfAbsent(key, k -> new ArrayList<>()).add(g));
     }
-    checkRequired(symbol, kind, decl, firstSeen.keySet());
-    checkRules(symbol, kind, decl, firstSeen);
-    KindChecks.check(sink, symbol, kind, decl, params, firstSeen);
+    // After a syntax error or a misused '=', what looks missing was most likely written but not read.
+    boolean incomplete = file.damaged(decl.range()) || (decl.shorthand().isPresent() && kind != ElementKind.MATERIAL);
+    if (!incomplete) {
+      checkRequired(symbol, kind, decl, firstSeen.keySet());
+      checkRules(symbol, kind, decl, firstSeen);
+      KindChecks.check(sink, symbol, kind, decl, params, firstSeen);
+    }
     return new ResolvedElement(symbol, kind, params);
   }
 

@@ -17,11 +17,14 @@ final class RequirementResolver {
   private final ValueChecker values;
   private final Set<Symbol> placed;
 
-  RequirementResolver(Sink sink, Scope scope, Set<Symbol> placed) {
+  private final jonquil.syntax.SpecFile file;
+
+  RequirementResolver(Sink sink, Scope scope, Set<Symbol> placed, jonquil.syntax.SpecFile file) {
     this.sink = sink;
     this.scope = scope;
     this.values = new ValueChecker(sink, scope);
     this.placed = placed;
+    this.file = file;
   }
 
   ResolvedRequirement resolve(Requirement req) {
@@ -42,9 +45,12 @@ final class RequirementResolver {
         everywhere = true;
       }
     }
-    measure.ifPresent(m -> checkPlaces(m, check));
+    boolean damaged = file.damaged(req.range());
+    if (!damaged) {
+      measure.ifPresent(m -> checkPlaces(m, check));
+    }
     List<ResolvedRequirement.Criterion> criteria = new ArrayList<>();
-    if (check.condition().isEmpty()) {
+    if (check.condition().isEmpty() && !damaged) {
       sink.report(DiagnosticCode.MISSING_CONDITION, check.measure().range(),
           "this requirement has no bound: add one such as " + measure.map(RequirementResolver::example).orElse("'>= 400 mW'"));
     }
@@ -147,13 +153,19 @@ final class RequirementResolver {
     sink.refs.add(new ResolvedRef(sink.file, ref.name().range(), s));
     if (!s.category().placeable() || s.kind().isEmpty()) {
       sink.report(DiagnosticCode.WRONG_KIND, ref.name().range(),
-          "'" + name + "' is " + s.describe() + "; a requirement is measured at a source, element, probe or beam stop");
+          "'" + name + "' is " + s.kindPhrase() + "; a requirement is measured at a source, element, probe or beam stop");
       return Optional.empty();
     }
     Optional<String> port = Optional.empty();
     if (ref.port().isPresent()) {
       List<String> ports = s.kind().get().ports();
       String p = ref.port().get().text();
+      if (ports.size() <= 1) {
+        sink.report(DiagnosticCode.PORT_ON_ELEMENT_WITHOUT_PORTS, ref.port().get().range(), s.describe() + " "
+            + (ports.isEmpty() ? "stops the beam and has no output port" : "has a single output")
+            + "; write '" + name + "' without a port");
+        return Optional.empty();
+      }
       if (!ports.contains(p)) {
         sink.report(DiagnosticCode.UNKNOWN_PORT, ref.port().get().range(), s.describe() + " has no port '" + p + "'"
             + Suggest.hint(p, ports) + (ports.isEmpty() ? "" : "; its ports are " + ShapeMatcher.quoteList(ports)));

@@ -36,7 +36,7 @@ public final class Resolver {
 
     Map<Symbol, ResolvedElement> elements = new LinkedHashMap<>();
     files.forEach((path, file) -> {
-      DeclarationChecker checker = new DeclarationChecker(sinks.get(path), scopes.get(path));
+      DeclarationChecker checker = new DeclarationChecker(sinks.get(path), scopes.get(path), file);
       for (Declaration decl : file.declarations()) {
         Symbol symbol = own.get(path).get(decl.name().text());
         if (symbol == null || symbol.declaration().orElse(null) != decl || symbol.kind().isEmpty()) {
@@ -66,9 +66,9 @@ public final class Resolver {
     SpecFile rootFile = files.get(root);
     if (rootFile != null) {
       Sink sink = sinks.get(root);
-      TrainResolver trainResolver = new TrainResolver(sink, scopes.get(root));
+      TrainResolver trainResolver = new TrainResolver(sink, scopes.get(root), rootFile);
       trains = trainResolver.resolve(rootFile.trains());
-      RequirementResolver reqs = new RequirementResolver(sink, scopes.get(root), trainResolver.placedElements());
+      RequirementResolver reqs = new RequirementResolver(sink, scopes.get(root), trainResolver.placedElements(), rootFile);
       for (RequireDecl block : rootFile.requires()) {
         block.requirements().forEach(r -> requirements.add(reqs.resolve(r)));
       }
@@ -133,9 +133,11 @@ public final class Resolver {
         Symbol other = visible.get(s.name());
         if (other != null && !other.equals(s)) {
           UseEdge first = via.get(s.name());
-          sink.report(DiagnosticCode.DUPLICATE_NAME, edge.decl().range(),
+          var d = sink.report(DiagnosticCode.DUPLICATE_NAME, edge.decl().range(),
               "'" + s.name() + "' is declared both in '" + first.decl().target() + "' and in '" + edge.decl().target()
                   + "'; rename one");
+          sink.replace(d, d.withRelated(new Related(other.file(), other.nameNode().get().range(), "declared here"))
+              .withRelated(new Related(s.file(), s.nameNode().get().range(), "and here")));
           continue;
         }
         visible.put(s.name(), s);

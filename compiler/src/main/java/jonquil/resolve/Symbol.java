@@ -20,6 +20,14 @@ public record Symbol(String name, Category category, Optional<ElementKind> kind,
     return file == null;
   }
 
+  /** What the symbol is, with an article: "a mirror", "a catalog material", "a train". */
+  public String kindPhrase() {
+    if (isCatalog()) {
+      return "a catalog material";
+    }
+    return kind.map(k -> (k.word().matches("^[aeiou].*") ? "an " : "a ") + k.word()).orElse(category.phrase());
+  }
+
   /** How the symbol is named in messages: "mirror 'm1'", "catalog material 'water'". */
   public String describe() {
     if (isCatalog()) {

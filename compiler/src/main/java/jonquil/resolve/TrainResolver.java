@@ -31,12 +31,17 @@ final class TrainResolver {
   private final Map<String, TextRange> followedPorts = new HashMap<>();
   private final List<Pending> branches = new ArrayList<>();
 
+  /** Elements named with a wrong port somewhere: whether their ports are followed is unknowable. */
+  private final Set<Symbol> badPorts = new HashSet<>();
+  private final jonquil.syntax.SpecFile file;
+
   private record Pending(ResolvedTrain.PortRef port) {}
 
-  TrainResolver(Sink sink, Scope scope) {
+  TrainResolver(Sink sink, Scope scope, jonquil.syntax.SpecFile file) {
     this.sink = sink;
     this.scope = scope;
     this.values = new ValueChecker(sink, scope);
+    this.file = file;
   }
 
   List<ResolvedTrain> resolve(List<TrainDecl> trains) {
@@ -67,6 +72,7 @@ final class TrainResolver {
     Optional<ResolvedTrain.PortRef> branchFrom = Optional.empty();
     Set<Symbol> inThisPath = new HashSet<>();
     List<TrainDecl.Step> written = path.steps();
+    boolean damaged = file.damaged(path.range());
     for (int i = 0; i < written.size(); i++) {
       TrainDecl.Step step = written.get(i);
       boolean first = i == 0;
@@ -78,7 +84,7 @@ final class TrainResolver {
           return Optional.empty();
         }
         gap(d).ifPresent(steps::add);
-        if (last) {
+        if (last && !damaged) {
           sink.report(DiagnosticCode.PATH_ENDS_WITH_DISTANCE, d.range(),
               "the path ends in empty space after this distance: end it at a dump, a detector or a probe");
         }
@@ -92,18 +98,15 @@ final class TrainResolver {
       Symbol s = symbol.get();
       ElementKind kind = s.kind().orElseThrow();
       if (first && ref.port().isPresent()) {
-        portOf(ref, kind).ifPresent(port -> {
-          ResolvedTrain.PortRef start = new ResolvedTrain.PortRef(s, port, ref.range());
-          branches.add(new Pending(start));
-        });
         branchFrom = portOf(ref, kind).map(port -> new ResolvedTrain.PortRef(s, port, ref.range()));
+        branchFrom.ifPresent(start -> branches.add(new Pending(start)));
         inThisPath.add(s);
         continue;
       }
       if (first && kind.category() != Category.SOURCE) {
         sink.report(DiagnosticCode.PATH_START_NOT_SOURCE, ref.range(),
             "a beam path starts at a source, or at an output port such as 'bs1.reflected'; '" + s.name()
-                + "' is " + s.describe());
+                + "' is " + s.kindPhrase());
         return Optional.empty();
       }
       if (!first && kind.category() == Category.SOURCE) {
@@ -119,8 +122,10 @@ final class TrainResolver {
       ResolvedTrain.Element already = placed.get(s);
       if (already != null) {
         var diag = sink.report(DiagnosticCode.ELEMENT_PLACED_TWICE, ref.range(),
-            "'" + s.name() + "' is already placed in another path; to continue from it, start the path at one of its ports"
-                + (kind.ports().size() > 1 ? " such as '" + s.name() + "." + kind.ports().get(1) + "'" : ""));
+            "'" + s.name() + "' is already placed in another path; "
+                + (kind.ports().size() > 1
+                    ? "to continue from it, start a path at one of its ports, such as '" + s.name() + "." + kind.ports().get(1) + "'"
+                    : "an element sits in one place; for a second pass, declare a second element"));
         sink.replace(diag, diag.withRelated(new Related(sink.file, already.range(), "placed here")));
         continue;
       }
@@ -144,7 +149,7 @@ final class TrainResolver {
         followedPorts.put(s.name() + "." + exit, ref.range());
       }
       steps.add(element);
-      if (last && kind.category() != Category.TERMINAL && kind.category() != Category.PROBE) {
+      if (last && !damaged && kind.category() != Category.TERMINAL && kind.category() != Category.PROBE) {
         sink.report(DiagnosticCode.UNTERMINATED_BRANCH, ref.range(),
             "the beam leaving " + s.describe() + " goes nowhere: end the path at a dump, a detector or a probe"
                 + " (until then its light counts as stray)");
@@ -184,7 +189,7 @@ final class TrainResolver {
     sink.refs.add(new ResolvedRef(sink.file, ref.name().range(), s));
     if (!s.category().placeable() || s.kind().isEmpty()) {
       sink.report(DiagnosticCode.NOT_PLACEABLE, ref.name().range(),
-          "'" + name + "' is " + s.describe() + ", which cannot stand in a beam path"
+          "'" + name + "' is " + s.kindPhrase() + ", which cannot stand in a beam path"
               + (s.category() == Category.MATERIAL ? "; to run a distance in it, write '10 mm in " + name + "'" : ""));
       return Optional.empty();
     }
@@ -197,11 +202,17 @@ final class TrainResolver {
     }
     String port = ref.port().get().text();
     if (kind.ports().size() <= 1) {
-      sink.report(DiagnosticCode.PORT_ON_ELEMENT_WITHOUT_PORTS, ref.port().get().range(),
-          kind.word() + " '" + ref.name().text() + "' has a single output; write '" + ref.name().text() + "' without a port");
+      Symbol owner = scope.lookup(ref.name().text()).orElse(null);
+      if (owner != null) {
+        badPorts.add(owner);
+      }
+      sink.report(DiagnosticCode.PORT_ON_ELEMENT_WITHOUT_PORTS, ref.port().get().range(), kind.word() + " '"
+          + ref.name().text() + "' " + (kind.ports().isEmpty() ? "stops the beam and has no output port"
+              : "has a single output") + "; write '" + ref.name().text() + "' without a port");
       return Optional.empty();
     }
     if (!kind.ports().contains(port)) {
+      scope.lookup(ref.name().text()).ifPresent(badPorts::add);
       sink.report(DiagnosticCode.UNKNOWN_PORT, ref.port().get().range(),
           kind.word() + " '" + ref.name().text() + "' has no port '" + port + "'"
               + Suggest.closest(port, kind.ports()).map(x -> "; did you mean '" + x + "'?")
@@ -232,6 +243,9 @@ final class TrainResolver {
 
   private void checkUnfollowedPorts() {
     for (ResolvedTrain.Element e : placed.values()) {
+      if (badPorts.contains(e.symbol())) {
+        continue;
+      }
       ElementKind kind = e.symbol().kind().orElseThrow();
       for (String port : kind.primaryPorts()) {
         String key = e.symbol().name() + "." + port;

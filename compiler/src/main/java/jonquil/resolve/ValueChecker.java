@@ -70,10 +70,13 @@ final class ValueChecker {
   private void reportMismatch(ShapeMatcher.Outcome outcome, List<Arg> args, String what, TextRange whole) {
     String expected = ShapeMatcher.quoteFree(outcome.expected());
     if (outcome.failedArg() == null) {
-      TextRange at = args.isEmpty() ? whole : new TextRange(whole.end(), whole.end());
-      String after = args.isEmpty() ? "" : " more";
-      sink.report(DiagnosticCode.MISSING_ARGUMENT, args.isEmpty() ? whole : at,
-          "'" + what + "' needs" + after + " " + expected);
+      if (args.isEmpty()) {
+        sink.report(DiagnosticCode.MISSING_ARGUMENT, whole, "'" + what + "' needs " + expected);
+      } else {
+        Arg last = args.get(args.size() - 1);
+        sink.report(DiagnosticCode.MISSING_ARGUMENT, last.range(),
+            "'" + what + "' is incomplete: expected " + expected + " after " + describeArg(last));
+      }
       return;
     }
     Arg bad = outcome.failedArg();
@@ -98,7 +101,7 @@ final class ValueChecker {
       return "'" + r.text() + "'";
     }
     if (a instanceof Arg.QuantityArg q) {
-      return "'" + q.number().text() + q.unit().map(u -> " " + u.text()).orElse("") + "'";
+      return "'" + written(q) + "'";
     }
     if (a instanceof Arg.StringArg) {
       return "a quoted string";
@@ -202,8 +205,14 @@ final class ValueChecker {
       dim = u.dimension();
     }
     if (!bounds.contains(si)) {
-      sink.report(DiagnosticCode.OUT_OF_RANGE, a.range(),
-          "'" + what + "' must be " + describe(bounds, dim) + "; got '" + written(a) + "'");
+      if (bounds.equals(KindTables.WAVELENGTH)) {
+        sink.report(DiagnosticCode.UNSUPPORTED_WAVELENGTH, a.range(), "Jonquil models wavelengths from "
+            + QuantityFormat.format(bounds.min(), dim) + " to " + QuantityFormat.format(bounds.max(), dim) + "; '"
+            + written(a) + "' is outside that range");
+      } else {
+        sink.report(DiagnosticCode.OUT_OF_RANGE, a.range(),
+            "'" + what + "' must be " + describe(bounds, dim) + "; got '" + written(a) + "'");
+      }
       return Optional.empty();
     }
     return Optional.of(new Value.Num(si, dim, tolerance(a, unit.orElse(null), si, dim, what), a.range()));
@@ -337,6 +346,16 @@ final class ValueChecker {
     if (found.isEmpty() && categories.contains(Category.MATERIAL)) {
       found = CatalogNames.lookup(name).map(e -> Symbol.catalog(e.name()));
     }
+    if (found.isEmpty() && categories.contains(Category.MATERIAL)) {
+      List<String> catalog = CatalogNames.entries().stream()
+          .filter(e -> !what.equals("metal") || e.materialClass() == CatalogNames.MaterialClass.METAL)
+          .map(CatalogNames.Entry::name).toList();
+      sink.report(DiagnosticCode.UNKNOWN_CATALOG_MATERIAL, ref.range(),
+          "'" + name + "' is neither a declared material nor in the material catalog"
+              + Suggest.closest(name, scope.namesOf(categories)).map(s -> "; did you mean '" + s + "'?")
+                  .orElse("; the catalog has " + String.join(", ", catalog)));
+      return Optional.empty();
+    }
     if (found.isEmpty()) {
       sink.report(DiagnosticCode.UNDEFINED_NAME, ref.range(),
           "unknown name '" + name + "' in '" + what + "'" + Suggest.hint(name, scope.namesOf(categories)));
@@ -373,8 +392,10 @@ final class ValueChecker {
     return Optional.of(((UnitParse.Ok) parsed).unit());
   }
 
+  /** The literal as written: '3 mm' keeps its space, '3R' stays without one. */
   static String written(Arg.QuantityArg a) {
-    return a.number().text() + a.unit().map(u -> " " + u.text()).orElse("");
+    return a.number().text() + a.unit()
+        .map(u -> (u.range().start() > a.number().range().end() ? " " : "") + u.text()).orElse("");
   }
 
   private static String percent(double fraction) {

@@ -44,7 +44,7 @@ final class AstBuilder {
         declaration(top.declaration()).ifPresent(declarations::add);
       }
     }
-    return new SpecFile(source.path(), uses, declarations, trains, requires, comments);
+    return new SpecFile(source.path(), uses, declarations, trains, requires, comments, List.of());
   }
 
   private Optional<UseDecl> useDecl(UseDeclContext ctx) {

@@ -56,7 +56,14 @@ public final class SpecParser {
     SpecFile ast = tree == null
         ? SpecFile.empty(source.path())
         : new AstBuilder(source, offsets, comments).build(tree);
-    return new ParseResult(source, ast, reporter.diagnostics());
+    // A syntax error damages its whole line: recovery may have cut a construct short anywhere on it.
+    List<TextRange> damage = reporter.diagnostics().stream()
+        .filter(d -> d.severity() == jonquil.diag.Severity.ERROR)
+        .map(d -> {
+          int line = source.lines().line(d.range().start());
+          return new TextRange(source.lines().lineStart(line), source.lines().lineContentEnd(line));
+        }).toList();
+    return new ParseResult(source, ast.withDamage(damage), reporter.diagnostics());
   }
 
   /**
@@ -70,6 +77,7 @@ public final class SpecParser {
     List<Token> repaired = new ArrayList<>(tokens.size() + 4);
     int lineStartIndex = 0; // index in 'repaired' of the first token of the current line
     Deque<Token> open = new ArrayDeque<>();
+    int openParens = 0;
     Token errorRunStart = null;
     Token errorRunEnd = null;
     for (Token t : tokens) {
@@ -118,8 +126,14 @@ public final class SpecParser {
             open.pop();
           }
         }
-        case JonquilLexer.LPAREN, JonquilLexer.RPAREN -> reporter.lexical(DiagnosticCode.SYNTAX_UNEXPECTED, range,
-            "parentheses are not used in Jonquil; write values one after another, separated by commas", null);
+        case JonquilLexer.LPAREN, JonquilLexer.RPAREN -> {
+          if (t.getType() == JonquilLexer.LPAREN || openParens == 0) {
+            reporter.lexical(DiagnosticCode.SYNTAX_UNEXPECTED, range,
+                "parentheses are not used in Jonquil; write values one after another, separated by commas", null);
+          }
+          openParens = Math.max(0, openParens + (t.getType() == JonquilLexer.LPAREN ? 1 : -1));
+          keep = false; // read what is inside as if the parentheses were not there
+        }
         default -> { }
       }
       if (t.getType() == Token.EOF) {

@@ -68,6 +68,19 @@ final class SyntaxErrorStrategy extends DefaultErrorStrategy {
     if (++reports > MAX_REPORTS || reporter.full()) {
       throw new ParseCancellationException("too many syntax errors");
     }
+    boolean valueNext = offending.getType() == JonquilLexer.NUMBER || offending.getType() == JonquilLexer.MINUS
+        || offending.getType() == JonquilLexer.OD;
+    boolean onSameLine = previousOnSameLine(parser, offending) != null;
+    if (!missing && onSameLine && valueNext && within(parser, JonquilParser.RULE_requireDecl)) {
+      // 'power at spot 15 mW': the number is the bound; what is missing is the comparison before it.
+      missing = true;
+      expected = "a comparison such as '>=' or 'in'";
+    } else if (!missing && onSameLine && within(parser, JonquilParser.RULE_trainDecl)
+        && (valueNext || offending.getType() == JonquilLexer.IDENT)) {
+      // 'seed -> 40 mm spot': two steps side by side; the arrow between them is missing.
+      missing = true;
+      expected = "'->'";
+    }
     Token previous = previousOnSameLine(parser, offending);
     boolean atLineEnd = offending.getType() == JonquilLexer.NL || offending.getType() == Token.EOF;
     TextRange range;
@@ -90,7 +103,17 @@ final class SyntaxErrorStrategy extends DefaultErrorStrategy {
     } else {
       message.append("expected ").append(expected).append(after).append(", found ").append(TokenText.found(offending));
     }
-    reporter.parse(DiagnosticCode.SYNTAX_UNEXPECTED, range, message.toString());
+    reporter.parse(missing ? DiagnosticCode.SYNTAX_MISSING : DiagnosticCode.SYNTAX_UNEXPECTED, range, message.toString(),
+        offending.getType() == Token.EOF);
+  }
+
+  private static boolean within(Parser parser, int rule) {
+    for (ParserRuleContext ctx = parser.getContext(); ctx != null; ctx = ctx.getParent()) {
+      if (ctx.getRuleIndex() == rule) {
+        return true;
+      }
+    }
+    return false;
   }
 
   /** The token before the offending one, if it is on the same line (used to say "after 'x'"). */

@@ -36,8 +36,9 @@ final class SyntaxReporter {
     add(related == null ? d : d.withRelated(related));
   }
 
-  void parse(DiagnosticCode code, TextRange range, String message) {
-    if (explainedOffsets.contains(range.start())) {
+  void parse(DiagnosticCode code, TextRange range, String message, boolean atEndOfFile) {
+    // An error at the very end after earlier ones is their cascade (a '{' recovery conjured needs its '}').
+    if (explainedOffsets.contains(range.start()) || (atEndOfFile && !diagnostics.isEmpty())) {
       return;
     }
     if (!linesWithParseError.add(lines.line(range.start()))) {

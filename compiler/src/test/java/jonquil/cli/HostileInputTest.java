@@ -55,7 +55,9 @@ class HostileInputTest {
       assertTrue(run.exitCode() >= 0 && run.exitCode() <= 2, name + ": exit " + run.exitCode());
       assertFalse(run.err().contains("Exception") || run.err().contains("\tat "), name + ": " + run.err());
       assertFalse(run.out().contains("Exception") || run.out().contains("\tat "), name + " printed a trace");
-      assertFalse(run.out().contains("J901") || run.err().contains("internal error"), name + ": internal failure\n" + run.out());
+      assertFalse(run.out().contains("[J901]") || run.out().contains("\"ruleId\": \"J901\"")
+          || run.out().contains("\"code\": \"J901\"") || run.err().contains("internal error"),
+          name + ": internal failure\n" + run.out());
     }
   }
 }

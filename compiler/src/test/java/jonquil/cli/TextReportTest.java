@@ -17,6 +17,8 @@ import org.junit.jupiter.api.Test;
 
 class TextReportTest {
   private static final Pattern FINDING = Pattern.compile("^[^:]+:\\d+:\\d+: (error|warning|note): .+ \\[J\\d{3}\\]$");
+  /** Requirement verdicts stand where findings have a severity, so quickfix parsers skip them. */
+  static final Pattern VERDICT = Pattern.compile("^[^:]+:\\d+:\\d+: requirement (pass|fail|not-evaluated): .+$");
 
   private static List<String> lines(CheckRun run) {
     ByteArrayOutputStream bytes = new ByteArrayOutputStream();
@@ -25,11 +27,20 @@ class TextReportTest {
   }
 
   @Test
-  void everyLineButTheLastIsACompilerStyleFinding() {
+  void everyLineButTheVerdictsAndTheSummaryIsACompilerStyleFinding() {
     List<String> lines = lines(SampleRun.run());
     for (String line : lines.subList(0, lines.size() - 1)) {
-      assertTrue(FINDING.matcher(line).matches(), line);
+      assertTrue(FINDING.matcher(line).matches() || VERDICT.matcher(line).matches(), line);
     }
+  }
+
+  @Test
+  void requirementVerdictsFollowTheFindingsOnePerLine() {
+    List<String> lines = lines(SampleRun.run());
+    long verdicts = lines.stream().filter(l -> VERDICT.matcher(l).matches()).count();
+    assertTrue(verdicts == SampleRun.run().result().requirements().size(), "verdict lines: " + verdicts);
+    int firstVerdict = lines.indexOf(lines.stream().filter(l -> VERDICT.matcher(l).matches()).findFirst().orElseThrow());
+    assertTrue(lines.subList(firstVerdict, lines.size() - 1).stream().allMatch(l -> VERDICT.matcher(l).matches()));
   }
 
   @Test
