@@ -274,9 +274,9 @@ final class ValueChecker {
       return Optional.empty();
     }
     if (!bounds.contains(si)) {
-      sink.report(DiagnosticCode.OUT_OF_RANGE, a.range(),
-          "'" + what + "' must be between " + percent(bounds.min()) + " and " + percent(bounds.max()) + "; got '"
-              + written(a) + "'");
+      String allowed = Double.isFinite(bounds.max())
+          ? "between " + percent(bounds.min()) + " and " + percent(bounds.max()) : "zero or more";
+      sink.report(DiagnosticCode.OUT_OF_RANGE, a.range(), "'" + what + "' must be " + allowed + "; got '" + written(a) + "'");
       return Optional.empty();
     }
     return Optional.of(new Value.Num(si, Dimension.DIMENSIONLESS, OptionalDouble.empty(), a.range()));
