@@ -8,7 +8,10 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import jonquil.analysis.Analyzer;
 import jonquil.analysis.RequirementOutcome;
+import jonquil.analysis.TrainSolution;
+import jonquil.diag.Severity;
 import jonquil.diag.Diagnostic;
 import jonquil.diag.DiagnosticCode;
 import jonquil.resolve.ResolvedModel;
@@ -35,6 +38,7 @@ public final class Checker {
     Set<Diagnostic> diagnostics = new LinkedHashSet<>();
     List<RequirementOutcome> requirements = new ArrayList<>();
     Map<Path, ResolvedModel> models = new LinkedHashMap<>();
+    Map<Path, TrainSolution> solutions = new LinkedHashMap<>();
     for (Path file : files) {
       Path root = file.toAbsolutePath().normalize();
       try {
@@ -44,19 +48,26 @@ public final class Checker {
               "cannot read '" + root.getFileName() + "'"));
           continue;
         }
+        List<Diagnostic> found = new ArrayList<>();
         for (Path p : loader.closure().keySet()) {
-          diagnostics.addAll(parsed.get(p).diagnostics());
+          found.addAll(parsed.get(p).diagnostics());
         }
-        diagnostics.addAll(loader.diagnostics());
+        found.addAll(loader.diagnostics());
         ResolvedModel model = Resolver.resolve(root, loader.closure(), loader.edges());
-        diagnostics.addAll(model.diagnostics());
+        found.addAll(model.diagnostics());
+        diagnostics.addAll(found);
         models.put(root, model);
-        for (ResolvedRequirement r : model.requirements()) {
-          requirements.add(RequirementOutcome.notEvaluated(r.file(), r.syntax().range(), r.syntax().text(),
-              r.valid() ? "form checked; this version does not compute "
-                  + r.measure().map(m -> m.word()).orElse("it") + " yet"
-                  : "the requirement has errors"));
+        if (found.stream().anyMatch(d -> d.severity() == Severity.ERROR)) {
+          for (ResolvedRequirement r : model.requirements()) {
+            requirements.add(RequirementOutcome.notEvaluated(r.file(), r.syntax().range(), r.syntax().text(),
+                "not evaluated: the spec has errors"));
+          }
+          continue;
         }
+        Analyzer.Analysis analysis = Analyzer.analyze(model);
+        diagnostics.addAll(analysis.diagnostics());
+        requirements.addAll(analysis.outcomes());
+        solutions.put(root, analysis.solution());
       } catch (RuntimeException | StackOverflowError e) {
         diagnostics.add(Diagnostic.of(DiagnosticCode.INTERNAL_ERROR, root, TextRange.EMPTY,
             "the checker failed internally (" + e.getClass().getSimpleName() + "); please report this file"));
@@ -64,7 +75,7 @@ public final class Checker {
     }
     Map<Path, SourceFile> sources = new LinkedHashMap<>();
     parsed.forEach((p, r) -> sources.put(p, r.source()));
-    return new Result(sources, capped(diagnostics), requirements, models);
+    return new Result(sources, capped(diagnostics), requirements, models, solutions);
   }
 
   private static List<Diagnostic> capped(Set<Diagnostic> all) {

@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Map;
 import jonquil.analysis.RequirementOutcome;
 import jonquil.analysis.RequirementStatus;
+import jonquil.analysis.TrainSolution;
 import jonquil.diag.Diagnostic;
 import jonquil.diag.Severity;
 import jonquil.resolve.ResolvedModel;
@@ -12,24 +13,27 @@ import jonquil.source.SourceFile;
 
 /**
  * Everything one check produced: the texts it read, its diagnostics (sorted), and the
- * verdict on every requirement, plus the resolved model of each checked root. CLI formats, reports and the language server all read
+ * verdict on every requirement, plus the resolved model and the solved trains of each
+ * checked root. CLI formats, reports and the language server all read
  * this one value, so they cannot disagree.
  */
 public record Result(
     Map<Path, SourceFile> files,
     List<Diagnostic> diagnostics,
     List<RequirementOutcome> requirements,
-    Map<Path, ResolvedModel> models) {
+    Map<Path, ResolvedModel> models,
+    Map<Path, TrainSolution> solutions) {
   public Result {
     files = Map.copyOf(files);
     diagnostics = diagnostics.stream().sorted(Diagnostic.ORDER).toList();
     requirements = List.copyOf(requirements);
     models = Map.copyOf(models);
+    solutions = Map.copyOf(solutions);
   }
 
   /** A result without resolved models, e.g. when nothing could be read. */
   public Result(Map<Path, SourceFile> files, List<Diagnostic> diagnostics, List<RequirementOutcome> requirements) {
-    this(files, diagnostics, requirements, Map.of());
+    this(files, diagnostics, requirements, Map.of(), Map.of());
   }
 
   public long count(Severity severity) {

@@ -25,9 +25,7 @@ import org.junit.jupiter.api.TestFactory;
  */
 class SamplesTest {
   static List<Path> samples() throws IOException {
-    try (Stream<Path> files = Files.walk(Repo.samples())) {
-      return files.filter(p -> p.toString().endsWith(".jonq")).sorted().toList();
-    }
+    return Repo.sampleFiles();
   }
 
   static Result check(Path sample) {

@@ -64,6 +64,7 @@ final class JsonReport {
       requirements.add(requirement(run, r));
     }
     root.add("requirements", requirements);
+    root.add("values", ValuesJson.build(run));
     root.add("summary", summary(result));
     return root;
   }

@@ -7,6 +7,8 @@ import jonquil.analysis.RequirementStatus;
 import jonquil.diag.Diagnostic;
 import jonquil.diag.Related;
 import jonquil.diag.Severity;
+import jonquil.units.Dimension;
+import jonquil.units.QuantityFormat;
 
 /**
  * The default report: one compiler-style line per finding, which editors and CI log
@@ -40,8 +42,9 @@ final class TextReport {
     StringBuilder line = new StringBuilder(location(run, r.file(), r.range().start()))
         .append(": requirement ").append(r.status().word()).append(": ").append(oneLine(r.text()));
     if (r.value().isPresent()) {
-      line.append(" (value ").append(r.value().getAsDouble()).append(' ').append(r.siUnit());
-      r.margin().ifPresent(m -> line.append(", margin ").append(m));
+      Dimension dim = dimension(r.siUnit());
+      line.append(" (value ").append(QuantityFormat.format(r.value().getAsDouble(), dim));
+      r.margin().ifPresent(m -> line.append(", margin ").append(QuantityFormat.format(m, dim)));
       line.append(')');
     }
     if (r.reason() != null && !r.reason().isBlank()) {
@@ -68,6 +71,22 @@ final class TextReport {
   private static String location(CheckRun run, java.nio.file.Path file, int offset) {
     Position p = Position.of(run.result().files(), file, offset);
     return PathText.relative(run.cwd(), file) + ":" + p.line() + ":" + p.column();
+  }
+
+  /** The dimension of a requirement's SI unit name, for formatting its value and margin. */
+  static Dimension dimension(String siUnit) {
+    switch (siUnit == null ? "" : siUnit) {
+      case "W":
+        return Dimension.POWER;
+      case "rad":
+        return Dimension.ANGLE;
+      case "m":
+        return Dimension.LENGTH;
+      case "J":
+        return Dimension.ENERGY;
+      default:
+        return Dimension.DIMENSIONLESS;
+    }
   }
 
   /** A line break inside a message would split one finding into two for every log parser. */

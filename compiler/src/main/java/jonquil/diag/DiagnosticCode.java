@@ -48,6 +48,7 @@ public enum DiagnosticCode {
   CONFLICTING_PARAMETERS("J406", Severity.ERROR, "Parameters that exclude each other"),
   MISSING_ARGUMENT("J407", Severity.ERROR, "A parameter is missing part of its value"),
   UNSUPPORTED_WAVELENGTH("J408", Severity.ERROR, "A wavelength outside the range Jonquil supports"),
+  MATERIAL_OUT_OF_RANGE("J409", Severity.WARNING, "A material used outside the wavelength range of its data"),
 
   // Beam trains: J5xx
   PATH_START_NOT_SOURCE("J501", Severity.ERROR, "A beam path starts neither at a source nor at a port"),
@@ -75,6 +76,7 @@ public enum DiagnosticCode {
   TARGET_NOT_PLACED("J607", Severity.WARNING, "A requirement names an element that no beam reaches"),
   UNEXPECTED_PLACE("J608", Severity.ERROR, "A place given to a requirement that takes none"),
   REQUIREMENT_FAILED("J609", Severity.ERROR, "A requirement is not met"),
+  STRAY_BEAM("J610", Severity.NOTE, "Light leaves the train without reaching a probe, detector or dump"),
 
   // Limits and internals: J9xx
   INTERNAL_ERROR("J901", Severity.ERROR, "The checker failed internally; please report it"),

@@ -61,7 +61,7 @@ public final class Fresnel {
 
   /**
    * ξ = n cos θ = √(n² − u²) for the invariant u = n1 sin θi, on the branch where the wave
-   * decays away from the interface (Im ξ ≥ 0; Re ξ ≥ 0 when it is real).
+   * leaves the interface: Re ξ ≥ 0 for a propagating wave, Im ξ ≥ 0 for an evanescent one.
    */
   static Complex normalComponent(Complex n, Complex u) {
     Complex radicand = n.multiply(n).subtract(u.multiply(u));
@@ -72,8 +72,12 @@ public final class Fresnel {
       radicand = new Complex(radicand.getReal(), 0.0);
     }
     Complex xi = radicand.sqrt();
-    // Principal roots have Re ≥ 0; on the negative real axis (total reflection) Im must be ≥ 0.
-    if (xi.getImaginary() < 0 || (xi.getImaginary() == 0 && xi.getReal() < 0)) {
+    // Principal roots have Re ≥ 0: a wave carrying power away from the interface. Flip only
+    // when the root is mostly evanescent and would grow (Im < 0 dominating): that is total
+    // reflection seen through an absorbing incidence medium, whose small loss tilts n² − u²
+    // below the real axis. A propagating wave keeps Re ≥ 0 even then.
+    boolean growingEvanescent = xi.getImaginary() < 0 && -xi.getImaginary() > xi.getReal();
+    if (growingEvanescent || (xi.getImaginary() == 0 && xi.getReal() < 0)) {
       xi = xi.negate();
     }
     return xi;

@@ -27,8 +27,9 @@
  *       rs = (n1 cos θi − n2 cos θt)/(n1 cos θi + n2 cos θt),
  *       rp = (n2 cos θi − n1 cos θt)/(n2 cos θi + n1 cos θt),
  *       ts = 2 n1 cos θi/(n1 cos θi + n2 cos θt), tp = 2 n1 cos θi/(n2 cos θi + n1 cos θt),
- *       with complex Snell n1 sin θi = n2 sin θt and the branch of cos θt for which the
- *       transmitted wave decays, Im(n2 cos θt) ≥ 0; this gives the total-internal-reflection
+ *       with complex Snell n1 sin θi = n2 sin θt and the branch of cos θt on which the
+ *       transmitted wave leaves the interface: Re(n2 cos θt) ≥ 0 when it propagates,
+ *       Im(n2 cos θt) ≥ 0 when it is evanescent; this gives the total-internal-reflection
  *       phases. Rs = |rs|², Rp = |rp|², Ts = Re(n2 cos θt)/Re(n1 cos θi)·|ts|², and
  *       Tp = Re(n2* cos θt)/Re(n1* cos θi)·|tp|² (the normal Poynting flux of a p wave; for a
  *       real n2 this is the same factor as for s). The incidence medium is taken as lossless.

@@ -46,7 +46,7 @@ class JsonReportTest {
     String json = JsonReport.render(SampleRun.run());
     assertTrue(json.startsWith("{\n  \"schema\": \"jonquil.check/1\",\n  \"tool\": {\n    \"name\""), json);
     List<String> keys = List.copyOf(report().keySet());
-    assertEquals(List.of("schema", "tool", "files", "diagnostics", "requirements", "summary"), keys);
+    assertEquals(List.of("schema", "tool", "files", "diagnostics", "requirements", "values", "summary"), keys);
   }
 
   @Test

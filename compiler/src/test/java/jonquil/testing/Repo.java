@@ -14,6 +14,13 @@ public final class Repo {
     return root().resolve("samples");
   }
 
+  /** Every .jonq file under samples/, sorted. */
+  public static java.util.List<Path> sampleFiles() throws java.io.IOException {
+    try (java.util.stream.Stream<Path> files = java.nio.file.Files.walk(samples())) {
+      return files.filter(p -> p.toString().endsWith(".jonq")).sorted().toList();
+    }
+  }
+
   public static Path testResources() {
     return root().resolve("compiler/src/test/resources");
   }

@@ -1,0 +1,291 @@
+package jonquil.analysis;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import jonquil.optics.Coherency;
+import jonquil.optics.Fresnel;
+import jonquil.optics.Jones;
+import jonquil.resolve.ElementKind;
+import jonquil.resolve.ResolvedElement;
+import jonquil.resolve.Symbol;
+import jonquil.resolve.Value;
+import org.apache.commons.math3.complex.Complex;
+
+/**
+ * The optical model of each element kind: how one incoming beam divides among the
+ * element's ports, its ghosts and absorption. Defaults for unstated values are listed
+ * in DEVELOPERS.md ("Element models").
+ */
+final class ElementOptics {
+  /** Extinction ratio of an ideal polarizer or polarizing splitter when none is stated. */
+  static final double IDEAL_EXTINCTION = 1e12;
+  /** Stated defaults of a polarizing splitter (DEVELOPERS.md): p transmittance and s reflectance. */
+  static final double DEFAULT_PBS_TP = 0.95;
+  static final double DEFAULT_PBS_RS = 0.99;
+  static final double DEFAULT_PBS_EXTINCTION = 1000;
+
+  private final MaterialModel materials;
+  private final SurfaceModel surfaces;
+
+  ElementOptics(MaterialModel materials, SurfaceModel surfaces) {
+    this.materials = materials;
+    this.surfaces = surfaces;
+  }
+
+  Response respond(ResolvedElement e, Beam in) {
+    double plane = e.number("plane", "angle").orElse(0);
+    switch (e.kind()) {
+      case POLARIZER: {
+        double axis = e.number("axis", "angle").orElse(0);
+        double t = e.number("transmission", "t").orElse(1);
+        double er = e.number("extinction", "ratio").orElse(IDEAL_EXTINCTION);
+        return through(in, "out", Jones.polarizer(axis, t, er));
+      }
+      case WAVEPLATE:
+        return through(in, "out", waveplate(e, in.wavelength()).scaled(Math.sqrt(coatedPairTransmission(e, in))));
+      case ROTATOR: {
+        double t = e.number("transmission", "t").orElse(1);
+        return through(in, "out", Jones.rotator(e.number("rotation", "angle").orElse(0)).scaled(Math.sqrt(t)));
+      }
+      case DEPOLARIZER: {
+        double f = e.number("depolarization", "d").orElse(1);
+        double t = e.number("transmission", "t").orElse(1);
+        return Response.balance(in, Map.of("out", in.with(in.light().depolarized(f).scaled(t))), List.of());
+      }
+      case SPLITTER:
+        return splitter(e, in, plane);
+      case MIRROR:
+        return mirror(e, in, plane);
+      case WINDOW:
+      case PLATE:
+        return window(e, in, plane);
+      case INTERFACE:
+        return interfaceSurface(e, in, plane);
+      case LENS:
+        return lens(e, in);
+      case FILTER: {
+        OptionalDouble od = e.number("od", "od");
+        double t = od.isPresent() ? Math.pow(10, -od.getAsDouble()) : e.number("transmission", "t").orElse(1);
+        return Response.balance(in, Map.of("out", in.with(in.light().scaled(t))), List.of());
+      }
+      case RHOMB:
+        return rhomb(e, in);
+      case APERTURE:
+      case PROBE:
+        // Clipping by an aperture needs the beam's size: it comes with the beam analysis.
+        return Response.balance(in, Map.of("out", in), List.of());
+      case DETECTOR:
+      case DUMP:
+        return Response.absorbedAll(in);
+      default:
+        return Response.balance(in, Map.of("out", in), List.of());
+    }
+  }
+
+  private static Response through(Beam in, String port, Jones j) {
+    return Response.balance(in, Map.of(port, in.with(in.light().transform(j))), List.of());
+  }
+
+  /** Retardance at the beam's wavelength: from the birefringence when the material is known, else scaled as 1/λ. */
+  Jones waveplate(ResolvedElement e, double wavelength) {
+    Value.Group r = e.param("retardance").orElseThrow();
+    double design = r.number("retardance").orElse(0);
+    OptionalDouble designWavelength = r.number("wavelength");
+    double waves = design / (2 * Math.PI);
+    Optional<String> order = e.param("order").flatMap(g -> g.word("order"));
+    if (order.isPresent() && order.get().equals("multi")) {
+      waves += e.number("order", "m").orElse(0);
+    }
+    double retardance = design;
+    Optional<Symbol> material = e.param("material").flatMap(g -> g.slot("material")).map(v -> ((Value.Ref) v).symbol());
+    OptionalDouble thickness = e.number("thickness", "thickness");
+    if (material.isPresent()) {
+      OptionalDouble dn = materials.birefringence(material.get(), wavelength);
+      if (dn.isPresent() && dn.getAsDouble() != 0) {
+        double d;
+        if (thickness.isPresent()) {
+          d = thickness.getAsDouble();
+        } else {
+          double l0 = designWavelength.orElse(wavelength);
+          d = waves * l0 / Math.abs(materials.birefringence(material.get(), l0).orElse(dn.getAsDouble()));
+        }
+        retardance = 2 * Math.PI * Math.abs(dn.getAsDouble()) * d / wavelength;
+        return Jones.retarder(retardance, e.number("fast_axis", "angle").orElse(0));
+      }
+    }
+    if (designWavelength.isPresent()) {
+      retardance = 2 * Math.PI * waves * designWavelength.getAsDouble() / wavelength;
+    }
+    return Jones.retarder(retardance, e.number("fast_axis", "angle").orElse(0));
+  }
+
+  private double coatedPairTransmission(ResolvedElement e, Beam in) {
+    if (e.param("coating").isEmpty()) {
+      return 1;
+    }
+    Complex outside = materials.index(in.medium(), in.wavelength());
+    Complex inside = e.param("material").flatMap(g -> g.slot("material"))
+        .map(v -> materials.index(((Value.Ref) v).symbol(), in.wavelength())).orElse(new Complex(1.5, 0));
+    SurfaceModel.Powers s = surfaces.surface(e, outside, inside, 0, in.wavelength());
+    return s.ts() * s.ts();
+  }
+
+  private Response splitter(ResolvedElement e, Beam in, double plane) {
+    double aoi = e.number("aoi", "angle").orElse(Math.PI / 4);
+    double tp;
+    double ts;
+    double rs;
+    double rp;
+    if (e.has("polarizing")) {
+      tp = e.number("transmit_p", "t").orElse(DEFAULT_PBS_TP);
+      double er = e.number("extinction", "ratio").orElse(DEFAULT_PBS_EXTINCTION);
+      ts = e.number("transmit_s", "t").orElse(tp / er);
+      rs = e.number("reflect_s", "r").orElse(Math.min(DEFAULT_PBS_RS, 1 - ts));
+      rp = e.number("reflect_p", "r").orElse(1 - tp);
+    } else {
+      double ratio = e.number("ratio", "reflected").orElse(0.5);
+      rs = e.number("reflect_s", "r").orElse(ratio);
+      rp = e.number("reflect_p", "r").orElse(ratio);
+      ts = e.number("transmit_s", "t").orElse(1 - rs);
+      tp = e.number("transmit_p", "t").orElse(1 - rp);
+    }
+    Coherency through = in.light().transform(Jones.transmission(Complex.ONE, Complex.ONE, plane, clamp(tp), clamp(ts)));
+    Jones reflect = Jones.reflection(new Complex(Math.sqrt(clamp(rp)), 0), new Complex(-Math.sqrt(clamp(rs)), 0), plane);
+    Beam reflected = in.with(in.light().transform(reflect), in.frame().reflect(aoi, plane));
+    return Response.balance(in, Map.of("through", in.with(through), "reflected", reflected), List.of());
+  }
+
+  private Response mirror(ResolvedElement e, Beam in, double plane) {
+    double aoi = e.number("aoi", "angle").orElse(0);
+    Jones j;
+    Optional<Value.Group> metal = e.param("metal");
+    OptionalDouble r = e.number("reflectance", "r");
+    Optional<Value.Group> coating = e.param("coating");
+    if (r.isEmpty() && coating.isPresent() && coating.get().word("type").isPresent()) {
+      r = coating.get().number("reflectance");
+    }
+    Complex outside = materials.index(in.medium(), in.wavelength());
+    if (r.isPresent()) {
+      double amp = Math.sqrt(r.getAsDouble());
+      j = Jones.reflection(new Complex(amp, 0), new Complex(-amp, 0), plane);
+    } else {
+      Complex substrate = metal.flatMap(g -> g.slot("metal")).map(v -> materials.index(((Value.Ref) v).symbol(), in.wavelength()))
+          .orElse(new Complex(1.5, 0));
+      Fresnel.Coefficients c;
+      if (coating.isPresent() && coating.get().slot("stack").orElse(null) instanceof Value.Ref stack) {
+        c = jonquil.optics.ThinFilm.stack(outside, surfaces.layers(stack.symbol(), in.wavelength()), substrate, aoi, in.wavelength());
+      } else {
+        c = Fresnel.at(outside, substrate, aoi);
+      }
+      j = Jones.reflection(c.rp(), c.rs(), plane);
+    }
+    return Response.balance(in, Map.of("out", in.with(in.light().transform(j), in.frame().reflect(aoi, plane))), List.of());
+  }
+
+  /**
+   * A plate: two surfaces and the bulk, with the multiple reflections between them summed
+   * incoherently (the usual model for a plate much thicker than the coherence length).
+   */
+  private Response window(ResolvedElement e, Beam in, double plane) {
+    double aoi = e.number("aoi", "angle").orElse(0);
+    double wl = in.wavelength();
+    Symbol glass = ((Value.Ref) e.param("material").orElseThrow().slot("material").orElseThrow()).symbol();
+    Medium after = e.param("then").flatMap(g -> g.slot("medium")).map(v -> Medium.of(((Value.Ref) v).symbol()))
+        .orElse(in.medium());
+    // Surfaces use the real indices; the glass's (weak) absorption acts in the bulk through τ.
+    Complex n1 = real(materials.index(in.medium(), wl));
+    Complex ng = real(materials.index(glass, wl));
+    Complex n3 = real(materials.index(after, wl));
+    SurfaceModel.Powers front = surfaces.surface(e, n1, ng, aoi, wl);
+    double sinInside = n1.getReal() * Math.sin(aoi) / ng.getReal();
+    double inside = Math.asin(Math.max(-1, Math.min(1, sinInside)));
+    SurfaceModel.Powers back = surfaces.surface(e, ng, n3, inside, wl);
+    double thickness = e.number("thickness", "thickness").orElse(0);
+    double tau = Math.exp(-materials.absorption(Medium.of(glass), wl) * thickness / Math.cos(inside));
+    double[] tS = plate(front.rs(), front.ts(), back.rs(), back.ts(), tau);
+    double[] tP = plate(front.rp(), front.tp(), back.rp(), back.tp(), tau);
+    Coherency through = in.light().transform(Jones.transmission(Complex.ONE, Complex.ONE, plane, tP[0], tS[0]));
+    Jones reflect = Jones.reflection(new Complex(Math.sqrt(tP[1]), 0), new Complex(-Math.sqrt(tS[1]), 0), plane);
+    Beam reflected = in.with(in.light().transform(reflect), in.frame().reflect(aoi, plane));
+    return Response.balance(in, Map.of("through", in.with(through).in(after), "reflected", reflected), List.of());
+  }
+
+  /** Incoherent plate: {transmittance, reflectance} from the two surfaces and the internal transmittance τ. */
+  static double[] plate(double r1, double t1, double r2, double t2, double tau) {
+    double denominator = 1 - r1 * r2 * tau * tau;
+    double t = t1 * t2 * tau / denominator;
+    double r = r1 + t1 * t1 * r2 * tau * tau / denominator;
+    return new double[] {t, r};
+  }
+
+  private Response interfaceSurface(ResolvedElement e, Beam in, double plane) {
+    double aoi = e.number("aoi", "angle").orElse(0);
+    double wl = in.wavelength();
+    Symbol from = ((Value.Ref) e.param("from").orElseThrow().slot("material").orElseThrow()).symbol();
+    Symbol to = ((Value.Ref) e.param("to").orElseThrow().slot("material").orElseThrow()).symbol();
+    Complex n1 = materials.index(from, wl);
+    Complex n2 = materials.index(to, wl);
+    Fresnel.Coefficients c = Fresnel.at(n1, n2, aoi);
+    SurfaceModel.Powers powers = surfaces.surface(e, n1, n2, aoi, wl);
+    Coherency through = in.light().transform(Jones.transmission(Complex.ONE, Complex.ONE, plane, powers.tp(), powers.ts()));
+    Jones reflect = e.param("coating").isPresent()
+        ? Jones.reflection(new Complex(Math.sqrt(powers.rp()), 0), new Complex(-Math.sqrt(powers.rs()), 0), plane)
+        : Jones.reflection(c.rp(), c.rs(), plane);
+    Beam reflected = in.with(in.light().transform(reflect), in.frame().reflect(aoi, plane));
+    return Response.balance(in, Map.of("through", in.with(through).in(Medium.of(to)), "reflected", reflected), List.of());
+  }
+
+  /** A thin lens: two surfaces at normal incidence; their reflections head back as ghosts. */
+  private Response lens(ResolvedElement e, Beam in) {
+    Optional<Symbol> glass = e.param("material").flatMap(g -> g.slot("material")).map(v -> ((Value.Ref) v).symbol());
+    if (glass.isEmpty() && e.param("coating").isEmpty()) {
+      return Response.balance(in, Map.of("out", in), List.of()); // an ideal lens: nothing known about its surfaces
+    }
+    double wl = in.wavelength();
+    Complex outside = real(materials.index(in.medium(), wl));
+    Complex n = glass.map(g -> real(materials.index(g, wl))).orElse(new Complex(1.5, 0));
+    SurfaceModel.Powers s1 = surfaces.surface(e, outside, n, 0, wl);
+    double[] pair = plate(s1.rs(), s1.ts(), s1.rs(), s1.ts(), 1);
+    Beam out = in.with(in.light().scaled(pair[0]));
+    Beam back = in.with(in.light().scaled(pair[1]), in.frame().reflect(0, 0));
+    return Response.balance(in, Map.of("out", out), List.of(new Ghost("surface reflections", back, true)));
+  }
+
+  /**
+   * A total-internal-reflection retarder: each reflection adds the TIR phase difference
+   * between p and s; with an even number of reflections the beam leaves parallel to its
+   * entry, in the same frame. The uncoated faces lose their Fresnel reflections as ghosts.
+   */
+  private Response rhomb(ResolvedElement e, Beam in) {
+    double wl = in.wavelength();
+    Symbol glass = ((Value.Ref) e.param("material").orElseThrow().slot("material").orElseThrow()).symbol();
+    Complex n = real(materials.index(glass, wl));
+    Complex outside = real(materials.index(in.medium(), wl));
+    double aoi = e.number("aoi", "angle").orElse(0);
+    int reflections = (int) e.number("reflections", "n").orElse(2);
+    Fresnel.Coefficients tir = Fresnel.at(n, outside, aoi);
+    Complex rp = tir.rp().pow(reflections);
+    Complex rs = tir.rs().pow(reflections);
+    if (reflections % 2 == 1) {
+      rs = rs.negate(); // an odd count leaves the frame mirrored; undo the s flip to keep the entry frame
+    }
+    Jones j = Jones.reflection(rp, rs, e.number("axis", "angle").orElse(0));
+    SurfaceModel.Powers face = SurfaceModel.Powers.of(Fresnel.at(outside, n, 0));
+    double[] pair = plate(face.rs(), face.ts(), face.rs(), face.ts(), 1);
+    Beam out = in.with(in.light().transform(j).scaled(pair[0]));
+    Beam back = in.with(in.light().scaled(pair[1]), in.frame().reflect(0, 0));
+    return Response.balance(in, Map.of("out", out), List.of(new Ghost("face reflections", back, true)));
+  }
+
+  /** The real part alone: interfaces of weakly absorbing glass are treated as lossless. */
+  private static Complex real(Complex n) {
+    return new Complex(n.getReal(), 0);
+  }
+
+  private static double clamp(double v) {
+    return Math.max(0, Math.min(1, v));
+  }
+}

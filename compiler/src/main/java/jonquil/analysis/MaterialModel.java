@@ -1,0 +1,142 @@
+package jonquil.analysis;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import jonquil.optics.material.CatalogMaterial;
+import jonquil.optics.material.MaterialCatalog;
+import jonquil.optics.material.Uniaxial;
+import jonquil.optics.material.WavelengthRange;
+import jonquil.resolve.ElementKind;
+import jonquil.resolve.ResolvedElement;
+import jonquil.resolve.ResolvedModel;
+import jonquil.resolve.Symbol;
+import jonquil.resolve.Value;
+import org.apache.commons.math3.complex.Complex;
+
+/**
+ * Refractive indices of the spec's materials at a wavelength: declared ones from their
+ * parameters, catalog ones from their published formulas (absolute indices). Records
+ * every use outside a formula's valid range so the analysis can warn about it.
+ */
+final class MaterialModel {
+  /** A material evaluated outside the wavelengths its data cover. */
+  record OutOfRange(Symbol material, double wavelength, WavelengthRange valid) {}
+
+  private static final Complex AIR_FALLBACK = new Complex(1.0, 0);
+
+  private final ResolvedModel model;
+  private final List<OutOfRange> outOfRange = new ArrayList<>();
+
+  MaterialModel(ResolvedModel model) {
+    this.model = model;
+  }
+
+  List<OutOfRange> outOfRange() {
+    return outOfRange;
+  }
+
+  /** The complex index n + iκ of a medium; the ambient medium is standard air. */
+  Complex index(Medium medium, double wavelength) {
+    return medium.material().map(m -> index(m, wavelength)).orElseGet(() -> catalogIndex("air", null, wavelength));
+  }
+
+  Complex index(Symbol material, double wavelength) {
+    if (material.isCatalog()) {
+      return catalogIndex(material.name(), material, wavelength);
+    }
+    Optional<ResolvedElement> e = model.element(material);
+    if (e.isEmpty() || e.get().kind() != ElementKind.MATERIAL) {
+      return AIR_FALLBACK;
+    }
+    ResolvedElement m = e.get();
+    Optional<Value.Group> catalog = m.param("catalog");
+    if (catalog.isPresent() && catalog.get().slot("name").orElse(null) instanceof Value.Ref ref) {
+      return index(ref.symbol(), wavelength);
+    }
+    OptionalDouble n = m.number("index", "n");
+    if (n.isPresent()) {
+      return new Complex(n.getAsDouble(), m.number("k", "k").orElse(0));
+    }
+    OptionalDouble no = m.number("ordinary", "n_o");
+    if (no.isPresent()) {
+      return new Complex(no.getAsDouble(), 0);
+    }
+    Optional<Value.Group> cauchy = m.param("cauchy");
+    if (cauchy.isPresent()) {
+      double a = cauchy.get().number("a").orElse(1.5);
+      double b = cauchy.get().number("b").orElse(0);
+      double c = cauchy.get().number("c").orElse(0);
+      double l2 = wavelength * wavelength;
+      return new Complex(a + b / l2 + c / (l2 * l2), 0);
+    }
+    Optional<Value.Group> sellmeier = m.param("sellmeier");
+    if (sellmeier.isPresent()) {
+      double l2 = wavelength * wavelength;
+      double n2 = 1;
+      for (Value.Group term : sellmeier.get().items()) {
+        n2 += term.number("b").orElse(0) * l2 / (l2 - term.number("c").orElse(0));
+      }
+      return new Complex(Math.sqrt(Math.max(n2, 0)), 0);
+    }
+    return AIR_FALLBACK; // a 'table' material: tabulated files are not read by this version (see DEVELOPERS.md)
+  }
+
+  /** Birefringence n_e − n_o of a material at a wavelength, when it has one. */
+  OptionalDouble birefringence(Symbol material, double wavelength) {
+    if (material.isCatalog()) {
+      Optional<CatalogMaterial> entry = MaterialCatalog.lookup(material.name());
+      if (entry.isPresent() && entry.get().uniaxial().isPresent()) {
+        Uniaxial u = entry.get().uniaxial().get();
+        check(material, entry.get(), wavelength);
+        return OptionalDouble.of(u.birefringence(wavelength));
+      }
+      return OptionalDouble.empty();
+    }
+    Optional<ResolvedElement> e = model.element(material);
+    if (e.isPresent()) {
+      OptionalDouble no = e.get().number("ordinary", "n_o");
+      OptionalDouble ne = e.get().number("extraordinary", "n_e");
+      if (no.isPresent() && ne.isPresent()) {
+        return OptionalDouble.of(ne.getAsDouble() - no.getAsDouble());
+      }
+      Optional<Value.Group> catalog = e.get().param("catalog");
+      if (catalog.isPresent() && catalog.get().slot("name").orElse(null) instanceof Value.Ref ref) {
+        return birefringence(ref.symbol(), wavelength);
+      }
+    }
+    return OptionalDouble.empty();
+  }
+
+  /** Power absorption coefficient (1/m) of a material: declared, or from its extinction coefficient κ. */
+  double absorption(Medium medium, double wavelength) {
+    if (medium.material().isEmpty()) {
+      return 0;
+    }
+    Symbol s = medium.material().get();
+    Optional<ResolvedElement> e = s.isCatalog() ? Optional.empty() : model.element(s);
+    OptionalDouble declared = e.map(m -> m.number("absorption", "alpha")).orElse(OptionalDouble.empty());
+    if (declared.isPresent()) {
+      return declared.getAsDouble();
+    }
+    double kappa = index(s, wavelength).getImaginary();
+    return 4 * Math.PI * kappa / wavelength;
+  }
+
+  private Complex catalogIndex(String name, Symbol symbol, double wavelength) {
+    Optional<CatalogMaterial> entry = MaterialCatalog.lookup(name);
+    if (entry.isEmpty()) {
+      return AIR_FALLBACK;
+    }
+    if (symbol != null) {
+      check(symbol, entry.get(), wavelength);
+    }
+    return entry.get().absoluteIndex(wavelength);
+  }
+
+  private void check(Symbol symbol, CatalogMaterial entry, double wavelength) {
+    entry.valid().filter(r -> !r.contains(wavelength))
+        .ifPresent(r -> outOfRange.add(new OutOfRange(symbol, wavelength, r)));
+  }
+}

@@ -1,0 +1,196 @@
+package jonquil.analysis;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import jonquil.optics.Coherency;
+import jonquil.resolve.Category;
+import jonquil.resolve.ElementKind;
+import jonquil.resolve.ResolvedElement;
+import jonquil.resolve.ResolvedModel;
+import jonquil.resolve.ResolvedTrain;
+import jonquil.resolve.Symbol;
+
+/**
+ * Walks the beam-path graph from every source, element by element, and books every
+ * watt: at each port, absorbed, stopped by a dump or detector, observed at a probe that
+ * ends a path, or stray. The graph is a tree (each element sits in one place and each
+ * port feeds at most one path), so a depth-first walk visits every beam once.
+ */
+final class Propagator {
+  private final ResolvedModel model;
+  private final ElementOptics optics;
+  private final MaterialModel materials;
+
+  private final Map<String, ResolvedTrain.BeamPath> branches = new HashMap<>();
+  private final Map<String, Coherency> portLight = new LinkedHashMap<>();
+  private final Map<String, PortValue> ports = new LinkedHashMap<>();
+  private final Map<String, double[]> budgetTotals = new LinkedHashMap<>();
+  private final Map<String, Map<String, Double>> budgetPorts = new LinkedHashMap<>();
+  private final List<StrayBeam> stray = new ArrayList<>();
+  private double sourcePower;
+  private double absorbed;
+  private double stopped;
+  private double observed;
+
+  Propagator(ResolvedModel model, ElementOptics optics, MaterialModel materials) {
+    this.model = model;
+    this.optics = optics;
+    this.materials = materials;
+  }
+
+  TrainSolution solve(OptionalDouble wavelengthOverride) {
+    for (ResolvedTrain train : model.trains()) {
+      for (ResolvedTrain.BeamPath path : train.paths()) {
+        path.branchFrom().ifPresent(b -> branches.put(b.element().name() + "." + b.port(), path));
+      }
+    }
+    for (ResolvedTrain train : model.trains()) {
+      for (ResolvedTrain.BeamPath path : train.paths()) {
+        if (path.branchFrom().isPresent() || path.steps().isEmpty()
+            || !(path.steps().get(0) instanceof ResolvedTrain.Element start)) {
+          continue;
+        }
+        Optional<ResolvedElement> source = model.element(start.symbol());
+        if (source.isEmpty() || source.get().kind() != ElementKind.SOURCE) {
+          continue;
+        }
+        List<Beam> beams = SourceBeams.of(source.get(), wavelengthOverride);
+        double emitted = beams.stream().mapToDouble(Beam::power).sum();
+        sourcePower += emitted;
+        record(start.symbol().name(), "out", start, beams);
+        portAlias(start.symbol().name(), "out");
+        walk(path, 1, beams);
+      }
+    }
+    List<ElementBudget> budgets = new ArrayList<>();
+    budgetTotals.forEach((name, t) -> budgets.add(new ElementBudget(name, t[0], budgetPorts.get(name), t[1], t[2])));
+    return new TrainSolution(ports, budgets, stray, sourcePower, absorbed, stopped, observed);
+  }
+
+  private void walk(ResolvedTrain.BeamPath path, int from, List<Beam> arriving) {
+    List<Beam> beams = arriving;
+    ResolvedTrain.Element last = null;
+    for (int i = from; i < path.steps().size(); i++) {
+      ResolvedTrain.Step step = path.steps().get(i);
+      if (step instanceof ResolvedTrain.Gap gap) {
+        beams = across(gap, beams);
+        continue;
+      }
+      ResolvedTrain.Element placed = (ResolvedTrain.Element) step;
+      last = placed;
+      Optional<ResolvedElement> element = model.element(placed.symbol());
+      if (element.isEmpty()) {
+        return;
+      }
+      beams = pass(element.get(), placed, beams);
+      if (placed.symbol().category() == Category.TERMINAL) {
+        return;
+      }
+    }
+    if (last == null || beams.isEmpty()) {
+      return;
+    }
+    double leaving = beams.stream().mapToDouble(Beam::power).sum();
+    if (last.symbol().category() == Category.PROBE) {
+      observed += leaving;
+    } else {
+      String origin = last.symbol().name() + "." + last.exitPort();
+      stray.add(new StrayBeam(origin, "leaves '" + origin + "' at the end of a path", leaving, false,
+          last.symbol().file(), last.range()));
+    }
+  }
+
+  private List<Beam> across(ResolvedTrain.Gap gap, List<Beam> beams) {
+    List<Beam> out = new ArrayList<>();
+    for (Beam b : beams) {
+      Beam in = gap.medium().map(m -> b.in(Medium.of(m))).orElse(b);
+      double t = Math.exp(-materials.absorption(in.medium(), in.wavelength()) * gap.length());
+      absorbed += in.power() * (1 - t);
+      out.add(in.with(in.light().scaled(t)));
+    }
+    return out;
+  }
+
+  /** One element acting on every arriving line; continues with the beams at the exit port. */
+  private List<Beam> pass(ResolvedElement element, ResolvedTrain.Element placed, List<Beam> beams) {
+    String name = placed.symbol().name();
+    double[] totals = budgetTotals.computeIfAbsent(name, k -> new double[3]);
+    Map<String, Double> byPort = budgetPorts.computeIfAbsent(name, k -> new LinkedHashMap<>());
+    Map<String, List<Beam>> atPorts = new LinkedHashMap<>();
+    for (String port : element.kind().ports()) {
+      atPorts.put(port, new ArrayList<>());
+    }
+    for (Beam b : beams) {
+      totals[0] += b.power();
+      Response r = optics.respond(element, b);
+      totals[1] += r.absorbed();
+      if (placed.symbol().category() == Category.TERMINAL) {
+        stopped += r.absorbed();
+      } else {
+        absorbed += r.absorbed();
+      }
+      r.ports().forEach((port, beam) -> atPorts.computeIfAbsent(port, k -> new ArrayList<>()).add(beam));
+      for (Ghost g : r.ghosts()) {
+        totals[2] += g.beam().power();
+        stray.add(new StrayBeam(name, g.label() + " of '" + name + "'" + (g.backward() ? ", heading back" : ""),
+            g.beam().power(), g.backward(), placed.symbol().file(), placed.range()));
+      }
+    }
+    if (placed.symbol().category() == Category.TERMINAL) {
+      record(name, "", placed, beams);
+      return List.of();
+    }
+    for (Map.Entry<String, List<Beam>> e : atPorts.entrySet()) {
+      byPort.merge(e.getKey(), e.getValue().stream().mapToDouble(Beam::power).sum(), Double::sum);
+      record(name, e.getKey(), placed, e.getValue());
+    }
+    portAlias(name, placed.exitPort());
+    for (Map.Entry<String, List<Beam>> e : atPorts.entrySet()) {
+      if (e.getKey().equals(placed.exitPort())) {
+        continue;
+      }
+      String key = name + "." + e.getKey();
+      ResolvedTrain.BeamPath branch = branches.get(key);
+      if (branch != null) {
+        walk(branch, 0, e.getValue());
+      } else {
+        double p = e.getValue().stream().mapToDouble(Beam::power).sum();
+        Vec3 arriving = beams.isEmpty() ? Vec3.Z : beams.get(0).frame().k();
+        boolean backward = e.getValue().stream().anyMatch(b -> b.frame().k().dot(arriving) < -0.999);
+        stray.add(new StrayBeam(key, "leaves '" + key + "', which no path follows", p, backward,
+            placed.symbol().file(), placed.range()));
+      }
+    }
+    return atPorts.getOrDefault(placed.exitPort(), List.of());
+  }
+
+  private void record(String element, String port, ResolvedTrain.Element placed, List<Beam> beams) {
+    Coherency sum = Coherency.ZERO;
+    boolean vertical = false;
+    for (Beam b : beams) {
+      sum = sum.plus(b.light().inFrameRotatedBy(b.frame().tableAngle()));
+      vertical |= b.frame().vertical();
+    }
+    String key = port.isEmpty() ? element : element + "." + port;
+    Coherency total = portLight.merge(key, sum, Coherency::plus);
+    ports.put(key, new PortValue(element, port, placed.symbol().file(), placed.range(), total, vertical));
+  }
+
+  /** "element" alone names the port its path leaves by. */
+  private void portAlias(String element, String exitPort) {
+    PortValue exit = ports.get(element + "." + exitPort);
+    if (exit != null) {
+      ports.put(element, exit);
+    }
+  }
+
+  /** Symbols are looked up by name in the root scope; kept for readability of callers. */
+  static String key(Symbol s, Optional<String> port) {
+    return port.map(p -> s.name() + "." + p).orElse(s.name());
+  }
+}

@@ -1,0 +1,79 @@
+package jonquil.analysis;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import jonquil.optics.Coherency;
+import jonquil.optics.Handedness;
+import jonquil.resolve.ResolvedElement;
+import jonquil.resolve.Value;
+
+/**
+ * The beams a source emits: one per laser line, with its average power and its stated
+ * polarization. A source with no stated polarization is taken as unpolarized, the
+ * assumption that claims nothing about extinction or azimuth.
+ */
+final class SourceBeams {
+  private SourceBeams() {}
+
+  static List<Beam> of(ResolvedElement source, OptionalDouble wavelengthOverride) {
+    List<double[]> lines = new ArrayList<>();
+    if (!source.all("line").isEmpty()) {
+      for (Value.Group g : source.all("line")) {
+        lines.add(new double[] {g.number("wavelength").orElse(0), g.number("power").orElse(0)});
+      }
+    } else {
+      lines.add(new double[] {source.number("wavelength", "wavelength").orElse(0), averagePower(source)});
+    }
+    List<Beam> beams = new ArrayList<>();
+    for (int i = 0; i < lines.size(); i++) {
+      double wavelength = wavelengthOverride.orElse(lines.get(i)[0]);
+      Coherency light = state(source.param("polarization"), lines.get(i)[1]);
+      beams.add(new Beam(source.symbol(), i, wavelength, light, BeamFrame.SOURCE, Medium.AMBIENT));
+    }
+    return beams;
+  }
+
+  /** Average power: stated, or pulse energy × repetition rate; a single-shot source averages to zero. */
+  static double averagePower(ResolvedElement source) {
+    OptionalDouble power = source.number("power", "power");
+    if (power.isPresent()) {
+      return power.getAsDouble();
+    }
+    OptionalDouble energy = source.number("pulse_energy", "energy");
+    OptionalDouble rate = source.number("repetition_rate", "rate");
+    return energy.isPresent() && rate.isPresent() ? energy.getAsDouble() * rate.getAsDouble() : 0;
+  }
+
+  /** The coherency matrix of a stated polarization state ('partial 0.9 linear 0 deg' mixes in unpolarized light). */
+  static Coherency state(Optional<Value.Group> written, double power) {
+    if (written.isEmpty()) {
+      return Coherency.unpolarized(power);
+    }
+    Value.Group g = written.get();
+    if (g.word("form_mix").isPresent()) {
+      double dop = g.number("dop").orElse(1);
+      return pure(g, dop * power).plus(Coherency.unpolarized((1 - dop) * power));
+    }
+    return pure(g, power);
+  }
+
+  private static Coherency pure(Value.Group g, double power) {
+    String form = g.word("form").orElse("unpolarized");
+    Handedness hand = g.word("handedness").map(h -> h.equals("left") ? Handedness.LEFT : Handedness.RIGHT)
+        .orElse(Handedness.RIGHT);
+    switch (form) {
+      case "linear":
+        return Coherency.linear(g.number("azimuth").orElse(0), power);
+      case "circular":
+        return Coherency.circular(hand, power);
+      case "elliptical": {
+        double chi = Math.atan(g.number("axis_ratio").orElse(0)) * (hand == Handedness.LEFT ? -1 : 1);
+        return Coherency.elliptical(g.number("azimuth").orElse(0), chi, power);
+      }
+      default:
+        return Coherency.unpolarized(power);
+    }
+  }
+}

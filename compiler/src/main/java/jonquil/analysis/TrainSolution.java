@@ -1,0 +1,43 @@
+package jonquil.analysis;
+
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+
+/**
+ * The power and polarization everywhere along the trains of one spec, and the budget
+ * that accounts for every watt: source power = absorbed + stopped + stray.
+ */
+public record TrainSolution(
+    Map<String, PortValue> ports,
+    List<ElementBudget> budgets,
+    List<StrayBeam> stray,
+    double sourcePower,
+    double absorbed,
+    double stopped,
+    double observedAtPathEnds) {
+
+  public TrainSolution {
+    ports = Map.copyOf(ports);
+    budgets = List.copyOf(budgets);
+    stray = List.copyOf(stray);
+  }
+
+  public Optional<PortValue> port(String key) {
+    return Optional.ofNullable(ports.get(key));
+  }
+
+  public double strayPower() {
+    return stray.stream().mapToDouble(StrayBeam::power).sum();
+  }
+
+  public double backReflected() {
+    return stray.stream().filter(StrayBeam::backward).mapToDouble(StrayBeam::power).sum();
+  }
+
+  /** |source − accounted| / source: zero up to rounding when the budget closes. */
+  public double conservationError() {
+    double accounted = absorbed + stopped + observedAtPathEnds + strayPower();
+    return sourcePower == 0 ? Math.abs(accounted) : Math.abs(sourcePower - accounted) / sourcePower;
+  }
+}

@@ -1,0 +1,102 @@
+package jonquil.cli;
+
+import com.google.gson.JsonArray;
+import com.google.gson.JsonElement;
+import com.google.gson.JsonNull;
+import com.google.gson.JsonObject;
+import com.google.gson.JsonPrimitive;
+import java.nio.file.Path;
+import java.util.Map;
+import jonquil.analysis.ElementBudget;
+import jonquil.analysis.PortValue;
+import jonquil.analysis.StrayBeam;
+import jonquil.analysis.TrainSolution;
+import jonquil.optics.Coherency;
+import jonquil.optics.Handedness;
+
+/**
+ * The computed values of the JSON report: light at every port, the power budget of every
+ * element, the stray beams and the conservation check, per checked root file. SI units;
+ * angles in degrees as the field names say; azimuths against the table frame.
+ */
+final class ValuesJson {
+  static final String HANDEDNESS_VIEWPOINT = "as seen by the receiver, looking back towards the source";
+
+  private ValuesJson() {}
+
+  static JsonArray build(CheckRun run) {
+    JsonArray out = new JsonArray();
+    for (Map.Entry<Path, TrainSolution> e : run.result().solutions().entrySet()) {
+      TrainSolution s = e.getValue();
+      JsonObject o = new JsonObject();
+      o.addProperty("path", PathText.relative(run.root(), e.getKey()));
+      JsonArray ports = new JsonArray();
+      s.ports().forEach((key, value) -> {
+        if (!key.equals(value.key())) {
+          return; // aliases ("element" for its exit port) are not repeated
+        }
+        ports.add(port(value));
+      });
+      o.add("ports", ports);
+      JsonArray budget = new JsonArray();
+      for (ElementBudget b : s.budgets()) {
+        JsonObject j = new JsonObject();
+        j.addProperty("element", b.element());
+        j.add("in_W", number(b.in()));
+        JsonObject outs = new JsonObject();
+        b.out().forEach((port, w) -> outs.add(port, number(w)));
+        j.add("out_W", outs);
+        j.add("absorbed_W", number(b.absorbed()));
+        j.add("ghosts_W", number(b.ghosts()));
+        budget.add(j);
+      }
+      o.add("budget", budget);
+      JsonArray stray = new JsonArray();
+      for (StrayBeam b : s.stray()) {
+        JsonObject j = new JsonObject();
+        j.addProperty("origin", b.origin());
+        j.addProperty("description", b.description());
+        j.add("power_W", number(b.power()));
+        j.addProperty("towards_source", b.backward());
+        stray.add(j);
+      }
+      o.add("stray", stray);
+      JsonObject conservation = new JsonObject();
+      conservation.add("source_W", number(s.sourcePower()));
+      conservation.add("absorbed_W", number(s.absorbed()));
+      conservation.add("stopped_W", number(s.stopped()));
+      conservation.add("observed_at_path_ends_W", number(s.observedAtPathEnds()));
+      conservation.add("stray_W", number(s.strayPower()));
+      conservation.add("relative_error", number(s.conservationError()));
+      o.add("conservation", conservation);
+      out.add(o);
+    }
+    return out;
+  }
+
+  private static JsonObject port(PortValue v) {
+    Coherency c = v.light();
+    JsonObject j = new JsonObject();
+    j.addProperty("element", v.element());
+    j.addProperty("port", v.port());
+    j.add("power_W", number(c.power()));
+    JsonArray stokes = new JsonArray();
+    for (double s : c.stokes()) {
+      stokes.add(number(s));
+    }
+    j.add("stokes_W", stokes);
+    j.add("dop", number(c.dop()));
+    j.add("azimuth_deg", number(Math.toDegrees(c.azimuth())));
+    j.add("ellipticity_deg", number(Math.toDegrees(c.ellipticityAngle())));
+    Handedness h = c.handedness();
+    j.addProperty("handedness", h.name().toLowerCase(java.util.Locale.ROOT));
+    j.addProperty("handedness_viewpoint", HANDEDNESS_VIEWPOINT);
+    j.add("extinction_ratio", number(c.extinctionRatio()));
+    j.addProperty("azimuth_frame", v.vertical() ? "carried (the beam runs vertically)" : "table");
+    return j;
+  }
+
+  private static JsonElement number(double v) {
+    return Double.isFinite(v) ? new JsonPrimitive(v) : JsonNull.INSTANCE;
+  }
+}
