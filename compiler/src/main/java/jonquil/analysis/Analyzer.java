@@ -40,8 +40,10 @@ public final class Analyzer {
     for (ResolvedRequirement r : model.requirements()) {
       RequirementEvaluator.Verdict v = RequirementEvaluator.evaluate(r, solve);
       outcomes.add(outcome(r, v));
-      if (v.evaluated() && !v.pass()) {
-        diagnostics.add(Diagnostic.of(DiagnosticCode.REQUIREMENT_FAILED, r.file(), r.syntax().range(), failure(r, v)));
+      if (v.evaluated()) {
+        diagnostics.add(v.pass()
+            ? Diagnostic.of(DiagnosticCode.REQUIREMENT_MET, r.file(), r.syntax().range(), verdict("requirement met", r, v))
+            : Diagnostic.of(DiagnosticCode.REQUIREMENT_FAILED, r.file(), r.syntax().range(), verdict("requirement not met", r, v)));
       }
     }
     for (StrayBeam s : solution.stray()) {
@@ -74,10 +76,10 @@ public final class Analyzer {
         OptionalDouble.of(v.bound()), OptionalDouble.of(v.margin()), v.unit(), v.text());
   }
 
-  private static String failure(ResolvedRequirement r, RequirementEvaluator.Verdict v) {
+  private static String verdict(String lead, ResolvedRequirement r, RequirementEvaluator.Verdict v) {
     Dimension dim = v.unit().equals("W") ? Dimension.POWER : v.unit().equals("rad") ? Dimension.ANGLE : Dimension.DIMENSIONLESS;
-    return "requirement not met: " + r.measure().map(m -> m.word()).orElse("value") + " is "
-        + QuantityFormat.format(v.value(), dim) + (v.text().isEmpty() ? "" : " " + v.text()) + ", bound "
+    return lead + ": " + r.measure().map(m -> m.word()).orElse("value") + " is "
+        + QuantityFormat.format(v.value(), dim) + (v.text().isEmpty() ? "" : " (" + v.text() + ")") + ", bound "
         + QuantityFormat.format(v.bound(), dim) + ", margin " + QuantityFormat.format(v.margin(), dim);
   }
 }

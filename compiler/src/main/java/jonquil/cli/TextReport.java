@@ -28,7 +28,10 @@ final class TextReport {
       }
     }
     for (RequirementOutcome r : result.requirements()) {
-      out.println(requirement(run, r));
+      // Evaluated verdicts are already findings (J609 failed, J611 met); list the others.
+      if (r.status() == RequirementStatus.NOT_EVALUATED) {
+        out.println(requirement(run, r));
+      }
     }
     out.println(summary(result));
     out.flush();

@@ -76,6 +76,7 @@ public enum DiagnosticCode {
   TARGET_NOT_PLACED("J607", Severity.WARNING, "A requirement names an element that no beam reaches"),
   UNEXPECTED_PLACE("J608", Severity.ERROR, "A place given to a requirement that takes none"),
   REQUIREMENT_FAILED("J609", Severity.ERROR, "A requirement is not met"),
+  REQUIREMENT_MET("J611", Severity.NOTE, "A requirement is met, with its computed value and margin"),
   STRAY_BEAM("J610", Severity.NOTE, "Light leaves the train without reaching a probe, detector or dump"),
 
   // Limits and internals: J9xx
