@@ -39,6 +39,7 @@ public final class Checker {
     List<RequirementOutcome> requirements = new ArrayList<>();
     Map<Path, ResolvedModel> models = new LinkedHashMap<>();
     Map<Path, TrainSolution> solutions = new LinkedHashMap<>();
+    Map<Path, SourceFile> dataSources = new LinkedHashMap<>();
     for (Path file : files) {
       Path root = file.toAbsolutePath().normalize();
       try {
@@ -53,7 +54,8 @@ public final class Checker {
           found.addAll(parsed.get(p).diagnostics());
         }
         found.addAll(loader.diagnostics());
-        ResolvedModel model = Resolver.resolve(root, loader.closure(), loader.edges());
+        ResolvedModel model = Resolver.resolve(root, loader.closure(), loader.edges(), loader.dataFiles());
+        loader.dataFiles().forEach((p, text) -> dataSources.putIfAbsent(p, new SourceFile(p, text)));
         found.addAll(model.diagnostics());
         diagnostics.addAll(found);
         models.put(root, model);
@@ -75,6 +77,7 @@ public final class Checker {
     }
     Map<Path, SourceFile> sources = new LinkedHashMap<>();
     parsed.forEach((p, r) -> sources.put(p, r.source()));
+    dataSources.forEach(sources::putIfAbsent);
     return new Result(sources, capped(diagnostics), requirements, models, solutions);
   }
 

@@ -32,6 +32,7 @@ final class SpecLoader {
   private final List<Diagnostic> diagnostics = new ArrayList<>();
   private final Map<Path, SpecFile> closure = new LinkedHashMap<>();
   private final Map<Path, List<UseEdge>> edges = new LinkedHashMap<>();
+  private final Map<Path, String> dataFiles = new LinkedHashMap<>();
 
   SpecLoader(Workspace workspace, Map<Path, ParseResult> parsed) {
     this.workspace = workspace;
@@ -61,8 +62,38 @@ final class SpecLoader {
     return diagnostics;
   }
 
+  /** Data files named by the specs (n,k tables) that exist inside the project, with their text. */
+  Map<Path, String> dataFiles() {
+    return dataFiles;
+  }
+
+  private void readDataFiles(Path file, SpecFile ast) {
+    for (jonquil.syntax.Declaration d : ast.declarations()) {
+      for (jonquil.syntax.Property p : d.properties()) {
+        if (p.key().text().equals("table") && p.args().size() == 1
+            && p.args().get(0) instanceof jonquil.syntax.Arg.StringArg s) {
+          Path target;
+          try {
+            target = file.getParent().resolve(s.value()).normalize();
+          } catch (java.nio.file.InvalidPathException e) {
+            continue;
+          }
+          if (!target.startsWith(workspace.root()) || !workspace.reader().exists(target)) {
+            continue; // the resolver reports it: it knows which table a material needs
+          }
+          try {
+            dataFiles.put(target, workspace.reader().read(target));
+          } catch (IOException | RuntimeException e) {
+            // unreadable: reported as not found by the resolver
+          }
+        }
+      }
+    }
+  }
+
   private void visit(Path file, ParseResult result, Deque<Path> stack) {
     closure.put(file, result.ast());
+    readDataFiles(file, result.ast());
     stack.push(file);
     List<UseEdge> out = new ArrayList<>();
     Set<Path> seenHere = new HashSet<>();

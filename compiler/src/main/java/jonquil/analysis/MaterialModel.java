@@ -51,6 +51,15 @@ final class MaterialModel {
       return AIR_FALLBACK;
     }
     ResolvedElement m = e.get();
+    m.param("valid").ifPresent(v -> {
+      double low = v.slot("from..to").filter(x -> x instanceof Value.Group).map(x -> ((Value.Group) x).number("low"))
+          .orElse(OptionalDouble.empty()).orElse(0);
+      double high = v.slot("from..to").filter(x -> x instanceof Value.Group).map(x -> ((Value.Group) x).number("high"))
+          .orElse(OptionalDouble.empty()).orElse(Double.POSITIVE_INFINITY);
+      if (wavelength < low || wavelength > high) {
+        outOfRange.add(new OutOfRange(material, wavelength, new WavelengthRange(low, high)));
+      }
+    });
     Optional<Value.Group> catalog = m.param("catalog");
     if (catalog.isPresent() && catalog.get().slot("name").orElse(null) instanceof Value.Ref ref) {
       return index(ref.symbol(), wavelength);
@@ -80,7 +89,11 @@ final class MaterialModel {
       }
       return new Complex(Math.sqrt(Math.max(n2, 0)), 0);
     }
-    return AIR_FALLBACK; // a 'table' material: tabulated files are not read by this version (see DEVELOPERS.md)
+    Optional<Value.Group> table = m.param("table");
+    if (table.isPresent() && table.get().slot("rows").orElse(null) instanceof Value.Table t) {
+      return tabulated(material, t, wavelength);
+    }
+    return AIR_FALLBACK; // unreachable for a checked spec: every material kind is covered above
   }
 
   /** Birefringence n_e − n_o of a material at a wavelength, when it has one. */
@@ -122,6 +135,28 @@ final class MaterialModel {
     }
     double kappa = index(s, wavelength).getImaginary();
     return 4 * Math.PI * kappa / wavelength;
+  }
+
+  /** Linear interpolation in n and k; outside the table the end row holds, with a range warning. */
+  private Complex tabulated(Symbol material, Value.Table t, double wavelength) {
+    List<double[]> rows = t.rows();
+    double first = rows.get(0)[0];
+    double last = rows.get(rows.size() - 1)[0];
+    if (wavelength < first || wavelength > last) {
+      outOfRange.add(new OutOfRange(material, wavelength, new WavelengthRange(first, last)));
+      double[] end = wavelength < first ? rows.get(0) : rows.get(rows.size() - 1);
+      return new Complex(end[1], end[2]);
+    }
+    for (int i = 1; i < rows.size(); i++) {
+      double[] a = rows.get(i - 1);
+      double[] b = rows.get(i);
+      if (wavelength <= b[0]) {
+        double f = (wavelength - a[0]) / (b[0] - a[0]);
+        return new Complex(a[1] + f * (b[1] - a[1]), a[2] + f * (b[2] - a[2]));
+      }
+    }
+    double[] end = rows.get(rows.size() - 1);
+    return new Complex(end[1], end[2]);
   }
 
   private Complex catalogIndex(String name, Symbol symbol, double wavelength) {

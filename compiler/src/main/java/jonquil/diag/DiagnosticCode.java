@@ -31,6 +31,8 @@ public enum DiagnosticCode {
   DUPLICATE_USE("J210", Severity.WARNING, "The same file is used twice"),
   USE_UNREADABLE("J211", Severity.ERROR, "A used file cannot be read"),
   UNKNOWN_CATALOG_MATERIAL("J212", Severity.ERROR, "A material name that is not in the catalog"),
+  DATA_FILE_NOT_FOUND("J213", Severity.ERROR, "A data file named by a spec does not exist or leaves the project"),
+  BAD_TABLE_ROW("J214", Severity.ERROR, "A row of an n,k table file that cannot be read"),
 
   // Units and quantities: J3xx
   UNKNOWN_UNIT("J301", Severity.ERROR, "A unit that Jonquil does not know"),

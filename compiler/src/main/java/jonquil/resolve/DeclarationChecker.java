@@ -20,10 +20,13 @@ final class DeclarationChecker {
   private final ValueChecker values;
   private final jonquil.syntax.SpecFile file;
 
-  DeclarationChecker(Sink sink, Scope scope, jonquil.syntax.SpecFile file) {
+  private final Map<java.nio.file.Path, String> dataFiles;
+
+  DeclarationChecker(Sink sink, Scope scope, jonquil.syntax.SpecFile file, Map<java.nio.file.Path, String> dataFiles) {
     this.sink = sink;
     this.values = new ValueChecker(sink, scope);
     this.file = file;
+    this.dataFiles = dataFiles;
   }
 
   ResolvedElement check(Symbol symbol, ElementKind kind, Declaration decl) {
@@ -66,7 +69,34 @@ final class DeclarationChecker {
       checkRules(symbol, kind, decl, firstSeen);
       KindChecks.check(sink, symbol, kind, decl, params, firstSeen);
     }
+    if (kind == ElementKind.MATERIAL && params.containsKey("table")) {
+      readTable(params);
+    }
     return new ResolvedElement(symbol, kind, params);
+  }
+
+  /** Replaces the table's file name with its rows, read from the data file the loader found. */
+  private void readTable(Map<String, List<Value.Group>> params) {
+    Value.Group g = params.get("table").get(0);
+    if (!(g.slot("file").orElse(null) instanceof Value.Text name)) {
+      return;
+    }
+    java.nio.file.Path target;
+    try {
+      target = file.path().getParent().resolve(name.text()).normalize();
+    } catch (java.nio.file.InvalidPathException e) {
+      target = null;
+    }
+    String text = target == null ? null : dataFiles.get(target);
+    if (text == null) {
+      sink.report(DiagnosticCode.DATA_FILE_NOT_FOUND, name.range(),
+          "table file '" + name.text() + "' not found in the project (paths are relative to this file)");
+      params.remove("table");
+      return;
+    }
+    TableReader.read(target, text, sink.diagnostics).ifPresentOrElse(rows -> params.put("table",
+        List.of(new Value.Group(Map.of("file", name, "rows", new Value.Table(rows, name.range())), List.of(), g.range()))),
+        () -> params.remove("table"));
   }
 
   /** Block lines as written, or the '=' shorthand split into lines at parameter names. */

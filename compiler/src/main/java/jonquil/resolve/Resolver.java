@@ -24,6 +24,12 @@ public final class Resolver {
   private Resolver() {}
 
   public static ResolvedModel resolve(Path root, Map<Path, SpecFile> files, Map<Path, List<UseEdge>> uses) {
+    return resolve(root, files, uses, Map.of());
+  }
+
+  /** As above, with the text of the data files (n,k tables) the specs name, read by the loader. */
+  public static ResolvedModel resolve(Path root, Map<Path, SpecFile> files, Map<Path, List<UseEdge>> uses,
+      Map<Path, String> dataFiles) {
     Map<Path, Sink> sinks = new LinkedHashMap<>();
     files.keySet().forEach(p -> sinks.put(p, new Sink(p)));
     Map<Path, Map<String, Symbol>> own = new LinkedHashMap<>();
@@ -36,7 +42,7 @@ public final class Resolver {
 
     Map<Symbol, ResolvedElement> elements = new LinkedHashMap<>();
     files.forEach((path, file) -> {
-      DeclarationChecker checker = new DeclarationChecker(sinks.get(path), scopes.get(path), file);
+      DeclarationChecker checker = new DeclarationChecker(sinks.get(path), scopes.get(path), file, dataFiles);
       for (Declaration decl : file.declarations()) {
         Symbol symbol = own.get(path).get(decl.name().text());
         if (symbol == null || symbol.declaration().orElse(null) != decl || symbol.kind().isEmpty()) {

@@ -22,6 +22,13 @@ public sealed interface Value {
   /** A quoted string. */
   record Text(String text, TextRange range) implements Value {}
 
+  /** Tabulated optical constants read from a data file: wavelength (m), n and k, ascending in wavelength. */
+  record Table(java.util.List<double[]> rows, TextRange range) implements Value {
+    public Table {
+      rows = java.util.List.copyOf(rows);
+    }
+  }
+
   /** A parameter given without arguments ('polarizing'). */
   record Flag(TextRange range) implements Value {}
 
