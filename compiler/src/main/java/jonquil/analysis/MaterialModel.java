@@ -6,6 +6,7 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import jonquil.optics.material.CatalogMaterial;
 import jonquil.optics.material.MaterialCatalog;
+import jonquil.optics.material.TabulatedIndex;
 import jonquil.optics.material.Uniaxial;
 import jonquil.optics.material.WavelengthRange;
 import jonquil.resolve.ElementKind;
@@ -137,26 +138,21 @@ final class MaterialModel {
     return 4 * Math.PI * kappa / wavelength;
   }
 
-  /** Linear interpolation in n and k; outside the table the end row holds, with a range warning. */
+  /** Linear interpolation in n and k (TabulatedIndex); outside the table the end row holds, with a warning. */
   private Complex tabulated(Symbol material, Value.Table t, double wavelength) {
-    List<double[]> rows = t.rows();
-    double first = rows.get(0)[0];
-    double last = rows.get(rows.size() - 1)[0];
-    if (wavelength < first || wavelength > last) {
-      outOfRange.add(new OutOfRange(material, wavelength, new WavelengthRange(first, last)));
-      double[] end = wavelength < first ? rows.get(0) : rows.get(rows.size() - 1);
-      return new Complex(end[1], end[2]);
+    int size = t.rows().size();
+    double[] wl = new double[size];
+    double[] n = new double[size];
+    double[] k = new double[size];
+    for (int i = 0; i < size; i++) {
+      wl[i] = t.rows().get(i)[0];
+      n[i] = t.rows().get(i)[1];
+      k[i] = t.rows().get(i)[2];
     }
-    for (int i = 1; i < rows.size(); i++) {
-      double[] a = rows.get(i - 1);
-      double[] b = rows.get(i);
-      if (wavelength <= b[0]) {
-        double f = (wavelength - a[0]) / (b[0] - a[0]);
-        return new Complex(a[1] + f * (b[1] - a[1]), a[2] + f * (b[2] - a[2]));
-      }
-    }
-    double[] end = rows.get(rows.size() - 1);
-    return new Complex(end[1], end[2]);
+    TabulatedIndex table = new TabulatedIndex(wl, n, k);
+    table.validRange().filter(r -> !r.contains(wavelength))
+        .ifPresent(r -> outOfRange.add(new OutOfRange(material, wavelength, r)));
+    return table.index(wavelength);
   }
 
   private Complex catalogIndex(String name, Symbol symbol, double wavelength) {
