@@ -15,7 +15,7 @@ package jonquil.safety;
  *       Directive 2006/25/EC, which reproduces the ICNIRP laser tables).</li>
  *   <li>Retinal MPE 400–700 nm, 18 t^0.75 J/m² (1.8 t^0.75 mJ/cm²) and its 0.25 s value 2.55 mW/cm²:
  *       university laser-safety "Sample calculations" appendix (AS/NZS 2211.1, i.e. IEC 60825-1).</li>
- *   <li>Class 1 visible cw 0.39 mW, Class 1 worst case 0.039 mW (400–450 nm), Class 2 1 mW, Class 3R
+ *   <li>Class 1 visible cw 0.39 mW, Class 2 1 mW, Class 3R
  *       = 5 × Class 2 (visible) or 5 × Class 1 (other λ), Class 3B 0.5 W cw: several vendor and
  *       university class summaries of IEC 60825-1 (cited in ClassifierTest).</li>
  * </ul>
@@ -172,7 +172,7 @@ final class Ed3 {
    * <ul>
    *   <li>400–1050 nm: t &lt; 5 µs: 7.7×10⁻⁸ C4 J; 5 µs–10 s: 7×10⁻⁴ t^0.75 C4 J; ≥ 10 s: 3.9×10⁻⁴ C4 C7 W
    *       (0.39 mW visible confirmed); 400–600 nm also photochemical: 10–100 s: 3.9×10⁻³ C3 J,
-   *       ≥ 100 s: 3.9×10⁻⁵ C3 W (0.039 mW at 400–450 nm confirmed).</li>
+   *       ≥ 100 s: 3.9×10⁻⁵ C3 W (0.039 mW at 400–450 nm; from memory).</li>
    *   <li>1050–1250 nm: t &lt; 13 µs: 7.7×10⁻⁷ C7 J; 13 µs–10 s: 3.5×10⁻³ t^0.75 C7 J; ≥ 10 s: 3.9×10⁻⁴ C4 C7 W.</li>
    * </ul>
    */

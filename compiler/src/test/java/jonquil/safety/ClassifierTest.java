@@ -14,7 +14,8 @@ import org.junit.jupiter.params.provider.CsvSource;
  * 3R = 5 × Class 2 visible / 5 × Class 1 otherwise, 3B up to 500 mW), a UK laser-safety firm
  * (scitec.uk.com: "CW visible lasers emitting between 1 and 5 mW are normally Class 3R"), and an
  * instrument vendor's table (mxmco.com: IEC Class 1 500–700 nm 0.39 mW, Class 2 1 mW, 3R 5 mW, 3B 500 mW).
- * The 0.039 mW Class 1 limit for blue (400–450 nm) appears in a published EN 60825-1:2014 summary.
+ * The 0.039 mW Class 1 limit for blue (400–450 nm) is from memory (3.9e-5 C3 W, C3 = 1), matching a published
+ * EN 60825-1:2014 summary seen during this work but not an authoritative source.
  */
 class ClassifierTest {
 
@@ -31,8 +32,8 @@ class ClassifierTest {
       "532  | 5.1e-3  | CLASS_3B | confirmed: above 5 mW",
       "450  | 0.49    | CLASS_3B | confirmed: 3B up to 0.5 W",
       "532  | 0.51    | CLASS_4  | confirmed: above 0.5 W",
-      "445  | 0.035e-3 | CLASS_1 | confirmed: 0.039 mW Class 1 at 400-450 nm (photochemical)",
-      "445  | 0.05e-3 | CLASS_2  | confirmed: above 0.039 mW but below 1 mW, visible",
+      "445  | 0.035e-3 | CLASS_1 | from memory: 0.039 mW Class 1 at 400-450 nm (photochemical)",
+      "445  | 0.05e-3 | CLASS_2  | from memory (0.039 mW) and confirmed (1 mW): visible",
       "1064 | 1.9e-3  | CLASS_1  | from memory: 3.9e-4 C4 C7 W = 1.95 mW (C4 = 5 confirmed)",
       "1064 | 2.0e-3  | CLASS_3R | 3R = 5 x Class 1 outside 400-700 nm (rule confirmed) = 9.75 mW",
       "1064 | 9.7e-3  | CLASS_3R | 3R = 5 x 1.95 mW",
