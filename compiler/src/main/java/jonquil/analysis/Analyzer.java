@@ -38,7 +38,7 @@ public final class Analyzer {
     List<Diagnostic> diagnostics = new ArrayList<>();
     List<RequirementOutcome> outcomes = new ArrayList<>();
     for (ResolvedRequirement r : model.requirements()) {
-      RequirementEvaluator.Verdict v = RequirementEvaluator.evaluate(r, solve);
+      RequirementEvaluator.Verdict v = RequirementEvaluator.evaluate(r, model, solve);
       outcomes.add(outcome(r, v));
       if (v.evaluated()) {
         diagnostics.add(v.pass()
@@ -51,6 +51,11 @@ public final class Analyzer {
         diagnostics.add(Diagnostic.of(DiagnosticCode.STRAY_BEAM, s.file(), s.range(),
             "stray light: " + QuantityFormat.format(s.power(), Dimension.POWER) + " " + s.description()));
       }
+    }
+    for (Clip c : solution.clips()) {
+      diagnostics.add(Diagnostic.of(DiagnosticCode.APERTURE_CLIPS, c.file(), c.range(), "'" + c.element() + "' cuts off "
+          + QuantityFormat.format(100 * c.fraction(), Dimension.DIMENSIONLESS) + " % of the beam (1/e² radius against the "
+          + "aperture; more than 1 % is flagged, a common-practice threshold)"));
     }
     for (MaterialModel.OutOfRange o : materials.outOfRange()) {
       firstUse(model, o).ifPresent(ref -> diagnostics.add(Diagnostic.of(DiagnosticCode.MATERIAL_OUT_OF_RANGE,
@@ -76,10 +81,45 @@ public final class Analyzer {
         OptionalDouble.of(v.bound()), OptionalDouble.of(v.margin()), v.unit(), v.text());
   }
 
-  private static String verdict(String lead, ResolvedRequirement r, RequirementEvaluator.Verdict v) {
-    Dimension dim = v.unit().equals("W") ? Dimension.POWER : v.unit().equals("rad") ? Dimension.ANGLE : Dimension.DIMENSIONLESS;
-    return lead + ": " + r.measure().map(m -> m.word()).orElse("value") + " is "
-        + QuantityFormat.format(v.value(), dim) + (v.text().isEmpty() ? "" : " (" + v.text() + ")") + ", bound "
-        + QuantityFormat.format(v.bound(), dim) + ", margin " + QuantityFormat.format(v.margin(), dim);
+  /** The dimension of an SI unit name used in verdicts. */
+  static Dimension dimension(String unit) {
+    switch (unit) {
+      case "W":
+        return Dimension.POWER;
+      case "rad":
+        return Dimension.ANGLE;
+      case "W/m2":
+        return Dimension.IRRADIANCE;
+      case "J/m2":
+        return Dimension.FLUENCE;
+      case "V/m":
+        return Dimension.ELECTRIC_FIELD;
+      case "J":
+        return Dimension.ENERGY;
+      case "m":
+        return Dimension.LENGTH;
+      default:
+        return Dimension.DIMENSIONLESS;
+    }
   }
+
+  private static String verdict(String lead, ResolvedRequirement r, RequirementEvaluator.Verdict v) {
+    return lead + ": " + r.measure().map(m -> m.word()).orElse("value") + " is " + format(v.value(), v.unit())
+        + (v.text().isEmpty() ? "" : " (" + v.text() + ")") + ", bound " + format(v.bound(), v.unit())
+        + (v.unit().equals("class") ? "" : ", margin " + format(v.margin(), v.unit()));
+  }
+
+  /** A verdict figure in its unit: hazard classes by name, densities as 'OD x', quantities with prefixes. */
+  static String format(double value, String unit) {
+    if (unit.equals("class")) {
+      int i = (int) Math.round(value);
+      var classes = jonquil.resolve.HazardClass.values();
+      return i >= 0 && i < classes.length ? classes[i].label() : String.valueOf(value);
+    }
+    if (unit.equals("OD")) {
+      return String.format(java.util.Locale.ROOT, "OD %.2f", value);
+    }
+    return QuantityFormat.format(value, dimension(unit));
+  }
+
 }

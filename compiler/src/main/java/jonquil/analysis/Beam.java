@@ -1,24 +1,33 @@
 package jonquil.analysis;
 
+import java.util.Optional;
 import jonquil.optics.Coherency;
+import jonquil.optics.beam.GaussianBeam;
 import jonquil.resolve.Symbol;
 
 /**
  * Light of one laser line at one point of the train: its polarization and power as a
- * coherency matrix (watts) in the beam's carried frame, and the medium it runs in.
- * Lines of one source are incoherent, so each travels as its own Beam.
+ * coherency matrix (watts) in the beam's carried frame, the medium it runs in, and its
+ * Gaussian mode when the source states one. Lines of one source are incoherent, so each
+ * travels as its own Beam.
  */
-public record Beam(Symbol source, int line, double wavelength, Coherency light, BeamFrame frame, Medium medium) {
+public record Beam(Symbol source, int line, double wavelength, Coherency light, BeamFrame frame, Medium medium,
+    Optional<GaussianBeam> mode) {
+
   public Beam with(Coherency next) {
-    return new Beam(source, line, wavelength, next, frame, medium);
+    return new Beam(source, line, wavelength, next, frame, medium, mode);
   }
 
   public Beam with(Coherency next, BeamFrame nextFrame) {
-    return new Beam(source, line, wavelength, next, nextFrame, medium);
+    return new Beam(source, line, wavelength, next, nextFrame, medium, mode);
   }
 
   public Beam in(Medium next) {
-    return new Beam(source, line, wavelength, light, frame, next);
+    return new Beam(source, line, wavelength, light, frame, next, mode);
+  }
+
+  public Beam withMode(Optional<GaussianBeam> next) {
+    return new Beam(source, line, wavelength, light, frame, medium, next);
   }
 
   public double power() {

@@ -8,6 +8,7 @@ import java.util.OptionalDouble;
 import jonquil.optics.Coherency;
 import jonquil.optics.Fresnel;
 import jonquil.optics.Jones;
+import jonquil.optics.beam.Clipping;
 import jonquil.resolve.ElementKind;
 import jonquil.resolve.ResolvedElement;
 import jonquil.resolve.Symbol;
@@ -73,9 +74,15 @@ final class ElementOptics {
       }
       case RHOMB:
         return rhomb(e, in);
-      case APERTURE:
+      case APERTURE: {
+        double d = e.number("diameter", "diameter").orElse(Double.POSITIVE_INFINITY);
+        if (in.mode().isEmpty()) {
+          return Response.balance(in, Map.of("out", in), List.of()); // no stated beam size: nothing to clip
+        }
+        double f = Clipping.transmittedFraction(in.mode().get().radius(), d);
+        return Response.balance(in, Map.of("out", in.with(in.light().scaled(f))), List.of()).clipping(1 - f);
+      }
       case PROBE:
-        // Clipping by an aperture needs the beam's size: it comes with the beam analysis.
         return Response.balance(in, Map.of("out", in), List.of());
       case DETECTOR:
       case DUMP:
@@ -210,7 +217,10 @@ final class ElementOptics {
     Coherency through = in.light().transform(Jones.transmission(Complex.ONE, Complex.ONE, plane, tP[0], tS[0]));
     Jones reflect = Jones.reflection(new Complex(Math.sqrt(tP[1]), 0), new Complex(-Math.sqrt(tS[1]), 0), plane);
     Beam reflected = in.with(in.light().transform(reflect), in.frame().reflect(aoi, plane));
-    return Response.balance(in, Map.of("through", in.with(through).in(after), "reflected", reflected), List.of());
+    // The mode crosses the plate as two flat interfaces with the glass between (tilt neglected).
+    Beam out = in.with(through).in(after).withMode(in.mode()
+        .map(g -> g.intoMedium(ng.getReal()).propagate(thickness).intoMedium(n3.getReal())));
+    return Response.balance(in, Map.of("through", out, "reflected", reflected), List.of());
   }
 
   /** Incoherent plate: {transmittance, reflectance} from the two surfaces and the internal transmittance τ. */
@@ -235,11 +245,25 @@ final class ElementOptics {
         ? Jones.reflection(new Complex(Math.sqrt(powers.rp()), 0), new Complex(-Math.sqrt(powers.rs()), 0), plane)
         : Jones.reflection(c.rp(), c.rs(), plane);
     Beam reflected = in.with(in.light().transform(reflect), in.frame().reflect(aoi, plane));
-    return Response.balance(in, Map.of("through", in.with(through).in(Medium.of(to)), "reflected", reflected), List.of());
+    Beam out = in.with(through).in(Medium.of(to)).withMode(in.mode().map(g -> g.intoMedium(n2.getReal())));
+    return Response.balance(in, Map.of("through", out, "reflected", reflected), List.of());
   }
 
   /** A thin lens: two surfaces at normal incidence; their reflections head back as ghosts. */
   private Response lens(ResolvedElement e, Beam in) {
+    double focal = e.number("focal", "focal").orElse(Double.POSITIVE_INFINITY);
+    double clip = 1;
+    OptionalDouble clear = e.number("clear_aperture", "diameter");
+    if (clear.isPresent() && in.mode().isPresent()) {
+      clip = Clipping.transmittedFraction(in.mode().get().radius(), clear.getAsDouble());
+    }
+    Beam focused = in.withMode(in.mode().map(g -> g.throughThinLens(focal))).with(in.light().scaled(clip));
+    Response r = lensSurfaces(e, focused);
+    Map<String, Beam> ports = r.ports();
+    return Response.balance(in, ports, r.ghosts()).clipping(1 - clip);
+  }
+
+  private Response lensSurfaces(ResolvedElement e, Beam in) {
     Optional<Symbol> glass = e.param("material").flatMap(g -> g.slot("material")).map(v -> ((Value.Ref) v).symbol());
     if (glass.isEmpty() && e.param("coating").isEmpty()) {
       return Response.balance(in, Map.of("out", in), List.of()); // an ideal lens: nothing known about its surfaces

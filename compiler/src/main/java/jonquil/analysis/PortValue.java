@@ -1,16 +1,24 @@
 package jonquil.analysis;
 
 import java.nio.file.Path;
+import java.util.Optional;
 import jonquil.optics.Coherency;
+import jonquil.optics.beam.GaussianBeam;
 import jonquil.source.TextRange;
 
 /**
  * The light leaving one port of one element (or arriving at a beam stop), summed over
  * the source's lines, with its polarization expressed in the table frame.
  */
-public record PortValue(String element, String port, Path file, TextRange range, Coherency light, boolean vertical) {
+public record PortValue(String element, String port, Path file, TextRange range, Coherency light, boolean vertical,
+    Optional<GaussianBeam> mode, Optional<Pulses> pulses, double index, double wavelength) {
   public double power() {
     return light.power();
+  }
+
+  /** The exposure this light gives, when its beam size is known. */
+  public Optional<Exposure> exposure() {
+    return mode.map(m -> Exposure.of(power(), m.radius(), pulses, index));
   }
 
   /** "element.port", or the element alone for its only port. */

@@ -32,6 +32,9 @@ final class Propagator {
   private final Map<String, double[]> budgetTotals = new LinkedHashMap<>();
   private final Map<String, Map<String, Double>> budgetPorts = new LinkedHashMap<>();
   private final List<StrayBeam> stray = new ArrayList<>();
+  private final Map<String, PortValue> incident = new LinkedHashMap<>();
+  private final List<Clip> clips = new ArrayList<>();
+  private final Map<Symbol, Optional<Pulses>> pulses = new HashMap<>();
   private double sourcePower;
   private double absorbed;
   private double stopped;
@@ -59,7 +62,10 @@ final class Propagator {
         if (source.isEmpty() || source.get().kind() != ElementKind.SOURCE) {
           continue;
         }
-        List<Beam> beams = SourceBeams.of(source.get(), wavelengthOverride);
+        double wl = wavelengthOverride.orElse(source.get().number("wavelength", "wavelength").orElse(1e-6));
+        pulses.put(start.symbol(), Pulses.of(source.get()));
+        List<Beam> beams = SourceBeams.of(source.get(), wavelengthOverride,
+            materials.index(Medium.AMBIENT, wl).getReal());
         double emitted = beams.stream().mapToDouble(Beam::power).sum();
         sourcePower += emitted;
         record(start.symbol().name(), "out", start, beams);
@@ -69,7 +75,7 @@ final class Propagator {
     }
     List<ElementBudget> budgets = new ArrayList<>();
     budgetTotals.forEach((name, t) -> budgets.add(new ElementBudget(name, t[0], budgetPorts.get(name), t[1], t[2])));
-    return new TrainSolution(ports, budgets, stray, sourcePower, absorbed, stopped, observed);
+    return new TrainSolution(ports, incident, budgets, stray, clips, sourcePower, absorbed, stopped, observed);
   }
 
   private void walk(ResolvedTrain.BeamPath path, int from, List<Beam> arriving) {
@@ -109,6 +115,9 @@ final class Propagator {
     List<Beam> out = new ArrayList<>();
     for (Beam b : beams) {
       Beam in = gap.medium().map(m -> b.in(Medium.of(m))).orElse(b);
+      double n = materials.index(in.medium(), in.wavelength()).getReal();
+      // A medium change at the start of a gap is a flat interface for the beam's mode.
+      in = in.withMode(in.mode().map(g -> g.index() == n ? g : g.intoMedium(n)).map(g -> g.propagate(gap.length())));
       double t = Math.exp(-materials.absorption(in.medium(), in.wavelength()) * gap.length());
       absorbed += in.power() * (1 - t);
       out.add(in.with(in.light().scaled(t)));
@@ -125,9 +134,12 @@ final class Propagator {
     for (String port : element.kind().ports()) {
       atPorts.put(port, new ArrayList<>());
     }
+    incident.put(name, value(name, "", placed, beams));
+    double clippedMost = 0;
     for (Beam b : beams) {
       totals[0] += b.power();
       Response r = optics.respond(element, b);
+      clippedMost = Math.max(clippedMost, r.clipped());
       totals[1] += r.absorbed();
       if (placed.symbol().category() == Category.TERMINAL) {
         stopped += r.absorbed();
@@ -140,6 +152,9 @@ final class Propagator {
         stray.add(new StrayBeam(name, g.label() + " of '" + name + "'" + (g.backward() ? ", heading back" : ""),
             g.beam().power(), g.backward(), placed.symbol().file(), placed.range()));
       }
+    }
+    if (jonquil.optics.beam.Clipping.significant(1 - clippedMost)) {
+      clips.add(new Clip(name, clippedMost, placed.symbol().file(), placed.range()));
     }
     if (placed.symbol().category() == Category.TERMINAL) {
       record(name, "", placed, beams);
@@ -170,15 +185,34 @@ final class Propagator {
   }
 
   private void record(String element, String port, ResolvedTrain.Element placed, List<Beam> beams) {
+    String key = port.isEmpty() ? element : element + "." + port;
+    PortValue v = value(element, port, placed, beams);
+    Coherency total = portLight.merge(key, v.light(), Coherency::plus);
+    ports.put(key, new PortValue(element, port, v.file(), v.range(), total, v.vertical(), v.mode(), v.pulses(), v.index(),
+        v.wavelength()));
+  }
+
+  /**
+   * The light of all lines at one place, in the table frame. Its mode and pulses are those
+   * of the strongest line (exposure is judged on one beam size; lines usually share it).
+   */
+  private PortValue value(String element, String port, ResolvedTrain.Element placed, List<Beam> beams) {
     Coherency sum = Coherency.ZERO;
     boolean vertical = false;
+    Beam strongest = null;
     for (Beam b : beams) {
       sum = sum.plus(b.light().inFrameRotatedBy(b.frame().tableAngle()));
       vertical |= b.frame().vertical();
+      if (strongest == null || b.power() > strongest.power()) {
+        strongest = b;
+      }
     }
-    String key = port.isEmpty() ? element : element + "." + port;
-    Coherency total = portLight.merge(key, sum, Coherency::plus);
-    ports.put(key, new PortValue(element, port, placed.symbol().file(), placed.range(), total, vertical));
+    Optional<jonquil.optics.beam.GaussianBeam> mode = strongest == null ? Optional.empty() : strongest.mode();
+    Optional<Pulses> train = strongest == null ? Optional.empty() : pulses.getOrDefault(strongest.source(), Optional.empty());
+    double index = strongest == null ? 1 : materials.index(strongest.medium(), strongest.wavelength()).getReal();
+    double wavelength = strongest == null ? 0 : strongest.wavelength();
+    return new PortValue(element, port, placed.symbol().file(), placed.range(), sum, vertical, mode, train, index,
+        wavelength);
   }
 
   /** "element" alone names the port its path leaves by. */

@@ -6,6 +6,7 @@ import java.util.function.Function;
 import jonquil.optics.Coherency;
 import jonquil.optics.Handedness;
 import jonquil.resolve.Measure;
+import jonquil.resolve.ResolvedModel;
 import jonquil.resolve.ResolvedRequirement;
 import jonquil.resolve.ResolvedRequirement.Criterion;
 import jonquil.resolve.Value;
@@ -31,7 +32,7 @@ final class RequirementEvaluator {
   private RequirementEvaluator() {}
 
   /** All criteria of a requirement, worst margin first; over a band, at its worst wavelength. */
-  static Verdict evaluate(ResolvedRequirement r, Function<OptionalDouble, TrainSolution> solve) {
+  static Verdict evaluate(ResolvedRequirement r, ResolvedModel model, Function<OptionalDouble, TrainSolution> solve) {
     if (r.yield().isPresent()) {
       return Verdict.notEvaluated("yield over tolerances (Monte Carlo) is not computed by this version");
     }
@@ -40,7 +41,7 @@ final class RequirementEvaluator {
       ResolvedRequirement.Band band = r.band().get();
       for (int i = 0; i <= 4; i++) {
         double wl = band.low() + (band.high() - band.low()) * i / 4.0;
-        Verdict v = evaluate(r, solve.apply(OptionalDouble.of(wl)));
+        Verdict v = evaluate(r, model, solve.apply(OptionalDouble.of(wl)));
         if (!v.evaluated()) {
           return v;
         }
@@ -50,13 +51,13 @@ final class RequirementEvaluator {
       }
       return worst;
     }
-    return evaluate(r, solve.apply(OptionalDouble.empty()));
+    return evaluate(r, model, solve.apply(OptionalDouble.empty()));
   }
 
-  static Verdict evaluate(ResolvedRequirement r, TrainSolution s) {
+  static Verdict evaluate(ResolvedRequirement r, ResolvedModel model, TrainSolution s) {
     Verdict worst = null;
     for (Criterion c : r.criteria()) {
-      Verdict v = criterion(r, c, s);
+      Verdict v = criterion(r, c, s, model);
       if (!v.evaluated()) {
         return v;
       }
@@ -67,7 +68,7 @@ final class RequirementEvaluator {
     return worst == null ? Verdict.notEvaluated("the requirement has no bound") : worst;
   }
 
-  private static Verdict criterion(ResolvedRequirement r, Criterion c, TrainSolution s) {
+  private static Verdict criterion(ResolvedRequirement r, Criterion c, TrainSolution s, ResolvedModel model) {
     Measure m = c.measure();
     Optional<PortValue> at = r.at().flatMap(t -> s.port(Propagator.key(t.symbol(), t.port())));
     switch (m) {
@@ -105,8 +106,128 @@ final class RequirementEvaluator {
       case POLARIZATION:
       case HANDEDNESS:
         return at.isEmpty() ? unreached(r) : state(c, at.get().light());
+      case IRRADIANCE:
+      case PEAK_IRRADIANCE:
+      case FLUENCE:
+      case PEAK_FIELD:
+      case PEAK_POWER:
+      case PULSE_ENERGY:
+      case BEAM_RADIUS:
+        return exposure(r, c, s);
+      case DAMAGE_MARGIN:
+        return damage(r, c, s, model);
+      case HAZARD_CLASS:
+      case NOHD:
+      case EXPOSURE:
+      case EYEWEAR_OD:
+        return SafetyVerdicts.evaluate(r, c, s, model);
       default:
         return Verdict.notEvaluated("'" + m.word() + "' needs the beam and exposure analysis, which this version does not run");
+    }
+  }
+
+  /**
+   * A quantity of the exposure, at a place (the light arriving there) or everywhere (the
+   * largest value over every element's input, which is where parts take the beam).
+   */
+  private static Verdict exposure(ResolvedRequirement r, Criterion c, TrainSolution s) {
+    java.util.List<PortValue> places = new java.util.ArrayList<>();
+    if (r.everywhere()) {
+      places.addAll(s.incident().values());
+    } else if (r.at().isPresent()) {
+      var t = r.at().get();
+      String key = Propagator.key(t.symbol(), t.port());
+      Optional<PortValue> v = t.port().isPresent() ? s.port(key) : s.incidentAt(key).or(() -> s.port(key));
+      v.ifPresent(places::add);
+    }
+    if (places.isEmpty()) {
+      return unreached(r);
+    }
+    Verdict worst = null;
+    for (PortValue p : places) {
+      Optional<Exposure> e = p.exposure();
+      if (e.isEmpty()) {
+        return Verdict.notEvaluated("the beam size is unknown: give the source a 'beam' line (waist or divergence)");
+      }
+      OptionalDouble value = quantity(c.measure(), e.get());
+      if (value.isEmpty()) {
+        return Verdict.notEvaluated("'" + c.measure().word() + "' applies to pulsed sources; this one is continuous");
+      }
+      Verdict v = compare(c, value.getAsDouble(), unit(c.measure()), r.everywhere() ? "at '" + p.element() + "'" : "");
+      if (worst == null || v.margin() < worst.margin()) {
+        worst = v;
+      }
+    }
+    return worst;
+  }
+
+  /** The smallest damage margin at a part, or over every part that declares thresholds. */
+  private static Verdict damage(ResolvedRequirement r, Criterion c, TrainSolution s, ResolvedModel model) {
+    java.util.List<String> names = new java.util.ArrayList<>();
+    if (r.everywhere()) {
+      names.addAll(s.incident().keySet());
+    } else {
+      r.at().ifPresent(t -> names.add(t.symbol().name()));
+    }
+    Verdict worst = null;
+    for (String name : names) {
+      Optional<jonquil.resolve.ResolvedElement> part = model.element(name);
+      Optional<PortValue> in = s.incidentAt(name);
+      if (part.isEmpty() || in.isEmpty()) {
+        continue;
+      }
+      double wavelength = in.get().wavelength();
+      OptionalDouble margin = DamageModel.margin(part.get(), in.get(), wavelength);
+      if (margin.isPresent()) {
+        Verdict v = compare(c, margin.getAsDouble(), "", "at '" + name + "'; thresholds scaled by common-practice rules");
+        if (worst == null || v.margin() < worst.margin()) {
+          worst = v;
+        }
+      }
+    }
+    if (worst == null) {
+      return Verdict.notEvaluated(s.incident().values().stream().anyMatch(v -> v.mode().isPresent())
+          ? "no part in reach declares a damage threshold that applies to this beam"
+          : "the beam size is unknown: give the source a 'beam' line");
+    }
+    return worst;
+  }
+
+  private static OptionalDouble quantity(Measure m, Exposure e) {
+    switch (m) {
+      case IRRADIANCE:
+        return OptionalDouble.of(e.averageIrradiance());
+      case PEAK_IRRADIANCE:
+        return OptionalDouble.of(e.peakPower().isPresent()
+            ? 2 * e.peakPower().getAsDouble() / (Math.PI * e.beamRadius() * e.beamRadius()) : e.peakIrradiance());
+      case FLUENCE:
+        return e.peakFluence();
+      case PEAK_FIELD:
+        return OptionalDouble.of(e.peakField());
+      case PEAK_POWER:
+        return e.peakPower();
+      case PULSE_ENERGY:
+        return e.pulseEnergy();
+      default:
+        return OptionalDouble.of(e.beamRadius());
+    }
+  }
+
+  private static String unit(Measure m) {
+    switch (m) {
+      case IRRADIANCE:
+      case PEAK_IRRADIANCE:
+        return "W/m2";
+      case FLUENCE:
+        return "J/m2";
+      case PEAK_FIELD:
+        return "V/m";
+      case PEAK_POWER:
+        return "W";
+      case PULSE_ENERGY:
+        return "J";
+      default:
+        return "m";
     }
   }
 

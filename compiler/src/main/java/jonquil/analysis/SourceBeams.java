@@ -6,6 +6,7 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import jonquil.optics.Coherency;
 import jonquil.optics.Handedness;
+import jonquil.optics.beam.GaussianBeam;
 import jonquil.resolve.ResolvedElement;
 import jonquil.resolve.Value;
 
@@ -17,7 +18,7 @@ import jonquil.resolve.Value;
 final class SourceBeams {
   private SourceBeams() {}
 
-  static List<Beam> of(ResolvedElement source, OptionalDouble wavelengthOverride) {
+  static List<Beam> of(ResolvedElement source, OptionalDouble wavelengthOverride, double ambientIndex) {
     List<double[]> lines = new ArrayList<>();
     if (!source.all("line").isEmpty()) {
       for (Value.Group g : source.all("line")) {
@@ -30,9 +31,32 @@ final class SourceBeams {
     for (int i = 0; i < lines.size(); i++) {
       double wavelength = wavelengthOverride.orElse(lines.get(i)[0]);
       Coherency light = state(source.param("polarization"), lines.get(i)[1]);
-      beams.add(new Beam(source.symbol(), i, wavelength, light, BeamFrame.SOURCE, Medium.AMBIENT));
+      beams.add(new Beam(source.symbol(), i, wavelength, light, BeamFrame.SOURCE, Medium.AMBIENT,
+          mode(source, wavelength, ambientIndex)));
     }
     return beams;
+  }
+
+  /**
+   * The source's Gaussian mode from its 'beam' line: a waist radius (1/e²), or a far-field
+   * half-angle divergence; M² defaults to 1 and the waist to the exit face.
+   */
+  static Optional<GaussianBeam> mode(ResolvedElement source, double wavelength, double index) {
+    Optional<Value.Group> beam = source.param("beam");
+    if (beam.isEmpty()) {
+      return Optional.empty();
+    }
+    double m2 = beam.get().number("m2").orElse(1);
+    double waistAhead = beam.get().number("waist_at").orElse(0);
+    OptionalDouble waist = beam.get().number("waist");
+    OptionalDouble divergence = beam.get().number("divergence");
+    if (waist.isPresent()) {
+      return Optional.of(GaussianBeam.fromWaist(wavelength, m2, waist.getAsDouble(), waistAhead, index));
+    }
+    if (divergence.isPresent()) {
+      return Optional.of(GaussianBeam.fromDivergence(wavelength, m2, divergence.getAsDouble(), waistAhead, index));
+    }
+    return Optional.empty();
   }
 
   /** Average power: stated, or pulse energy × repetition rate; a single-shot source averages to zero. */

@@ -10,8 +10,10 @@ import java.util.Optional;
  */
 public record TrainSolution(
     Map<String, PortValue> ports,
+    Map<String, PortValue> incident,
     List<ElementBudget> budgets,
     List<StrayBeam> stray,
+    List<Clip> clips,
     double sourcePower,
     double absorbed,
     double stopped,
@@ -19,8 +21,15 @@ public record TrainSolution(
 
   public TrainSolution {
     ports = Map.copyOf(ports);
+    incident = Map.copyOf(incident);
     budgets = List.copyOf(budgets);
     stray = List.copyOf(stray);
+    clips = List.copyOf(clips);
+  }
+
+  /** The light arriving at an element, before it acts. */
+  public Optional<PortValue> incidentAt(String element) {
+    return Optional.ofNullable(incident.get(element));
   }
 
   public Optional<PortValue> port(String key) {

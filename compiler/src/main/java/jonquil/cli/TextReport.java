@@ -87,6 +87,12 @@ final class TextReport {
         return Dimension.LENGTH;
       case "J":
         return Dimension.ENERGY;
+      case "W/m2":
+        return Dimension.IRRADIANCE;
+      case "J/m2":
+        return Dimension.FLUENCE;
+      case "V/m":
+        return Dimension.ELECTRIC_FIELD;
       default:
         return Dimension.DIMENSIONLESS;
     }

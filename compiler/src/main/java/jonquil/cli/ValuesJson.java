@@ -9,6 +9,7 @@ import java.nio.file.Path;
 import java.util.Map;
 import jonquil.analysis.ElementBudget;
 import jonquil.analysis.PortValue;
+import jonquil.analysis.SafetySummary;
 import jonquil.analysis.StrayBeam;
 import jonquil.analysis.TrainSolution;
 import jonquil.optics.Coherency;
@@ -38,6 +39,8 @@ final class ValuesJson {
         ports.add(port(value));
       });
       o.add("ports", ports);
+      var model = run.result().models().get(e.getKey());
+      java.util.Map<String, Double> margins = model == null ? java.util.Map.of() : SafetySummary.damageMargins(model, s);
       JsonArray budget = new JsonArray();
       for (ElementBudget b : s.budgets()) {
         JsonObject j = new JsonObject();
@@ -48,6 +51,7 @@ final class ValuesJson {
         j.add("out_W", outs);
         j.add("absorbed_W", number(b.absorbed()));
         j.add("ghosts_W", number(b.ghosts()));
+        j.add("damage_margin", margins.containsKey(b.element()) ? number(margins.get(b.element())) : JsonNull.INSTANCE);
         budget.add(j);
       }
       o.add("budget", budget);
@@ -69,9 +73,52 @@ final class ValuesJson {
       conservation.add("stray_W", number(s.strayPower()));
       conservation.add("relative_error", number(s.conservationError()));
       o.add("conservation", conservation);
+      JsonArray safety = new JsonArray();
+      if (model != null) {
+        for (SafetySummary.SourceSafety src : SafetySummary.sources(model, s)) {
+          safety.add(safety(src));
+        }
+      }
+      o.add("safety", safety);
       out.add(o);
     }
     return out;
+  }
+
+  private static JsonObject safety(SafetySummary.SourceSafety s) {
+    JsonObject j = new JsonObject();
+    j.addProperty("source", s.source());
+    j.add("wavelength_m", number(s.wavelength()));
+    j.add("exposure_time_s", number(s.exposureTime()));
+    j.add("hazard_class", outcome(s.hazardClass(), c -> new JsonPrimitive(c.name().replace("CLASS_", ""))));
+    j.add("mpe", outcome(s.mpe(), m -> {
+      JsonObject o = new JsonObject();
+      o.add("irradiance_W_m2", number(m.irradiance()));
+      o.add("radiant_exposure_J_m2", number(m.radiantExposure()));
+      o.add("limiting_aperture_m", number(m.apertureDiameter()));
+      o.addProperty("limited_by", m.limitingCriterion());
+      return o;
+    }));
+    j.add("nohd_m", outcome(s.nohd(), ValuesJson::number));
+    j.add("eyewear_od_at_exit", outcome(s.eyewear(), od -> {
+      JsonObject o = new JsonObject();
+      o.add("averaged_over_limiting_aperture", number(od.atAperture()));
+      o.add("at_beam_peak", number(od.atPeak()));
+      return o;
+    }));
+    j.addProperty("caution", jonquil.safety.Outcome.CAUTION);
+    return j;
+  }
+
+  /** A safety figure with its standard, or null with the reason it was not evaluated. */
+  private static <T> JsonObject outcome(jonquil.safety.Outcome<T> o, java.util.function.Function<T, JsonElement> value) {
+    JsonObject j = new JsonObject();
+    j.add("value", o.evaluated() ? value.apply(o.get()) : JsonNull.INSTANCE);
+    j.addProperty("standard", o.standard());
+    if (!o.evaluated()) {
+      j.addProperty("not_evaluated", o.reason());
+    }
+    return j;
   }
 
   private static JsonObject port(PortValue v) {
@@ -93,6 +140,17 @@ final class ValuesJson {
     j.addProperty("handedness_viewpoint", HANDEDNESS_VIEWPOINT);
     j.add("extinction_ratio", number(c.extinctionRatio()));
     j.addProperty("azimuth_frame", v.vertical() ? "carried (the beam runs vertically)" : "table");
+    v.exposure().ifPresent(e -> {
+      j.add("beam_radius_m", number(e.beamRadius()));
+      JsonObject irradiance = new JsonObject();
+      irradiance.add("average", number(e.averageIrradiance()));
+      irradiance.add("peak", number(e.peakIrradiance()));
+      j.add("irradiance_W_m2", irradiance);
+      e.pulseEnergy().ifPresent(x -> j.add("pulse_energy_J", number(x)));
+      e.peakPower().ifPresent(x -> j.add("peak_power_W", number(x)));
+      e.peakFluence().ifPresent(x -> j.add("fluence_J_m2", number(x)));
+      j.add("peak_field_V_m", number(e.peakField()));
+    });
     return j;
   }
 

@@ -79,6 +79,7 @@ public enum DiagnosticCode {
   UNEXPECTED_PLACE("J608", Severity.ERROR, "A place given to a requirement that takes none"),
   REQUIREMENT_FAILED("J609", Severity.ERROR, "A requirement is not met"),
   REQUIREMENT_MET("J611", Severity.NOTE, "A requirement is met, with its computed value and margin"),
+  APERTURE_CLIPS("J612", Severity.WARNING, "An aperture cuts off a significant part of the beam"),
   STRAY_BEAM("J610", Severity.NOTE, "Light leaves the train without reaching a probe, detector or dump"),
 
   // Limits and internals: J9xx

@@ -30,12 +30,17 @@ public final class DamageScaling {
     if (!(fluence1 >= 0) || !(tau1 > 0) || !(tau2 > 0) || !(lambda1 > 0) || !(lambda2 > 0)) {
       throw new IllegalArgumentException("fluence >= 0, durations and wavelengths > 0");
     }
-    if (tau1 < TAU_MIN || tau1 > TAU_MAX || tau2 < TAU_MIN || tau2 > TAU_MAX) {
+    if (outside(tau1) || outside(tau2)) {
       return Outcome.<Double>notEvaluated("pulse durations " + tau1 + " s → " + tau2 + " s leave the 10 ps–100 ns window"
           + " of the sqrt(tau) rule; use a threshold measured at the target duration", RULES).withCaution(CAUTION);
     }
     double f2 = fluence1 * Math.sqrt(tau2 / tau1) * (lambda2 / lambda1);
     return Outcome.of(f2, RULES).withCaution(CAUTION);
+  }
+
+  /** Outside the window, with a relative slack of 1e-9 so that '100 ns' written in a spec counts as inside. */
+  private static boolean outside(double tau) {
+    return tau < TAU_MIN * (1 - 1e-9) || tau > TAU_MAX * (1 + 1e-9);
   }
 
   /** A continuous-wave threshold in W/m² or W/m, returned unchanged (no scaling rule is applied). */

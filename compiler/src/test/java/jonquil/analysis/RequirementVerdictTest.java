@@ -64,10 +64,17 @@ class RequirementVerdictTest {
   }
 
   @Test
-  void measuresOfTheNextAnalysisAreNotEvaluatedWithAReason() {
+  void exposureNeedsTheBeamSizeAndSaysSoWhenItIsMissing() {
     RequirementOutcome o = verdicts("irradiance at mid <= 1 kW/cm2").get(0);
     assertEquals(RequirementStatus.NOT_EVALUATED, o.status());
-    assertTrue(o.reason().contains("not"), o.reason());
+    assertTrue(o.reason().contains("beam size is unknown"), o.reason());
+  }
+
+  @Test
+  void yieldOverTolerancesIsNotEvaluatedWithAReason() {
+    RequirementOutcome o = verdicts("yield >= 99 % for power at mid >= 4 mW").get(0);
+    assertEquals(RequirementStatus.NOT_EVALUATED, o.status());
+    assertTrue(o.reason().contains("Monte Carlo"), o.reason());
   }
 
   @Test

@@ -1,0 +1,66 @@
+package jonquil.analysis;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import jonquil.resolve.Category;
+import jonquil.resolve.ElementKind;
+import jonquil.resolve.ResolvedElement;
+import jonquil.resolve.ResolvedModel;
+import jonquil.safety.Outcome;
+
+/**
+ * The per-source safety figures and per-part damage margins reported with the computed
+ * values: hazard class, ocular MPE, NOHD and eyewear OD at the exit, each with its
+ * standard (or the reason it was not evaluated) and the caution.
+ */
+public final class SafetySummary {
+  /** Safety figures of one source at its exit. */
+  public record SourceSafety(
+      String source,
+      double wavelength,
+      Outcome<jonquil.safety.HazardClass> hazardClass,
+      Outcome<jonquil.safety.Exposure> mpe,
+      Outcome<Double> nohd,
+      Outcome<jonquil.safety.OpticalDensity> eyewear,
+      double exposureTime) {}
+
+  private SafetySummary() {}
+
+  public static List<SourceSafety> sources(ResolvedModel model, TrainSolution s) {
+    List<SourceSafety> out = new ArrayList<>();
+    for (ResolvedElement e : model.elements().values()) {
+      if (e.kind() != ElementKind.SOURCE) {
+        continue;
+      }
+      Optional<PortValue> exit = s.port(e.symbol().name());
+      if (exit.isEmpty()) {
+        continue;
+      }
+      double wl = SafetyModel.wavelength(e);
+      double t = SafetyModel.defaultExposureTime(wl);
+      var emission = SafetyModel.emission(wl, exit.get().power(), exit.get().pulses());
+      out.add(new SourceSafety(e.symbol().name(), wl, SafetyModel.hazardClass(e, exit.get()),
+          jonquil.safety.OcularMpe.at(emission, t), SafetyModel.nohd(e, exit.get()),
+          SafetyModel.eyewear(wl, exit.get(), t), t));
+    }
+    return out;
+  }
+
+  /** The damage margin of every part that declares thresholds and is reached by a beam of known size. */
+  public static Map<String, Double> damageMargins(ResolvedModel model, TrainSolution s) {
+    Map<String, Double> out = new LinkedHashMap<>();
+    s.incident().forEach((name, in) -> model.element(name)
+        .filter(e -> e.symbol().category() != Category.SOURCE)
+        .ifPresent(e -> {
+          OptionalDouble m = DamageModel.margin(e, in, in.wavelength());
+          if (m.isPresent()) {
+            out.put(name, m.getAsDouble());
+          }
+        }));
+    return out;
+  }
+}
