@@ -39,6 +39,9 @@ final class ValuesJson {
         ports.add(port(value));
       });
       o.add("ports", ports);
+      JsonArray incident = new JsonArray();
+      s.incident().values().forEach(v -> incident.add(port(v)));
+      o.add("incident", incident);
       var model = run.result().models().get(e.getKey());
       java.util.Map<String, Double> margins = model == null ? java.util.Map.of() : SafetySummary.damageMargins(model, s);
       JsonArray budget = new JsonArray();
@@ -99,6 +102,13 @@ final class ValuesJson {
       o.addProperty("limited_by", m.limitingCriterion());
       return o;
     }));
+    j.add("skin_mpe", outcome(s.skinMpe(), m -> {
+      JsonObject o = new JsonObject();
+      o.add("irradiance_W_m2", number(m.irradiance()));
+      o.add("radiant_exposure_J_m2", number(m.radiantExposure()));
+      o.add("limiting_aperture_m", number(m.apertureDiameter()));
+      return o;
+    }));
     j.add("nohd_m", outcome(s.nohd(), ValuesJson::number));
     j.add("eyewear_od_at_exit", outcome(s.eyewear(), od -> {
       JsonObject o = new JsonObject();
@@ -150,6 +160,12 @@ final class ValuesJson {
       e.peakPower().ifPresent(x -> j.add("peak_power_W", number(x)));
       e.peakFluence().ifPresent(x -> j.add("fluence_J_m2", number(x)));
       j.add("peak_field_V_m", number(e.peakField()));
+    });
+    v.mode().flatMap(m -> m.nextFocus()).ifPresent(f -> {
+      JsonObject focus = new JsonObject();
+      focus.add("distance_m", number(f.distance()));
+      focus.add("radius_m", number(f.radius()));
+      j.add("next_focus", focus);
     });
     return j;
   }
