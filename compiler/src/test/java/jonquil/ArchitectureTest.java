@@ -64,6 +64,21 @@ class ArchitectureTest {
   }
 
   @Test
+  void theOpticsAndSafetyCoresAreLibrariesThatKnowNoSpecs() {
+    noClasses().that().resideInAnyPackage("jonquil.optics..", "jonquil.safety..")
+        .should().dependOnClassesThat().resideInAnyPackage("jonquil.syntax..", "jonquil.resolve..",
+            "jonquil.analysis..", "jonquil.cli..", "jonquil.diag..", "jonquil.source..")
+        .check(classes);
+  }
+
+  @Test
+  void analysesDoNotKnowTheCli() {
+    noClasses().that().resideInAPackage("jonquil.analysis..")
+        .should().dependOnClassesThat().resideInAnyPackage("jonquil.cli..")
+        .check(classes);
+  }
+
+  @Test
   void onlyTheCliDoesConsoleOutput() {
     noClasses().that().resideOutsideOfPackage("jonquil.cli..")
         .should().accessField(System.class, "out")
