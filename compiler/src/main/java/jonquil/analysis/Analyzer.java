@@ -104,7 +104,8 @@ public final class Analyzer {
   }
 
   private static String verdict(String lead, ResolvedRequirement r, RequirementEvaluator.Verdict v) {
-    return lead + ": " + r.measure().map(m -> m.word()).orElse("value") + " is " + format(v.value(), v.unit())
+    String what = r.yield().isPresent() ? "yield" : r.measure().map(m -> m.word()).orElse("value");
+    return lead + ": " + what + " is " + format(v.value(), v.unit())
         + (v.text().isEmpty() ? "" : " (" + v.text() + ")") + ", bound " + format(v.bound(), v.unit())
         + (v.unit().equals("class") ? "" : ", margin " + format(v.margin(), v.unit()));
   }
@@ -115,6 +116,9 @@ public final class Analyzer {
       int i = (int) Math.round(value);
       var classes = jonquil.resolve.HazardClass.values();
       return i >= 0 && i < classes.length ? classes[i].label() : String.valueOf(value);
+    }
+    if (unit.equals("%")) {
+      return QuantityFormat.format(100 * value, Dimension.DIMENSIONLESS) + " %";
     }
     if (unit.equals("OD")) {
       return String.format(java.util.Locale.ROOT, "OD %.2f", value);

@@ -1,0 +1,95 @@
+package jonquil.analysis;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.OptionalDouble;
+import java.util.SplittableRandom;
+import jonquil.resolve.ResolvedElement;
+import jonquil.resolve.ResolvedModel;
+import jonquil.resolve.ResolvedTrain;
+import jonquil.resolve.Symbol;
+import jonquil.resolve.Value;
+
+/**
+ * One toleranced build of a spec: every quantity written with '± t' is drawn uniformly
+ * from its interval (the usual reading of a ± tolerance when nothing more is known), the
+ * rest kept as written. Seeded, so a yield figure is reproducible run after run.
+ */
+final class Tolerances {
+  private Tolerances() {}
+
+  /** True when anything in the model carries a tolerance. */
+  static boolean any(ResolvedModel model) {
+    for (ResolvedElement e : model.elements().values()) {
+      for (List<Value.Group> groups : e.params().values()) {
+        for (Value.Group g : groups) {
+          if (hasTolerance(g)) {
+            return true;
+          }
+        }
+      }
+    }
+    return model.trains().stream().flatMap(t -> t.paths().stream()).flatMap(p -> p.steps().stream())
+        .anyMatch(s -> s instanceof ResolvedTrain.Gap gap && gap.tolerance().isPresent());
+  }
+
+  static ResolvedModel draw(ResolvedModel model, SplittableRandom random) {
+    Map<Symbol, ResolvedElement> elements = new LinkedHashMap<>();
+    model.elements().forEach((symbol, e) -> {
+      Map<String, List<Value.Group>> params = new LinkedHashMap<>();
+      e.params().forEach((name, groups) -> params.put(name, groups.stream().map(g -> draw(g, random)).toList()));
+      elements.put(symbol, new ResolvedElement(e.symbol(), e.kind(), params));
+    });
+    List<ResolvedTrain> trains = new ArrayList<>();
+    for (ResolvedTrain t : model.trains()) {
+      List<ResolvedTrain.BeamPath> paths = new ArrayList<>();
+      for (ResolvedTrain.BeamPath p : t.paths()) {
+        List<ResolvedTrain.Step> steps = new ArrayList<>();
+        for (ResolvedTrain.Step s : p.steps()) {
+          if (s instanceof ResolvedTrain.Gap gap && gap.tolerance().isPresent()) {
+            double half = gap.tolerance().getAsDouble();
+            double length = Math.max(0, gap.length() + (2 * random.nextDouble() - 1) * half);
+            steps.add(new ResolvedTrain.Gap(length, OptionalDouble.empty(), gap.medium(), gap.range()));
+          } else {
+            steps.add(s);
+          }
+        }
+        paths.add(new ResolvedTrain.BeamPath(p.branchFrom(), steps, p.range()));
+      }
+      trains.add(new ResolvedTrain(t.file(), t.name(), paths, t.range()));
+    }
+    return new ResolvedModel(model.root(), model.scopes(), elements, trains, model.requirements(), model.references(),
+        model.diagnostics());
+  }
+
+  private static Value.Group draw(Value.Group g, SplittableRandom random) {
+    Map<String, Value> slots = new LinkedHashMap<>();
+    g.slots().forEach((k, v) -> slots.put(k, draw(v, random)));
+    return new Value.Group(slots, g.items().stream().map(i -> draw(i, random)).toList(), g.range());
+  }
+
+  private static Value draw(Value v, SplittableRandom random) {
+    if (v instanceof Value.Num n && n.tolerance().isPresent()) {
+      double half = n.tolerance().getAsDouble();
+      return new Value.Num(n.si() + (2 * random.nextDouble() - 1) * half, n.dimension(), OptionalDouble.empty(), n.range());
+    }
+    if (v instanceof Value.Group g) {
+      return draw(g, random);
+    }
+    return v;
+  }
+
+  private static boolean hasTolerance(Value.Group g) {
+    for (Value v : g.slots().values()) {
+      if (v instanceof Value.Num n && n.tolerance().isPresent()) {
+        return true;
+      }
+      if (v instanceof Value.Group inner && hasTolerance(inner)) {
+        return true;
+      }
+    }
+    return g.items().stream().anyMatch(Tolerances::hasTolerance);
+  }
+}
