@@ -25,6 +25,7 @@ public final class SafetySummary {
       Outcome<jonquil.safety.HazardClass> hazardClass,
       Outcome<jonquil.safety.Exposure> mpe,
       Outcome<jonquil.safety.Exposure> skinMpe,
+      Outcome<jonquil.safety.Exposure> ansiMpe,
       Outcome<Double> nohd,
       Outcome<jonquil.safety.OpticalDensity> eyewear,
       double exposureTime) {}
@@ -45,7 +46,8 @@ public final class SafetySummary {
       double t = SafetyModel.defaultExposureTime(wl);
       var emission = SafetyModel.emission(wl, exit.get().power(), exit.get().pulses());
       out.add(new SourceSafety(e.symbol().name(), wl, SafetyModel.hazardClass(e, exit.get()),
-          jonquil.safety.OcularMpe.at(emission, t), jonquil.safety.SkinMpe.at(emission, t), SafetyModel.nohd(e, exit.get()),
+          jonquil.safety.OcularMpe.at(emission, t), jonquil.safety.SkinMpe.at(emission, t),
+          jonquil.safety.ansi.AnsiOcularMpe.at(emission, t), SafetyModel.nohd(e, exit.get()),
           SafetyModel.eyewear(wl, exit.get(), t), t));
     }
     return out;

@@ -102,6 +102,14 @@ final class ValuesJson {
       o.addProperty("limited_by", m.limitingCriterion());
       return o;
     }));
+    j.add("mpe_ansi_z136_1", outcome(s.ansiMpe(), m -> {
+      JsonObject o = new JsonObject();
+      o.add("irradiance_W_m2", number(m.irradiance()));
+      o.add("radiant_exposure_J_m2", number(m.radiantExposure()));
+      o.add("limiting_aperture_m", number(m.apertureDiameter()));
+      o.addProperty("limited_by", m.limitingCriterion());
+      return o;
+    }));
     j.add("skin_mpe", outcome(s.skinMpe(), m -> {
       JsonObject o = new JsonObject();
       o.add("irradiance_W_m2", number(m.irradiance()));
