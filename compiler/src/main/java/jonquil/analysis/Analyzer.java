@@ -81,49 +81,13 @@ public final class Analyzer {
         OptionalDouble.of(v.bound()), OptionalDouble.of(v.margin()), v.unit(), v.text());
   }
 
-  /** The dimension of an SI unit name used in verdicts. */
-  static Dimension dimension(String unit) {
-    switch (unit) {
-      case "W":
-        return Dimension.POWER;
-      case "rad":
-        return Dimension.ANGLE;
-      case "W/m2":
-        return Dimension.IRRADIANCE;
-      case "J/m2":
-        return Dimension.FLUENCE;
-      case "V/m":
-        return Dimension.ELECTRIC_FIELD;
-      case "J":
-        return Dimension.ENERGY;
-      case "m":
-        return Dimension.LENGTH;
-      default:
-        return Dimension.DIMENSIONLESS;
-    }
-  }
-
   private static String verdict(String lead, ResolvedRequirement r, RequirementEvaluator.Verdict v) {
     String what = r.yield().isPresent() ? "yield" : r.measure().map(m -> m.word()).orElse("value");
-    return lead + ": " + what + " is " + format(v.value(), v.unit())
-        + (v.text().isEmpty() ? "" : " (" + v.text() + ")") + ", bound " + format(v.bound(), v.unit())
-        + (v.unit().equals("class") ? "" : ", margin " + format(v.margin(), v.unit()));
+    return lead + ": " + what + " is " + Figures.format(v.value(), v.unit())
+        + (v.text().isEmpty() ? "" : " (" + v.text() + ")") + ", bound " + Figures.format(v.bound(), v.unit())
+        + (v.unit().equals("class") ? "" : ", margin " + Figures.format(v.margin(), v.unit()));
   }
 
-  /** A verdict figure in its unit: hazard classes by name, densities as 'OD x', quantities with prefixes. */
-  static String format(double value, String unit) {
-    if (unit.equals("class")) {
-      int i = (int) Math.round(value);
-      var classes = jonquil.resolve.HazardClass.values();
-      return i >= 0 && i < classes.length ? classes[i].label() : String.valueOf(value);
-    }
-    if (unit.equals("%")) {
-      return QuantityFormat.format(100 * value, Dimension.DIMENSIONLESS) + " %";
-    }
-    if (unit.equals("OD")) {
-      return String.format(java.util.Locale.ROOT, "OD %.2f", value);
-    }
-    return QuantityFormat.format(value, dimension(unit));
-  }
+
 
 }

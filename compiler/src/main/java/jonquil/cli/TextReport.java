@@ -2,13 +2,12 @@ package jonquil.cli;
 
 import java.io.PrintStream;
 import jonquil.Result;
+import jonquil.analysis.Figures;
 import jonquil.analysis.RequirementOutcome;
 import jonquil.analysis.RequirementStatus;
 import jonquil.diag.Diagnostic;
 import jonquil.diag.Related;
 import jonquil.diag.Severity;
-import jonquil.units.Dimension;
-import jonquil.units.QuantityFormat;
 
 /**
  * The default report: one compiler-style line per finding, which editors and CI log
@@ -45,9 +44,8 @@ final class TextReport {
     StringBuilder line = new StringBuilder(location(run, r.file(), r.range().start()))
         .append(": requirement ").append(r.status().word()).append(": ").append(oneLine(r.text()));
     if (r.value().isPresent()) {
-      Dimension dim = dimension(r.siUnit());
-      line.append(" (value ").append(QuantityFormat.format(r.value().getAsDouble(), dim));
-      r.margin().ifPresent(m -> line.append(", margin ").append(QuantityFormat.format(m, dim)));
+      line.append(" (value ").append(Figures.format(r.value().getAsDouble(), r.siUnit()));
+      r.margin().ifPresent(m -> line.append(", margin ").append(Figures.format(m, r.siUnit())));
       line.append(')');
     }
     if (r.reason() != null && !r.reason().isBlank()) {
@@ -74,28 +72,6 @@ final class TextReport {
   private static String location(CheckRun run, java.nio.file.Path file, int offset) {
     Position p = Position.of(run.result().files(), file, offset);
     return PathText.relative(run.cwd(), file) + ":" + p.line() + ":" + p.column();
-  }
-
-  /** The dimension of a requirement's SI unit name, for formatting its value and margin. */
-  static Dimension dimension(String siUnit) {
-    switch (siUnit == null ? "" : siUnit) {
-      case "W":
-        return Dimension.POWER;
-      case "rad":
-        return Dimension.ANGLE;
-      case "m":
-        return Dimension.LENGTH;
-      case "J":
-        return Dimension.ENERGY;
-      case "W/m2":
-        return Dimension.IRRADIANCE;
-      case "J/m2":
-        return Dimension.FLUENCE;
-      case "V/m":
-        return Dimension.ELECTRIC_FIELD;
-      default:
-        return Dimension.DIMENSIONLESS;
-    }
   }
 
   /** A line break inside a message would split one finding into two for every log parser. */

@@ -94,29 +94,9 @@ final class ValuesJson {
     j.add("wavelength_m", number(s.wavelength()));
     j.add("exposure_time_s", number(s.exposureTime()));
     j.add("hazard_class", outcome(s.hazardClass(), c -> new JsonPrimitive(c.name().replace("CLASS_", ""))));
-    j.add("mpe", outcome(s.mpe(), m -> {
-      JsonObject o = new JsonObject();
-      o.add("irradiance_W_m2", number(m.irradiance()));
-      o.add("radiant_exposure_J_m2", number(m.radiantExposure()));
-      o.add("limiting_aperture_m", number(m.apertureDiameter()));
-      o.addProperty("limited_by", m.limitingCriterion());
-      return o;
-    }));
-    j.add("mpe_ansi_z136_1", outcome(s.ansiMpe(), m -> {
-      JsonObject o = new JsonObject();
-      o.add("irradiance_W_m2", number(m.irradiance()));
-      o.add("radiant_exposure_J_m2", number(m.radiantExposure()));
-      o.add("limiting_aperture_m", number(m.apertureDiameter()));
-      o.addProperty("limited_by", m.limitingCriterion());
-      return o;
-    }));
-    j.add("skin_mpe", outcome(s.skinMpe(), m -> {
-      JsonObject o = new JsonObject();
-      o.add("irradiance_W_m2", number(m.irradiance()));
-      o.add("radiant_exposure_J_m2", number(m.radiantExposure()));
-      o.add("limiting_aperture_m", number(m.apertureDiameter()));
-      return o;
-    }));
+    j.add("mpe", outcome(s.mpe(), ValuesJson::mpe));
+    j.add("mpe_ansi_z136_1", outcome(s.ansiMpe(), ValuesJson::mpe));
+    j.add("skin_mpe", outcome(s.skinMpe(), ValuesJson::mpe));
     j.add("nohd_m", outcome(s.nohd(), ValuesJson::number));
     j.add("eyewear_od_at_exit", outcome(s.eyewear(), od -> {
       JsonObject o = new JsonObject();
@@ -126,6 +106,15 @@ final class ValuesJson {
     }));
     j.addProperty("caution", jonquil.safety.Outcome.CAUTION);
     return j;
+  }
+
+  private static JsonElement mpe(jonquil.safety.Exposure m) {
+    JsonObject o = new JsonObject();
+    o.add("irradiance_W_m2", number(m.irradiance()));
+    o.add("radiant_exposure_J_m2", number(m.radiantExposure()));
+    o.add("limiting_aperture_m", number(m.apertureDiameter()));
+    o.addProperty("limited_by", m.limitingCriterion());
+    return o;
   }
 
   /** A safety figure with its standard, or null with the reason it was not evaluated. */
