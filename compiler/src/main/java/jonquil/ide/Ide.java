@@ -1,0 +1,80 @@
+package jonquil.ide;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import jonquil.Result;
+import jonquil.source.TextRange;
+
+/**
+ * Answers an editor's questions (hover, definition, references, rename, symbols) from one
+ * check {@link Result}, in plain records, so the language server only translates them.
+ */
+public final class Ide {
+  private Ide() {}
+
+  public static Optional<HoverInfo> hover(Result r, Path file, int offset) {
+    return Hover.at(r, Models.norm(file), offset);
+  }
+
+  public static List<Location> definition(Result r, Path file, int offset) {
+    Path f = Models.norm(file);
+    Optional<Names.Occurrence> at = Names.of(r).at(f, offset);
+    if (at.isPresent()) {
+      var s = at.get().symbol();
+      if (s.isCatalog() || s.nameNode().isEmpty()) {
+        return List.of();
+      }
+      return List.of(new Location(s.file(), s.nameNode().get().range()));
+    }
+    return Models.tree(r, f).flatMap(tree -> Syntax.use(tree, offset)).map(u -> useTarget(f, u.target()))
+        .filter(target -> r.files().containsKey(target))
+        .map(target -> List.of(new Location(target, TextRange.EMPTY))).orElse(List.of());
+  }
+
+  public static List<Location> references(Result r, Path file, int offset, boolean includeDeclaration) {
+    Names names = Names.of(r);
+    Optional<Names.Occurrence> at = names.at(Models.norm(file), offset);
+    if (at.isEmpty()) {
+      return List.of();
+    }
+    List<Location> out = new ArrayList<>();
+    for (Names.Occurrence o : names.of(at.get().key())) {
+      if (includeDeclaration || !o.declaration()) {
+        out.add(new Location(o.file(), o.range()));
+      }
+    }
+    return out;
+  }
+
+  public static Optional<TextRange> prepareRename(Result r, Path file, int offset) {
+    return Renamer.renamable(Names.of(r), Models.norm(file), offset).map(Names.Occurrence::range);
+  }
+
+  public static RenameResult rename(Result r, Path file, int offset, String newName) {
+    return Renamer.rename(r, Models.norm(file), offset, newName);
+  }
+
+  public static List<SymbolInfo> documentSymbols(Result r, Path file) {
+    return Outline.of(r, Models.norm(file));
+  }
+
+  public static List<SymbolInfo> workspaceSymbols(Result r, String query) {
+    return Outline.search(r, query);
+  }
+
+  /**
+   * The file of each {@link #workspaceSymbols} answer, in the same order: a {@link SymbolInfo}
+   * carries no file, and a workspace symbol needs one.
+   */
+  public static List<Location> workspaceSymbolLocations(Result r, String query) {
+    return Outline.searchLocations(r, query);
+  }
+
+  /** The file a {@code use} line names, relative to the file that contains it. */
+  static Path useTarget(Path file, String target) {
+    Path dir = file.getParent();
+    return Models.norm(dir == null ? Path.of(target) : dir.resolve(target));
+  }
+}

@@ -1,0 +1,125 @@
+package jonquil.ide;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import jonquil.analysis.Exposure;
+import jonquil.analysis.PortValue;
+import jonquil.analysis.SafetySummary;
+import jonquil.analysis.TrainSolution;
+import jonquil.optics.Coherency;
+import jonquil.optics.Handedness;
+import jonquil.resolve.ElementKind;
+import jonquil.resolve.ResolvedModel;
+import jonquil.units.Dimension;
+
+/** Describes the light arriving at and leaving an element from the solved train, in Markdown tables. */
+final class LightText {
+  private LightText() {}
+
+  private record Row(String label, PortValue value) {}
+
+  static final String NO_ANALYSIS =
+      "_No beam analysis: the spec has errors, so power and polarization were not computed._";
+
+  /** Appends the power, beam and polarization at every port of the element, or says why there is none. */
+  static void append(StringBuilder md, ResolvedModel model, Optional<TrainSolution> solution, String name,
+      ElementKind kind) {
+    if (solution.isEmpty()) {
+      Md.para(md).append(NO_ANALYSIS);
+      return;
+    }
+    TrainSolution s = solution.get();
+    List<Row> rows = rows(s, name, kind);
+    if (rows.isEmpty()) {
+      Md.para(md).append("_No beam reaches ").append(Md.code(name)).append("._");
+      return;
+    }
+    Md.para(md).append("**Light** (power in the table frame, summed over the source's lines)\n\n");
+    md.append("| | power | beam radius | irradiance avg / peak | peak field |\n|---|---|---|---|---|\n");
+    for (Row row : rows) {
+      Optional<Exposure> e = row.value().exposure();
+      md.append("| ").append(row.label()).append(" | ").append(Md.q(row.value().power(), Dimension.POWER)).append(" | ")
+          .append(e.map(x -> Md.q(x.beamRadius(), Dimension.LENGTH)).orElse("unknown")).append(" | ")
+          .append(e.map(x -> Md.q(x.averageIrradiance(), Dimension.IRRADIANCE) + " / "
+              + Md.q(x.peakIrradiance(), Dimension.IRRADIANCE)).orElse("unknown")).append(" | ")
+          .append(e.map(x -> Md.q(x.peakField(), Dimension.ELECTRIC_FIELD)).orElse("unknown")).append(" |\n");
+    }
+    if (rows.stream().anyMatch(r -> r.value().exposure().isEmpty())) {
+      md.append("\nBeam size unknown where marked: the source states no `beam`.\n");
+    }
+    for (Row row : rows) {
+      row.value().exposure().filter(Exposure::pulsed).ifPresent(x -> md.append("\nPulses at ").append(row.label())
+          .append(": energy ").append(Md.q(x.pulseEnergy().getAsDouble(), Dimension.ENERGY))
+          .append(", peak power ").append(Md.q(x.peakPower().getAsDouble(), Dimension.POWER))
+          .append(", peak fluence ").append(Md.q(x.peakFluence().getAsDouble(), Dimension.FLUENCE)).append('\n'));
+    }
+    Map<String, Double> margins = SafetySummary.damageMargins(model, s);
+    if (margins.containsKey(name)) {
+      md.append("\nDamage margin: ").append(Md.num(margins.get(name))).append(" (threshold ÷ exposure)\n");
+    }
+    polarization(md, rows);
+  }
+
+  private static List<Row> rows(TrainSolution s, String name, ElementKind kind) {
+    List<Row> rows = new ArrayList<>();
+    s.incidentAt(name).ifPresent(v -> rows.add(new Row("in", v)));
+    for (String port : kind.ports()) {
+      Optional<PortValue> v = s.port(name + "." + port);
+      if (v.isEmpty() && kind == ElementKind.SOURCE) {
+        v = s.port(name);
+      }
+      v.ifPresent(x -> rows.add(new Row("out `" + port + "`", x)));
+    }
+    return rows;
+  }
+
+  private static void polarization(StringBuilder md, List<Row> rows) {
+    Md.para(md).append("**Polarization** (azimuth against the table frame: x horizontal, y up)\n\n");
+    md.append("| | azimuth | ellipticity | handedness (as seen by the receiver, looking back towards the source)"
+        + " | DOP | Stokes [S0, S1, S2, S3] |\n|---|---|---|---|---|---|\n");
+    for (Row row : rows) {
+      Coherency c = row.value().light();
+      if (c.power() <= 0) {
+        md.append("| ").append(row.label()).append(" | no light | | | | |\n");
+        continue;
+      }
+      if (c.dop() < 1e-9) {
+        md.append("| ").append(row.label()).append(" | — | — | none (unpolarized) | 0 | ").append(stokes(c)).append(" |\n");
+        continue;
+      }
+      String azimuth = Md.deg(clean(c.azimuth(), 1))
+          + (row.value().vertical() ? " (carried frame: the beam runs vertically)" : "");
+      md.append("| ").append(row.label()).append(" | ").append(azimuth).append(" | ")
+          .append(Md.deg(clean(c.ellipticityAngle(), 1))).append(" | ")
+          .append(hand(c.handedness())).append(" | ").append(Md.num(clean(c.dop(), 1))).append(" | ")
+          .append(stokes(c)).append(" |\n");
+    }
+  }
+
+  private static String hand(Handedness h) {
+    switch (h) {
+      case RIGHT:
+        return "right";
+      case LEFT:
+        return "left";
+      default:
+        return "none";
+    }
+  }
+
+  private static String stokes(Coherency c) {
+    double[] s = c.stokes();
+    List<String> parts = new ArrayList<>();
+    for (double x : s) {
+      parts.add(Md.num(clean(x, s[0])));
+    }
+    return "[" + String.join(", ", parts) + "] W";
+  }
+
+  /** Rounding leaves ulps where the value is zero; they would print as noise. */
+  private static double clean(double x, double scale) {
+    return Math.abs(x) < 1e-12 * Math.max(Math.abs(scale), 1e-300) ? 0 : x;
+  }
+}

@@ -1,0 +1,105 @@
+package jonquil.ide;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
+import jonquil.Result;
+import jonquil.source.SourceFile;
+import jonquil.source.TextRange;
+import jonquil.syntax.Declaration;
+import jonquil.syntax.Property;
+import jonquil.syntax.RequireDecl;
+import jonquil.syntax.Requirement;
+import jonquil.syntax.SpecFile;
+import jonquil.syntax.TrainDecl;
+import jonquil.syntax.UseDecl;
+
+/** The outline of a file and the workspace-wide symbol search, both read from the syntax trees. */
+final class Outline {
+  static final int WORKSPACE_CAP = 200;
+
+  private Outline() {}
+
+  static List<SymbolInfo> of(Result r, Path file) {
+    SourceFile text = r.files().get(file);
+    SpecFile f = Models.tree(r, file).orElse(null);
+    if (f == null) {
+      return List.of();
+    }
+    List<SymbolInfo> out = new ArrayList<>();
+    for (UseDecl u : f.uses()) {
+      out.add(node("use \"" + u.target() + "\"", "use", u.range(), u.targetRange(), List.of()));
+    }
+    for (Declaration d : f.declarations()) {
+      out.add(declaration(text, d));
+    }
+    for (TrainDecl t : f.trains()) {
+      List<SymbolInfo> paths = new ArrayList<>();
+      for (TrainDecl.BeamPath p : t.paths()) {
+        TextRange first = p.steps().isEmpty() ? p.range() : p.steps().get(0).range();
+        paths.add(node(Md.oneLine(text.slice(p.range())), "path", p.range(), first, List.of()));
+      }
+      out.add(node(t.name().map(n -> n.text()).orElse("train"), "train", t.range(),
+          t.name().map(n -> n.range()).orElse(t.range()), paths));
+    }
+    for (RequireDecl block : f.requires()) {
+      List<SymbolInfo> lines = new ArrayList<>();
+      for (Requirement q : block.requirements()) {
+        lines.add(node(Md.oneLine(q.text()), "requirement", q.range(), q.check().measure().range(), List.of()));
+      }
+      out.add(node("require", "require", block.range(), keyword(block.range(), "require"), lines));
+    }
+    out.sort(Comparator.comparing(SymbolInfo::range));
+    return out;
+  }
+
+  private static SymbolInfo declaration(SourceFile text, Declaration d) {
+    List<SymbolInfo> children = new ArrayList<>();
+    for (Property p : d.properties()) {
+      children.add(node(Md.oneLine(text.slice(p.range())), "parameter", p.range(), p.key().range(), List.of()));
+    }
+    return node(d.name().text(), d.kind().text(), d.range(), d.name().range(), children);
+  }
+
+  /** A node whose selection is clamped inside its range, as editors require. */
+  private static SymbolInfo node(String name, String kind, TextRange range, TextRange selection, List<SymbolInfo> kids) {
+    TextRange full = TextRange.span(range, selection);
+    return new SymbolInfo(name.isBlank() ? kind : name, kind, full, selection, kids);
+  }
+
+  private static TextRange keyword(TextRange range, String word) {
+    return new TextRange(range.start(), Math.min(range.end(), range.start() + word.length()));
+  }
+
+  static List<SymbolInfo> search(Result r, String query) {
+    return matches(r, query).stream().map(Match::symbol).toList();
+  }
+
+  static List<Location> searchLocations(Result r, String query) {
+    return matches(r, query).stream().map(m -> new Location(m.file(), m.symbol().selectionRange())).toList();
+  }
+
+  private record Match(Path file, SymbolInfo symbol) {}
+
+  private static List<Match> matches(Result r, String query) {
+    String q = query == null ? "" : query.toLowerCase(Locale.ROOT);
+    List<Match> out = new ArrayList<>();
+    List<Path> files = r.files().keySet().stream().filter(p -> Models.isSpec(r, p))
+        .sorted(Comparator.comparing(Path::toString)).toList();
+    for (Path file : files) {
+      for (SymbolInfo s : of(r, file)) {
+        boolean declared = !s.kind().equals("use") && !s.kind().equals("require")
+            && !(s.kind().equals("train") && s.selectionRange().equals(s.range()));
+        if (declared && s.name().toLowerCase(Locale.ROOT).contains(q)) {
+          out.add(new Match(file, new SymbolInfo(s.name(), s.kind(), s.range(), s.selectionRange(), List.of())));
+          if (out.size() == WORKSPACE_CAP) {
+            return out;
+          }
+        }
+      }
+    }
+    return out;
+  }
+}

@@ -1,0 +1,106 @@
+package jonquil.ide;
+
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+import java.util.Map;
+import jonquil.safety.Outcome;
+import jonquil.testing.Golden;
+import jonquil.testing.Repo;
+import org.junit.jupiter.api.Test;
+
+/** Hover, one golden Markdown file per kind of node, the cursor marked $0 in an inline spec. */
+class HoverTest {
+  private static final Path GOLDEN = Repo.root().resolve("compiler/src/test/resources/ide/hover");
+
+  /** The bench with $0 placed before the n-th occurrence of a word. */
+  private static String bench(String word, int nth) {
+    String text = Specs.BENCH;
+    int at = -1;
+    for (int i = 0; i <= nth; i++) {
+      at = text.indexOf(word, at + 1);
+    }
+    return text.substring(0, at) + "$0" + text.substring(at);
+  }
+
+  private static String hover(String spec) {
+    return hover(Map.of("main.jonq", spec));
+  }
+
+  private static String hover(Map<String, String> files) {
+    Specs.Checked c = Specs.check(files);
+    HoverInfo h = Ide.hover(c.result(), c.file(), c.offset()).orElseThrow(() -> new AssertionError("no hover"));
+    assertTrue(h.range().contains(c.offset()), "the hover range covers the cursor");
+    String under = c.result().files().get(c.file()).slice(h.range());
+    return "<!-- hover over '" + under.replaceAll("\\s+", " ") + "' -->\n\n" + h.markdown() + "\n";
+  }
+
+  @Test
+  void anElementUseShowsItsParametersLightPolarizationAndDamageMargin() {
+    String md = hover(bench("m1", 1));
+    assertTrue(md.contains("as seen by the receiver, looking back towards the source"));
+    Golden.check(GOLDEN.resolve("element.md"), md);
+  }
+
+  @Test
+  void aWindowShowsBothOfItsPorts() {
+    Golden.check(GOLDEN.resolve("window.md"), hover(bench("w1", 0)));
+  }
+
+  @Test
+  void aSourceShowsItsLinesBeamAndEyeSafetyWithTheCaution() {
+    String md = hover(bench("seed", 0));
+    assertTrue(md.contains(Outcome.CAUTION));
+    Golden.check(GOLDEN.resolve("source.md"), md);
+  }
+
+  @Test
+  void aDeclaredMaterialShowsItsIndexAtTheTrainsWavelengths() {
+    Golden.check(GOLDEN.resolve("material-declared.md"), hover(bench("slab_glass", 1)));
+  }
+
+  @Test
+  void aCatalogMaterialCitesItsReference() {
+    String md = hover(bench("silver", 0));
+    assertTrue(md.contains("Johnson and R. W. Christy"));
+    Golden.check(GOLDEN.resolve("material-catalog.md"), md);
+  }
+
+  @Test
+  void aQuantityShowsItsSiValueAndAlternatives() {
+    Golden.check(GOLDEN.resolve("quantity.md"), hover(bench("5 kW/cm2", 0)));
+  }
+
+  @Test
+  void aFailedRequirementShowsValueBoundMarginAndItsFinding() {
+    String md = hover(bench("power at spot >= 1.95", 0));
+    assertTrue(md.contains("J609"));
+    Golden.check(GOLDEN.resolve("requirement.md"), md);
+  }
+
+  @Test
+  void aSpecWithErrorsSaysThatNothingWasComputed() {
+    String spec = """
+        source seed { wavelength 1064 nm; power 2 W }
+        mirror m1 { reflectance 140 % }
+        dump d1
+        train main { seed -> 10 mm -> $0m1 -> 10 mm -> d1 }
+        """;
+    String md = hover(spec);
+    assertTrue(md.contains("No beam analysis"));
+    Golden.check(GOLDEN.resolve("no-analysis.md"), md);
+  }
+
+  @Test
+  void anElementFromAPartLibrarySaysWhereItIsDeclared() {
+    Map<String, String> files = Map.of(
+        "main.jonq", """
+            use "parts/optics.jonq"
+            source seed { wavelength 532 nm; power 10 mW; beam waist 0.5 mm }
+            dump d1
+            train main { seed -> 10 mm -> $0fold -> 10 mm -> d1 }
+            """,
+        "parts/optics.jonq", "mirror fold { reflectance 99 %; aoi 45 deg }\n");
+    Golden.check(GOLDEN.resolve("element-from-library.md"), hover(files));
+  }
+}
