@@ -1,12 +1,12 @@
 package jonquil.ide;
 
+import jonquil.analysis.MaterialIndex;
 import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.TreeSet;
 import jonquil.optics.material.CatalogMaterial;
 import jonquil.optics.material.MaterialCatalog;
-import jonquil.optics.material.TabulatedIndex;
 import jonquil.resolve.CatalogNames;
 import jonquil.resolve.ElementKind;
 import jonquil.resolve.ResolvedElement;
@@ -82,56 +82,12 @@ final class MaterialText {
     return name.filter(v -> v instanceof Value.Ref).map(v -> ((Value.Ref) v).symbol());
   }
 
-  /** The same evaluation the analysis makes for each way of declaring a material. */
+  /** The index the analysis itself uses (one evaluation, so hover and verdicts cannot differ). */
   private static Optional<Complex> index(List<ResolvedModel> models, Symbol material, double wl) {
     if (material.isCatalog()) {
-      return catalogEntry(models, material).map(e -> e.absoluteIndex(wl));
+      return models.isEmpty() ? Optional.empty() : Optional.of(MaterialIndex.at(models.get(0), material, wl));
     }
-    Optional<ResolvedElement> found = declared(models, material);
-    if (found.isEmpty()) {
-      return Optional.empty();
-    }
-    ResolvedElement m = found.get();
-    Optional<Symbol> ref = catalogRef(m);
-    if (ref.isPresent()) {
-      return index(models, ref.get(), wl);
-    }
-    OptionalDouble n = m.number("index", "n");
-    if (n.isPresent()) {
-      return Optional.of(new Complex(n.getAsDouble(), m.number("k", "k").orElse(0)));
-    }
-    OptionalDouble no = m.number("ordinary", "n_o");
-    if (no.isPresent()) {
-      return Optional.of(new Complex(no.getAsDouble(), 0));
-    }
-    double l2 = wl * wl;
-    Optional<Value.Group> cauchy = m.param("cauchy");
-    if (cauchy.isPresent()) {
-      Value.Group g = cauchy.get();
-      double a = g.number("a").orElse(1.5);
-      return Optional.of(new Complex(a + g.number("b").orElse(0) / l2 + g.number("c").orElse(0) / (l2 * l2), 0));
-    }
-    Optional<Value.Group> sellmeier = m.param("sellmeier");
-    if (sellmeier.isPresent()) {
-      double n2 = 1;
-      for (Value.Group term : sellmeier.get().items()) {
-        n2 += term.number("b").orElse(0) * l2 / (l2 - term.number("c").orElse(0));
-      }
-      return Optional.of(new Complex(Math.sqrt(Math.max(n2, 0)), 0));
-    }
-    Optional<Value> rows = m.param("table").flatMap(g -> g.slot("rows"));
-    if (rows.isPresent() && rows.get() instanceof Value.Table t) {
-      int size = t.rows().size();
-      double[] w = new double[size];
-      double[] nn = new double[size];
-      double[] k = new double[size];
-      for (int i = 0; i < size; i++) {
-        w[i] = t.rows().get(i)[0];
-        nn[i] = t.rows().get(i)[1];
-        k[i] = t.rows().get(i)[2];
-      }
-      return Optional.of(new TabulatedIndex(w, nn, k).index(wl));
-    }
-    return Optional.empty();
+    return models.stream().filter(m -> m.element(material).isPresent()).findFirst()
+        .map(m -> MaterialIndex.at(m, material, wl));
   }
 }
