@@ -17,10 +17,14 @@ final class Layout {
   private int depth;
   private boolean inTrain;
   private int lineBreaks;
+  private final int[] previousSignificant;
+  private final int[] nextSignificant;
 
   private Layout(List<Lexeme> lexemes, FormatOptions options) {
     this.lexemes = lexemes;
     this.options = options;
+    this.previousSignificant = previousSignificant(lexemes);
+    this.nextSignificant = nextSignificant(lexemes);
   }
 
   static List<Line> lines(List<Lexeme> lexemes, FormatOptions options) {
@@ -84,22 +88,37 @@ final class Layout {
    * starts the line after it (comments and blank lines in between do not count).
    */
   private boolean continuesPath(int nl) {
-    for (int j = nl - 1; j >= 0; j--) {
-      Lexeme t = lexemes.get(j);
-      if (t.significant()) {
-        if (t.kind() == LexemeKind.ARROW) {
-          return true;
-        }
-        break;
+    return isArrow(previousSignificant[nl]) || isArrow(nextSignificant[nl]);
+  }
+
+  private boolean isArrow(int index) {
+    return index >= 0 && lexemes.get(index).kind() == LexemeKind.ARROW;
+  }
+
+  /** For each lexeme, the index of the nearest significant lexeme before it (-1 if none): one pass, not one per line break. */
+  private static int[] previousSignificant(List<Lexeme> lexemes) {
+    int[] result = new int[lexemes.size()];
+    int last = -1;
+    for (int i = 0; i < lexemes.size(); i++) {
+      result[i] = last;
+      if (lexemes.get(i).significant()) {
+        last = i;
       }
     }
-    for (int j = nl + 1; j < lexemes.size(); j++) {
-      Lexeme t = lexemes.get(j);
-      if (t.significant()) {
-        return t.kind() == LexemeKind.ARROW;
+    return result;
+  }
+
+  /** For each lexeme, the index of the nearest significant lexeme after it (-1 if none). */
+  private static int[] nextSignificant(List<Lexeme> lexemes) {
+    int[] result = new int[lexemes.size()];
+    int next = -1;
+    for (int i = lexemes.size() - 1; i >= 0; i--) {
+      result[i] = next;
+      if (lexemes.get(i).significant()) {
+        next = i;
       }
     }
-    return false;
+    return result;
   }
 
   private void add(Lexeme t) {
