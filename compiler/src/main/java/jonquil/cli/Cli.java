@@ -22,6 +22,7 @@ public final class Cli {
   public static int run(String[] args, PrintStream out, PrintStream err, Path cwd, Object... extraSubcommands) {
     CommandLine cli = new CommandLine(new JonquilCommand());
     cli.addSubcommand(new CommandLine(new CheckCommand(out, err, cwd)));
+    cli.addSubcommand(new CommandLine(new FormatCommand(out, err, cwd)));
     for (Object extra : extraSubcommands) {
       cli.addSubcommand(extra);
     }
