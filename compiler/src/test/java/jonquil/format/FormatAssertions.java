@@ -24,38 +24,6 @@ final class FormatAssertions {
     return once;
   }
 
-  /**
-   * The checks that need no parser, for text the parser rejects only because of a block
-   * comment: this version's lexer reads every block comment that does not end the file as
-   * unterminated (J106), so block-comment layout can only be tested below {@code format}.
-   */
-  static String rendersFaithfully(String text, String name) {
-    String once = Formatter.render(text, FormatOptions.DEFAULT);
-    assertEquals(Formatter.tokens(text), Formatter.tokens(once), name + ": tokens changed:\n" + once);
-    assertEquals(once, Formatter.render(once, FormatOptions.DEFAULT), name + ": formatting twice changes the text");
-    assertLayout(once, name);
-    return once;
-  }
-
-  /**
-   * True when {@code text} is well formed apart from its block comments: each is closed,
-   * and with each replaced by a space the text parses without errors.
-   */
-  static boolean wellFormedButForBlockComments(String text) {
-    StringBuilder without = new StringBuilder();
-    boolean any = false;
-    for (Lexeme l : Lexer.lex(text)) {
-      if (l.kind() == LexemeKind.BLOCK_COMMENT) {
-        if (l.text().length() < 4 || !l.text().endsWith("*/")) {
-          return false;
-        }
-        any = true;
-      }
-      without.append(l.spaceBefore() ? " " : "").append(l.kind() == LexemeKind.BLOCK_COMMENT ? " " : l.text());
-    }
-    return any && !Formatter.hasSyntaxErrors(FormatCorpus.source(without.toString()));
-  }
-
   private static void assertLayout(String text, String name) {
     if (text.isEmpty()) {
       return;

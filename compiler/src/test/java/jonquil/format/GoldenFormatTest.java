@@ -37,9 +37,7 @@ class GoldenFormatTest {
     if (crlf) {
       text = text.replace("\n", "\r\n");
     }
-    String formatted = Formatter.hasSyntaxErrors(FormatCorpus.source(text))
-        ? blockCommentCase(text, name)
-        : FormatAssertions.formatsFaithfully(text, name);
+    String formatted = FormatAssertions.formatsFaithfully(text, name);
     if (crlf) {
       assertTrue(formatted.endsWith("\r\n"), "CRLF input must give CRLF output");
       assertFalse(formatted.replace("\r\n", "").contains("\n") || formatted.replace("\r\n", "").contains("\r"),
@@ -49,9 +47,4 @@ class GoldenFormatTest {
     Golden.check(dir().resolve(name + ".formatted"), formatted);
   }
 
-  /** See {@link FormatAssertions#rendersFaithfully}: block comments are tested below the parser for now. */
-  private static String blockCommentCase(String text, String name) {
-    assertTrue(FormatAssertions.wellFormedButForBlockComments(text), name + " has syntax errors");
-    return FormatAssertions.rendersFaithfully(text, name);
-  }
 }

@@ -33,9 +33,9 @@ class RandomEditTest {
       if (!Formatter.hasSyntaxErrors(FormatCorpus.source(text))) {
         FormatAssertions.formatsFaithfully(text, name);
         tried++;
-      } else if (FormatAssertions.wellFormedButForBlockComments(text)) {
-        FormatAssertions.rendersFaithfully(text, name);
-        withBlockComments++;
+        if (text.contains("/*")) {
+          withBlockComments++;
+        }
       }
     }
     assertTrue(tried > VARIANTS / 3, "only " + tried + " edited specs still parsed");

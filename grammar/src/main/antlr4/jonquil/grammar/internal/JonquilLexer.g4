@@ -65,7 +65,9 @@ UNTERMINATED_STRING : '"' (~["\\\r\n] | '\\' ~[\r\n])* ;
 
 LINE_COMMENT  : '//' ~[\r\n]* -> channel(COMMENTS) ;
 BLOCK_COMMENT : '/*' .*? '*/' -> channel(COMMENTS) ;
-UNTERMINATED_COMMENT : '/*' .*? EOF -> channel(ERRORS) ;
+// Only a comment with no '*/' anywhere after it is unterminated (a '.*? EOF' rule would
+// outmatch every closed comment, since the lexer takes the longest match).
+UNTERMINATED_COMMENT : '/*' (~'*' | '*'+ ~[*/])* '*'* EOF -> channel(ERRORS) ;
 
 NL          : '\r'? '\n' | '\r' ;
 WS          : [ \t\f\uFEFF]+ -> skip ;
