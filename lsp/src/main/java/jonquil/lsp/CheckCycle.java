@@ -1,0 +1,149 @@
+package jonquil.lsp;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+import java.util.function.Supplier;
+import jonquil.Checker;
+import jonquil.Result;
+import jonquil.Workspace;
+import jonquil.source.SourceFile;
+import org.eclipse.lsp4j.Diagnostic;
+import org.eclipse.lsp4j.PublishDiagnosticsParams;
+import org.eclipse.lsp4j.services.LanguageClient;
+
+/** One check of all open documents, publishing each affected file's diagnostics for the version they saw and dropping stale ones. */
+final class CheckCycle implements Runnable {
+  /** Marks a project root where there is no version control, as the command line does. */
+  static final String ROOT_MARKER = ".jonquil-root";
+
+  private record Published(String uri, Integer version, List<Diagnostic> diagnostics) {}
+
+  private final Documents documents;
+  private final Snapshots snapshots;
+  private final Supplier<List<Path>> folders;
+  private final Supplier<Convert> convert;
+  private final Supplier<LanguageClient> client;
+  /** What the editor shows now, per file; touched by the worker thread only. */
+  private final Map<Path, Published> published = new HashMap<>();
+
+  CheckCycle(Documents documents, Snapshots snapshots, Supplier<List<Path>> folders, Supplier<Convert> convert,
+      Supplier<LanguageClient> client) {
+    this.documents = documents;
+    this.snapshots = snapshots;
+    this.folders = folders;
+    this.convert = convert;
+    this.client = client;
+  }
+
+  @Override
+  public void run() {
+    Map<Path, Documents.Doc> open = documents.snapshot();
+    Map<Path, String> buffers = new HashMap<>();
+    Map<Path, Integer> versions = new HashMap<>();
+    Map<Path, List<Path>> byRoot = new LinkedHashMap<>();
+    List<Path> roots = folders.get();
+    open.values().stream().sorted((a, b) -> a.path().compareTo(b.path())).forEach(doc -> {
+      buffers.put(doc.path(), doc.text());
+      versions.put(doc.path(), doc.version());
+      byRoot.computeIfAbsent(projectRoot(doc.path(), roots), k -> new ArrayList<>()).add(doc.path());
+    });
+    List<Result> results = new ArrayList<>();
+    byRoot.forEach((root, files) -> results.add(Checker.check(Workspace.withOverlay(root, buffers), files)));
+    snapshots.publish(new Snapshots.Snapshot(results, versions));
+    publish(open, results);
+  }
+
+  /** After a failed run: every open document shows that checking failed, at its current version. */
+  void publishFailure(String message) {
+    LanguageClient to = client.get();
+    if (to == null) {
+      return;
+    }
+    for (Documents.Doc doc : documents.snapshot().values()) {
+      List<Diagnostic> diagnostics = List.of(Convert.internalError(message));
+      published.put(doc.path(), new Published(doc.uri(), doc.version(), diagnostics));
+      to.publishDiagnostics(new PublishDiagnosticsParams(doc.uri(), diagnostics, doc.version()));
+    }
+    snapshots.releaseAll();
+  }
+
+  private void publish(Map<Path, Documents.Doc> open, List<Result> results) {
+    LanguageClient to = client.get();
+    if (to == null) {
+      return;
+    }
+    Convert conv = convert.get();
+    Map<Path, SourceFile> sources = new HashMap<>();
+    Map<Path, Set<jonquil.diag.Diagnostic>> byFile = new LinkedHashMap<>();
+    for (Result r : results) {
+      r.files().forEach(sources::putIfAbsent);
+      for (jonquil.diag.Diagnostic d : r.diagnostics()) {
+        byFile.computeIfAbsent(d.file(), k -> new LinkedHashSet<>()).add(d);
+      }
+    }
+    Set<Path> targets = new LinkedHashSet<>(open.keySet());
+    targets.addAll(byFile.keySet());
+    targets.addAll(published.keySet());
+    for (Path path : targets) {
+      Documents.Doc doc = open.get(path);
+      if (doc != null) {
+        Optional<Documents.Doc> now = documents.get(path);
+        if (now.isEmpty() || now.get().version() != doc.version()) {
+          continue; // stale: the editor has moved on, and a newer run is already requested
+        }
+      } else if (documents.get(path).isPresent()) {
+        continue; // opened during this run: the next run covers it with its version
+      }
+      List<Diagnostic> diagnostics = new ArrayList<>();
+      for (jonquil.diag.Diagnostic d : byFile.getOrDefault(path, Set.of())) {
+        diagnostics.add(conv.diagnostic(d, sources::get));
+      }
+      Published before = published.get(path);
+      if (doc == null && diagnostics.isEmpty() && before == null) {
+        continue; // a clean file the editor never showed
+      }
+      String uri = doc != null ? doc.uri() : before != null ? before.uri() : conv.uri(path);
+      Published next = new Published(uri, doc != null ? doc.version() : null, List.copyOf(diagnostics));
+      if (next.equals(before)) {
+        continue;
+      }
+      to.publishDiagnostics(new PublishDiagnosticsParams(uri, diagnostics, next.version()));
+      if (doc == null && diagnostics.isEmpty()) {
+        published.remove(path);
+      } else {
+        published.put(path, next);
+      }
+    }
+  }
+
+  /**
+   * The root 'use' paths are anchored to: the innermost workspace folder holding the file,
+   * else the nearest ancestor with {@code .git} or the root marker, else the file's folder.
+   */
+  static Path projectRoot(Path file, List<Path> folders) {
+    Path best = null;
+    for (Path folder : folders) {
+      if (file.startsWith(folder) && (best == null || folder.getNameCount() > best.getNameCount())) {
+        best = folder;
+      }
+    }
+    if (best != null) {
+      return best;
+    }
+    Path dir = file.getParent();
+    for (Path d = dir; d != null; d = d.getParent()) {
+      if (Files.exists(d.resolve(".git")) || Files.exists(d.resolve(ROOT_MARKER))) {
+        return d;
+      }
+    }
+    return dir != null ? dir : file;
+  }
+}

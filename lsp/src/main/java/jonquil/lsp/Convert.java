@@ -1,0 +1,307 @@
+package jonquil.lsp;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.function.Function;
+import jonquil.diag.Edit;
+import jonquil.diag.Related;
+import jonquil.diag.Severity;
+import jonquil.source.LineIndex;
+import jonquil.source.SourceFile;
+import jonquil.source.TextRange;
+import org.eclipse.lsp4j.ClientCapabilities;
+import org.eclipse.lsp4j.Diagnostic;
+import org.eclipse.lsp4j.DiagnosticRelatedInformation;
+import org.eclipse.lsp4j.DiagnosticSeverity;
+import org.eclipse.lsp4j.DocumentSymbol;
+import org.eclipse.lsp4j.Hover;
+import org.eclipse.lsp4j.Location;
+import org.eclipse.lsp4j.MarkupContent;
+import org.eclipse.lsp4j.MarkupKind;
+import org.eclipse.lsp4j.Position;
+import org.eclipse.lsp4j.Range;
+import org.eclipse.lsp4j.SymbolInformation;
+import org.eclipse.lsp4j.SymbolKind;
+import org.eclipse.lsp4j.TextDocumentContentChangeEvent;
+import org.eclipse.lsp4j.TextDocumentEdit;
+import org.eclipse.lsp4j.TextEdit;
+import org.eclipse.lsp4j.VersionedTextDocumentIdentifier;
+import org.eclipse.lsp4j.WorkspaceEdit;
+import org.eclipse.lsp4j.WorkspaceSymbol;
+import org.eclipse.lsp4j.jsonrpc.messages.Either;
+
+/** The one place where compiler values and LSP4J values convert: positions in the negotiated encoding, ranges, URIs, severities. */
+final class Convert {
+
+  /** How the {@code character} of a position counts: the three encodings LSP 3.17 names. */
+  enum Encoding {
+    UTF_8("utf-8"),
+    UTF_16("utf-16"),
+    UTF_32("utf-32");
+
+    private final String wire;
+
+    Encoding(String wire) {
+      this.wire = wire;
+    }
+
+    String wire() {
+      return wire;
+    }
+
+    /** The client's most preferred encoding that we support; UTF-16 (mandatory) when it offers none. */
+    static Encoding negotiate(ClientCapabilities capabilities) {
+      if (capabilities == null || capabilities.getGeneral() == null
+          || capabilities.getGeneral().getPositionEncodings() == null) {
+        return UTF_16;
+      }
+      for (String offered : capabilities.getGeneral().getPositionEncodings()) {
+        for (Encoding e : values()) {
+          if (e.wire.equalsIgnoreCase(offered)) {
+            return e;
+          }
+        }
+      }
+      return UTF_16;
+    }
+  }
+
+  static final String SOURCE = "jonquil";
+  private static final Path BUFFER = Path.of("buffer.jonq");
+
+  private final Encoding encoding;
+  private final Function<Path, String> openUri;
+
+  /** {@code openUri} gives the client's own spelling of an open file's URI, or null. */
+  Convert(Encoding encoding, Function<Path, String> openUri) {
+    this.encoding = encoding;
+    this.openUri = openUri;
+  }
+
+  Encoding encoding() {
+    return encoding;
+  }
+
+  // ---- positions ----
+
+  Position position(SourceFile source, int offset) {
+    LineIndex lines = source.lines();
+    int clamped = Math.max(0, Math.min(offset, source.text().length()));
+    int line = lines.line(clamped);
+    int column;
+    switch (encoding) {
+      case UTF_8:
+        column = lines.utf8Column(clamped);
+        break;
+      case UTF_32:
+        column = lines.codePointColumn(clamped);
+        break;
+      default:
+        column = lines.utf16Column(clamped);
+        break;
+    }
+    return new Position(line, column);
+  }
+
+  Range range(SourceFile source, TextRange range) {
+    return new Range(position(source, range.start()), position(source, range.end()));
+  }
+
+  /** The UTF-16 offset of a client position; lines and columns out of range clamp to the text. */
+  int offset(SourceFile source, Position position) {
+    LineIndex lines = source.lines();
+    String text = source.text();
+    int line = position.getLine();
+    int column = Math.max(0, position.getCharacter());
+    if (line < 0) {
+      return 0;
+    }
+    if (line >= lines.lineCount()) {
+      return text.length();
+    }
+    switch (encoding) {
+      case UTF_8: {
+        int offset = lines.lineStart(line);
+        int end = lines.lineContentEnd(line);
+        int bytes = 0;
+        while (offset < end) {
+          int cp = text.codePointAt(offset);
+          int size = cp < 0x80 ? 1 : cp < 0x800 ? 2 : cp < 0x10000 ? 3 : 4;
+          if (bytes + size > column) {
+            break;
+          }
+          bytes += size;
+          offset += Character.charCount(cp);
+        }
+        return offset;
+      }
+      case UTF_32:
+        return lines.offsetOfCodePoint(line, column);
+      default:
+        return lines.offsetOfUtf16(line, column);
+    }
+  }
+
+  /** The text after one change event: a whole new text, or a replaced range. */
+  String applyChange(String text, TextDocumentContentChangeEvent change) {
+    String newText = change.getText() == null ? "" : change.getText();
+    if (change.getRange() == null) {
+      return newText;
+    }
+    SourceFile source = new SourceFile(BUFFER, text);
+    int start = offset(source, change.getRange().getStart());
+    int end = offset(source, change.getRange().getEnd());
+    if (end < start) {
+      int t = start;
+      start = end;
+      end = t;
+    }
+    return text.substring(0, start) + newText + text.substring(end);
+  }
+
+  // ---- URIs ----
+
+  /** The URI the client knows a file by: its own spelling when open, else the JDK's. */
+  String uri(Path path) {
+    String open = openUri.apply(path);
+    return open != null ? open : path.toUri().toString();
+  }
+
+  static SourceFile orEmpty(Path path, SourceFile source) {
+    return source != null ? source : new SourceFile(path, "");
+  }
+
+  // ---- diagnostics ----
+
+  static DiagnosticSeverity severity(Severity severity) {
+    switch (severity) {
+      case ERROR:
+        return DiagnosticSeverity.Error;
+      case WARNING:
+        return DiagnosticSeverity.Warning;
+      default:
+        return DiagnosticSeverity.Information;
+    }
+  }
+
+  Diagnostic diagnostic(jonquil.diag.Diagnostic d, Function<Path, SourceFile> sources) {
+    SourceFile source = orEmpty(d.file(), sources.apply(d.file()));
+    Diagnostic out = new Diagnostic(range(source, d.range()), d.message(), severity(d.severity()), SOURCE,
+        d.code().id());
+    if (!d.related().isEmpty()) {
+      List<DiagnosticRelatedInformation> related = new ArrayList<>();
+      for (Related r : d.related()) {
+        SourceFile at = orEmpty(r.file(), sources.apply(r.file()));
+        related.add(new DiagnosticRelatedInformation(new Location(uri(r.file()), range(at, r.range())), r.message()));
+      }
+      out.setRelatedInformation(related);
+    }
+    return out;
+  }
+
+  /** The diagnostic shown when checking itself failed: at the start of the file, never silent. */
+  static Diagnostic internalError(String message) {
+    Range start = new Range(new Position(0, 0), new Position(0, 0));
+    return new Diagnostic(start, message, DiagnosticSeverity.Error, SOURCE, "J901");
+  }
+
+  // ---- answers ----
+
+  Location location(EditorAnswers.Location at, Function<Path, SourceFile> sources) {
+    SourceFile source = orEmpty(at.file(), sources.apply(at.file()));
+    return new Location(uri(at.file()), range(source, at.range()));
+  }
+
+  Hover hover(EditorAnswers.HoverInfo info, SourceFile source, boolean markdown) {
+    Hover hover = new Hover(new MarkupContent(markdown ? MarkupKind.MARKDOWN : MarkupKind.PLAINTEXT, info.markdown()));
+    if (info.range() != null) {
+      hover.setRange(range(source, info.range()));
+    }
+    return hover;
+  }
+
+  static SymbolKind symbolKind(String kind) {
+    switch (kind == null ? "" : kind) {
+      case "train":
+        return SymbolKind.Namespace;
+      case "path":
+      case "branch":
+        return SymbolKind.Array;
+      case "require":
+      case "requirements":
+      case "requirement":
+        return SymbolKind.Property;
+      case "material":
+      case "coating":
+        return SymbolKind.Constant;
+      case "source":
+        return SymbolKind.Event;
+      case "file":
+        return SymbolKind.File;
+      default:
+        return SymbolKind.Object;
+    }
+  }
+
+  DocumentSymbol documentSymbol(EditorAnswers.SymbolInfo symbol, SourceFile source) {
+    Range whole = range(source, symbol.range());
+    Range name = range(source, symbol.selectionRange() != null ? symbol.selectionRange() : symbol.range());
+    DocumentSymbol out = new DocumentSymbol(symbol.name(), symbolKind(symbol.kind()), whole, name, symbol.kind());
+    List<DocumentSymbol> children = new ArrayList<>();
+    for (EditorAnswers.SymbolInfo child : symbol.children() == null ? List.<EditorAnswers.SymbolInfo>of() : symbol.children()) {
+      children.add(documentSymbol(child, source));
+    }
+    out.setChildren(children);
+    return out;
+  }
+
+  /** The flat form, for clients without hierarchical document symbols. */
+  @SuppressWarnings("deprecation")
+  void flatten(EditorAnswers.SymbolInfo symbol, SourceFile source, String container, List<SymbolInformation> out) {
+    SymbolInformation info = new SymbolInformation(symbol.name(), symbolKind(symbol.kind()),
+        new Location(uri(source.path()), range(source, symbol.range())), container);
+    out.add(info);
+    for (EditorAnswers.SymbolInfo child : symbol.children() == null ? List.<EditorAnswers.SymbolInfo>of() : symbol.children()) {
+      flatten(child, source, symbol.name(), out);
+    }
+  }
+
+  WorkspaceSymbol workspaceSymbol(EditorAnswers.FileSymbol found, Function<Path, SourceFile> sources) {
+    SourceFile source = orEmpty(found.file(), sources.apply(found.file()));
+    EditorAnswers.SymbolInfo s = found.symbol();
+    TextRange at = s.selectionRange() != null ? s.selectionRange() : s.range();
+    return new WorkspaceSymbol(s.name(), symbolKind(s.kind()), Either.forLeft(new Location(uri(found.file()), range(source, at))));
+  }
+
+  /**
+   * A rename's edits; versioned document changes when the client takes them
+   * ({@code versions} gives an open file's version, or null).
+   */
+  WorkspaceEdit workspaceEdit(Map<Path, List<Edit>> edits, Function<Path, SourceFile> sources,
+      Function<Path, Integer> versions, boolean documentChanges) {
+    WorkspaceEdit out = new WorkspaceEdit();
+    List<Either<TextDocumentEdit, org.eclipse.lsp4j.ResourceOperation>> changes = new ArrayList<>();
+    Map<String, List<TextEdit>> plain = new java.util.LinkedHashMap<>();
+    edits.forEach((file, list) -> {
+      SourceFile source = orEmpty(file, sources.apply(file));
+      List<TextEdit> textEdits = new ArrayList<>();
+      for (Edit e : list) {
+        textEdits.add(new TextEdit(range(source, e.range()), e.newText()));
+      }
+      if (documentChanges) {
+        changes.add(Either.forLeft(new TextDocumentEdit(new VersionedTextDocumentIdentifier(uri(file), versions.apply(file)),
+            textEdits)));
+      } else {
+        plain.put(uri(file), textEdits);
+      }
+    });
+    if (documentChanges) {
+      out.setDocumentChanges(changes);
+    } else {
+      out.setChanges(plain);
+    }
+    return out;
+  }
+}

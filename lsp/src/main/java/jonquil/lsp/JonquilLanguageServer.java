@@ -1,0 +1,363 @@
+package jonquil.lsp;
+
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.concurrent.CancellationException;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CompletionException;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.atomic.AtomicInteger;
+import java.util.concurrent.atomic.AtomicReference;
+import java.util.function.Function;
+import jonquil.Result;
+import jonquil.cli.ToolVersion;
+import jonquil.source.SourceFile;
+import org.eclipse.lsp4j.ClientCapabilities;
+import org.eclipse.lsp4j.InitializeParams;
+import org.eclipse.lsp4j.InitializeResult;
+import org.eclipse.lsp4j.InitializedParams;
+import org.eclipse.lsp4j.MessageParams;
+import org.eclipse.lsp4j.MessageType;
+import org.eclipse.lsp4j.Position;
+import org.eclipse.lsp4j.RenameOptions;
+import org.eclipse.lsp4j.ServerCapabilities;
+import org.eclipse.lsp4j.ServerInfo;
+import org.eclipse.lsp4j.TextDocumentSyncKind;
+import org.eclipse.lsp4j.TextDocumentSyncOptions;
+import org.eclipse.lsp4j.WorkspaceFolder;
+import org.eclipse.lsp4j.jsonrpc.ResponseErrorException;
+import org.eclipse.lsp4j.jsonrpc.messages.ResponseError;
+import org.eclipse.lsp4j.jsonrpc.messages.ResponseErrorCode;
+import org.eclipse.lsp4j.services.LanguageClient;
+import org.eclipse.lsp4j.services.LanguageClientAware;
+import org.eclipse.lsp4j.services.LanguageServer;
+import org.eclipse.lsp4j.services.TextDocumentService;
+import org.eclipse.lsp4j.services.WorkspaceService;
+
+/** The server's lifecycle and plumbing, with a guard that turns any handler failure into an error response, never a dead server. */
+public final class JonquilLanguageServer implements LanguageServer, LanguageClientAware {
+  static final Duration DEBOUNCE = Duration.ofMillis(150);
+  static final Duration MAX_DELAY = Duration.ofMillis(1000);
+  /** How long a request waits for the check of the version it was asked about. */
+  static final Duration FRESH_WAIT = Duration.ofSeconds(5);
+
+  private enum State { NEW, RUNNING, SHUT_DOWN, EXITED }
+
+  final EditorAnswers answers;
+  final Documents documents = new Documents();
+  final Snapshots snapshots = new Snapshots();
+  private final CheckCycle cycle;
+  private final CheckScheduler scheduler;
+  private final ExecutorService requests;
+  private final JonquilTextDocumentService textDocuments;
+  private final JonquilWorkspaceService workspace;
+  private final CompletableFuture<Integer> exitCode = new CompletableFuture<>();
+  private final AtomicReference<State> state = new AtomicReference<>(State.NEW);
+  private volatile LanguageClient client;
+  private volatile Convert convert = new Convert(Convert.Encoding.UTF_16, documents::uriOf);
+  private volatile ClientCapabilities capabilities = new ClientCapabilities();
+  private volatile List<Path> folders = List.of();
+
+  public JonquilLanguageServer() {
+    this(new NoAnswers());
+  }
+
+  public JonquilLanguageServer(EditorAnswers answers) {
+    this.answers = answers;
+    this.cycle = new CheckCycle(documents, snapshots, () -> folders, () -> convert, () -> client);
+    this.scheduler = new CheckScheduler(cycle, this::checkFailed, DEBOUNCE, MAX_DELAY);
+    AtomicInteger n = new AtomicInteger();
+    ThreadGroup group = new ThreadGroup("jonquil-requests");
+    this.requests = Executors.newFixedThreadPool(2, r -> {
+      Thread t = new Thread(group, r, "jonquil-request-" + n.incrementAndGet(), CheckScheduler.STACK_BYTES);
+      t.setDaemon(true);
+      return t;
+    });
+    this.textDocuments = new JonquilTextDocumentService(this);
+    this.workspace = new JonquilWorkspaceService(this);
+  }
+
+  @Override
+  public void connect(LanguageClient client) {
+    this.client = client;
+  }
+
+  @Override
+  public CompletableFuture<InitializeResult> initialize(InitializeParams params) {
+    try {
+      if (!state.compareAndSet(State.NEW, State.RUNNING)) {
+        return CompletableFuture.failedFuture(new ResponseErrorException(
+            new ResponseError(ResponseErrorCode.InvalidRequest, "initialize was already received", null)));
+      }
+      ClientCapabilities caps = params.getCapabilities() != null ? params.getCapabilities() : new ClientCapabilities();
+      capabilities = caps;
+      convert = new Convert(Convert.Encoding.negotiate(caps), documents::uriOf);
+      folders = foldersOf(params);
+      return CompletableFuture.completedFuture(new InitializeResult(capabilities(caps), new ServerInfo("jonquil",
+          ToolVersion.current())));
+    } catch (RuntimeException e) {
+      return CompletableFuture.failedFuture(asResponseError("initialize", e));
+    }
+  }
+
+  private ServerCapabilities capabilities(ClientCapabilities caps) {
+    ServerCapabilities out = new ServerCapabilities();
+    out.setPositionEncoding(convert.encoding().wire());
+    TextDocumentSyncOptions sync = new TextDocumentSyncOptions();
+    sync.setOpenClose(true);
+    sync.setChange(TextDocumentSyncKind.Incremental);
+    out.setTextDocumentSync(sync);
+    out.setHoverProvider(true);
+    out.setDefinitionProvider(true);
+    out.setReferencesProvider(true);
+    if (ClientSupport.prepareRename(caps)) {
+      out.setRenameProvider(new RenameOptions(true));
+    } else {
+      out.setRenameProvider(true);
+    }
+    out.setDocumentSymbolProvider(true);
+    out.setWorkspaceSymbolProvider(true);
+    return out;
+  }
+
+  @SuppressWarnings("deprecation")
+  private static List<Path> foldersOf(InitializeParams params) {
+    List<Path> out = new ArrayList<>();
+    if (params.getWorkspaceFolders() != null) {
+      for (WorkspaceFolder f : params.getWorkspaceFolders()) {
+        Documents.pathOf(f.getUri()).ifPresent(out::add);
+      }
+    }
+    if (out.isEmpty() && params.getRootUri() != null) {
+      Documents.pathOf(params.getRootUri()).ifPresent(out::add);
+    }
+    if (out.isEmpty() && params.getRootPath() != null) {
+      try {
+        out.add(Path.of(params.getRootPath()).toAbsolutePath().normalize());
+      } catch (RuntimeException e) {
+        // an unusable root path: documents find their own root
+      }
+    }
+    return List.copyOf(out);
+  }
+
+  @Override
+  public void initialized(InitializedParams params) {
+    log(MessageType.Log, "jonquil language server ready (positions in " + convert.encoding().wire() + ")");
+  }
+
+  @Override
+  public CompletableFuture<Object> shutdown() {
+    if (state.get() == State.NEW) {
+      return CompletableFuture.failedFuture(notInitialized());
+    }
+    state.set(State.SHUT_DOWN);
+    return CompletableFuture.completedFuture(null);
+  }
+
+  @Override
+  public void exit() {
+    State was = state.getAndSet(State.EXITED);
+    close();
+    exitCode.complete(was == State.SHUT_DOWN ? 0 : 1);
+  }
+
+  /** Completes with the process exit status once the client sent {@code exit}: 0 after shutdown, else 1. */
+  public CompletableFuture<Integer> exitCode() {
+    return exitCode;
+  }
+
+  /** True once the client asked for shutdown (so that losing stdin afterwards is a clean end). */
+  public boolean shutdownRequested() {
+    State s = state.get();
+    return s == State.SHUT_DOWN || (s == State.EXITED && exitCode.getNow(1) == 0);
+  }
+
+  /** Stops the check worker and the request pool. */
+  public void close() {
+    scheduler.close();
+    requests.shutdownNow();
+  }
+
+  @Override
+  public TextDocumentService getTextDocumentService() {
+    return textDocuments;
+  }
+
+  @Override
+  public WorkspaceService getWorkspaceService() {
+    return workspace;
+  }
+
+  // ---- plumbing for the services ----
+
+  Convert convert() {
+    return convert;
+  }
+
+  ClientCapabilities clientCapabilities() {
+    return capabilities;
+  }
+
+  void setFolders(List<Path> newFolders) {
+    folders = List.copyOf(newFolders);
+  }
+
+  List<Path> folders() {
+    return folders;
+  }
+
+  void scheduleCheck() {
+    scheduler.request();
+  }
+
+  /** Runs a notification's recording step if the server is running; a failure is logged, never thrown at LSP4J. */
+  void onNotification(String method, Runnable body) {
+    if (state.get() != State.RUNNING) {
+      return; // before initialize and after shutdown, notifications are dropped
+    }
+    try {
+      body.run();
+    } catch (RuntimeException | StackOverflowError e) {
+      log(MessageType.Error, "failed to handle " + method + ": " + describe(e));
+      e.printStackTrace(System.err);
+    }
+  }
+
+  /** A request about a position in a document, answered on the request pool from a snapshot that saw the document. */
+  record At(Result result, Path path, SourceFile source, int offset, Convert convert) {}
+
+  <T> CompletableFuture<T> atPosition(String method, String uri, Position position, T none, Function<At, T> body) {
+    return answer(method, uri, (snapshot, path) -> {
+      Optional<Result> result = snapshot.resultFor(path);
+      if (result.isEmpty()) {
+        return none;
+      }
+      SourceFile source = result.get().files().get(path);
+      Convert conv = convert;
+      int offset = position == null ? 0 : conv.offset(source, position);
+      return body.apply(new At(result.get(), path, source, offset, conv));
+    });
+  }
+
+  /** The functional shape of a request body: the snapshot to answer from and the document's path (null when none). */
+  interface Body<T> {
+    T apply(Snapshots.Snapshot snapshot, Path path);
+  }
+
+  /**
+   * Answers a request off the reader thread: refuses it before initialize (-32002) and
+   * after shutdown, waits (without blocking) for a check that saw the document's current
+   * version, and turns any exception into an internal-error response plus a log line.
+   */
+  <T> CompletableFuture<T> answer(String method, String uri, Body<T> body) {
+    try {
+      State s = state.get();
+      if (s == State.NEW) {
+        return CompletableFuture.failedFuture(notInitialized());
+      }
+      if (s != State.RUNNING) {
+        return CompletableFuture.failedFuture(new ResponseErrorException(
+            new ResponseError(ResponseErrorCode.InvalidRequest, "the server is shutting down", null)));
+      }
+      Path path = uri == null ? null : Documents.pathOf(uri).orElse(null);
+      Integer version = path == null ? null : documents.get(path).map(Documents.Doc::version).orElse(null);
+      CompletableFuture<Snapshots.Snapshot> fresh = path == null
+          ? CompletableFuture.completedFuture(snapshots.latest())
+          : snapshots.fresh(path, version, FRESH_WAIT);
+      CompletableFuture<T> work = fresh.thenApplyAsync(snapshot -> body.apply(snapshot, path), requests);
+      CompletableFuture<T> reply = new CompletableFuture<>();
+      work.whenComplete((value, error) -> {
+        if (error == null) {
+          reply.complete(value);
+        } else {
+          reply.completeExceptionally(asResponseError(method, error));
+        }
+      });
+      reply.whenComplete((value, error) -> {
+        if (reply.isCancelled()) {
+          work.cancel(true); // $/cancelRequest: drop the work if it has not started
+        }
+      });
+      return reply;
+    } catch (RuntimeException | StackOverflowError e) {
+      return CompletableFuture.failedFuture(asResponseError(method, e));
+    }
+  }
+
+  private static ResponseErrorException notInitialized() {
+    return new ResponseErrorException(
+        new ResponseError(ResponseErrorCode.ServerNotInitialized, "the server is not initialized yet", null));
+  }
+
+  /** A response error for a failed handler; anything unexpected becomes -32603 and is logged. */
+  Throwable asResponseError(String method, Throwable error) {
+    Throwable cause = error;
+    while ((cause instanceof CompletionException || cause instanceof ExecutionException) && cause.getCause() != null) {
+      cause = cause.getCause();
+    }
+    if (cause instanceof ResponseErrorException || cause instanceof CancellationException) {
+      return cause;
+    }
+    String message = "internal error in " + method + ": " + describe(cause);
+    log(MessageType.Error, message);
+    cause.printStackTrace(System.err);
+    return new ResponseErrorException(new ResponseError(ResponseErrorCode.InternalError, message, null));
+  }
+
+  private void checkFailed(Throwable error) {
+    String message = "the language server failed while checking (" + describe(error) + "); please report this file";
+    log(MessageType.Error, message);
+    error.printStackTrace(System.err);
+    cycle.publishFailure(message);
+  }
+
+  static String describe(Throwable e) {
+    String m = e.getMessage();
+    return m == null || m.isBlank() ? e.getClass().getSimpleName() : e.getClass().getSimpleName() + ": " + m.strip();
+  }
+
+  /** Logs to stderr and, when connected, to the client's log; never to stdout, which carries the protocol. */
+  void log(MessageType type, String message) {
+    System.err.println("jonquil lsp: " + message);
+    LanguageClient c = client;
+    if (c != null) {
+      try {
+        c.logMessage(new MessageParams(type, message));
+      } catch (RuntimeException e) {
+        // the client is gone; stderr has it
+      }
+    }
+  }
+
+  /** Null-safe reads of optional client capabilities (clients omit what they do not support). */
+  static final class ClientSupport {
+    private ClientSupport() {}
+
+    static boolean prepareRename(ClientCapabilities c) {
+      return c != null && c.getTextDocument() != null && c.getTextDocument().getRename() != null
+          && Boolean.TRUE.equals(c.getTextDocument().getRename().getPrepareSupport());
+    }
+
+    static boolean markdownHover(ClientCapabilities c) {
+      return c != null && c.getTextDocument() != null && c.getTextDocument().getHover() != null
+          && c.getTextDocument().getHover().getContentFormat() != null
+          && c.getTextDocument().getHover().getContentFormat().contains("markdown");
+    }
+
+    static boolean hierarchicalSymbols(ClientCapabilities c) {
+      return c != null && c.getTextDocument() != null && c.getTextDocument().getDocumentSymbol() != null
+          && Boolean.TRUE.equals(c.getTextDocument().getDocumentSymbol().getHierarchicalDocumentSymbolSupport());
+    }
+
+    static boolean documentChanges(ClientCapabilities c) {
+      return c != null && c.getWorkspace() != null && c.getWorkspace().getWorkspaceEdit() != null
+          && Boolean.TRUE.equals(c.getWorkspace().getWorkspaceEdit().getDocumentChanges());
+    }
+  }
+}

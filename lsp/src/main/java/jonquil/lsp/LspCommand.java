@@ -1,0 +1,80 @@
+package jonquil.lsp;
+
+import java.io.InputStream;
+import java.io.OutputStream;
+import java.io.PrintStream;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import java.util.concurrent.atomic.AtomicInteger;
+import org.eclipse.lsp4j.jsonrpc.Launcher;
+import org.eclipse.lsp4j.launch.LSPLauncher;
+import org.eclipse.lsp4j.services.LanguageClient;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+
+/** The `jonquil lsp` subcommand: runs the language server on stdin/stdout until exit or until stdin closes. */
+@Command(name = "lsp", description = "Run the Jonquil language server over standard input and output.")
+public final class LspCommand implements java.util.concurrent.Callable<Integer> {
+  @Option(names = {"-h", "--help"}, usageHelp = true, description = "Show this help and exit.")
+  boolean help;
+
+  private final InputStream in;
+  private final OutputStream out;
+  private final EditorAnswers answers;
+
+  /** The server on the process's own stdin and stdout. */
+  public LspCommand() {
+    this(null, null, new NoAnswers());
+  }
+
+  /** The server on the given streams (null: the process's own), answering with {@code answers}. */
+  public LspCommand(InputStream in, OutputStream out, EditorAnswers answers) {
+    this.in = in;
+    this.out = out;
+    this.answers = answers;
+  }
+
+  @Override
+  public Integer call() throws Exception {
+    InputStream input = in != null ? in : System.in;
+    OutputStream output = out;
+    if (output == null) {
+      // stdout carries the protocol: anything else printed there would corrupt it.
+      PrintStream protocol = System.out;
+      System.setOut(System.err);
+      output = protocol;
+    }
+    JonquilLanguageServer server = new JonquilLanguageServer(answers);
+    AtomicInteger n = new AtomicInteger();
+    ExecutorService io = Executors.newCachedThreadPool(r -> {
+      Thread t = new Thread(r, "jonquil-lsp-io-" + n.incrementAndGet());
+      t.setDaemon(true);
+      return t;
+    });
+    try {
+      Launcher<LanguageClient> launcher = LSPLauncher.createServerLauncher(server, input, output, io, null);
+      server.connect(launcher.getRemoteProxy());
+      Future<Void> listening = launcher.startListening();
+      CompletableFuture<Integer> inputClosed = CompletableFuture.supplyAsync(() -> {
+        try {
+          listening.get();
+        } catch (Exception e) {
+          // the stream failed: the same as closing it
+        }
+        return -1;
+      }, io);
+      int code = (Integer) CompletableFuture.anyOf(server.exitCode(), inputClosed).join();
+      if (code < 0) {
+        // stdin closed without 'exit': the editor is gone, so must we be (no orphan servers).
+        code = server.exitCode().getNow(server.shutdownRequested() ? 0 : 1);
+      }
+      listening.cancel(true);
+      return code;
+    } finally {
+      server.close();
+      io.shutdownNow();
+    }
+  }
+}

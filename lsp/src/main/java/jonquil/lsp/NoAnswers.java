@@ -1,0 +1,46 @@
+package jonquil.lsp;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import jonquil.Result;
+import jonquil.source.TextRange;
+
+/** Editor answers that know nothing, so the server runs before the compiler's answers are wired in. */
+public final class NoAnswers implements EditorAnswers {
+  @Override
+  public Optional<HoverInfo> hover(Result result, Path file, int offset) {
+    return Optional.empty();
+  }
+
+  @Override
+  public List<Location> definition(Result result, Path file, int offset) {
+    return List.of();
+  }
+
+  @Override
+  public List<Location> references(Result result, Path file, int offset, boolean includeDeclaration) {
+    return List.of();
+  }
+
+  @Override
+  public Optional<TextRange> prepareRename(Result result, Path file, int offset) {
+    return Optional.empty();
+  }
+
+  @Override
+  public RenameResult rename(Result result, Path file, int offset, String newName) {
+    return new RenameResult(Map.of(), "nothing to rename here");
+  }
+
+  @Override
+  public List<SymbolInfo> documentSymbols(Result result, Path file) {
+    return List.of();
+  }
+
+  @Override
+  public List<FileSymbol> workspaceSymbols(Result result, String query) {
+    return List.of();
+  }
+}

@@ -1,0 +1,51 @@
+package jonquil.lsp;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Optional;
+import jonquil.Result;
+import jonquil.source.TextRange;
+
+/** Editor answers that forward to another, so a test can override the one answer it is about. */
+class Delegating implements EditorAnswers {
+  private final EditorAnswers to;
+
+  Delegating(EditorAnswers to) {
+    this.to = to;
+  }
+
+  @Override
+  public Optional<HoverInfo> hover(Result result, Path file, int offset) {
+    return to.hover(result, file, offset);
+  }
+
+  @Override
+  public List<Location> definition(Result result, Path file, int offset) {
+    return to.definition(result, file, offset);
+  }
+
+  @Override
+  public List<Location> references(Result result, Path file, int offset, boolean includeDeclaration) {
+    return to.references(result, file, offset, includeDeclaration);
+  }
+
+  @Override
+  public Optional<TextRange> prepareRename(Result result, Path file, int offset) {
+    return to.prepareRename(result, file, offset);
+  }
+
+  @Override
+  public RenameResult rename(Result result, Path file, int offset, String newName) {
+    return to.rename(result, file, offset, newName);
+  }
+
+  @Override
+  public List<SymbolInfo> documentSymbols(Result result, Path file) {
+    return to.documentSymbols(result, file);
+  }
+
+  @Override
+  public List<FileSymbol> workspaceSymbols(Result result, String query) {
+    return to.workspaceSymbols(result, query);
+  }
+}

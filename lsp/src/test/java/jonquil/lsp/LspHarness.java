@@ -1,0 +1,168 @@
+package jonquil.lsp;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.OutputStream;
+import java.nio.channels.Channels;
+import java.nio.channels.Pipe;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.TimeUnit;
+import java.util.function.Predicate;
+import org.eclipse.lsp4j.ClientCapabilities;
+import org.eclipse.lsp4j.DidChangeTextDocumentParams;
+import org.eclipse.lsp4j.DidCloseTextDocumentParams;
+import org.eclipse.lsp4j.DidOpenTextDocumentParams;
+import org.eclipse.lsp4j.GeneralClientCapabilities;
+import org.eclipse.lsp4j.InitializeParams;
+import org.eclipse.lsp4j.InitializeResult;
+import org.eclipse.lsp4j.InitializedParams;
+import org.eclipse.lsp4j.MessageActionItem;
+import org.eclipse.lsp4j.MessageParams;
+import org.eclipse.lsp4j.PublishDiagnosticsParams;
+import org.eclipse.lsp4j.ShowMessageRequestParams;
+import org.eclipse.lsp4j.TextDocumentContentChangeEvent;
+import org.eclipse.lsp4j.TextDocumentIdentifier;
+import org.eclipse.lsp4j.TextDocumentItem;
+import org.eclipse.lsp4j.VersionedTextDocumentIdentifier;
+import org.eclipse.lsp4j.jsonrpc.Launcher;
+import org.eclipse.lsp4j.launch.LSPLauncher;
+import org.eclipse.lsp4j.services.LanguageClient;
+import org.eclipse.lsp4j.services.LanguageServer;
+
+/** An in-process LSP4J client wired to a real server over pipes, so tests speak the actual JSON-RPC protocol. */
+final class LspHarness implements AutoCloseable {
+  static final Duration WAIT = Duration.ofSeconds(20);
+
+  /** The client side: records every notification the server pushes. */
+  static final class RecordingClient implements LanguageClient {
+    final List<PublishDiagnosticsParams> published = new ArrayList<>();
+    final List<MessageParams> logs = new ArrayList<>();
+
+    @Override
+    public void telemetryEvent(Object object) {}
+
+    @Override
+    public synchronized void publishDiagnostics(PublishDiagnosticsParams diagnostics) {
+      published.add(diagnostics);
+      notifyAll();
+    }
+
+    @Override
+    public void showMessage(MessageParams messageParams) {}
+
+    @Override
+    public CompletableFuture<MessageActionItem> showMessageRequest(ShowMessageRequestParams requestParams) {
+      return CompletableFuture.completedFuture(null);
+    }
+
+    @Override
+    public synchronized void logMessage(MessageParams message) {
+      logs.add(message);
+    }
+
+    synchronized List<PublishDiagnosticsParams> publishedFor(String uri) {
+      return published.stream().filter(p -> p.getUri().equals(uri)).toList();
+    }
+
+    /** Waits for a publish for {@code uri} matching {@code test}; fails the test after {@link #WAIT}. */
+    synchronized PublishDiagnosticsParams await(String uri, Predicate<PublishDiagnosticsParams> test)
+        throws InterruptedException {
+      long deadline = System.nanoTime() + WAIT.toNanos();
+      int seen = 0;
+      while (true) {
+        for (; seen < published.size(); seen++) {
+          PublishDiagnosticsParams p = published.get(seen);
+          if (p.getUri().equals(uri) && test.test(p)) {
+            return p;
+          }
+        }
+        long left = deadline - System.nanoTime();
+        if (left <= 0) {
+          throw new AssertionError("no matching publishDiagnostics for " + uri + "; got " + published);
+        }
+        wait(Math.max(1, left / 1_000_000));
+      }
+    }
+  }
+
+  final JonquilLanguageServer server;
+  final RecordingClient client = new RecordingClient();
+  final LanguageServer remote;
+  private final ExecutorService threads = Executors.newCachedThreadPool(r -> {
+    Thread t = new Thread(r, "harness");
+    t.setDaemon(true);
+    return t;
+  });
+  private final OutputStream clientOut;
+  private final OutputStream serverOut;
+
+  LspHarness(EditorAnswers answers) throws IOException {
+    Pipe toServer = Pipe.open();
+    Pipe toClient = Pipe.open();
+    InputStream serverIn = Channels.newInputStream(toServer.source());
+    clientOut = Channels.newOutputStream(toServer.sink());
+    InputStream clientIn = Channels.newInputStream(toClient.source());
+    serverOut = Channels.newOutputStream(toClient.sink());
+    server = new JonquilLanguageServer(answers);
+    Launcher<LanguageClient> serverSide = LSPLauncher.createServerLauncher(server, serverIn, serverOut, threads, null);
+    server.connect(serverSide.getRemoteProxy());
+    serverSide.startListening();
+    Launcher<LanguageServer> clientSide = LSPLauncher.createClientLauncher(client, clientIn, clientOut, threads, null);
+    clientSide.startListening();
+    remote = clientSide.getRemoteProxy();
+  }
+
+  LspHarness() throws IOException {
+    this(new NoAnswers());
+  }
+
+  /** Initializes with UTF-16 positions (or the given encodings offered) and a root folder. */
+  InitializeResult initialize(Path root, String... encodings) throws Exception {
+    InitializeParams params = new InitializeParams();
+    params.setProcessId(null);
+    params.setRootUri(root == null ? null : root.toUri().toString());
+    ClientCapabilities caps = new ClientCapabilities();
+    if (encodings.length > 0) {
+      GeneralClientCapabilities general = new GeneralClientCapabilities();
+      general.setPositionEncodings(List.of(encodings));
+      caps.setGeneral(general);
+    }
+    params.setCapabilities(caps);
+    InitializeResult result = remote.initialize(params).get(WAIT.toSeconds(), TimeUnit.SECONDS);
+    remote.initialized(new InitializedParams());
+    return result;
+  }
+
+  void open(String uri, int version, String text) {
+    remote.getTextDocumentService().didOpen(new DidOpenTextDocumentParams(new TextDocumentItem(uri, "jonquil", version, text)));
+  }
+
+  void changeAll(String uri, int version, String text) {
+    remote.getTextDocumentService().didChange(new DidChangeTextDocumentParams(
+        new VersionedTextDocumentIdentifier(uri, version), List.of(new TextDocumentContentChangeEvent(text))));
+  }
+
+  void change(String uri, int version, TextDocumentContentChangeEvent change) {
+    remote.getTextDocumentService().didChange(new DidChangeTextDocumentParams(
+        new VersionedTextDocumentIdentifier(uri, version), List.of(change)));
+  }
+
+  void close(String uri) {
+    remote.getTextDocumentService().didClose(new DidCloseTextDocumentParams(new TextDocumentIdentifier(uri)));
+  }
+
+  @Override
+  public void close() throws IOException {
+    // Closing both write ends lets each reader see the end of its stream and stop by itself.
+    server.close();
+    clientOut.close();
+    serverOut.close();
+    threads.shutdown();
+  }
+}
