@@ -34,6 +34,10 @@ public final class Checker {
   private Checker() {}
 
   public static Result check(Workspace workspace, List<Path> files) {
+    return check(workspace, files, CheckOptions.FULL);
+  }
+
+  public static Result check(Workspace workspace, List<Path> files, CheckOptions options) {
     Map<Path, ParseResult> parsed = new HashMap<>();
     Set<Diagnostic> diagnostics = new LinkedHashSet<>();
     List<RequirementOutcome> requirements = new ArrayList<>();
@@ -66,7 +70,7 @@ public final class Checker {
           }
           continue;
         }
-        Analyzer.Analysis analysis = Analyzer.analyze(model);
+        Analyzer.Analysis analysis = Analyzer.analyze(model, options.yields());
         diagnostics.addAll(analysis.diagnostics());
         requirements.addAll(analysis.outcomes());
         solutions.put(root, analysis.solution());

@@ -56,7 +56,8 @@ final class CheckCycle implements Runnable {
       byRoot.computeIfAbsent(projectRoot(doc.path(), roots), k -> new ArrayList<>()).add(doc.path());
     });
     List<Result> results = new ArrayList<>();
-    byRoot.forEach((root, files) -> results.add(Checker.check(Workspace.withOverlay(root, buffers), files)));
+    byRoot.forEach((root, files) -> results.add(
+        Checker.check(Workspace.withOverlay(root, buffers), files, jonquil.CheckOptions.EDITOR)));
     snapshots.publish(new Snapshots.Snapshot(results, versions));
     publish(open, results);
   }

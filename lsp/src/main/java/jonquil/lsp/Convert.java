@@ -1,5 +1,9 @@
 package jonquil.lsp;
 
+import jonquil.ide.SymbolInfo;
+
+import jonquil.ide.HoverInfo;
+
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -209,12 +213,12 @@ final class Convert {
 
   // ---- answers ----
 
-  Location location(EditorAnswers.Location at, Function<Path, SourceFile> sources) {
+  Location location(jonquil.ide.Location at, Function<Path, SourceFile> sources) {
     SourceFile source = orEmpty(at.file(), sources.apply(at.file()));
     return new Location(uri(at.file()), range(source, at.range()));
   }
 
-  Hover hover(EditorAnswers.HoverInfo info, SourceFile source, boolean markdown) {
+  Hover hover(HoverInfo info, SourceFile source, boolean markdown) {
     Hover hover = new Hover(new MarkupContent(markdown ? MarkupKind.MARKDOWN : MarkupKind.PLAINTEXT, info.markdown()));
     if (info.range() != null) {
       hover.setRange(range(source, info.range()));
@@ -245,12 +249,12 @@ final class Convert {
     }
   }
 
-  DocumentSymbol documentSymbol(EditorAnswers.SymbolInfo symbol, SourceFile source) {
+  DocumentSymbol documentSymbol(SymbolInfo symbol, SourceFile source) {
     Range whole = range(source, symbol.range());
     Range name = range(source, symbol.selectionRange() != null ? symbol.selectionRange() : symbol.range());
     DocumentSymbol out = new DocumentSymbol(symbol.name(), symbolKind(symbol.kind()), whole, name, symbol.kind());
     List<DocumentSymbol> children = new ArrayList<>();
-    for (EditorAnswers.SymbolInfo child : symbol.children() == null ? List.<EditorAnswers.SymbolInfo>of() : symbol.children()) {
+    for (SymbolInfo child : symbol.children() == null ? List.<SymbolInfo>of() : symbol.children()) {
       children.add(documentSymbol(child, source));
     }
     out.setChildren(children);
@@ -259,18 +263,18 @@ final class Convert {
 
   /** The flat form, for clients without hierarchical document symbols. */
   @SuppressWarnings("deprecation")
-  void flatten(EditorAnswers.SymbolInfo symbol, SourceFile source, String container, List<SymbolInformation> out) {
+  void flatten(SymbolInfo symbol, SourceFile source, String container, List<SymbolInformation> out) {
     SymbolInformation info = new SymbolInformation(symbol.name(), symbolKind(symbol.kind()),
         new Location(uri(source.path()), range(source, symbol.range())), container);
     out.add(info);
-    for (EditorAnswers.SymbolInfo child : symbol.children() == null ? List.<EditorAnswers.SymbolInfo>of() : symbol.children()) {
+    for (SymbolInfo child : symbol.children() == null ? List.<SymbolInfo>of() : symbol.children()) {
       flatten(child, source, symbol.name(), out);
     }
   }
 
   WorkspaceSymbol workspaceSymbol(EditorAnswers.FileSymbol found, Function<Path, SourceFile> sources) {
     SourceFile source = orEmpty(found.file(), sources.apply(found.file()));
-    EditorAnswers.SymbolInfo s = found.symbol();
+    SymbolInfo s = found.symbol();
     TextRange at = s.selectionRange() != null ? s.selectionRange() : s.range();
     return new WorkspaceSymbol(s.name(), symbolKind(s.kind()), Either.forLeft(new Location(uri(found.file()), range(source, at))));
   }

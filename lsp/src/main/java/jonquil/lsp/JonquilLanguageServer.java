@@ -64,7 +64,7 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
   private volatile List<Path> folders = List.of();
 
   public JonquilLanguageServer() {
-    this(new NoAnswers());
+    this(new IdeAnswers());
   }
 
   public JonquilLanguageServer(EditorAnswers answers) {

@@ -1,5 +1,9 @@
 package jonquil.lsp;
 
+import jonquil.ide.SymbolInfo;
+
+import jonquil.ide.RenameResult;
+
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -102,7 +106,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
     return server.atPosition("textDocument/definition", params.getTextDocument().getUri(), params.getPosition(),
         Either.forLeft(List.of()), at -> {
           List<Location> out = new ArrayList<>();
-          for (EditorAnswers.Location l : server.answers.definition(at.result(), at.path(), at.offset())) {
+          for (jonquil.ide.Location l : server.answers.definition(at.result(), at.path(), at.offset())) {
             out.add(at.convert().location(l, at.result().files()::get));
           }
           return Either.forLeft(out);
@@ -115,7 +119,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
     return server.atPosition("textDocument/references", params.getTextDocument().getUri(), params.getPosition(),
         List.of(), at -> {
           List<Location> out = new ArrayList<>();
-          for (EditorAnswers.Location l
+          for (jonquil.ide.Location l
               : server.answers.references(at.result(), at.path(), at.offset(), withDeclaration)) {
             out.add(at.convert().location(l, at.result().files()::get));
           }
@@ -139,7 +143,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
     boolean documentChanges = JonquilLanguageServer.ClientSupport.documentChanges(server.clientCapabilities());
     return server.atPosition("textDocument/rename", params.getTextDocument().getUri(), params.getPosition(), null,
         at -> {
-          EditorAnswers.RenameResult result =
+          RenameResult result =
               server.answers.rename(at.result(), at.path(), at.offset(), params.getNewName());
           if (result.error() != null) {
             throw new ResponseErrorException(new ResponseError(ResponseErrorCode.RequestFailed, result.error(), null));
@@ -158,7 +162,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
         at -> {
           SourceFile source = at.source();
           List<Either<SymbolInformation, DocumentSymbol>> out = new ArrayList<>();
-          for (EditorAnswers.SymbolInfo s : server.answers.documentSymbols(at.result(), at.path())) {
+          for (SymbolInfo s : server.answers.documentSymbols(at.result(), at.path())) {
             if (hierarchical) {
               out.add(Either.forRight(at.convert().documentSymbol(s, source)));
             } else {

@@ -26,7 +26,7 @@ public final class LspCommand implements java.util.concurrent.Callable<Integer> 
 
   /** The server on the process's own stdin and stdout. */
   public LspCommand() {
-    this(null, null, new NoAnswers());
+    this(null, null, new IdeAnswers());
   }
 
   /** The server on the given streams (null: the process's own), answering with {@code answers}. */

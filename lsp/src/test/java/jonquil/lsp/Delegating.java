@@ -1,5 +1,12 @@
 package jonquil.lsp;
 
+import jonquil.ide.Location;
+import jonquil.ide.SymbolInfo;
+
+import jonquil.ide.RenameResult;
+
+import jonquil.ide.HoverInfo;
+
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;

@@ -1,5 +1,7 @@
 package jonquil.lsp;
 
+import jonquil.ide.HoverInfo;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertInstanceOf;

@@ -1,5 +1,9 @@
 package jonquil.lsp;
 
+import jonquil.ide.SymbolInfo;
+
+import jonquil.ide.RenameResult;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertInstanceOf;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -48,8 +52,8 @@ class RelayTest {
     int probe = MAIN.indexOf("p\n", MAIN.indexOf("probe"));
     EditorAnswers answers = new Delegating(new NoAnswers()) {
       @Override
-      public List<Location> definition(Result result, Path file, int offset) {
-        return List.of(new Location(lib, TextRange.of(7, 9)));
+      public List<jonquil.ide.Location> definition(Result result, Path file, int offset) {
+        return List.of(new jonquil.ide.Location(lib, TextRange.of(7, 9)));
       }
 
       @Override

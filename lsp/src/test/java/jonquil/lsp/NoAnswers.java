@@ -1,5 +1,13 @@
 package jonquil.lsp;
 
+import jonquil.ide.Location;
+
+import jonquil.ide.SymbolInfo;
+
+import jonquil.ide.RenameResult;
+
+import jonquil.ide.HoverInfo;
+
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;

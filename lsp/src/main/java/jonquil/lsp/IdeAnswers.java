@@ -1,0 +1,57 @@
+package jonquil.lsp;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import jonquil.Result;
+import jonquil.ide.HoverInfo;
+import jonquil.ide.Ide;
+import jonquil.ide.Location;
+import jonquil.ide.RenameResult;
+import jonquil.ide.SymbolInfo;
+import jonquil.source.TextRange;
+
+/** The real editor answers: each call goes straight to the compiler's jonquil.ide. */
+final class IdeAnswers implements EditorAnswers {
+  @Override
+  public Optional<HoverInfo> hover(Result result, Path file, int offset) {
+    return Ide.hover(result, file, offset);
+  }
+
+  @Override
+  public List<Location> definition(Result result, Path file, int offset) {
+    return Ide.definition(result, file, offset);
+  }
+
+  @Override
+  public List<Location> references(Result result, Path file, int offset, boolean includeDeclaration) {
+    return Ide.references(result, file, offset, includeDeclaration);
+  }
+
+  @Override
+  public Optional<TextRange> prepareRename(Result result, Path file, int offset) {
+    return Ide.prepareRename(result, file, offset);
+  }
+
+  @Override
+  public RenameResult rename(Result result, Path file, int offset, String newName) {
+    return Ide.rename(result, file, offset, newName);
+  }
+
+  @Override
+  public List<SymbolInfo> documentSymbols(Result result, Path file) {
+    return Ide.documentSymbols(result, file);
+  }
+
+  @Override
+  public List<FileSymbol> workspaceSymbols(Result result, String query) {
+    List<SymbolInfo> symbols = Ide.workspaceSymbols(result, query);
+    List<Location> places = Ide.workspaceSymbolLocations(result, query);
+    List<FileSymbol> out = new ArrayList<>();
+    for (int i = 0; i < symbols.size() && i < places.size(); i++) {
+      out.add(new FileSymbol(places.get(i).file(), symbols.get(i)));
+    }
+    return out;
+  }
+}
