@@ -8,8 +8,9 @@ import jonquil.Result;
 import jonquil.source.TextRange;
 
 /**
- * Answers an editor's questions (hover, definition, references, rename, symbols) from one
- * check {@link Result}, in plain records, so the language server only translates them.
+ * Answers an editor's questions (hover, navigation, rename, symbols, completion, highlighting, hints,
+ * folding, links, quick fixes) from one check {@link Result}, in plain records, so the language server
+ * only translates them.
  */
 public final class Ide {
   private Ide() {}
@@ -70,6 +71,38 @@ public final class Ide {
    */
   public static List<Location> workspaceSymbolLocations(Result r, String query) {
     return Outline.searchLocations(r, query);
+  }
+
+  /**
+   * What may be written at the offset: kinds, parameters, names, ports, materials, units, measures
+   * and keywords, read from the text before the cursor (however broken) and the names of this result.
+   */
+  public static List<CompletionItemInfo> completions(Result r, Path file, int offset) {
+    return Completions.at(r, Models.norm(file), offset);
+  }
+
+  /** Every classified span of the file, sorted by start and never overlapping. */
+  public static List<SemanticToken> semanticTokens(Result r, Path file) {
+    return SemanticTokens.of(r, Models.norm(file));
+  }
+
+  /** The power leaving each element step of the file's train paths, for steps ending within [start, end]. */
+  public static List<InlayHint> inlayHints(Result r, Path file, int start, int end) {
+    return InlayHints.of(r, Models.norm(file), start, end);
+  }
+
+  public static List<FoldingRangeInfo> foldingRanges(Result r, Path file) {
+    return Folding.of(r, Models.norm(file));
+  }
+
+  /** The {@code use} and {@code table} strings that name files that exist. */
+  public static List<DocumentLinkInfo> documentLinks(Result r, Path file) {
+    return DocumentLinks.of(r, Models.norm(file));
+  }
+
+  /** Quick fixes for the diagnostics of the file that overlap the range; the first of each diagnostic is preferred. */
+  public static List<CodeActionInfo> codeActions(Result r, Path file, TextRange range) {
+    return CodeActions.of(r, Models.norm(file), range);
   }
 
   /** The file a {@code use} line names, relative to the file that contains it. */

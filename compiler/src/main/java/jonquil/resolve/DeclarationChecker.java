@@ -37,10 +37,11 @@ final class DeclarationChecker {
       Optional<ParamSpec> spec = kind.param(key);
       if (spec.isEmpty()) {
         List<String> names = kind.params().stream().map(ParamSpec::name).toList();
+        Optional<String> close = Suggest.closest(key, names);
         sink.report(DiagnosticCode.UNKNOWN_PARAMETER, p.key().range(),
             "'" + key + "' is not a parameter of " + ShapeMatcher.article(kind.word())
-                + Suggest.closest(key, names).map(n -> "; did you mean '" + n + "'?")
-                    .orElse("; it takes " + ShapeMatcher.quoteList(names)));
+                + close.map(n -> "; did you mean '" + n + "'?").orElse("; it takes " + ShapeMatcher.quoteList(names)),
+            Resolver.replacement(sink.file, p.key().range(), key, close));
         continue;
       }
       Property earlier = firstSeen.putIfAbsent(key, p);

@@ -81,11 +81,12 @@ final class RequirementResolver {
   private Optional<Measure> measure(Requirement.Measure written) {
     Optional<Measure> m = Measure.bySpelling(written.text());
     if (m.isEmpty()) {
+      Optional<String> close = Suggest.closest(written.text(), Measure.spellings());
       sink.report(DiagnosticCode.UNKNOWN_MEASURE, written.range(),
           "'" + written.text() + "' is not a quantity a requirement can bound"
-              + Suggest.closest(written.text(), Measure.spellings()).map(x -> "; did you mean '" + x + "'?")
-                  .orElse("; the measures are " + String.join(", ",
-                      java.util.Arrays.stream(Measure.values()).map(Measure::word).toList())));
+              + close.map(x -> "; did you mean '" + x + "'?").orElse("; the measures are " + String.join(", ",
+                  java.util.Arrays.stream(Measure.values()).map(Measure::word).toList())),
+          Resolver.replacement(sink.file, written.range(), written.text(), close));
     }
     return m;
   }
@@ -145,8 +146,10 @@ final class RequirementResolver {
     String name = ref.name().text();
     Optional<Symbol> found = scope.lookup(name);
     if (found.isEmpty()) {
+      var candidates = scope.namesOf(List.of(Category.SOURCE, Category.OPTIC, Category.PROBE, Category.TERMINAL));
       sink.report(DiagnosticCode.UNDEFINED_NAME, ref.name().range(), "unknown element '" + name + "'"
-          + Suggest.hint(name, scope.namesOf(List.of(Category.SOURCE, Category.OPTIC, Category.PROBE, Category.TERMINAL))));
+          + Suggest.hint(name, candidates),
+          Resolver.replacement(sink.file, ref.name().range(), name, Suggest.closest(name, candidates)));
       return Optional.empty();
     }
     Symbol s = found.get();
@@ -168,7 +171,8 @@ final class RequirementResolver {
       }
       if (!ports.contains(p)) {
         sink.report(DiagnosticCode.UNKNOWN_PORT, ref.port().get().range(), s.describe() + " has no port '" + p + "'"
-            + Suggest.hint(p, ports) + (ports.isEmpty() ? "" : "; its ports are " + ShapeMatcher.quoteList(ports)));
+            + Suggest.hint(p, ports) + (ports.isEmpty() ? "" : "; its ports are " + ShapeMatcher.quoteList(ports)),
+            Resolver.replacement(sink.file, ref.port().get().range(), p, Suggest.closest(p, ports)));
         return Optional.empty();
       }
       port = Optional.of(p);

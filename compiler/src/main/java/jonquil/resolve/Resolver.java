@@ -23,6 +23,12 @@ import jonquil.syntax.TrainDecl;
 public final class Resolver {
   private Resolver() {}
 
+  /** The fix of a "did you mean": replace what was written by the close name, or no fix when there is none. */
+  static jonquil.diag.Fix replacement(Path file, TextRange range, String written, Optional<String> suggestion) {
+    return suggestion.map(s -> new jonquil.diag.Fix("change '" + written + "' to '" + s + "'",
+        List.of(new jonquil.diag.Edit(file, range, s)))).orElse(null);
+  }
+
   public static ResolvedModel resolve(Path root, Map<Path, SpecFile> files, Map<Path, List<UseEdge>> uses) {
     return resolve(root, files, uses, Map.of());
   }
@@ -95,9 +101,10 @@ public final class Resolver {
     for (Declaration decl : file.declarations()) {
       Optional<ElementKind> kind = ElementKind.byWord(decl.kind().text());
       if (kind.isEmpty()) {
+        Optional<String> close = Suggest.closest(decl.kind().text(), ElementKind.words());
         sink.report(DiagnosticCode.UNKNOWN_KIND, decl.kind().range(), "unknown kind '" + decl.kind().text() + "'"
-            + Suggest.closest(decl.kind().text(), ElementKind.words()).map(k -> "; did you mean '" + k + "'?")
-                .orElse("; the kinds are " + String.join(", ", ElementKind.words())));
+            + close.map(k -> "; did you mean '" + k + "'?").orElse("; the kinds are " + String.join(", ", ElementKind.words())),
+            replacement(sink.file, decl.kind().range(), decl.kind().text(), close));
       }
       Category category = kind.map(ElementKind::category).orElse(Category.OPTIC);
       Symbol symbol = new Symbol(decl.name().text(), category, kind, file.path(), Optional.of(decl.name()),

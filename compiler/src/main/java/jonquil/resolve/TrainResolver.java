@@ -180,9 +180,10 @@ final class TrainResolver {
     String name = ref.name().text();
     Optional<Symbol> found = scope.lookup(name);
     if (found.isEmpty()) {
-      String hint = Suggest.hint(name, scope.namesOf(List.of(Category.SOURCE, Category.OPTIC, Category.PROBE,
-          Category.TERMINAL)));
-      sink.report(DiagnosticCode.UNDEFINED_NAME, ref.name().range(), "unknown element '" + name + "'" + hint);
+      var candidates = scope.namesOf(List.of(Category.SOURCE, Category.OPTIC, Category.PROBE, Category.TERMINAL));
+      sink.report(DiagnosticCode.UNDEFINED_NAME, ref.name().range(), "unknown element '" + name + "'"
+          + Suggest.hint(name, candidates),
+          Resolver.replacement(sink.file, ref.name().range(), name, Suggest.closest(name, candidates)));
       return Optional.empty();
     }
     Symbol s = found.get();
@@ -213,10 +214,11 @@ final class TrainResolver {
     }
     if (!kind.ports().contains(port)) {
       scope.lookup(ref.name().text()).ifPresent(badPorts::add);
+      Optional<String> close = Suggest.closest(port, kind.ports());
       sink.report(DiagnosticCode.UNKNOWN_PORT, ref.port().get().range(),
           kind.word() + " '" + ref.name().text() + "' has no port '" + port + "'"
-              + Suggest.closest(port, kind.ports()).map(x -> "; did you mean '" + x + "'?")
-                  .orElse("; its ports are " + ShapeMatcher.quoteList(kind.ports())));
+              + close.map(x -> "; did you mean '" + x + "'?").orElse("; its ports are " + ShapeMatcher.quoteList(kind.ports())),
+          Resolver.replacement(sink.file, ref.port().get().range(), port, close));
       return Optional.empty();
     }
     return Optional.of(port);

@@ -350,15 +350,17 @@ final class ValueChecker {
       List<String> catalog = CatalogNames.entries().stream()
           .filter(e -> !what.equals("metal") || e.materialClass() == CatalogNames.MaterialClass.METAL)
           .map(CatalogNames.Entry::name).toList();
+      Optional<String> close = Suggest.closest(name, scope.namesOf(categories));
       sink.report(DiagnosticCode.UNKNOWN_CATALOG_MATERIAL, ref.range(),
           "'" + name + "' is neither a declared material nor in the material catalog"
-              + Suggest.closest(name, scope.namesOf(categories)).map(s -> "; did you mean '" + s + "'?")
-                  .orElse("; the catalog has " + String.join(", ", catalog)));
+              + close.map(s -> "; did you mean '" + s + "'?").orElse("; the catalog has " + String.join(", ", catalog)),
+          Resolver.replacement(sink.file, ref.name().range(), name, close));
       return Optional.empty();
     }
     if (found.isEmpty()) {
       sink.report(DiagnosticCode.UNDEFINED_NAME, ref.range(),
-          "unknown name '" + name + "' in '" + what + "'" + Suggest.hint(name, scope.namesOf(categories)));
+          "unknown name '" + name + "' in '" + what + "'" + Suggest.hint(name, scope.namesOf(categories)),
+          Resolver.replacement(sink.file, ref.name().range(), name, Suggest.closest(name, scope.namesOf(categories))));
       return Optional.empty();
     }
     Symbol s = found.get();
