@@ -17,13 +17,20 @@ final class CheckScheduler implements AutoCloseable {
   private long firstRequest;
   private long lastRequest;
   private boolean stopped;
+  private final Runnable warmUp;
 
   /**
    * A run starts {@code debounce} after the last request, or at most {@code maxDelay}
    * after the first unserved one, so that steady typing still gets diagnostics.
    */
   CheckScheduler(Runnable task, Consumer<Throwable> onFailure, Duration debounce, Duration maxDelay) {
+    this(task, onFailure, debounce, maxDelay, () -> {});
+  }
+
+  /** As above, running {@code warmUp} once on the worker before the first check (a failure there is ignored). */
+  CheckScheduler(Runnable task, Consumer<Throwable> onFailure, Duration debounce, Duration maxDelay, Runnable warmUp) {
     this.task = task;
+    this.warmUp = warmUp;
     this.onFailure = onFailure;
     this.debounceNanos = debounce.toNanos();
     this.maxDelayNanos = maxDelay.toNanos();
@@ -62,6 +69,11 @@ final class CheckScheduler implements AutoCloseable {
   }
 
   private void loop() {
+    try {
+      warmUp.run();
+    } catch (Throwable t) {
+      // Warming up only saves time; the first real check reports whatever is wrong.
+    }
     while (true) {
       synchronized (lock) {
         try {

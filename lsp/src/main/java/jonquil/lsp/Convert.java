@@ -12,6 +12,7 @@ import java.util.function.Function;
 import jonquil.diag.Edit;
 import jonquil.diag.Related;
 import jonquil.diag.Severity;
+import jonquil.format.FormatOptions;
 import jonquil.source.LineIndex;
 import jonquil.source.SourceFile;
 import jonquil.source.TextRange;
@@ -19,7 +20,10 @@ import org.eclipse.lsp4j.ClientCapabilities;
 import org.eclipse.lsp4j.Diagnostic;
 import org.eclipse.lsp4j.DiagnosticRelatedInformation;
 import org.eclipse.lsp4j.DiagnosticSeverity;
+import org.eclipse.lsp4j.DidChangeWatchedFilesRegistrationOptions;
 import org.eclipse.lsp4j.DocumentSymbol;
+import org.eclipse.lsp4j.FileSystemWatcher;
+import org.eclipse.lsp4j.FormattingOptions;
 import org.eclipse.lsp4j.Hover;
 import org.eclipse.lsp4j.Location;
 import org.eclipse.lsp4j.MarkupContent;
@@ -209,6 +213,44 @@ final class Convert {
   static Diagnostic internalError(String message) {
     Range start = new Range(new Position(0, 0), new Position(0, 0));
     return new Diagnostic(start, message, DiagnosticSeverity.Error, SOURCE, "J901");
+  }
+
+  // ---- registrations ----
+
+  /** The registration options that ask the editor to report changes to files matching {@code globs}. */
+  static DidChangeWatchedFilesRegistrationOptions fileWatchers(List<String> globs) {
+    List<FileSystemWatcher> watchers = new ArrayList<>();
+    for (String glob : globs) {
+      watchers.add(new FileSystemWatcher(Either.forLeft(glob)));
+    }
+    return new DidChangeWatchedFilesRegistrationOptions(watchers);
+  }
+
+  // ---- formatting ----
+
+  /** The formatter's options from the editor's: its tab size (clamped to what the formatter takes) and tab choice. */
+  static FormatOptions formatOptions(FormattingOptions options) {
+    int tab = options == null ? FormatOptions.DEFAULT.indent() : options.getTabSize();
+    boolean spaces = options == null || options.isInsertSpaces();
+    return new FormatOptions(Math.max(0, Math.min(16, tab)), spaces);
+  }
+
+  /** The lines of a range, as the formatter's hunks are chosen by: from the start line to the end line (inclusive). */
+  static int[] lines(Range range) {
+    int first = Math.max(0, range.getStart().getLine());
+    int last = Math.max(first, range.getEnd().getLine());
+    if (last > first && range.getEnd().getCharacter() == 0) {
+      last--; // a selection that ends at a line start does not take in that line
+    }
+    return new int[] {first, last};
+  }
+
+  List<TextEdit> textEdits(SourceFile source, List<Edit> edits) {
+    List<TextEdit> out = new ArrayList<>();
+    for (Edit e : edits) {
+      out.add(new TextEdit(range(source, e.range()), e.newText()));
+    }
+    return out;
   }
 
   // ---- answers ----

@@ -11,6 +11,8 @@ import java.util.concurrent.CompletionException;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import java.util.concurrent.RejectedExecutionException;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.Function;
@@ -24,6 +26,8 @@ import org.eclipse.lsp4j.InitializedParams;
 import org.eclipse.lsp4j.MessageParams;
 import org.eclipse.lsp4j.MessageType;
 import org.eclipse.lsp4j.Position;
+import org.eclipse.lsp4j.Registration;
+import org.eclipse.lsp4j.RegistrationParams;
 import org.eclipse.lsp4j.RenameOptions;
 import org.eclipse.lsp4j.ServerCapabilities;
 import org.eclipse.lsp4j.ServerInfo;
@@ -45,6 +49,9 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
   static final Duration MAX_DELAY = Duration.ofMillis(1000);
   /** How long a request waits for the check of the version it was asked about. */
   static final Duration FRESH_WAIT = Duration.ofSeconds(5);
+  /** The files whose change on disk can change a check: specs, and the n,k tables they name. */
+  static final List<String> WATCHED_GLOBS = List.of("**/*.jonq", "**/*.txt", "**/*.csv", "**/*.tsv");
+  static final String WATCHERS_ID = "jonquil-watched-files";
 
   private enum State { NEW, RUNNING, SHUT_DOWN, EXITED }
 
@@ -68,9 +75,15 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
   }
 
   public JonquilLanguageServer(EditorAnswers answers) {
+    this(answers, DEBOUNCE);
+  }
+
+  /** A server whose checks wait {@code debounce} after the last edit (tests and benchmarks shorten it). */
+  JonquilLanguageServer(EditorAnswers answers, Duration debounce) {
     this.answers = answers;
     this.cycle = new CheckCycle(documents, snapshots, () -> folders, () -> convert, () -> client);
-    this.scheduler = new CheckScheduler(cycle, this::checkFailed, DEBOUNCE, MAX_DELAY);
+    this.scheduler = new CheckScheduler(cycle, this::checkFailed, debounce, MAX_DELAY.compareTo(debounce) > 0
+        ? MAX_DELAY : debounce, WarmUp::run);
     AtomicInteger n = new AtomicInteger();
     ThreadGroup group = new ThreadGroup("jonquil-requests");
     this.requests = Executors.newFixedThreadPool(2, r -> {
@@ -122,6 +135,8 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     }
     out.setDocumentSymbolProvider(true);
     out.setWorkspaceSymbolProvider(true);
+    out.setDocumentFormattingProvider(true);
+    out.setDocumentRangeFormattingProvider(true);
     return out;
   }
 
@@ -149,6 +164,18 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
   @Override
   public void initialized(InitializedParams params) {
     log(MessageType.Log, "jonquil language server ready (positions in " + convert.encoding().wire() + ")");
+    LanguageClient c = client;
+    if (c != null && ClientSupport.watchedFilesRegistration(capabilities)) {
+      // Never wait for the reply here: this runs on the reader thread, which must read it.
+      c.registerCapability(new RegistrationParams(List.of(new Registration(WATCHERS_ID,
+          "workspace/didChangeWatchedFiles", Convert.fileWatchers(WATCHED_GLOBS)))))
+          .whenComplete((ok, error) -> {
+            if (error != null) {
+              log(MessageType.Warning, "the editor refused file watching (" + describe(error)
+                  + "); used files are still re-read on every check");
+            }
+          });
+    }
   }
 
   @Override
@@ -270,23 +297,53 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
       CompletableFuture<Snapshots.Snapshot> fresh = path == null
           ? CompletableFuture.completedFuture(snapshots.latest())
           : snapshots.fresh(path, version, FRESH_WAIT);
-      CompletableFuture<T> work = fresh.thenApplyAsync(snapshot -> body.apply(snapshot, path), requests);
       CompletableFuture<T> reply = new CompletableFuture<>();
-      work.whenComplete((value, error) -> {
-        if (error == null) {
-          reply.complete(value);
-        } else {
-          reply.completeExceptionally(asResponseError(method, error));
+      AtomicReference<Future<?>> running = new AtomicReference<>();
+      fresh.whenComplete((snapshot, waitError) -> {
+        if (reply.isDone()) {
+          return; // cancelled while waiting for a fresh check
+        }
+        if (waitError != null) {
+          reply.completeExceptionally(asResponseError(method, waitError));
+          return;
+        }
+        try {
+          running.set(requests.submit(() -> {
+            if (reply.isDone()) {
+              return;
+            }
+            try {
+              reply.complete(body.apply(snapshot, path));
+            } catch (Throwable error) {
+              if (!reply.isDone()) { // after a cancel, the interrupt's own failure is no error to report
+                reply.completeExceptionally(asResponseError(method, error));
+              }
+            }
+          }));
+        } catch (RejectedExecutionException e) {
+          reply.completeExceptionally(new ResponseErrorException(
+              new ResponseError(ResponseErrorCode.InvalidRequest, "the server is shutting down", null)));
+        }
+        if (reply.isCancelled()) {
+          cancel(running.get());
         }
       });
       reply.whenComplete((value, error) -> {
         if (reply.isCancelled()) {
-          work.cancel(true); // $/cancelRequest: drop the work if it has not started
+          // $/cancelRequest: LSP4J answers -32800 at once; interrupting frees the worker for the next request.
+          fresh.cancel(false);
+          cancel(running.get());
         }
       });
       return reply;
     } catch (RuntimeException | StackOverflowError e) {
       return CompletableFuture.failedFuture(asResponseError(method, e));
+    }
+  }
+
+  private static void cancel(Future<?> task) {
+    if (task != null) {
+      task.cancel(true);
     }
   }
 
@@ -353,6 +410,11 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     static boolean hierarchicalSymbols(ClientCapabilities c) {
       return c != null && c.getTextDocument() != null && c.getTextDocument().getDocumentSymbol() != null
           && Boolean.TRUE.equals(c.getTextDocument().getDocumentSymbol().getHierarchicalDocumentSymbolSupport());
+    }
+
+    static boolean watchedFilesRegistration(ClientCapabilities c) {
+      return c != null && c.getWorkspace() != null && c.getWorkspace().getDidChangeWatchedFiles() != null
+          && Boolean.TRUE.equals(c.getWorkspace().getDidChangeWatchedFiles().getDynamicRegistration());
     }
 
     static boolean documentChanges(ClientCapabilities c) {

@@ -11,6 +11,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.concurrent.CompletableFuture;
+import jonquil.format.Formatter;
 import jonquil.source.SourceFile;
 import jonquil.source.TextRange;
 import org.eclipse.lsp4j.DefinitionParams;
@@ -18,7 +19,10 @@ import org.eclipse.lsp4j.DidChangeTextDocumentParams;
 import org.eclipse.lsp4j.DidCloseTextDocumentParams;
 import org.eclipse.lsp4j.DidOpenTextDocumentParams;
 import org.eclipse.lsp4j.DidSaveTextDocumentParams;
+import org.eclipse.lsp4j.DocumentFormattingParams;
+import org.eclipse.lsp4j.DocumentRangeFormattingParams;
 import org.eclipse.lsp4j.DocumentSymbol;
+import org.eclipse.lsp4j.FormattingOptions;
 import org.eclipse.lsp4j.DocumentSymbolParams;
 import org.eclipse.lsp4j.Hover;
 import org.eclipse.lsp4j.HoverParams;
@@ -32,6 +36,7 @@ import org.eclipse.lsp4j.ReferenceParams;
 import org.eclipse.lsp4j.RenameParams;
 import org.eclipse.lsp4j.SymbolInformation;
 import org.eclipse.lsp4j.TextDocumentContentChangeEvent;
+import org.eclipse.lsp4j.TextEdit;
 import org.eclipse.lsp4j.WorkspaceEdit;
 import org.eclipse.lsp4j.jsonrpc.ResponseErrorException;
 import org.eclipse.lsp4j.jsonrpc.messages.Either;
@@ -173,5 +178,39 @@ final class JonquilTextDocumentService implements TextDocumentService {
           }
           return out;
         });
+  }
+
+  // ---- formatting: from the buffer as the request found it, never waiting for a check ----
+
+  @Override
+  public CompletableFuture<List<? extends TextEdit>> formatting(DocumentFormattingParams params) {
+    Optional<Documents.Doc> doc = server.documents.get(params.getTextDocument().getUri());
+    FormattingOptions options = params.getOptions();
+    return server.answer("textDocument/formatting", null, (snapshot, none) -> {
+      if (doc.isEmpty()) {
+        return List.of();
+      }
+      SourceFile source = new SourceFile(doc.get().path(), doc.get().text());
+      return server.convert().textEdits(source, Formatter.edits(source, Convert.formatOptions(options)));
+    });
+  }
+
+  @Override
+  public CompletableFuture<List<? extends TextEdit>> rangeFormatting(DocumentRangeFormattingParams params) {
+    Optional<Documents.Doc> doc = server.documents.get(params.getTextDocument().getUri());
+    FormattingOptions options = params.getOptions();
+    int[] lines = Convert.lines(params.getRange());
+    return server.answer("textDocument/rangeFormatting", null, (snapshot, none) -> {
+      if (doc.isEmpty()) {
+        return List.of();
+      }
+      SourceFile source = new SourceFile(doc.get().path(), doc.get().text());
+      Optional<String> formatted = Formatter.format(source, Convert.formatOptions(options));
+      if (formatted.isEmpty() || formatted.get().equals(source.text())) {
+        return List.of();
+      }
+      return server.convert().textEdits(source,
+          FormatHunks.within(source.path(), source.text(), formatted.get(), lines[0], lines[1]));
+    });
   }
 }

@@ -25,12 +25,14 @@ import org.eclipse.lsp4j.InitializedParams;
 import org.eclipse.lsp4j.MessageActionItem;
 import org.eclipse.lsp4j.MessageParams;
 import org.eclipse.lsp4j.PublishDiagnosticsParams;
+import org.eclipse.lsp4j.RegistrationParams;
 import org.eclipse.lsp4j.ShowMessageRequestParams;
 import org.eclipse.lsp4j.TextDocumentContentChangeEvent;
 import org.eclipse.lsp4j.TextDocumentIdentifier;
 import org.eclipse.lsp4j.TextDocumentItem;
 import org.eclipse.lsp4j.VersionedTextDocumentIdentifier;
 import org.eclipse.lsp4j.jsonrpc.Launcher;
+import org.eclipse.lsp4j.jsonrpc.messages.ResponseMessage;
 import org.eclipse.lsp4j.launch.LSPLauncher;
 import org.eclipse.lsp4j.services.LanguageClient;
 import org.eclipse.lsp4j.services.LanguageServer;
@@ -43,6 +45,19 @@ final class LspHarness implements AutoCloseable {
   static final class RecordingClient implements LanguageClient {
     final List<PublishDiagnosticsParams> published = new ArrayList<>();
     final List<MessageParams> logs = new ArrayList<>();
+    final List<RegistrationParams> registrations = new ArrayList<>();
+
+    @Override
+    public synchronized CompletableFuture<Void> registerCapability(RegistrationParams params) {
+      registrations.add(params);
+      return CompletableFuture.completedFuture(null);
+    }
+
+    /** Drops what was recorded so far (long soak runs would otherwise measure the client's memory). */
+    synchronized void forget() {
+      published.clear();
+      logs.clear();
+    }
 
     @Override
     public void telemetryEvent(Object object) {}
@@ -101,19 +116,39 @@ final class LspHarness implements AutoCloseable {
   });
   private final OutputStream clientOut;
   private final OutputStream serverOut;
+  /** Every response the client received, as it came off the wire (error codes included). */
+  final List<ResponseMessage> responses = java.util.Collections.synchronizedList(new ArrayList<>());
+  /** Completes when the server's message loop ends: while it is not done, the server still reads. */
+  final java.util.concurrent.Future<Void> serverListening;
 
   LspHarness(EditorAnswers answers) throws IOException {
+    this(answers, JonquilLanguageServer.DEBOUNCE);
+  }
+
+  LspHarness(EditorAnswers answers, Duration debounce) throws IOException {
     Pipe toServer = Pipe.open();
     Pipe toClient = Pipe.open();
     InputStream serverIn = Channels.newInputStream(toServer.source());
     clientOut = Channels.newOutputStream(toServer.sink());
     InputStream clientIn = Channels.newInputStream(toClient.source());
     serverOut = Channels.newOutputStream(toClient.sink());
-    server = new JonquilLanguageServer(answers);
+    server = new JonquilLanguageServer(answers, debounce);
     Launcher<LanguageClient> serverSide = LSPLauncher.createServerLauncher(server, serverIn, serverOut, threads, null);
     server.connect(serverSide.getRemoteProxy());
-    serverSide.startListening();
-    Launcher<LanguageServer> clientSide = LSPLauncher.createClientLauncher(client, clientIn, clientOut, threads, null);
+    serverListening = serverSide.startListening();
+    Launcher<LanguageServer> clientSide = new LSPLauncher.Builder<LanguageServer>()
+        .setLocalService(client)
+        .setRemoteInterface(LanguageServer.class)
+        .setInput(clientIn)
+        .setOutput(clientOut)
+        .setExecutorService(threads)
+        .wrapMessages(next -> message -> {
+          if (message instanceof ResponseMessage) {
+            responses.add((ResponseMessage) message);
+          }
+          next.consume(message);
+        })
+        .create();
     clientSide.startListening();
     remote = clientSide.getRemoteProxy();
   }
@@ -124,15 +159,20 @@ final class LspHarness implements AutoCloseable {
 
   /** Initializes with UTF-16 positions (or the given encodings offered) and a root folder. */
   InitializeResult initialize(Path root, String... encodings) throws Exception {
-    InitializeParams params = new InitializeParams();
-    params.setProcessId(null);
-    params.setRootUri(root == null ? null : root.toUri().toString());
     ClientCapabilities caps = new ClientCapabilities();
     if (encodings.length > 0) {
       GeneralClientCapabilities general = new GeneralClientCapabilities();
       general.setPositionEncodings(List.of(encodings));
       caps.setGeneral(general);
     }
+    return initialize(root, caps);
+  }
+
+  /** Initializes with the given client capabilities and a root folder. */
+  InitializeResult initialize(Path root, ClientCapabilities caps) throws Exception {
+    InitializeParams params = new InitializeParams();
+    params.setProcessId(null);
+    params.setRootUri(root == null ? null : root.toUri().toString());
     params.setCapabilities(caps);
     InitializeResult result = remote.initialize(params).get(WAIT.toSeconds(), TimeUnit.SECONDS);
     remote.initialized(new InitializedParams());
