@@ -1,14 +1,21 @@
 package jonquil.lsp;
 
-import jonquil.ide.SymbolInfo;
-
+import jonquil.ide.CodeActionInfo;
+import jonquil.ide.CompletionItemInfo;
+import jonquil.ide.DocumentLinkInfo;
+import jonquil.ide.FoldingRangeInfo;
 import jonquil.ide.HoverInfo;
+import jonquil.ide.SemanticToken;
+import jonquil.ide.SymbolInfo;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.function.Function;
+import com.google.gson.JsonElement;
+import com.google.gson.JsonObject;
 import jonquil.diag.Edit;
 import jonquil.diag.Related;
 import jonquil.diag.Severity;
@@ -17,19 +24,31 @@ import jonquil.source.LineIndex;
 import jonquil.source.SourceFile;
 import jonquil.source.TextRange;
 import org.eclipse.lsp4j.ClientCapabilities;
+import org.eclipse.lsp4j.CodeAction;
+import org.eclipse.lsp4j.CompletionItem;
+import org.eclipse.lsp4j.CompletionItemKind;
 import org.eclipse.lsp4j.Diagnostic;
 import org.eclipse.lsp4j.DiagnosticRelatedInformation;
 import org.eclipse.lsp4j.DiagnosticSeverity;
 import org.eclipse.lsp4j.DidChangeWatchedFilesRegistrationOptions;
+import org.eclipse.lsp4j.DocumentLink;
 import org.eclipse.lsp4j.DocumentSymbol;
 import org.eclipse.lsp4j.FileSystemWatcher;
+import org.eclipse.lsp4j.FoldingRange;
+import org.eclipse.lsp4j.FoldingRangeKind;
 import org.eclipse.lsp4j.FormattingOptions;
 import org.eclipse.lsp4j.Hover;
+import org.eclipse.lsp4j.InlayHint;
+import org.eclipse.lsp4j.InsertTextFormat;
 import org.eclipse.lsp4j.Location;
 import org.eclipse.lsp4j.MarkupContent;
 import org.eclipse.lsp4j.MarkupKind;
 import org.eclipse.lsp4j.Position;
 import org.eclipse.lsp4j.Range;
+import org.eclipse.lsp4j.SemanticTokens;
+import org.eclipse.lsp4j.SemanticTokensDelta;
+import org.eclipse.lsp4j.SemanticTokensEdit;
+import org.eclipse.lsp4j.SemanticTokensLegend;
 import org.eclipse.lsp4j.SymbolInformation;
 import org.eclipse.lsp4j.SymbolKind;
 import org.eclipse.lsp4j.TextDocumentContentChangeEvent;
@@ -79,13 +98,34 @@ final class Convert {
   static final String SOURCE = "jonquil";
   private static final Path BUFFER = Path.of("buffer.jonq");
 
+  /** The semantic token types every client gets, in legend order; jonquil.ide's "unit" joins them only on request. */
+  static final List<String> TOKEN_TYPES =
+      List.of("keyword", "type", "variable", "property", "number", "string", "comment", "operator");
+  static final String UNIT_TOKEN = "unit";
+  /** The one modifier: bit 0 of a token's modifier set. */
+  static final List<String> TOKEN_MODIFIERS = List.of("declaration");
+
   private final Encoding encoding;
   private final Function<Path, String> openUri;
+  private final List<String> tokenTypes;
 
   /** {@code openUri} gives the client's own spelling of an open file's URI, or null. */
   Convert(Encoding encoding, Function<Path, String> openUri) {
+    this(encoding, openUri, false);
+  }
+
+  /**
+   * {@code unitTokens}: the client named a "unit" token type among those it knows, so units get
+   * a type of their own in the legend; otherwise they are shown as "type", a standard one.
+   */
+  Convert(Encoding encoding, Function<Path, String> openUri, boolean unitTokens) {
     this.encoding = encoding;
     this.openUri = openUri;
+    List<String> types = new ArrayList<>(TOKEN_TYPES);
+    if (unitTokens) {
+      types.add(UNIT_TOKEN);
+    }
+    this.tokenTypes = List.copyOf(types);
   }
 
   Encoding encoding() {
@@ -347,6 +387,235 @@ final class Convert {
       out.setDocumentChanges(changes);
     } else {
       out.setChanges(plain);
+    }
+    return out;
+  }
+
+  // ---- completion ----
+
+  /** The compiler's completion kinds as LSP kinds; all are in the range every client knows (1-18). */
+  static CompletionItemKind completionKind(String kind) {
+    switch (kind == null ? "" : kind) {
+      case "keyword":
+        return CompletionItemKind.Keyword;
+      case "kind":
+        return CompletionItemKind.Class;
+      case "parameter":
+        return CompletionItemKind.Property;
+      case "element":
+        return CompletionItemKind.Variable;
+      case "port":
+        return CompletionItemKind.Field;
+      case "material":
+        return CompletionItemKind.Value;
+      case "unit":
+        return CompletionItemKind.Unit;
+      case "measure":
+        return CompletionItemKind.Function;
+      default:
+        return CompletionItemKind.Text;
+    }
+  }
+
+  /** Names a completion item for a later completionItem/resolve: the answer it came in, and its place there. */
+  record CompletionKey(long answer, int index) {}
+
+  /**
+   * One completion item, inserted as plain text (never a snippet). Its documentation comes now,
+   * or, when {@code key} is given, from completionItem/resolve.
+   */
+  static CompletionItem completionItem(CompletionItemInfo info, CompletionKey key) {
+    CompletionItem out = new CompletionItem(info.label());
+    out.setKind(completionKind(info.kind()));
+    if (info.detail() != null && !info.detail().isBlank()) {
+      out.setDetail(info.detail());
+    }
+    out.setInsertText(info.label());
+    out.setInsertTextFormat(InsertTextFormat.PlainText);
+    if (key != null) {
+      JsonObject data = new JsonObject();
+      data.addProperty("answer", key.answer());
+      data.addProperty("index", key.index());
+      out.setData(data);
+    } else {
+      withDocumentation(out, info.documentation());
+    }
+    return out;
+  }
+
+  /** The key a resolve request carries back, if it is one of ours. */
+  static Optional<CompletionKey> completionKey(CompletionItem item) {
+    Object data = item == null ? null : item.getData();
+    if (!(data instanceof JsonObject)) {
+      return Optional.empty();
+    }
+    JsonObject o = (JsonObject) data;
+    JsonElement answer = o.get("answer");
+    JsonElement index = o.get("index");
+    try {
+      if (answer == null || index == null || !answer.isJsonPrimitive() || !index.isJsonPrimitive()) {
+        return Optional.empty();
+      }
+      return Optional.of(new CompletionKey(answer.getAsLong(), index.getAsInt()));
+    } catch (RuntimeException e) {
+      return Optional.empty(); // not a number: someone else's data
+    }
+  }
+
+  /** The item with its documentation (plain text), if there is any. */
+  static CompletionItem withDocumentation(CompletionItem item, String documentation) {
+    if (documentation != null && !documentation.isBlank()) {
+      item.setDocumentation(Either.forLeft(documentation));
+    }
+    return item;
+  }
+
+  // ---- semantic tokens ----
+
+  SemanticTokensLegend semanticTokensLegend() {
+    return new SemanticTokensLegend(tokenTypes, TOKEN_MODIFIERS);
+  }
+
+  /**
+   * The tokens in the protocol's relative encoding (line delta, start delta, length, type,
+   * modifiers), columns in the negotiated encoding. A token that crosses a line break is cut
+   * into one token per line, since clients need not take multi-line tokens.
+   */
+  List<Integer> semanticTokenData(SourceFile source, List<SemanticToken> tokens) {
+    List<Integer> data = new ArrayList<>(tokens.size() * 5);
+    LineIndex lines = source.lines();
+    int textEnd = source.text().length();
+    int lastLine = 0;
+    int lastColumn = 0;
+    for (SemanticToken t : tokens) {
+      int type = tokenTypes.indexOf(t.type());
+      if (type < 0 && UNIT_TOKEN.equals(t.type())) {
+        type = tokenTypes.indexOf("type");
+      }
+      if (type < 0) {
+        continue;
+      }
+      int modifiers = t.declaration() ? 1 : 0;
+      int start = Math.max(0, Math.min(t.start(), textEnd));
+      int end = Math.max(start, Math.min(t.start() + t.length(), textEnd));
+      while (start < end) {
+        int line = lines.line(start);
+        int pieceEnd = Math.min(end, lines.lineContentEnd(line));
+        if (pieceEnd > start) {
+          Position a = position(source, start);
+          Position b = position(source, pieceEnd);
+          data.add(a.getLine() - lastLine);
+          data.add(a.getLine() == lastLine ? a.getCharacter() - lastColumn : a.getCharacter());
+          data.add(b.getCharacter() - a.getCharacter());
+          data.add(type);
+          data.add(modifiers);
+          lastLine = a.getLine();
+          lastColumn = a.getCharacter();
+        }
+        if (line + 1 >= lines.lineCount()) {
+          break;
+        }
+        start = Math.max(pieceEnd, lines.lineStart(line + 1));
+      }
+    }
+    return data;
+  }
+
+  static SemanticTokens semanticTokens(String resultId, List<Integer> data) {
+    return new SemanticTokens(resultId, data);
+  }
+
+  /** The change from one token array to the next as one edit over the part that differs (none when equal). */
+  static SemanticTokensDelta semanticTokensDelta(String resultId, List<Integer> before, List<Integer> after) {
+    int prefix = 0;
+    int most = Math.min(before.size(), after.size());
+    while (prefix < most && before.get(prefix).equals(after.get(prefix))) {
+      prefix++;
+    }
+    int suffix = 0;
+    while (suffix < most - prefix
+        && before.get(before.size() - 1 - suffix).equals(after.get(after.size() - 1 - suffix))) {
+      suffix++;
+    }
+    List<SemanticTokensEdit> edits = new ArrayList<>();
+    int deleted = before.size() - prefix - suffix;
+    List<Integer> inserted = after.subList(prefix, after.size() - suffix);
+    if (deleted > 0 || !inserted.isEmpty()) {
+      edits.add(new SemanticTokensEdit(prefix, deleted, new ArrayList<>(inserted)));
+    }
+    return new SemanticTokensDelta(edits, resultId);
+  }
+
+  // ---- inlay hints, folding, links ----
+
+  /** A hint after a train step, with its tooltip as plain text (which every client that asks for hints takes). */
+  InlayHint inlayHint(SourceFile source, jonquil.ide.InlayHint hint) {
+    InlayHint out = new InlayHint(position(source, hint.offset()), Either.forLeft(hint.label()));
+    if (hint.tooltip() != null && !hint.tooltip().isBlank()) {
+      out.setTooltip(Either.forLeft(hint.tooltip()));
+    }
+    return out;
+  }
+
+  /**
+   * A folding range, or null when it folds nothing. For a client that folds whole lines only,
+   * a block's closing line stays visible when it holds nothing but the closing brace.
+   */
+  FoldingRange foldingRange(SourceFile source, FoldingRangeInfo info, boolean lineFoldingOnly) {
+    Position start = position(source, info.startOffset());
+    Position end = position(source, info.endOffset());
+    int endLine = end.getLine();
+    if (lineFoldingOnly) {
+      int endLineStart = source.lines().lineStart(endLine);
+      int endOffset = Math.max(endLineStart, Math.min(info.endOffset(), source.text().length()));
+      if (source.text().substring(endLineStart, endOffset).strip().equals("}")) {
+        endLine--;
+      }
+    }
+    if (endLine <= start.getLine()) {
+      return null;
+    }
+    FoldingRange out = new FoldingRange(start.getLine(), endLine);
+    if (!lineFoldingOnly) {
+      out.setStartCharacter(start.getCharacter());
+      out.setEndCharacter(end.getCharacter());
+    }
+    if ("comment".equals(info.kind())) {
+      out.setKind(FoldingRangeKind.Comment);
+    } else if ("region".equals(info.kind())) {
+      out.setKind(FoldingRangeKind.Region);
+    }
+    return out;
+  }
+
+  DocumentLink documentLink(SourceFile source, DocumentLinkInfo link) {
+    return new DocumentLink(range(source, link.range()), uri(link.target()));
+  }
+
+  // ---- code actions ----
+
+  /** Whether a context's {@code only} filter admits a kind: the kind itself or one of its parents ("" is every kind). */
+  static boolean kindRequested(String kind, List<String> only) {
+    if (only == null || only.isEmpty()) {
+      return true;
+    }
+    for (String o : only) {
+      if (o != null && (o.isEmpty() || kind.equals(o) || kind.startsWith(o + "."))) {
+        return true;
+      }
+    }
+    return false;
+  }
+
+  /** A quick fix as a literal code action, with the diagnostic it fixes as it was published. */
+  CodeAction codeAction(CodeActionInfo info, Function<Path, SourceFile> sources, Function<Path, Integer> versions,
+      boolean documentChanges, boolean preferredSupport) {
+    CodeAction out = new CodeAction(info.title());
+    out.setKind(info.kind());
+    out.setDiagnostics(List.of(diagnostic(info.diagnostic(), sources)));
+    out.setEdit(workspaceEdit(info.edits(), sources, versions, documentChanges));
+    if (preferredSupport && info.preferred()) {
+      out.setIsPreferred(true);
     }
     return out;
   }

@@ -1,8 +1,14 @@
 package jonquil.lsp;
 
+import jonquil.ide.CodeActionInfo;
+import jonquil.ide.CompletionItemInfo;
+import jonquil.ide.DocumentLinkInfo;
+import jonquil.ide.FoldingRangeInfo;
 import jonquil.ide.HoverInfo;
+import jonquil.ide.InlayHint;
 import jonquil.ide.Location;
 import jonquil.ide.RenameResult;
+import jonquil.ide.SemanticToken;
 import jonquil.ide.SymbolInfo;
 import java.nio.file.Path;
 import java.util.List;
@@ -34,4 +40,20 @@ public interface EditorAnswers {
   List<SymbolInfo> documentSymbols(Result result, Path file);
 
   List<FileSymbol> workspaceSymbols(Result result, String query);
+
+  /** What may be written at the offset; {@code result} must have read the text the editor shows. */
+  List<CompletionItemInfo> completions(Result result, Path file, int offset);
+
+  /** The file's classified spans, sorted by start and never overlapping. */
+  List<SemanticToken> semanticTokens(Result result, Path file);
+
+  /** Hints for the train steps that end within [start, end]. */
+  List<InlayHint> inlayHints(Result result, Path file, int start, int end);
+
+  List<FoldingRangeInfo> foldingRanges(Result result, Path file);
+
+  List<DocumentLinkInfo> documentLinks(Result result, Path file);
+
+  /** Quick fixes for the file's diagnostics that overlap the range. */
+  List<CodeActionInfo> codeActions(Result result, Path file, TextRange range);
 }

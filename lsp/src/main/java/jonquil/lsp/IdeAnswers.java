@@ -5,10 +5,16 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import jonquil.Result;
+import jonquil.ide.CodeActionInfo;
+import jonquil.ide.CompletionItemInfo;
+import jonquil.ide.DocumentLinkInfo;
+import jonquil.ide.FoldingRangeInfo;
 import jonquil.ide.HoverInfo;
 import jonquil.ide.Ide;
+import jonquil.ide.InlayHint;
 import jonquil.ide.Location;
 import jonquil.ide.RenameResult;
+import jonquil.ide.SemanticToken;
 import jonquil.ide.SymbolInfo;
 import jonquil.source.TextRange;
 
@@ -53,5 +59,35 @@ final class IdeAnswers implements EditorAnswers {
       out.add(new FileSymbol(places.get(i).file(), symbols.get(i)));
     }
     return out;
+  }
+
+  @Override
+  public List<CompletionItemInfo> completions(Result result, Path file, int offset) {
+    return Ide.completions(result, file, offset);
+  }
+
+  @Override
+  public List<SemanticToken> semanticTokens(Result result, Path file) {
+    return Ide.semanticTokens(result, file);
+  }
+
+  @Override
+  public List<InlayHint> inlayHints(Result result, Path file, int start, int end) {
+    return Ide.inlayHints(result, file, start, end);
+  }
+
+  @Override
+  public List<FoldingRangeInfo> foldingRanges(Result result, Path file) {
+    return Ide.foldingRanges(result, file);
+  }
+
+  @Override
+  public List<DocumentLinkInfo> documentLinks(Result result, Path file) {
+    return Ide.documentLinks(result, file);
+  }
+
+  @Override
+  public List<CodeActionInfo> codeActions(Result result, Path file, TextRange range) {
+    return Ide.codeActions(result, file, range);
   }
 }

@@ -3,7 +3,9 @@ package jonquil.lsp;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.concurrent.CancellationException;
 import java.util.concurrent.CompletableFuture;
@@ -16,10 +18,17 @@ import java.util.concurrent.RejectedExecutionException;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.Function;
+import jonquil.CheckOptions;
+import jonquil.Checker;
 import jonquil.Result;
+import jonquil.Workspace;
 import jonquil.cli.ToolVersion;
 import jonquil.source.SourceFile;
 import org.eclipse.lsp4j.ClientCapabilities;
+import org.eclipse.lsp4j.CodeActionKind;
+import org.eclipse.lsp4j.CodeActionOptions;
+import org.eclipse.lsp4j.CompletionOptions;
+import org.eclipse.lsp4j.DocumentLinkOptions;
 import org.eclipse.lsp4j.InitializeParams;
 import org.eclipse.lsp4j.InitializeResult;
 import org.eclipse.lsp4j.InitializedParams;
@@ -29,6 +38,8 @@ import org.eclipse.lsp4j.Position;
 import org.eclipse.lsp4j.Registration;
 import org.eclipse.lsp4j.RegistrationParams;
 import org.eclipse.lsp4j.RenameOptions;
+import org.eclipse.lsp4j.SemanticTokensServerFull;
+import org.eclipse.lsp4j.SemanticTokensWithRegistrationOptions;
 import org.eclipse.lsp4j.ServerCapabilities;
 import org.eclipse.lsp4j.ServerInfo;
 import org.eclipse.lsp4j.TextDocumentSyncKind;
@@ -109,7 +120,8 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
       }
       ClientCapabilities caps = params.getCapabilities() != null ? params.getCapabilities() : new ClientCapabilities();
       capabilities = caps;
-      convert = new Convert(Convert.Encoding.negotiate(caps), documents::uriOf);
+      convert = new Convert(Convert.Encoding.negotiate(caps), documents::uriOf,
+          ClientSupport.semanticTokenType(caps, Convert.UNIT_TOKEN));
       folders = foldersOf(params);
       return CompletableFuture.completedFuture(new InitializeResult(capabilities(caps), new ServerInfo("jonquil",
           ToolVersion.current())));
@@ -137,6 +149,20 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     out.setWorkspaceSymbolProvider(true);
     out.setDocumentFormattingProvider(true);
     out.setDocumentRangeFormattingProvider(true);
+    CompletionOptions completion = new CompletionOptions(true, List.of("."));
+    out.setCompletionProvider(completion);
+    out.setSemanticTokensProvider(new SemanticTokensWithRegistrationOptions(convert.semanticTokensLegend(),
+        new SemanticTokensServerFull(true), false));
+    // Advertised to every client: one without the capability simply never asks.
+    out.setInlayHintProvider(true);
+    out.setFoldingRangeProvider(true);
+    out.setDocumentLinkProvider(new DocumentLinkOptions(false));
+    if (ClientSupport.codeActionLiterals(caps)) {
+      out.setCodeActionProvider(new CodeActionOptions(List.of(CodeActionKind.QuickFix)));
+    } else {
+      // A client without literal code actions would need commands; it gets none, so it is told nothing is offered.
+      out.setCodeActionProvider(false);
+    }
     return out;
   }
 
@@ -256,8 +282,11 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     }
   }
 
-  /** A request about a position in a document, answered on the request pool from a snapshot that saw the document. */
-  record At(Result result, Path path, SourceFile source, int offset, Convert convert) {}
+  /**
+   * A request about a position in a document, answered on the request pool from a snapshot that saw the document;
+   * {@code versions} are the document versions that result read (for versioned edits).
+   */
+  record At(Result result, Path path, SourceFile source, int offset, Convert convert, Map<Path, Integer> versions) {}
 
   <T> CompletableFuture<T> atPosition(String method, String uri, Position position, T none, Function<At, T> body) {
     return answer(method, uri, (snapshot, path) -> {
@@ -268,8 +297,50 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
       SourceFile source = result.get().files().get(path);
       Convert conv = convert;
       int offset = position == null ? 0 : conv.offset(source, position);
-      return body.apply(new At(result.get(), path, source, offset, conv));
+      return body.apply(new At(result.get(), path, source, offset, conv, snapshot.versions()));
     });
+  }
+
+  /**
+   * Like {@link #atPosition}, but answered at once from the document's text as the request
+   * found it: from the latest check when that read the same text, else from a check of the
+   * buffer run here, on the request pool. For answers that read the text around the cursor
+   * (completion), where waiting for the debounced check would lag the typing.
+   */
+  <T> CompletableFuture<T> atBuffer(String method, String uri, Position position, T none, Function<At, T> body) {
+    // Read on the reader thread, so the text is the one every earlier didChange made.
+    Optional<Documents.Doc> doc = uri == null ? Optional.empty() : documents.get(uri);
+    return answer(method, null, (snapshot, ignored) -> {
+      if (doc.isEmpty()) {
+        return none;
+      }
+      Documents.Doc d = doc.get();
+      Path path = d.path();
+      Map<Path, Integer> versions = snapshot.versions();
+      Result result = snapshot.resultFor(path).filter(r -> d.text().equals(r.files().get(path).text())).orElse(null);
+      if (result == null) {
+        result = checkBuffer(d);
+        Map<Path, Integer> seen = new HashMap<>(versions);
+        seen.put(path, d.version());
+        versions = seen;
+      }
+      SourceFile source = result.files().get(path);
+      if (source == null) {
+        return none;
+      }
+      Convert conv = convert;
+      int offset = position == null ? 0 : conv.offset(source, position);
+      return body.apply(new At(result, path, source, offset, conv, versions));
+    });
+  }
+
+  /** A check of one document's text as given, the other open buffers overlaid, rooted as the check cycle roots it. */
+  private Result checkBuffer(Documents.Doc doc) {
+    Map<Path, String> buffers = new HashMap<>();
+    documents.snapshot().forEach((p, open) -> buffers.put(p, open.text()));
+    buffers.put(doc.path(), doc.text());
+    Path root = CheckCycle.projectRoot(doc.path(), folders);
+    return Checker.check(Workspace.withOverlay(root, buffers), List.of(doc.path()), CheckOptions.EDITOR);
   }
 
   /** The functional shape of a request body: the snapshot to answer from and the document's path (null when none). */
@@ -415,6 +486,44 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     static boolean watchedFilesRegistration(ClientCapabilities c) {
       return c != null && c.getWorkspace() != null && c.getWorkspace().getDidChangeWatchedFiles() != null
           && Boolean.TRUE.equals(c.getWorkspace().getDidChangeWatchedFiles().getDynamicRegistration());
+    }
+
+    /** The client resolves completion items lazily and takes their documentation that way. */
+    static boolean lazyCompletionDocumentation(ClientCapabilities c) {
+      return c != null && c.getTextDocument() != null && c.getTextDocument().getCompletion() != null
+          && c.getTextDocument().getCompletion().getCompletionItem() != null
+          && c.getTextDocument().getCompletion().getCompletionItem().getResolveSupport() != null
+          && c.getTextDocument().getCompletion().getCompletionItem().getResolveSupport().getProperties() != null
+          && c.getTextDocument().getCompletion().getCompletionItem().getResolveSupport().getProperties()
+              .contains("documentation");
+    }
+
+    /** The client names this token type among those it knows. */
+    static boolean semanticTokenType(ClientCapabilities c, String type) {
+      return c != null && c.getTextDocument() != null && c.getTextDocument().getSemanticTokens() != null
+          && c.getTextDocument().getSemanticTokens().getTokenTypes() != null
+          && c.getTextDocument().getSemanticTokens().getTokenTypes().contains(type);
+    }
+
+    static boolean lineFoldingOnly(ClientCapabilities c) {
+      return c != null && c.getTextDocument() != null && c.getTextDocument().getFoldingRange() != null
+          && Boolean.TRUE.equals(c.getTextDocument().getFoldingRange().getLineFoldingOnly());
+    }
+
+    /** The most folding ranges the client wants, or null when it sets no limit. */
+    static Integer foldingRangeLimit(ClientCapabilities c) {
+      return c == null || c.getTextDocument() == null || c.getTextDocument().getFoldingRange() == null
+          ? null : c.getTextDocument().getFoldingRange().getRangeLimit();
+    }
+
+    static boolean codeActionLiterals(ClientCapabilities c) {
+      return c != null && c.getTextDocument() != null && c.getTextDocument().getCodeAction() != null
+          && c.getTextDocument().getCodeAction().getCodeActionLiteralSupport() != null;
+    }
+
+    static boolean preferredCodeActions(ClientCapabilities c) {
+      return c != null && c.getTextDocument() != null && c.getTextDocument().getCodeAction() != null
+          && Boolean.TRUE.equals(c.getTextDocument().getCodeAction().getIsPreferredSupport());
     }
 
     static boolean documentChanges(ClientCapabilities c) {

@@ -11,21 +11,40 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.ConcurrentHashMap;
+import java.util.concurrent.atomic.AtomicLong;
+import java.util.concurrent.atomic.AtomicReference;
+import jonquil.ide.CodeActionInfo;
+import jonquil.ide.CompletionItemInfo;
+import jonquil.ide.DocumentLinkInfo;
+import jonquil.ide.FoldingRangeInfo;
 import jonquil.format.Formatter;
 import jonquil.source.SourceFile;
 import jonquil.source.TextRange;
+import org.eclipse.lsp4j.CodeAction;
+import org.eclipse.lsp4j.CodeActionParams;
+import org.eclipse.lsp4j.Command;
+import org.eclipse.lsp4j.CompletionItem;
+import org.eclipse.lsp4j.CompletionList;
+import org.eclipse.lsp4j.CompletionParams;
 import org.eclipse.lsp4j.DefinitionParams;
 import org.eclipse.lsp4j.DidChangeTextDocumentParams;
 import org.eclipse.lsp4j.DidCloseTextDocumentParams;
 import org.eclipse.lsp4j.DidOpenTextDocumentParams;
 import org.eclipse.lsp4j.DidSaveTextDocumentParams;
 import org.eclipse.lsp4j.DocumentFormattingParams;
+import org.eclipse.lsp4j.DocumentLink;
+import org.eclipse.lsp4j.DocumentLinkParams;
 import org.eclipse.lsp4j.DocumentRangeFormattingParams;
 import org.eclipse.lsp4j.DocumentSymbol;
+import org.eclipse.lsp4j.FoldingRange;
+import org.eclipse.lsp4j.FoldingRangeRequestParams;
 import org.eclipse.lsp4j.FormattingOptions;
 import org.eclipse.lsp4j.DocumentSymbolParams;
 import org.eclipse.lsp4j.Hover;
 import org.eclipse.lsp4j.HoverParams;
+import org.eclipse.lsp4j.InlayHint;
+import org.eclipse.lsp4j.InlayHintParams;
 import org.eclipse.lsp4j.Location;
 import org.eclipse.lsp4j.LocationLink;
 import org.eclipse.lsp4j.PrepareRenameDefaultBehavior;
@@ -34,6 +53,10 @@ import org.eclipse.lsp4j.PrepareRenameResult;
 import org.eclipse.lsp4j.Range;
 import org.eclipse.lsp4j.ReferenceParams;
 import org.eclipse.lsp4j.RenameParams;
+import org.eclipse.lsp4j.SemanticTokens;
+import org.eclipse.lsp4j.SemanticTokensDelta;
+import org.eclipse.lsp4j.SemanticTokensDeltaParams;
+import org.eclipse.lsp4j.SemanticTokensParams;
 import org.eclipse.lsp4j.SymbolInformation;
 import org.eclipse.lsp4j.TextDocumentContentChangeEvent;
 import org.eclipse.lsp4j.TextEdit;
@@ -47,7 +70,16 @@ import org.eclipse.lsp4j.services.TextDocumentService;
 
 /** The textDocument/* methods: records edits for the check worker and relays questions to the editor answers. */
 final class JonquilTextDocumentService implements TextDocumentService {
+  /** The items of the last completion answer, which completionItem/resolve fills in from. */
+  private record CompletionAnswer(long id, List<CompletionItemInfo> items) {}
+
+  /** The token data last sent for a document, which a delta request names by its result id. */
+  private record SentTokens(String resultId, List<Integer> data) {}
+
   private final JonquilLanguageServer server;
+  private final AtomicLong ids = new AtomicLong();
+  private final AtomicReference<CompletionAnswer> lastCompletion = new AtomicReference<>();
+  private final Map<Path, SentTokens> sentTokens = new ConcurrentHashMap<>();
 
   JonquilTextDocumentService(JonquilLanguageServer server) {
     this.server = server;
@@ -84,7 +116,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
   @Override
   public void didClose(DidCloseTextDocumentParams params) {
     server.onNotification("textDocument/didClose", () -> {
-      server.documents.close(params.getTextDocument().getUri());
+      server.documents.close(params.getTextDocument().getUri()).ifPresent(doc -> sentTokens.remove(doc.path()));
       server.scheduleCheck();
     });
   }
@@ -178,6 +210,146 @@ final class JonquilTextDocumentService implements TextDocumentService {
           }
           return out;
         });
+  }
+
+  // ---- completion: from the buffer's text as the request found it ----
+
+  @Override
+  public CompletableFuture<Either<List<CompletionItem>, CompletionList>> completion(CompletionParams params) {
+    boolean lazy = JonquilLanguageServer.ClientSupport.lazyCompletionDocumentation(server.clientCapabilities());
+    return server.atBuffer("textDocument/completion", params.getTextDocument().getUri(), params.getPosition(),
+        Either.forRight(new CompletionList(false, List.of())), at -> {
+          List<CompletionItemInfo> infos = server.answers.completions(at.result(), at.path(), at.offset());
+          long id = ids.incrementAndGet();
+          if (lazy) {
+            lastCompletion.set(new CompletionAnswer(id, List.copyOf(infos)));
+          }
+          List<CompletionItem> items = new ArrayList<>();
+          for (int i = 0; i < infos.size(); i++) {
+            items.add(Convert.completionItem(infos.get(i), lazy ? new Convert.CompletionKey(id, i) : null));
+          }
+          return Either.forRight(new CompletionList(false, items));
+        });
+  }
+
+  @Override
+  public CompletableFuture<CompletionItem> resolveCompletionItem(CompletionItem unresolved) {
+    return server.answer("completionItem/resolve", null, (snapshot, none) -> {
+      Optional<Convert.CompletionKey> key = Convert.completionKey(unresolved);
+      CompletionAnswer last = lastCompletion.get();
+      if (key.isEmpty() || last == null || last.id() != key.get().answer() || key.get().index() < 0
+          || key.get().index() >= last.items().size()) {
+        return unresolved; // an item of an older answer: it stays as it was
+      }
+      CompletionItemInfo info = last.items().get(key.get().index());
+      return info.label().equals(unresolved.getLabel())
+          ? Convert.withDocumentation(unresolved, info.documentation()) : unresolved;
+    });
+  }
+
+  // ---- highlighting, hints, folding, links and quick fixes, from the check of the current version ----
+
+  @Override
+  public CompletableFuture<SemanticTokens> semanticTokensFull(SemanticTokensParams params) {
+    return server.atPosition("textDocument/semanticTokens/full", params.getTextDocument().getUri(), null,
+        Convert.semanticTokens(null, List.of()), at -> {
+          SentTokens sent = tokens(at);
+          return Convert.semanticTokens(sent.resultId(), sent.data());
+        });
+  }
+
+  @Override
+  public CompletableFuture<Either<SemanticTokens, SemanticTokensDelta>> semanticTokensFullDelta(
+      SemanticTokensDeltaParams params) {
+    String previous = params.getPreviousResultId();
+    return server.atPosition("textDocument/semanticTokens/full/delta", params.getTextDocument().getUri(), null,
+        Either.forLeft(Convert.semanticTokens(null, List.of())), at -> {
+          SentTokens before = sentTokens.get(at.path());
+          SentTokens now = tokens(at);
+          if (before == null || previous == null || !previous.equals(before.resultId())) {
+            return Either.forLeft(Convert.semanticTokens(now.resultId(), now.data()));
+          }
+          return Either.forRight(Convert.semanticTokensDelta(now.resultId(), before.data(), now.data()));
+        });
+  }
+
+  /** Computes, encodes and remembers the document's tokens under a new result id. */
+  private SentTokens tokens(JonquilLanguageServer.At at) {
+    List<Integer> data = at.convert().semanticTokenData(at.source(),
+        server.answers.semanticTokens(at.result(), at.path()));
+    SentTokens sent = new SentTokens(Long.toString(ids.incrementAndGet()), List.copyOf(data));
+    if (server.documents.get(at.path()).isPresent()) {
+      sentTokens.put(at.path(), sent); // closing a document forgets its tokens; a file never opened has none kept
+    }
+    return sent;
+  }
+
+  @Override
+  public CompletableFuture<List<InlayHint>> inlayHint(InlayHintParams params) {
+    Range range = params.getRange();
+    return server.atPosition("textDocument/inlayHint", params.getTextDocument().getUri(), null, List.of(), at -> {
+      int start = range == null ? 0 : at.convert().offset(at.source(), range.getStart());
+      int end = range == null ? at.source().text().length() : at.convert().offset(at.source(), range.getEnd());
+      List<InlayHint> out = new ArrayList<>();
+      for (jonquil.ide.InlayHint h
+          : server.answers.inlayHints(at.result(), at.path(), Math.min(start, end), Math.max(start, end))) {
+        out.add(at.convert().inlayHint(at.source(), h));
+      }
+      return out;
+    });
+  }
+
+  @Override
+  public CompletableFuture<List<FoldingRange>> foldingRange(FoldingRangeRequestParams params) {
+    boolean linesOnly = JonquilLanguageServer.ClientSupport.lineFoldingOnly(server.clientCapabilities());
+    Integer limit = JonquilLanguageServer.ClientSupport.foldingRangeLimit(server.clientCapabilities());
+    return server.atPosition("textDocument/foldingRange", params.getTextDocument().getUri(), null, List.of(), at -> {
+      List<FoldingRange> out = new ArrayList<>();
+      for (FoldingRangeInfo f : server.answers.foldingRanges(at.result(), at.path())) {
+        FoldingRange range = at.convert().foldingRange(at.source(), f, linesOnly);
+        if (range != null && (limit == null || out.size() < limit)) {
+          out.add(range);
+        }
+      }
+      return out;
+    });
+  }
+
+  @Override
+  public CompletableFuture<List<DocumentLink>> documentLink(DocumentLinkParams params) {
+    return server.atPosition("textDocument/documentLink", params.getTextDocument().getUri(), null, List.of(), at -> {
+      List<DocumentLink> out = new ArrayList<>();
+      for (DocumentLinkInfo link : server.answers.documentLinks(at.result(), at.path())) {
+        out.add(at.convert().documentLink(at.source(), link));
+      }
+      return out;
+    });
+  }
+
+  @Override
+  public CompletableFuture<List<Either<Command, CodeAction>>> codeAction(CodeActionParams params) {
+    var caps = server.clientCapabilities();
+    boolean literals = JonquilLanguageServer.ClientSupport.codeActionLiterals(caps);
+    boolean preferred = JonquilLanguageServer.ClientSupport.preferredCodeActions(caps);
+    boolean documentChanges = JonquilLanguageServer.ClientSupport.documentChanges(caps);
+    Range range = params.getRange();
+    List<String> only = params.getContext() == null ? null : params.getContext().getOnly();
+    return server.atPosition("textDocument/codeAction", params.getTextDocument().getUri(), null, List.of(), at -> {
+      if (!literals) {
+        return List.of(); // such a client could only take commands, and a fix is an edit
+      }
+      int start = range == null ? 0 : at.convert().offset(at.source(), range.getStart());
+      int end = range == null ? start : at.convert().offset(at.source(), range.getEnd());
+      List<Either<Command, CodeAction>> out = new ArrayList<>();
+      for (CodeActionInfo a : server.answers.codeActions(at.result(), at.path(),
+          new TextRange(Math.min(start, end), Math.max(start, end)))) {
+        if (Convert.kindRequested(a.kind(), only)) {
+          out.add(Either.forRight(at.convert().codeAction(a, at.result().files()::get,
+              file -> at.versions().get(file), documentChanges, preferred)));
+        }
+      }
+      return out;
+    });
   }
 
   // ---- formatting: from the buffer as the request found it, never waiting for a check ----

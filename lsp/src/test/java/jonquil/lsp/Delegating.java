@@ -8,6 +8,12 @@ import jonquil.ide.RenameResult;
 import jonquil.ide.HoverInfo;
 
 import java.nio.file.Path;
+import jonquil.ide.CodeActionInfo;
+import jonquil.ide.CompletionItemInfo;
+import jonquil.ide.DocumentLinkInfo;
+import jonquil.ide.FoldingRangeInfo;
+import jonquil.ide.InlayHint;
+import jonquil.ide.SemanticToken;
 import java.util.List;
 import java.util.Optional;
 import jonquil.Result;
@@ -54,5 +60,35 @@ class Delegating implements EditorAnswers {
   @Override
   public List<FileSymbol> workspaceSymbols(Result result, String query) {
     return to.workspaceSymbols(result, query);
+  }
+
+  @Override
+  public List<CompletionItemInfo> completions(Result result, Path file, int offset) {
+    return to.completions(result, file, offset);
+  }
+
+  @Override
+  public List<SemanticToken> semanticTokens(Result result, Path file) {
+    return to.semanticTokens(result, file);
+  }
+
+  @Override
+  public List<InlayHint> inlayHints(Result result, Path file, int start, int end) {
+    return to.inlayHints(result, file, start, end);
+  }
+
+  @Override
+  public List<FoldingRangeInfo> foldingRanges(Result result, Path file) {
+    return to.foldingRanges(result, file);
+  }
+
+  @Override
+  public List<DocumentLinkInfo> documentLinks(Result result, Path file) {
+    return to.documentLinks(result, file);
+  }
+
+  @Override
+  public List<CodeActionInfo> codeActions(Result result, Path file, TextRange range) {
+    return to.codeActions(result, file, range);
   }
 }

@@ -9,6 +9,12 @@ import jonquil.ide.RenameResult;
 import jonquil.ide.HoverInfo;
 
 import java.nio.file.Path;
+import jonquil.ide.CodeActionInfo;
+import jonquil.ide.CompletionItemInfo;
+import jonquil.ide.DocumentLinkInfo;
+import jonquil.ide.FoldingRangeInfo;
+import jonquil.ide.InlayHint;
+import jonquil.ide.SemanticToken;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
@@ -49,6 +55,36 @@ public final class NoAnswers implements EditorAnswers {
 
   @Override
   public List<FileSymbol> workspaceSymbols(Result result, String query) {
+    return List.of();
+  }
+
+  @Override
+  public List<CompletionItemInfo> completions(Result result, Path file, int offset) {
+    return List.of();
+  }
+
+  @Override
+  public List<SemanticToken> semanticTokens(Result result, Path file) {
+    return List.of();
+  }
+
+  @Override
+  public List<InlayHint> inlayHints(Result result, Path file, int start, int end) {
+    return List.of();
+  }
+
+  @Override
+  public List<FoldingRangeInfo> foldingRanges(Result result, Path file) {
+    return List.of();
+  }
+
+  @Override
+  public List<DocumentLinkInfo> documentLinks(Result result, Path file) {
+    return List.of();
+  }
+
+  @Override
+  public List<CodeActionInfo> codeActions(Result result, Path file, TextRange range) {
     return List.of();
   }
 }
