@@ -60,4 +60,18 @@ public record Emission(double wavelength, double averagePower, double pulseEnerg
       throw new IllegalArgumentException(name + " must be finite");
     }
   }
+
+  /**
+   * Why a pulse train cannot be judged as pulses over an exposure duration, or null when
+   * it can: both standards' pulse rules assume pulses shorter than their spacing and the exposure.
+   */
+  public String trainProblem(double exposureDuration) {
+    if (pulseDuration() * repetitionRate() >= 1) {
+      return "pulse duration × repetition rate ≥ 1: treat the emission as continuous wave";
+    }
+    if (pulseDuration() > exposureDuration) {
+      return "pulse longer than the exposure duration";
+    }
+    return null;
+  }
 }

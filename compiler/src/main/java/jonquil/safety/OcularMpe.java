@@ -46,7 +46,7 @@ public final class OcularMpe {
       return Outcome.of(new Exposure(h, h / tau, tau, LIMITING_APERTURE, h, Double.NaN, Double.NaN,
           "single pulse", table), table);
     }
-    String trainRefusal = trainRefusal(e, exposureDuration);
+    String trainRefusal = e.trainProblem(exposureDuration);
     if (trainRefusal != null) {
       return Outcome.notEvaluated(trainRefusal, table);
     }
@@ -80,16 +80,6 @@ public final class OcularMpe {
     }
     if (t < Ed3.T_MIN_EYE) {
       return "exposure duration " + t + " s is below 10 ps; not implemented";
-    }
-    return null;
-  }
-
-  static String trainRefusal(Emission e, double exposureDuration) {
-    if (e.pulseDuration() * e.repetitionRate() >= 1) {
-      return "pulse duration × repetition rate ≥ 1: treat the emission as continuous wave";
-    }
-    if (e.pulseDuration() > exposureDuration) {
-      return "pulse longer than the exposure duration";
     }
     return null;
   }

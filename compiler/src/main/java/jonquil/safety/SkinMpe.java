@@ -47,7 +47,7 @@ public final class SkinMpe {
       return Outcome.of(new Exposure(h, h / tau, tau, LIMITING_APERTURE, h, Double.NaN, Double.NaN, "single pulse",
           table), table);
     }
-    String trainRefusal = OcularMpe.trainRefusal(e, exposureDuration);
+    String trainRefusal = e.trainProblem(exposureDuration);
     if (trainRefusal != null) {
       return Outcome.notEvaluated(trainRefusal, table);
     }

@@ -62,7 +62,7 @@ public final class AnsiOcularMpe {
       return Outcome.of(new Exposure(h, h / tau, tau, LIMITING_APERTURE, h, Double.NaN, Double.NaN,
           AnsiPulseRules.RULE1, table), table);
     }
-    String trainRefusal = trainRefusal(e, exposureDuration);
+    String trainRefusal = e.trainProblem(exposureDuration);
     if (trainRefusal != null) {
       return Outcome.notEvaluated(trainRefusal, Z136.PULSE_RULES);
     }
@@ -103,16 +103,6 @@ public final class AnsiOcularMpe {
     }
     if (t < shortest) {
       return "exposure duration " + t + " s is below " + shortestText + "; not implemented";
-    }
-    return null;
-  }
-
-  static String trainRefusal(Emission e, double exposureDuration) {
-    if (e.pulseDuration() * e.repetitionRate() >= 1) {
-      return "pulse duration × repetition rate ≥ 1: treat the emission as continuous wave";
-    }
-    if (e.pulseDuration() > exposureDuration) {
-      return "pulse longer than the exposure duration";
     }
     return null;
   }

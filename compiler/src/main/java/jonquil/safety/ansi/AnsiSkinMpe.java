@@ -52,7 +52,7 @@ public final class AnsiSkinMpe {
       return Outcome.of(new Exposure(h, h / tau, tau, LIMITING_APERTURE, h, Double.NaN, Double.NaN,
           AnsiPulseRules.RULE1, table), table);
     }
-    String trainRefusal = AnsiOcularMpe.trainRefusal(e, exposureDuration);
+    String trainRefusal = e.trainProblem(exposureDuration);
     if (trainRefusal != null) {
       return Outcome.notEvaluated(trainRefusal, Z136.PULSE_RULES);
     }
