@@ -52,6 +52,15 @@ class SamplesTest {
     }
   }
 
+  @TestFactory
+  Stream<DynamicTest> everySampleIsInTheCanonicalLayout() throws IOException {
+    return samples().stream().map(sample -> DynamicTest.dynamicTest(Repo.samples().relativize(sample).toString(), () -> {
+      jonquil.source.SourceFile file = new jonquil.source.SourceFile(sample, Files.readString(sample));
+      assertEquals(file.text(), jonquil.format.Formatter.format(file, jonquil.format.FormatOptions.DEFAULT).orElseThrow(),
+          "run 'jonquil fmt samples'");
+    }));
+  }
+
   /** Findings, then one line per requirement verdict with its place. */
   static String render(Result result) {
     StringBuilder out = new StringBuilder(DiagnosticText.render(result, Repo.samples()));
