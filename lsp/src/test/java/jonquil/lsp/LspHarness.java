@@ -179,6 +179,21 @@ final class LspHarness implements AutoCloseable {
     return result;
   }
 
+  /** Initializes with the given client capabilities and these workspace folders (no root URI). */
+  InitializeResult initialize(List<Path> folders, ClientCapabilities caps) throws Exception {
+    InitializeParams params = new InitializeParams();
+    params.setProcessId(null);
+    List<org.eclipse.lsp4j.WorkspaceFolder> list = new ArrayList<>();
+    for (Path f : folders) {
+      list.add(new org.eclipse.lsp4j.WorkspaceFolder(f.toUri().toString(), f.getFileName().toString()));
+    }
+    params.setWorkspaceFolders(list);
+    params.setCapabilities(caps);
+    InitializeResult result = remote.initialize(params).get(WAIT.toSeconds(), TimeUnit.SECONDS);
+    remote.initialized(new InitializedParams());
+    return result;
+  }
+
   void open(String uri, int version, String text) {
     remote.getTextDocumentService().didOpen(new DidOpenTextDocumentParams(new TextDocumentItem(uri, "jonquil", version, text)));
   }
