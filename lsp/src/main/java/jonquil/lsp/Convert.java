@@ -41,6 +41,7 @@ import org.eclipse.lsp4j.Hover;
 import org.eclipse.lsp4j.InlayHint;
 import org.eclipse.lsp4j.InsertTextFormat;
 import org.eclipse.lsp4j.Location;
+import org.eclipse.lsp4j.LocationLink;
 import org.eclipse.lsp4j.MarkupContent;
 import org.eclipse.lsp4j.MarkupKind;
 import org.eclipse.lsp4j.Position;
@@ -298,6 +299,22 @@ final class Convert {
   Location location(jonquil.ide.Location at, Function<Path, SourceFile> sources) {
     SourceFile source = orEmpty(at.file(), sources.apply(at.file()));
     return new Location(uri(at.file()), range(source, at.range()));
+  }
+
+  /**
+   * A definition as a link: the target's range serves as both its whole and its selected
+   * range (the editor answers give the declared name); {@code origin} is the name under the
+   * cursor in {@code from}, or null when there is none.
+   */
+  LocationLink locationLink(jonquil.ide.Location target, Function<Path, SourceFile> sources, SourceFile from,
+      TextRange origin) {
+    SourceFile source = orEmpty(target.file(), sources.apply(target.file()));
+    Range at = range(source, target.range());
+    LocationLink out = new LocationLink(uri(target.file()), at, at);
+    if (origin != null) {
+      out.setOriginSelectionRange(range(from, origin));
+    }
+    return out;
   }
 
   Hover hover(HoverInfo info, SourceFile source, boolean markdown) {

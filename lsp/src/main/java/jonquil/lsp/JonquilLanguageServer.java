@@ -478,6 +478,11 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
           && c.getTextDocument().getHover().getContentFormat().contains("markdown");
     }
 
+    static boolean definitionLinks(ClientCapabilities c) {
+      return c != null && c.getTextDocument() != null && c.getTextDocument().getDefinition() != null
+          && Boolean.TRUE.equals(c.getTextDocument().getDefinition().getLinkSupport());
+    }
+
     static boolean hierarchicalSymbols(ClientCapabilities c) {
       return c != null && c.getTextDocument() != null && c.getTextDocument().getDocumentSymbol() != null
           && Boolean.TRUE.equals(c.getTextDocument().getDocumentSymbol().getHierarchicalDocumentSymbolSupport());

@@ -140,14 +140,37 @@ final class JonquilTextDocumentService implements TextDocumentService {
   @Override
   public CompletableFuture<Either<List<? extends Location>, List<? extends LocationLink>>> definition(
       DefinitionParams params) {
+    boolean links = JonquilLanguageServer.ClientSupport.definitionLinks(server.clientCapabilities());
     return server.atPosition("textDocument/definition", params.getTextDocument().getUri(), params.getPosition(),
         Either.forLeft(List.of()), at -> {
+          List<jonquil.ide.Location> targets = server.answers.definition(at.result(), at.path(), at.offset());
+          if (links) {
+            TextRange origin = nameUnderCursor(at);
+            List<LocationLink> out = new ArrayList<>();
+            for (jonquil.ide.Location l : targets) {
+              out.add(at.convert().locationLink(l, at.result().files()::get, at.source(), origin));
+            }
+            return Either.forRight(out);
+          }
           List<Location> out = new ArrayList<>();
-          for (jonquil.ide.Location l : server.answers.definition(at.result(), at.path(), at.offset())) {
+          for (jonquil.ide.Location l : targets) {
             out.add(at.convert().location(l, at.result().files()::get));
           }
           return Either.forLeft(out);
         });
+  }
+
+  /**
+   * The occurrence of a name that holds the cursor, as the editor answers list it among the
+   * name's references; null when the cursor is on no name (e.g. inside a 'use' path).
+   */
+  private TextRange nameUnderCursor(JonquilLanguageServer.At at) {
+    for (jonquil.ide.Location l : server.answers.references(at.result(), at.path(), at.offset(), true)) {
+      if (l.file().equals(at.path()) && l.range().start() <= at.offset() && at.offset() <= l.range().end()) {
+        return l.range();
+      }
+    }
+    return null;
   }
 
   @Override
