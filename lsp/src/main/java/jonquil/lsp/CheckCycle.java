@@ -10,6 +10,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
+import java.util.function.BooleanSupplier;
 import java.util.function.Supplier;
 import jonquil.Checker;
 import jonquil.Result;
@@ -31,16 +32,19 @@ final class CheckCycle implements Runnable {
   private final Supplier<List<Path>> folders;
   private final Supplier<Convert> convert;
   private final Supplier<LanguageClient> client;
+  /** True when the client pulls the diagnostics of open documents: they are then never pushed. */
+  private final BooleanSupplier pull;
   /** What the editor shows now, per file; touched by the worker thread only. */
   private final Map<Path, Published> published = new HashMap<>();
 
   CheckCycle(Documents documents, Snapshots snapshots, Supplier<List<Path>> folders, Supplier<Convert> convert,
-      Supplier<LanguageClient> client) {
+      Supplier<LanguageClient> client, BooleanSupplier pull) {
     this.documents = documents;
     this.snapshots = snapshots;
     this.folders = folders;
     this.convert = convert;
     this.client = client;
+    this.pull = pull;
   }
 
   @Override
@@ -69,6 +73,9 @@ final class CheckCycle implements Runnable {
       return;
     }
     for (Documents.Doc doc : documents.snapshot().values()) {
+      if (pull.getAsBoolean()) {
+        continue; // the client pulls: the failed check's snapshot answers it
+      }
       List<Diagnostic> diagnostics = List.of(Convert.internalError(message));
       published.put(doc.path(), new Published(doc.uri(), doc.version(), diagnostics));
       to.publishDiagnostics(new PublishDiagnosticsParams(doc.uri(), diagnostics, doc.version()));
@@ -82,14 +89,9 @@ final class CheckCycle implements Runnable {
       return;
     }
     Convert conv = convert.get();
-    Map<Path, SourceFile> sources = new HashMap<>();
-    Map<Path, Set<jonquil.diag.Diagnostic>> byFile = new LinkedHashMap<>();
-    for (Result r : results) {
-      r.files().forEach(sources::putIfAbsent);
-      for (jonquil.diag.Diagnostic d : r.diagnostics()) {
-        byFile.computeIfAbsent(d.file(), k -> new LinkedHashSet<>()).add(d);
-      }
-    }
+    Map<Path, SourceFile> sources = sources(results);
+    Map<Path, Set<jonquil.diag.Diagnostic>> byFile = byFile(results);
+    boolean pulled = pull.getAsBoolean();
     Set<Path> targets = new LinkedHashSet<>(open.keySet());
     targets.addAll(byFile.keySet());
     targets.addAll(published.keySet());
@@ -102,6 +104,14 @@ final class CheckCycle implements Runnable {
         }
       } else if (documents.get(path).isPresent()) {
         continue; // opened during this run: the next run covers it with its version
+      }
+      if (pulled && doc != null) {
+        Published before = published.remove(path);
+        if (before != null && !before.diagnostics().isEmpty()) {
+          // Pushed while it was closed (as a used file); now the client pulls it, so the push is taken back.
+          to.publishDiagnostics(new PublishDiagnosticsParams(before.uri(), List.of(), null));
+        }
+        continue;
       }
       List<Diagnostic> diagnostics = new ArrayList<>();
       for (jonquil.diag.Diagnostic d : byFile.getOrDefault(path, Set.of())) {
@@ -123,6 +133,26 @@ final class CheckCycle implements Runnable {
         published.put(path, next);
       }
     }
+  }
+
+  /** Every file the results read, the first result's copy winning. */
+  static Map<Path, SourceFile> sources(List<Result> results) {
+    Map<Path, SourceFile> out = new HashMap<>();
+    for (Result r : results) {
+      r.files().forEach(out::putIfAbsent);
+    }
+    return out;
+  }
+
+  /** The results' diagnostics by file, in the results' order, each once (a file used by two roots is checked twice). */
+  static Map<Path, Set<jonquil.diag.Diagnostic>> byFile(List<Result> results) {
+    Map<Path, Set<jonquil.diag.Diagnostic>> out = new LinkedHashMap<>();
+    for (Result r : results) {
+      for (jonquil.diag.Diagnostic d : r.diagnostics()) {
+        out.computeIfAbsent(d.file(), k -> new LinkedHashSet<>()).add(d);
+      }
+    }
+    return out;
   }
 
   /**

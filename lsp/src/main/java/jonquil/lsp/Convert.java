@@ -28,9 +28,11 @@ import org.eclipse.lsp4j.CodeAction;
 import org.eclipse.lsp4j.CompletionItem;
 import org.eclipse.lsp4j.CompletionItemKind;
 import org.eclipse.lsp4j.Diagnostic;
+import org.eclipse.lsp4j.DiagnosticRegistrationOptions;
 import org.eclipse.lsp4j.DiagnosticRelatedInformation;
 import org.eclipse.lsp4j.DiagnosticSeverity;
 import org.eclipse.lsp4j.DidChangeWatchedFilesRegistrationOptions;
+import org.eclipse.lsp4j.DocumentDiagnosticReport;
 import org.eclipse.lsp4j.DocumentLink;
 import org.eclipse.lsp4j.DocumentSymbol;
 import org.eclipse.lsp4j.FileSystemWatcher;
@@ -46,6 +48,8 @@ import org.eclipse.lsp4j.MarkupContent;
 import org.eclipse.lsp4j.MarkupKind;
 import org.eclipse.lsp4j.Position;
 import org.eclipse.lsp4j.Range;
+import org.eclipse.lsp4j.RelatedFullDocumentDiagnosticReport;
+import org.eclipse.lsp4j.RelatedUnchangedDocumentDiagnosticReport;
 import org.eclipse.lsp4j.SemanticTokens;
 import org.eclipse.lsp4j.SemanticTokensDelta;
 import org.eclipse.lsp4j.SemanticTokensEdit;
@@ -248,6 +252,23 @@ final class Convert {
       out.setRelatedInformation(related);
     }
     return out;
+  }
+
+  /** Pull diagnostics per document: they depend on the files a document uses; no workspace-wide pull. */
+  static DiagnosticRegistrationOptions diagnosticProvider() {
+    DiagnosticRegistrationOptions out = new DiagnosticRegistrationOptions(true, false);
+    out.setIdentifier(SOURCE);
+    return out;
+  }
+
+  /** A pull answer: "unchanged" when the client already holds {@code resultId}, else the full list. */
+  static DocumentDiagnosticReport diagnosticReport(String resultId, String previousResultId, List<Diagnostic> items) {
+    if (resultId.equals(previousResultId)) {
+      return new DocumentDiagnosticReport(new RelatedUnchangedDocumentDiagnosticReport(resultId));
+    }
+    RelatedFullDocumentDiagnosticReport full = new RelatedFullDocumentDiagnosticReport(items);
+    full.setResultId(resultId);
+    return new DocumentDiagnosticReport(full);
   }
 
   /** The diagnostic shown when checking itself failed: at the start of the file, never silent. */

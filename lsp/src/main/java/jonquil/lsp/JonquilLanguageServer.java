@@ -92,7 +92,8 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
   /** A server whose checks wait {@code debounce} after the last edit (tests and benchmarks shorten it). */
   JonquilLanguageServer(EditorAnswers answers, Duration debounce) {
     this.answers = answers;
-    this.cycle = new CheckCycle(documents, snapshots, () -> folders, () -> convert, () -> client);
+    this.cycle = new CheckCycle(documents, snapshots, () -> folders, () -> convert, () -> client,
+        () -> ClientSupport.pullDiagnostics(capabilities));
     this.scheduler = new CheckScheduler(cycle, this::checkFailed, debounce, MAX_DELAY.compareTo(debounce) > 0
         ? MAX_DELAY : debounce, WarmUp::run);
     AtomicInteger n = new AtomicInteger();
@@ -157,6 +158,10 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     out.setInlayHintProvider(true);
     out.setFoldingRangeProvider(true);
     out.setDocumentLinkProvider(new DocumentLinkOptions(false));
+    if (ClientSupport.pullDiagnostics(caps)) {
+      // A document's diagnostics depend on the files it uses; no workspace-wide pull.
+      out.setDiagnosticProvider(Convert.diagnosticProvider());
+    }
     if (ClientSupport.codeActionLiterals(caps)) {
       out.setCodeActionProvider(new CodeActionOptions(List.of(CodeActionKind.QuickFix)));
     } else {
@@ -476,6 +481,11 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
       return c != null && c.getTextDocument() != null && c.getTextDocument().getHover() != null
           && c.getTextDocument().getHover().getContentFormat() != null
           && c.getTextDocument().getHover().getContentFormat().contains("markdown");
+    }
+
+    /** The client pulls document diagnostics (textDocument/diagnostic), so they are not pushed to it. */
+    static boolean pullDiagnostics(ClientCapabilities c) {
+      return c != null && c.getTextDocument() != null && c.getTextDocument().getDiagnostic() != null;
     }
 
     static boolean definitionLinks(ClientCapabilities c) {

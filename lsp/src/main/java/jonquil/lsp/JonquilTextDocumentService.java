@@ -10,6 +10,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.Set;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.atomic.AtomicLong;
@@ -28,10 +29,13 @@ import org.eclipse.lsp4j.CompletionItem;
 import org.eclipse.lsp4j.CompletionList;
 import org.eclipse.lsp4j.CompletionParams;
 import org.eclipse.lsp4j.DefinitionParams;
+import org.eclipse.lsp4j.Diagnostic;
 import org.eclipse.lsp4j.DidChangeTextDocumentParams;
 import org.eclipse.lsp4j.DidCloseTextDocumentParams;
 import org.eclipse.lsp4j.DidOpenTextDocumentParams;
 import org.eclipse.lsp4j.DidSaveTextDocumentParams;
+import org.eclipse.lsp4j.DocumentDiagnosticParams;
+import org.eclipse.lsp4j.DocumentDiagnosticReport;
 import org.eclipse.lsp4j.DocumentFormattingParams;
 import org.eclipse.lsp4j.DocumentLink;
 import org.eclipse.lsp4j.DocumentLinkParams;
@@ -127,6 +131,33 @@ final class JonquilTextDocumentService implements TextDocumentService {
   }
 
   // ---- questions, answered from the latest check ----
+
+  /**
+   * Pull diagnostics: the document's diagnostics from the check of its current version. The
+   * result id is that version plus a hash of the text and of the report, so a change in a used
+   * file (same version, same text) still gives a new id.
+   */
+  @Override
+  public CompletableFuture<DocumentDiagnosticReport> diagnostic(DocumentDiagnosticParams params) {
+    String previous = params.getPreviousResultId();
+    return server.answer("textDocument/diagnostic", params.getTextDocument().getUri(), (snapshot, path) -> {
+      List<Diagnostic> items = new ArrayList<>();
+      if (path == null) {
+        return Convert.diagnosticReport("none", previous, items);
+      }
+      Map<Path, SourceFile> sources = CheckCycle.sources(snapshot.results());
+      Convert conv = server.convert();
+      for (jonquil.diag.Diagnostic d : CheckCycle.byFile(snapshot.results()).getOrDefault(path, Set.of())) {
+        items.add(conv.diagnostic(d, sources::get));
+      }
+      SourceFile source = sources.get(path);
+      Integer version = snapshot.versions().get(path);
+      String resultId = (version == null ? "disk" : "v" + version) + "-"
+          + Integer.toHexString(source == null ? 0 : source.text().hashCode()) + "-"
+          + Integer.toHexString(items.hashCode());
+      return Convert.diagnosticReport(resultId, previous, items);
+    });
+  }
 
   @Override
   public CompletableFuture<Hover> hover(HoverParams params) {
