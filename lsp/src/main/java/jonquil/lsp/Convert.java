@@ -339,7 +339,8 @@ final class Convert {
   }
 
   Hover hover(HoverInfo info, SourceFile source, boolean markdown) {
-    Hover hover = new Hover(new MarkupContent(markdown ? MarkupKind.MARKDOWN : MarkupKind.PLAINTEXT, info.markdown()));
+    Hover hover = new Hover(markdown ? new MarkupContent(MarkupKind.MARKDOWN, info.markdown())
+        : new MarkupContent(MarkupKind.PLAINTEXT, PlainMarkdown.strip(info.markdown())));
     if (info.range() != null) {
       hover.setRange(range(source, info.range()));
     }

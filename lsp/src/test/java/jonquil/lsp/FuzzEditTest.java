@@ -64,7 +64,7 @@ class FuzzEditTest {
     String uri = file.toUri().toString();
     SplittableRandom random = new SplittableRandom(SEED);
     try (LspHarness h = new LspHarness(new IdeAnswers(), Duration.ofMillis(10))) {
-      h.initialize(samples);
+      h.initialize(samples, HoverFormatTest.hoverClient("markdown")); // hover compared as the compiler's Markdown
       h.open(uri, 1, original);
       h.client.await(uri, p -> Integer.valueOf(1).equals(p.getVersion()));
       String text = original;
