@@ -423,6 +423,7 @@ final class Convert {
       }
     });
     if (documentChanges) {
+      out.setChanges(null); // LSP4J starts every edit with an empty 'changes'; send only one form
       out.setDocumentChanges(changes);
     } else {
       out.setChanges(plain);

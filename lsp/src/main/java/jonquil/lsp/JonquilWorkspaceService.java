@@ -20,7 +20,7 @@ import org.eclipse.lsp4j.services.WorkspaceService;
 /** The workspace/* methods: symbol search through the editor answers, and re-checks when files or folders change. */
 final class JonquilWorkspaceService implements WorkspaceService {
   /** At most this many symbols per search, so a one-letter query stays cheap to send. */
-  static final int MAX_SYMBOLS = 500;
+  static final int MAX_SYMBOLS = 200;
 
   private final JonquilLanguageServer server;
 
