@@ -69,7 +69,9 @@ class CancellationTest {
       List<ResponseMessage> cancelled = awaitCancelled(h, 2);
       long millis = TimeUnit.NANOSECONDS.toMillis(System.nanoTime() - sent);
       assertEquals(2, cancelled.size());
-      assertTrue(millis < 500, "cancellation answered after " + millis + " ms");
+      // LSP4J answers -32800 as soon as the reader takes $/cancelRequest; the body's interrupt is separate.
+      assertTrue(millis < 100, "cancellation answered after " + millis + " ms");
+      System.err.println("cancellation: both -32800 answers after " + millis + " ms");
 
       // Both workers are free again: a third request is answered although the latch never opens.
       Hover next = service.hover(new HoverParams(doc, new Position(0, 3))).get(5, TimeUnit.SECONDS);

@@ -50,7 +50,9 @@ class MemorySoakTest {
       long after = settledHeap(h);
 
       long bound = Math.max(baseline / 10, FLOOR_BYTES);
-      System.err.printf("memory soak: baseline %.1f MB, after %.1f MB%n", mb(baseline), mb(after));
+      long max = Runtime.getRuntime().maxMemory();
+      System.err.printf("memory soak: baseline %.1f MB, after %.1f MB, max heap %.0f MB%n", mb(baseline), mb(after),
+          mb(max));
       assertTrue(after - baseline < bound, String.format("retained heap grew from %.1f MB to %.1f MB (bound +%.1f MB)",
           mb(baseline), mb(after), mb(bound)));
       assertEquals(1, h.server.documents.snapshot().size(), "only the main document is still open");
