@@ -29,7 +29,7 @@ final class CheckCycle implements Runnable {
 
   private final Documents documents;
   private final Snapshots snapshots;
-  private final Supplier<List<Path>> folders;
+  private final Supplier<JonquilLanguageServer.Folders> folders;
   private final Supplier<Convert> convert;
   private final Supplier<LanguageClient> client;
   /** True when the client pulls the diagnostics of open documents: they are then never pushed. */
@@ -37,7 +37,7 @@ final class CheckCycle implements Runnable {
   /** What the editor shows now, per file; touched by the worker thread only. */
   private final Map<Path, Published> published = new HashMap<>();
 
-  CheckCycle(Documents documents, Snapshots snapshots, Supplier<List<Path>> folders, Supplier<Convert> convert,
+  CheckCycle(Documents documents, Snapshots snapshots, Supplier<JonquilLanguageServer.Folders> folders, Supplier<Convert> convert,
       Supplier<LanguageClient> client, BooleanSupplier pull) {
     this.documents = documents;
     this.snapshots = snapshots;
@@ -53,7 +53,8 @@ final class CheckCycle implements Runnable {
     Map<Path, String> buffers = new HashMap<>();
     Map<Path, Integer> versions = new HashMap<>();
     Map<Path, List<Path>> byRoot = new LinkedHashMap<>();
-    List<Path> roots = folders.get();
+    JonquilLanguageServer.Folders now = folders.get();
+    List<Path> roots = now.paths();
     open.values().stream().sorted((a, b) -> a.path().compareTo(b.path())).forEach(doc -> {
       buffers.put(doc.path(), doc.text());
       versions.put(doc.path(), doc.version());
@@ -62,7 +63,7 @@ final class CheckCycle implements Runnable {
     List<Result> results = new ArrayList<>();
     byRoot.forEach((root, files) -> results.add(
         Checker.check(Workspace.withOverlay(root, buffers), files, jonquil.CheckOptions.EDITOR)));
-    snapshots.publish(new Snapshots.Snapshot(results, versions));
+    snapshots.publish(new Snapshots.Snapshot(results, versions, now.generation()));
     publish(open, results);
   }
 

@@ -61,6 +61,8 @@ import org.eclipse.lsp4j.TextDocumentEdit;
 import org.eclipse.lsp4j.TextEdit;
 import org.eclipse.lsp4j.VersionedTextDocumentIdentifier;
 import org.eclipse.lsp4j.WorkspaceEdit;
+import org.eclipse.lsp4j.WorkspaceFoldersOptions;
+import org.eclipse.lsp4j.WorkspaceServerCapabilities;
 import org.eclipse.lsp4j.WorkspaceSymbol;
 import org.eclipse.lsp4j.jsonrpc.messages.Either;
 
@@ -286,6 +288,14 @@ final class Convert {
       watchers.add(new FileSystemWatcher(Either.forLeft(glob)));
     }
     return new DidChangeWatchedFilesRegistrationOptions(watchers);
+  }
+
+  /** The workspace part of the server capabilities: multi-root folders, with change notifications. */
+  static WorkspaceServerCapabilities workspaceFolders() {
+    WorkspaceFoldersOptions folders = new WorkspaceFoldersOptions();
+    folders.setSupported(true);
+    folders.setChangeNotifications(true);
+    return new WorkspaceServerCapabilities(folders);
   }
 
   // ---- formatting ----

@@ -79,7 +79,14 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
   private volatile LanguageClient client;
   private volatile Convert convert = new Convert(Convert.Encoding.UTF_16, documents::uriOf);
   private volatile ClientCapabilities capabilities = new ClientCapabilities();
-  private volatile List<Path> folders = List.of();
+  private volatile Folders folders = new Folders(List.of(), 0);
+
+  /** The workspace folders, and how many times they were set (so a request can wait for a check under them). */
+  record Folders(List<Path> paths, long generation) {
+    Folders {
+      paths = List.copyOf(paths);
+    }
+  }
 
   public JonquilLanguageServer() {
     this(new IdeAnswers());
@@ -123,7 +130,7 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
       capabilities = caps;
       convert = new Convert(Convert.Encoding.negotiate(caps), documents::uriOf,
           ClientSupport.semanticTokenType(caps, Convert.UNIT_TOKEN));
-      folders = foldersOf(params);
+      folders = new Folders(foldersOf(params), folders.generation() + 1);
       return CompletableFuture.completedFuture(new InitializeResult(capabilities(caps), new ServerInfo("jonquil",
           ToolVersion.current())));
     } catch (RuntimeException e) {
@@ -148,6 +155,8 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     }
     out.setDocumentSymbolProvider(true);
     out.setWorkspaceSymbolProvider(true);
+    // Sent whatever the client said: one without workspace folders never sends the notification.
+    out.setWorkspace(Convert.workspaceFolders());
     out.setDocumentFormattingProvider(true);
     out.setDocumentRangeFormattingProvider(true);
     CompletionOptions completion = new CompletionOptions(true, List.of("."));
@@ -262,12 +271,13 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     return capabilities;
   }
 
+  /** Replaces the workspace folders; called on the reader thread only, so the generation never goes back. */
   void setFolders(List<Path> newFolders) {
-    folders = List.copyOf(newFolders);
+    folders = new Folders(newFolders, folders.generation() + 1);
   }
 
   List<Path> folders() {
-    return folders;
+    return folders.paths();
   }
 
   void scheduleCheck() {
@@ -344,7 +354,7 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     Map<Path, String> buffers = new HashMap<>();
     documents.snapshot().forEach((p, open) -> buffers.put(p, open.text()));
     buffers.put(doc.path(), doc.text());
-    Path root = CheckCycle.projectRoot(doc.path(), folders);
+    Path root = CheckCycle.projectRoot(doc.path(), folders.paths());
     return Checker.check(Workspace.withOverlay(root, buffers), List.of(doc.path()), CheckOptions.EDITOR);
   }
 
@@ -370,9 +380,7 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
       }
       Path path = uri == null ? null : Documents.pathOf(uri).orElse(null);
       Integer version = path == null ? null : documents.get(path).map(Documents.Doc::version).orElse(null);
-      CompletableFuture<Snapshots.Snapshot> fresh = path == null
-          ? CompletableFuture.completedFuture(snapshots.latest())
-          : snapshots.fresh(path, version, FRESH_WAIT);
+      CompletableFuture<Snapshots.Snapshot> fresh = snapshots.fresh(path, version, folders.generation(), FRESH_WAIT);
       CompletableFuture<T> reply = new CompletableFuture<>();
       AtomicReference<Future<?>> running = new AtomicReference<>();
       fresh.whenComplete((snapshot, waitError) -> {

@@ -14,9 +14,12 @@ import jonquil.Result;
 /** The latest finished check that requests answer from, and a non-blocking wait for one that saw a given document version. */
 final class Snapshots {
 
-  /** The immutable results of one check and the document versions they were computed from. */
-  record Snapshot(List<Result> results, Map<Path, Integer> versions) {
-    static final Snapshot EMPTY = new Snapshot(List.of(), Map.of());
+  /**
+   * The immutable results of one check, the document versions they were computed from, and the
+   * generation of the workspace folders they were rooted by (it grows with every folder change).
+   */
+  record Snapshot(List<Result> results, Map<Path, Integer> versions, long folders) {
+    static final Snapshot EMPTY = new Snapshot(List.of(), Map.of(), 0);
 
     Snapshot {
       results = List.copyOf(results);
@@ -34,7 +37,7 @@ final class Snapshots {
     }
   }
 
-  private record Waiter(Path path, int version, CompletableFuture<Snapshot> future) {}
+  private record Waiter(Path path, Integer version, long folders, CompletableFuture<Snapshot> future) {}
 
   private volatile Snapshot latest = Snapshot.EMPTY;
   private final List<Waiter> waiters = new ArrayList<>();
@@ -49,7 +52,7 @@ final class Snapshots {
     synchronized (waiters) {
       for (Iterator<Waiter> it = waiters.iterator(); it.hasNext(); ) {
         Waiter w = it.next();
-        if (w.future.isDone() || saw(snapshot, w.path, w.version)) {
+        if (w.future.isDone() || saw(snapshot, w.path, w.version, w.folders)) {
           it.remove();
           ready.add(w);
         }
@@ -70,27 +73,35 @@ final class Snapshots {
   }
 
   /**
-   * A snapshot that saw at least {@code version} of the file ({@code null}: any will do);
-   * after {@code timeout}, the latest one whatever it saw. Never blocks the caller.
+   * A snapshot that saw at least {@code version} of the file ({@code null}: any will do) under
+   * at least generation {@code folders} of the workspace folders; after {@code timeout}, the
+   * latest one whatever it saw. Before the first check, a request about no document version
+   * gets the empty snapshot at once. Never blocks the caller.
    */
-  CompletableFuture<Snapshot> fresh(Path file, Integer version, Duration timeout) {
+  CompletableFuture<Snapshot> fresh(Path file, Integer version, long folders, Duration timeout) {
     Snapshot now = latest;
-    if (version == null || saw(now, file, version)) {
+    if (saw(now, file, version, folders) || (version == null && now == Snapshot.EMPTY)) {
       return CompletableFuture.completedFuture(now);
     }
     CompletableFuture<Snapshot> future = new CompletableFuture<>();
     synchronized (waiters) {
-      waiters.add(new Waiter(file, version, future));
+      waiters.add(new Waiter(file, version, folders, future));
     }
     // A check may have finished between the test above and the registration.
-    if (saw(latest, file, version)) {
+    if (saw(latest, file, version, folders)) {
       future.complete(latest);
     }
     return future.completeOnTimeout(null, timeout.toMillis(), TimeUnit.MILLISECONDS)
         .thenApply(s -> s != null ? s : latest);
   }
 
-  private static boolean saw(Snapshot snapshot, Path file, int version) {
+  private static boolean saw(Snapshot snapshot, Path file, Integer version, long folders) {
+    if (snapshot.folders() < folders) {
+      return false; // checked under workspace folders that have changed since
+    }
+    if (version == null) {
+      return true;
+    }
     Integer seen = snapshot.versions().get(file);
     return seen != null && seen >= version;
   }
