@@ -46,7 +46,7 @@ final class ElementOptics {
         return through(in, "out", Jones.polarizer(axis, t, er));
       }
       case WAVEPLATE:
-        return through(in, "out", waveplate(e, in.wavelength()).scaled(Math.sqrt(coatedPairTransmission(e, in))));
+        return coatedPlate(e, in, waveplate(e, in.wavelength()));
       case ROTATOR: {
         double t = e.number("transmission", "t").orElse(1);
         return through(in, "out", Jones.rotator(e.number("rotation", "angle").orElse(0)).scaled(Math.sqrt(t)));
@@ -129,15 +129,22 @@ final class ElementOptics {
     return Jones.retarder(retardance, e.number("fast_axis", "angle").orElse(0));
   }
 
-  private double coatedPairTransmission(ResolvedElement e, Beam in) {
+  /**
+   * A plate acting by its Jones matrix, whose two coated faces (when a coating is given)
+   * reflect part of the light back as a ghost, summed incoherently like a window's.
+   */
+  private Response coatedPlate(ResolvedElement e, Beam in, Jones j) {
     if (e.param("coating").isEmpty()) {
-      return 1;
+      return through(in, "out", j);
     }
     Complex outside = materials.index(in.medium(), in.wavelength());
     Complex inside = e.param("material").flatMap(g -> g.slot("material"))
-        .map(v -> materials.index(((Value.Ref) v).symbol(), in.wavelength())).orElse(new Complex(1.5, 0));
-    SurfaceModel.Powers s = surfaces.surface(e, outside, inside, 0, in.wavelength());
-    return s.ts() * s.ts();
+        .map(v -> real(materials.index(((Value.Ref) v).symbol(), in.wavelength()))).orElse(new Complex(1.5, 0));
+    SurfaceModel.Powers face = surfaces.surface(e, real(outside), inside, 0, in.wavelength());
+    double[] pair = plate(face.rs(), face.ts(), face.rs(), face.ts(), 1);
+    Beam out = in.with(in.light().transform(j).scaled(pair[0]));
+    Beam back = in.with(in.light().scaled(pair[1]), in.frame().reflect(0, 0));
+    return Response.balance(in, Map.of("out", out), List.of(new Ghost("face reflections", back, true)));
   }
 
   private Response splitter(ResolvedElement e, Beam in, double plane) {

@@ -41,7 +41,7 @@ final class SafetyVerdicts {
         if (!o.evaluated()) {
           return RequirementEvaluator.Verdict.notEvaluated(o.reason() + " (" + o.standard() + ")");
         }
-        RequirementEvaluator.Verdict v = RequirementEvaluator.compare(c, o.get().ordinal(), "class", "");
+        RequirementEvaluator.Verdict v = RequirementEvaluator.compare(c, specClass(o.get()).ordinal(), "class", "");
         return withNote(v, brief(o.standard()) + "; " + o.caution());
       }
       case NOHD:
@@ -70,6 +70,16 @@ final class SafetyVerdicts {
 
   private static RequirementEvaluator.Verdict withNote(RequirementEvaluator.Verdict v, String note) {
     return new RequirementEvaluator.Verdict(v.evaluated(), v.pass(), v.value(), v.bound(), v.margin(), v.unit(), note);
+  }
+
+  /**
+   * The spec's hazard class for the safety package's one, matched by label ("3R"), so the
+   * two enums (one per layer; safety knows no specs) can never drift apart silently.
+   */
+  static jonquil.resolve.HazardClass specClass(jonquil.safety.HazardClass c) {
+    String label = c.name().replace("CLASS_", "");
+    return jonquil.resolve.HazardClass.byLabel(label)
+        .orElseThrow(() -> new IllegalStateException("no spec hazard class for " + label));
   }
 
   /** The standard and edition alone ("IEC 60825-1:2014 (Ed. 3)"); the tables are in the JSON reason. */

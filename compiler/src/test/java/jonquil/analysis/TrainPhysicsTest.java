@@ -169,4 +169,19 @@ class TrainPhysicsTest {
     assertTrue(s.conservationError() < 1e-9, "error " + s.conservationError());
     assertTrue(s.strayPower() > 0, "the window's ghost and the lens's back reflections are stray");
   }
+
+  @Test
+  void aCoatedWaveplateSendsItsFaceReflectionsBackAsStrayLight() {
+    // Two faces of residual reflectance R, summed incoherently: T = (1 − R)/(1 + R), the rest
+    // heads back (same series as the window above; Born & Wolf, 7th ed. 1999, §1.5.3 for R).
+    TrainSolution s = Bench.solve(LINEAR_SOURCE + """
+        waveplate q { retardance 0.25 wave at 633 nm; fast_axis 45 deg; coating ar 1 % }
+        probe p
+        train t { s -> 10 mm -> q -> 10 mm -> p }
+        """);
+    double r = 0.01;
+    assertEquals((1 - r) / (1 + r), s.port("p").orElseThrow().power(), 1e-12);
+    assertEquals(1 - (1 - r) / (1 + r), s.backReflected(), 1e-12);
+    assertTrue(s.conservationError() < 1e-12);
+  }
 }
