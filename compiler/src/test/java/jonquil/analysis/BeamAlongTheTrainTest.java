@@ -12,7 +12,7 @@ class BeamAlongTheTrainTest {
   @Test
   void aCollimatedBeamFocusesNearTheFocalPlaneToTheTextbookSpot() {
     // w_f ≈ λ f / (π w0) for a collimated TEM00 beam with z_R ≫ f
-    // (Saleh & Teich, Fundamentals of Photonics, 2nd ed. 2007, §3.2, eq. 3.2-14 form).
+    // (Saleh & Teich, Fundamentals of Photonics, 2nd ed. 2007, §3.2, eq. 3.2-14 form). [section numbers from memory]
     TrainSolution s = Bench.solve("""
         source s { wavelength 1064 nm; power 1 W; beam waist 2 mm }
         lens l { focal 100 mm }
@@ -35,7 +35,7 @@ class BeamAlongTheTrainTest {
 
   @Test
   void aGaussianPeakIsTwiceTheAverageIrradiance() {
-    // I(0) = 2P/(πw²) for a Gaussian beam of 1/e² radius w (Siegman, Lasers, 1986, §17.1).
+    // I(0) = 2P/(πw²) for a Gaussian beam of 1/e² radius w (Siegman, Lasers, 1986, §17.1). [section numbers from memory]
     Exposure e = Exposure.of(1.0, 1e-3, java.util.Optional.empty(), 1);
     assertEquals(2 / (Math.PI * 1e-6), e.peakIrradiance(), 1e-6);
     assertEquals(e.peakIrradiance() / 2, e.averageIrradiance(), 1e-9);
@@ -52,7 +52,7 @@ class BeamAlongTheTrainTest {
   @Test
   void anApertureOfTheBeamDiameterPassesEightySixPercentAndIsFlagged() {
     // 1 − e^{−2} of a Gaussian passes a circular aperture of its 1/e² diameter
-    // (Saleh & Teich, 2nd ed. 2007, §3.1).
+    // (Saleh & Teich, 2nd ed. 2007, §3.1). [section numbers from memory]
     Result r = Bench.check("""
         source s { wavelength 633 nm; power 1 W; beam waist 1 mm }
         aperture iris { diameter 2 mm }

@@ -80,7 +80,7 @@ class RequirementVerdictTest {
   @Test
   void aYieldIsTheFractionOfTolerancedBuildsThatPass() {
     // Polarizer axis 45° ± 10° on linear 0° light: P = 10 mW · cos²θ with θ uniform in [35°, 55°].
-    // P >= 5 mW exactly when θ <= 45°, so half the builds pass (Malus's law, Hecht 5th ed. eq. 8.24).
+    // P >= 5 mW exactly when θ <= 45°, so half the builds pass (Malus's law, Hecht 5th ed. eq. 8.24). [section numbers from memory]
     Result r = Bench.check("""
         source s { wavelength 633 nm; power 10 mW; polarization linear 0 deg }
         polarizer p45 { axis 45 deg ± 10 deg }
@@ -102,7 +102,7 @@ class RequirementVerdictTest {
   void linesOfOneSourceAddIncoherently() {
     // Two equal lines, one turned by a half-wave plate and the other not (a plate designed
     // for 1064 nm is a full wave at 532 nm in the 1/λ scaling): their sum is partially
-    // polarized, which a coherent sum could never be (Born & Wolf, 7th ed. 1999, §10.8.1).
+    // polarized, which a coherent sum could never be (Born & Wolf, 7th ed. 1999, §10.8.1). [section numbers from memory]
     TrainSolution s = Bench.solve("""
         source two { line 1064 nm 1 W; line 532 nm 1 W; polarization linear 0 deg }
         waveplate hwp { retardance 0.5 wave at 1064 nm; fast_axis 45 deg }
@@ -116,7 +116,7 @@ class RequirementVerdictTest {
 
   @Test
   void aMirrorTurnsRightCircularIntoLeft() {
-    // Reflection reverses the handedness of circular light (Hecht, Optics, 5th ed. 2017, §8.6).
+    // Reflection reverses the handedness of circular light (Hecht, Optics, 5th ed. 2017, §8.6). [section numbers from memory]
     TrainSolution s = Bench.solve("""
         source s { wavelength 633 nm; power 1 W; polarization circular right }
         mirror m { reflectance 100 %; aoi 45 deg }

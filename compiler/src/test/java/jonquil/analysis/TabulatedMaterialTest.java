@@ -29,7 +29,7 @@ class TabulatedMaterialTest {
     TrainSolution s = r.solutions().get(spec);
     double air = jonquil.optics.material.MaterialCatalog.lookup("air").orElseThrow().absoluteIndex(650e-9).getReal();
     double n = 1.55; // halfway between the rows
-    double reflectance = Math.pow((n - air) / (n + air), 2); // Born & Wolf, 7th ed. 1999, §1.5.3, normal incidence
+    double reflectance = Math.pow((n - air) / (n + air), 2); // Born & Wolf, 7th ed. 1999, §1.5.3, normal incidence [section numbers from memory]
     assertEquals((1 - reflectance) / (1 + reflectance), s.port("p").orElseThrow().power(), 1e-12);
   }
 }

@@ -19,7 +19,7 @@ class TrainPhysicsTest {
   @Test
   void aPeriscopeWithFoldsInPerpendicularPlanesTurnsLinearPolarizationByNinetyDegrees() {
     // Geometry of a two-mirror periscope whose second fold turns the beam by 90°: the
-    // polarization plane turns with the image (e.g. Hecht, Optics, 5th ed. 2017, §5.4 on
+    // polarization plane turns with the image (e.g. Hecht, Optics, 5th ed. 2017, §5.4 on [section numbers from memory]
     // image rotation by plane mirrors). Ideal mirrors isolate the geometry from coatings.
     TrainSolution s = Bench.solve(LINEAR_SOURCE + """
         mirror up   { reflectance 100 %; aoi 45 deg; plane 90 deg }
@@ -46,7 +46,7 @@ class TrainPhysicsTest {
 
   @Test
   void malusLawThroughAnIdealPolarizer() {
-    // Malus's law I = I0 cos²θ (Hecht, Optics, 5th ed. 2017, eq. 8.24).
+    // Malus's law I = I0 cos²θ (Hecht, Optics, 5th ed. 2017, eq. 8.24). [section numbers from memory]
     TrainSolution s = Bench.solve(LINEAR_SOURCE + """
         polarizer pol { axis 30 deg }
         probe p
@@ -57,7 +57,7 @@ class TrainPhysicsTest {
 
   @Test
   void unpolarizedLightKeepsHalfItsPowerThroughAnIdealPolarizerAndBecomesFullyPolarized() {
-    // Hecht, Optics, 5th ed. 2017, §8.2: an ideal linear polarizer passes half of natural light.
+    // Hecht, Optics, 5th ed. 2017, §8.2: an ideal linear polarizer passes half of natural light. [section numbers from memory]
     TrainSolution s = Bench.solve("""
         source s { wavelength 633 nm; power 2 W; polarization unpolarized }
         polarizer pol { axis 0 deg }
@@ -71,7 +71,7 @@ class TrainPhysicsTest {
 
   @Test
   void aBrewsterWindowPassesPLightWithoutReflectionLoss() {
-    // At Brewster's angle tan θB = n2/n1 the p reflectance vanishes (Hecht, Optics, 5th ed.
+    // At Brewster's angle tan θB = n2/n1 the p reflectance vanishes (Hecht, Optics, 5th ed. [section numbers from memory]
     // 2017, eq. 4.43); n = 1.5 gives θB = 56.31°. p is in the plane of incidence (azimuth 0).
     // The bench's ambient medium is standard air, so the angle is atan(1.5 / n_air).
     double brewster = Math.toDegrees(Math.atan(1.5 / AIR_633));
@@ -89,7 +89,7 @@ class TrainPhysicsTest {
   @Test
   void aWindowAtNormalIncidenceLosesTheIncoherentSumOfItsSurfaceReflections() {
     // Incoherent plate: T = (1−R)²/(1−R²) = (1−R)/(1+R) with R = ((n−1)/(n+1))² = 4 % for
-    // n = 1.5 (Born & Wolf, Principles of Optics, 7th ed. 1999, §1.5.3 for R; the sum of
+    // n = 1.5 (Born & Wolf, Principles of Optics, 7th ed. 1999, §1.5.3 for R; the sum of [section numbers from memory]
     // multiple incoherent reflections is the geometric series of §7.6.1's setting).
     TrainSolution s = Bench.solve("""
         source s { wavelength 633 nm; power 1 W }
@@ -108,7 +108,7 @@ class TrainPhysicsTest {
   @Test
   void aFresnelRhombMakesCircularLightFromLinearAtFortyFiveDegrees() {
     // Fresnel's rhomb: two total internal reflections at 54.6° in glass of n = 1.51 give
-    // 45° each, a quarter wave in all (Hecht, Optics, 5th ed. 2017, §8.7.4, Fig. 8.44).
+    // 45° each, a quarter wave in all (Hecht, Optics, 5th ed. 2017, §8.7.4, Fig. 8.44). [section numbers from memory]
     TrainSolution s = Bench.solve(LINEAR_SOURCE + """
         material crown = index 1.51
         rhomb fr { material crown; aoi 54.6 deg; reflections 2; axis 45 deg }
@@ -141,7 +141,7 @@ class TrainPhysicsTest {
 
   @Test
   void aHalfWavePlateAtTwentyTwoAndAHalfDegreesTurnsLinearByFortyFive() {
-    // A half-wave plate at θ turns linear polarization by 2θ (Hecht, Optics, 5th ed. 2017, §8.7.1).
+    // A half-wave plate at θ turns linear polarization by 2θ (Hecht, Optics, 5th ed. 2017, §8.7.1). [section numbers from memory]
     TrainSolution s = Bench.solve(LINEAR_SOURCE + """
         waveplate h { retardance 0.5 wave at 633 nm; fast_axis 22.5 deg }
         probe p
@@ -173,7 +173,7 @@ class TrainPhysicsTest {
   @Test
   void aCoatedWaveplateSendsItsFaceReflectionsBackAsStrayLight() {
     // Two faces of residual reflectance R, summed incoherently: T = (1 − R)/(1 + R), the rest
-    // heads back (same series as the window above; Born & Wolf, 7th ed. 1999, §1.5.3 for R).
+    // heads back (same series as the window above; Born & Wolf, 7th ed. 1999, §1.5.3 for R). [section numbers from memory]
     TrainSolution s = Bench.solve(LINEAR_SOURCE + """
         waveplate q { retardance 0.25 wave at 633 nm; fast_axis 45 deg; coating ar 1 % }
         probe p
