@@ -7,7 +7,9 @@ import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.Set;
+import java.util.function.BooleanSupplier;
 import jonquil.analysis.Analyzer;
 import jonquil.analysis.RequirementOutcome;
 import jonquil.analysis.TrainSolution;
@@ -38,6 +40,16 @@ public final class Checker {
   }
 
   public static Result check(Workspace workspace, List<Path> files, CheckOptions options) {
+    return check(workspace, files, options, () -> false).orElseThrow();
+  }
+
+  /**
+   * As above, but gives up (empty) when {@code superseded} turns true: an editor asks this
+   * when a newer edit has made the check's input stale, so the next check starts sooner.
+   * It is polled between stages only, so every stage still runs to completion or not at all.
+   */
+  public static Optional<Result> check(Workspace workspace, List<Path> files, CheckOptions options,
+      BooleanSupplier superseded) {
     Map<Path, ParseResult> parsed = new HashMap<>();
     Set<Diagnostic> diagnostics = new LinkedHashSet<>();
     List<RequirementOutcome> requirements = new ArrayList<>();
@@ -45,10 +57,17 @@ public final class Checker {
     Map<Path, TrainSolution> solutions = new LinkedHashMap<>();
     Map<Path, SourceFile> dataSources = new LinkedHashMap<>();
     for (Path file : files) {
+      if (superseded.getAsBoolean()) {
+        return Optional.empty();
+      }
       Path root = file.toAbsolutePath().normalize();
       try {
         SpecLoader loader = new SpecLoader(workspace, parsed);
-        if (!loader.load(root)) {
+        boolean loaded = loader.load(root);
+        if (superseded.getAsBoolean()) {
+          return Optional.empty();
+        }
+        if (!loaded) {
           diagnostics.add(Diagnostic.of(DiagnosticCode.UNREADABLE_FILE, root, TextRange.EMPTY,
               "cannot read '" + root.getFileName() + "'"));
           continue;
@@ -63,6 +82,9 @@ public final class Checker {
         found.addAll(model.diagnostics());
         diagnostics.addAll(found);
         models.put(root, model);
+        if (superseded.getAsBoolean()) {
+          return Optional.empty();
+        }
         if (found.stream().anyMatch(d -> d.severity() == Severity.ERROR)) {
           for (ResolvedRequirement r : model.requirements()) {
             requirements.add(RequirementOutcome.notEvaluated(r.file(), r.syntax().range(), r.syntax().text(),
@@ -82,7 +104,7 @@ public final class Checker {
     Map<Path, SourceFile> sources = new LinkedHashMap<>();
     parsed.forEach((p, r) -> sources.put(p, r.source()));
     dataSources.forEach(sources::putIfAbsent);
-    return new Result(sources, capped(diagnostics), requirements, models, solutions);
+    return Optional.of(new Result(sources, capped(diagnostics), requirements, models, solutions));
   }
 
   private static List<Diagnostic> capped(Set<Diagnostic> all) {

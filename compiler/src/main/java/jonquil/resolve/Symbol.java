@@ -16,6 +16,23 @@ public record Symbol(String name, Category category, Optional<ElementKind> kind,
     return new Symbol(name, Category.MATERIAL, Optional.of(ElementKind.MATERIAL), null, Optional.empty(), Optional.empty());
   }
 
+  /**
+   * Symbols are map keys throughout resolution and analysis; the record's own hash would
+   * walk the whole declaration subtree each time (a tenth of a large spec's check). These
+   * components already tell symbols apart, and equal records still hash alike.
+   */
+  @Override
+  public int hashCode() {
+    return java.util.Objects.hash(name, category, file, nameNode);
+  }
+
+  @Override
+  public boolean equals(Object other) {
+    return this == other || other instanceof Symbol s && name.equals(s.name) && category == s.category
+        && java.util.Objects.equals(file, s.file) && nameNode.equals(s.nameNode) && kind.equals(s.kind)
+        && declaration.equals(s.declaration);
+  }
+
   public boolean isCatalog() {
     return file == null;
   }

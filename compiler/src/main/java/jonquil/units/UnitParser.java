@@ -51,7 +51,27 @@ public final class UnitParser {
     }
   }
 
+  /** Units written in specs are few and repeat; parsing is pure, so each text is read once (bounded: input may be hostile). */
+  private static final int CACHE_LIMIT = 4096;
+  private static final java.util.concurrent.ConcurrentHashMap<String, UnitParse> CACHE =
+      new java.util.concurrent.ConcurrentHashMap<>();
+
   public static UnitParse parse(String text) {
+    if (text == null) {
+      return new UnitParse.Failure("no unit written");
+    }
+    UnitParse known = CACHE.get(text);
+    if (known != null) {
+      return known;
+    }
+    UnitParse parsed = read(text);
+    if (CACHE.size() < CACHE_LIMIT) {
+      CACHE.putIfAbsent(text, parsed);
+    }
+    return parsed;
+  }
+
+  private static UnitParse read(String text) {
     if (text == null) {
       return new UnitParse.Failure("no unit written");
     }
