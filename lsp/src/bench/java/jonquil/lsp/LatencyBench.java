@@ -120,113 +120,203 @@ public final class LatencyBench {
         reps = Integer.parseInt(args[i + 1]);
       }
     }
-    String text = spec(40, 36);
-    String[] lines = text.split("\n", -1);
-    Path dir = Files.createTempDirectory("jonquil-bench");
-    Files.writeString(dir.resolve(".jonquil-root"), "");
-    Path file = dir.resolve("big.jonq");
-    Files.writeString(file, text);
-    String uri = file.toUri().toString();
+    int warmup = 10;
+    System.out.printf(Locale.ROOT, "%d cores, Java %s, debounce %d ms, %d repetitions after %d warm-up%n",
+        Runtime.getRuntime().availableProcessors(), System.getProperty("java.version"), debounceMs, reps, warmup);
 
-    Pipe toServer = Pipe.open();
-    Pipe toClient = Pipe.open();
-    ExecutorService threads = Executors.newCachedThreadPool(r -> {
-      Thread t = new Thread(r, "bench-io");
-      t.setDaemon(true);
-      return t;
-    });
-    JonquilLanguageServer server = new JonquilLanguageServer(new IdeAnswers(), Duration.ofMillis(debounceMs));
-    InputStream serverIn = Channels.newInputStream(toServer.source());
-    OutputStream serverOut = Channels.newOutputStream(toClient.sink());
-    Launcher<LanguageClient> serverSide = LSPLauncher.createServerLauncher(server, serverIn, serverOut, threads, null);
-    server.connect(serverSide.getRemoteProxy());
-    serverSide.startListening();
-    Client client = new Client();
-    Launcher<LanguageServer> clientSide = LSPLauncher.createClientLauncher(client,
-        Channels.newInputStream(toClient.source()), Channels.newOutputStream(toServer.sink()), threads, null);
-    clientSide.startListening();
-    LanguageServer remote = clientSide.getRemoteProxy();
+    try (Session big = Session.open(spec(40, 36), debounceMs)) {
+      // (a) an edit after a pause: the user stops typing and waits for the verdict.
+      List<Double> paused = new ArrayList<>();
+      for (int i = 0; i < warmup + reps; i++) {
+        Thread.sleep(2 * debounceMs + 50);
+        double ms = big.edit();
+        if (i >= warmup) {
+          paused.add(ms);
+        }
+      }
+      // (b) the last keystroke of a burst of five, 60 ms apart: the debounce holds the check until typing stops.
+      List<Double> burst = new ArrayList<>();
+      int publishedInBursts = 0;
+      for (int i = 0; i < warmup + reps; i++) {
+        Thread.sleep(2 * debounceMs + 50);
+        int before = big.client.arrivals.size();
+        double ms = big.burst(5, 60);
+        if (i >= warmup) {
+          burst.add(ms);
+          publishedInBursts += big.client.arrivals.size() - before;
+        }
+      }
+      // (c) the checker alone on the same text, in this JVM: what the server adds is the rest.
+      List<Double> check = new ArrayList<>();
+      for (int i = 0; i < warmup + reps; i++) {
+        long t0 = System.nanoTime();
+        jonquil.Checker.check(jonquil.Workspace.withOverlay(big.dir, java.util.Map.of(big.file, big.text)),
+            List.of(big.file), jonquil.CheckOptions.EDITOR);
+        if (i >= warmup) {
+          check.add((System.nanoTime() - t0) / 1e6);
+        }
+      }
+      List<Double> hover = big.hovers(warmup, reps);
+      report("didChange after a pause -> publishDiagnostics", paused);
+      report("last of 5 keystrokes 60 ms apart -> publish", burst);
+      System.out.printf(Locale.ROOT, "  (%.1f publishes per burst of 5 edits)%n", publishedInBursts / (double) reps);
+      report("checker alone (Checker.check, same text)", check);
+      report("hover (" + big.lineCount() + " lines)", hover);
+    }
+    try (Session half = Session.open(spec(20, 36), debounceMs)) {
+      report("hover (" + half.lineCount() + " lines)", half.hovers(warmup, reps));
+    }
+    System.exit(0);
+  }
 
-    InitializeParams init = new InitializeParams();
-    init.setRootUri(dir.toUri().toString());
-    init.setCapabilities(new ClientCapabilities());
-    remote.initialize(init).get(30, TimeUnit.SECONDS);
-    remote.initialized(new InitializedParams());
-    long opened = System.nanoTime();
-    remote.getTextDocumentService().didOpen(new DidOpenTextDocumentParams(new TextDocumentItem(uri, "jonquil", 1, text)));
-    PublishDiagnosticsParams first = client.publishOf(1).get(120, TimeUnit.SECONDS);
-    long errors = first.getDiagnostics().stream().filter(d -> d.getSeverity() == DiagnosticSeverity.Error).count();
-    long warnings = first.getDiagnostics().stream().filter(d -> d.getSeverity() == DiagnosticSeverity.Warning).count();
-    System.out.printf(Locale.ROOT, "spec: %d lines, %d characters; first check %.0f ms, %d diagnostics (%d errors, "
-        + "%d warnings, the rest notes)%n", lines.length - 1, text.length(), (System.nanoTime() - opened) / 1e6,
-        first.getDiagnostics().size(), errors, warnings);
-    if (errors > 0) {
-      System.out.println("the generated spec has errors: " + first.getDiagnostics().get(0).getMessage());
+  /** The real server in this JVM behind two pipes carrying real JSON-RPC, with one large spec open. */
+  static final class Session implements AutoCloseable {
+    final Client client = new Client();
+    final Path dir;
+    final Path file;
+    final String uri;
+    final String[] lines;
+    String text;
+    final LanguageServer remote;
+    final JonquilLanguageServer server;
+    final int line;
+    final int column;
+    int version = 1;
+
+    private Session(String text, long debounceMs) throws Exception {
+      this.text = text;
+      this.lines = text.split("\n", -1);
+      this.dir = Files.createTempDirectory("jonquil-bench");
+      Files.writeString(dir.resolve(".jonquil-root"), "");
+      this.file = dir.resolve("big.jonq");
+      Files.writeString(file, text);
+      this.uri = file.toUri().toString();
+      Pipe toServer = Pipe.open();
+      Pipe toClient = Pipe.open();
+      ExecutorService threads = Executors.newCachedThreadPool(r -> {
+        Thread t = new Thread(r, "bench-io");
+        t.setDaemon(true);
+        return t;
+      });
+      this.server = new JonquilLanguageServer(new IdeAnswers(), Duration.ofMillis(debounceMs));
+      Launcher<LanguageClient> serverSide = LSPLauncher.createServerLauncher(server,
+          Channels.newInputStream(toServer.source()), Channels.newOutputStream(toClient.sink()), threads, null);
+      server.connect(serverSide.getRemoteProxy());
+      serverSide.startListening();
+      Launcher<LanguageServer> clientSide = LSPLauncher.createClientLauncher(client,
+          Channels.newInputStream(toClient.source()), Channels.newOutputStream(toServer.sink()), threads, null);
+      clientSide.startListening();
+      this.remote = clientSide.getRemoteProxy();
+      // The edited value: a window's thickness in the middle of the file, "1 mm" <-> "2 mm".
+      this.line = Arrays.asList(lines).indexOf("window w_" + (lineCountOf(text) > 8000 ? 20 : 10) + "_18 {") + 2;
+      this.column = lines[line].indexOf("1 mm");
     }
 
-    // (a) one-character edits: "1 mm" <-> "2 mm" in a window in the middle, one at a time.
-    int line = Arrays.asList(lines).indexOf("window w_20_18 {") + 2;
-    int column = lines[line].indexOf("1 mm");
-    int version = 1;
-    int warmup = 10;
-    List<Double> change = new ArrayList<>();
-    for (int i = 0; i < warmup + reps; i++) {
+    private static int lineCountOf(String text) {
+      return text.split("\n", -1).length - 1;
+    }
+
+    int lineCount() {
+      return lines.length - 1;
+    }
+
+    static Session open(String text, long debounceMs) throws Exception {
+      Session s = new Session(text, debounceMs);
+      InitializeParams init = new InitializeParams();
+      init.setRootUri(s.dir.toUri().toString());
+      init.setCapabilities(new ClientCapabilities());
+      s.remote.initialize(init).get(30, TimeUnit.SECONDS);
+      s.remote.initialized(new InitializedParams());
+      long opened = System.nanoTime();
+      s.remote.getTextDocumentService().didOpen(new DidOpenTextDocumentParams(new TextDocumentItem(s.uri, "jonquil", 1, text)));
+      PublishDiagnosticsParams first = s.client.publishOf(1).get(120, TimeUnit.SECONDS);
+      long errors = first.getDiagnostics().stream().filter(d -> d.getSeverity() == DiagnosticSeverity.Error).count();
+      long warnings = first.getDiagnostics().stream().filter(d -> d.getSeverity() == DiagnosticSeverity.Warning).count();
+      System.out.printf(Locale.ROOT, "spec: %d lines, %d characters; first check %.0f ms, %d diagnostics (%d errors, "
+          + "%d warnings, the rest notes)%n", s.lineCount(), text.length(), (System.nanoTime() - opened) / 1e6,
+          first.getDiagnostics().size(), errors, warnings);
+      if (errors > 0) {
+        System.out.println("the generated spec has errors: " + first.getDiagnostics().get(0).getMessage());
+      }
+      return s;
+    }
+
+    /** Sends one one-character edit; returns ms until the publish of its version arrived. */
+    double edit() throws Exception {
+      long sent = send();
+      client.publishOf(version).get(60, TimeUnit.SECONDS);
+      return (client.arrivals.get(version) - sent) / 1e6;
+    }
+
+    /** Sends {@code keys} edits {@code gapMs} apart; returns ms from the last one to the publish of its version. */
+    double burst(int keys, long gapMs) throws Exception {
+      long sent = 0;
+      for (int k = 0; k < keys; k++) {
+        if (k > 0) {
+          Thread.sleep(gapMs);
+        }
+        sent = send();
+      }
+      client.publishOf(version).get(60, TimeUnit.SECONDS);
+      return (client.arrivals.get(version) - sent) / 1e6;
+    }
+
+    private long send() {
       version++;
-      String digit = i % 2 == 0 ? "2" : "1";
-      CompletableFuture<PublishDiagnosticsParams> published = client.publishOf(version);
+      String digit = lines[line].charAt(column) == '1' ? "2" : "1";
+      StringBuilder edited = new StringBuilder(lines[line]);
+      edited.setCharAt(column, digit.charAt(0));
+      lines[line] = edited.toString();
+      text = String.join("\n", lines);
+      client.publishOf(version);
       long sent = System.nanoTime();
       remote.getTextDocumentService().didChange(new DidChangeTextDocumentParams(
           new VersionedTextDocumentIdentifier(uri, version), List.of(new TextDocumentContentChangeEvent(
               new Range(new Position(line, column), new Position(line, column + 1)), digit))));
-      published.get(60, TimeUnit.SECONDS);
-      long arrived = client.arrivals.get(version);
-      if (i >= warmup) {
-        change.add((arrived - sent) / 1e6);
-      }
-      Thread.sleep(20);
+      return sent;
     }
 
-    // (b) hover on window names in the trains and on elements' declarations, on a settled document.
-    List<Position> targets = new ArrayList<>();
-    for (int i = 0; i < lines.length; i++) {
-      if (lines[i].startsWith("    -> 10 mm -> w_") || lines[i].startsWith("window w_")) {
-        int at = lines[i].indexOf("w_");
-        targets.add(new Position(i, at + 2));
+    /** Hovers on window names in the trains and on their declarations, on a settled document. */
+    List<Double> hovers(int warmup, int reps) throws Exception {
+      List<Position> targets = new ArrayList<>();
+      for (int i = 0; i < lines.length; i++) {
+        if (lines[i].startsWith("    -> 10 mm -> w_") || lines[i].startsWith("window w_")) {
+          targets.add(new Position(i, lines[i].indexOf("w_") + 2));
+        }
       }
-    }
-    List<Double> hover = new ArrayList<>();
-    int misses = 0;
-    for (int i = 0; i < warmup + reps; i++) {
-      Position p = targets.get((i * 7919) % targets.size());
-      long sent = System.nanoTime();
-      Hover h = remote.getTextDocumentService().hover(new HoverParams(new TextDocumentIdentifier(uri), p))
-          .get(30, TimeUnit.SECONDS);
-      double ms = (System.nanoTime() - sent) / 1e6;
-      if (h == null) {
-        misses++;
+      List<Double> out = new ArrayList<>();
+      int misses = 0;
+      for (int i = 0; i < warmup + reps; i++) {
+        Position p = targets.get((i * 7919) % targets.size());
+        long sent = System.nanoTime();
+        Hover h = remote.getTextDocumentService().hover(new HoverParams(new TextDocumentIdentifier(uri), p))
+            .get(30, TimeUnit.SECONDS);
+        double ms = (System.nanoTime() - sent) / 1e6;
+        if (h == null) {
+          misses++;
+        }
+        if (i >= warmup) {
+          out.add(ms);
+        }
       }
-      if (i >= warmup) {
-        hover.add(ms);
+      if (misses > 0) {
+        System.out.println("hover answered null " + misses + " times");
       }
+      return out;
     }
 
-    System.out.printf(Locale.ROOT, "debounce %d ms, %d repetitions after %d warm-up%n", debounceMs, reps, warmup);
-    report("didChange (1 char) -> publishDiagnostics", change);
-    report("hover", hover);
-    if (misses > 0) {
-      System.out.println("hover answered null " + misses + " times");
+    @Override
+    public void close() throws Exception {
+      remote.shutdown().get(10, TimeUnit.SECONDS);
+      server.close();
     }
-    remote.shutdown().get(10, TimeUnit.SECONDS);
-    remote.exit();
-    server.close();
-    System.exit(0);
   }
 
   private static void report(String what, List<Double> millis) {
     double[] sorted = millis.stream().mapToDouble(Double::doubleValue).sorted().toArray();
     double median = sorted[(sorted.length - 1) / 2];
     double p95 = sorted[(int) Math.ceil(0.95 * sorted.length) - 1];
-    System.out.printf(Locale.ROOT, "%-42s median %7.1f ms   p95 %7.1f ms   max %7.1f ms%n", what, median, p95,
+    System.out.printf(Locale.ROOT, "%-48s median %7.1f ms   p95 %7.1f ms   max %7.1f ms%n", what, median, p95,
         sorted[sorted.length - 1]);
   }
 }

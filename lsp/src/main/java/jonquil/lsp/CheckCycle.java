@@ -21,7 +21,7 @@ import org.eclipse.lsp4j.PublishDiagnosticsParams;
 import org.eclipse.lsp4j.services.LanguageClient;
 
 /** One check of all open documents, publishing each affected file's diagnostics for the version they saw and dropping stale ones. */
-final class CheckCycle implements Runnable {
+final class CheckCycle implements CheckScheduler.Task {
   /** Marks a project root where there is no version control, as the command line does. */
   static final String ROOT_MARKER = ".jonquil-root";
 
@@ -48,7 +48,7 @@ final class CheckCycle implements Runnable {
   }
 
   @Override
-  public void run() {
+  public boolean run(BooleanSupplier superseded) {
     Map<Path, Documents.Doc> open = documents.snapshot();
     Map<Path, String> buffers = new HashMap<>();
     Map<Path, Integer> versions = new HashMap<>();
@@ -61,10 +61,17 @@ final class CheckCycle implements Runnable {
       byRoot.computeIfAbsent(projectRoot(doc.path(), roots), k -> new ArrayList<>()).add(doc.path());
     });
     List<Result> results = new ArrayList<>();
-    byRoot.forEach((root, files) -> results.add(
-        Checker.check(Workspace.withOverlay(root, buffers), files, jonquil.CheckOptions.EDITOR)));
+    for (Map.Entry<Path, List<Path>> root : byRoot.entrySet()) {
+      Optional<Result> result = Checker.check(Workspace.withOverlay(root.getKey(), buffers), root.getValue(),
+          jonquil.CheckOptions.EDITOR, superseded);
+      if (result.isEmpty()) {
+        return false; // a newer edit is waiting; its check publishes instead
+      }
+      results.add(result.get());
+    }
     snapshots.publish(new Snapshots.Snapshot(results, versions, now.generation()));
     publish(open, results);
+    return true;
   }
 
   /** After a failed run: every open document shows that checking failed, at its current version. */

@@ -1,39 +1,66 @@
 package jonquil.lsp;
 
 import java.time.Duration;
+import java.util.function.BooleanSupplier;
 import java.util.function.Consumer;
 
-/** Runs checks off LSP4J's reader thread: debounced, coalesced, on one 16 MB-stack worker that outlives any Throwable. */
+/**
+ * Runs checks off LSP4J's reader thread, on one 16 MB-stack worker that outlives any
+ * Throwable. Debounced on both edges: an edit after a pause in typing is checked at once
+ * (the user is looking), while edits in quick succession are coalesced into one check a
+ * debounce after the last of them. A running check that a newer edit has made stale may
+ * give up between stages, so the check for the newer text starts sooner; once the oldest
+ * unserved edit has waited {@code maxDelay}, the check runs to the end regardless, so
+ * steady typing still gets diagnostics.
+ */
 final class CheckScheduler implements AutoCloseable {
   static final long STACK_BYTES = 16L << 20;
 
-  private final Runnable task;
+  /** One check; returns false when it gave up because {@code superseded} said a newer edit made it stale. */
+  interface Task {
+    boolean run(BooleanSupplier superseded);
+  }
+
+  private final Task task;
   private final Consumer<Throwable> onFailure;
   private final long debounceNanos;
   private final long maxDelayNanos;
   private final Object lock = new Object();
   private final Thread worker;
+  private final Runnable warmUp;
+  private final boolean runAfterPause;
+  /** A request is waiting that the running check (if any) has not seen. */
   private boolean dirty;
+  /** The waiting requests began after a pause: run them without waiting for the debounce. */
+  private boolean leading;
+  /** When the oldest request not yet served by a finished check came. */
   private long firstRequest;
   private long lastRequest;
+  private boolean anyRequest;
+  /** {@link #firstRequest} of the batch the running check serves. */
+  private long servingSince;
   private boolean stopped;
-  private final Runnable warmUp;
 
-  /**
-   * A run starts {@code debounce} after the last request, or at most {@code maxDelay}
-   * after the first unserved one, so that steady typing still gets diagnostics.
-   */
   CheckScheduler(Runnable task, Consumer<Throwable> onFailure, Duration debounce, Duration maxDelay) {
-    this(task, onFailure, debounce, maxDelay, () -> {});
+    this(superseded -> {
+      task.run();
+      return true;
+    }, onFailure, debounce, maxDelay, () -> {}, true);
   }
 
-  /** As above, running {@code warmUp} once on the worker before the first check (a failure there is ignored). */
-  CheckScheduler(Runnable task, Consumer<Throwable> onFailure, Duration debounce, Duration maxDelay, Runnable warmUp) {
+  /**
+   * As above, running {@code warmUp} once on the worker before the first check (a failure there
+   * is ignored). With {@code runAfterPause} false every run waits for the debounce (tests use it
+   * to hold checks back).
+   */
+  CheckScheduler(Task task, Consumer<Throwable> onFailure, Duration debounce, Duration maxDelay, Runnable warmUp,
+      boolean runAfterPause) {
     this.task = task;
+    this.runAfterPause = runAfterPause;
     this.warmUp = warmUp;
     this.onFailure = onFailure;
     this.debounceNanos = debounce.toNanos();
-    this.maxDelayNanos = maxDelay.toNanos();
+    this.maxDelayNanos = Math.max(maxDelay.toNanos(), debounceNanos);
     ThreadGroup group = new ThreadGroup("jonquil-check");
     this.worker = new Thread(group, this::loop, "jonquil-check", STACK_BYTES);
     worker.setDaemon(true);
@@ -44,10 +71,13 @@ final class CheckScheduler implements AutoCloseable {
   void request() {
     synchronized (lock) {
       long now = System.nanoTime();
+      boolean afterPause = !anyRequest || now - lastRequest >= debounceNanos;
       if (!dirty) {
         firstRequest = now;
+        leading = afterPause && runAfterPause;
       }
       dirty = true;
+      anyRequest = true;
       lastRequest = now;
       lock.notifyAll();
     }
@@ -68,6 +98,13 @@ final class CheckScheduler implements AutoCloseable {
     }
   }
 
+  /** Asked by the running check: a newer request is waiting, and the oldest unserved one has not waited too long. */
+  private boolean superseded() {
+    synchronized (lock) {
+      return stopped || dirty && System.nanoTime() - servingSince < maxDelayNanos;
+    }
+  }
+
   private void loop() {
     try {
       warmUp.run();
@@ -75,11 +112,12 @@ final class CheckScheduler implements AutoCloseable {
       // Warming up only saves time; the first real check reports whatever is wrong.
     }
     while (true) {
+      long since;
       synchronized (lock) {
         try {
           while (!stopped) {
             if (dirty) {
-              long due = Math.min(lastRequest + debounceNanos, firstRequest + maxDelayNanos);
+              long due = leading ? 0 : Math.min(lastRequest + debounceNanos, firstRequest + maxDelayNanos);
               long wait = due - System.nanoTime();
               if (wait <= 0) {
                 break;
@@ -99,14 +137,24 @@ final class CheckScheduler implements AutoCloseable {
           return;
         }
         dirty = false;
+        leading = false;
+        since = firstRequest;
+        servingSince = since;
       }
+      boolean finished = true;
       try {
-        task.run();
+        finished = task.run(this::superseded);
       } catch (Throwable t) {
         try {
           onFailure.accept(t);
         } catch (Throwable ignored) {
           // Reporting the failure failed too; the worker still lives for the next edit.
+        }
+      }
+      if (!finished) {
+        synchronized (lock) {
+          // The edits that run served are still unserved: they keep their age for the maxDelay bound.
+          firstRequest = Math.min(firstRequest, since);
         }
       }
     }

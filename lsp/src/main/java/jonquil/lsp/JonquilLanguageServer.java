@@ -56,7 +56,7 @@ import org.eclipse.lsp4j.services.WorkspaceService;
 
 /** The server's lifecycle and plumbing, with a guard that turns any handler failure into an error response, never a dead server. */
 public final class JonquilLanguageServer implements LanguageServer, LanguageClientAware {
-  static final Duration DEBOUNCE = Duration.ofMillis(150);
+  static final Duration DEBOUNCE = Duration.ofMillis(100);
   static final Duration MAX_DELAY = Duration.ofMillis(1000);
   /** How long a request waits for the check of the version it was asked about. */
   static final Duration FRESH_WAIT = Duration.ofSeconds(5);
@@ -98,11 +98,16 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
 
   /** A server whose checks wait {@code debounce} after the last edit (tests and benchmarks shorten it). */
   JonquilLanguageServer(EditorAnswers answers, Duration debounce) {
+    this(answers, debounce, true);
+  }
+
+  /** As above; with {@code checkAfterPause} false even an edit after a pause waits for the debounce (for tests). */
+  JonquilLanguageServer(EditorAnswers answers, Duration debounce, boolean checkAfterPause) {
     this.answers = answers;
     this.cycle = new CheckCycle(documents, snapshots, () -> folders, () -> convert, () -> client,
         () -> ClientSupport.pullDiagnostics(capabilities));
     this.scheduler = new CheckScheduler(cycle, this::checkFailed, debounce, MAX_DELAY.compareTo(debounce) > 0
-        ? MAX_DELAY : debounce, WarmUp::run);
+        ? MAX_DELAY : debounce, WarmUp::run, checkAfterPause);
     AtomicInteger n = new AtomicInteger();
     ThreadGroup group = new ThreadGroup("jonquil-requests");
     this.requests = Executors.newFixedThreadPool(2, r -> {

@@ -208,8 +208,8 @@ class EditorFeaturesTest {
   void completionReadsTheBufferEvenBeforeItsCheck() throws Exception {
     String text = BENCH.replace("-> 50 mm -> spot", "-> 50 mm -> ");
     String uri = write("stale.jonq", BENCH);
-    // The debounce never ends within the test: no check runs, so no snapshot saw this text.
-    try (LspHarness h = new LspHarness(new IdeAnswers(), Duration.ofMinutes(5))) {
+    // The debounce never ends within the test and nothing runs early: no check runs, so no snapshot saw this text.
+    try (LspHarness h = new LspHarness(new IdeAnswers(), Duration.ofMinutes(5), false)) {
       h.initialize(dir, modernClient(false));
       h.open(uri, 1, text);
       int cursor = text.indexOf("-> 50 mm -> ") + "-> 50 mm -> ".length();

@@ -126,13 +126,18 @@ final class LspHarness implements AutoCloseable {
   }
 
   LspHarness(EditorAnswers answers, Duration debounce) throws IOException {
+    this(answers, debounce, true);
+  }
+
+  /** With {@code checkAfterPause} false, no check runs before {@code debounce} has passed since the last edit. */
+  LspHarness(EditorAnswers answers, Duration debounce, boolean checkAfterPause) throws IOException {
     Pipe toServer = Pipe.open();
     Pipe toClient = Pipe.open();
     InputStream serverIn = Channels.newInputStream(toServer.source());
     clientOut = Channels.newOutputStream(toServer.sink());
     InputStream clientIn = Channels.newInputStream(toClient.source());
     serverOut = Channels.newOutputStream(toClient.sink());
-    server = new JonquilLanguageServer(answers, debounce);
+    server = new JonquilLanguageServer(answers, debounce, checkAfterPause);
     Launcher<LanguageClient> serverSide = LSPLauncher.createServerLauncher(server, serverIn, serverOut, threads, null);
     server.connect(serverSide.getRemoteProxy());
     serverListening = serverSide.startListening();

@@ -59,7 +59,64 @@ class UnitsTest {
   }
 
   @Test
-  void theWorkerCoalescesAndSurvivesAThrowable() throws Exception {
+  void aRequestAfterAPauseRunsAtOnceAndRequestsDuringARunAreCoalescedIntoOne() throws Exception {
+    AtomicInteger runs = new AtomicInteger();
+    CountDownLatch firstStarted = new CountDownLatch(1);
+    CountDownLatch releaseFirst = new CountDownLatch(1);
+    CountDownLatch secondDone = new CountDownLatch(1);
+    // A debounce far longer than the test: the first run can only start at once if the leading edge works.
+    try (CheckScheduler s = new CheckScheduler(superseded -> {
+      if (runs.incrementAndGet() == 1) {
+        firstStarted.countDown();
+        await(releaseFirst);
+        return true;
+      }
+      secondDone.countDown();
+      return true;
+    }, t -> { }, Duration.ofMillis(300), Duration.ofSeconds(10), () -> { }, true)) {
+      long asked = System.nanoTime();
+      s.request();
+      assertTrue(firstStarted.await(5, TimeUnit.SECONDS));
+      assertTrue(System.nanoTime() - asked < TimeUnit.MILLISECONDS.toNanos(250),
+          "a request after a pause starts its run without waiting for the 300 ms debounce");
+      for (int i = 0; i < 49; i++) {
+        s.request();
+      }
+      releaseFirst.countDown();
+      assertTrue(secondDone.await(5, TimeUnit.SECONDS), "the requests made during the run get a run");
+      Thread.sleep(400);
+      assertEquals(2, runs.get(), "forty-nine requests in quick succession are one trailing run");
+    }
+  }
+
+  @Test
+  void aRunGivesUpWhenSupersededButSteadyRequestsStillGetAFinishedRunWithinTheMaxDelay() throws Exception {
+    AtomicInteger gaveUp = new AtomicInteger();
+    AtomicInteger finished = new AtomicInteger();
+    try (CheckScheduler s = new CheckScheduler(superseded -> {
+      // A long check that polls like the checker does between stages.
+      for (int i = 0; i < 40; i++) {
+        if (superseded.getAsBoolean()) {
+          gaveUp.incrementAndGet();
+          return false;
+        }
+        sleep(5);
+      }
+      finished.incrementAndGet();
+      return true;
+    }, t -> { }, Duration.ofMillis(20), Duration.ofMillis(400), () -> { }, true)) {
+      long end = System.nanoTime() + TimeUnit.MILLISECONDS.toNanos(2000);
+      while (System.nanoTime() < end) {
+        s.request(); // an edit every 10 ms: every run is superseded before it ends
+        Thread.sleep(10);
+      }
+      assertTrue(gaveUp.get() > 0, "stale runs give up");
+      assertTrue(finished.get() >= 1, "yet the 400 ms bound lets runs finish during steady typing: " + finished.get());
+    }
+  }
+
+  @Test
+  void theWorkerSurvivesAThrowable() throws Exception {
     AtomicInteger runs = new AtomicInteger();
     AtomicInteger failures = new AtomicInteger();
     CountDownLatch second = new CountDownLatch(1);
@@ -69,17 +126,30 @@ class UnitsTest {
       }
       second.countDown();
     }, t -> failures.incrementAndGet(), Duration.ofMillis(50), Duration.ofSeconds(1))) {
-      for (int i = 0; i < 50; i++) {
-        s.request();
-      }
+      s.request();
       long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(5);
       while (failures.get() == 0 && System.nanoTime() < deadline) {
         Thread.sleep(10);
       }
-      assertEquals(1, runs.get(), "fifty quick requests are one run");
       assertEquals(1, failures.get());
       s.request();
       assertTrue(second.await(5, TimeUnit.SECONDS), "the worker lives on after a Throwable");
+    }
+  }
+
+  private static void await(CountDownLatch latch) {
+    try {
+      latch.await(5, TimeUnit.SECONDS);
+    } catch (InterruptedException e) {
+      Thread.currentThread().interrupt();
+    }
+  }
+
+  private static void sleep(long millis) {
+    try {
+      Thread.sleep(millis);
+    } catch (InterruptedException e) {
+      Thread.currentThread().interrupt();
     }
   }
 
