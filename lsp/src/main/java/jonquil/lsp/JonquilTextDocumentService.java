@@ -204,6 +204,25 @@ final class JonquilTextDocumentService implements TextDocumentService {
     return null;
   }
 
+  /**
+   * Whether the server may propose edits to a file: one open in the editor, or one under a
+   * workspace folder. Any other file a check reads (a library used by an open file outside
+   * every folder) is served read-only: answered about, never edited.
+   */
+  private boolean editable(Path file) {
+    return server.documents.get(file).isPresent() || server.folders().stream().anyMatch(file::startsWith);
+  }
+
+  /** Refuses a rename that would touch a read-only file: changing only the other files would break the spec. */
+  private void refuseReadOnly(java.util.Collection<Path> files) {
+    for (Path file : files) {
+      if (!editable(file)) {
+        throw new ResponseErrorException(new ResponseError(ResponseErrorCode.RequestFailed, "renaming this would "
+            + "change '" + file + "', which is neither open nor in a workspace folder; open it first", null));
+      }
+    }
+  }
+
   @Override
   public CompletableFuture<List<? extends Location>> references(ReferenceParams params) {
     boolean withDeclaration = params.getContext() != null && params.getContext().isIncludeDeclaration();
@@ -224,6 +243,11 @@ final class JonquilTextDocumentService implements TextDocumentService {
     return server.atPosition("textDocument/prepareRename", params.getTextDocument().getUri(), params.getPosition(),
         null, at -> {
           Optional<TextRange> range = server.answers.prepareRename(at.result(), at.path(), at.offset());
+          if (range.isPresent()) {
+            List<Path> touched = new ArrayList<>();
+            server.answers.references(at.result(), at.path(), at.offset(), true).forEach(l -> touched.add(l.file()));
+            refuseReadOnly(touched);
+          }
           return range.<Either3<Range, PrepareRenameResult, PrepareRenameDefaultBehavior>>map(
               r -> Either3.forFirst(at.convert().range(at.source(), r))).orElse(null);
         });
@@ -240,6 +264,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
             throw new ResponseErrorException(new ResponseError(ResponseErrorCode.RequestFailed, result.error(), null));
           }
           Map<Path, List<jonquil.diag.Edit>> edits = result.edits() == null ? Map.of() : new LinkedHashMap<>(result.edits());
+          refuseReadOnly(edits.keySet());
           return at.convert().workspaceEdit(edits, at.result().files()::get,
               file -> server.documents.get(file).map(Documents.Doc::version).orElse(null), documentChanges);
         });
@@ -397,7 +422,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
       List<Either<Command, CodeAction>> out = new ArrayList<>();
       for (CodeActionInfo a : server.answers.codeActions(at.result(), at.path(),
           new TextRange(Math.min(start, end), Math.max(start, end)))) {
-        if (Convert.kindRequested(a.kind(), only)) {
+        if (Convert.kindRequested(a.kind(), only) && a.edits().keySet().stream().allMatch(this::editable)) {
           out.add(Either.forRight(at.convert().codeAction(a, at.result().files()::get,
               file -> at.versions().get(file), documentChanges, preferred)));
         }
