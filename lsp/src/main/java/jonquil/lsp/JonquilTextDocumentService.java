@@ -9,6 +9,7 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Objects;
 import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.CompletableFuture;
@@ -365,16 +366,52 @@ final class JonquilTextDocumentService implements TextDocumentService {
 
   @Override
   public CompletableFuture<List<InlayHint>> inlayHint(InlayHintParams params) {
+    boolean lazy = JonquilLanguageServer.ClientSupport.lazyInlayHintTooltips(server.clientCapabilities());
     Range range = params.getRange();
-    return server.atPosition("textDocument/inlayHint", params.getTextDocument().getUri(), null, List.of(), at -> {
+    String uri = params.getTextDocument().getUri();
+    return server.atPosition("textDocument/inlayHint", uri, null, List.of(), at -> {
       int start = range == null ? 0 : at.convert().offset(at.source(), range.getStart());
       int end = range == null ? at.source().text().length() : at.convert().offset(at.source(), range.getEnd());
+      Integer version = at.versions().get(at.path());
+      int textHash = at.source().text().hashCode();
       List<InlayHint> out = new ArrayList<>();
       for (jonquil.ide.InlayHint h
           : server.answers.inlayHints(at.result(), at.path(), Math.min(start, end), Math.max(start, end))) {
-        out.add(at.convert().inlayHint(at.source(), h));
+        out.add(at.convert().inlayHint(at.source(), h,
+            lazy ? new Convert.HintKey(uri, version, textHash, h.offset()) : null));
       }
       return out;
+    });
+  }
+
+  /**
+   * Fills a hint's tooltip, recomputed by the editor answers for the document state the hint
+   * came from; a hint whose document has changed or closed since, or that is not ours, comes
+   * back as it was.
+   */
+  @Override
+  public CompletableFuture<InlayHint> resolveInlayHint(InlayHint unresolved) {
+    Optional<Convert.HintKey> key = Convert.hintKey(unresolved);
+    return server.answer("inlayHint/resolve", key.map(Convert.HintKey::uri).orElse(null), (snapshot, path) -> {
+      if (key.isEmpty() || path == null) {
+        return unresolved;
+      }
+      Convert.HintKey k = key.get();
+      Integer open = server.documents.get(path).map(Documents.Doc::version).orElse(null);
+      if (!Objects.equals(open, k.version()) || !Objects.equals(snapshot.versions().get(path), k.version())) {
+        return unresolved;
+      }
+      Optional<jonquil.Result> result = snapshot.resultFor(path);
+      if (result.isEmpty() || result.get().files().get(path).text().hashCode() != k.textHash()) {
+        return unresolved;
+      }
+      String label = Convert.hintLabel(unresolved);
+      for (jonquil.ide.InlayHint h : server.answers.inlayHints(result.get(), path, k.offset(), k.offset())) {
+        if (h.offset() == k.offset() && h.label().equals(label)) {
+          return Convert.withTooltip(unresolved, h.tooltip());
+        }
+      }
+      return unresolved;
     });
   }
 
