@@ -41,6 +41,7 @@ import org.eclipse.lsp4j.FoldingRangeKind;
 import org.eclipse.lsp4j.FormattingOptions;
 import org.eclipse.lsp4j.Hover;
 import org.eclipse.lsp4j.InlayHint;
+import org.eclipse.lsp4j.InlayHintRegistrationOptions;
 import org.eclipse.lsp4j.InsertTextFormat;
 import org.eclipse.lsp4j.Location;
 import org.eclipse.lsp4j.LocationLink;
@@ -598,13 +599,75 @@ final class Convert {
 
   // ---- inlay hints, folding, links ----
 
-  /** A hint after a train step, with its tooltip as plain text (which every client that asks for hints takes). */
-  InlayHint inlayHint(SourceFile source, jonquil.ide.InlayHint hint) {
+  /**
+   * Names a hint for a later inlayHint/resolve: its document (as the client spells the URI),
+   * the state of it the hint was computed from (its version, null for a file the editor has
+   * not open, and a hash of the text) and the offset of the step it follows.
+   */
+  record HintKey(String uri, Integer version, int textHash, int offset) {}
+
+  /** The hint provider's options: tooltips can be resolved later, for the clients that say so. */
+  static InlayHintRegistrationOptions inlayHintProvider() {
+    InlayHintRegistrationOptions out = new InlayHintRegistrationOptions();
+    out.setResolveProvider(true);
+    return out;
+  }
+
+  /**
+   * A hint after a train step. Its tooltip is plain text (which every client that asks for
+   * hints takes) and comes now, or, when {@code key} is given, from inlayHint/resolve.
+   */
+  InlayHint inlayHint(SourceFile source, jonquil.ide.InlayHint hint, HintKey key) {
     InlayHint out = new InlayHint(position(source, hint.offset()), Either.forLeft(hint.label()));
-    if (hint.tooltip() != null && !hint.tooltip().isBlank()) {
-      out.setTooltip(Either.forLeft(hint.tooltip()));
+    if (key != null) {
+      JsonObject data = new JsonObject();
+      data.addProperty("uri", key.uri());
+      if (key.version() != null) {
+        data.addProperty("version", key.version());
+      }
+      data.addProperty("text", key.textHash());
+      data.addProperty("offset", key.offset());
+      out.setData(data);
+    } else {
+      withTooltip(out, hint.tooltip());
     }
     return out;
+  }
+
+  /** The key a resolve request carries back, if it is one of ours. */
+  static Optional<HintKey> hintKey(InlayHint hint) {
+    Object data = hint == null ? null : hint.getData();
+    if (!(data instanceof JsonObject)) {
+      return Optional.empty();
+    }
+    JsonObject o = (JsonObject) data;
+    JsonElement uri = o.get("uri");
+    JsonElement version = o.get("version");
+    JsonElement text = o.get("text");
+    JsonElement offset = o.get("offset");
+    try {
+      if (uri == null || text == null || offset == null || !uri.isJsonPrimitive() || !text.isJsonPrimitive()
+          || !offset.isJsonPrimitive() || (version != null && !version.isJsonPrimitive())) {
+        return Optional.empty();
+      }
+      return Optional.of(new HintKey(uri.getAsString(), version == null ? null : version.getAsInt(), text.getAsInt(),
+          offset.getAsInt()));
+    } catch (RuntimeException e) {
+      return Optional.empty(); // not numbers: someone else's data
+    }
+  }
+
+  /** The hint's label as plain text, or null when it is made of parts (ours never are). */
+  static String hintLabel(InlayHint hint) {
+    return hint == null || hint.getLabel() == null || !hint.getLabel().isLeft() ? null : hint.getLabel().getLeft();
+  }
+
+  /** The hint with its tooltip (plain text), if there is one. */
+  static InlayHint withTooltip(InlayHint hint, String tooltip) {
+    if (tooltip != null && !tooltip.isBlank()) {
+      hint.setTooltip(Either.forLeft(tooltip));
+    }
+    return hint;
   }
 
   /**

@@ -168,8 +168,9 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     out.setCompletionProvider(completion);
     out.setSemanticTokensProvider(new SemanticTokensWithRegistrationOptions(convert.semanticTokensLegend(),
         new SemanticTokensServerFull(true), false));
-    // Advertised to every client: one without the capability simply never asks.
-    out.setInlayHintProvider(true);
+    // Advertised to every client: one without the capability simply never asks, and one that
+    // cannot resolve tooltips gets them inline.
+    out.setInlayHintProvider(Convert.inlayHintProvider());
     out.setFoldingRangeProvider(true);
     out.setDocumentLinkProvider(new DocumentLinkOptions(false));
     if (ClientSupport.pullDiagnostics(caps)) {
@@ -524,6 +525,14 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
           && c.getTextDocument().getCompletion().getCompletionItem().getResolveSupport().getProperties() != null
           && c.getTextDocument().getCompletion().getCompletionItem().getResolveSupport().getProperties()
               .contains("documentation");
+    }
+
+    /** The client resolves inlay hints lazily and takes their tooltips that way. */
+    static boolean lazyInlayHintTooltips(ClientCapabilities c) {
+      return c != null && c.getTextDocument() != null && c.getTextDocument().getInlayHint() != null
+          && c.getTextDocument().getInlayHint().getResolveSupport() != null
+          && c.getTextDocument().getInlayHint().getResolveSupport().getProperties() != null
+          && c.getTextDocument().getInlayHint().getResolveSupport().getProperties().contains("tooltip");
     }
 
     /** The client names this token type among those it knows. */

@@ -9,6 +9,7 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Objects;
 import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.CompletableFuture;
@@ -204,6 +205,25 @@ final class JonquilTextDocumentService implements TextDocumentService {
     return null;
   }
 
+  /**
+   * Whether the server may propose edits to a file: one open in the editor, or one under a
+   * workspace folder. Any other file a check reads (a library used by an open file outside
+   * every folder) is served read-only: answered about, never edited.
+   */
+  private boolean editable(Path file) {
+    return server.documents.get(file).isPresent() || server.folders().stream().anyMatch(file::startsWith);
+  }
+
+  /** Refuses a rename that would touch a read-only file: changing only the other files would break the spec. */
+  private void refuseReadOnly(java.util.Collection<Path> files) {
+    for (Path file : files) {
+      if (!editable(file)) {
+        throw new ResponseErrorException(new ResponseError(ResponseErrorCode.RequestFailed, "renaming this would "
+            + "change '" + file + "', which is neither open nor in a workspace folder; open it first", null));
+      }
+    }
+  }
+
   @Override
   public CompletableFuture<List<? extends Location>> references(ReferenceParams params) {
     boolean withDeclaration = params.getContext() != null && params.getContext().isIncludeDeclaration();
@@ -224,6 +244,11 @@ final class JonquilTextDocumentService implements TextDocumentService {
     return server.atPosition("textDocument/prepareRename", params.getTextDocument().getUri(), params.getPosition(),
         null, at -> {
           Optional<TextRange> range = server.answers.prepareRename(at.result(), at.path(), at.offset());
+          if (range.isPresent()) {
+            List<Path> touched = new ArrayList<>();
+            server.answers.references(at.result(), at.path(), at.offset(), true).forEach(l -> touched.add(l.file()));
+            refuseReadOnly(touched);
+          }
           return range.<Either3<Range, PrepareRenameResult, PrepareRenameDefaultBehavior>>map(
               r -> Either3.forFirst(at.convert().range(at.source(), r))).orElse(null);
         });
@@ -240,6 +265,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
             throw new ResponseErrorException(new ResponseError(ResponseErrorCode.RequestFailed, result.error(), null));
           }
           Map<Path, List<jonquil.diag.Edit>> edits = result.edits() == null ? Map.of() : new LinkedHashMap<>(result.edits());
+          refuseReadOnly(edits.keySet());
           return at.convert().workspaceEdit(edits, at.result().files()::get,
               file -> server.documents.get(file).map(Documents.Doc::version).orElse(null), documentChanges);
         });
@@ -340,16 +366,52 @@ final class JonquilTextDocumentService implements TextDocumentService {
 
   @Override
   public CompletableFuture<List<InlayHint>> inlayHint(InlayHintParams params) {
+    boolean lazy = JonquilLanguageServer.ClientSupport.lazyInlayHintTooltips(server.clientCapabilities());
     Range range = params.getRange();
-    return server.atPosition("textDocument/inlayHint", params.getTextDocument().getUri(), null, List.of(), at -> {
+    String uri = params.getTextDocument().getUri();
+    return server.atPosition("textDocument/inlayHint", uri, null, List.of(), at -> {
       int start = range == null ? 0 : at.convert().offset(at.source(), range.getStart());
       int end = range == null ? at.source().text().length() : at.convert().offset(at.source(), range.getEnd());
+      Integer version = at.versions().get(at.path());
+      int textHash = at.source().text().hashCode();
       List<InlayHint> out = new ArrayList<>();
       for (jonquil.ide.InlayHint h
           : server.answers.inlayHints(at.result(), at.path(), Math.min(start, end), Math.max(start, end))) {
-        out.add(at.convert().inlayHint(at.source(), h));
+        out.add(at.convert().inlayHint(at.source(), h,
+            lazy ? new Convert.HintKey(uri, version, textHash, h.offset()) : null));
       }
       return out;
+    });
+  }
+
+  /**
+   * Fills a hint's tooltip, recomputed by the editor answers for the document state the hint
+   * came from; a hint whose document has changed or closed since, or that is not ours, comes
+   * back as it was.
+   */
+  @Override
+  public CompletableFuture<InlayHint> resolveInlayHint(InlayHint unresolved) {
+    Optional<Convert.HintKey> key = Convert.hintKey(unresolved);
+    return server.answer("inlayHint/resolve", key.map(Convert.HintKey::uri).orElse(null), (snapshot, path) -> {
+      if (key.isEmpty() || path == null) {
+        return unresolved;
+      }
+      Convert.HintKey k = key.get();
+      Integer open = server.documents.get(path).map(Documents.Doc::version).orElse(null);
+      if (!Objects.equals(open, k.version()) || !Objects.equals(snapshot.versions().get(path), k.version())) {
+        return unresolved;
+      }
+      Optional<jonquil.Result> result = snapshot.resultFor(path);
+      if (result.isEmpty() || result.get().files().get(path).text().hashCode() != k.textHash()) {
+        return unresolved;
+      }
+      String label = Convert.hintLabel(unresolved);
+      for (jonquil.ide.InlayHint h : server.answers.inlayHints(result.get(), path, k.offset(), k.offset())) {
+        if (h.offset() == k.offset() && h.label().equals(label)) {
+          return Convert.withTooltip(unresolved, h.tooltip());
+        }
+      }
+      return unresolved;
     });
   }
 
@@ -397,7 +459,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
       List<Either<Command, CodeAction>> out = new ArrayList<>();
       for (CodeActionInfo a : server.answers.codeActions(at.result(), at.path(),
           new TextRange(Math.min(start, end), Math.max(start, end)))) {
-        if (Convert.kindRequested(a.kind(), only)) {
+        if (Convert.kindRequested(a.kind(), only) && a.edits().keySet().stream().allMatch(this::editable)) {
           out.add(Either.forRight(at.convert().codeAction(a, at.result().files()::get,
               file -> at.versions().get(file), documentChanges, preferred)));
         }

@@ -26,8 +26,11 @@ final class Snapshots {
       versions = Map.copyOf(versions);
     }
 
-    /** The result that read this file, if any check did. */
+    /** The result that read this file, if any check did; none for a document that names no file (null). */
     Optional<Result> resultFor(Path file) {
+      if (file == null) {
+        return Optional.empty(); // the results' file maps reject null keys
+      }
       for (Result r : results) {
         if (r.files().containsKey(file)) {
           return Optional.of(r);

@@ -145,7 +145,7 @@ class EditorFeaturesTest {
       assertEquals(Convert.TOKEN_TYPES, caps.getSemanticTokensProvider().getLegend().getTokenTypes());
       assertEquals(List.of("declaration"), caps.getSemanticTokensProvider().getLegend().getTokenModifiers());
       assertTrue(caps.getSemanticTokensProvider().getFull().getRight().getDelta());
-      assertTrue(caps.getInlayHintProvider().getLeft());
+      assertTrue(caps.getInlayHintProvider().getRight().getResolveProvider());
       assertTrue(caps.getFoldingRangeProvider().getLeft());
       assertNotNull(caps.getDocumentLinkProvider());
       assertEquals(List.of(CodeActionKind.QuickFix), caps.getCodeActionProvider().getRight().getCodeActionKinds());
