@@ -1,12 +1,15 @@
 package jonquil.lsp;
 
+import java.io.PrintStream;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.Set;
 import java.util.concurrent.CancellationException;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.CompletionException;
@@ -80,6 +83,8 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
   private volatile Convert convert = new Convert(Convert.Encoding.UTF_16, documents::uriOf);
   private volatile ClientCapabilities capabilities = new ClientCapabilities();
   private volatile Folders folders = new Folders(List.of(), 0);
+  /** Where `jonquil lsp --verbose` writes its debug lines (standard error), or null when they are off. */
+  private final PrintStream debug;
 
   /** The workspace folders, and how many times they were set (so a request can wait for a check under them). */
   record Folders(List<Path> paths, long generation) {
@@ -93,21 +98,32 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
   }
 
   public JonquilLanguageServer(EditorAnswers answers) {
-    this(answers, DEBOUNCE);
+    this(answers, DEBOUNCE, true, null);
+  }
+
+  /** A server that writes a debug line per check and per request to {@code debug} (null: none). */
+  public JonquilLanguageServer(EditorAnswers answers, PrintStream debug) {
+    this(answers, DEBOUNCE, true, debug);
   }
 
   /** A server whose checks wait {@code debounce} after the last edit (tests and benchmarks shorten it). */
   JonquilLanguageServer(EditorAnswers answers, Duration debounce) {
-    this(answers, debounce, true);
+    this(answers, debounce, true, null);
   }
 
   /** As above; with {@code checkAfterPause} false even an edit after a pause waits for the debounce (for tests). */
   JonquilLanguageServer(EditorAnswers answers, Duration debounce, boolean checkAfterPause) {
+    this(answers, debounce, checkAfterPause, null);
+  }
+
+  private JonquilLanguageServer(EditorAnswers answers, Duration debounce, boolean checkAfterPause, PrintStream debug) {
     this.answers = answers;
+    this.debug = debug;
     this.cycle = new CheckCycle(documents, snapshots, () -> folders, () -> convert, () -> client,
         () -> ClientSupport.pullDiagnostics(capabilities));
-    this.scheduler = new CheckScheduler(cycle, this::checkFailed, debounce, MAX_DELAY.compareTo(debounce) > 0
-        ? MAX_DELAY : debounce, WarmUp::run, checkAfterPause);
+    this.scheduler = new CheckScheduler(debug == null ? cycle : this::timedCheck, this::checkFailed, debounce,
+        MAX_DELAY.compareTo(debounce) > 0 ? MAX_DELAY : debounce, debug == null ? WarmUp::run : this::timedWarmUp,
+        checkAfterPause);
     AtomicInteger n = new AtomicInteger();
     ThreadGroup group = new ThreadGroup("jonquil-requests");
     this.requests = Executors.newFixedThreadPool(2, r -> {
@@ -388,6 +404,11 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
       Integer version = path == null ? null : documents.get(path).map(Documents.Doc::version).orElse(null);
       CompletableFuture<Snapshots.Snapshot> fresh = snapshots.fresh(path, version, folders.generation(), FRESH_WAIT);
       CompletableFuture<T> reply = new CompletableFuture<>();
+      if (debug != null) {
+        long start = System.nanoTime();
+        reply.whenComplete((value, error) -> debug("request " + method + ": "
+            + (error == null ? "answered" : "failed (" + describe(error) + ")") + " in " + millisSince(start) + " ms"));
+      }
       AtomicReference<Future<?>> running = new AtomicReference<>();
       fresh.whenComplete((snapshot, waitError) -> {
         if (reply.isDone()) {
@@ -467,6 +488,40 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
   static String describe(Throwable e) {
     String m = e.getMessage();
     return m == null || m.isBlank() ? e.getClass().getSimpleName() : e.getClass().getSimpleName() + ": " + m.strip();
+  }
+
+  /** The check cycle, followed by one debug line: documents open, files read, diagnostics, time. */
+  private boolean timedCheck(java.util.function.BooleanSupplier superseded) {
+    long start = System.nanoTime();
+    if (!cycle.run(superseded)) {
+      debug("check: superseded by a newer edit after " + millisSince(start) + " ms");
+      return false;
+    }
+    Snapshots.Snapshot done = snapshots.latest();
+    Set<Path> read = new HashSet<>();
+    done.results().forEach(r -> read.addAll(r.files().keySet()));
+    int diagnostics = CheckCycle.byFile(done.results()).values().stream().mapToInt(Set::size).sum();
+    debug("check: " + done.versions().size() + " open, " + read.size() + " files read, " + diagnostics
+        + " diagnostics, " + millisSince(start) + " ms");
+    return true;
+  }
+
+  private void timedWarmUp() {
+    long start = System.nanoTime();
+    WarmUp.run();
+    debug("warm-up: " + millisSince(start) + " ms");
+  }
+
+  private static long millisSince(long startNanos) {
+    return (System.nanoTime() - startNanos) / 1_000_000;
+  }
+
+  /** A line for `--verbose` only: to standard error, never to the client (it would flood its log) nor stdout. */
+  void debug(String message) {
+    PrintStream to = debug;
+    if (to != null) {
+      to.println("jonquil lsp: debug: " + message);
+    }
   }
 
   /** Logs to stderr and, when connected, to the client's log; never to stdout, which carries the protocol. */

@@ -20,8 +20,13 @@ public final class LspCommand implements java.util.concurrent.Callable<Integer> 
   @Option(names = {"-h", "--help"}, usageHelp = true, description = "Show this help and exit.")
   boolean help;
 
+  @Option(names = "--verbose", description = "Also write debug lines to standard error: one per check (open "
+      + "documents, files read, diagnostics, milliseconds) and one per request (method, outcome, milliseconds).")
+  boolean verbose;
+
   private final InputStream in;
   private final OutputStream out;
+  private final PrintStream err;
   private final EditorAnswers answers;
 
   /** The server on the process's own stdin and stdout. */
@@ -31,8 +36,14 @@ public final class LspCommand implements java.util.concurrent.Callable<Integer> 
 
   /** The server on the given streams (null: the process's own), answering with {@code answers}. */
   public LspCommand(InputStream in, OutputStream out, EditorAnswers answers) {
+    this(in, out, null, answers);
+  }
+
+  /** As above, with {@code --verbose} writing its debug lines to {@code err} (null: the process's stderr). */
+  public LspCommand(InputStream in, OutputStream out, PrintStream err, EditorAnswers answers) {
     this.in = in;
     this.out = out;
+    this.err = err;
     this.answers = answers;
   }
 
@@ -46,7 +57,8 @@ public final class LspCommand implements java.util.concurrent.Callable<Integer> 
       System.setOut(System.err);
       output = protocol;
     }
-    JonquilLanguageServer server = new JonquilLanguageServer(answers);
+    PrintStream debug = verbose ? (err != null ? err : System.err) : null;
+    JonquilLanguageServer server = new JonquilLanguageServer(answers, debug);
     AtomicInteger n = new AtomicInteger();
     ExecutorService io = Executors.newCachedThreadPool(r -> {
       Thread t = new Thread(r, "jonquil-lsp-io-" + n.incrementAndGet());
