@@ -75,6 +75,12 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
   private final CheckCycle cycle;
   private final CheckScheduler scheduler;
   private final ExecutorService requests;
+  /**
+   * Completes replies, which makes LSP4J write them: a thread that is never interrupted, so
+   * a cancel (which interrupts the request worker) can never land mid-write. On a
+   * channel-backed stream that interrupt would close the channel, and the connection with it.
+   */
+  private final ExecutorService replies;
   private final JonquilTextDocumentService textDocuments;
   private final JonquilWorkspaceService workspace;
   private final CompletableFuture<Integer> exitCode = new CompletableFuture<>();
@@ -128,6 +134,11 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     ThreadGroup group = new ThreadGroup("jonquil-requests");
     this.requests = Executors.newFixedThreadPool(2, r -> {
       Thread t = new Thread(group, r, "jonquil-request-" + n.incrementAndGet(), CheckScheduler.STACK_BYTES);
+      t.setDaemon(true);
+      return t;
+    });
+    this.replies = Executors.newSingleThreadExecutor(r -> {
+      Thread t = new Thread(group, r, "jonquil-replies");
       t.setDaemon(true);
       return t;
     });
@@ -271,6 +282,7 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
   public void close() {
     scheduler.close();
     requests.shutdownNow();
+    replies.shutdown();
   }
 
   @Override
@@ -424,10 +436,12 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
               return;
             }
             try {
-              reply.complete(body.apply(snapshot, path));
+              T value = body.apply(snapshot, path);
+              replies.execute(() -> reply.complete(value));
             } catch (Throwable error) {
               if (!reply.isDone()) { // after a cancel, the interrupt's own failure is no error to report
-                reply.completeExceptionally(asResponseError(method, error));
+                Throwable response = asResponseError(method, error);
+                replies.execute(() -> reply.completeExceptionally(response));
               }
             }
           }));

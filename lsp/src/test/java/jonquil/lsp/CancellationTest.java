@@ -82,6 +82,39 @@ class CancellationTest {
     }
   }
 
+  @Test
+  void cancelsRacingWithRepliesNeverCutTheConnection() throws Exception {
+    Files.writeString(dir.resolve(".jonquil-root"), "");
+    String text = "material glass = index 1.5\nwindow w1 {\n  material   glass\n  thickness  2 mm\n}\n";
+    Path file = dir.resolve("race.jonq");
+    Files.writeString(file, text);
+    String uri = file.toUri().toString();
+    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+      h.initialize(dir);
+      h.open(uri, 1, text);
+      var service = h.remote.getTextDocumentService();
+      TextDocumentIdentifier doc = new TextDocumentIdentifier(uri);
+      Position onName = new Position(1, 8);
+      assertTrue(service.hover(new HoverParams(doc, onName)).get(10, TimeUnit.SECONDS) != null);
+      // Cancels sent while replies are computed and written: on a channel-backed stream an
+      // interrupt during the write would close the channel, and the server would go silent.
+      java.util.SplittableRandom random = new java.util.SplittableRandom(7);
+      for (int i = 0; i < 300; i++) {
+        CompletableFuture<Hover> pending = service.hover(new HoverParams(doc, onName));
+        long spin = System.nanoTime() + random.nextInt(2_000_000);
+        while (System.nanoTime() < spin) {
+          Thread.onSpinWait();
+        }
+        pending.cancel(true);
+      }
+      Hover after = service.hover(new HoverParams(doc, onName)).get(10, TimeUnit.SECONDS);
+      assertTrue(after.getContents().getRight().getValue().contains("w1"), "the server still answers");
+      assertTrue(!h.serverListening.isDone(), "the server still reads");
+      assertEquals(0, h.responses.stream().filter(r -> r.getError() != null
+          && r.getError().getCode() != ResponseErrorCode.RequestCancelled.getValue()).count(), "no error but cancels");
+    }
+  }
+
   private static List<ResponseMessage> awaitCancelled(LspHarness h, int count) throws InterruptedException {
     long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(10);
     while (true) {
