@@ -63,6 +63,9 @@ public final class Checker {
         found.addAll(model.diagnostics());
         diagnostics.addAll(found);
         models.put(root, model);
+        if (!options.analyses()) {
+          continue; // names only: no requirement verdicts, no physics
+        }
         if (found.stream().anyMatch(d -> d.severity() == Severity.ERROR)) {
           for (ResolvedRequirement r : model.requirements()) {
             requirements.add(RequirementOutcome.notEvaluated(r.file(), r.syntax().range(), r.syntax().text(),
