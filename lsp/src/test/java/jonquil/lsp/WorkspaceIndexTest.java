@@ -108,8 +108,14 @@ class WorkspaceIndexTest {
   }
 
   private static List<Location> references(LspHarness h, Location from) throws Exception {
+    return references(h, from, true);
+  }
+
+  private static List<Location> references(LspHarness h, Location from, boolean includeDeclaration)
+      throws Exception {
     List<Location> out = new ArrayList<>(h.remote.getTextDocumentService().references(new ReferenceParams(
-        new TextDocumentIdentifier(from.getUri()), from.getRange().getStart(), new ReferenceContext(true)))
+        new TextDocumentIdentifier(from.getUri()), from.getRange().getStart(),
+        new ReferenceContext(includeDeclaration)))
         .get(20, TimeUnit.SECONDS));
     out.sort(Comparator.comparing(Location::getUri).thenComparing(l -> l.getRange().getStart().getLine()));
     return out;
@@ -176,6 +182,9 @@ class WorkspaceIndexTest {
       assertEquals(expected, references(h, declaration), "a and b were never opened, and no open file uses them");
       assertFalse(references(h, declaration).stream().anyMatch(l -> l.getUri().equals(uri(unrelated))));
       assertEquals(references(h, declaration), references(h, at(open, openText, "fold")), "the same from a use");
+      List<Location> usesOnly = new ArrayList<>(expected);
+      usesOnly.remove(declaration);
+      assertEquals(usesOnly, references(h, declaration, false), "without includeDeclaration, the uses only");
 
       WorkspaceEdit edit = h.remote.getTextDocumentService().rename(new RenameParams(
           new TextDocumentIdentifier(uri(lib)), declaration.getRange().getStart(), "steer")).get(20, TimeUnit.SECONDS);
