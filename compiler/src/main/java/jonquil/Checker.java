@@ -85,6 +85,9 @@ public final class Checker {
         if (superseded.getAsBoolean()) {
           return Optional.empty();
         }
+        if (!options.analyses()) {
+          continue; // names only: no requirement verdicts, no physics
+        }
         if (found.stream().anyMatch(d -> d.severity() == Severity.ERROR)) {
           for (ResolvedRequirement r : model.requirements()) {
             requirements.add(RequirementOutcome.notEvaluated(r.file(), r.syntax().range(), r.syntax().text(),

@@ -74,6 +74,37 @@ public final class Ide {
   }
 
   /**
+   * What a workspace index keeps of a file that {@code r} checked as a root (see {@link FileIndex});
+   * empty when {@code r} did not read it as a spec.
+   */
+  public static Optional<FileIndex> index(Result r, Path file) {
+    return WorkspaceNames.index(r, Models.norm(file));
+  }
+
+  /** The declarations of indexed files whose name contains the query (ignoring case), by path, capped. */
+  public static List<FoundSymbol> workspaceSymbols(java.util.Collection<FileIndex> indexed, String query) {
+    return Outline.search(indexed, query);
+  }
+
+  /**
+   * As {@link #references(Result, Path, int, boolean)}, and also the uses in indexed files
+   * that {@code r} did not read (a file using a part library that no open file uses).
+   */
+  public static List<Location> references(Result r, Path file, int offset, boolean includeDeclaration,
+      java.util.Collection<FileIndex> elsewhere) {
+    return WorkspaceNames.references(r, Models.norm(file), offset, includeDeclaration, elsewhere);
+  }
+
+  /**
+   * As {@link #rename(Result, Path, int, String)}, and also the uses in indexed files that
+   * {@code r} did not read; refused when the new name is already visible in one of them.
+   */
+  public static RenameResult rename(Result r, Path file, int offset, String newName,
+      java.util.Collection<FileIndex> elsewhere) {
+    return WorkspaceNames.rename(r, Models.norm(file), offset, newName, elsewhere);
+  }
+
+  /**
    * What may be written at the offset: kinds, parameters, names, ports, materials, units, measures
    * and keywords, read from the text before the cursor (however broken) and the names of this result.
    */

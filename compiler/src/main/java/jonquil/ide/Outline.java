@@ -23,11 +23,12 @@ final class Outline {
   private Outline() {}
 
   static List<SymbolInfo> of(Result r, Path file) {
-    SourceFile text = r.files().get(file);
     SpecFile f = Models.tree(r, file).orElse(null);
-    if (f == null) {
-      return List.of();
-    }
+    return f == null ? List.of() : of(r.files().get(file), f);
+  }
+
+  /** The outline of one parsed file. */
+  static List<SymbolInfo> of(SourceFile text, SpecFile f) {
     List<SymbolInfo> out = new ArrayList<>();
     for (UseDecl u : f.uses()) {
       out.add(node("use \"" + u.target() + "\"", "use", u.range(), u.targetRange(), List.of()));
@@ -89,15 +90,51 @@ final class Outline {
     List<Path> files = r.files().keySet().stream().filter(p -> Models.isSpec(r, p))
         .sorted(Comparator.comparing(Path::toString)).toList();
     for (Path file : files) {
-      for (SymbolInfo s : of(r, file)) {
-        boolean declared = !s.kind().equals("use") && !s.kind().equals("require")
-            && !(s.kind().equals("train") && s.selectionRange().equals(s.range()));
-        if (declared && s.name().toLowerCase(Locale.ROOT).contains(q)) {
-          out.add(new Match(file, new SymbolInfo(s.name(), s.kind(), s.range(), s.selectionRange(), List.of())));
+      for (SymbolInfo s : declared(of(r, file))) {
+        if (matches(s, q)) {
+          out.add(new Match(file, s));
           if (out.size() == WORKSPACE_CAP) {
             return out;
           }
         }
+      }
+    }
+    return out;
+  }
+
+  /** A workspace search over indexed files, by path, with the same matching and cap as {@link #search}. */
+  static List<FoundSymbol> search(java.util.Collection<FileIndex> indexed, String query) {
+    String q = query == null ? "" : query.toLowerCase(Locale.ROOT);
+    List<FoundSymbol> out = new ArrayList<>();
+    List<FileIndex> files = indexed.stream().sorted(Comparator.comparing((FileIndex f) -> f.file().toString())).toList();
+    for (FileIndex f : files) {
+      for (SymbolInfo s : f.declarations()) {
+        if (matches(s, q)) {
+          out.add(new FoundSymbol(f.file(), s));
+          if (out.size() == WORKSPACE_CAP) {
+            return out;
+          }
+        }
+      }
+    }
+    return out;
+  }
+
+  private static boolean matches(SymbolInfo s, String lowerCaseQuery) {
+    return s.name().toLowerCase(Locale.ROOT).contains(lowerCaseQuery);
+  }
+
+  /**
+   * The outline's nodes that declare a name a search can find (elements, materials, named
+   * trains), without their children: not 'use' lines, require blocks or unnamed trains.
+   */
+  static List<SymbolInfo> declared(List<SymbolInfo> outline) {
+    List<SymbolInfo> out = new ArrayList<>();
+    for (SymbolInfo s : outline) {
+      boolean declared = !s.kind().equals("use") && !s.kind().equals("require")
+          && !(s.kind().equals("train") && s.selectionRange().equals(s.range()));
+      if (declared) {
+        out.add(new SymbolInfo(s.name(), s.kind(), s.range(), s.selectionRange(), List.of()));
       }
     }
     return out;

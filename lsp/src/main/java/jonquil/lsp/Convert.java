@@ -291,6 +291,42 @@ final class Convert {
     return new DidChangeWatchedFilesRegistrationOptions(watchers);
   }
 
+  // ---- work-done progress (the workspace index's first pass) ----
+
+  static org.eclipse.lsp4j.WorkDoneProgressCreateParams progressCreate(String token) {
+    return new org.eclipse.lsp4j.WorkDoneProgressCreateParams(Either.forLeft(token));
+  }
+
+  static org.eclipse.lsp4j.ProgressParams progressBegin(String token, String title, String message) {
+    org.eclipse.lsp4j.WorkDoneProgressBegin begin = new org.eclipse.lsp4j.WorkDoneProgressBegin();
+    begin.setTitle(title);
+    begin.setMessage(message);
+    begin.setCancellable(true);
+    begin.setPercentage(0);
+    return new org.eclipse.lsp4j.ProgressParams(Either.forLeft(token), Either.forLeft(begin));
+  }
+
+  static org.eclipse.lsp4j.ProgressParams progressReport(String token, String message, int percentage) {
+    org.eclipse.lsp4j.WorkDoneProgressReport report = new org.eclipse.lsp4j.WorkDoneProgressReport();
+    report.setMessage(message);
+    report.setPercentage(Math.max(0, Math.min(100, percentage)));
+    return new org.eclipse.lsp4j.ProgressParams(Either.forLeft(token), Either.forLeft(report));
+  }
+
+  static org.eclipse.lsp4j.ProgressParams progressEnd(String token, String message) {
+    org.eclipse.lsp4j.WorkDoneProgressEnd end = new org.eclipse.lsp4j.WorkDoneProgressEnd();
+    end.setMessage(message);
+    return new org.eclipse.lsp4j.ProgressParams(Either.forLeft(token), Either.forLeft(end));
+  }
+
+  /** A progress token as one string, whichever of the two forms the client sent. */
+  static String progressToken(Either<String, Integer> token) {
+    if (token == null) {
+      return null;
+    }
+    return token.isLeft() ? token.getLeft() : String.valueOf(token.getRight());
+  }
+
   /** The workspace part of the server capabilities: multi-root folders, with change notifications. */
   static WorkspaceServerCapabilities workspaceFolders() {
     WorkspaceFoldersOptions folders = new WorkspaceFoldersOptions();

@@ -11,6 +11,8 @@ import jonquil.ide.RenameResult;
 import jonquil.ide.SemanticToken;
 import jonquil.ide.SymbolInfo;
 import java.nio.file.Path;
+import java.util.Collection;
+import jonquil.ide.FileIndex;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
@@ -56,4 +58,27 @@ public interface EditorAnswers {
 
   /** Quick fixes for the file's diagnostics that overlap the range. */
   List<CodeActionInfo> codeActions(Result result, Path file, TextRange range);
+
+  // ---- the workspace index: stand-ins that know nothing index nothing ----
+
+  /** What the workspace index keeps of a file that {@code result} checked as a root; empty when nothing is known. */
+  default Optional<FileIndex> index(Result result, Path file) {
+    return Optional.empty();
+  }
+
+  /** Declarations of indexed files matching the query, capped. */
+  default List<FileSymbol> workspaceSymbols(Collection<FileIndex> indexed, String query) {
+    return List.of();
+  }
+
+  /** The references in {@code result}, and in the indexed files it did not read. */
+  default List<Location> references(Result result, Path file, int offset, boolean includeDeclaration,
+      Collection<FileIndex> elsewhere) {
+    return references(result, file, offset, includeDeclaration);
+  }
+
+  /** A rename's edits in {@code result}, and in the indexed files it did not read. */
+  default RenameResult rename(Result result, Path file, int offset, String newName, Collection<FileIndex> elsewhere) {
+    return rename(result, file, offset, newName);
+  }
 }

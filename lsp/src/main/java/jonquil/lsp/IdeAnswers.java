@@ -2,13 +2,16 @@ package jonquil.lsp;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Collection;
 import java.util.List;
 import java.util.Optional;
 import jonquil.Result;
 import jonquil.ide.CodeActionInfo;
 import jonquil.ide.CompletionItemInfo;
 import jonquil.ide.DocumentLinkInfo;
+import jonquil.ide.FileIndex;
 import jonquil.ide.FoldingRangeInfo;
+import jonquil.ide.FoundSymbol;
 import jonquil.ide.HoverInfo;
 import jonquil.ide.Ide;
 import jonquil.ide.InlayHint;
@@ -59,6 +62,31 @@ final class IdeAnswers implements EditorAnswers {
       out.add(new FileSymbol(places.get(i).file(), symbols.get(i)));
     }
     return out;
+  }
+
+  @Override
+  public Optional<FileIndex> index(Result result, Path file) {
+    return Ide.index(result, file);
+  }
+
+  @Override
+  public List<FileSymbol> workspaceSymbols(Collection<FileIndex> indexed, String query) {
+    List<FileSymbol> out = new ArrayList<>();
+    for (FoundSymbol s : Ide.workspaceSymbols(indexed, query)) {
+      out.add(new FileSymbol(s.file(), s.symbol()));
+    }
+    return out;
+  }
+
+  @Override
+  public List<Location> references(Result result, Path file, int offset, boolean includeDeclaration,
+      Collection<FileIndex> elsewhere) {
+    return Ide.references(result, file, offset, includeDeclaration, elsewhere);
+  }
+
+  @Override
+  public RenameResult rename(Result result, Path file, int offset, String newName, Collection<FileIndex> elsewhere) {
+    return Ide.rename(result, file, offset, newName, elsewhere);
   }
 
   @Override

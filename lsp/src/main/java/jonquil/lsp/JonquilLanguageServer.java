@@ -21,6 +21,7 @@ import java.util.concurrent.RejectedExecutionException;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.Function;
+import java.util.function.Supplier;
 import jonquil.CheckOptions;
 import jonquil.Checker;
 import jonquil.Result;
@@ -47,6 +48,7 @@ import org.eclipse.lsp4j.ServerCapabilities;
 import org.eclipse.lsp4j.ServerInfo;
 import org.eclipse.lsp4j.TextDocumentSyncKind;
 import org.eclipse.lsp4j.TextDocumentSyncOptions;
+import org.eclipse.lsp4j.WorkDoneProgressCancelParams;
 import org.eclipse.lsp4j.WorkspaceFolder;
 import org.eclipse.lsp4j.jsonrpc.ResponseErrorException;
 import org.eclipse.lsp4j.jsonrpc.messages.ResponseError;
@@ -72,6 +74,7 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
   final EditorAnswers answers;
   final Documents documents = new Documents();
   final Snapshots snapshots = new Snapshots();
+  final WorkspaceIndex index;
   private final CheckCycle cycle;
   private final CheckScheduler scheduler;
   private final ExecutorService requests;
@@ -142,6 +145,7 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
       t.setDaemon(true);
       return t;
     });
+    this.index = new WorkspaceIndex(answers, documents, () -> client, this::log);
     this.textDocuments = new JonquilTextDocumentService(this);
     this.workspace = new JonquilWorkspaceService(this);
   }
@@ -238,12 +242,15 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
   public void initialized(InitializedParams params) {
     log(MessageType.Log, "jonquil language server ready (positions in " + convert.encoding().wire() + ")");
     LanguageClient c = client;
-    if (c != null && ClientSupport.watchedFilesRegistration(capabilities)) {
+    boolean watching = c != null && ClientSupport.watchedFilesRegistration(capabilities);
+    index.start(folders.paths(), ClientSupport.workDoneProgress(capabilities), watching);
+    if (watching) {
       // Never wait for the reply here: this runs on the reader thread, which must read it.
       c.registerCapability(new RegistrationParams(List.of(new Registration(WATCHERS_ID,
           "workspace/didChangeWatchedFiles", Convert.fileWatchers(WATCHED_GLOBS)))))
           .whenComplete((ok, error) -> {
             if (error != null) {
+              index.notWatched();
               log(MessageType.Warning, "the editor refused file watching (" + describe(error)
                   + "); used files are still re-read on every check");
             }
@@ -278,9 +285,10 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     return s == State.SHUT_DOWN || (s == State.EXITED && exitCode.getNow(1) == 0);
   }
 
-  /** Stops the check worker and the request pool. */
+  /** Stops the check worker, the index worker and the request pool. */
   public void close() {
     scheduler.close();
+    index.close();
     requests.shutdownNow();
     replies.shutdown();
   }
@@ -308,6 +316,7 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
   /** Replaces the workspace folders; called on the reader thread only, so the generation never goes back. */
   void setFolders(List<Path> newFolders) {
     folders = new Folders(newFolders, folders.generation() + 1);
+    index.setFolders(newFolders);
   }
 
   List<Path> folders() {
@@ -316,6 +325,12 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
 
   void scheduleCheck() {
     scheduler.request();
+    index.buffersChanged();
+  }
+
+  @Override
+  public void cancelProgress(WorkDoneProgressCancelParams params) {
+    onNotification("window/workDoneProgress/cancel", () -> index.cancelProgress(Convert.progressToken(params.getToken())));
   }
 
   /** Runs a notification's recording step if the server is running; a failure is logged, never thrown at LSP4J. */
@@ -338,7 +353,13 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
   record At(Result result, Path path, SourceFile source, int offset, Convert convert, Map<Path, Integer> versions) {}
 
   <T> CompletableFuture<T> atPosition(String method, String uri, Position position, T none, Function<At, T> body) {
-    return answer(method, uri, (snapshot, path) -> {
+    return atPosition(method, uri, null, position, none, body);
+  }
+
+  /** As above, answered once {@code before} is done too (e.g. a fresh workspace index). */
+  <T> CompletableFuture<T> atPosition(String method, String uri, Supplier<? extends CompletableFuture<?>> before,
+      Position position, T none, Function<At, T> body) {
+    return answer(method, uri, before, (snapshot, path) -> {
       Optional<Result> result = snapshot.resultFor(path);
       if (result.isEmpty()) {
         return none;
@@ -403,6 +424,12 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
    * version, and turns any exception into an internal-error response plus a log line.
    */
   <T> CompletableFuture<T> answer(String method, String uri, Body<T> body) {
+    return answer(method, uri, null, body);
+  }
+
+  /** As above, also waiting (without blocking) for {@code before}, when given, e.g. a fresh workspace index. */
+  <T> CompletableFuture<T> answer(String method, String uri, Supplier<? extends CompletableFuture<?>> before,
+      Body<T> body) {
     try {
       State s = state.get();
       if (s == State.NEW) {
@@ -414,7 +441,9 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
       }
       Path path = uri == null ? null : Documents.pathOf(uri).orElse(null);
       Integer version = path == null ? null : documents.get(path).map(Documents.Doc::version).orElse(null);
-      CompletableFuture<Snapshots.Snapshot> fresh = snapshots.fresh(path, version, folders.generation(), FRESH_WAIT);
+      CompletableFuture<Snapshots.Snapshot> checked = snapshots.fresh(path, version, folders.generation(), FRESH_WAIT);
+      CompletableFuture<Snapshots.Snapshot> fresh = before == null ? checked
+          : checked.thenCombine(before.get(), (snapshot, ignored) -> snapshot);
       CompletableFuture<T> reply = new CompletableFuture<>();
       if (debug != null) {
         long start = System.nanoTime();
@@ -457,6 +486,7 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
         if (reply.isCancelled()) {
           // $/cancelRequest: LSP4J answers -32800 at once; interrupting frees the worker for the next request.
           fresh.cancel(false);
+          checked.cancel(false);
           cancel(running.get());
         }
       });
@@ -579,6 +609,10 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     static boolean hierarchicalSymbols(ClientCapabilities c) {
       return c != null && c.getTextDocument() != null && c.getTextDocument().getDocumentSymbol() != null
           && Boolean.TRUE.equals(c.getTextDocument().getDocumentSymbol().getHierarchicalDocumentSymbolSupport());
+    }
+
+    static boolean workDoneProgress(ClientCapabilities c) {
+      return c != null && c.getWindow() != null && Boolean.TRUE.equals(c.getWindow().getWorkDoneProgress());
     }
 
     static boolean watchedFilesRegistration(ClientCapabilities c) {

@@ -227,12 +227,13 @@ final class JonquilTextDocumentService implements TextDocumentService {
   @Override
   public CompletableFuture<List<? extends Location>> references(ReferenceParams params) {
     boolean withDeclaration = params.getContext() != null && params.getContext().isIncludeDeclaration();
-    return server.atPosition("textDocument/references", params.getTextDocument().getUri(), params.getPosition(),
-        List.of(), at -> {
+    return server.atPosition("textDocument/references", params.getTextDocument().getUri(), server.index::fresh,
+        params.getPosition(), List.of(), at -> {
+          WorkspaceIndex.Snapshot index = server.index.latest();
           List<Location> out = new ArrayList<>();
           for (jonquil.ide.Location l
-              : server.answers.references(at.result(), at.path(), at.offset(), withDeclaration)) {
-            out.add(at.convert().location(l, at.result().files()::get));
+              : server.answers.references(at.result(), at.path(), at.offset(), withDeclaration, index.files())) {
+            out.add(at.convert().location(l, file -> sourceOf(at, index, file)));
           }
           return out;
         });
@@ -257,18 +258,28 @@ final class JonquilTextDocumentService implements TextDocumentService {
   @Override
   public CompletableFuture<WorkspaceEdit> rename(RenameParams params) {
     boolean documentChanges = JonquilLanguageServer.ClientSupport.documentChanges(server.clientCapabilities());
-    return server.atPosition("textDocument/rename", params.getTextDocument().getUri(), params.getPosition(), null,
-        at -> {
+    return server.atPosition("textDocument/rename", params.getTextDocument().getUri(), server.index::fresh,
+        params.getPosition(), null, at -> {
+          WorkspaceIndex.Snapshot index = server.index.latest();
           RenameResult result =
-              server.answers.rename(at.result(), at.path(), at.offset(), params.getNewName());
+              server.answers.rename(at.result(), at.path(), at.offset(), params.getNewName(), index.files());
           if (result.error() != null) {
             throw new ResponseErrorException(new ResponseError(ResponseErrorCode.RequestFailed, result.error(), null));
           }
           Map<Path, List<jonquil.diag.Edit>> edits = result.edits() == null ? Map.of() : new LinkedHashMap<>(result.edits());
           refuseReadOnly(edits.keySet());
-          return at.convert().workspaceEdit(edits, at.result().files()::get,
-              file -> server.documents.get(file).map(Documents.Doc::version).orElse(null), documentChanges);
+          // A file only the index read is edited at the buffer version it read (null: read from disk).
+          return at.convert().workspaceEdit(edits, file -> sourceOf(at, index, file),
+              file -> at.result().files().containsKey(file)
+                  ? server.documents.get(file).map(Documents.Doc::version).orElse(null) : index.version(file),
+              documentChanges);
         });
+  }
+
+  /** The text a location's offsets refer to: the check's copy, else the workspace index's. */
+  private static SourceFile sourceOf(JonquilLanguageServer.At at, WorkspaceIndex.Snapshot index, Path file) {
+    SourceFile checked = at.result().files().get(file);
+    return checked != null ? checked : index.source(file);
   }
 
   @Override

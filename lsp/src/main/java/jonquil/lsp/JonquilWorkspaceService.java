@@ -2,14 +2,17 @@ package jonquil.lsp;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.HashSet;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Set;
 import java.util.concurrent.CompletableFuture;
 import jonquil.Result;
+import jonquil.ide.FileIndex;
 import org.eclipse.lsp4j.DidChangeConfigurationParams;
 import org.eclipse.lsp4j.DidChangeWatchedFilesParams;
 import org.eclipse.lsp4j.DidChangeWorkspaceFoldersParams;
+import org.eclipse.lsp4j.FileEvent;
 import org.eclipse.lsp4j.SymbolInformation;
 import org.eclipse.lsp4j.WorkspaceFolder;
 import org.eclipse.lsp4j.WorkspaceSymbol;
@@ -17,7 +20,10 @@ import org.eclipse.lsp4j.WorkspaceSymbolParams;
 import org.eclipse.lsp4j.jsonrpc.messages.Either;
 import org.eclipse.lsp4j.services.WorkspaceService;
 
-/** The workspace/* methods: symbol search through the editor answers, and re-checks when files or folders change. */
+/**
+ * The workspace/* methods: symbol search through the editor answers over the open documents' checks
+ * and the workspace index, and re-checks and re-indexing when files or folders change.
+ */
 final class JonquilWorkspaceService implements WorkspaceService {
   /** At most this many symbols per search, so a one-letter query stays cheap to send. */
   static final int MAX_SYMBOLS = 200;
@@ -32,18 +38,25 @@ final class JonquilWorkspaceService implements WorkspaceService {
   public CompletableFuture<Either<List<? extends SymbolInformation>, List<? extends WorkspaceSymbol>>> symbol(
       WorkspaceSymbolParams params) {
     String query = params.getQuery() == null ? "" : params.getQuery();
-    return server.answer("workspace/symbol", null, (snapshot, none) -> {
+    return server.answer("workspace/symbol", null, server.index::fresh, (snapshot, none) -> {
+      // The checks of the open documents answer for the files they read; the workspace index for all others.
       Set<EditorAnswers.FileSymbol> found = new LinkedHashSet<>();
+      Set<Path> checked = new HashSet<>();
       for (Result r : snapshot.results()) {
         found.addAll(server.answers.workspaceSymbols(r, query));
+        checked.addAll(r.files().keySet());
       }
+      WorkspaceIndex.Snapshot index = server.index.latest();
+      List<FileIndex> unchecked = index.files().stream().filter(f -> !checked.contains(f.file())).toList();
+      found.addAll(server.answers.workspaceSymbols(unchecked, query));
       List<WorkspaceSymbol> out = new ArrayList<>();
       Convert convert = server.convert();
       for (EditorAnswers.FileSymbol s : found) {
         if (out.size() == MAX_SYMBOLS) {
           break;
         }
-        out.add(convert.workspaceSymbol(s, file -> snapshot.resultFor(file).map(r -> r.files().get(file)).orElse(null)));
+        out.add(convert.workspaceSymbol(s, file -> snapshot.resultFor(file).map(r -> r.files().get(file))
+            .orElseGet(() -> index.source(file))));
       }
       return Either.forRight(out);
     });
@@ -56,7 +69,14 @@ final class JonquilWorkspaceService implements WorkspaceService {
 
   @Override
   public void didChangeWatchedFiles(DidChangeWatchedFilesParams params) {
-    server.onNotification("workspace/didChangeWatchedFiles", server::scheduleCheck);
+    server.onNotification("workspace/didChangeWatchedFiles", () -> {
+      List<Path> files = new ArrayList<>();
+      for (FileEvent e : params.getChanges() == null ? List.<FileEvent>of() : params.getChanges()) {
+        Documents.pathOf(e.getUri()).ifPresent(files::add);
+      }
+      server.index.filesChanged(files);
+      server.scheduleCheck();
+    });
   }
 
   @Override

@@ -91,4 +91,14 @@ class Delegating implements EditorAnswers {
   public List<CodeActionInfo> codeActions(Result result, Path file, TextRange range) {
     return to.codeActions(result, file, range);
   }
+
+  @Override
+  public Optional<jonquil.ide.FileIndex> index(Result result, Path file) {
+    return to.index(result, file);
+  }
+
+  @Override
+  public List<FileSymbol> workspaceSymbols(java.util.Collection<jonquil.ide.FileIndex> indexed, String query) {
+    return to.workspaceSymbols(indexed, query);
+  }
 }

@@ -24,6 +24,7 @@ import org.eclipse.lsp4j.InitializeResult;
 import org.eclipse.lsp4j.InitializedParams;
 import org.eclipse.lsp4j.MessageActionItem;
 import org.eclipse.lsp4j.MessageParams;
+import org.eclipse.lsp4j.ProgressParams;
 import org.eclipse.lsp4j.PublishDiagnosticsParams;
 import org.eclipse.lsp4j.RegistrationParams;
 import org.eclipse.lsp4j.ShowMessageRequestParams;
@@ -31,6 +32,7 @@ import org.eclipse.lsp4j.TextDocumentContentChangeEvent;
 import org.eclipse.lsp4j.TextDocumentIdentifier;
 import org.eclipse.lsp4j.TextDocumentItem;
 import org.eclipse.lsp4j.VersionedTextDocumentIdentifier;
+import org.eclipse.lsp4j.WorkDoneProgressCreateParams;
 import org.eclipse.lsp4j.jsonrpc.Launcher;
 import org.eclipse.lsp4j.jsonrpc.messages.ResponseMessage;
 import org.eclipse.lsp4j.launch.LSPLauncher;
@@ -46,11 +48,43 @@ final class LspHarness implements AutoCloseable {
     final List<PublishDiagnosticsParams> published = new ArrayList<>();
     final List<MessageParams> logs = new ArrayList<>();
     final List<RegistrationParams> registrations = new ArrayList<>();
+    /** The tokens the server asked to create, and every $/progress it sent, in order. */
+    final List<String> progressTokens = new ArrayList<>();
+    final List<ProgressParams> progress = new ArrayList<>();
 
     @Override
     public synchronized CompletableFuture<Void> registerCapability(RegistrationParams params) {
       registrations.add(params);
       return CompletableFuture.completedFuture(null);
+    }
+
+    @Override
+    public synchronized CompletableFuture<Void> createProgress(WorkDoneProgressCreateParams params) {
+      progressTokens.add(Convert.progressToken(params.getToken()));
+      return CompletableFuture.completedFuture(null);
+    }
+
+    @Override
+    public synchronized void notifyProgress(ProgressParams params) {
+      progress.add(params);
+      notifyAll();
+    }
+
+    /** Waits until a $/progress matches {@code test}; fails the test after {@link #WAIT}. */
+    synchronized ProgressParams awaitProgress(Predicate<ProgressParams> test) throws InterruptedException {
+      long deadline = System.nanoTime() + WAIT.toNanos();
+      while (true) {
+        for (ProgressParams p : progress) {
+          if (test.test(p)) {
+            return p;
+          }
+        }
+        long left = deadline - System.nanoTime();
+        if (left <= 0) {
+          throw new AssertionError("no matching $/progress; got " + progress);
+        }
+        wait(Math.max(1, left / 1_000_000));
+      }
     }
 
     /** Drops what was recorded so far (long soak runs would otherwise measure the client's memory). */

@@ -1,0 +1,720 @@
+package jonquil.lsp;
+
+import java.io.IOException;
+import java.nio.file.FileVisitOption;
+import java.nio.file.FileVisitResult;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.SimpleFileVisitor;
+import java.nio.file.attribute.BasicFileAttributes;
+import java.nio.file.attribute.FileTime;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.Collection;
+import java.util.EnumSet;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+import java.util.TreeMap;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.ConcurrentLinkedQueue;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.Executors;
+import java.util.concurrent.RejectedExecutionException;
+import java.util.concurrent.ScheduledExecutorService;
+import java.util.concurrent.TimeUnit;
+import java.util.concurrent.TimeoutException;
+import java.util.concurrent.atomic.AtomicBoolean;
+import java.util.concurrent.atomic.AtomicLong;
+import java.util.function.BiConsumer;
+import java.util.function.Supplier;
+import jonquil.CheckOptions;
+import jonquil.Checker;
+import jonquil.Result;
+import jonquil.Workspace;
+import jonquil.ide.FileIndex;
+import jonquil.source.SourceFile;
+import org.eclipse.lsp4j.MessageType;
+import org.eclipse.lsp4j.services.LanguageClient;
+
+/**
+ * The workspace index (shared checklist, trap 8): every spec file under the workspace folders,
+ * read from disk with the open buffers laid over it, kept as the compiler's {@link FileIndex}
+ * entries, so that workspace/symbol, references and rename reach files that no open document
+ * uses. Each file is checked names-only under its innermost folder, as the check cycle roots it.
+ * All work runs on one worker thread of its own, never on LSP4J's reader thread; answers read
+ * the immutable {@link Snapshot}.
+ */
+final class WorkspaceIndex implements AutoCloseable {
+  /** Spec files indexed across all folders; a workspace with more is not a spec project, and the rest is left out. */
+  static final int MAX_FILES = 5_000;
+  /** Larger files are left out (precedent: editors cap at about 1 MiB; specs are hand-written and far smaller). */
+  static final long MAX_FILE_BYTES = 1L << 20;
+  /** The index keeps every file's text (positions are converted from it), so the first pass caps the total too. */
+  static final long MAX_TOTAL_BYTES = 64L << 20;
+  /** Files checked together, so that a library they share is parsed once; progress is reported per batch. */
+  static final int BATCH = 32;
+  /** Quiet time after an edit of an open buffer before the index reads the buffers again. */
+  static final Duration BUFFER_DEBOUNCE = Duration.ofMillis(300);
+  static final String PROGRESS_TITLE = "Indexing Jonquil specs";
+
+  /** The index as answers read it: each folder's entries by file, and the buffer versions the entries read. */
+  record Snapshot(Map<Path, Map<Path, FileIndex>> folders, Map<Path, Integer> versions) {
+    static final Snapshot EMPTY = new Snapshot(Map.of(), Map.of());
+
+    Snapshot {
+      Map<Path, Map<Path, FileIndex>> copy = new LinkedHashMap<>();
+      folders.forEach((folder, files) -> copy.put(folder, Map.copyOf(files)));
+      folders = java.util.Collections.unmodifiableMap(copy);
+      versions = Map.copyOf(versions);
+    }
+
+    List<FileIndex> files() {
+      List<FileIndex> out = new ArrayList<>();
+      folders.values().forEach(m -> out.addAll(m.values()));
+      return out;
+    }
+
+    /** The text an entry's ranges refer to, or null when the file is not indexed. */
+    SourceFile source(Path file) {
+      for (Map<Path, FileIndex> m : folders.values()) {
+        FileIndex f = m.get(file);
+        if (f != null) {
+          return f.source();
+        }
+      }
+      return null;
+    }
+
+    /** The version of the open buffer an entry was read from; null when it was read from disk. */
+    Integer version(Path file) {
+      return versions.get(file);
+    }
+  }
+
+  /** What says a file on disk changed since it was indexed. */
+  private record Stamp(FileTime modified, long size, Object key) {
+    static Stamp of(BasicFileAttributes a) {
+      return new Stamp(a.lastModifiedTime(), a.size(), a.fileKey());
+    }
+  }
+
+  /** What a walk may still take, and what it left out. */
+  private static final class Budget {
+    int files;
+    long bytes;
+    int tooLarge;
+    boolean capped;
+  }
+
+  private final EditorAnswers answers;
+  private final Documents documents;
+  private final Supplier<LanguageClient> client;
+  private final BiConsumer<MessageType, String> log;
+  private final ScheduledExecutorService worker;
+  private final AtomicLong generation = new AtomicLong();
+  private final AtomicLong tokens = new AtomicLong();
+  private final ConcurrentLinkedQueue<Path> diskChanges = new ConcurrentLinkedQueue<>();
+  private final AtomicBoolean bufferSyncQueued = new AtomicBoolean();
+  private final Object syncLock = new Object();
+  /** A sync that is queued and has not started yet, which later requests join; guarded by syncLock. */
+  private CompletableFuture<Snapshot> queuedSync;
+  private volatile boolean started;
+  private volatile boolean progress;
+  private volatile boolean watched;
+  private volatile List<Path> wanted = List.of();
+  private volatile Snapshot latest = Snapshot.EMPTY;
+  private volatile String progressToken;
+  private volatile boolean cancelRequested;
+
+  // Touched by the worker thread only.
+  private Map<Path, Map<Path, FileIndex>> byFolder = new LinkedHashMap<>();
+  private List<Path> indexedFolders = List.of();
+  private final Map<Path, Stamp> stamps = new HashMap<>();
+  /** The open buffers the entries read (text and version), so that a changed or closed buffer is read again. */
+  private final Map<Path, Documents.Doc> overlaid = new HashMap<>();
+  /** Files a cancelled pass did not reach: left out until the folders change. */
+  private final Set<Path> notReached = new HashSet<>();
+  private boolean fullLogged;
+
+  WorkspaceIndex(EditorAnswers answers, Documents documents, Supplier<LanguageClient> client,
+      BiConsumer<MessageType, String> log) {
+    this.answers = answers;
+    this.documents = documents;
+    this.client = client;
+    this.log = log;
+    ThreadGroup group = new ThreadGroup("jonquil-index");
+    this.worker = Executors.newSingleThreadScheduledExecutor(r -> {
+      Thread t = new Thread(group, r, "jonquil-index", CheckScheduler.STACK_BYTES);
+      t.setDaemon(true);
+      return t;
+    });
+  }
+
+  // ---- called from LSP4J's reader thread: record and queue, never wait ----
+
+  /**
+   * Starts the first pass over {@code folders}. {@code progress}: the client takes work-done
+   * progress; {@code watched}: the client reports file changes, so requests need not re-scan.
+   */
+  void start(List<Path> folders, boolean progress, boolean watched) {
+    this.progress = progress;
+    this.watched = watched;
+    this.started = true;
+    setFolders(folders);
+  }
+
+  /** A new set of workspace folders: added folders are indexed, removed ones dropped, the others kept. */
+  void setFolders(List<Path> folders) {
+    wanted = List.copyOf(folders);
+    if (!started) {
+      return;
+    }
+    long g = generation.incrementAndGet();
+    submit(() -> pass(g));
+  }
+
+  /** The client will not report file changes after all (it refused the registration): requests re-scan. */
+  void notWatched() {
+    watched = false;
+  }
+
+  /** Files the client reports changed, created or deleted on disk. */
+  void filesChanged(Collection<Path> files) {
+    diskChanges.addAll(files);
+    buffersChanged();
+  }
+
+  /** Some open buffer was opened, edited or closed: read the buffers again after a quiet time. */
+  void buffersChanged() {
+    if (started && bufferSyncQueued.compareAndSet(false, true)) {
+      try {
+        worker.schedule(guarded(() -> {
+          bufferSyncQueued.set(false);
+          sync(false);
+        }), BUFFER_DEBOUNCE.toMillis(), TimeUnit.MILLISECONDS);
+      } catch (RejectedExecutionException e) {
+        // closed: nothing left to keep fresh
+      }
+    }
+  }
+
+  /** window/workDoneProgress/cancel: stops the pass that reports under this token. */
+  void cancelProgress(String token) {
+    if (token != null && token.equals(progressToken)) {
+      cancelRequested = true;
+    }
+  }
+
+  Snapshot latest() {
+    return latest;
+  }
+
+  /**
+   * The index once it has read the current buffers, the reported file changes and (for a
+   * client that does not watch files) every file whose size or modification time changed; after
+   * {@code JonquilLanguageServer.FRESH_WAIT} (e.g. while a large first pass runs), the latest
+   * one whatever it holds. Never blocks the caller.
+   */
+  CompletableFuture<Snapshot> fresh() {
+    if (!started) {
+      return CompletableFuture.completedFuture(latest);
+    }
+    CompletableFuture<Snapshot> sync;
+    synchronized (syncLock) {
+      if (queuedSync == null) {
+        CompletableFuture<Snapshot> mine = new CompletableFuture<>();
+        queuedSync = mine;
+        boolean scan = !watched;
+        if (!submit(() -> {
+          synchronized (syncLock) {
+            if (queuedSync == mine) {
+              queuedSync = null;
+            }
+          }
+          try {
+            sync(scan);
+          } finally {
+            mine.complete(latest);
+          }
+        })) {
+          queuedSync = null;
+          mine.complete(latest);
+        }
+      }
+      sync = queuedSync != null ? queuedSync : CompletableFuture.completedFuture(latest);
+    }
+    return sync.copy().completeOnTimeout(null, JonquilLanguageServer.FRESH_WAIT.toMillis(), TimeUnit.MILLISECONDS)
+        .thenApply(s -> s != null ? s : latest);
+  }
+
+  @Override
+  public void close() {
+    worker.shutdownNow();
+  }
+
+  // ---- the worker ----
+
+  private boolean submit(Runnable task) {
+    try {
+      worker.execute(guarded(task));
+      return true;
+    } catch (RejectedExecutionException e) {
+      return false;
+    }
+  }
+
+  private Runnable guarded(Runnable task) {
+    return () -> {
+      try {
+        task.run();
+      } catch (Throwable t) {
+        log.accept(MessageType.Error, "the workspace index failed (" + JonquilLanguageServer.describe(t)
+            + "); workspace answers use what was indexed before");
+        t.printStackTrace(System.err);
+      }
+    };
+  }
+
+  /** A full pass for the folders of generation {@code g}: folders kept as they were are not read again. */
+  private void pass(long g) {
+    if (g != generation.get()) {
+      return; // a newer set of folders is queued behind this one
+    }
+    List<Path> folders = wanted;
+    Map<Path, Map<Path, FileIndex>> next = new LinkedHashMap<>();
+    List<Path> added = new ArrayList<>();
+    Budget budget = new Budget();
+    for (Path f : folders) {
+      Map<Path, FileIndex> kept = byFolder.get(f);
+      if (kept != null && nested(f, folders).equals(nested(f, indexedFolders))) {
+        next.put(f, kept);
+        budget.files += kept.size();
+        kept.values().forEach(e -> budget.bytes += e.source().text().length());
+      } else {
+        next.put(f, new LinkedHashMap<>());
+        added.add(f);
+      }
+    }
+    byFolder = next;
+    indexedFolders = folders;
+    stamps.keySet().removeIf(p -> !inSomeFolder(p));
+    overlaid.keySet().removeIf(p -> !inSomeFolder(p));
+    notReached.removeIf(p -> added.contains(owner(p)) || owner(p) == null);
+    publish();
+
+    Map<Path, List<Path>> found = new LinkedHashMap<>();
+    int total = 0;
+    for (Path f : added) {
+      List<Path> files = new ArrayList<>(walk(f, folders, budget).keySet());
+      found.put(f, files);
+      total += files.size();
+    }
+    String token = total > 0 ? beginProgress(total) : null;
+    int done = 0;
+    boolean cancelled = false;
+    boolean superseded = false;
+    try {
+      for (Map.Entry<Path, List<Path>> e : found.entrySet()) {
+        List<Path> files = e.getValue();
+        for (int i = 0; i < files.size() && !superseded; i += BATCH) {
+          if (g != generation.get()) {
+            superseded = true; // the next pass starts from what is indexed now
+            break;
+          }
+          List<Path> batch = files.subList(i, Math.min(files.size(), i + BATCH));
+          int n = cancelled ? 0 : index(e.getKey(), batch, token);
+          done += n;
+          cancelled |= n < batch.size() || cancelled(token);
+          if (cancelled) {
+            notReached.addAll(batch.subList(n, batch.size()));
+            continue;
+          }
+          publish();
+          reportProgress(token, done, total);
+        }
+      }
+    } finally {
+      publish();
+      endProgress(token, superseded ? "the workspace folders changed; indexing them again"
+          : cancelled ? "stopped after " + done + " of " + total + " files" : "indexed " + done + " files");
+    }
+    if (!superseded) {
+      logPass(done, total, folders.size(), budget, cancelled);
+    }
+  }
+
+  /**
+   * Reads what changed since the last sync: the reported disk changes, the open buffers, and
+   * with {@code scan} every file whose stamp changed; re-indexes them and the files that read them.
+   */
+  private void sync(boolean scan) {
+    Set<Path> changed = new LinkedHashSet<>();
+    for (Path p; (p = diskChanges.poll()) != null; ) {
+      changed.add(p);
+    }
+    Map<Path, Documents.Doc> open = documents.snapshot();
+    open.forEach((p, doc) -> {
+      Documents.Doc seen = overlaid.get(p);
+      if (owner(p) != null && (seen == null || seen.version() != doc.version() || !seen.text().equals(doc.text()))) {
+        changed.add(p);
+      }
+    });
+    for (Path p : overlaid.keySet()) {
+      if (!open.containsKey(p)) {
+        changed.add(p); // closed: the disk has the text now
+      }
+    }
+    if (scan) {
+      changed.addAll(changedOnDisk(open.keySet()));
+    }
+    if (!changed.isEmpty()) {
+      refresh(changed);
+      publish();
+    }
+  }
+
+  /** Files created, changed or deleted on disk since they were indexed (the cheap check: size, time, file key). */
+  private Set<Path> changedOnDisk(Set<Path> open) {
+    Set<Path> out = new LinkedHashSet<>();
+    Budget budget = new Budget();
+    for (Path folder : indexedFolders) {
+      Map<Path, Stamp> now = walk(folder, indexedFolders, budget);
+      now.forEach((p, stamp) -> {
+        if (!notReached.contains(p) && !stamp.equals(stamps.get(p))) {
+          out.add(p);
+        }
+      });
+      for (Path p : byFolder.getOrDefault(folder, Map.of()).keySet()) {
+        if (!now.containsKey(p) && !open.contains(p)) {
+          out.add(p);
+        }
+      }
+    }
+    return out;
+  }
+
+  /**
+   * Re-indexes the changed files, then, for those whose names, 'use' lines or read files changed
+   * (or that came or went), every indexed file that reads or uses one of them, however
+   * indirectly. Editing the body of a library that many files use re-reads the library alone.
+   */
+  private void refresh(Set<Path> changed) {
+    Map<Path, Signature> before = new HashMap<>();
+    changed.forEach(p -> before.put(p, signature(p)));
+    reindex(changed);
+    Set<Path> moved = new LinkedHashSet<>();
+    for (Path p : changed) {
+      Signature now = signature(p);
+      if (now == null || !now.equals(before.get(p))) {
+        moved.add(p);
+      }
+    }
+    Set<Path> affected = new LinkedHashSet<>(moved);
+    for (boolean grew = true; grew; ) {
+      grew = false;
+      for (Map<Path, FileIndex> files : byFolder.values()) {
+        for (FileIndex f : files.values()) {
+          if (!affected.contains(f.file()) && (anyIn(f.reads(), affected) || anyIn(f.uses(), affected))) {
+            affected.add(f.file());
+            grew = true;
+          }
+        }
+      }
+    }
+    affected.removeAll(changed);
+    if (!affected.isEmpty()) {
+      reindex(affected);
+    }
+  }
+
+  /** What other files' entries depend on: the names a file declares, the files it uses and the files it reads. */
+  private record Signature(Set<String> declared, List<Path> uses, List<Path> reads) {}
+
+  private Signature signature(Path file) {
+    for (Map<Path, FileIndex> m : byFolder.values()) {
+      FileIndex f = m.get(file);
+      if (f != null) {
+        Set<String> declared = new HashSet<>();
+        f.names().stream().filter(FileIndex.NameUse::declaration).forEach(n -> declared.add(n.name()));
+        return new Signature(declared, f.uses(), f.reads());
+      }
+    }
+    return null;
+  }
+
+  /** Indexes the files again, or forgets those that are gone, unreadable, too large or outside every folder. */
+  private void reindex(Set<Path> files) {
+    Set<Path> open = documents.snapshot().keySet();
+    int count = byFolder.values().stream().mapToInt(Map::size).sum();
+    Map<Path, List<Path>> toIndex = new LinkedHashMap<>();
+    for (Path p : files) {
+      Path folder = owner(p);
+      boolean readable = open.contains(p) || (Files.isRegularFile(p) && size(p) <= MAX_FILE_BYTES);
+      if (folder == null || !eligible(folder, p) || !readable) {
+        forget(p);
+        continue;
+      }
+      if (!indexed(p)) {
+        if (count >= MAX_FILES) {
+          logFull();
+          continue;
+        }
+        count++;
+      }
+      toIndex.computeIfAbsent(folder, k -> new ArrayList<>()).add(p);
+    }
+    toIndex.forEach((folder, list) -> {
+      list.sort(null);
+      for (int i = 0; i < list.size(); i += BATCH) {
+        index(folder, list.subList(i, Math.min(list.size(), i + BATCH)), null);
+      }
+    });
+  }
+
+  /**
+   * Checks the files names-only under their folder, with the open buffers overlaid, and stores
+   * their entries; returns how many it stored, fewer when the progress under {@code token} was
+   * cancelled.
+   */
+  private int index(Path folder, List<Path> files, String token) {
+    Map<Path, Documents.Doc> open = documents.snapshot();
+    Map<Path, String> buffers = new HashMap<>();
+    open.forEach((p, doc) -> buffers.put(p, doc.text()));
+    Map<Path, Stamp> before = new HashMap<>();
+    for (Path f : files) {
+      stamp(f).ifPresent(s -> before.put(f, s)); // taken before reading, so a write during the check shows next time
+    }
+    Result result = Checker.check(Workspace.withOverlay(folder, buffers), files, CheckOptions.NAMES);
+    Map<Path, FileIndex> into = byFolder.get(folder);
+    int stored = 0;
+    for (Path f : files) {
+      Optional<FileIndex> entry = answers.index(result, f);
+      if (entry.isPresent()) {
+        into.put(f, entry.get());
+      } else {
+        into.remove(f);
+      }
+      if (before.containsKey(f)) {
+        stamps.put(f, before.get(f));
+      } else {
+        stamps.remove(f);
+      }
+      if (open.containsKey(f)) {
+        overlaid.put(f, open.get(f));
+      } else {
+        overlaid.remove(f);
+      }
+      notReached.remove(f);
+      stored++;
+      if (cancelled(token)) {
+        break; // the file in hand is kept; the rest waits for the next change of folders
+      }
+    }
+    return stored;
+  }
+
+  private void forget(Path file) {
+    byFolder.values().forEach(m -> m.remove(file));
+    stamps.remove(file);
+    overlaid.remove(file);
+  }
+
+  private void publish() {
+    Map<Path, Integer> versions = new HashMap<>();
+    overlaid.forEach((p, doc) -> versions.put(p, doc.version()));
+    latest = new Snapshot(byFolder, versions);
+  }
+
+  /** Indexed, or at least looked at (a file that could not be read has a stamp and no entry). */
+  private boolean indexed(Path file) {
+    return inSomeFolder(file) || stamps.containsKey(file);
+  }
+
+  private boolean inSomeFolder(Path file) {
+    return byFolder.values().stream().anyMatch(m -> m.containsKey(file));
+  }
+
+  /** The innermost indexed folder holding the file, as the check cycle roots it; null outside every folder. */
+  private Path owner(Path file) {
+    Path best = null;
+    for (Path folder : indexedFolders) {
+      if (file.startsWith(folder) && (best == null || folder.getNameCount() > best.getNameCount())) {
+        best = folder;
+      }
+    }
+    return best;
+  }
+
+  /** The folders strictly inside {@code folder}: their files are indexed under them, not under it. */
+  private static Set<Path> nested(Path folder, List<Path> all) {
+    Set<Path> out = new HashSet<>();
+    for (Path f : all) {
+      if (!f.equals(folder) && f.startsWith(folder)) {
+        out.add(f);
+      }
+    }
+    return out;
+  }
+
+  /** A spec file below {@code folder} in no hidden directory and no build output. */
+  private static boolean eligible(Path folder, Path file) {
+    if (!file.getFileName().toString().endsWith(".jonq")) {
+      return false;
+    }
+    Path relative = folder.relativize(file);
+    for (int i = 0; i < relative.getNameCount() - 1; i++) {
+      if (skippedDirectory(relative.getName(i).toString())) {
+        return false;
+      }
+    }
+    return true;
+  }
+
+  /** Hidden directories (.git, editor state) and Maven's build output hold no specs of the project. */
+  private static boolean skippedDirectory(String name) {
+    return name.startsWith(".") || name.equals("target");
+  }
+
+  /** The spec files below {@code folder} with their stamps, by path, within the budget; nested folders are theirs. */
+  private Map<Path, Stamp> walk(Path folder, List<Path> folders, Budget budget) {
+    Map<Path, Stamp> out = new TreeMap<>();
+    try {
+      Files.walkFileTree(folder, EnumSet.noneOf(FileVisitOption.class), Integer.MAX_VALUE, new SimpleFileVisitor<>() {
+        @Override
+        public FileVisitResult preVisitDirectory(Path dir, BasicFileAttributes attrs) {
+          if (!dir.equals(folder) && (skippedDirectory(dir.getFileName().toString()) || folders.contains(dir))) {
+            return FileVisitResult.SKIP_SUBTREE;
+          }
+          return FileVisitResult.CONTINUE;
+        }
+
+        @Override
+        public FileVisitResult visitFile(Path file, BasicFileAttributes attrs) {
+          if (!attrs.isRegularFile() || !file.getFileName().toString().endsWith(".jonq")) {
+            return FileVisitResult.CONTINUE;
+          }
+          if (attrs.size() > MAX_FILE_BYTES) {
+            budget.tooLarge++;
+            return FileVisitResult.CONTINUE;
+          }
+          if (budget.files >= MAX_FILES || budget.bytes + attrs.size() > MAX_TOTAL_BYTES) {
+            budget.capped = true;
+            return FileVisitResult.TERMINATE;
+          }
+          budget.files++;
+          budget.bytes += attrs.size();
+          out.put(file, Stamp.of(attrs));
+          return FileVisitResult.CONTINUE;
+        }
+
+        @Override
+        public FileVisitResult visitFileFailed(Path file, IOException e) {
+          return FileVisitResult.CONTINUE; // unreadable or gone: not indexed
+        }
+      });
+    } catch (IOException | RuntimeException e) {
+      log.accept(MessageType.Warning, "could not list the spec files under '" + folder + "' ("
+          + JonquilLanguageServer.describe(e) + ")");
+    }
+    return out;
+  }
+
+  private static Optional<Stamp> stamp(Path file) {
+    try {
+      return Optional.of(Stamp.of(Files.readAttributes(file, BasicFileAttributes.class)));
+    } catch (IOException | RuntimeException e) {
+      return Optional.empty();
+    }
+  }
+
+  private static long size(Path file) {
+    return stamp(file).map(Stamp::size).orElse(Long.MAX_VALUE);
+  }
+
+  private static boolean anyIn(List<Path> paths, Set<Path> set) {
+    for (Path p : paths) {
+      if (set.contains(p)) {
+        return true;
+      }
+    }
+    return false;
+  }
+
+  // ---- progress: only for a client that takes it, and only under a token it accepted ----
+
+  private String beginProgress(int total) {
+    LanguageClient c = client.get();
+    if (!progress || c == null) {
+      return null;
+    }
+    String token = "jonquil-index-" + tokens.incrementAndGet();
+    cancelRequested = false;
+    progressToken = token; // set before asking, so a cancel that overtakes the reply still counts
+    try {
+      // Waiting here is safe: this is the index worker, and the reader thread delivers the reply.
+      c.createProgress(Convert.progressCreate(token)).get(JonquilLanguageServer.FRESH_WAIT.toMillis(),
+          TimeUnit.MILLISECONDS);
+    } catch (InterruptedException e) {
+      Thread.currentThread().interrupt();
+      progressToken = null;
+      return null;
+    } catch (ExecutionException | TimeoutException | RuntimeException e) {
+      progressToken = null;
+      log.accept(MessageType.Log, "the editor did not accept a progress token (" + JonquilLanguageServer.describe(e)
+          + "); indexing without progress");
+      return null;
+    }
+    c.notifyProgress(Convert.progressBegin(token, PROGRESS_TITLE, total + " spec files"));
+    return token;
+  }
+
+  private boolean cancelled(String token) {
+    return token != null && cancelRequested && token.equals(progressToken);
+  }
+
+  private void reportProgress(String token, int done, int total) {
+    LanguageClient c = client.get();
+    if (token != null && c != null) {
+      c.notifyProgress(Convert.progressReport(token, done + "/" + total + " files", done * 100 / Math.max(1, total)));
+    }
+  }
+
+  private void endProgress(String token, String message) {
+    LanguageClient c = client.get();
+    if (token != null && c != null) {
+      c.notifyProgress(Convert.progressEnd(token, message));
+    }
+    if (token != null && token.equals(progressToken)) {
+      progressToken = null;
+    }
+  }
+
+  private void logPass(int done, int total, int folders, Budget budget, boolean cancelled) {
+    StringBuilder m = new StringBuilder("workspace index: " + done + " of " + total + " new spec files indexed under "
+        + folders + " folder(s)");
+    if (cancelled) {
+      m.append("; stopped by the editor, the rest is indexed when the folders change");
+    }
+    if (budget.capped) {
+      m.append("; stopped at the cap of " + MAX_FILES + " files or " + (MAX_TOTAL_BYTES >> 20) + " MiB of text");
+    }
+    if (budget.tooLarge > 0) {
+      m.append("; " + budget.tooLarge + " file(s) over " + (MAX_FILE_BYTES >> 20) + " MiB left out");
+    }
+    log.accept(budget.capped || budget.tooLarge > 0 ? MessageType.Warning : MessageType.Log, m.toString());
+  }
+
+  private void logFull() {
+    if (!fullLogged) {
+      fullLogged = true;
+      log.accept(MessageType.Warning, "workspace index: " + MAX_FILES + " files reached; new files are left out");
+    }
+  }
+
+}
