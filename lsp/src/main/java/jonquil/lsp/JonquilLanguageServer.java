@@ -323,9 +323,13 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     return folders.paths();
   }
 
+  /**
+   * An open buffer changed (or a file it uses): check again. The workspace index reads the
+   * buffers only when a workspace request needs it, so typing never re-parses a large buffer
+   * a second time behind the check's back.
+   */
   void scheduleCheck() {
     scheduler.request();
-    index.buffersChanged();
   }
 
   @Override

@@ -184,14 +184,17 @@ final class WorkspaceIndex implements AutoCloseable {
     watched = false;
   }
 
-  /** Files the client reports changed, created or deleted on disk. */
+  /**
+   * Files the client reports changed, created or deleted on disk: read after a quiet time,
+   * with the open buffers. (Edits of open buffers alone wait for the next request that needs
+   * the index: {@link #fresh()} reads them.)
+   */
   void filesChanged(Collection<Path> files) {
     diskChanges.addAll(files);
-    buffersChanged();
+    syncSoon();
   }
 
-  /** Some open buffer was opened, edited or closed: read the buffers again after a quiet time. */
-  void buffersChanged() {
+  private void syncSoon() {
     if (started && bufferSyncQueued.compareAndSet(false, true)) {
       try {
         worker.schedule(guarded(() -> {
