@@ -70,11 +70,20 @@ public enum ElementKind {
   }
 
   public Optional<ParamSpec> param(String name) {
-    return params().stream().filter(p -> p.name().equals(name)).findFirst();
+    // A plain loop: this runs for every property of every declaration.
+    for (ParamSpec p : params()) {
+      if (p.name().equals(name)) {
+        return Optional.of(p);
+      }
+    }
+    return Optional.empty();
   }
 
+  private static final java.util.Map<String, ElementKind> BY_WORD =
+      Arrays.stream(values()).collect(java.util.stream.Collectors.toUnmodifiableMap(k -> k.word, k -> k));
+
   public static Optional<ElementKind> byWord(String word) {
-    return Arrays.stream(values()).filter(k -> k.word.equals(word)).findFirst();
+    return Optional.ofNullable(word == null ? null : BY_WORD.get(word));
   }
 
   public static List<String> words() {
