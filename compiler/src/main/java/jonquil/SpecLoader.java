@@ -185,7 +185,7 @@ final class SpecLoader {
     } catch (IOException | RuntimeException e) {
       return null;
     }
-    ParseResult result = SpecParser.parse(new SourceFile(file, text));
+    ParseResult result = SpecParser.parse(new SourceFile(file, text), workspace.memo());
     parsed.put(file, result);
     return result;
   }

@@ -5,12 +5,14 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Map;
+import jonquil.syntax.ParseMemo;
 
 /**
  * Where a check reads its files from: a project root (no `use` may leave it) and a
- * reader that sees the disk, optionally overlaid with unsaved editor buffers.
+ * reader that sees the disk, optionally overlaid with unsaved editor buffers; and, for an
+ * editor that checks again after every edit, the memory of earlier parses (null: none).
  */
-public record Workspace(Path root, Reader reader) {
+public record Workspace(Path root, Reader reader, ParseMemo memo) {
 
   /** Reads the text of one file; throws when it does not exist or cannot be read. */
   @FunctionalInterface
@@ -33,6 +35,15 @@ public record Workspace(Path root, Reader reader) {
 
   public Workspace {
     root = root.toAbsolutePath().normalize();
+  }
+
+  public Workspace(Path root, Reader reader) {
+    this(root, reader, null);
+  }
+
+  /** This workspace, parsing with {@code memo}'s memory of earlier parses (one memo per checking thread). */
+  public Workspace withMemo(ParseMemo memo) {
+    return new Workspace(root, reader, memo);
   }
 
   public static Workspace onDisk(Path root) {

@@ -29,19 +29,42 @@ final class AstBuilder {
   }
 
   SpecFile build(FileContext file) {
+    List<Object> statements = new ArrayList<>();
+    for (TopStatementContext top : file.topStatement()) {
+      statement(top).ifPresent(statements::add);
+    }
+    return assemble(statements);
+  }
+
+  /** One top-level statement: a UseDecl, TrainDecl, RequireDecl or Declaration; empty if recovery left too little. */
+  Optional<Object> statement(TopStatementContext top) {
+    if (top.useDecl() != null) {
+      return useDecl(top.useDecl()).map(u -> u);
+    } else if (top.trainDecl() != null) {
+      return Optional.of(train(top.trainDecl()));
+    } else if (top.requireDecl() != null) {
+      return Optional.of(require(top.requireDecl()));
+    } else if (top.declaration() != null) {
+      return declaration(top.declaration()).map(d -> d);
+    }
+    return Optional.empty();
+  }
+
+  /** The file from its statements in source order. */
+  SpecFile assemble(List<Object> statements) {
     List<UseDecl> uses = new ArrayList<>();
     List<Declaration> declarations = new ArrayList<>();
     List<TrainDecl> trains = new ArrayList<>();
     List<RequireDecl> requires = new ArrayList<>();
-    for (TopStatementContext top : file.topStatement()) {
-      if (top.useDecl() != null) {
-        useDecl(top.useDecl()).ifPresent(uses::add);
-      } else if (top.trainDecl() != null) {
-        trains.add(train(top.trainDecl()));
-      } else if (top.requireDecl() != null) {
-        requires.add(require(top.requireDecl()));
-      } else if (top.declaration() != null) {
-        declaration(top.declaration()).ifPresent(declarations::add);
+    for (Object statement : statements) {
+      if (statement instanceof UseDecl u) {
+        uses.add(u);
+      } else if (statement instanceof TrainDecl t) {
+        trains.add(t);
+      } else if (statement instanceof RequireDecl r) {
+        requires.add(r);
+      } else if (statement instanceof Declaration d) {
+        declarations.add(d);
       }
     }
     return new SpecFile(source.path(), uses, declarations, trains, requires, comments, List.of());

@@ -35,8 +35,26 @@ public final class SpecParser {
     return parse(source, true);
   }
 
+  /**
+   * As above, taking what {@code memo} kept from earlier parses: an unchanged file is not
+   * parsed again, and in a changed one that has no syntax error only the top-level statements
+   * whose text changed are. The result is the one {@link #parse(SourceFile)} gives
+   * ({@code IncrementalParseTest}).
+   */
+  public static ParseResult parse(SourceFile source, ParseMemo memo) {
+    if (memo == null) {
+      return parse(source);
+    }
+    ParseResult same = memo.unchanged(source);
+    return same != null ? same : parse(source, true, memo);
+  }
+
   /** As above; {@code twoStage} false always takes the full-LL parse, for the test that compares the two. */
   static ParseResult parse(SourceFile source, boolean twoStage) {
+    return parse(source, twoStage, null);
+  }
+
+  private static ParseResult parse(SourceFile source, boolean twoStage, ParseMemo memo) {
     SyntaxReporter reporter = new SyntaxReporter(source.path(), source.lines());
     if (source.text().length() > MAX_CHARS) {
       reporter.lexical(DiagnosticCode.FILE_TOO_LARGE, TextRange.EMPTY,
@@ -51,6 +69,12 @@ public final class SpecParser {
     List<TextRange> comments = new ArrayList<>();
     List<Token> repaired = scanTokens(source, lexed.getTokens(), offsets, reporter, comments);
 
+    if (memo != null && reporter.diagnostics().isEmpty()) {
+      ParseResult byStatement = byStatement(source, repaired, offsets, comments, memo);
+      if (byStatement != null) {
+        return byStatement;
+      }
+    }
     JonquilParser.FileContext tree = twoStage ? fastParse(repaired) : null;
     if (tree == null) {
       JonquilParser parser = new JonquilParser(new CommonTokenStream(new ListTokenSource(repaired)));
@@ -72,7 +96,78 @@ public final class SpecParser {
           int line = source.lines().line(d.range().start());
           return new TextRange(source.lines().lineStart(line), source.lines().lineContentEnd(line));
         }).toList();
-    return new ParseResult(source, ast.withDamage(damage), reporter.diagnostics());
+    ParseResult result = new ParseResult(source, ast.withDamage(damage), reporter.diagnostics());
+    if (memo != null) {
+      // Broken text keeps the statements of the last clean parse: once fixed, they are reused.
+      memo.remember(result, memo.statementsOf(source.path()), 0, 0);
+    }
+    return result;
+  }
+
+  /**
+   * The parse of lexically clean tokens statement by statement, each unchanged statement's
+   * tree taken from the memo; null at the first statement with a syntax error, for the
+   * whole-file parse to report. Top-level statements are exactly the token runs between
+   * separators outside braces (the grammar's 'file' rule), so parsing them one by one
+   * accepts the same files and gives the same trees.
+   */
+  private static ParseResult byStatement(SourceFile source, List<Token> tokens, OffsetMap offsets,
+      List<TextRange> comments, ParseMemo memo) {
+    java.util.Map<String, ParseMemo.Kept> before = memo.statementsOf(source.path());
+    java.util.Map<String, ParseMemo.Kept> now = new java.util.HashMap<>();
+    AstBuilder builder = new AstBuilder(source, offsets, comments);
+    List<Object> statements = new ArrayList<>();
+    int reused = 0;
+    int parsed = 0;
+    int depth = 0;
+    int first = -1;
+    for (int i = 0; i < tokens.size(); i++) {
+      Token t = tokens.get(i);
+      int type = t.getType();
+      boolean separator = depth == 0 && (type == JonquilLexer.NL || type == JonquilLexer.SEMI || type == Token.EOF);
+      if (!separator) {
+        if (first < 0) {
+          first = i;
+        }
+        depth += type == JonquilLexer.LBRACE ? 1 : type == JonquilLexer.RBRACE ? -1 : 0;
+        continue;
+      }
+      if (first < 0) {
+        continue;
+      }
+      List<Token> chunk = tokens.subList(first, i);
+      first = -1;
+      int start = offsets.toUtf16(chunk.get(0).getStartIndex());
+      int end = offsets.toUtf16(chunk.get(chunk.size() - 1).getStopIndex() + 1);
+      String text = source.text().substring(start, end);
+      ParseMemo.Kept kept = before.get(text);
+      Object statement;
+      if (kept != null) {
+        statement = AstShift.statement(kept.statement(), start - kept.start());
+        reused++;
+      } else {
+        JonquilParser parser = new JonquilParser(new CommonTokenStream(new ListTokenSource(new ArrayList<>(chunk))));
+        parser.removeErrorListeners();
+        parser.getInterpreter().setPredictionMode(PredictionMode.SLL);
+        parser.setErrorHandler(new BailErrorStrategy());
+        java.util.Optional<Object> built;
+        try {
+          built = builder.statement(parser.statementOnly().topStatement());
+        } catch (ParseCancellationException syntaxError) {
+          return null;
+        }
+        if (built.isEmpty()) {
+          return null;
+        }
+        statement = built.get();
+        parsed++;
+      }
+      now.put(text, new ParseMemo.Kept(start, statement));
+      statements.add(statement);
+    }
+    ParseResult result = new ParseResult(source, builder.assemble(statements), List.of());
+    memo.remember(result, now, reused, parsed);
+    return result;
   }
 
   /**

@@ -34,6 +34,8 @@ final class CheckCycle implements CheckScheduler.Task {
   private final Supplier<LanguageClient> client;
   /** True when the client pulls the diagnostics of open documents: they are then never pushed. */
   private final BooleanSupplier pull;
+  /** Earlier parses, so an edit re-parses only the statements it touched; used by the worker thread only. */
+  private final jonquil.syntax.ParseMemo memo = new jonquil.syntax.ParseMemo();
   /** What the editor shows now, per file; touched by the worker thread only. */
   private final Map<Path, Published> published = new HashMap<>();
 
@@ -62,13 +64,14 @@ final class CheckCycle implements CheckScheduler.Task {
     });
     List<Result> results = new ArrayList<>();
     for (Map.Entry<Path, List<Path>> root : byRoot.entrySet()) {
-      Optional<Result> result = Checker.check(Workspace.withOverlay(root.getKey(), buffers), root.getValue(),
-          jonquil.CheckOptions.EDITOR, superseded);
+      Optional<Result> result = Checker.check(Workspace.withOverlay(root.getKey(), buffers).withMemo(memo),
+          root.getValue(), jonquil.CheckOptions.EDITOR, superseded);
       if (result.isEmpty()) {
         return false; // a newer edit is waiting; its check publishes instead
       }
       results.add(result.get());
     }
+    memo.retainOnly(sources(results).keySet());
     snapshots.publish(new Snapshots.Snapshot(results, versions, now.generation()));
     publish(open, results);
     return true;

@@ -9,6 +9,8 @@ options { tokenVocab = JonquilLexer; }
 
 file          : sep* (topStatement (sep+ topStatement)*)? sep* EOF ;
 sep           : NL | SEMI ;
+// One top-level statement alone: an editor re-parses only the statements an edit touched.
+statementOnly : topStatement EOF ;
 
 topStatement  : useDecl
               | trainDecl
