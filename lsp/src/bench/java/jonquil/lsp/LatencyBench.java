@@ -146,21 +146,30 @@ public final class LatencyBench {
           publishedInBursts += big.client.arrivals.size() - before;
         }
       }
-      // (c) the checker alone on the same text, in this JVM: what the server adds is the rest.
+      // (c) the checker alone on the same one-character edits, in this JVM: from scratch (as the
+      // command line checks) and with the parse memo the server keeps (only the edited statement is parsed).
       List<Double> check = new ArrayList<>();
+      List<Double> memoCheck = new ArrayList<>();
+      jonquil.syntax.ParseMemo memo = new jonquil.syntax.ParseMemo();
       for (int i = 0; i < warmup + reps; i++) {
+        big.flip();
+        jonquil.Workspace w = jonquil.Workspace.withOverlay(big.dir, java.util.Map.of(big.file, big.text));
         long t0 = System.nanoTime();
-        jonquil.Checker.check(jonquil.Workspace.withOverlay(big.dir, java.util.Map.of(big.file, big.text)),
-            List.of(big.file), jonquil.CheckOptions.EDITOR);
+        jonquil.Checker.check(w, List.of(big.file), jonquil.CheckOptions.EDITOR);
+        long t1 = System.nanoTime();
+        jonquil.Checker.check(w.withMemo(memo), List.of(big.file), jonquil.CheckOptions.EDITOR);
+        long t2 = System.nanoTime();
         if (i >= warmup) {
-          check.add((System.nanoTime() - t0) / 1e6);
+          check.add((t1 - t0) / 1e6);
+          memoCheck.add((t2 - t1) / 1e6);
         }
       }
       List<Double> hover = big.hovers(warmup, reps);
       report("didChange after a pause -> publishDiagnostics", paused);
       report("last of 5 keystrokes 60 ms apart -> publish", burst);
       System.out.printf(Locale.ROOT, "  (%.1f publishes per burst of 5 edits)%n", publishedInBursts / (double) reps);
-      report("checker alone (Checker.check, same text)", check);
+      report("checker alone, from scratch (as the CLI)", check);
+      report("checker alone, with the server's parse memo", memoCheck);
       report("hover (" + big.lineCount() + " lines)", hover);
     }
     try (Session half = Session.open(spec(20, 36), debounceMs)) {
@@ -261,13 +270,19 @@ public final class LatencyBench {
       return (client.arrivals.get(version) - sent) / 1e6;
     }
 
-    private long send() {
-      version++;
+    /** The one-character edit, applied to the local copy of the text; returns the new digit. */
+    String flip() {
       String digit = lines[line].charAt(column) == '1' ? "2" : "1";
       StringBuilder edited = new StringBuilder(lines[line]);
       edited.setCharAt(column, digit.charAt(0));
       lines[line] = edited.toString();
       text = String.join("\n", lines);
+      return digit;
+    }
+
+    private long send() {
+      version++;
+      String digit = flip();
       client.publishOf(version);
       long sent = System.nanoTime();
       remote.getTextDocumentService().didChange(new DidChangeTextDocumentParams(
