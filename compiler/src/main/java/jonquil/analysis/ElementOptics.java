@@ -54,7 +54,7 @@ final class ElementOptics {
       case DEPOLARIZER: {
         double f = e.number("depolarization", "d").orElse(1);
         double t = e.number("transmission", "t").orElse(1);
-        return Response.balance(in, Map.of("out", in.with(in.light().depolarized(f).scaled(t))), List.of());
+        return Response.balance(in, Map.of("out", in.with(in.light().depolarized(f).scaled(t))), List.of()); // no Jones matrix
       }
       case SPLITTER:
         return splitter(e, in, plane);
@@ -70,20 +70,21 @@ final class ElementOptics {
       case FILTER: {
         OptionalDouble od = e.number("od", "od");
         double t = od.isPresent() ? Math.pow(10, -od.getAsDouble()) : e.number("transmission", "t").orElse(1);
-        return Response.balance(in, Map.of("out", in.with(in.light().scaled(t))), List.of());
+        return Response.balance(in, Map.of("out", in.with(in.light().scaled(t))), List.of()).withJones(scalar("out", t));
       }
       case RHOMB:
         return rhomb(e, in);
       case APERTURE: {
         double d = e.number("diameter", "diameter").orElse(Double.POSITIVE_INFINITY);
         if (in.mode().isEmpty()) {
-          return Response.balance(in, Map.of("out", in), List.of()); // no stated beam size: nothing to clip
+          return Response.balance(in, Map.of("out", in), List.of()).withJones(scalar("out", 1)); // no beam size
         }
         double f = Clipping.transmittedFraction(in.mode().get().radius(), d);
-        return Response.balance(in, Map.of("out", in.with(in.light().scaled(f))), List.of()).clipping(1 - f);
+        return Response.balance(in, Map.of("out", in.with(in.light().scaled(f))), List.of()).clipping(1 - f)
+            .withJones(scalar("out", f));
       }
       case PROBE:
-        return Response.balance(in, Map.of("out", in), List.of());
+        return Response.balance(in, Map.of("out", in), List.of()).withJones(scalar("out", 1));
       case DETECTOR:
       case DUMP:
         return Response.absorbedAll(in);
@@ -93,7 +94,12 @@ final class ElementOptics {
   }
 
   private static Response through(Beam in, String port, Jones j) {
-    return Response.balance(in, Map.of(port, in.with(in.light().transform(j))), List.of());
+    return Response.balance(in, Map.of(port, in.with(in.light().transform(j))), List.of()).withJones(Map.of(port, j));
+  }
+
+  /** √T times the identity: an element that only scales the power by T, whatever the polarization. */
+  private static Map<String, Jones> scalar(String port, double powerFactor) {
+    return Map.of(port, Jones.rotation(0).scaled(Math.sqrt(Math.max(0, powerFactor))));
   }
 
   /** Retardance at the beam's wavelength: from the birefringence when the material is known, else scaled as 1/λ. */
@@ -144,7 +150,8 @@ final class ElementOptics {
     double[] pair = plate(face.rs(), face.ts(), face.rs(), face.ts(), 1);
     Beam out = in.with(in.light().transform(j).scaled(pair[0]));
     Beam back = in.with(in.light().scaled(pair[1]), in.frame().reflect(0, 0));
-    return Response.balance(in, Map.of("out", out), List.of(new Ghost("face reflections", back, true)));
+    return Response.balance(in, Map.of("out", out), List.of(new Ghost("face reflections", back, true)))
+        .withJones(Map.of("out", j.scaled(Math.sqrt(pair[0]))));
   }
 
   private Response splitter(ResolvedElement e, Beam in, double plane) {
@@ -166,10 +173,12 @@ final class ElementOptics {
       ts = e.number("transmit_s", "t").orElse(1 - rs);
       tp = e.number("transmit_p", "t").orElse(1 - rp);
     }
-    Coherency through = in.light().transform(Jones.transmission(Complex.ONE, Complex.ONE, plane, clamp(tp), clamp(ts)));
+    Jones pass = Jones.transmission(Complex.ONE, Complex.ONE, plane, clamp(tp), clamp(ts));
+    Coherency through = in.light().transform(pass);
     Jones reflect = Jones.reflection(new Complex(Math.sqrt(clamp(rp)), 0), new Complex(-Math.sqrt(clamp(rs)), 0), plane);
     Beam reflected = in.with(in.light().transform(reflect), in.frame().reflect(aoi, plane));
-    return Response.balance(in, Map.of("through", in.with(through), "reflected", reflected), List.of());
+    return Response.balance(in, Map.of("through", in.with(through), "reflected", reflected), List.of())
+        .withJones(Map.of("through", pass, "reflected", reflect));
   }
 
   private Response mirror(ResolvedElement e, Beam in, double plane) {
@@ -196,7 +205,8 @@ final class ElementOptics {
       }
       j = Jones.reflection(c.rp(), c.rs(), plane);
     }
-    return Response.balance(in, Map.of("out", in.with(in.light().transform(j), in.frame().reflect(aoi, plane))), List.of());
+    return Response.balance(in, Map.of("out", in.with(in.light().transform(j), in.frame().reflect(aoi, plane))), List.of())
+        .withJones(Map.of("out", j));
   }
 
   /**
@@ -221,13 +231,15 @@ final class ElementOptics {
     double tau = Math.exp(-materials.absorption(Medium.of(glass), wl) * thickness / Math.cos(inside));
     double[] tS = plate(front.rs(), front.ts(), back.rs(), back.ts(), tau);
     double[] tP = plate(front.rp(), front.tp(), back.rp(), back.tp(), tau);
-    Coherency through = in.light().transform(Jones.transmission(Complex.ONE, Complex.ONE, plane, tP[0], tS[0]));
+    Jones pass = Jones.transmission(Complex.ONE, Complex.ONE, plane, tP[0], tS[0]);
+    Coherency through = in.light().transform(pass);
     Jones reflect = Jones.reflection(new Complex(Math.sqrt(tP[1]), 0), new Complex(-Math.sqrt(tS[1]), 0), plane);
     Beam reflected = in.with(in.light().transform(reflect), in.frame().reflect(aoi, plane));
     // The mode crosses the plate as two flat interfaces with the glass between (tilt neglected).
     Beam out = in.with(through).in(after).withMode(in.mode()
         .map(g -> g.intoMedium(ng.getReal()).propagate(thickness).intoMedium(n3.getReal())));
-    return Response.balance(in, Map.of("through", out, "reflected", reflected), List.of());
+    return Response.balance(in, Map.of("through", out, "reflected", reflected), List.of())
+        .withJones(Map.of("through", pass, "reflected", reflect));
   }
 
   /** Incoherent plate: {transmittance, reflectance} from the two surfaces and the internal transmittance τ. */
@@ -247,13 +259,17 @@ final class ElementOptics {
     Complex n2 = materials.index(to, wl);
     Fresnel.Coefficients c = Fresnel.at(n1, n2, aoi);
     SurfaceModel.Powers powers = surfaces.surface(e, n1, n2, aoi, wl);
-    Coherency through = in.light().transform(Jones.transmission(Complex.ONE, Complex.ONE, plane, powers.tp(), powers.ts()));
+    Jones pass = Jones.transmission(Complex.ONE, Complex.ONE, plane, powers.tp(), powers.ts());
+    Coherency through = in.light().transform(pass);
     Jones reflect = e.param("coating").isPresent()
         ? Jones.reflection(new Complex(Math.sqrt(powers.rp()), 0), new Complex(-Math.sqrt(powers.rs()), 0), plane)
         : Jones.reflection(c.rp(), c.rs(), plane);
     Beam reflected = in.with(in.light().transform(reflect), in.frame().reflect(aoi, plane));
     Beam out = in.with(through).in(Medium.of(to)).withMode(in.mode().map(g -> g.intoMedium(n2.getReal())));
-    return Response.balance(in, Map.of("through", out, "reflected", reflected), List.of());
+    return Response.balance(in, Map.of("through", out, "reflected", reflected), List.of())
+        .withJones(Map.of("through", pass, "reflected", reflect))
+        .withSurface(SurfaceFigures.of(wl, aoi, n1, n2, e.param("coating").isPresent(), powers.rs(), powers.rp(),
+            powers.ts(), powers.tp()));
   }
 
   /** A thin lens: two surfaces at normal incidence; their reflections head back as ghosts. */
@@ -267,7 +283,8 @@ final class ElementOptics {
     Beam focused = in.withMode(in.mode().map(g -> g.throughThinLens(focal))).with(in.light().scaled(clip));
     Response r = lensSurfaces(e, focused);
     Map<String, Beam> ports = r.ports();
-    return Response.balance(in, ports, r.ghosts()).clipping(1 - clip);
+    double kept = in.power() > 0 && ports.containsKey("out") ? ports.get("out").power() / in.power() : 1;
+    return Response.balance(in, ports, r.ghosts()).clipping(1 - clip).withJones(scalar("out", kept));
   }
 
   private Response lensSurfaces(ResolvedElement e, Beam in) {
@@ -308,7 +325,8 @@ final class ElementOptics {
     double[] pair = plate(face.rs(), face.ts(), face.rs(), face.ts(), 1);
     Beam out = in.with(in.light().transform(j).scaled(pair[0]));
     Beam back = in.with(in.light().scaled(pair[1]), in.frame().reflect(0, 0));
-    return Response.balance(in, Map.of("out", out), List.of(new Ghost("face reflections", back, true)));
+    return Response.balance(in, Map.of("out", out), List.of(new Ghost("face reflections", back, true)))
+        .withJones(Map.of("out", j.scaled(Math.sqrt(pair[0]))));
   }
 
   /** The real part alone: interfaces of weakly absorbing glass are treated as lossless. */

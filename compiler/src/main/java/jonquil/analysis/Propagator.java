@@ -35,6 +35,8 @@ final class Propagator {
   private final Map<String, PortValue> incident = new LinkedHashMap<>();
   private final List<Clip> clips = new ArrayList<>();
   private final Map<Symbol, Optional<Pulses>> pulses = new HashMap<>();
+  private final Map<String, PortJones> jones = new LinkedHashMap<>();
+  private final Map<String, SurfaceFigures> surfaces = new LinkedHashMap<>();
   private double sourcePower;
   private double absorbed;
   private double stopped;
@@ -75,7 +77,8 @@ final class Propagator {
     }
     List<ElementBudget> budgets = new ArrayList<>();
     budgetTotals.forEach((name, t) -> budgets.add(new ElementBudget(name, t[0], budgetPorts.get(name), t[1], t[2])));
-    return new TrainSolution(ports, incident, budgets, stray, clips, sourcePower, absorbed, stopped, observed);
+    return new TrainSolution(ports, incident, budgets, stray, clips, sourcePower, absorbed, stopped, observed, jones,
+        surfaces);
   }
 
   private void walk(ResolvedTrain.BeamPath path, int from, List<Beam> arriving) {
@@ -139,6 +142,9 @@ final class Propagator {
     for (Beam b : beams) {
       totals[0] += b.power();
       Response r = optics.respond(element, b);
+      // The hover shows one matrix per port: the one for the first line that arrives.
+      r.jones().forEach((port, j) -> jones.putIfAbsent(name + "." + port, new PortJones(name, port, b.wavelength(), j)));
+      r.surface().ifPresent(f -> surfaces.putIfAbsent(name, f));
       clippedMost = Math.max(clippedMost, r.clipped());
       totals[1] += r.absorbed();
       if (placed.symbol().category() == Category.TERMINAL) {

@@ -2,21 +2,39 @@ package jonquil.analysis;
 
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
+import jonquil.optics.Jones;
 
-/** What one element does to one incoming beam: the beams at its ports, what it absorbs, its ghosts. */
-record Response(Map<String, Beam> ports, double absorbed, List<Ghost> ghosts, double clipped) {
+/**
+ * What one element does to one incoming beam: the beams at its ports, what it absorbs, its
+ * ghosts; and, for the hover, the Jones matrix behind each port (none for an element that
+ * depolarizes or stops the light) and an interface's surface figures.
+ */
+record Response(Map<String, Beam> ports, double absorbed, List<Ghost> ghosts, double clipped, Map<String, Jones> jones,
+    Optional<SurfaceFigures> surface) {
   Response {
     ports = Map.copyOf(ports);
     ghosts = List.copyOf(ghosts);
+    jones = Map.copyOf(jones);
   }
 
   Response(Map<String, Beam> ports, double absorbed, List<Ghost> ghosts) {
-    this(ports, absorbed, ghosts, 0);
+    this(ports, absorbed, ghosts, 0, Map.of(), Optional.empty());
   }
 
   /** The same response, noting the fraction of the beam an aperture cut off. */
   Response clipping(double fraction) {
-    return new Response(ports, absorbed, ghosts, fraction);
+    return new Response(ports, absorbed, ghosts, fraction, jones, surface);
+  }
+
+  /** The same response with the Jones matrix behind each port named. */
+  Response withJones(Map<String, Jones> byPort) {
+    return new Response(ports, absorbed, ghosts, clipped, byPort, surface);
+  }
+
+  /** The same response with an interface's figures. */
+  Response withSurface(SurfaceFigures figures) {
+    return new Response(ports, absorbed, ghosts, clipped, jones, Optional.of(figures));
   }
 
   static Response absorbedAll(Beam in) {

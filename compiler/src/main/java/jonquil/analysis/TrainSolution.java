@@ -17,9 +17,13 @@ public record TrainSolution(
     double sourcePower,
     double absorbed,
     double stopped,
-    double observedAtPathEnds) {
+    double observedAtPathEnds,
+    Map<String, PortJones> jones,
+    Map<String, SurfaceFigures> surfaces) {
 
   public TrainSolution {
+    jones = Map.copyOf(jones);
+    surfaces = Map.copyOf(surfaces);
     ports = Map.copyOf(ports);
     incident = Map.copyOf(incident);
     budgets = List.copyOf(budgets);
@@ -30,6 +34,16 @@ public record TrainSolution(
   /** The light arriving at an element, before it acts. */
   public Optional<PortValue> incidentAt(String element) {
     return Optional.ofNullable(incident.get(element));
+  }
+
+  /** The Jones matrices behind an element's ports, in the order of its ports. */
+  public java.util.List<PortJones> jonesOf(String element, java.util.List<String> portOrder) {
+    return portOrder.stream().map(p -> jones.get(element + "." + p)).filter(java.util.Objects::nonNull).toList();
+  }
+
+  /** An interface's figures as the light met it. */
+  public Optional<SurfaceFigures> surfaceOf(String element) {
+    return Optional.ofNullable(surfaces.get(element));
   }
 
   public Optional<PortValue> port(String key) {

@@ -69,6 +69,7 @@ final class Hover {
           model.element(s).ifPresent(e -> lines(md, e));
         }
         LightText.append(md, model, Models.solution(r, model), s.name(), s.kind().get());
+        OpticsText.append(md, Models.solution(r, model), s.name(), s.kind().get());
         if (s.kind().get() == ElementKind.SOURCE) {
           SafetyText.append(md, model, Models.solution(r, model), s.name());
         }

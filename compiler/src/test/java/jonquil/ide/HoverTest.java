@@ -48,6 +48,48 @@ class HoverTest {
   }
 
   @Test
+  void aWaveplateShowsItsJonesMatrix() {
+    String md = hover(bench("qwp", 1));
+    // A quarter-wave plate with its fast axis at 45°: (1/√2)[[1, −i], [−i, 1]] up to a global phase
+    // (E. Hecht, Optics, 5th ed., 2017, §8.13.2, Table 8.6, from memory). The checker splits the
+    // retardance symmetrically, e^{∓iπ/4}, so the same matrix times e^{iπ/4}: entries (1 ± i)/2.
+    assertTrue(md.contains("**Jones matrix**, out `out`"), md);
+    assertTrue(md.contains("| to x | 0.5 + 0.5i | 0.5 - 0.5i |") && md.contains("| to y | 0.5 - 0.5i | 0.5 + 0.5i |"), md);
+    Golden.check(GOLDEN.resolve("waveplate.md"), md);
+  }
+
+  @Test
+  void anInterfaceShowsItsReflectancesAndItsBrewsterAndCriticalAngles() {
+    String spec = """
+        source seed { wavelength 633 nm; power 5 mW; polarization linear 0 deg; beam waist 0.4 mm }
+        material outside = index 1
+        material crown = index 1.5
+        interface $0entry { from outside; to crown; aoi 45 deg }
+        interface exit { from crown; to outside; aoi 0 deg }
+        dump d1
+        dump d2
+        dump d3
+        train main {
+          seed -> 10 mm in outside -> entry.through -> 5 mm in crown -> exit.through -> 10 mm in outside -> d1
+          entry.reflected -> 10 mm -> d2
+          exit.reflected -> 10 mm -> d3
+        }
+        """;
+    String md = hover(spec);
+    // From 1 into 1.5 at 45°, by the Fresnel equations (E. Hecht, Optics, 5th ed., 2017, eqs. 4.42-4.43,
+    // from memory), worked by hand: θt = 28.13°, rs = −0.3033, rp = 0.0920, so Rs = 9.201 %,
+    // Rp = 0.8466 %; Brewster angle arctan 1.5 = 56.31° (Hecht eq. 4.52, from memory).
+    assertTrue(md.contains("| 9.201 % | 0.8466 % | 90.8 % | 99.15 % |"), md);
+    assertTrue(md.contains("Brewster angle 56.31°"), md);
+    assertTrue(md.contains("no critical angle"), md);
+    Golden.check(GOLDEN.resolve("interface.md"), md);
+
+    String inside = hover(spec.replace("$0entry", "entry").replace("interface exit", "interface $0exit"));
+    // From 1.5 into 1: critical angle arcsin(1/1.5) = 41.81°; at normal incidence R = ((n−1)/(n+1))² = 4 %.
+    assertTrue(inside.contains("critical angle 41.81°") && inside.contains("| 4 % | 4 % | 96 % | 96 % |"), inside);
+  }
+
+  @Test
   void aSourceShowsItsLinesBeamAndEyeSafetyWithTheCaution() {
     String md = hover(bench("seed", 0));
     assertTrue(md.contains(Outcome.CAUTION));
