@@ -7,10 +7,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.SplittableRandom;
-import java.util.stream.Stream;
 import jonquil.source.SourceFile;
 import jonquil.testing.Repo;
 import org.junit.jupiter.api.Test;
@@ -22,14 +20,6 @@ import org.junit.jupiter.api.Test;
  * tree (every range) and diagnostics alike.
  */
 class IncrementalParseTest {
-  private static List<Path> specs() throws IOException {
-    List<Path> out = new ArrayList<>(Repo.sampleFiles());
-    try (Stream<Path> corpus = Files.walk(Repo.testResources().resolve("diagnostics"))) {
-      corpus.filter(p -> p.toString().endsWith(".jonq")).sorted().forEach(out::add);
-    }
-    return out;
-  }
-
   private static ParseResult sameAsFresh(ParseMemo memo, Path file, String text) {
     SourceFile source = new SourceFile(file, text);
     ParseResult remembered = SpecParser.parse(source, memo);
@@ -79,7 +69,7 @@ class IncrementalParseTest {
         "window w_new {\n  material   filler\n  thickness  3 mm\n}\n", "train {\n  a -> 5 mm -> b\n}\n", "\n",
         "require {\n  power at p > 1 mW\n}\n", "use \"parts/bench_parts.jonq\"\n"};
     int steps = 0;
-    for (Path spec : specs()) {
+    for (Path spec : Repo.specFiles()) {
       ParseMemo memo = new ParseMemo();
       String text = Files.readString(spec);
       sameAsFresh(memo, spec, text);

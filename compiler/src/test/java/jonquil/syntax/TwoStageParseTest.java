@@ -6,10 +6,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.SplittableRandom;
-import java.util.stream.Stream;
 import jonquil.source.SourceFile;
 import jonquil.testing.Repo;
 import org.junit.jupiter.api.Test;
@@ -21,14 +19,6 @@ import org.junit.jupiter.api.Test;
  * (with its ranges) and the diagnostics equal those of a full-LL-only parse.
  */
 class TwoStageParseTest {
-  private static List<Path> specs() throws IOException {
-    List<Path> out = new ArrayList<>(Repo.sampleFiles());
-    try (Stream<Path> corpus = Files.walk(Repo.testResources().resolve("diagnostics"))) {
-      corpus.filter(p -> p.toString().endsWith(".jonq")).sorted().forEach(out::add);
-    }
-    return out;
-  }
-
   private static void sameBothWays(Path file, String text) {
     SourceFile source = new SourceFile(file, text);
     ParseResult twoStage = SpecParser.parse(source, true);
@@ -39,7 +29,7 @@ class TwoStageParseTest {
 
   @Test
   void everySampleAndCorpusFileParsesToOneTreeEitherWay() throws IOException {
-    List<Path> specs = specs();
+    List<Path> specs = Repo.specFiles();
     assertTrue(specs.size() > 50, "the corpus is missing: " + specs.size() + " files");
     for (Path spec : specs) {
       sameBothWays(spec, Files.readString(spec));
