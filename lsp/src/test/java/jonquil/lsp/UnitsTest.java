@@ -73,18 +73,18 @@ class UnitsTest {
       }
       secondDone.countDown();
       return true;
-    }, t -> { }, Duration.ofMillis(300), Duration.ofSeconds(10), () -> { }, true)) {
+    }, t -> { }, Duration.ofMillis(2000), Duration.ofSeconds(10), () -> { }, true)) {
       long asked = System.nanoTime();
       s.request();
       assertTrue(firstStarted.await(5, TimeUnit.SECONDS));
-      assertTrue(System.nanoTime() - asked < TimeUnit.MILLISECONDS.toNanos(250),
-          "a request after a pause starts its run without waiting for the 300 ms debounce");
+      assertTrue(System.nanoTime() - asked < TimeUnit.MILLISECONDS.toNanos(1000),
+          "a request after a pause starts its run without waiting for the 2 s debounce");
       for (int i = 0; i < 49; i++) {
         s.request();
       }
       releaseFirst.countDown();
       assertTrue(secondDone.await(5, TimeUnit.SECONDS), "the requests made during the run get a run");
-      Thread.sleep(400);
+      Thread.sleep(500);
       assertEquals(2, runs.get(), "forty-nine requests in quick succession are one trailing run");
     }
   }
