@@ -64,7 +64,7 @@ class UnitsTest {
     CountDownLatch firstStarted = new CountDownLatch(1);
     CountDownLatch releaseFirst = new CountDownLatch(1);
     CountDownLatch secondDone = new CountDownLatch(1);
-    // A debounce far longer than the test: the first run can only start at once if the leading edge works.
+    // A long debounce: the first run can start well before it only if the leading edge works.
     try (CheckScheduler s = new CheckScheduler(superseded -> {
       if (runs.incrementAndGet() == 1) {
         firstStarted.countDown();
