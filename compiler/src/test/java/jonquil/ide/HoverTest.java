@@ -60,21 +60,7 @@ class HoverTest {
 
   @Test
   void anInterfaceShowsItsReflectancesAndItsBrewsterAndCriticalAngles() {
-    String spec = """
-        source seed { wavelength 633 nm; power 5 mW; polarization linear 0 deg; beam waist 0.4 mm }
-        material outside = index 1
-        material crown = index 1.5
-        interface $0entry { from outside; to crown; aoi 45 deg }
-        interface exit { from crown; to outside; aoi 0 deg }
-        dump d1
-        dump d2
-        dump d3
-        train main {
-          seed -> 10 mm in outside -> entry.through -> 5 mm in crown -> exit.through -> 10 mm in outside -> d1
-          entry.reflected -> 10 mm -> d2
-          exit.reflected -> 10 mm -> d3
-        }
-        """;
+    String spec = Specs.read("interface.jonq");
     String md = hover(spec);
     // From 1 into 1.5 at 45°, by the Fresnel equations (E. Hecht, Optics, 5th ed., 2017, eqs. 4.42-4.43,
     // from memory), worked by hand: θt = 28.13°, rs = −0.3033, rp = 0.0920, so Rs = 9.201 %,

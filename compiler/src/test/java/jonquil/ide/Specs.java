@@ -56,30 +56,18 @@ final class Specs {
     return at;
   }
 
-  static final String BENCH = """
-      source seed {
-        wavelength    1064 nm
-        power         2 W
-        polarization  linear 0 deg
-        beam          waist 1.0 mm, m2 1.1
-      }
+  /**
+   * The bench most editor tests use; a file, so that the language server's own hover test
+   * ({@code HoverGoldenTest} in lsp/) hovers on the very same text and compares with the same goldens.
+   */
+  static final String BENCH = read("bench.jonq");
 
-      material slab_glass = index 1.5
-      waveplate qwp { retardance 0.25 wave at 1064 nm; fast_axis 45 deg }
-      window    w1  { material slab_glass; thickness 3 mm; aoi 10 deg }
-      mirror    m1  { metal silver; aoi 45 deg; damage 5 kW/cm2 }
-      probe     spot
-      dump      d1
-
-      train main {
-        seed -> 100 mm -> w1.through -> 50 mm -> qwp -> 80 mm -> m1 -> 20 mm -> spot
-        w1.reflected -> 30 mm -> d1
-      }
-
-      require {
-        power at spot >= 1 W
-        power at spot >= 1.95 W
-        stray < 5 mW
-      }
-      """;
+  /** A spec under compiler/src/test/resources/ide/. */
+  static String read(String name) {
+    try {
+      return java.nio.file.Files.readString(jonquil.testing.Repo.testResources().resolve("ide").resolve(name));
+    } catch (java.io.IOException e) {
+      throw new java.io.UncheckedIOException(e);
+    }
+  }
 }
