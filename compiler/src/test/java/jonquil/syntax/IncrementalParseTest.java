@@ -67,7 +67,9 @@ class IncrementalParseTest {
   void aLongSequenceOfEditsParsesAsFreshAfterEveryEdit() throws IOException {
     String[] snippets = {"probe extra_probe\n", "material filler = index 1.33\n",
         "window w_new {\n  material   filler\n  thickness  3 mm\n}\n", "train {\n  a -> 5 mm -> b\n}\n", "\n",
-        "require {\n  power at p > 1 mW\n}\n", "use \"parts/bench_parts.jonq\"\n"};
+        "require {\n  power at p > 1 mW\n}\n", "use \"parts/bench_parts.jonq\"\n",
+        "require {\n  yield >= 95 % for loss from a to b in 1 % .. 2 %, extinction >= 100 over wavelength 1 um .. 2 um\n"
+            + "  polarization at p is elliptical 10 deg ± 1 deg\n  stray everywhere < 1 mW\n}\n"};
     int steps = 0;
     for (Path spec : Repo.specFiles()) {
       ParseMemo memo = new ParseMemo();
