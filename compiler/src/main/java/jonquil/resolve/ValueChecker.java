@@ -188,7 +188,7 @@ final class ValueChecker {
       if (!dims.contains(Dimension.DIMENSIONLESS)) {
         sink.report(DiagnosticCode.MISSING_UNIT, a.range(),
             "'" + a.number().text() + "' needs a unit: '" + what + "' is " + ShapeMatcher.describeDimensions(dims)
-                + ", e.g. '" + example + "'");
+                + ", e.g. '" + example + "'", exampleUnitFix(a, example));
         return Optional.empty();
       }
       si = a.number().value();
@@ -392,6 +392,20 @@ final class ValueChecker {
       return null;
     }
     return Optional.of(((UnitParse.Ok) parsed).unit());
+  }
+
+  /**
+   * For a bare number where a unit is needed: write it in the unit of the slot's example
+   * ('100' for a focal length becomes '100 mm'), the unit such values are usually given in.
+   * Null when the example has no unit to offer.
+   */
+  private Fix exampleUnitFix(Arg.QuantityArg a, String example) {
+    String unit = example.replaceFirst("^[-+]?[0-9.]+([eE][-+]?[0-9]+)?\\s*", "");
+    if (unit.isEmpty() || unit.equals(example) || !(UnitParser.parse(unit) instanceof UnitParse.Ok)) {
+      return null;
+    }
+    TextRange at = new TextRange(a.number().range().end(), a.number().range().end());
+    return new Fix("write '" + a.number().text() + " " + unit + "'", List.of(new Edit(sink.file, at, " " + unit)));
   }
 
   /** The literal as written: '3 mm' keeps its space, '3R' stays without one. */

@@ -93,6 +93,7 @@ class CodeActionTest {
       "UNKNOWN_PORT             | pbs.reflected ->      | pbs.reflectd ->   | change 'reflectd' to 'reflected'",
       "UNKNOWN_MEASURE          | power at spot         | powr at spot      | change 'powr' to 'power'",
       "OUT_OF_RANGE             | transmission 0.5      | transmission 50   | write '50 %'",
+      "MISSING_UNIT             | focal 100 mm          | focal 100         | write '100 mm'",
   })
   void applyingTheFixRemovesTheDiagnostic(String code, String good, String bad, String title) {
     String broken = CLEAN.replaceFirst(java.util.regex.Pattern.quote(good.strip()),
