@@ -14,12 +14,14 @@ import jonquil.units.Dimension;
 final class RequirementResolver {
   private final Sink sink;
   private final Scope scope;
+  private final ElementRefs refs;
   private final ValueChecker values;
   private final Set<Symbol> placed;
 
   private final jonquil.syntax.SpecFile file;
 
   RequirementResolver(Sink sink, Scope scope, Set<Symbol> placed, jonquil.syntax.SpecFile file) {
+    this.refs = new ElementRefs(sink, scope);
     this.sink = sink;
     this.scope = scope;
     this.values = new ValueChecker(sink, scope);
@@ -144,38 +146,19 @@ final class RequirementResolver {
 
   private Optional<ResolvedRequirement.Target> target(Arg.RefArg ref) {
     String name = ref.name().text();
-    Optional<Symbol> found = scope.lookup(name);
+    Optional<Symbol> found = refs.lookup(ref);
     if (found.isEmpty()) {
-      var candidates = scope.namesOf(List.of(Category.SOURCE, Category.OPTIC, Category.PROBE, Category.TERMINAL));
-      sink.report(DiagnosticCode.UNDEFINED_NAME, ref.name().range(), "unknown element '" + name + "'"
-          + Suggest.hint(name, candidates),
-          Resolver.replacement(sink.file, ref.name().range(), name, Suggest.closest(name, candidates)));
       return Optional.empty();
     }
     Symbol s = found.get();
-    sink.refs.add(new ResolvedRef(sink.file, ref.name().range(), s));
     if (!s.category().placeable() || s.kind().isEmpty()) {
       sink.report(DiagnosticCode.WRONG_KIND, ref.name().range(),
           "'" + name + "' is " + s.kindPhrase() + "; a requirement is measured at a source, element, probe or beam stop");
       return Optional.empty();
     }
-    Optional<String> port = Optional.empty();
-    if (ref.port().isPresent()) {
-      List<String> ports = s.kind().get().ports();
-      String p = ref.port().get().text();
-      if (ports.size() <= 1) {
-        sink.report(DiagnosticCode.PORT_ON_ELEMENT_WITHOUT_PORTS, ref.port().get().range(), s.describe() + " "
-            + (ports.isEmpty() ? "stops the beam and has no output port" : "has a single output")
-            + "; write '" + name + "' without a port");
-        return Optional.empty();
-      }
-      if (!ports.contains(p)) {
-        sink.report(DiagnosticCode.UNKNOWN_PORT, ref.port().get().range(), s.describe() + " has no port '" + p + "'"
-            + Suggest.hint(p, ports) + (ports.isEmpty() ? "" : "; its ports are " + ShapeMatcher.quoteList(ports)),
-            Resolver.replacement(sink.file, ref.port().get().range(), p, Suggest.closest(p, ports)));
-        return Optional.empty();
-      }
-      port = Optional.of(p);
+    Optional<String> port = refs.port(ref, s.kind().get());
+    if (ref.port().isPresent() && port.isEmpty()) {
+      return Optional.empty();
     }
     if (!placed.contains(s)) {
       sink.report(DiagnosticCode.TARGET_NOT_PLACED, ref.name().range(),

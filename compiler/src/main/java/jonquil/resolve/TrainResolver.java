@@ -24,6 +24,7 @@ import jonquil.units.Dimension;
 final class TrainResolver {
   private final Sink sink;
   private final Scope scope;
+  private final ElementRefs refs;
   private final ValueChecker values;
   /** Where each element is placed: the step that placed it. */
   private final Map<Symbol, ResolvedTrain.Element> placed = new LinkedHashMap<>();
@@ -38,6 +39,7 @@ final class TrainResolver {
   private record Pending(ResolvedTrain.PortRef port) {}
 
   TrainResolver(Sink sink, Scope scope, jonquil.syntax.SpecFile file) {
+    this.refs = new ElementRefs(sink, scope);
     this.sink = sink;
     this.scope = scope;
     this.values = new ValueChecker(sink, scope);
@@ -178,16 +180,11 @@ final class TrainResolver {
 
   private Optional<Symbol> placeable(Arg.RefArg ref) {
     String name = ref.name().text();
-    Optional<Symbol> found = scope.lookup(name);
+    Optional<Symbol> found = refs.lookup(ref);
     if (found.isEmpty()) {
-      var candidates = scope.namesOf(List.of(Category.SOURCE, Category.OPTIC, Category.PROBE, Category.TERMINAL));
-      sink.report(DiagnosticCode.UNDEFINED_NAME, ref.name().range(), "unknown element '" + name + "'"
-          + Suggest.hint(name, candidates),
-          Resolver.replacement(sink.file, ref.name().range(), name, Suggest.closest(name, candidates)));
       return Optional.empty();
     }
     Symbol s = found.get();
-    sink.refs.add(new ResolvedRef(sink.file, ref.name().range(), s));
     if (!s.category().placeable() || s.kind().isEmpty()) {
       sink.report(DiagnosticCode.NOT_PLACEABLE, ref.name().range(),
           "'" + name + "' is " + s.kindPhrase() + ", which cannot stand in a beam path"
@@ -197,31 +194,13 @@ final class TrainResolver {
     return found;
   }
 
+  /** The port written after the name, checked; an element named with a bad port is remembered, so its path is not followed. */
   private Optional<String> portOf(Arg.RefArg ref, ElementKind kind) {
-    if (ref.port().isEmpty()) {
-      return Optional.empty();
-    }
-    String port = ref.port().get().text();
-    if (kind.ports().size() <= 1) {
-      Symbol owner = scope.lookup(ref.name().text()).orElse(null);
-      if (owner != null) {
-        badPorts.add(owner);
-      }
-      sink.report(DiagnosticCode.PORT_ON_ELEMENT_WITHOUT_PORTS, ref.port().get().range(), kind.word() + " '"
-          + ref.name().text() + "' " + (kind.ports().isEmpty() ? "stops the beam and has no output port"
-              : "has a single output") + "; write '" + ref.name().text() + "' without a port");
-      return Optional.empty();
-    }
-    if (!kind.ports().contains(port)) {
+    Optional<String> port = refs.port(ref, kind);
+    if (ref.port().isPresent() && port.isEmpty()) {
       scope.lookup(ref.name().text()).ifPresent(badPorts::add);
-      Optional<String> close = Suggest.closest(port, kind.ports());
-      sink.report(DiagnosticCode.UNKNOWN_PORT, ref.port().get().range(),
-          kind.word() + " '" + ref.name().text() + "' has no port '" + port + "'"
-              + close.map(x -> "; did you mean '" + x + "'?").orElse("; its ports are " + ShapeMatcher.quoteList(kind.ports())),
-          Resolver.replacement(sink.file, ref.port().get().range(), port, close));
-      return Optional.empty();
     }
-    return Optional.of(port);
+    return port;
   }
 
   private void checkBranches() {
