@@ -11,8 +11,4 @@ public record CheckOptions(boolean yields, boolean analyses) {
   public static final CheckOptions EDITOR = new CheckOptions(false, true);
   /** Parse and resolve only: declarations, scopes and name references, no analysis. */
   public static final CheckOptions NAMES = new CheckOptions(false, false);
-
-  public CheckOptions(boolean yields) {
-    this(yields, true);
-  }
 }

@@ -83,10 +83,10 @@ class CancellationTest {
   }
 
   @Test
-  void cancelsRacingWithRepliesNeverCutTheConnection() throws Exception {
+  void repliesAreWrittenByAThreadThatCancelsNeverInterrupt() throws Exception {
     Files.writeString(dir.resolve(".jonquil-root"), "");
     String text = "material glass = index 1.5\nwindow w1 {\n  material   glass\n  thickness  2 mm\n}\n";
-    Path file = dir.resolve("race.jonq");
+    Path file = dir.resolve("writer.jonq");
     Files.writeString(file, text);
     String uri = file.toUri().toString();
     try (LspHarness h = new LspHarness(new IdeAnswers())) {
@@ -94,24 +94,14 @@ class CancellationTest {
       h.open(uri, 1, text);
       var service = h.remote.getTextDocumentService();
       TextDocumentIdentifier doc = new TextDocumentIdentifier(uri);
-      Position onName = new Position(1, 8);
-      assertTrue(service.hover(new HoverParams(doc, onName)).get(10, TimeUnit.SECONDS) != null);
-      // Cancels sent while replies are computed and written: on a channel-backed stream an
-      // interrupt during the write would close the channel, and the server would go silent.
-      java.util.SplittableRandom random = new java.util.SplittableRandom(7);
-      for (int i = 0; i < 300; i++) {
-        CompletableFuture<Hover> pending = service.hover(new HoverParams(doc, onName));
-        long spin = System.nanoTime() + random.nextInt(2_000_000);
-        while (System.nanoTime() < spin) {
-          Thread.onSpinWait();
-        }
-        pending.cancel(true);
+      for (int i = 0; i < 5; i++) {
+        assertTrue(service.hover(new HoverParams(doc, new Position(1, 8))).get(10, TimeUnit.SECONDS) != null);
       }
-      Hover after = service.hover(new HoverParams(doc, onName)).get(10, TimeUnit.SECONDS);
-      assertTrue(after.getContents().getRight().getValue().contains("w1"), "the server still answers");
-      assertTrue(!h.serverListening.isDone(), "the server still reads");
-      assertEquals(0, h.responses.stream().filter(r -> r.getError() != null
-          && r.getError().getCode() != ResponseErrorCode.RequestCancelled.getValue()).count(), "no error but cancels");
+      // A cancel interrupts the request worker; had it been writing a reply to a channel-backed
+      // stream, the interrupt would close the channel and silence the server. So no worker writes.
+      assertTrue(h.serverWriters.contains("jonquil-replies"), "replies are written: " + h.serverWriters);
+      assertTrue(h.serverWriters.stream().noneMatch(t -> t.startsWith("jonquil-request-")),
+          "a request worker wrote to the output: " + h.serverWriters);
     }
   }
 

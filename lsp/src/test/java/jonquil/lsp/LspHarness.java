@@ -150,6 +150,8 @@ final class LspHarness implements AutoCloseable {
   });
   private final OutputStream clientOut;
   private final OutputStream serverOut;
+  /** The names of the server's threads that wrote to its output, so a test can see who writes replies. */
+  final java.util.Set<String> serverWriters = java.util.concurrent.ConcurrentHashMap.newKeySet();
   /** Every response the client received, as it came off the wire (error codes included). */
   final List<ResponseMessage> responses = java.util.Collections.synchronizedList(new ArrayList<>());
   /** Completes when the server's message loop ends: while it is not done, the server still reads. */
@@ -170,7 +172,14 @@ final class LspHarness implements AutoCloseable {
     InputStream serverIn = Channels.newInputStream(toServer.source());
     clientOut = Channels.newOutputStream(toServer.sink());
     InputStream clientIn = Channels.newInputStream(toClient.source());
-    serverOut = Channels.newOutputStream(toClient.sink());
+    OutputStream sink = Channels.newOutputStream(toClient.sink());
+    serverOut = new java.io.FilterOutputStream(sink) {
+      @Override
+      public void write(byte[] b, int off, int len) throws IOException {
+        serverWriters.add(Thread.currentThread().getName());
+        sink.write(b, off, len);
+      }
+    };
     server = new JonquilLanguageServer(answers, debounce, checkAfterPause);
     Launcher<LanguageClient> serverSide = LSPLauncher.createServerLauncher(server, serverIn, serverOut, threads, null);
     server.connect(serverSide.getRemoteProxy());
