@@ -294,16 +294,7 @@ class EditorFeaturesTest {
 
   @Test
   void inlayHintsOnlyInsideTheRequestedRange() throws Exception {
-    String text = """
-        source seed { wavelength 532 nm; power 10 mW }
-        splitter bs { ratio 50 % }
-        dump d1
-        dump d2
-        train main {
-          seed -> 10 mm -> bs.through -> 20 mm -> d1
-          bs.reflected -> 30 mm -> d2
-        }
-        """;
+    String text = InlayHintResolveTest.BENCH;
     String uri = write("hints.jonq", text);
     try (LspHarness h = new LspHarness(new IdeAnswers())) {
       h.initialize(dir);
