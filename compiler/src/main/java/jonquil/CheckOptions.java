@@ -1,14 +1,15 @@
 package jonquil;
 
 /**
- * How much a check computes. The command line computes everything; an editor re-checks on
- * every pause in typing, so it leaves out the Monte Carlo yields (hundreds of re-solves),
- * which the CI gate still evaluates. A workspace index needs only names, so it stops after
- * resolution and computes no physics at all.
+ * How much a check computes. The command line computes everything; an editor re-checks on every
+ * pause in typing, so it leaves out the Monte Carlo yields (hundreds of re-solves), which the CI
+ * gate still evaluates. A workspace index needs only names, so it stops after resolution and
+ * computes no physics at all.
  */
 public record CheckOptions(boolean yields, boolean analyses) {
   public static final CheckOptions FULL = new CheckOptions(true, true);
   public static final CheckOptions EDITOR = new CheckOptions(false, true);
+
   /** Parse and resolve only: declarations, scopes and name references, no analysis. */
   public static final CheckOptions NAMES = new CheckOptions(false, false);
 }

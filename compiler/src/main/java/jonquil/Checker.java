@@ -13,9 +13,9 @@ import java.util.function.BooleanSupplier;
 import jonquil.analysis.Analyzer;
 import jonquil.analysis.RequirementOutcome;
 import jonquil.analysis.TrainSolution;
-import jonquil.diag.Severity;
 import jonquil.diag.Diagnostic;
 import jonquil.diag.DiagnosticCode;
+import jonquil.diag.Severity;
 import jonquil.resolve.ResolvedModel;
 import jonquil.resolve.ResolvedRequirement;
 import jonquil.resolve.Resolver;
@@ -24,13 +24,16 @@ import jonquil.source.TextRange;
 import jonquil.syntax.ParseResult;
 
 /**
- * The façade: checks spec files in a workspace and returns one immutable {@link Result}.
- * Each file given is checked as the root of its own spec; files brought in with 'use'
- * are parsed once and shared. Never throws for user input; an internal failure becomes
- * a J901 diagnostic on the file being checked.
+ * The façade: checks spec files in a workspace and returns one immutable {@link Result}. Each file
+ * given is checked as the root of its own spec; files brought in with 'use' are parsed once and
+ * shared. Never throws for user input; an internal failure becomes a J901 diagnostic on the file
+ * being checked.
  */
 public final class Checker {
-  /** Diagnostics shown per file; more usually repeat one mistake (precedent: compilers cap at ~100 errors). */
+  /**
+   * Diagnostics shown per file; more usually repeat one mistake (precedent: compilers cap at ~100
+   * errors).
+   */
   static final int MAX_DIAGNOSTICS_PER_FILE = 150;
 
   private Checker() {}
@@ -44,12 +47,12 @@ public final class Checker {
   }
 
   /**
-   * As above, but gives up (empty) when {@code superseded} turns true: an editor asks this
-   * when a newer edit has made the check's input stale, so the next check starts sooner.
-   * It is polled between stages only, so every stage still runs to completion or not at all.
+   * As above, but gives up (empty) when {@code superseded} turns true: an editor asks this when a
+   * newer edit has made the check's input stale, so the next check starts sooner. It is polled
+   * between stages only, so every stage still runs to completion or not at all.
    */
-  public static Optional<Result> check(Workspace workspace, List<Path> files, CheckOptions options,
-      BooleanSupplier superseded) {
+  public static Optional<Result> check(
+      Workspace workspace, List<Path> files, CheckOptions options, BooleanSupplier superseded) {
     Map<Path, ParseResult> parsed = new HashMap<>();
     Set<Diagnostic> diagnostics = new LinkedHashSet<>();
     List<RequirementOutcome> requirements = new ArrayList<>();
@@ -68,8 +71,12 @@ public final class Checker {
           return Optional.empty();
         }
         if (!loaded) {
-          diagnostics.add(Diagnostic.of(DiagnosticCode.UNREADABLE_FILE, root, TextRange.EMPTY,
-              "cannot read '" + root.getFileName() + "'"));
+          diagnostics.add(
+              Diagnostic.of(
+                  DiagnosticCode.UNREADABLE_FILE,
+                  root,
+                  TextRange.EMPTY,
+                  "cannot read '" + root.getFileName() + "'"));
           continue;
         }
         List<Diagnostic> found = new ArrayList<>();
@@ -77,8 +84,11 @@ public final class Checker {
           found.addAll(parsed.get(p).diagnostics());
         }
         found.addAll(loader.diagnostics());
-        ResolvedModel model = Resolver.resolve(root, loader.closure(), loader.edges(), loader.dataFiles());
-        loader.dataFiles().forEach((p, text) -> dataSources.putIfAbsent(p, new SourceFile(p, text)));
+        ResolvedModel model =
+            Resolver.resolve(root, loader.closure(), loader.edges(), loader.dataFiles());
+        loader
+            .dataFiles()
+            .forEach((p, text) -> dataSources.putIfAbsent(p, new SourceFile(p, text)));
         found.addAll(model.diagnostics());
         diagnostics.addAll(found);
         models.put(root, model);
@@ -90,8 +100,12 @@ public final class Checker {
         }
         if (found.stream().anyMatch(d -> d.severity() == Severity.ERROR)) {
           for (ResolvedRequirement r : model.requirements()) {
-            requirements.add(RequirementOutcome.notEvaluated(r.file(), r.syntax().range(), r.syntax().text(),
-                "not evaluated: the spec has errors"));
+            requirements.add(
+                RequirementOutcome.notEvaluated(
+                    r.file(),
+                    r.syntax().range(),
+                    r.syntax().text(),
+                    "not evaluated: the spec has errors"));
           }
           continue;
         }
@@ -100,8 +114,14 @@ public final class Checker {
         requirements.addAll(analysis.outcomes());
         solutions.put(root, analysis.solution());
       } catch (RuntimeException | StackOverflowError e) {
-        diagnostics.add(Diagnostic.of(DiagnosticCode.INTERNAL_ERROR, root, TextRange.EMPTY,
-            "the checker failed internally (" + e.getClass().getSimpleName() + "); please report this file"));
+        diagnostics.add(
+            Diagnostic.of(
+                DiagnosticCode.INTERNAL_ERROR,
+                root,
+                TextRange.EMPTY,
+                "the checker failed internally ("
+                    + e.getClass().getSimpleName()
+                    + "); please report this file"));
       }
     }
     Map<Path, SourceFile> sources = new LinkedHashMap<>();
@@ -112,17 +132,25 @@ public final class Checker {
 
   private static List<Diagnostic> capped(Set<Diagnostic> all) {
     Map<Path, List<Diagnostic>> byFile = new LinkedHashMap<>();
-    all.stream().sorted(Diagnostic.ORDER).forEach(d -> byFile.computeIfAbsent(d.file(), k -> new ArrayList<>()).add(d));
+    all.stream()
+        .sorted(Diagnostic.ORDER)
+        .forEach(d -> byFile.computeIfAbsent(d.file(), k -> new ArrayList<>()).add(d));
     List<Diagnostic> out = new ArrayList<>();
-    byFile.forEach((file, list) -> {
-      if (list.size() <= MAX_DIAGNOSTICS_PER_FILE) {
-        out.addAll(list);
-        return;
-      }
-      out.addAll(list.subList(0, MAX_DIAGNOSTICS_PER_FILE));
-      out.add(Diagnostic.of(DiagnosticCode.TOO_MANY_ERRORS, file, list.get(MAX_DIAGNOSTICS_PER_FILE).range(),
-          (list.size() - MAX_DIAGNOSTICS_PER_FILE) + " more problems in this file are not shown"));
-    });
+    byFile.forEach(
+        (file, list) -> {
+          if (list.size() <= MAX_DIAGNOSTICS_PER_FILE) {
+            out.addAll(list);
+            return;
+          }
+          out.addAll(list.subList(0, MAX_DIAGNOSTICS_PER_FILE));
+          out.add(
+              Diagnostic.of(
+                  DiagnosticCode.TOO_MANY_ERRORS,
+                  file,
+                  list.get(MAX_DIAGNOSTICS_PER_FILE).range(),
+                  (list.size() - MAX_DIAGNOSTICS_PER_FILE)
+                      + " more problems in this file are not shown"));
+        });
     return out;
   }
 }

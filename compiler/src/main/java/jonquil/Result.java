@@ -12,10 +12,9 @@ import jonquil.resolve.ResolvedModel;
 import jonquil.source.SourceFile;
 
 /**
- * Everything one check produced: the texts it read, its diagnostics (sorted), and the
- * verdict on every requirement, plus the resolved model and the solved trains of each
- * checked root. CLI formats, reports and the language server all read
- * this one value, so they cannot disagree.
+ * Everything one check produced: the texts it read, its diagnostics (sorted), and the verdict on
+ * every requirement, plus the resolved model and the solved trains of each checked root. CLI
+ * formats, reports and the language server all read this one value, so they cannot disagree.
  */
 public record Result(
     Map<Path, SourceFile> files,
@@ -32,7 +31,10 @@ public record Result(
   }
 
   /** A result without resolved models, e.g. when nothing could be read. */
-  public Result(Map<Path, SourceFile> files, List<Diagnostic> diagnostics, List<RequirementOutcome> requirements) {
+  public Result(
+      Map<Path, SourceFile> files,
+      List<Diagnostic> diagnostics,
+      List<RequirementOutcome> requirements) {
     this(files, diagnostics, requirements, Map.of(), Map.of());
   }
 
@@ -44,8 +46,13 @@ public record Result(
     return requirements.stream().filter(r -> r.status() == status).count();
   }
 
-  /** True when the CI gate must fail: any error (failed requirements are errors too), or any warning when strict. */
+  /**
+   * True when the CI gate must fail: any error (failed requirements are errors too), or any warning
+   * when strict.
+   */
   public boolean fails(boolean strict) {
-    return count(Severity.ERROR) > 0 || count(RequirementStatus.FAIL) > 0 || (strict && count(Severity.WARNING) > 0);
+    return count(Severity.ERROR) > 0
+        || count(RequirementStatus.FAIL) > 0
+        || (strict && count(Severity.WARNING) > 0);
   }
 }

@@ -20,8 +20,8 @@ import jonquil.syntax.SpecParser;
 import jonquil.syntax.UseDecl;
 
 /**
- * Reads a root file and every file it brings in with 'use', parsing each once, and
- * reports missing files, cycles, paths that leave the project root and chains too deep.
+ * Reads a root file and every file it brings in with 'use', parsing each once, and reports missing
+ * files, cycles, paths that leave the project root and chains too deep.
  */
 final class SpecLoader {
   /** Precedent: include depth limits of 32-200 in compilers; specs nest far less. */
@@ -70,7 +70,8 @@ final class SpecLoader {
   private void readDataFiles(Path file, SpecFile ast) {
     for (jonquil.syntax.Declaration d : ast.declarations()) {
       for (jonquil.syntax.Property p : d.properties()) {
-        if (p.key().text().equals("table") && p.args().size() == 1
+        if (p.key().text().equals("table")
+            && p.args().size() == 1
             && p.args().get(0) instanceof jonquil.syntax.Arg.StringArg s) {
           Path target;
           try {
@@ -103,17 +104,33 @@ final class SpecLoader {
         continue;
       }
       if (!seenHere.add(target)) {
-        report(file, DiagnosticCode.DUPLICATE_USE, use, "'" + use.target() + "' is already used above; remove this line");
+        report(
+            file,
+            DiagnosticCode.DUPLICATE_USE,
+            use,
+            "'" + use.target() + "' is already used above; remove this line");
         continue;
       }
       if (stack.contains(target)) {
-        report(file, DiagnosticCode.USE_CYCLE, use, "using '" + use.target() + "' makes a cycle: " + cycle(stack, target)
-            + "; files cannot use each other in a circle");
+        report(
+            file,
+            DiagnosticCode.USE_CYCLE,
+            use,
+            "using '"
+                + use.target()
+                + "' makes a cycle: "
+                + cycle(stack, target)
+                + "; files cannot use each other in a circle");
         continue;
       }
       if (stack.size() >= MAX_USE_DEPTH) {
-        report(file, DiagnosticCode.USE_TOO_DEEP, use,
-            "files use each other more than " + MAX_USE_DEPTH + " levels deep; flatten the part libraries");
+        report(
+            file,
+            DiagnosticCode.USE_TOO_DEEP,
+            use,
+            "files use each other more than "
+                + MAX_USE_DEPTH
+                + " levels deep; flatten the part libraries");
         continue;
       }
       if (!closure.containsKey(target)) {
@@ -132,7 +149,11 @@ final class SpecLoader {
   private Path target(Path file, UseDecl use) {
     String written = use.target();
     if (written.isBlank()) {
-      report(file, DiagnosticCode.USE_NOT_FOUND, use, "'use' needs a file path, e.g. 'use \"parts.jonq\"'");
+      report(
+          file,
+          DiagnosticCode.USE_NOT_FOUND,
+          use,
+          "'use' needs a file path, e.g. 'use \"parts.jonq\"'");
       return null;
     }
     Path relative;
@@ -143,24 +164,46 @@ final class SpecLoader {
       return null;
     }
     if (relative.isAbsolute() || written.startsWith("/") || written.startsWith("\\")) {
-      report(file, DiagnosticCode.USE_ESCAPES_ROOT, use,
-          "'" + written + "' is an absolute path; write the path relative to this file so the spec works on any machine");
+      report(
+          file,
+          DiagnosticCode.USE_ESCAPES_ROOT,
+          use,
+          "'"
+              + written
+              + "' is an absolute path; write the path relative to this file so the spec works on"
+              + " any machine");
       return null;
     }
     Path target = file.getParent().resolve(relative).normalize();
     if (!target.startsWith(workspace.root())) {
-      report(file, DiagnosticCode.USE_ESCAPES_ROOT, use,
-          "'" + written + "' leads outside the project root '" + workspace.root().getFileName()
+      report(
+          file,
+          DiagnosticCode.USE_ESCAPES_ROOT,
+          use,
+          "'"
+              + written
+              + "' leads outside the project root '"
+              + workspace.root().getFileName()
               + "'; keep used files inside the project");
       return null;
     }
     if (!workspace.reader().exists(target)) {
       String resolved = workspace.root().relativize(target).toString().replace('\\', '/');
-      java.util.List<String> nearby = workspace.reader().specsIn(target.getParent()).stream()
-          .map(p -> file.getParent().relativize(p).toString().replace('\\', '/')).toList();
-      report(file, DiagnosticCode.USE_NOT_FOUND, use, "file '" + written + "' not found"
-          + (resolved.equals(written) ? "" : " (it would be '" + resolved + "' from the project root)")
-          + jonquil.resolve.Suggest.hint(written, nearby));
+      java.util.List<String> nearby =
+          workspace.reader().specsIn(target.getParent()).stream()
+              .map(p -> file.getParent().relativize(p).toString().replace('\\', '/'))
+              .toList();
+      report(
+          file,
+          DiagnosticCode.USE_NOT_FOUND,
+          use,
+          "file '"
+              + written
+              + "' not found"
+              + (resolved.equals(written)
+                  ? ""
+                  : " (it would be '" + resolved + "' from the project root)")
+              + jonquil.resolve.Suggest.hint(written, nearby));
       return null;
     }
     return target;
@@ -169,7 +212,8 @@ final class SpecLoader {
   private ParseResult parseUsed(Path file, UseDecl use, Path target) {
     ParseResult child = parse(target);
     if (child == null) {
-      report(file, DiagnosticCode.USE_UNREADABLE, use, "file '" + use.target() + "' cannot be read");
+      report(
+          file, DiagnosticCode.USE_UNREADABLE, use, "file '" + use.target() + "' cannot be read");
     }
     return child;
   }

@@ -8,9 +8,9 @@ import java.util.Map;
 import jonquil.syntax.ParseMemo;
 
 /**
- * Where a check reads its files from: a project root (no `use` may leave it) and a
- * reader that sees the disk, optionally overlaid with unsaved editor buffers; and, for an
- * editor that checks again after every edit, the memory of earlier parses (null: none).
+ * Where a check reads its files from: a project root (no `use` may leave it) and a reader that sees
+ * the disk, optionally overlaid with unsaved editor buffers; and, for an editor that checks again
+ * after every edit, the memory of earlier parses (null: none).
  */
 public record Workspace(Path root, Reader reader, ParseMemo memo) {
 
@@ -41,7 +41,10 @@ public record Workspace(Path root, Reader reader, ParseMemo memo) {
     this(root, reader, null);
   }
 
-  /** This workspace, parsing with {@code memo}'s memory of earlier parses (one memo per checking thread). */
+  /**
+   * This workspace, parsing with {@code memo}'s memory of earlier parses (one memo per checking
+   * thread).
+   */
   public Workspace withMemo(ParseMemo memo) {
     return new Workspace(root, reader, memo);
   }
@@ -53,17 +56,19 @@ public record Workspace(Path root, Reader reader, ParseMemo memo) {
   /** The disk, with open buffers taking precedence over what is saved. */
   public static Workspace withOverlay(Path root, Map<Path, String> buffers) {
     Map<Path, String> copy = Map.copyOf(buffers);
-    return new Workspace(root, new Reader() {
-      @Override
-      public String read(Path file) throws IOException {
-        String open = copy.get(file.toAbsolutePath().normalize());
-        return open != null ? open : Files.readString(file, StandardCharsets.UTF_8);
-      }
+    return new Workspace(
+        root,
+        new Reader() {
+          @Override
+          public String read(Path file) throws IOException {
+            String open = copy.get(file.toAbsolutePath().normalize());
+            return open != null ? open : Files.readString(file, StandardCharsets.UTF_8);
+          }
 
-      @Override
-      public boolean exists(Path file) {
-        return copy.containsKey(file.toAbsolutePath().normalize()) || Files.isRegularFile(file);
-      }
-    });
+          @Override
+          public boolean exists(Path file) {
+            return copy.containsKey(file.toAbsolutePath().normalize()) || Files.isRegularFile(file);
+          }
+        });
   }
 }

@@ -9,79 +9,125 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
 /**
- * The layering of DEVELOPERS.md, enforced: text → syntax → resolved model → physics →
- * analyses → findings, one direction; ANTLR only in syntax; no protocol types anywhere.
+ * The layering of DEVELOPERS.md, enforced: text → syntax → resolved model → physics → analyses →
+ * findings, one direction; ANTLR only in syntax; no protocol types anywhere.
  */
 class ArchitectureTest {
   static JavaClasses classes;
 
   @BeforeAll
   static void importClasses() {
-    classes = new ClassFileImporter().withImportOption(ImportOption.Predefined.DO_NOT_INCLUDE_TESTS)
-        .importPackages("jonquil");
+    classes =
+        new ClassFileImporter()
+            .withImportOption(ImportOption.Predefined.DO_NOT_INCLUDE_TESTS)
+            .importPackages("jonquil");
   }
 
   @Test
   void onlySyntaxTouchesAntlr() {
-    noClasses().that().resideOutsideOfPackages("jonquil.syntax..", "jonquil.grammar..")
-        .should().dependOnClassesThat().resideInAnyPackage("org.antlr..", "jonquil.grammar..")
+    noClasses()
+        .that()
+        .resideOutsideOfPackages("jonquil.syntax..", "jonquil.grammar..")
+        .should()
+        .dependOnClassesThat()
+        .resideInAnyPackage("org.antlr..", "jonquil.grammar..")
         .check(classes);
   }
 
   @Test
   void noProtocolTypesInTheCompiler() {
-    noClasses().should().dependOnClassesThat().resideInAnyPackage("org.eclipse.lsp4j..").check(classes);
+    noClasses()
+        .should()
+        .dependOnClassesThat()
+        .resideInAnyPackage("org.eclipse.lsp4j..")
+        .check(classes);
   }
 
   @Test
   void unitsAndSourceKnowNothingAbove() {
-    noClasses().that().resideInAnyPackage("jonquil.units..", "jonquil.source..")
-        .should().dependOnClassesThat().resideInAnyPackage("jonquil.syntax..", "jonquil.resolve..", "jonquil.analysis..",
-            "jonquil.cli..", "jonquil.diag..")
+    noClasses()
+        .that()
+        .resideInAnyPackage("jonquil.units..", "jonquil.source..")
+        .should()
+        .dependOnClassesThat()
+        .resideInAnyPackage(
+            "jonquil.syntax..",
+            "jonquil.resolve..",
+            "jonquil.analysis..",
+            "jonquil.cli..",
+            "jonquil.diag..")
         .check(classes);
   }
 
   @Test
   void syntaxDoesNotKnowResolutionOrLater() {
-    noClasses().that().resideInAPackage("jonquil.syntax..")
-        .should().dependOnClassesThat().resideInAnyPackage("jonquil.resolve..", "jonquil.analysis..", "jonquil.cli..")
+    noClasses()
+        .that()
+        .resideInAPackage("jonquil.syntax..")
+        .should()
+        .dependOnClassesThat()
+        .resideInAnyPackage("jonquil.resolve..", "jonquil.analysis..", "jonquil.cli..")
         .check(classes);
   }
 
   @Test
   void resolutionDoesNotKnowAnalysesOrTheCli() {
-    noClasses().that().resideInAPackage("jonquil.resolve..")
-        .should().dependOnClassesThat().resideInAnyPackage("jonquil.analysis..", "jonquil.cli..")
+    noClasses()
+        .that()
+        .resideInAPackage("jonquil.resolve..")
+        .should()
+        .dependOnClassesThat()
+        .resideInAnyPackage("jonquil.analysis..", "jonquil.cli..")
         .check(classes);
   }
 
   @Test
   void diagnosticsDependOnlyOnSourceRanges() {
-    noClasses().that().resideInAPackage("jonquil.diag..")
-        .should().dependOnClassesThat().resideInAnyPackage("jonquil.syntax..", "jonquil.resolve..",
-            "jonquil.analysis..", "jonquil.cli..")
+    noClasses()
+        .that()
+        .resideInAPackage("jonquil.diag..")
+        .should()
+        .dependOnClassesThat()
+        .resideInAnyPackage(
+            "jonquil.syntax..", "jonquil.resolve..", "jonquil.analysis..", "jonquil.cli..")
         .check(classes);
   }
 
   @Test
   void theOpticsAndSafetyCoresAreLibrariesThatKnowNoSpecs() {
-    noClasses().that().resideInAnyPackage("jonquil.optics..", "jonquil.safety..")
-        .should().dependOnClassesThat().resideInAnyPackage("jonquil.syntax..", "jonquil.resolve..",
-            "jonquil.analysis..", "jonquil.cli..", "jonquil.diag..", "jonquil.source..")
+    noClasses()
+        .that()
+        .resideInAnyPackage("jonquil.optics..", "jonquil.safety..")
+        .should()
+        .dependOnClassesThat()
+        .resideInAnyPackage(
+            "jonquil.syntax..",
+            "jonquil.resolve..",
+            "jonquil.analysis..",
+            "jonquil.cli..",
+            "jonquil.diag..",
+            "jonquil.source..")
         .check(classes);
   }
 
   @Test
   void analysesDoNotKnowTheCli() {
-    noClasses().that().resideInAPackage("jonquil.analysis..")
-        .should().dependOnClassesThat().resideInAnyPackage("jonquil.cli..")
+    noClasses()
+        .that()
+        .resideInAPackage("jonquil.analysis..")
+        .should()
+        .dependOnClassesThat()
+        .resideInAnyPackage("jonquil.cli..")
         .check(classes);
   }
 
   @Test
   void onlyTheCliDoesConsoleOutput() {
-    noClasses().that().resideOutsideOfPackage("jonquil.cli..")
-        .should().accessField(System.class, "out")
+    noClasses()
+        .that()
+        .resideOutsideOfPackage("jonquil.cli..")
+        .should()
+        .accessField(System.class, "out")
         .check(classes);
   }
 }

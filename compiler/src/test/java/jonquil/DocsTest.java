@@ -23,9 +23,12 @@ class DocsTest {
   void theReadmeOpensWithTheJobAndGivesExactlyTheTwoCommandsCiRuns() throws IOException {
     String readme = readme();
     String ci = Files.readString(Repo.root().resolve(".ci/run"));
-    String run = "mvn -q -DskipTests package && java -jar lsp/target/jonquil.jar check samples/optical_trap.jonq";
+    String run =
+        "mvn -q -DskipTests package && java -jar lsp/target/jonquil.jar check"
+            + " samples/optical_trap.jonq";
     String test = "mvn -B test";
-    assertTrue(readme.contains("```\n" + run + "\n" + test + "\n```"), "README set-up block changed");
+    assertTrue(
+        readme.contains("```\n" + run + "\n" + test + "\n```"), "README set-up block changed");
     assertTrue(ci.contains(run) && ci.contains(test), ".ci/run must run the README's commands");
     assertTrue(ci.indexOf(test) < ci.indexOf(run), ".ci/run runs the tests first");
   }

@@ -16,8 +16,8 @@ import org.junit.jupiter.params.provider.MethodSource;
 
 /**
  * A file being typed is broken most of the time: every prefix of every sample, every
- * single-character deletion and seeded random mutations must check without an internal
- * failure (the checker turns any exception into J901, which this test forbids).
+ * single-character deletion and seeded random mutations must check without an internal failure (the
+ * checker turns any exception into J901, which this test forbids).
  */
 class TypingTest {
   static Stream<Path> samples() throws IOException {
@@ -25,8 +25,10 @@ class TypingTest {
   }
 
   private static void checkText(Path file, String text) {
-    Result r = Checker.check(Workspace.withOverlay(Repo.samples(), Map.of(file, text)), List.of(file));
-    assertTrue(r.diagnostics().stream().noneMatch(d -> d.code() == DiagnosticCode.INTERNAL_ERROR),
+    Result r =
+        Checker.check(Workspace.withOverlay(Repo.samples(), Map.of(file, text)), List.of(file));
+    assertTrue(
+        r.diagnostics().stream().noneMatch(d -> d.code() == DiagnosticCode.INTERNAL_ERROR),
         () -> "internal failure on:\n" + text);
   }
 

@@ -6,12 +6,17 @@ import jonquil.optics.beam.GaussianBeam;
 import jonquil.resolve.Symbol;
 
 /**
- * Light of one laser line at one point of the train: its polarization and power as a
- * coherency matrix (watts) in the beam's carried frame, the medium it runs in, and its
- * Gaussian mode when the source states one. Lines of one source are incoherent, so each
- * travels as its own Beam.
+ * Light of one laser line at one point of the train: its polarization and power as a coherency
+ * matrix (watts) in the beam's carried frame, the medium it runs in, and its Gaussian mode when the
+ * source states one. Lines of one source are incoherent, so each travels as its own Beam.
  */
-public record Beam(Symbol source, int line, double wavelength, Coherency light, BeamFrame frame, Medium medium,
+public record Beam(
+    Symbol source,
+    int line,
+    double wavelength,
+    Coherency light,
+    BeamFrame frame,
+    Medium medium,
     Optional<GaussianBeam> mode) {
 
   public Beam with(Coherency next) {

@@ -7,16 +7,18 @@ import jonquil.safety.DamageScaling;
 import jonquil.units.Dimension;
 
 /**
- * The damage margin of a part: its declared thresholds divided by the exposure it takes
- * (the light arriving at it). Continuous thresholds compare with the Gaussian peak
- * irradiance, or with P/(2w) for linear power density (common practice: power over the
- * 1/e² diameter); pulsed fluence thresholds are scaled to the actual pulse duration and
- * wavelength (√τ and λ rules, common practice) and compared with the peak fluence.
+ * The damage margin of a part: its declared thresholds divided by the exposure it takes (the light
+ * arriving at it). Continuous thresholds compare with the Gaussian peak irradiance, or with P/(2w)
+ * for linear power density (common practice: power over the 1/e² diameter); pulsed fluence
+ * thresholds are scaled to the actual pulse duration and wavelength (√τ and λ rules, common
+ * practice) and compared with the peak fluence.
  */
 final class DamageModel {
   private DamageModel() {}
 
-  /** The smallest margin over the part's thresholds that apply to this beam; empty when none does. */
+  /**
+   * The smallest margin over the part's thresholds that apply to this beam; empty when none does.
+   */
   static OptionalDouble margin(ResolvedElement part, PortValue incident, double wavelength) {
     if (part.all("damage").isEmpty() || incident.exposure().isEmpty() || incident.power() <= 0) {
       return OptionalDouble.empty();
@@ -38,10 +40,16 @@ final class DamageModel {
         double atWavelength = threshold.number("wavelength").orElse(wavelength);
         double scaled = stated;
         if (tau.isPresent()) {
-          var s = DamageScaling.pulsedFluence(stated, tau.getAsDouble(), atWavelength,
-              incident.pulses().orElseThrow().duration(), wavelength);
+          var s =
+              DamageScaling.pulsedFluence(
+                  stated,
+                  tau.getAsDouble(),
+                  atWavelength,
+                  incident.pulses().orElseThrow().duration(),
+                  wavelength);
           if (!s.evaluated()) {
-            continue; // outside the scaling rule's window: this threshold says nothing about this pulse
+            continue; // outside the scaling rule's window: this threshold says nothing about this
+            // pulse
           }
           scaled = s.get();
         }

@@ -1,6 +1,5 @@
 package jonquil.analysis;
 
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
@@ -9,22 +8,25 @@ import jonquil.optics.Coherency;
 import jonquil.optics.Fresnel;
 import jonquil.optics.Jones;
 import jonquil.optics.beam.Clipping;
-import jonquil.resolve.ElementKind;
 import jonquil.resolve.ResolvedElement;
 import jonquil.resolve.Symbol;
 import jonquil.resolve.Value;
 import org.apache.commons.math3.complex.Complex;
 
 /**
- * The optical model of each element kind: how one incoming beam divides among the
- * element's ports, its ghosts and absorption. Defaults for unstated values are listed
- * in DEVELOPERS.md ("Element models").
+ * The optical model of each element kind: how one incoming beam divides among the element's ports,
+ * its ghosts and absorption. Defaults for unstated values are listed in DEVELOPERS.md ("Element
+ * models").
  */
 final class ElementOptics {
   /** Extinction ratio of an ideal polarizer or polarizing splitter when none is stated. */
   static final double IDEAL_EXTINCTION = 1e12;
-  /** Stated defaults of a polarizing splitter (DEVELOPERS.md): p transmittance and s reflectance. */
+
+  /**
+   * Stated defaults of a polarizing splitter (DEVELOPERS.md): p transmittance and s reflectance.
+   */
   static final double DEFAULT_PBS_TP = 0.95;
+
   static final double DEFAULT_PBS_RS = 0.99;
   static final double DEFAULT_PBS_EXTINCTION = 1000;
 
@@ -39,23 +41,32 @@ final class ElementOptics {
   Response respond(ResolvedElement e, Beam in) {
     double plane = e.number("plane", "angle").orElse(0);
     switch (e.kind()) {
-      case POLARIZER: {
-        double axis = e.number("axis", "angle").orElse(0);
-        double t = e.number("transmission", "t").orElse(1);
-        double er = e.number("extinction", "ratio").orElse(IDEAL_EXTINCTION);
-        return through(in, "out", Jones.polarizer(axis, t, er));
-      }
+      case POLARIZER:
+        {
+          double axis = e.number("axis", "angle").orElse(0);
+          double t = e.number("transmission", "t").orElse(1);
+          double er = e.number("extinction", "ratio").orElse(IDEAL_EXTINCTION);
+          return through(in, "out", Jones.polarizer(axis, t, er));
+        }
       case WAVEPLATE:
         return coatedPlate(e, in, waveplate(e, in.wavelength()));
-      case ROTATOR: {
-        double t = e.number("transmission", "t").orElse(1);
-        return through(in, "out", Jones.rotator(e.number("rotation", "angle").orElse(0)).scaled(Math.sqrt(t)));
-      }
-      case DEPOLARIZER: {
-        double f = e.number("depolarization", "d").orElse(1);
-        double t = e.number("transmission", "t").orElse(1);
-        return Response.balance(in, Map.of("out", in.with(in.light().depolarized(f).scaled(t))), List.of()); // no Jones matrix
-      }
+      case ROTATOR:
+        {
+          double t = e.number("transmission", "t").orElse(1);
+          return through(
+              in,
+              "out",
+              Jones.rotator(e.number("rotation", "angle").orElse(0)).scaled(Math.sqrt(t)));
+        }
+      case DEPOLARIZER:
+        {
+          double f = e.number("depolarization", "d").orElse(1);
+          double t = e.number("transmission", "t").orElse(1);
+          return Response.balance(
+              in,
+              Map.of("out", in.with(in.light().depolarized(f).scaled(t))),
+              List.of()); // no Jones matrix
+        }
       case SPLITTER:
         return splitter(e, in, plane);
       case MIRROR:
@@ -67,22 +78,30 @@ final class ElementOptics {
         return interfaceSurface(e, in, plane);
       case LENS:
         return lens(e, in);
-      case FILTER: {
-        OptionalDouble od = e.number("od", "od");
-        double t = od.isPresent() ? Math.pow(10, -od.getAsDouble()) : e.number("transmission", "t").orElse(1);
-        return Response.balance(in, Map.of("out", in.with(in.light().scaled(t))), List.of()).withJones(scalar("out", t));
-      }
+      case FILTER:
+        {
+          OptionalDouble od = e.number("od", "od");
+          double t =
+              od.isPresent()
+                  ? Math.pow(10, -od.getAsDouble())
+                  : e.number("transmission", "t").orElse(1);
+          return Response.balance(in, Map.of("out", in.with(in.light().scaled(t))), List.of())
+              .withJones(scalar("out", t));
+        }
       case RHOMB:
         return rhomb(e, in);
-      case APERTURE: {
-        double d = e.number("diameter", "diameter").orElse(Double.POSITIVE_INFINITY);
-        if (in.mode().isEmpty()) {
-          return Response.balance(in, Map.of("out", in), List.of()).withJones(scalar("out", 1)); // no beam size
+      case APERTURE:
+        {
+          double d = e.number("diameter", "diameter").orElse(Double.POSITIVE_INFINITY);
+          if (in.mode().isEmpty()) {
+            return Response.balance(in, Map.of("out", in), List.of())
+                .withJones(scalar("out", 1)); // no beam size
+          }
+          double f = Clipping.transmittedFraction(in.mode().get().radius(), d);
+          return Response.balance(in, Map.of("out", in.with(in.light().scaled(f))), List.of())
+              .clipping(1 - f)
+              .withJones(scalar("out", f));
         }
-        double f = Clipping.transmittedFraction(in.mode().get().radius(), d);
-        return Response.balance(in, Map.of("out", in.with(in.light().scaled(f))), List.of()).clipping(1 - f)
-            .withJones(scalar("out", f));
-      }
       case PROBE:
         return Response.balance(in, Map.of("out", in), List.of()).withJones(scalar("out", 1));
       case DETECTOR:
@@ -94,15 +113,21 @@ final class ElementOptics {
   }
 
   private static Response through(Beam in, String port, Jones j) {
-    return Response.balance(in, Map.of(port, in.with(in.light().transform(j))), List.of()).withJones(Map.of(port, j));
+    return Response.balance(in, Map.of(port, in.with(in.light().transform(j))), List.of())
+        .withJones(Map.of(port, j));
   }
 
-  /** √T times the identity: an element that only scales the power by T, whatever the polarization. */
+  /**
+   * √T times the identity: an element that only scales the power by T, whatever the polarization.
+   */
   private static Map<String, Jones> scalar(String port, double powerFactor) {
     return Map.of(port, Jones.rotation(0).scaled(Math.sqrt(Math.max(0, powerFactor))));
   }
 
-  /** Retardance at the beam's wavelength: from the birefringence when the material is known, else scaled as 1/λ. */
+  /**
+   * Retardance at the beam's wavelength: from the birefringence when the material is known, else
+   * scaled as 1/λ.
+   */
   Jones waveplate(ResolvedElement e, double wavelength) {
     Value.Group r = e.param("retardance").orElseThrow();
     double design = r.number("retardance").orElse(0);
@@ -113,7 +138,8 @@ final class ElementOptics {
       waves += e.number("order", "m").orElse(0);
     }
     double retardance = design;
-    Optional<Symbol> material = e.param("material").flatMap(g -> g.slot("material")).map(v -> ((Value.Ref) v).symbol());
+    Optional<Symbol> material =
+        e.param("material").flatMap(g -> g.slot("material")).map(v -> ((Value.Ref) v).symbol());
     OptionalDouble thickness = e.number("thickness", "thickness");
     if (material.isPresent()) {
       OptionalDouble dn = materials.birefringence(material.get(), wavelength);
@@ -123,7 +149,10 @@ final class ElementOptics {
           d = thickness.getAsDouble();
         } else {
           double l0 = designWavelength.orElse(wavelength);
-          d = waves * l0 / Math.abs(materials.birefringence(material.get(), l0).orElse(dn.getAsDouble()));
+          d =
+              waves
+                  * l0
+                  / Math.abs(materials.birefringence(material.get(), l0).orElse(dn.getAsDouble()));
         }
         retardance = 2 * Math.PI * Math.abs(dn.getAsDouble()) * d / wavelength;
         return Jones.retarder(retardance, e.number("fast_axis", "angle").orElse(0));
@@ -136,21 +165,25 @@ final class ElementOptics {
   }
 
   /**
-   * A plate acting by its Jones matrix, whose two coated faces (when a coating is given)
-   * reflect part of the light back as a ghost, summed incoherently like a window's.
+   * A plate acting by its Jones matrix, whose two coated faces (when a coating is given) reflect
+   * part of the light back as a ghost, summed incoherently like a window's.
    */
   private Response coatedPlate(ResolvedElement e, Beam in, Jones j) {
     if (e.param("coating").isEmpty()) {
       return through(in, "out", j);
     }
     Complex outside = materials.index(in.medium(), in.wavelength());
-    Complex inside = e.param("material").flatMap(g -> g.slot("material"))
-        .map(v -> real(materials.index(((Value.Ref) v).symbol(), in.wavelength()))).orElse(new Complex(1.5, 0));
+    Complex inside =
+        e.param("material")
+            .flatMap(g -> g.slot("material"))
+            .map(v -> real(materials.index(((Value.Ref) v).symbol(), in.wavelength())))
+            .orElse(new Complex(1.5, 0));
     SurfaceModel.Powers face = surfaces.surface(e, real(outside), inside, 0, in.wavelength());
     double[] pair = plate(face.rs(), face.ts(), face.rs(), face.ts(), 1);
     Beam out = in.with(in.light().transform(j).scaled(pair[0]));
     Beam back = in.with(in.light().scaled(pair[1]), in.frame().reflect(0, 0));
-    return Response.balance(in, Map.of("out", out), List.of(new Ghost("face reflections", back, true)))
+    return Response.balance(
+            in, Map.of("out", out), List.of(new Ghost("face reflections", back, true)))
         .withJones(Map.of("out", j.scaled(Math.sqrt(pair[0]))));
   }
 
@@ -175,9 +208,12 @@ final class ElementOptics {
     }
     Jones pass = Jones.transmission(Complex.ONE, Complex.ONE, plane, clamp(tp), clamp(ts));
     Coherency through = in.light().transform(pass);
-    Jones reflect = Jones.reflection(new Complex(Math.sqrt(clamp(rp)), 0), new Complex(-Math.sqrt(clamp(rs)), 0), plane);
+    Jones reflect =
+        Jones.reflection(
+            new Complex(Math.sqrt(clamp(rp)), 0), new Complex(-Math.sqrt(clamp(rs)), 0), plane);
     Beam reflected = in.with(in.light().transform(reflect), in.frame().reflect(aoi, plane));
-    return Response.balance(in, Map.of("through", in.with(through), "reflected", reflected), List.of())
+    return Response.balance(
+            in, Map.of("through", in.with(through), "reflected", reflected), List.of())
         .withJones(Map.of("through", pass, "reflected", reflect));
   }
 
@@ -195,17 +231,30 @@ final class ElementOptics {
       double amp = Math.sqrt(r.getAsDouble());
       j = Jones.reflection(new Complex(amp, 0), new Complex(-amp, 0), plane);
     } else {
-      Complex substrate = metal.flatMap(g -> g.slot("metal")).map(v -> materials.index(((Value.Ref) v).symbol(), in.wavelength()))
-          .orElse(new Complex(1.5, 0));
+      Complex substrate =
+          metal
+              .flatMap(g -> g.slot("metal"))
+              .map(v -> materials.index(((Value.Ref) v).symbol(), in.wavelength()))
+              .orElse(new Complex(1.5, 0));
       Fresnel.Coefficients c;
-      if (coating.isPresent() && coating.get().slot("stack").orElse(null) instanceof Value.Ref stack) {
-        c = jonquil.optics.ThinFilm.stack(outside, surfaces.layers(stack.symbol(), in.wavelength()), substrate, aoi, in.wavelength());
+      if (coating.isPresent()
+          && coating.get().slot("stack").orElse(null) instanceof Value.Ref stack) {
+        c =
+            jonquil.optics.ThinFilm.stack(
+                outside,
+                surfaces.layers(stack.symbol(), in.wavelength()),
+                substrate,
+                aoi,
+                in.wavelength());
       } else {
         c = Fresnel.at(outside, substrate, aoi);
       }
       j = Jones.reflection(c.rp(), c.rs(), plane);
     }
-    return Response.balance(in, Map.of("out", in.with(in.light().transform(j), in.frame().reflect(aoi, plane))), List.of())
+    return Response.balance(
+            in,
+            Map.of("out", in.with(in.light().transform(j), in.frame().reflect(aoi, plane))),
+            List.of())
         .withJones(Map.of("out", j));
   }
 
@@ -216,9 +265,13 @@ final class ElementOptics {
   private Response window(ResolvedElement e, Beam in, double plane) {
     double aoi = e.number("aoi", "angle").orElse(0);
     double wl = in.wavelength();
-    Symbol glass = ((Value.Ref) e.param("material").orElseThrow().slot("material").orElseThrow()).symbol();
-    Medium after = e.param("then").flatMap(g -> g.slot("medium")).map(v -> Medium.of(((Value.Ref) v).symbol()))
-        .orElse(in.medium());
+    Symbol glass =
+        ((Value.Ref) e.param("material").orElseThrow().slot("material").orElseThrow()).symbol();
+    Medium after =
+        e.param("then")
+            .flatMap(g -> g.slot("medium"))
+            .map(v -> Medium.of(((Value.Ref) v).symbol()))
+            .orElse(in.medium());
     // Surfaces use the real indices; the glass's (weak) absorption acts in the bulk through τ.
     Complex n1 = real(materials.index(in.medium(), wl));
     Complex ng = real(materials.index(glass, wl));
@@ -228,21 +281,35 @@ final class ElementOptics {
     double inside = Math.asin(Math.max(-1, Math.min(1, sinInside)));
     SurfaceModel.Powers back = surfaces.surface(e, ng, n3, inside, wl);
     double thickness = e.number("thickness", "thickness").orElse(0);
-    double tau = Math.exp(-materials.absorption(Medium.of(glass), wl) * thickness / Math.cos(inside));
+    double tau =
+        Math.exp(-materials.absorption(Medium.of(glass), wl) * thickness / Math.cos(inside));
     double[] tS = plate(front.rs(), front.ts(), back.rs(), back.ts(), tau);
     double[] tP = plate(front.rp(), front.tp(), back.rp(), back.tp(), tau);
     Jones pass = Jones.transmission(Complex.ONE, Complex.ONE, plane, tP[0], tS[0]);
     Coherency through = in.light().transform(pass);
-    Jones reflect = Jones.reflection(new Complex(Math.sqrt(tP[1]), 0), new Complex(-Math.sqrt(tS[1]), 0), plane);
+    Jones reflect =
+        Jones.reflection(
+            new Complex(Math.sqrt(tP[1]), 0), new Complex(-Math.sqrt(tS[1]), 0), plane);
     Beam reflected = in.with(in.light().transform(reflect), in.frame().reflect(aoi, plane));
     // The mode crosses the plate as two flat interfaces with the glass between (tilt neglected).
-    Beam out = in.with(through).in(after).withMode(in.mode()
-        .map(g -> g.intoMedium(ng.getReal()).propagate(thickness).intoMedium(n3.getReal())));
+    Beam out =
+        in.with(through)
+            .in(after)
+            .withMode(
+                in.mode()
+                    .map(
+                        g ->
+                            g.intoMedium(ng.getReal())
+                                .propagate(thickness)
+                                .intoMedium(n3.getReal())));
     return Response.balance(in, Map.of("through", out, "reflected", reflected), List.of())
         .withJones(Map.of("through", pass, "reflected", reflect));
   }
 
-  /** Incoherent plate: {transmittance, reflectance} from the two surfaces and the internal transmittance τ. */
+  /**
+   * Incoherent plate: {transmittance, reflectance} from the two surfaces and the internal
+   * transmittance τ.
+   */
   static double[] plate(double r1, double t1, double r2, double t2, double tau) {
     double denominator = 1 - r1 * r2 * tau * tau;
     double t = t1 * t2 * tau / denominator;
@@ -253,7 +320,8 @@ final class ElementOptics {
   private Response interfaceSurface(ResolvedElement e, Beam in, double plane) {
     double aoi = e.number("aoi", "angle").orElse(0);
     double wl = in.wavelength();
-    Symbol from = ((Value.Ref) e.param("from").orElseThrow().slot("material").orElseThrow()).symbol();
+    Symbol from =
+        ((Value.Ref) e.param("from").orElseThrow().slot("material").orElseThrow()).symbol();
     Symbol to = ((Value.Ref) e.param("to").orElseThrow().slot("material").orElseThrow()).symbol();
     Complex n1 = materials.index(from, wl);
     Complex n2 = materials.index(to, wl);
@@ -261,15 +329,29 @@ final class ElementOptics {
     SurfaceModel.Powers powers = surfaces.surface(e, n1, n2, aoi, wl);
     Jones pass = Jones.transmission(Complex.ONE, Complex.ONE, plane, powers.tp(), powers.ts());
     Coherency through = in.light().transform(pass);
-    Jones reflect = e.param("coating").isPresent()
-        ? Jones.reflection(new Complex(Math.sqrt(powers.rp()), 0), new Complex(-Math.sqrt(powers.rs()), 0), plane)
-        : Jones.reflection(c.rp(), c.rs(), plane);
+    Jones reflect =
+        e.param("coating").isPresent()
+            ? Jones.reflection(
+                new Complex(Math.sqrt(powers.rp()), 0),
+                new Complex(-Math.sqrt(powers.rs()), 0),
+                plane)
+            : Jones.reflection(c.rp(), c.rs(), plane);
     Beam reflected = in.with(in.light().transform(reflect), in.frame().reflect(aoi, plane));
-    Beam out = in.with(through).in(Medium.of(to)).withMode(in.mode().map(g -> g.intoMedium(n2.getReal())));
+    Beam out =
+        in.with(through).in(Medium.of(to)).withMode(in.mode().map(g -> g.intoMedium(n2.getReal())));
     return Response.balance(in, Map.of("through", out, "reflected", reflected), List.of())
         .withJones(Map.of("through", pass, "reflected", reflect))
-        .withSurface(SurfaceFigures.of(wl, aoi, n1, n2, e.param("coating").isPresent(), powers.rs(), powers.rp(),
-            powers.ts(), powers.tp()));
+        .withSurface(
+            SurfaceAtAngle.of(
+                wl,
+                aoi,
+                n1,
+                n2,
+                e.param("coating").isPresent(),
+                powers.rs(),
+                powers.rp(),
+                powers.ts(),
+                powers.tp()));
   }
 
   /** A thin lens: two surfaces at normal incidence; their reflections head back as ghosts. */
@@ -280,17 +362,23 @@ final class ElementOptics {
     if (clear.isPresent() && in.mode().isPresent()) {
       clip = Clipping.transmittedFraction(in.mode().get().radius(), clear.getAsDouble());
     }
-    Beam focused = in.withMode(in.mode().map(g -> g.throughThinLens(focal))).with(in.light().scaled(clip));
+    Beam focused =
+        in.withMode(in.mode().map(g -> g.throughThinLens(focal))).with(in.light().scaled(clip));
     Response r = lensSurfaces(e, focused);
     Map<String, Beam> ports = r.ports();
-    double kept = in.power() > 0 && ports.containsKey("out") ? ports.get("out").power() / in.power() : 1;
-    return Response.balance(in, ports, r.ghosts()).clipping(1 - clip).withJones(scalar("out", kept));
+    double kept =
+        in.power() > 0 && ports.containsKey("out") ? ports.get("out").power() / in.power() : 1;
+    return Response.balance(in, ports, r.ghosts())
+        .clipping(1 - clip)
+        .withJones(scalar("out", kept));
   }
 
   private Response lensSurfaces(ResolvedElement e, Beam in) {
-    Optional<Symbol> glass = e.param("material").flatMap(g -> g.slot("material")).map(v -> ((Value.Ref) v).symbol());
+    Optional<Symbol> glass =
+        e.param("material").flatMap(g -> g.slot("material")).map(v -> ((Value.Ref) v).symbol());
     if (glass.isEmpty() && e.param("coating").isEmpty()) {
-      return Response.balance(in, Map.of("out", in), List.of()); // an ideal lens: nothing known about its surfaces
+      return Response.balance(
+          in, Map.of("out", in), List.of()); // an ideal lens: nothing known about its surfaces
     }
     double wl = in.wavelength();
     Complex outside = real(materials.index(in.medium(), wl));
@@ -299,17 +387,19 @@ final class ElementOptics {
     double[] pair = plate(s1.rs(), s1.ts(), s1.rs(), s1.ts(), 1);
     Beam out = in.with(in.light().scaled(pair[0]));
     Beam back = in.with(in.light().scaled(pair[1]), in.frame().reflect(0, 0));
-    return Response.balance(in, Map.of("out", out), List.of(new Ghost("surface reflections", back, true)));
+    return Response.balance(
+        in, Map.of("out", out), List.of(new Ghost("surface reflections", back, true)));
   }
 
   /**
-   * A total-internal-reflection retarder: each reflection adds the TIR phase difference
-   * between p and s; with an even number of reflections the beam leaves parallel to its
-   * entry, in the same frame. The uncoated faces lose their Fresnel reflections as ghosts.
+   * A total-internal-reflection retarder: each reflection adds the TIR phase difference between p
+   * and s; with an even number of reflections the beam leaves parallel to its entry, in the same
+   * frame. The uncoated faces lose their Fresnel reflections as ghosts.
    */
   private Response rhomb(ResolvedElement e, Beam in) {
     double wl = in.wavelength();
-    Symbol glass = ((Value.Ref) e.param("material").orElseThrow().slot("material").orElseThrow()).symbol();
+    Symbol glass =
+        ((Value.Ref) e.param("material").orElseThrow().slot("material").orElseThrow()).symbol();
     Complex n = real(materials.index(glass, wl));
     Complex outside = real(materials.index(in.medium(), wl));
     double aoi = e.number("aoi", "angle").orElse(0);
@@ -318,14 +408,16 @@ final class ElementOptics {
     Complex rp = tir.rp().pow(reflections);
     Complex rs = tir.rs().pow(reflections);
     if (reflections % 2 == 1) {
-      rs = rs.negate(); // an odd count leaves the frame mirrored; undo the s flip to keep the entry frame
+      rs = rs.negate(); // an odd count leaves the frame mirrored; undo the s flip to keep the
+      // entry frame
     }
     Jones j = Jones.reflection(rp, rs, e.number("axis", "angle").orElse(0));
     SurfaceModel.Powers face = SurfaceModel.Powers.of(Fresnel.at(outside, n, 0));
     double[] pair = plate(face.rs(), face.ts(), face.rs(), face.ts(), 1);
     Beam out = in.with(in.light().transform(j).scaled(pair[0]));
     Beam back = in.with(in.light().scaled(pair[1]), in.frame().reflect(0, 0));
-    return Response.balance(in, Map.of("out", out), List.of(new Ghost("face reflections", back, true)))
+    return Response.balance(
+            in, Map.of("out", out), List.of(new Ghost("face reflections", back, true)))
         .withJones(Map.of("out", j.scaled(Math.sqrt(pair[0]))));
   }
 

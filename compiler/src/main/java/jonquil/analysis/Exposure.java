@@ -3,10 +3,10 @@ package jonquil.analysis;
 import java.util.OptionalDouble;
 
 /**
- * What a beam delivers at one plane, from its power, its 1/e² radius w and its pulses:
- * average irradiance P/(πw²), the Gaussian peak 2P/(πw²), and for pulsed beams the pulse
- * energy, peak power E/τ and peak fluence 2E/(πw²); the peak electric field amplitude
- * follows from I = ½ n ε₀ c |E₀|² in the local medium.
+ * What a beam delivers at one plane, from its power, its 1/e² radius w and its pulses: average
+ * irradiance P/(πw²), the Gaussian peak 2P/(πw²), and for pulsed beams the pulse energy, peak power
+ * E/τ and peak fluence 2E/(πw²); the peak electric field amplitude follows from I = ½ n ε₀ c |E₀|²
+ * in the local medium.
  */
 public record Exposure(
     double power,
@@ -21,10 +21,12 @@ public record Exposure(
 
   /** Vacuum permittivity, F/m (CODATA 2018 recommended value). */
   public static final double EPSILON_0 = 8.8541878128e-12;
+
   /** Speed of light in vacuum, m/s (exact by definition of the metre, SI 2019). */
   public static final double C = 299_792_458.0;
 
-  public static Exposure of(double power, double radius, java.util.Optional<Pulses> pulses, double index) {
+  public static Exposure of(
+      double power, double radius, java.util.Optional<Pulses> pulses, double index) {
     double area = Math.PI * radius * radius;
     double average = power / area;
     double peak = 2 * power / area;
@@ -40,7 +42,16 @@ public record Exposure(
       fluence = OptionalDouble.of(2 * e / area);
       fieldIrradiance = 2 * pp / area;
     }
-    return new Exposure(power, radius, average, peak, energy, peakPower, fluence, peakField(fieldIrradiance, index), index);
+    return new Exposure(
+        power,
+        radius,
+        average,
+        peak,
+        energy,
+        peakPower,
+        fluence,
+        peakField(fieldIrradiance, index),
+        index);
   }
 
   /** |E₀| = √(2I/(n ε₀ c)), in V/m. */

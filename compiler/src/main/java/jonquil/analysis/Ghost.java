@@ -1,4 +1,6 @@
 package jonquil.analysis;
 
-/** Light that leaves an element other than through a port: surface reflections, often heading back. */
+/**
+ * Light that leaves an element other than through a port: surface reflections, often heading back.
+ */
 public record Ghost(String label, Beam beam, boolean backward) {}

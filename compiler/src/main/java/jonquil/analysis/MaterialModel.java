@@ -17,9 +17,9 @@ import jonquil.resolve.Value;
 import org.apache.commons.math3.complex.Complex;
 
 /**
- * Refractive indices of the spec's materials at a wavelength: declared ones from their
- * parameters, catalog ones from their published formulas (absolute indices). Records
- * every use outside a formula's valid range so the analysis can warn about it.
+ * Refractive indices of the spec's materials at a wavelength: declared ones from their parameters,
+ * catalog ones from their published formulas (absolute indices). Records every use outside a
+ * formula's valid range so the analysis can warn about it.
  */
 final class MaterialModel {
   /** A material evaluated outside the wavelengths its data cover. */
@@ -40,7 +40,10 @@ final class MaterialModel {
 
   /** The complex index n + iκ of a medium; the ambient medium is standard air. */
   Complex index(Medium medium, double wavelength) {
-    return medium.material().map(m -> index(m, wavelength)).orElseGet(() -> catalogIndex("air", null, wavelength));
+    return medium
+        .material()
+        .map(m -> index(m, wavelength))
+        .orElseGet(() -> catalogIndex("air", null, wavelength));
   }
 
   Complex index(Symbol material, double wavelength) {
@@ -52,15 +55,26 @@ final class MaterialModel {
       return AIR_FALLBACK;
     }
     ResolvedElement m = e.get();
-    m.param("valid").ifPresent(v -> {
-      double low = v.slot("from..to").filter(x -> x instanceof Value.Group).map(x -> ((Value.Group) x).number("low"))
-          .orElse(OptionalDouble.empty()).orElse(0);
-      double high = v.slot("from..to").filter(x -> x instanceof Value.Group).map(x -> ((Value.Group) x).number("high"))
-          .orElse(OptionalDouble.empty()).orElse(Double.POSITIVE_INFINITY);
-      if (wavelength < low || wavelength > high) {
-        outOfRange.add(new OutOfRange(material, wavelength, new WavelengthRange(low, high)));
-      }
-    });
+    m.param("valid")
+        .ifPresent(
+            v -> {
+              double low =
+                  v.slot("from..to")
+                      .filter(x -> x instanceof Value.Group)
+                      .map(x -> ((Value.Group) x).number("low"))
+                      .orElse(OptionalDouble.empty())
+                      .orElse(0);
+              double high =
+                  v.slot("from..to")
+                      .filter(x -> x instanceof Value.Group)
+                      .map(x -> ((Value.Group) x).number("high"))
+                      .orElse(OptionalDouble.empty())
+                      .orElse(Double.POSITIVE_INFINITY);
+              if (wavelength < low || wavelength > high) {
+                outOfRange.add(
+                    new OutOfRange(material, wavelength, new WavelengthRange(low, high)));
+              }
+            });
     Optional<Value.Group> catalog = m.param("catalog");
     if (catalog.isPresent() && catalog.get().slot("name").orElse(null) instanceof Value.Ref ref) {
       return index(ref.symbol(), wavelength);
@@ -123,14 +137,18 @@ final class MaterialModel {
     return OptionalDouble.empty();
   }
 
-  /** Power absorption coefficient (1/m) of a material: declared, or from its extinction coefficient κ. */
+  /**
+   * Power absorption coefficient (1/m) of a material: declared, or from its extinction coefficient
+   * κ.
+   */
   double absorption(Medium medium, double wavelength) {
     if (medium.material().isEmpty()) {
       return 0;
     }
     Symbol s = medium.material().get();
     Optional<ResolvedElement> e = s.isCatalog() ? Optional.empty() : model.element(s);
-    OptionalDouble declared = e.map(m -> m.number("absorption", "alpha")).orElse(OptionalDouble.empty());
+    OptionalDouble declared =
+        e.map(m -> m.number("absorption", "alpha")).orElse(OptionalDouble.empty());
     if (declared.isPresent()) {
       return declared.getAsDouble();
     }
@@ -138,7 +156,10 @@ final class MaterialModel {
     return 4 * Math.PI * kappa / wavelength;
   }
 
-  /** Linear interpolation in n and k (TabulatedIndex); outside the table the end row holds, with a warning. */
+  /**
+   * Linear interpolation in n and k (TabulatedIndex); outside the table the end row holds, with a
+   * warning.
+   */
   private Complex tabulated(Symbol material, Value.Table t, double wavelength) {
     int size = t.rows().size();
     double[] wl = new double[size];
@@ -150,7 +171,9 @@ final class MaterialModel {
       k[i] = t.rows().get(i)[2];
     }
     TabulatedIndex table = new TabulatedIndex(wl, n, k);
-    table.validRange().filter(r -> !r.contains(wavelength))
+    table
+        .validRange()
+        .filter(r -> !r.contains(wavelength))
         .ifPresent(r -> outOfRange.add(new OutOfRange(material, wavelength, r)));
     return table.index(wavelength);
   }
@@ -167,7 +190,9 @@ final class MaterialModel {
   }
 
   private void check(Symbol symbol, CatalogMaterial entry, double wavelength) {
-    entry.valid().filter(r -> !r.contains(wavelength))
+    entry
+        .valid()
+        .filter(r -> !r.contains(wavelength))
         .ifPresent(r -> outOfRange.add(new OutOfRange(symbol, wavelength, r)));
   }
 }

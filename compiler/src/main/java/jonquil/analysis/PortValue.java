@@ -7,11 +7,20 @@ import jonquil.optics.beam.GaussianBeam;
 import jonquil.source.TextRange;
 
 /**
- * The light leaving one port of one element (or arriving at a beam stop), summed over
- * the source's lines, with its polarization expressed in the table frame.
+ * The light leaving one port of one element (or arriving at a beam stop), summed over the source's
+ * lines, with its polarization expressed in the table frame.
  */
-public record PortValue(String element, String port, Path file, TextRange range, Coherency light, boolean vertical,
-    Optional<GaussianBeam> mode, Optional<Pulses> pulses, double index, double wavelength) {
+public record PortValue(
+    String element,
+    String port,
+    Path file,
+    TextRange range,
+    Coherency light,
+    boolean vertical,
+    Optional<GaussianBeam> mode,
+    Optional<Pulses> pulses,
+    double index,
+    double wavelength) {
   public double power() {
     return light.power();
   }

@@ -16,10 +16,10 @@ import jonquil.resolve.ResolvedTrain;
 import jonquil.resolve.Symbol;
 
 /**
- * Walks the beam-path graph from every source, element by element, and books every
- * watt: at each port, absorbed, stopped by a dump or detector, observed at a probe that
- * ends a path, or stray. The graph is a tree (each element sits in one place and each
- * port feeds at most one path), so a depth-first walk visits every beam once.
+ * Walks the beam-path graph from every source, element by element, and books every watt: at each
+ * port, absorbed, stopped by a dump or detector, observed at a probe that ends a path, or stray.
+ * The graph is a tree (each element sits in one place and each port feeds at most one path), so a
+ * depth-first walk visits every beam once.
  */
 final class Propagator {
   private final ResolvedModel model;
@@ -36,7 +36,7 @@ final class Propagator {
   private final List<Clip> clips = new ArrayList<>();
   private final Map<Symbol, Optional<Pulses>> pulses = new HashMap<>();
   private final Map<String, PortJones> jones = new LinkedHashMap<>();
-  private final Map<String, SurfaceFigures> surfaces = new LinkedHashMap<>();
+  private final Map<String, SurfaceAtAngle> surfaces = new LinkedHashMap<>();
   private double sourcePower;
   private double absorbed;
   private double stopped;
@@ -56,7 +56,8 @@ final class Propagator {
     }
     for (ResolvedTrain train : model.trains()) {
       for (ResolvedTrain.BeamPath path : train.paths()) {
-        if (path.branchFrom().isPresent() || path.steps().isEmpty()
+        if (path.branchFrom().isPresent()
+            || path.steps().isEmpty()
             || !(path.steps().get(0) instanceof ResolvedTrain.Element start)) {
           continue;
         }
@@ -64,10 +65,12 @@ final class Propagator {
         if (source.isEmpty() || source.get().kind() != ElementKind.SOURCE) {
           continue;
         }
-        double wl = wavelengthOverride.orElse(source.get().number("wavelength", "wavelength").orElse(1e-6));
+        double wl =
+            wavelengthOverride.orElse(source.get().number("wavelength", "wavelength").orElse(1e-6));
         pulses.put(start.symbol(), Pulses.of(source.get()));
-        List<Beam> beams = SourceBeams.of(source.get(), wavelengthOverride,
-            materials.index(Medium.AMBIENT, wl).getReal());
+        List<Beam> beams =
+            SourceBeams.of(
+                source.get(), wavelengthOverride, materials.index(Medium.AMBIENT, wl).getReal());
         double emitted = beams.stream().mapToDouble(Beam::power).sum();
         sourcePower += emitted;
         record(start.symbol().name(), "out", start, beams);
@@ -76,8 +79,19 @@ final class Propagator {
       }
     }
     List<ElementBudget> budgets = new ArrayList<>();
-    budgetTotals.forEach((name, t) -> budgets.add(new ElementBudget(name, t[0], budgetPorts.get(name), t[1], t[2])));
-    return new TrainSolution(ports, incident, budgets, stray, clips, sourcePower, absorbed, stopped, observed, jones,
+    budgetTotals.forEach(
+        (name, t) -> budgets.add(new ElementBudget(name, t[0], budgetPorts.get(name), t[1], t[2])));
+    return new TrainSolution(
+        ports,
+        incident,
+        budgets,
+        stray,
+        clips,
+        sourcePower,
+        absorbed,
+        stopped,
+        observed,
+        jones,
         surfaces);
   }
 
@@ -109,8 +123,14 @@ final class Propagator {
       observed += leaving;
     } else {
       String origin = last.symbol().name() + "." + last.exitPort();
-      stray.add(new StrayBeam(origin, "leaves '" + origin + "' at the end of a path", leaving, false,
-          last.symbol().file(), last.range()));
+      stray.add(
+          new StrayBeam(
+              origin,
+              "leaves '" + origin + "' at the end of a path",
+              leaving,
+              false,
+              last.symbol().file(),
+              last.range()));
     }
   }
 
@@ -120,7 +140,11 @@ final class Propagator {
       Beam in = gap.medium().map(m -> b.in(Medium.of(m))).orElse(b);
       double n = materials.index(in.medium(), in.wavelength()).getReal();
       // A medium change at the start of a gap is a flat interface for the beam's mode.
-      in = in.withMode(in.mode().map(g -> g.index() == n ? g : g.intoMedium(n)).map(g -> g.propagate(gap.length())));
+      in =
+          in.withMode(
+              in.mode()
+                  .map(g -> g.index() == n ? g : g.intoMedium(n))
+                  .map(g -> g.propagate(gap.length())));
       double t = Math.exp(-materials.absorption(in.medium(), in.wavelength()) * gap.length());
       absorbed += in.power() * (1 - t);
       out.add(in.with(in.light().scaled(t)));
@@ -143,7 +167,11 @@ final class Propagator {
       totals[0] += b.power();
       Response r = optics.respond(element, b);
       // The hover shows one matrix per port: the one for the first line that arrives.
-      r.jones().forEach((port, j) -> jones.putIfAbsent(name + "." + port, new PortJones(name, port, b.wavelength(), j)));
+      r.jones()
+          .forEach(
+              (port, j) ->
+                  jones.putIfAbsent(
+                      name + "." + port, new PortJones(name, port, b.wavelength(), j)));
       r.surface().ifPresent(f -> surfaces.putIfAbsent(name, f));
       clippedMost = Math.max(clippedMost, r.clipped());
       totals[1] += r.absorbed();
@@ -152,11 +180,18 @@ final class Propagator {
       } else {
         absorbed += r.absorbed();
       }
-      r.ports().forEach((port, beam) -> atPorts.computeIfAbsent(port, k -> new ArrayList<>()).add(beam));
+      r.ports()
+          .forEach((port, beam) -> atPorts.computeIfAbsent(port, k -> new ArrayList<>()).add(beam));
       for (Ghost g : r.ghosts()) {
         totals[2] += g.beam().power();
-        stray.add(new StrayBeam(name, g.label() + " of '" + name + "'" + (g.backward() ? ", heading back" : ""),
-            g.beam().power(), g.backward(), placed.symbol().file(), placed.range()));
+        stray.add(
+            new StrayBeam(
+                name,
+                g.label() + " of '" + name + "'" + (g.backward() ? ", heading back" : ""),
+                g.beam().power(),
+                g.backward(),
+                placed.symbol().file(),
+                placed.range()));
       }
     }
     if (jonquil.optics.beam.Clipping.significant(1 - clippedMost)) {
@@ -182,9 +217,16 @@ final class Propagator {
       } else {
         double p = e.getValue().stream().mapToDouble(Beam::power).sum();
         Vec3 arriving = beams.isEmpty() ? Vec3.Z : beams.get(0).frame().k();
-        boolean backward = e.getValue().stream().anyMatch(b -> b.frame().k().dot(arriving) < -0.999);
-        stray.add(new StrayBeam(key, "leaves '" + key + "', which no path follows", p, backward,
-            placed.symbol().file(), placed.range()));
+        boolean backward =
+            e.getValue().stream().anyMatch(b -> b.frame().k().dot(arriving) < -0.999);
+        stray.add(
+            new StrayBeam(
+                key,
+                "leaves '" + key + "', which no path follows",
+                p,
+                backward,
+                placed.symbol().file(),
+                placed.range()));
       }
     }
     return atPorts.getOrDefault(placed.exitPort(), List.of());
@@ -194,15 +236,27 @@ final class Propagator {
     String key = port.isEmpty() ? element : element + "." + port;
     PortValue v = value(element, port, placed, beams);
     Coherency total = portLight.merge(key, v.light(), Coherency::plus);
-    ports.put(key, new PortValue(element, port, v.file(), v.range(), total, v.vertical(), v.mode(), v.pulses(), v.index(),
-        v.wavelength()));
+    ports.put(
+        key,
+        new PortValue(
+            element,
+            port,
+            v.file(),
+            v.range(),
+            total,
+            v.vertical(),
+            v.mode(),
+            v.pulses(),
+            v.index(),
+            v.wavelength()));
   }
 
   /**
-   * The light of all lines at one place, in the table frame. Its mode and pulses are those
-   * of the strongest line (exposure is judged on one beam size; lines usually share it).
+   * The light of all lines at one place, in the table frame. Its mode and pulses are those of the
+   * strongest line (exposure is judged on one beam size; lines usually share it).
    */
-  private PortValue value(String element, String port, ResolvedTrain.Element placed, List<Beam> beams) {
+  private PortValue value(
+      String element, String port, ResolvedTrain.Element placed, List<Beam> beams) {
     Coherency sum = Coherency.ZERO;
     boolean vertical = false;
     Beam strongest = null;
@@ -213,11 +267,27 @@ final class Propagator {
         strongest = b;
       }
     }
-    Optional<jonquil.optics.beam.GaussianBeam> mode = strongest == null ? Optional.empty() : strongest.mode();
-    Optional<Pulses> train = strongest == null ? Optional.empty() : pulses.getOrDefault(strongest.source(), Optional.empty());
-    double index = strongest == null ? 1 : materials.index(strongest.medium(), strongest.wavelength()).getReal();
+    Optional<jonquil.optics.beam.GaussianBeam> mode =
+        strongest == null ? Optional.empty() : strongest.mode();
+    Optional<Pulses> train =
+        strongest == null
+            ? Optional.empty()
+            : pulses.getOrDefault(strongest.source(), Optional.empty());
+    double index =
+        strongest == null
+            ? 1
+            : materials.index(strongest.medium(), strongest.wavelength()).getReal();
     double wavelength = strongest == null ? 0 : strongest.wavelength();
-    return new PortValue(element, port, placed.symbol().file(), placed.range(), sum, vertical, mode, train, index,
+    return new PortValue(
+        element,
+        port,
+        placed.symbol().file(),
+        placed.range(),
+        sum,
+        vertical,
+        mode,
+        train,
+        index,
         wavelength);
   }
 

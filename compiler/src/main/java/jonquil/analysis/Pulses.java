@@ -18,7 +18,8 @@ public record Pulses(double repetitionRate, double duration) {
     var energy = source.number("pulse_energy", "energy");
     var power = source.number("power", "power");
     if (energy.isPresent() && power.isPresent() && energy.getAsDouble() > 0) {
-      return Optional.of(new Pulses(power.getAsDouble() / energy.getAsDouble(), duration.getAsDouble()));
+      return Optional.of(
+          new Pulses(power.getAsDouble() / energy.getAsDouble(), duration.getAsDouble()));
     }
     return Optional.empty();
   }

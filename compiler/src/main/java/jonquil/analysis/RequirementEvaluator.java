@@ -12,18 +12,26 @@ import jonquil.resolve.ResolvedRequirement.Criterion;
 import jonquil.resolve.Value;
 
 /**
- * Evaluates requirements on a solved train: the computed value, the bound and the margin
- * (positive inside the bound, negative outside) in SI units. Measures this version does
- * not compute are reported as not evaluated, with the reason.
+ * Evaluates requirements on a solved train: the computed value, the bound and the margin (positive
+ * inside the bound, negative outside) in SI units. Measures this version does not compute are
+ * reported as not evaluated, with the reason.
  */
 final class RequirementEvaluator {
   /** Tolerance on a stated polarization state when the spec gives none. */
   static final double DEFAULT_STATE_TOLERANCE = Math.toRadians(1);
+
   /** Largest DOP that still counts as 'unpolarized'. */
   static final double UNPOLARIZED_DOP = 0.01;
 
   /** The verdict on one criterion. */
-  record Verdict(boolean evaluated, boolean pass, double value, double bound, double margin, String unit, String text) {
+  record Verdict(
+      boolean evaluated,
+      boolean pass,
+      double value,
+      double bound,
+      double margin,
+      String unit,
+      String text) {
     static Verdict notEvaluated(String reason) {
       return new Verdict(false, false, Double.NaN, Double.NaN, Double.NaN, "", reason);
     }
@@ -32,7 +40,8 @@ final class RequirementEvaluator {
   private RequirementEvaluator() {}
 
   /** All criteria of a requirement, worst margin first; over a band, at its worst wavelength. */
-  static Verdict evaluate(ResolvedRequirement r, ResolvedModel model, Function<OptionalDouble, TrainSolution> solve) {
+  static Verdict evaluate(
+      ResolvedRequirement r, ResolvedModel model, Function<OptionalDouble, TrainSolution> solve) {
     if (r.yield().isPresent()) {
       return yieldOverTolerances(r, model);
     }
@@ -54,19 +63,23 @@ final class RequirementEvaluator {
     return evaluate(r, model, solve.apply(OptionalDouble.empty()));
   }
 
-  /** Builds drawn for a yield; the standard error of the estimate is then at most 0.5/√N ≈ 2.5 %. */
+  /**
+   * Builds drawn for a yield; the standard error of the estimate is then at most 0.5/√N ≈ 2.5 %.
+   */
   static final int YIELD_TRIALS = 400;
+
   /** A fixed seed: the same spec gives the same yield on every run and in every tool. */
   static final long YIELD_SEED = 0x4A4F4E51L;
 
   /**
-   * The fraction of toleranced builds that meet the requirement, by Monte Carlo over every
-   * '±' in the spec (uniform within each tolerance), compared with the yield bound.
+   * The fraction of toleranced builds that meet the requirement, by Monte Carlo over every '±' in
+   * the spec (uniform within each tolerance), compared with the yield bound.
    */
   private static Verdict yieldOverTolerances(ResolvedRequirement r, ResolvedModel model) {
     if (!Tolerances.any(model)) {
-      return Verdict.notEvaluated("the spec states no tolerances ('± ...'), so every build is the same; "
-          + "check the requirement itself without 'yield'");
+      return Verdict.notEvaluated(
+          "the spec states no tolerances ('± ...'), so every build is the same; "
+              + "check the requirement itself without 'yield'");
     }
     java.util.SplittableRandom random = new java.util.SplittableRandom(YIELD_SEED);
     int pass = 0;
@@ -74,7 +87,8 @@ final class RequirementEvaluator {
       ResolvedModel build = Tolerances.draw(model, random);
       MaterialModel m = new MaterialModel(build);
       ElementOptics optics = new ElementOptics(m, new SurfaceModel(build, m));
-      Verdict v = evaluate(r, build, new Propagator(build, optics, m).solve(OptionalDouble.empty()));
+      Verdict v =
+          evaluate(r, build, new Propagator(build, optics, m).solve(OptionalDouble.empty()));
       if (!v.evaluated()) {
         return Verdict.notEvaluated("the yield's requirement cannot be evaluated: " + v.text());
       }
@@ -83,7 +97,11 @@ final class RequirementEvaluator {
       }
     }
     double fraction = (double) pass / YIELD_TRIALS;
-    return compare(r.yield().get(), fraction, "%", YIELD_TRIALS + " toleranced builds, uniform within each '±'");
+    return compare(
+        r.yield().get(),
+        fraction,
+        "%",
+        YIELD_TRIALS + " toleranced builds, uniform within each '±'");
   }
 
   static Verdict evaluate(ResolvedRequirement r, ResolvedModel model, TrainSolution s) {
@@ -100,32 +118,41 @@ final class RequirementEvaluator {
     return worst == null ? Verdict.notEvaluated("the requirement has no bound") : worst;
   }
 
-  private static Verdict criterion(ResolvedRequirement r, Criterion c, TrainSolution s, ResolvedModel model) {
+  private static Verdict criterion(
+      ResolvedRequirement r, Criterion c, TrainSolution s, ResolvedModel model) {
     Measure m = c.measure();
     Optional<PortValue> at = r.at().flatMap(t -> s.port(Propagator.key(t.symbol(), t.port())));
     switch (m) {
-      case POWER: {
-        if (at.isEmpty()) {
-          return unreached(r);
+      case POWER:
+        {
+          if (at.isEmpty()) {
+            return unreached(r);
+          }
+          double p = at.get().power();
+          return c.relativeToSource()
+              ? compare(
+                  c, s.sourcePower() == 0 ? 0 : p / s.sourcePower(), "", "of the source power")
+              : compare(c, p, "W", "");
         }
-        double p = at.get().power();
-        return c.relativeToSource()
-            ? compare(c, s.sourcePower() == 0 ? 0 : p / s.sourcePower(), "", "of the source power")
-            : compare(c, p, "W", "");
-      }
-      case TRANSMISSION: {
-        Optional<PortValue> a = r.from().flatMap(t -> s.port(Propagator.key(t.symbol(), t.port())));
-        Optional<PortValue> b = r.to().flatMap(t -> s.port(Propagator.key(t.symbol(), t.port())));
-        if (a.isEmpty() || b.isEmpty()) {
-          return unreached(r);
+      case TRANSMISSION:
+        {
+          Optional<PortValue> a =
+              r.from().flatMap(t -> s.port(Propagator.key(t.symbol(), t.port())));
+          Optional<PortValue> b = r.to().flatMap(t -> s.port(Propagator.key(t.symbol(), t.port())));
+          if (a.isEmpty() || b.isEmpty()) {
+            return unreached(r);
+          }
+          return compare(c, a.get().power() == 0 ? 0 : b.get().power() / a.get().power(), "", "");
         }
-        return compare(c, a.get().power() == 0 ? 0 : b.get().power() / a.get().power(), "", "");
-      }
       case STRAY:
         return compare(c, s.strayPower(), "W", "");
       case BACK_REFLECTION:
         return c.relativeToSource()
-            ? compare(c, s.sourcePower() == 0 ? 0 : s.backReflected() / s.sourcePower(), "", "of the source power")
+            ? compare(
+                c,
+                s.sourcePower() == 0 ? 0 : s.backReflected() / s.sourcePower(),
+                "",
+                "of the source power")
             : compare(c, s.backReflected(), "W", "");
       case DOP:
         return at.isEmpty() ? unreached(r) : compare(c, at.get().light().dop(), "", "");
@@ -134,7 +161,9 @@ final class RequirementEvaluator {
       case AZIMUTH:
         return at.isEmpty() ? unreached(r) : compare(c, at.get().light().azimuth(), "rad", "");
       case ELLIPTICITY:
-        return at.isEmpty() ? unreached(r) : compare(c, at.get().light().ellipticityAngle(), "rad", "");
+        return at.isEmpty()
+            ? unreached(r)
+            : compare(c, at.get().light().ellipticityAngle(), "rad", "");
       case POLARIZATION:
       case HANDEDNESS:
         return at.isEmpty() ? unreached(r) : state(c, at.get().light());
@@ -154,13 +183,16 @@ final class RequirementEvaluator {
       case EYEWEAR_OD:
         return SafetyVerdicts.evaluate(r, c, s, model);
       default:
-        return Verdict.notEvaluated("'" + m.word() + "' needs the beam and exposure analysis, which this version does not run");
+        return Verdict.notEvaluated(
+            "'"
+                + m.word()
+                + "' needs the beam and exposure analysis, which this version does not run");
     }
   }
 
   /**
-   * A quantity of the exposure, at a place (the light arriving there) or everywhere (the
-   * largest value over every element's input, which is where parts take the beam).
+   * A quantity of the exposure, at a place (the light arriving there) or everywhere (the largest
+   * value over every element's input, which is where parts take the beam).
    */
   private static Verdict exposure(ResolvedRequirement r, Criterion c, TrainSolution s) {
     java.util.List<PortValue> places = new java.util.ArrayList<>();
@@ -169,7 +201,8 @@ final class RequirementEvaluator {
     } else if (r.at().isPresent()) {
       var t = r.at().get();
       String key = Propagator.key(t.symbol(), t.port());
-      Optional<PortValue> v = t.port().isPresent() ? s.port(key) : s.incidentAt(key).or(() -> s.port(key));
+      Optional<PortValue> v =
+          t.port().isPresent() ? s.port(key) : s.incidentAt(key).or(() -> s.port(key));
       v.ifPresent(places::add);
     }
     if (places.isEmpty()) {
@@ -179,13 +212,20 @@ final class RequirementEvaluator {
     for (PortValue p : places) {
       Optional<Exposure> e = p.exposure();
       if (e.isEmpty()) {
-        return Verdict.notEvaluated("the beam size is unknown: give the source a 'beam' line (waist or divergence)");
+        return Verdict.notEvaluated(
+            "the beam size is unknown: give the source a 'beam' line (waist or divergence)");
       }
       OptionalDouble value = quantity(c.measure(), e.get());
       if (value.isEmpty()) {
-        return Verdict.notEvaluated("'" + c.measure().word() + "' applies to pulsed sources; this one is continuous");
+        return Verdict.notEvaluated(
+            "'" + c.measure().word() + "' applies to pulsed sources; this one is continuous");
       }
-      Verdict v = compare(c, value.getAsDouble(), unit(c.measure()), r.everywhere() ? "at '" + p.element() + "'" : "");
+      Verdict v =
+          compare(
+              c,
+              value.getAsDouble(),
+              unit(c.measure()),
+              r.everywhere() ? "at '" + p.element() + "'" : "");
       if (worst == null || v.margin() < worst.margin()) {
         worst = v;
       }
@@ -194,7 +234,8 @@ final class RequirementEvaluator {
   }
 
   /** The smallest damage margin at a part, or over every part that declares thresholds. */
-  private static Verdict damage(ResolvedRequirement r, Criterion c, TrainSolution s, ResolvedModel model) {
+  private static Verdict damage(
+      ResolvedRequirement r, Criterion c, TrainSolution s, ResolvedModel model) {
     java.util.List<String> names = new java.util.ArrayList<>();
     if (r.everywhere()) {
       names.addAll(s.incident().keySet());
@@ -211,16 +252,22 @@ final class RequirementEvaluator {
       double wavelength = in.get().wavelength();
       OptionalDouble margin = DamageModel.margin(part.get(), in.get(), wavelength);
       if (margin.isPresent()) {
-        Verdict v = compare(c, margin.getAsDouble(), "", "at '" + name + "'; thresholds scaled by common-practice rules");
+        Verdict v =
+            compare(
+                c,
+                margin.getAsDouble(),
+                "",
+                "at '" + name + "'; thresholds scaled by common-practice rules");
         if (worst == null || v.margin() < worst.margin()) {
           worst = v;
         }
       }
     }
     if (worst == null) {
-      return Verdict.notEvaluated(s.incident().values().stream().anyMatch(v -> v.mode().isPresent())
-          ? "no part in reach declares a damage threshold that applies to this beam"
-          : "the beam size is unknown: give the source a 'beam' line");
+      return Verdict.notEvaluated(
+          s.incident().values().stream().anyMatch(v -> v.mode().isPresent())
+              ? "no part in reach declares a damage threshold that applies to this beam"
+              : "the beam size is unknown: give the source a 'beam' line");
     }
     return worst;
   }
@@ -230,8 +277,10 @@ final class RequirementEvaluator {
       case IRRADIANCE:
         return OptionalDouble.of(e.averageIrradiance());
       case PEAK_IRRADIANCE:
-        return OptionalDouble.of(e.peakPower().isPresent()
-            ? 2 * e.peakPower().getAsDouble() / (Math.PI * e.beamRadius() * e.beamRadius()) : e.peakIrradiance());
+        return OptionalDouble.of(
+            e.peakPower().isPresent()
+                ? 2 * e.peakPower().getAsDouble() / (Math.PI * e.beamRadius() * e.beamRadius())
+                : e.peakIrradiance());
       case FLUENCE:
         return e.peakFluence();
       case PEAK_FIELD:
@@ -301,7 +350,10 @@ final class RequirementEvaluator {
     return new Verdict(true, pass, value, bound, margin, unit, note);
   }
 
-  /** 'is linear 90 deg ± 2 deg', 'is circular right', 'is unpolarized', ... against the computed light. */
+  /**
+   * 'is linear 90 deg ± 2 deg', 'is circular right', 'is unpolarized', ... against the computed
+   * light.
+   */
   static Verdict state(Criterion c, Coherency light) {
     Value.Group g = c.state().orElseThrow();
     Optional<String> hand = g.word("handedness");
@@ -309,7 +361,14 @@ final class RequirementEvaluator {
       Handedness wanted = hand.orElse("right").equals("left") ? Handedness.LEFT : Handedness.RIGHT;
       double chi = light.ellipticityAngle();
       double signed = wanted == Handedness.RIGHT ? chi : -chi;
-      return new Verdict(true, signed > 0, chi, 0, signed, "rad", "ellipticity angle; " + light.handedness().describe());
+      return new Verdict(
+          true,
+          signed > 0,
+          chi,
+          0,
+          signed,
+          "rad",
+          "ellipticity angle; " + light.handedness().describe());
     }
     String form = g.word("form").orElse("unpolarized");
     if (g.word("form_mix").isPresent()) {
@@ -325,32 +384,56 @@ final class RequirementEvaluator {
   private static Verdict pureState(Value.Group g, String form, Coherency light) {
     double chi = light.ellipticityAngle();
     switch (form) {
-      case "linear": {
-        Value.Num az = (Value.Num) g.slot("azimuth").orElseThrow();
-        double tol = az.tolerance().orElse(DEFAULT_STATE_TOLERANCE);
-        double off = Math.abs(wrapHalfTurn(light.azimuth() - az.si()));
-        double margin = Math.min(tol - off, tol - Math.abs(chi));
-        return new Verdict(true, margin >= 0, light.azimuth(), az.si(), margin, "rad", "azimuth against the table frame");
-      }
-      case "circular": {
-        Handedness wanted = g.word("handedness").orElse("right").equals("left") ? Handedness.LEFT : Handedness.RIGHT;
-        double signed = wanted == Handedness.RIGHT ? chi : -chi;
-        double margin = signed - (Math.PI / 4 - DEFAULT_STATE_TOLERANCE);
-        return new Verdict(true, margin >= 0, chi, wanted == Handedness.RIGHT ? Math.PI / 4 : -Math.PI / 4, margin, "rad",
-            "ellipticity angle; " + light.handedness().describe());
-      }
-      case "elliptical": {
-        Value.Num az = (Value.Num) g.slot("azimuth").orElseThrow();
-        double tol = az.tolerance().orElse(DEFAULT_STATE_TOLERANCE);
-        double wantedChi = Math.atan(g.number("axis_ratio").orElse(0))
-            * (g.word("handedness").orElse("right").equals("left") ? -1 : 1);
-        double margin = Math.min(tol - Math.abs(wrapHalfTurn(light.azimuth() - az.si())), tol - Math.abs(chi - wantedChi));
-        return new Verdict(true, margin >= 0, light.azimuth(), az.si(), margin, "rad", "");
-      }
-      default: {
-        double margin = UNPOLARIZED_DOP - light.dop();
-        return new Verdict(true, margin >= 0, light.dop(), UNPOLARIZED_DOP, margin, "", "");
-      }
+      case "linear":
+        {
+          Value.Num az = (Value.Num) g.slot("azimuth").orElseThrow();
+          double tol = az.tolerance().orElse(DEFAULT_STATE_TOLERANCE);
+          double off = Math.abs(wrapHalfTurn(light.azimuth() - az.si()));
+          double margin = Math.min(tol - off, tol - Math.abs(chi));
+          return new Verdict(
+              true,
+              margin >= 0,
+              light.azimuth(),
+              az.si(),
+              margin,
+              "rad",
+              "azimuth against the table frame");
+        }
+      case "circular":
+        {
+          Handedness wanted =
+              g.word("handedness").orElse("right").equals("left")
+                  ? Handedness.LEFT
+                  : Handedness.RIGHT;
+          double signed = wanted == Handedness.RIGHT ? chi : -chi;
+          double margin = signed - (Math.PI / 4 - DEFAULT_STATE_TOLERANCE);
+          return new Verdict(
+              true,
+              margin >= 0,
+              chi,
+              wanted == Handedness.RIGHT ? Math.PI / 4 : -Math.PI / 4,
+              margin,
+              "rad",
+              "ellipticity angle; " + light.handedness().describe());
+        }
+      case "elliptical":
+        {
+          Value.Num az = (Value.Num) g.slot("azimuth").orElseThrow();
+          double tol = az.tolerance().orElse(DEFAULT_STATE_TOLERANCE);
+          double wantedChi =
+              Math.atan(g.number("axis_ratio").orElse(0))
+                  * (g.word("handedness").orElse("right").equals("left") ? -1 : 1);
+          double margin =
+              Math.min(
+                  tol - Math.abs(wrapHalfTurn(light.azimuth() - az.si())),
+                  tol - Math.abs(chi - wantedChi));
+          return new Verdict(true, margin >= 0, light.azimuth(), az.si(), margin, "rad", "");
+        }
+      default:
+        {
+          double margin = UNPOLARIZED_DOP - light.dop();
+          return new Verdict(true, margin >= 0, light.dop(), UNPOLARIZED_DOP, margin, "", "");
+        }
     }
   }
 

@@ -5,8 +5,8 @@ import java.util.OptionalDouble;
 import jonquil.source.TextRange;
 
 /**
- * The verdict on one requirement line: computed value, bound and margin in SI units
- * (the unit is named by {@code siUnit}), plus a reason when it was not evaluated.
+ * The verdict on one requirement line: computed value, bound and margin in SI units (the unit is
+ * named by {@code siUnit}), plus a reason when it was not evaluated.
  */
 public record RequirementOutcome(
     Path file,
@@ -19,8 +19,17 @@ public record RequirementOutcome(
     String siUnit,
     String reason) {
 
-  public static RequirementOutcome notEvaluated(Path file, TextRange range, String text, String reason) {
-    return new RequirementOutcome(file, range, text, RequirementStatus.NOT_EVALUATED,
-        OptionalDouble.empty(), OptionalDouble.empty(), OptionalDouble.empty(), "", reason);
+  public static RequirementOutcome notEvaluated(
+      Path file, TextRange range, String text, String reason) {
+    return new RequirementOutcome(
+        file,
+        range,
+        text,
+        RequirementStatus.NOT_EVALUATED,
+        OptionalDouble.empty(),
+        OptionalDouble.empty(),
+        OptionalDouble.empty(),
+        "",
+        reason);
   }
 }

@@ -6,12 +6,17 @@ import java.util.Optional;
 import jonquil.optics.Jones;
 
 /**
- * What one element does to one incoming beam: the beams at its ports, what it absorbs, its
- * ghosts; and, for the hover, the Jones matrix behind each port (none for an element that
- * depolarizes or stops the light) and an interface's surface figures.
+ * What one element does to one incoming beam: the beams at its ports, what it absorbs, its ghosts;
+ * and, for the hover, the Jones matrix behind each port (none for an element that depolarizes or
+ * stops the light) and an interface's surface figures.
  */
-record Response(Map<String, Beam> ports, double absorbed, List<Ghost> ghosts, double clipped, Map<String, Jones> jones,
-    Optional<SurfaceFigures> surface) {
+record Response(
+    Map<String, Beam> ports,
+    double absorbed,
+    List<Ghost> ghosts,
+    double clipped,
+    Map<String, Jones> jones,
+    Optional<SurfaceAtAngle> surface) {
   Response {
     ports = Map.copyOf(ports);
     ghosts = List.copyOf(ghosts);
@@ -33,7 +38,7 @@ record Response(Map<String, Beam> ports, double absorbed, List<Ghost> ghosts, do
   }
 
   /** The same response with an interface's figures. */
-  Response withSurface(SurfaceFigures figures) {
+  Response withSurface(SurfaceAtAngle figures) {
     return new Response(ports, absorbed, ghosts, clipped, jones, Optional.of(figures));
   }
 
@@ -43,7 +48,9 @@ record Response(Map<String, Beam> ports, double absorbed, List<Ghost> ghosts, do
 
   /** Builds a response and books as absorbed whatever the ports and ghosts do not carry. */
   static Response balance(Beam in, Map<String, Beam> ports, List<Ghost> ghosts) {
-    double out = ports.values().stream().mapToDouble(Beam::power).sum() + ghosts.stream().mapToDouble(g -> g.beam().power()).sum();
+    double out =
+        ports.values().stream().mapToDouble(Beam::power).sum()
+            + ghosts.stream().mapToDouble(g -> g.beam().power()).sum();
     return new Response(ports, Math.max(0, in.power() - out), ghosts);
   }
 }

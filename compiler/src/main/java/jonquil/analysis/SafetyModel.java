@@ -13,14 +13,14 @@ import jonquil.safety.OpticalDensity;
 import jonquil.safety.Outcome;
 
 /**
- * Eye-safety figures of the solved train: the hazard class, NOHD and eyewear OD of a
- * source, and the exposure at a probe against the ocular MPE (IEC 60825-1:2014 as
- * implemented in jonquil.safety). Every figure keeps its standard and the caution.
+ * Eye-safety figures of the solved train: the hazard class, NOHD and eyewear OD of a source, and
+ * the exposure at a probe against the ocular MPE (IEC 60825-1:2014 as implemented in
+ * jonquil.safety). Every figure keeps its standard and the caution.
  */
 final class SafetyModel {
   /**
-   * Exposure duration when a probe states none: 0.25 s (the aversion response) in the
-   * visible, 10 s in the near infrared. Common practice for accidental intrabeam viewing.
+   * Exposure duration when a probe states none: 0.25 s (the aversion response) in the visible, 10 s
+   * in the near infrared. Common practice for accidental intrabeam viewing.
    */
   static double defaultExposureTime(double wavelength) {
     return wavelength >= 400e-9 && wavelength <= 700e-9 ? 0.25 : 10;
@@ -38,33 +38,47 @@ final class SafetyModel {
   }
 
   static double wavelength(ResolvedElement source) {
-    return source.number("wavelength", "wavelength")
-        .orElse(source.all("line").isEmpty() ? 0 : source.all("line").get(0).number("wavelength").orElse(0));
+    return source
+        .number("wavelength", "wavelength")
+        .orElse(
+            source.all("line").isEmpty()
+                ? 0
+                : source.all("line").get(0).number("wavelength").orElse(0));
   }
 
   static Outcome<HazardClass> hazardClass(ResolvedElement source, PortValue exit) {
     if (exit.mode().isEmpty()) {
-      return Outcome.notEvaluated("the beam size is unknown: give the source a 'beam' line", "IEC 60825-1:2014");
+      return Outcome.notEvaluated(
+          "the beam size is unknown: give the source a 'beam' line", "IEC 60825-1:2014");
     }
     var mode = exit.mode().get();
-    return Classifier.classify(emission(wavelength(source), exit.power(), exit.pulses()), 2 * mode.radius(),
+    return Classifier.classify(
+        emission(wavelength(source), exit.power(), exit.pulses()),
+        2 * mode.radius(),
         2 * mode.divergence());
   }
 
   static Outcome<Double> nohd(ResolvedElement source, PortValue exit) {
     if (exit.mode().isEmpty()) {
-      return Outcome.notEvaluated("the beam size is unknown: give the source a 'beam' line", "IEC 60825-1:2014");
+      return Outcome.notEvaluated(
+          "the beam size is unknown: give the source a 'beam' line", "IEC 60825-1:2014");
     }
     var mode = exit.mode().get();
     double wl = wavelength(source);
-    return Nohd.of(emission(wl, exit.power(), exit.pulses()), 2 * mode.radius(), 2 * mode.divergence(),
+    return Nohd.of(
+        emission(wl, exit.power(), exit.pulses()),
+        2 * mode.radius(),
+        2 * mode.divergence(),
         defaultExposureTime(wl));
   }
 
-  /** Exposure at a place as a fraction of the ocular MPE, averaged over the 7 mm limiting aperture. */
+  /**
+   * Exposure at a place as a fraction of the ocular MPE, averaged over the 7 mm limiting aperture.
+   */
   static Outcome<Double> mpeFraction(double wavelength, PortValue at, double exposureTime) {
     if (at.mode().isEmpty()) {
-      return Outcome.notEvaluated("the beam size is unknown: give the source a 'beam' line", "IEC 60825-1:2014");
+      return Outcome.notEvaluated(
+          "the beam size is unknown: give the source a 'beam' line", "IEC 60825-1:2014");
     }
     Emission e = emission(wavelength, at.power(), at.pulses());
     var mpe = OcularMpe.at(e, exposureTime);
@@ -74,16 +88,19 @@ final class SafetyModel {
     double aperture = OcularMpe.LIMITING_APERTURE;
     double area = Math.PI * aperture * aperture / 4;
     double through = Clipping.transmittedFraction(at.mode().get().radius(), aperture);
-    double fraction = e.pulsed()
-        ? e.pulseEnergy() * through / area / mpe.get().radiantExposure()
-        : e.averagePower() * through / area / mpe.get().irradiance();
+    double fraction =
+        e.pulsed()
+            ? e.pulseEnergy() * through / area / mpe.get().radiantExposure()
+            : e.averagePower() * through / area / mpe.get().irradiance();
     return Outcome.of(fraction, mpe.standard());
   }
 
   static Outcome<OpticalDensity> eyewear(double wavelength, PortValue at, double exposureTime) {
     if (at.mode().isEmpty()) {
-      return Outcome.notEvaluated("the beam size is unknown: give the source a 'beam' line", "IEC 60825-1:2014");
+      return Outcome.notEvaluated(
+          "the beam size is unknown: give the source a 'beam' line", "IEC 60825-1:2014");
     }
-    return Eyewear.required(emission(wavelength, at.power(), at.pulses()), 2 * at.mode().get().radius(), exposureTime);
+    return Eyewear.required(
+        emission(wavelength, at.power(), at.pulses()), 2 * at.mode().get().radius(), exposureTime);
   }
 }

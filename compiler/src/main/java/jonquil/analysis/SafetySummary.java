@@ -13,9 +13,9 @@ import jonquil.resolve.ResolvedModel;
 import jonquil.safety.Outcome;
 
 /**
- * The per-source safety figures and per-part damage margins reported with the computed
- * values: hazard class, ocular MPE, NOHD and eyewear OD at the exit, each with its
- * standard (or the reason it was not evaluated) and the caution.
+ * The per-source safety figures and per-part damage margins reported with the computed values:
+ * hazard class, ocular MPE, NOHD and eyewear OD at the exit, each with its standard (or the reason
+ * it was not evaluated) and the caution.
  */
 public final class SafetySummary {
   /** Safety figures of one source at its exit. */
@@ -45,25 +45,40 @@ public final class SafetySummary {
       double wl = SafetyModel.wavelength(e);
       double t = SafetyModel.defaultExposureTime(wl);
       var emission = SafetyModel.emission(wl, exit.get().power(), exit.get().pulses());
-      out.add(new SourceSafety(e.symbol().name(), wl, SafetyModel.hazardClass(e, exit.get()),
-          jonquil.safety.OcularMpe.at(emission, t), jonquil.safety.SkinMpe.at(emission, t),
-          jonquil.safety.ansi.AnsiOcularMpe.at(emission, t), SafetyModel.nohd(e, exit.get()),
-          SafetyModel.eyewear(wl, exit.get(), t), t));
+      out.add(
+          new SourceSafety(
+              e.symbol().name(),
+              wl,
+              SafetyModel.hazardClass(e, exit.get()),
+              jonquil.safety.OcularMpe.at(emission, t),
+              jonquil.safety.SkinMpe.at(emission, t),
+              jonquil.safety.ansi.AnsiOcularMpe.at(emission, t),
+              SafetyModel.nohd(e, exit.get()),
+              SafetyModel.eyewear(wl, exit.get(), t),
+              t));
     }
     return out;
   }
 
-  /** The damage margin of every part that declares thresholds and is reached by a beam of known size. */
+  /**
+   * The damage margin of every part that declares thresholds and is reached by a beam of known
+   * size.
+   */
   public static Map<String, Double> damageMargins(ResolvedModel model, TrainSolution s) {
     Map<String, Double> out = new LinkedHashMap<>();
-    s.incident().forEach((name, in) -> model.element(name)
-        .filter(e -> e.symbol().category() != Category.SOURCE)
-        .ifPresent(e -> {
-          OptionalDouble m = DamageModel.margin(e, in, in.wavelength());
-          if (m.isPresent()) {
-            out.put(name, m.getAsDouble());
-          }
-        }));
+    s.incident()
+        .forEach(
+            (name, in) ->
+                model
+                    .element(name)
+                    .filter(e -> e.symbol().category() != Category.SOURCE)
+                    .ifPresent(
+                        e -> {
+                          OptionalDouble m = DamageModel.margin(e, in, in.wavelength());
+                          if (m.isPresent()) {
+                            out.put(name, m.getAsDouble());
+                          }
+                        }));
     return out;
   }
 }

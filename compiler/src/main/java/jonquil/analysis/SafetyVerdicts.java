@@ -10,14 +10,15 @@ import jonquil.resolve.ResolvedRequirement.Criterion;
 import jonquil.safety.Outcome;
 
 /**
- * Requirements on eye safety: hazard class and NOHD of a source, exposure against the MPE
- * and the eyewear OD needed at a place. Each verdict names the standard it used and
- * carries the caution that a laser safety officer must confirm it.
+ * Requirements on eye safety: hazard class and NOHD of a source, exposure against the MPE and the
+ * eyewear OD needed at a place. Each verdict names the standard it used and carries the caution
+ * that a laser safety officer must confirm it.
  */
 final class SafetyVerdicts {
   private SafetyVerdicts() {}
 
-  static RequirementEvaluator.Verdict evaluate(ResolvedRequirement r, Criterion c, TrainSolution s, ResolvedModel model) {
+  static RequirementEvaluator.Verdict evaluate(
+      ResolvedRequirement r, Criterion c, TrainSolution s, ResolvedModel model) {
     if (r.at().isEmpty()) {
       return RequirementEvaluator.Verdict.notEvaluated("no place given");
     }
@@ -29,35 +30,55 @@ final class SafetyVerdicts {
       return RequirementEvaluator.Verdict.notEvaluated("no beam reaches '" + name + "'");
     }
     Measure m = c.measure();
-    if ((m == Measure.HAZARD_CLASS || m == Measure.NOHD) && element.get().kind() != ElementKind.SOURCE) {
-      return RequirementEvaluator.Verdict.notEvaluated("'" + m.word() + "' is a property of a source; name the source");
+    if ((m == Measure.HAZARD_CLASS || m == Measure.NOHD)
+        && element.get().kind() != ElementKind.SOURCE) {
+      return RequirementEvaluator.Verdict.notEvaluated(
+          "'" + m.word() + "' is a property of a source; name the source");
     }
-    PortValue at = m == Measure.HAZARD_CLASS || m == Measure.NOHD ? s.port(name).orElse(here.get()) : here.get();
+    PortValue at =
+        m == Measure.HAZARD_CLASS || m == Measure.NOHD
+            ? s.port(name).orElse(here.get())
+            : here.get();
     double wavelength = at.wavelength();
-    double exposureTime = element.get().number("exposure_time", "time").orElse(SafetyModel.defaultExposureTime(wavelength));
+    double exposureTime =
+        element
+            .get()
+            .number("exposure_time", "time")
+            .orElse(SafetyModel.defaultExposureTime(wavelength));
     switch (m) {
-      case HAZARD_CLASS: {
-        Outcome<jonquil.safety.HazardClass> o = SafetyModel.hazardClass(element.get(), at);
-        if (!o.evaluated()) {
-          return RequirementEvaluator.Verdict.notEvaluated(o.reason() + " (" + o.standard() + ")");
+      case HAZARD_CLASS:
+        {
+          Outcome<jonquil.safety.HazardClass> o = SafetyModel.hazardClass(element.get(), at);
+          if (!o.evaluated()) {
+            return RequirementEvaluator.Verdict.notEvaluated(
+                o.reason() + " (" + o.standard() + ")");
+          }
+          RequirementEvaluator.Verdict v =
+              RequirementEvaluator.compare(c, specClass(o.get()).ordinal(), "class", "");
+          return withNote(v, brief(o.standard()) + "; " + o.caution());
         }
-        RequirementEvaluator.Verdict v = RequirementEvaluator.compare(c, specClass(o.get()).ordinal(), "class", "");
-        return withNote(v, brief(o.standard()) + "; " + o.caution());
-      }
       case NOHD:
         return verdict(c, SafetyModel.nohd(element.get(), at), "m");
       case EXPOSURE:
         return verdict(c, SafetyModel.mpeFraction(wavelength, at, exposureTime), "");
-      default: {
-        var od = SafetyModel.eyewear(wavelength, at, exposureTime);
-        if (!od.evaluated()) {
-          return RequirementEvaluator.Verdict.notEvaluated(od.reason() + " (" + od.standard() + ")");
+      default:
+        {
+          var od = SafetyModel.eyewear(wavelength, at, exposureTime);
+          if (!od.evaluated()) {
+            return RequirementEvaluator.Verdict.notEvaluated(
+                od.reason() + " (" + od.standard() + ")");
+          }
+          RequirementEvaluator.Verdict v =
+              RequirementEvaluator.compare(c, od.get().atAperture(), "OD", "");
+          return withNote(
+              v,
+              String.format(
+                  java.util.Locale.ROOT,
+                  "averaged over the 7 mm limiting aperture; OD %.2f at the beam's peak; %s; %s",
+                  od.get().atPeak(),
+                  brief(od.standard()),
+                  od.caution()));
         }
-        RequirementEvaluator.Verdict v = RequirementEvaluator.compare(c, od.get().atAperture(), "OD", "");
-        return withNote(v, String.format(java.util.Locale.ROOT,
-            "averaged over the 7 mm limiting aperture; OD %.2f at the beam's peak; %s; %s",
-            od.get().atPeak(), brief(od.standard()), od.caution()));
-      }
     }
   }
 
@@ -65,16 +86,20 @@ final class SafetyVerdicts {
     if (!o.evaluated()) {
       return RequirementEvaluator.Verdict.notEvaluated(o.reason() + " (" + o.standard() + ")");
     }
-    return withNote(RequirementEvaluator.compare(c, o.get(), unit, ""), brief(o.standard()) + "; " + o.caution());
+    return withNote(
+        RequirementEvaluator.compare(c, o.get(), unit, ""),
+        brief(o.standard()) + "; " + o.caution());
   }
 
-  private static RequirementEvaluator.Verdict withNote(RequirementEvaluator.Verdict v, String note) {
-    return new RequirementEvaluator.Verdict(v.evaluated(), v.pass(), v.value(), v.bound(), v.margin(), v.unit(), note);
+  private static RequirementEvaluator.Verdict withNote(
+      RequirementEvaluator.Verdict v, String note) {
+    return new RequirementEvaluator.Verdict(
+        v.evaluated(), v.pass(), v.value(), v.bound(), v.margin(), v.unit(), note);
   }
 
   /**
-   * The spec's hazard class for the safety package's one, matched by label ("3R"), so the
-   * two enums (one per layer; safety knows no specs) can never drift apart silently.
+   * The spec's hazard class for the safety package's one, matched by label ("3R"), so the two enums
+   * (one per layer; safety knows no specs) can never drift apart silently.
    */
   static jonquil.resolve.HazardClass specClass(jonquil.safety.HazardClass c) {
     String label = c.name().replace("CLASS_", "");
@@ -82,7 +107,9 @@ final class SafetyVerdicts {
         .orElseThrow(() -> new IllegalStateException("no spec hazard class for " + label));
   }
 
-  /** The standard and edition alone ("IEC 60825-1:2014 (Ed. 3)"); the tables are in the JSON reason. */
+  /**
+   * The standard and edition alone ("IEC 60825-1:2014 (Ed. 3)"); the tables are in the JSON reason.
+   */
   static String brief(String standard) {
     int cut = standard.indexOf(", ");
     int semi = standard.indexOf("; ");

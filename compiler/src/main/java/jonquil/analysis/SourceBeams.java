@@ -11,28 +11,37 @@ import jonquil.resolve.ResolvedElement;
 import jonquil.resolve.Value;
 
 /**
- * The beams a source emits: one per laser line, with its average power and its stated
- * polarization. A source with no stated polarization is taken as unpolarized, the
- * assumption that claims nothing about extinction or azimuth.
+ * The beams a source emits: one per laser line, with its average power and its stated polarization.
+ * A source with no stated polarization is taken as unpolarized, the assumption that claims nothing
+ * about extinction or azimuth.
  */
 final class SourceBeams {
   private SourceBeams() {}
 
-  static List<Beam> of(ResolvedElement source, OptionalDouble wavelengthOverride, double ambientIndex) {
+  static List<Beam> of(
+      ResolvedElement source, OptionalDouble wavelengthOverride, double ambientIndex) {
     List<double[]> lines = new ArrayList<>();
     if (!source.all("line").isEmpty()) {
       for (Value.Group g : source.all("line")) {
         lines.add(new double[] {g.number("wavelength").orElse(0), g.number("power").orElse(0)});
       }
     } else {
-      lines.add(new double[] {source.number("wavelength", "wavelength").orElse(0), averagePower(source)});
+      lines.add(
+          new double[] {source.number("wavelength", "wavelength").orElse(0), averagePower(source)});
     }
     List<Beam> beams = new ArrayList<>();
     for (int i = 0; i < lines.size(); i++) {
       double wavelength = wavelengthOverride.orElse(lines.get(i)[0]);
       Coherency light = state(source.param("polarization"), lines.get(i)[1]);
-      beams.add(new Beam(source.symbol(), i, wavelength, light, BeamFrame.SOURCE, Medium.AMBIENT,
-          mode(source, wavelength, ambientIndex)));
+      beams.add(
+          new Beam(
+              source.symbol(),
+              i,
+              wavelength,
+              light,
+              BeamFrame.SOURCE,
+              Medium.AMBIENT,
+              mode(source, wavelength, ambientIndex)));
     }
     return beams;
   }
@@ -51,15 +60,20 @@ final class SourceBeams {
     OptionalDouble waist = beam.get().number("waist");
     OptionalDouble divergence = beam.get().number("divergence");
     if (waist.isPresent()) {
-      return Optional.of(GaussianBeam.fromWaist(wavelength, m2, waist.getAsDouble(), waistAhead, index));
+      return Optional.of(
+          GaussianBeam.fromWaist(wavelength, m2, waist.getAsDouble(), waistAhead, index));
     }
     if (divergence.isPresent()) {
-      return Optional.of(GaussianBeam.fromDivergence(wavelength, m2, divergence.getAsDouble(), waistAhead, index));
+      return Optional.of(
+          GaussianBeam.fromDivergence(wavelength, m2, divergence.getAsDouble(), waistAhead, index));
     }
     return Optional.empty();
   }
 
-  /** Average power: stated, or pulse energy × repetition rate; a single-shot source averages to zero. */
+  /**
+   * Average power: stated, or pulse energy × repetition rate; a single-shot source averages to
+   * zero.
+   */
   static double averagePower(ResolvedElement source) {
     OptionalDouble power = source.number("power", "power");
     if (power.isPresent()) {
@@ -70,7 +84,10 @@ final class SourceBeams {
     return energy.isPresent() && rate.isPresent() ? energy.getAsDouble() * rate.getAsDouble() : 0;
   }
 
-  /** The coherency matrix of a stated polarization state ('partial 0.9 linear 0 deg' mixes in unpolarized light). */
+  /**
+   * The coherency matrix of a stated polarization state ('partial 0.9 linear 0 deg' mixes in
+   * unpolarized light).
+   */
   static Coherency state(Optional<Value.Group> written, double power) {
     if (written.isEmpty()) {
       return Coherency.unpolarized(power);
@@ -85,17 +102,21 @@ final class SourceBeams {
 
   private static Coherency pure(Value.Group g, double power) {
     String form = g.word("form").orElse("unpolarized");
-    Handedness hand = g.word("handedness").map(h -> h.equals("left") ? Handedness.LEFT : Handedness.RIGHT)
-        .orElse(Handedness.RIGHT);
+    Handedness hand =
+        g.word("handedness")
+            .map(h -> h.equals("left") ? Handedness.LEFT : Handedness.RIGHT)
+            .orElse(Handedness.RIGHT);
     switch (form) {
       case "linear":
         return Coherency.linear(g.number("azimuth").orElse(0), power);
       case "circular":
         return Coherency.circular(hand, power);
-      case "elliptical": {
-        double chi = Math.atan(g.number("axis_ratio").orElse(0)) * (hand == Handedness.LEFT ? -1 : 1);
-        return Coherency.elliptical(g.number("azimuth").orElse(0), chi, power);
-      }
+      case "elliptical":
+        {
+          double chi =
+              Math.atan(g.number("axis_ratio").orElse(0)) * (hand == Handedness.LEFT ? -1 : 1);
+          return Coherency.elliptical(g.number("azimuth").orElse(0), chi, power);
+        }
       default:
         return Coherency.unpolarized(power);
     }

@@ -13,9 +13,9 @@ import jonquil.resolve.Value;
 import org.apache.commons.math3.complex.Complex;
 
 /**
- * The power reflectance and transmittance of one surface of an element, for s and p:
- * bare (Fresnel), with a specified residual reflectance ('ar 0.5 %', 'hr 99.9 %'), or
- * with a declared thin-film stack computed by the characteristic-matrix method.
+ * The power reflectance and transmittance of one surface of an element, for s and p: bare
+ * (Fresnel), with a specified residual reflectance ('ar 0.5 %', 'hr 99.9 %'), or with a declared
+ * thin-film stack computed by the characteristic-matrix method.
  */
 final class SurfaceModel {
   /** Power coefficients of a surface; amplitude phases matter only for bare reflections. */
@@ -37,7 +37,9 @@ final class SurfaceModel {
     this.materials = materials;
   }
 
-  /** The surface from medium n1 into n2 at an angle of incidence, with the element's coating if any. */
+  /**
+   * The surface from medium n1 into n2 at an angle of incidence, with the element's coating if any.
+   */
   Powers surface(ResolvedElement e, Complex n1, Complex n2, double aoi, double wavelength) {
     Optional<Value.Group> coating = e.param("coating");
     if (coating.isPresent()) {

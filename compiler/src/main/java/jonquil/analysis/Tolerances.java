@@ -13,9 +13,9 @@ import jonquil.resolve.Symbol;
 import jonquil.resolve.Value;
 
 /**
- * One toleranced build of a spec: every quantity written with '± t' is drawn uniformly
- * from its interval (the usual reading of a ± tolerance when nothing more is known), the
- * rest kept as written. Seeded, so a yield figure is reproducible run after run.
+ * One toleranced build of a spec: every quantity written with '± t' is drawn uniformly from its
+ * interval (the usual reading of a ± tolerance when nothing more is known), the rest kept as
+ * written. Seeded, so a yield figure is reproducible run after run.
  */
 final class Tolerances {
   private Tolerances() {}
@@ -31,17 +31,25 @@ final class Tolerances {
         }
       }
     }
-    return model.trains().stream().flatMap(t -> t.paths().stream()).flatMap(p -> p.steps().stream())
+    return model.trains().stream()
+        .flatMap(t -> t.paths().stream())
+        .flatMap(p -> p.steps().stream())
         .anyMatch(s -> s instanceof ResolvedTrain.Gap gap && gap.tolerance().isPresent());
   }
 
   static ResolvedModel draw(ResolvedModel model, SplittableRandom random) {
     Map<Symbol, ResolvedElement> elements = new LinkedHashMap<>();
-    model.elements().forEach((symbol, e) -> {
-      Map<String, List<Value.Group>> params = new LinkedHashMap<>();
-      e.params().forEach((name, groups) -> params.put(name, groups.stream().map(g -> draw(g, random)).toList()));
-      elements.put(symbol, new ResolvedElement(e.symbol(), e.kind(), params));
-    });
+    model
+        .elements()
+        .forEach(
+            (symbol, e) -> {
+              Map<String, List<Value.Group>> params = new LinkedHashMap<>();
+              e.params()
+                  .forEach(
+                      (name, groups) ->
+                          params.put(name, groups.stream().map(g -> draw(g, random)).toList()));
+              elements.put(symbol, new ResolvedElement(e.symbol(), e.kind(), params));
+            });
     List<ResolvedTrain> trains = new ArrayList<>();
     for (ResolvedTrain t : model.trains()) {
       List<ResolvedTrain.BeamPath> paths = new ArrayList<>();
@@ -51,7 +59,8 @@ final class Tolerances {
           if (s instanceof ResolvedTrain.Gap gap && gap.tolerance().isPresent()) {
             double half = gap.tolerance().getAsDouble();
             double length = Math.max(0, gap.length() + (2 * random.nextDouble() - 1) * half);
-            steps.add(new ResolvedTrain.Gap(length, OptionalDouble.empty(), gap.medium(), gap.range()));
+            steps.add(
+                new ResolvedTrain.Gap(length, OptionalDouble.empty(), gap.medium(), gap.range()));
           } else {
             steps.add(s);
           }
@@ -60,7 +69,13 @@ final class Tolerances {
       }
       trains.add(new ResolvedTrain(t.file(), t.name(), paths, t.range()));
     }
-    return new ResolvedModel(model.root(), model.scopes(), elements, trains, model.requirements(), model.references(),
+    return new ResolvedModel(
+        model.root(),
+        model.scopes(),
+        elements,
+        trains,
+        model.requirements(),
+        model.references(),
         model.diagnostics());
   }
 
@@ -73,7 +88,11 @@ final class Tolerances {
   private static Value draw(Value v, SplittableRandom random) {
     if (v instanceof Value.Num n && n.tolerance().isPresent()) {
       double half = n.tolerance().getAsDouble();
-      return new Value.Num(n.si() + (2 * random.nextDouble() - 1) * half, n.dimension(), OptionalDouble.empty(), n.range());
+      return new Value.Num(
+          n.si() + (2 * random.nextDouble() - 1) * half,
+          n.dimension(),
+          OptionalDouble.empty(),
+          n.range());
     }
     if (v instanceof Value.Group g) {
       return draw(g, random);

@@ -5,8 +5,8 @@ import java.util.Map;
 import java.util.Optional;
 
 /**
- * The power and polarization everywhere along the trains of one spec, and the budget
- * that accounts for every watt: source power = absorbed + stopped + stray.
+ * The power and polarization everywhere along the trains of one spec, and the budget that accounts
+ * for every watt: source power = absorbed + stopped + stray.
  */
 public record TrainSolution(
     Map<String, PortValue> ports,
@@ -19,7 +19,7 @@ public record TrainSolution(
     double stopped,
     double observedAtPathEnds,
     Map<String, PortJones> jones,
-    Map<String, SurfaceFigures> surfaces) {
+    Map<String, SurfaceAtAngle> surfaces) {
 
   public TrainSolution {
     jones = Map.copyOf(jones);
@@ -38,11 +38,14 @@ public record TrainSolution(
 
   /** The Jones matrices behind an element's ports, in the order of its ports. */
   public java.util.List<PortJones> jonesOf(String element, java.util.List<String> portOrder) {
-    return portOrder.stream().map(p -> jones.get(element + "." + p)).filter(java.util.Objects::nonNull).toList();
+    return portOrder.stream()
+        .map(p -> jones.get(element + "." + p))
+        .filter(java.util.Objects::nonNull)
+        .toList();
   }
 
   /** An interface's figures as the light met it. */
-  public Optional<SurfaceFigures> surfaceOf(String element) {
+  public Optional<SurfaceAtAngle> surfaceOf(String element) {
     return Optional.ofNullable(surfaces.get(element));
   }
 

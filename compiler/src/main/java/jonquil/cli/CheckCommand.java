@@ -16,8 +16,8 @@ import jonquil.diag.DiagnosticCode;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.ParameterException;
+import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code jonquil check}: the CI gate and the one command people run by hand. */
@@ -53,7 +53,10 @@ final class CheckCommand implements Callable<Integer> {
 
   @Spec CommandSpec spec;
 
-  @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
+  @Option(
+      names = "--format",
+      paramLabel = "FORMAT",
+      defaultValue = "text",
       converter = OutputFormat.Converter.class,
       description = "Report format: text, json or sarif (default: ${DEFAULT-VALUE}).")
   OutputFormat format;
@@ -61,7 +64,8 @@ final class CheckCommand implements Callable<Integer> {
   @Option(names = "--strict", description = "Fail on warnings as well as on errors.")
   boolean strict;
 
-  @Option(names = "--exit-zero",
+  @Option(
+      names = "--exit-zero",
       description = "Exit 0 even when there are findings; trouble running still exits 2.")
   boolean exitZero;
 
@@ -71,10 +75,15 @@ final class CheckCommand implements Callable<Integer> {
   @Option(names = "--debug", description = "Print the stack trace of an internal error.")
   boolean debug;
 
-  @Option(names = {"-h", "--help"}, usageHelp = true, description = "Show this help and exit.")
+  @Option(
+      names = {"-h", "--help"},
+      usageHelp = true,
+      description = "Show this help and exit.")
   boolean help;
 
-  @Parameters(paramLabel = "PATH", arity = "1..*",
+  @Parameters(
+      paramLabel = "PATH",
+      arity = "1..*",
       description = "A .jonq file, or a directory: every .jonq file below it, in sorted order.")
   List<String> paths = new ArrayList<>();
 
@@ -102,7 +111,8 @@ final class CheckCommand implements Callable<Integer> {
     List<String> problems = new ArrayList<>(inputs.problems());
     Result result = new Result(Map.of(), List.of(), List.of());
     if (!inputs.files().isEmpty()) {
-      result = withoutUnreadable(Checker.check(Workspace.onDisk(projectRoot), inputs.files()), problems);
+      result =
+          withoutUnreadable(Checker.check(Workspace.onDisk(projectRoot), inputs.files()), problems);
     }
     problems.forEach(err::println);
     err.flush();
@@ -130,8 +140,8 @@ final class CheckCommand implements Callable<Integer> {
   }
 
   /**
-   * A file the checker could not read is trouble running, not a finding about the specs:
-   * it goes to stderr and exit status 2, and stays out of the report and its counts.
+   * A file the checker could not read is trouble running, not a finding about the specs: it goes to
+   * stderr and exit status 2, and stays out of the report and its counts.
    */
   private Result withoutUnreadable(Result result, List<String> problems) {
     List<Diagnostic> kept = new ArrayList<>();

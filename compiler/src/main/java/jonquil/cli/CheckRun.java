@@ -5,8 +5,8 @@ import java.util.List;
 import jonquil.Result;
 
 /**
- * One finished check as every report format sees it: the checker's result, the two
- * directories paths are shown against, and the inputs that could not be read.
+ * One finished check as every report format sees it: the checker's result, the two directories
+ * paths are shown against, and the inputs that could not be read.
  */
 public record CheckRun(Result result, Path root, Path cwd, List<String> inputProblems) {
   public CheckRun {

@@ -9,17 +9,18 @@ import picocli.CommandLine;
 import picocli.CommandLine.ParameterException;
 
 /**
- * The command line as a function from arguments and streams to an exit code. It never
- * touches System.out or System.exit, so the language server and tests can run it in-process.
+ * The command line as a function from arguments and streams to an exit code. It never touches
+ * System.out or System.exit, so the language server and tests can run it in-process.
  */
 public final class Cli {
   private Cli() {}
 
   /**
-   * Runs one command line. {@code cwd} anchors relative paths; {@code extraSubcommands}
-   * (picocli command objects) let modules that depend on this one add commands.
+   * Runs one command line. {@code cwd} anchors relative paths; {@code extraSubcommands} (picocli
+   * command objects) let modules that depend on this one add commands.
    */
-  public static int run(String[] args, PrintStream out, PrintStream err, Path cwd, Object... extraSubcommands) {
+  public static int run(
+      String[] args, PrintStream out, PrintStream err, Path cwd, Object... extraSubcommands) {
     CommandLine cli = new CommandLine(new JonquilCommand());
     cli.addSubcommand(new CommandLine(new CheckCommand(out, err, cwd)));
     cli.addSubcommand(new CommandLine(new FormatCommand(out, err, cwd)));
@@ -30,10 +31,11 @@ public final class Cli {
     cli.setOut(new PrintWriter(out, true));
     cli.setErr(new PrintWriter(err, true));
     cli.setParameterExceptionHandler(Cli::usageError);
-    cli.setExecutionExceptionHandler((e, commandLine, parseResult) -> {
-      reportInternalError(e, Arrays.asList(args).contains("--debug"), err);
-      return ExitCode.TROUBLE.code();
-    });
+    cli.setExecutionExceptionHandler(
+        (e, commandLine, parseResult) -> {
+          reportInternalError(e, Arrays.asList(args).contains("--debug"), err);
+          return ExitCode.TROUBLE.code();
+        });
     try {
       return cli.execute(args);
     } catch (RuntimeException | StackOverflowError e) {
@@ -54,14 +56,16 @@ public final class Cli {
   }
 
   static void reportInternalError(Throwable e, boolean debug, PrintStream err) {
-    String message = e.getMessage() == null || e.getMessage().isBlank()
-        ? e.getClass().getSimpleName()
-        : firstLine(e.getMessage());
+    String message =
+        e.getMessage() == null || e.getMessage().isBlank()
+            ? e.getClass().getSimpleName()
+            : firstLine(e.getMessage());
     if (debug) {
       err.println("jonquil: internal error: " + message);
       e.printStackTrace(err);
     } else {
-      err.println("jonquil: internal error: " + message + " (run again with --debug for the stack trace)");
+      err.println(
+          "jonquil: internal error: " + message + " (run again with --debug for the stack trace)");
     }
     err.flush();
   }
@@ -74,6 +78,8 @@ public final class Cli {
   }
 
   private static String lowerFirst(String text) {
-    return text.isEmpty() ? text : text.substring(0, 1).toLowerCase(Locale.ROOT) + text.substring(1);
+    return text.isEmpty()
+        ? text
+        : text.substring(0, 1).toLowerCase(Locale.ROOT) + text.substring(1);
   }
 }

@@ -3,8 +3,8 @@ package jonquil.cli;
 import jonquil.Result;
 
 /**
- * The process exit codes of the CLI and the one policy that picks them, kept pure so CI
- * behaviour can be specified without running the checker.
+ * The process exit codes of the CLI and the one policy that picks them, kept pure so CI behaviour
+ * can be specified without running the checker.
  */
 public enum ExitCode {
   /** Nothing that should stop a build. */
@@ -25,10 +25,11 @@ public enum ExitCode {
   }
 
   /**
-   * Findings outrank unreadable input because they are real news about the specs; but a
-   * partly unread check must never look clean, and --exit-zero must not hide that either.
+   * Findings outrank unreadable input because they are real news about the specs; but a partly
+   * unread check must never look clean, and --exit-zero must not hide that either.
    */
-  public static ExitCode of(Result result, boolean strict, boolean exitZero, boolean someInputUnreadable) {
+  public static ExitCode of(
+      Result result, boolean strict, boolean exitZero, boolean someInputUnreadable) {
     boolean fails = result.fails(strict);
     if (someInputUnreadable) {
       return fails && !exitZero ? FINDINGS : TROUBLE;

@@ -23,7 +23,10 @@ import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
-/** {@code jonquil fmt}: rewrites specs in the canonical layout, or in CI checks that they already are. */
+/**
+ * {@code jonquil fmt}: rewrites specs in the canonical layout, or in CI checks that they already
+ * are.
+ */
 @Command(
     name = "fmt",
     sortOptions = false,
@@ -50,16 +53,25 @@ final class FormatCommand implements Callable<Integer> {
 
   @Spec CommandSpec spec;
 
-  @Option(names = "--check", description = "Write nothing; list the files that would change and exit 1 if any.")
+  @Option(
+      names = "--check",
+      description = "Write nothing; list the files that would change and exit 1 if any.")
   boolean check;
 
-  @Option(names = "--stdout", description = "Print the formatted text instead of rewriting the files.")
+  @Option(
+      names = "--stdout",
+      description = "Print the formatted text instead of rewriting the files.")
   boolean stdout;
 
-  @Option(names = {"-h", "--help"}, usageHelp = true, description = "Show this help and exit.")
+  @Option(
+      names = {"-h", "--help"},
+      usageHelp = true,
+      description = "Show this help and exit.")
   boolean help;
 
-  @Parameters(paramLabel = "PATH", arity = "1..*",
+  @Parameters(
+      paramLabel = "PATH",
+      arity = "1..*",
       description = "A .jonq file, or a directory: every .jonq file below it, in sorted order.")
   List<String> paths = new ArrayList<>();
 
@@ -72,7 +84,8 @@ final class FormatCommand implements Callable<Integer> {
   @Override
   public Integer call() {
     if (check && stdout) {
-      throw new ParameterException(spec.commandLine(), "--check and --stdout cannot be used together");
+      throw new ParameterException(
+          spec.commandLine(), "--check and --stdout cannot be used together");
     }
     Inputs inputs = Inputs.collect(paths, cwd);
     List<String> problems = new ArrayList<>(inputs.problems());
@@ -134,8 +147,17 @@ final class FormatCommand implements Callable<Integer> {
     for (Diagnostic d : SpecParser.parse(source).diagnostics()) {
       if (d.severity() == Severity.ERROR) {
         int at = d.range().start();
-        err.println(shown + ":" + source.humanLine(at) + ":" + source.humanColumn(at) + ": error: "
-            + d.message().replaceAll("\\R", " ").strip() + " [" + d.code().id() + "]");
+        err.println(
+            shown
+                + ":"
+                + source.humanLine(at)
+                + ":"
+                + source.humanColumn(at)
+                + ": error: "
+                + d.message().replaceAll("\\R", " ").strip()
+                + " ["
+                + d.code().id()
+                + "]");
       }
     }
   }

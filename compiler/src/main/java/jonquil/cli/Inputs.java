@@ -11,8 +11,8 @@ import java.util.Set;
 import java.util.stream.Stream;
 
 /**
- * The spec files a check will read, expanded from the command line's PATH arguments,
- * plus one-line complaints about arguments that could not be used.
+ * The spec files a check will read, expanded from the command line's PATH arguments, plus one-line
+ * complaints about arguments that could not be used.
  */
 record Inputs(List<Path> files, List<String> problems) {
   static final String EXTENSION = ".jonq";
@@ -23,8 +23,8 @@ record Inputs(List<Path> files, List<String> problems) {
   }
 
   /**
-   * Directories expand to every spec below them in sorted order, so that two runs over
-   * the same tree report in the same order; a file named twice is checked once.
+   * Directories expand to every spec below them in sorted order, so that two runs over the same
+   * tree report in the same order; a file named twice is checked once.
    */
   static Inputs collect(List<String> arguments, Path cwd) {
     Set<Path> files = new LinkedHashSet<>();

@@ -20,9 +20,9 @@ import jonquil.diag.Severity;
 import jonquil.source.TextRange;
 
 /**
- * The machine-readable report described by check-result.schema.json. Its "schema" field
- * changes whenever a field changes meaning or disappears, so consumers can refuse what
- * they do not understand; adding fields does not change it.
+ * The machine-readable report described by check-result.schema.json. Its "schema" field changes
+ * whenever a field changes meaning or disappears, so consumers can refuse what they do not
+ * understand; adding fields does not change it.
  */
 final class JsonReport {
   static final String SCHEMA_ID = "jonquil.check/1";
@@ -46,11 +46,15 @@ final class JsonReport {
     root.add("tool", tool);
 
     JsonArray files = new JsonArray();
-    result.files().keySet().stream().map(p -> path(run, p)).sorted().forEach(p -> {
-      JsonObject f = new JsonObject();
-      f.addProperty("path", p);
-      files.add(f);
-    });
+    result.files().keySet().stream()
+        .map(p -> path(run, p))
+        .sorted()
+        .forEach(
+            p -> {
+              JsonObject f = new JsonObject();
+              f.addProperty("path", p);
+              files.add(f);
+            });
     root.add("files", files);
 
     JsonArray diagnostics = new JsonArray();

@@ -25,8 +25,10 @@ public enum OutputFormat {
           return f;
         }
       }
-      String words = Arrays.stream(values()).map(OutputFormat::word).collect(Collectors.joining(", "));
-      throw new TypeConversionException("unknown format '" + value + "' (expected one of " + words + ")");
+      String words =
+          Arrays.stream(values()).map(OutputFormat::word).collect(Collectors.joining(", "));
+      throw new TypeConversionException(
+          "unknown format '" + value + "' (expected one of " + words + ")");
     }
   }
 }

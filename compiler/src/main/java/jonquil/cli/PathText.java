@@ -32,7 +32,8 @@ final class PathText {
    * percent-encoded, and a leading "./" keeps a ':' in the first segment from reading as a scheme.
    */
   static String uriReference(String slashPath) {
-    String first = slashPath.contains("/") ? slashPath.substring(0, slashPath.indexOf('/')) : slashPath;
+    String first =
+        slashPath.contains("/") ? slashPath.substring(0, slashPath.indexOf('/')) : slashPath;
     String safe = first.contains(":") ? "./" + slashPath : slashPath;
     try {
       return new URI(null, null, safe, null).toASCIIString();

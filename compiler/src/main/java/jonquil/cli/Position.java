@@ -5,8 +5,8 @@ import java.util.Map;
 import jonquil.source.SourceFile;
 
 /**
- * A place in a file as reports show it: 1-based line, 1-based column in code points, and
- * the UTF-16 offset it came from.
+ * A place in a file as reports show it: 1-based line, 1-based column in code points, and the UTF-16
+ * offset it came from.
  */
 record Position(int line, int column, int offset) {
 

@@ -11,9 +11,9 @@ final class ProjectRoot {
   private ProjectRoot() {}
 
   /**
-   * The nearest ancestor of {@code start} (itself included when it is a directory) holding
-   * {@code .git} or the marker; {@code .git} is only tested for existence because in a
-   * worktree or submodule it is a file.
+   * The nearest ancestor of {@code start} (itself included when it is a directory) holding {@code
+   * .git} or the marker; {@code .git} is only tested for existence because in a worktree or
+   * submodule it is a file.
    */
   static Path discover(Path start, Path fallback) {
     Path abs = start.toAbsolutePath().normalize();

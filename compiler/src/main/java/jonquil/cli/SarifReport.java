@@ -26,10 +26,12 @@ final class SarifReport {
   static final String SCHEMA_URI = "https://json.schemastore.org/sarif-2.1.0.json";
   static final String INFORMATION_URI = "https://example.invalid/jonquil";
   static final String ROOT_BASE_ID = "SRCROOT";
+
   /** Versioned so that a future change of the recipe does not silently re-open every alert. */
   static final String FINGERPRINT_KEY = "jonquilFindingHash/v1";
 
-  private static final Gson GSON = new GsonBuilder().setPrettyPrinting().disableHtmlEscaping().create();
+  private static final Gson GSON =
+      new GsonBuilder().setPrettyPrinting().disableHtmlEscaping().create();
 
   private SarifReport() {}
 
@@ -131,24 +133,27 @@ final class SarifReport {
     // SARIF groups replacements by file, in the order the fix lists them.
     Map<Path, List<Edit>> byFile = new LinkedHashMap<>();
     for (Edit e : fix.edits()) {
-      byFile.computeIfAbsent(e.file().toAbsolutePath().normalize(), k -> new java.util.ArrayList<>()).add(e);
+      byFile
+          .computeIfAbsent(e.file().toAbsolutePath().normalize(), k -> new java.util.ArrayList<>())
+          .add(e);
     }
     JsonArray changes = new JsonArray();
-    byFile.forEach((file, edits) -> {
-      JsonArray replacements = new JsonArray();
-      for (Edit e : edits) {
-        JsonObject replacement = new JsonObject();
-        replacement.add("deletedRegion", region(run, file, e.range()));
-        JsonObject inserted = new JsonObject();
-        inserted.addProperty("text", e.newText());
-        replacement.add("insertedContent", inserted);
-        replacements.add(replacement);
-      }
-      JsonObject change = new JsonObject();
-      change.add("artifactLocation", artifactLocation(run, file));
-      change.add("replacements", replacements);
-      changes.add(change);
-    });
+    byFile.forEach(
+        (file, edits) -> {
+          JsonArray replacements = new JsonArray();
+          for (Edit e : edits) {
+            JsonObject replacement = new JsonObject();
+            replacement.add("deletedRegion", region(run, file, e.range()));
+            JsonObject inserted = new JsonObject();
+            inserted.addProperty("text", e.newText());
+            replacement.add("insertedContent", inserted);
+            replacements.add(replacement);
+          }
+          JsonObject change = new JsonObject();
+          change.add("artifactLocation", artifactLocation(run, file));
+          change.add("replacements", replacements);
+          changes.add(change);
+        });
     JsonObject f = new JsonObject();
     f.add("description", text(fix.title()));
     f.add("artifactChanges", changes);
@@ -205,11 +210,12 @@ final class SarifReport {
   }
 
   /**
-   * Leaves the line out so an alert survives edits above it; the running count keeps
-   * two identical findings in one file apart.
+   * Leaves the line out so an alert survives edits above it; the running count keeps two identical
+   * findings in one file apart.
    */
   private static String fingerprint(CheckRun run, Diagnostic d, Map<String, Integer> seen) {
-    String key = d.code().id() + "\u0000" + PathText.relative(run.root(), d.file()) + "\u0000" + d.message();
+    String key =
+        d.code().id() + "\u0000" + PathText.relative(run.root(), d.file()) + "\u0000" + d.message();
     int occurrence = seen.merge(key, 1, Integer::sum);
     try {
       MessageDigest sha = MessageDigest.getInstance("SHA-256");

@@ -2,16 +2,16 @@ package jonquil.cli;
 
 import java.io.PrintStream;
 import jonquil.Result;
-import jonquil.analysis.Figures;
 import jonquil.analysis.RequirementOutcome;
 import jonquil.analysis.RequirementStatus;
+import jonquil.analysis.VerdictText;
 import jonquil.diag.Diagnostic;
 import jonquil.diag.Related;
 import jonquil.diag.Severity;
 
 /**
- * The default report: one compiler-style line per finding, which editors and CI log
- * viewers already know how to turn into links, then one summary line.
+ * The default report: one compiler-style line per finding, which editors and CI log viewers already
+ * know how to turn into links, then one summary line.
  */
 final class TextReport {
   private TextReport() {}
@@ -22,8 +22,13 @@ final class TextReport {
       out.println(line(run, d));
       for (Related r : d.related()) {
         // Printed as a note on its own line so that the same tools can jump to it.
-        out.println(location(run, r.file(), r.range().start()) + ": note: " + oneLine(r.message())
-            + " [" + d.code().id() + "]");
+        out.println(
+            location(run, r.file(), r.range().start())
+                + ": note: "
+                + oneLine(r.message())
+                + " ["
+                + d.code().id()
+                + "]");
       }
     }
     for (RequirementOutcome r : result.requirements()) {
@@ -37,15 +42,19 @@ final class TextReport {
   }
 
   /**
-   * One line per requirement verdict, after the findings. The word "requirement" stands
-   * where findings have a severity, so quickfix parsers skip these lines.
+   * One line per requirement verdict, after the findings. The word "requirement" stands where
+   * findings have a severity, so quickfix parsers skip these lines.
    */
   static String requirement(CheckRun run, RequirementOutcome r) {
-    StringBuilder line = new StringBuilder(location(run, r.file(), r.range().start()))
-        .append(": requirement ").append(r.status().word()).append(": ").append(oneLine(r.text()));
+    StringBuilder line =
+        new StringBuilder(location(run, r.file(), r.range().start()))
+            .append(": requirement ")
+            .append(r.status().word())
+            .append(": ")
+            .append(oneLine(r.text()));
     if (r.value().isPresent()) {
-      line.append(" (value ").append(Figures.format(r.value().getAsDouble(), r.siUnit()));
-      r.margin().ifPresent(m -> line.append(", margin ").append(Figures.format(m, r.siUnit())));
+      line.append(" (value ").append(VerdictText.format(r.value().getAsDouble(), r.siUnit()));
+      r.margin().ifPresent(m -> line.append(", margin ").append(VerdictText.format(m, r.siUnit())));
       line.append(')');
     }
     if (r.reason() != null && !r.reason().isBlank()) {
@@ -55,18 +64,32 @@ final class TextReport {
   }
 
   static String line(CheckRun run, Diagnostic d) {
-    return location(run, d.file(), d.range().start()) + ": " + d.severity().word() + ": "
-        + oneLine(d.message()) + " [" + d.code().id() + "]";
+    return location(run, d.file(), d.range().start())
+        + ": "
+        + d.severity().word()
+        + ": "
+        + oneLine(d.message())
+        + " ["
+        + d.code().id()
+        + "]";
   }
 
   static String summary(Result result) {
-    return "checked " + count(result.files().size(), "file") + ": "
-        + count(result.count(Severity.ERROR), "error") + ", "
-        + count(result.count(Severity.WARNING), "warning") + ", "
-        + count(result.count(Severity.NOTE), "note") + "; requirements: "
-        + result.count(RequirementStatus.PASS) + " pass, "
-        + result.count(RequirementStatus.FAIL) + " fail, "
-        + result.count(RequirementStatus.NOT_EVALUATED) + " not evaluated";
+    return "checked "
+        + count(result.files().size(), "file")
+        + ": "
+        + count(result.count(Severity.ERROR), "error")
+        + ", "
+        + count(result.count(Severity.WARNING), "warning")
+        + ", "
+        + count(result.count(Severity.NOTE), "note")
+        + "; requirements: "
+        + result.count(RequirementStatus.PASS)
+        + " pass, "
+        + result.count(RequirementStatus.FAIL)
+        + " fail, "
+        + result.count(RequirementStatus.NOT_EVALUATED)
+        + " not evaluated";
   }
 
   private static String location(CheckRun run, java.nio.file.Path file, int offset) {

@@ -16,12 +16,13 @@ import jonquil.optics.Coherency;
 import jonquil.optics.Handedness;
 
 /**
- * The computed values of the JSON report: light at every port, the power budget of every
- * element, the stray beams and the conservation check, per checked root file. SI units;
- * angles in degrees as the field names say; azimuths against the table frame.
+ * The computed values of the JSON report: light at every port, the power budget of every element,
+ * the stray beams and the conservation check, per checked root file. SI units; angles in degrees as
+ * the field names say; azimuths against the table frame.
  */
 final class ValuesJson {
-  static final String HANDEDNESS_VIEWPOINT = "as seen by the receiver, looking back towards the source";
+  static final String HANDEDNESS_VIEWPOINT =
+      "as seen by the receiver, looking back towards the source";
 
   private ValuesJson() {}
 
@@ -32,18 +33,21 @@ final class ValuesJson {
       JsonObject o = new JsonObject();
       o.addProperty("path", PathText.relative(run.root(), e.getKey()));
       JsonArray ports = new JsonArray();
-      s.ports().forEach((key, value) -> {
-        if (!key.equals(value.key())) {
-          return; // aliases ("element" for its exit port) are not repeated
-        }
-        ports.add(port(value));
-      });
+      s.ports()
+          .forEach(
+              (key, value) -> {
+                if (!key.equals(value.key())) {
+                  return; // aliases ("element" for its exit port) are not repeated
+                }
+                ports.add(port(value));
+              });
       o.add("ports", ports);
       JsonArray incident = new JsonArray();
       s.incident().values().forEach(v -> incident.add(port(v)));
       o.add("incident", incident);
       var model = run.result().models().get(e.getKey());
-      java.util.Map<String, Double> margins = model == null ? java.util.Map.of() : SafetySummary.damageMargins(model, s);
+      java.util.Map<String, Double> margins =
+          model == null ? java.util.Map.of() : SafetySummary.damageMargins(model, s);
       JsonArray budget = new JsonArray();
       for (ElementBudget b : s.budgets()) {
         JsonObject j = new JsonObject();
@@ -54,7 +58,11 @@ final class ValuesJson {
         j.add("out_W", outs);
         j.add("absorbed_W", number(b.absorbed()));
         j.add("ghosts_W", number(b.ghosts()));
-        j.add("damage_margin", margins.containsKey(b.element()) ? number(margins.get(b.element())) : JsonNull.INSTANCE);
+        j.add(
+            "damage_margin",
+            margins.containsKey(b.element())
+                ? number(margins.get(b.element()))
+                : JsonNull.INSTANCE);
         budget.add(j);
       }
       o.add("budget", budget);
@@ -93,17 +101,23 @@ final class ValuesJson {
     j.addProperty("source", s.source());
     j.add("wavelength_m", number(s.wavelength()));
     j.add("exposure_time_s", number(s.exposureTime()));
-    j.add("hazard_class", outcome(s.hazardClass(), c -> new JsonPrimitive(c.name().replace("CLASS_", ""))));
+    j.add(
+        "hazard_class",
+        outcome(s.hazardClass(), c -> new JsonPrimitive(c.name().replace("CLASS_", ""))));
     j.add("mpe", outcome(s.mpe(), ValuesJson::mpe));
     j.add("mpe_ansi_z136_1", outcome(s.ansiMpe(), ValuesJson::mpe));
     j.add("skin_mpe", outcome(s.skinMpe(), ValuesJson::mpe));
     j.add("nohd_m", outcome(s.nohd(), ValuesJson::number));
-    j.add("eyewear_od_at_exit", outcome(s.eyewear(), od -> {
-      JsonObject o = new JsonObject();
-      o.add("averaged_over_limiting_aperture", number(od.atAperture()));
-      o.add("at_beam_peak", number(od.atPeak()));
-      return o;
-    }));
+    j.add(
+        "eyewear_od_at_exit",
+        outcome(
+            s.eyewear(),
+            od -> {
+              JsonObject o = new JsonObject();
+              o.add("averaged_over_limiting_aperture", number(od.atAperture()));
+              o.add("at_beam_peak", number(od.atPeak()));
+              return o;
+            }));
     j.addProperty("caution", jonquil.safety.Outcome.CAUTION);
     return j;
   }
@@ -118,7 +132,8 @@ final class ValuesJson {
   }
 
   /** A safety figure with its standard, or null with the reason it was not evaluated. */
-  private static <T> JsonObject outcome(jonquil.safety.Outcome<T> o, java.util.function.Function<T, JsonElement> value) {
+  private static <T> JsonObject outcome(
+      jonquil.safety.Outcome<T> o, java.util.function.Function<T, JsonElement> value) {
     JsonObject j = new JsonObject();
     j.add("value", o.evaluated() ? value.apply(o.get()) : JsonNull.INSTANCE);
     j.addProperty("standard", o.standard());
@@ -147,23 +162,28 @@ final class ValuesJson {
     j.addProperty("handedness_viewpoint", HANDEDNESS_VIEWPOINT);
     j.add("extinction_ratio", number(c.extinctionRatio()));
     j.addProperty("azimuth_frame", v.vertical() ? "carried (the beam runs vertically)" : "table");
-    v.exposure().ifPresent(e -> {
-      j.add("beam_radius_m", number(e.beamRadius()));
-      JsonObject irradiance = new JsonObject();
-      irradiance.add("average", number(e.averageIrradiance()));
-      irradiance.add("peak", number(e.peakIrradiance()));
-      j.add("irradiance_W_m2", irradiance);
-      e.pulseEnergy().ifPresent(x -> j.add("pulse_energy_J", number(x)));
-      e.peakPower().ifPresent(x -> j.add("peak_power_W", number(x)));
-      e.peakFluence().ifPresent(x -> j.add("fluence_J_m2", number(x)));
-      j.add("peak_field_V_m", number(e.peakField()));
-    });
-    v.mode().flatMap(m -> m.nextFocus()).ifPresent(f -> {
-      JsonObject focus = new JsonObject();
-      focus.add("distance_m", number(f.distance()));
-      focus.add("radius_m", number(f.radius()));
-      j.add("next_focus", focus);
-    });
+    v.exposure()
+        .ifPresent(
+            e -> {
+              j.add("beam_radius_m", number(e.beamRadius()));
+              JsonObject irradiance = new JsonObject();
+              irradiance.add("average", number(e.averageIrradiance()));
+              irradiance.add("peak", number(e.peakIrradiance()));
+              j.add("irradiance_W_m2", irradiance);
+              e.pulseEnergy().ifPresent(x -> j.add("pulse_energy_J", number(x)));
+              e.peakPower().ifPresent(x -> j.add("peak_power_W", number(x)));
+              e.peakFluence().ifPresent(x -> j.add("fluence_J_m2", number(x)));
+              j.add("peak_field_V_m", number(e.peakField()));
+            });
+    v.mode()
+        .flatMap(m -> m.nextFocus())
+        .ifPresent(
+            f -> {
+              JsonObject focus = new JsonObject();
+              focus.add("distance_m", number(f.distance()));
+              focus.add("radius_m", number(f.radius()));
+              j.add("next_focus", focus);
+            });
     return j;
   }
 

@@ -6,8 +6,8 @@ import java.util.List;
 import jonquil.source.TextRange;
 
 /**
- * One finding at one place of one file. The message is written for a non-expert and
- * never contains parser internals; the code is stable across releases.
+ * One finding at one place of one file. The message is written for a non-expert and never contains
+ * parser internals; the code is stable across releases.
  */
 public record Diagnostic(
     DiagnosticCode code,

@@ -1,13 +1,14 @@
 package jonquil.diag;
 
 /**
- * Every diagnostic the checker can emit, with its stable id, default severity and a
- * one-line summary (used as the SARIF rule description and in DEVELOPERS.md).
- * Ids never change meaning once released; retired ids are not reused.
+ * Every diagnostic the checker can emit, with its stable id, default severity and a one-line
+ * summary (used as the SARIF rule description and in DEVELOPERS.md). Ids never change meaning once
+ * released; retired ids are not reused.
  */
 public enum DiagnosticCode {
   // Syntax: J1xx
-  SYNTAX_UNEXPECTED("J101", Severity.ERROR, "Unexpected text where the grammar expects something else"),
+  SYNTAX_UNEXPECTED(
+      "J101", Severity.ERROR, "Unexpected text where the grammar expects something else"),
   SYNTAX_MISSING("J102", Severity.ERROR, "Something the grammar requires is missing"),
   UNCLOSED_BRACE("J103", Severity.ERROR, "A '{' is never closed"),
   UNMATCHED_CLOSE("J104", Severity.ERROR, "A '}' or ')' has no opening partner"),
@@ -25,13 +26,15 @@ public enum DiagnosticCode {
   USE_CYCLE("J204", Severity.ERROR, "Files use each other in a cycle"),
   USE_ESCAPES_ROOT("J205", Severity.ERROR, "A used path leaves the project root"),
   USE_TOO_DEEP("J206", Severity.ERROR, "Files use each other too deeply"),
-  USED_FILE_HAS_TRAIN("J207", Severity.ERROR, "A used part library contains a train or requirements"),
+  USED_FILE_HAS_TRAIN(
+      "J207", Severity.ERROR, "A used part library contains a train or requirements"),
   WRONG_KIND("J208", Severity.ERROR, "A name refers to the wrong kind of thing"),
   UNKNOWN_KIND("J209", Severity.ERROR, "A declaration of an unknown kind"),
   DUPLICATE_USE("J210", Severity.WARNING, "The same file is used twice"),
   USE_UNREADABLE("J211", Severity.ERROR, "A used file cannot be read"),
   UNKNOWN_CATALOG_MATERIAL("J212", Severity.ERROR, "A material name that is not in the catalog"),
-  DATA_FILE_NOT_FOUND("J213", Severity.ERROR, "A data file named by a spec does not exist or leaves the project"),
+  DATA_FILE_NOT_FOUND(
+      "J213", Severity.ERROR, "A data file named by a spec does not exist or leaves the project"),
   BAD_TABLE_ROW("J214", Severity.ERROR, "A row of an n,k table file that cannot be read"),
 
   // Units and quantities: J3xx
@@ -50,23 +53,28 @@ public enum DiagnosticCode {
   CONFLICTING_PARAMETERS("J406", Severity.ERROR, "Parameters that exclude each other"),
   MISSING_ARGUMENT("J407", Severity.ERROR, "A parameter is missing part of its value"),
   UNSUPPORTED_WAVELENGTH("J408", Severity.ERROR, "A wavelength outside the range Jonquil supports"),
-  MATERIAL_OUT_OF_RANGE("J409", Severity.WARNING, "A material used outside the wavelength range of its data"),
+  MATERIAL_OUT_OF_RANGE(
+      "J409", Severity.WARNING, "A material used outside the wavelength range of its data"),
 
   // Beam trains: J5xx
-  PATH_START_NOT_SOURCE("J501", Severity.ERROR, "A beam path starts neither at a source nor at a port"),
+  PATH_START_NOT_SOURCE(
+      "J501", Severity.ERROR, "A beam path starts neither at a source nor at a port"),
   ELEMENT_TWICE_IN_PATH("J502", Severity.ERROR, "An element appears twice in one beam path"),
   UNKNOWN_PORT("J503", Severity.ERROR, "A port that the element does not have"),
   PORT_USED_TWICE("J504", Severity.ERROR, "Two branches leave the same port"),
   PATH_ENDS_WITH_DISTANCE("J505", Severity.ERROR, "A beam path ends in empty space"),
-  UNTERMINATED_BRANCH("J506", Severity.WARNING, "A branch ends at an element that does not stop the beam"),
+  UNTERMINATED_BRANCH(
+      "J506", Severity.WARNING, "A branch ends at an element that does not stop the beam"),
   SOURCE_INSIDE_PATH("J507", Severity.ERROR, "A source appears after the start of a path"),
   TERMINAL_INSIDE_PATH("J508", Severity.ERROR, "A beam continues past a dump or detector"),
-  NOT_PLACEABLE("J509", Severity.ERROR, "Something that is not an optical element is placed in a path"),
+  NOT_PLACEABLE(
+      "J509", Severity.ERROR, "Something that is not an optical element is placed in a path"),
   PORT_NOT_FOLLOWED("J510", Severity.WARNING, "Light leaves a port that no branch follows"),
   BRANCH_FROM_UNPLACED("J511", Severity.ERROR, "A branch starts at an element that no path places"),
   ELEMENT_PLACED_TWICE("J512", Severity.ERROR, "An element is placed in two paths"),
   EMPTY_TRAIN("J513", Severity.WARNING, "A train without beam paths"),
-  PORT_ON_ELEMENT_WITHOUT_PORTS("J514", Severity.ERROR, "A port named on an element with a single output"),
+  PORT_ON_ELEMENT_WITHOUT_PORTS(
+      "J514", Severity.ERROR, "A port named on an element with a single output"),
 
   // Requirements: J6xx
   UNKNOWN_MEASURE("J601", Severity.ERROR, "A requirement on a quantity Jonquil does not know"),
@@ -75,12 +83,15 @@ public enum DiagnosticCode {
   UNKNOWN_HAZARD_CLASS("J604", Severity.ERROR, "A laser hazard class that does not exist"),
   BAD_POLARIZATION_STATE("J605", Severity.ERROR, "A polarization state that cannot be read"),
   INVERTED_RANGE("J606", Severity.ERROR, "A range whose low end is above its high end"),
-  TARGET_NOT_PLACED("J607", Severity.WARNING, "A requirement names an element that no beam reaches"),
+  TARGET_NOT_PLACED(
+      "J607", Severity.WARNING, "A requirement names an element that no beam reaches"),
   UNEXPECTED_PLACE("J608", Severity.ERROR, "A place given to a requirement that takes none"),
   REQUIREMENT_FAILED("J609", Severity.ERROR, "A requirement is not met"),
-  REQUIREMENT_MET("J611", Severity.NOTE, "A requirement is met, with its computed value and margin"),
+  REQUIREMENT_MET(
+      "J611", Severity.NOTE, "A requirement is met, with its computed value and margin"),
   APERTURE_CLIPS("J612", Severity.WARNING, "An aperture cuts off a significant part of the beam"),
-  STRAY_BEAM("J610", Severity.NOTE, "Light leaves the train without reaching a probe, detector or dump"),
+  STRAY_BEAM(
+      "J610", Severity.NOTE, "Light leaves the train without reaching a probe, detector or dump"),
 
   // Limits and internals: J9xx
   INTERNAL_ERROR("J901", Severity.ERROR, "The checker failed internally; please report it"),

@@ -1,8 +1,8 @@
 package jonquil.format;
 
 /**
- * How the formatter indents: an editor sends its own tab size and tab preference, the
- * command line uses {@link #DEFAULT}.
+ * How the formatter indents: an editor sends its own tab size and tab preference, the command line
+ * uses {@link #DEFAULT}.
  *
  * @param indent columns per block level (with tabs: how wide a tab counts when lines are measured)
  * @param insertSpaces indent with spaces rather than one tab per level

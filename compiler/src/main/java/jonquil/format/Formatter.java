@@ -9,16 +9,16 @@ import jonquil.source.TextRange;
 import jonquil.syntax.SpecParser;
 
 /**
- * Rewrites a spec in the one canonical layout, so that diffs show changed facts and never
- * changed spacing. Only whitespace, line breaks and the inline separator ';' ever change:
- * every other token and every comment stays, in the same order (see package-info for the rules).
+ * Rewrites a spec in the one canonical layout, so that diffs show changed facts and never changed
+ * spacing. Only whitespace, line breaks and the inline separator ';' ever change: every other token
+ * and every comment stays, in the same order (see package-info for the rules).
  */
 public final class Formatter {
   private Formatter() {}
 
   /**
-   * The canonical text of {@code file}, or empty when it has syntax errors: a broken file is
-   * never formatted, since recovery could only guess what it means.
+   * The canonical text of {@code file}, or empty when it has syntax errors: a broken file is never
+   * formatted, since recovery could only guess what it means.
    */
   public static Optional<String> format(SourceFile file, FormatOptions options) {
     if (hasSyntaxErrors(file)) {
@@ -26,23 +26,28 @@ public final class Formatter {
     }
     String formatted = render(file.text(), options);
     // A layout bug must never cost the writer a token: keep the text as it was instead.
-    boolean safe = sameTokens(file.text(), formatted) && !hasSyntaxErrors(new SourceFile(file.path(), formatted));
+    boolean safe =
+        sameTokens(file.text(), formatted)
+            && !hasSyntaxErrors(new SourceFile(file.path(), formatted));
     return Optional.of(safe ? formatted : file.text());
   }
 
   /**
-   * The edits that format {@code file}: none when it is already canonical or has syntax
-   * errors, else one replacement of the whole text.
+   * The edits that format {@code file}: none when it is already canonical or has syntax errors,
+   * else one replacement of the whole text.
    */
   public static List<Edit> edits(SourceFile file, FormatOptions options) {
     return format(file, options)
         .filter(formatted -> !formatted.equals(file.text()))
-        .map(formatted -> List.of(new Edit(file.path(), new TextRange(0, file.text().length()), formatted)))
+        .map(
+            formatted ->
+                List.of(new Edit(file.path(), new TextRange(0, file.text().length()), formatted)))
         .orElse(List.of());
   }
 
   static boolean hasSyntaxErrors(SourceFile file) {
-    return SpecParser.parse(file).diagnostics().stream().anyMatch(d -> d.severity() == Severity.ERROR);
+    return SpecParser.parse(file).diagnostics().stream()
+        .anyMatch(d -> d.severity() == Severity.ERROR);
   }
 
   /** The layout alone, without the safety net; the caller has checked that the text parses. */

@@ -4,10 +4,10 @@ import java.util.ArrayList;
 import java.util.List;
 
 /**
- * Turns the lexemes of a well-formed spec into canonical lines: one statement or block
- * parameter per line, blocks indented one level, at most one blank line in a row, and every
- * comment between the same two tokens as before. The grammar is flat (blocks never nest),
- * so a depth of 0 or 1 and whether the block is a train is all the state it needs.
+ * Turns the lexemes of a well-formed spec into canonical lines: one statement or block parameter
+ * per line, blocks indented one level, at most one blank line in a row, and every comment between
+ * the same two tokens as before. The grammar is flat (blocks never nest), so a depth of 0 or 1 and
+ * whether the block is a train is all the state it needs.
  */
 final class Layout {
   private final List<Lexeme> lexemes;
@@ -46,8 +46,12 @@ final class Layout {
         case SEMI -> flush(); // ';' is a line break written inline
         case LBRACE -> {
           add(t);
-          inTrain = statement.stream().filter(Lexeme::significant).findFirst()
-              .map(first -> first.kind() == LexemeKind.WORD && first.text().equals("train")).orElse(false);
+          inTrain =
+              statement.stream()
+                  .filter(Lexeme::significant)
+                  .findFirst()
+                  .map(first -> first.kind() == LexemeKind.WORD && first.text().equals("train"))
+                  .orElse(false);
           flush();
           out.set(out.size() - 1, withOpensBlock(out.get(out.size() - 1)));
           depth = 1;
@@ -59,7 +63,10 @@ final class Layout {
           close(t);
         }
         case LINE_COMMENT, BLOCK_COMMENT -> {
-          if (statement.isEmpty() && !t.startsLine() && !out.isEmpty() && last().takesTrailingComment()) {
+          if (statement.isEmpty()
+              && !t.startsLine()
+              && !out.isEmpty()
+              && last().takesTrailingComment()) {
             out.set(out.size() - 1, last().append(" ", t));
             lineBreaks = 0;
           } else {
@@ -84,8 +91,8 @@ final class Layout {
   }
 
   /**
-   * A line break inside a train continues the path when an arrow ends the line before it or
-   * starts the line after it (comments and blank lines in between do not count).
+   * A line break inside a train continues the path when an arrow ends the line before it or starts
+   * the line after it (comments and blank lines in between do not count).
    */
   private boolean continuesPath(int nl) {
     return isArrow(previousSignificant[nl]) || isArrow(nextSignificant[nl]);
@@ -95,7 +102,10 @@ final class Layout {
     return index >= 0 && lexemes.get(index).kind() == LexemeKind.ARROW;
   }
 
-  /** For each lexeme, the index of the nearest significant lexeme before it (-1 if none): one pass, not one per line break. */
+  /**
+   * For each lexeme, the index of the nearest significant lexeme before it (-1 if none): one pass,
+   * not one per line break.
+   */
   private static int[] previousSignificant(List<Lexeme> lexemes) {
     int[] result = new int[lexemes.size()];
     int last = -1;
@@ -136,7 +146,9 @@ final class Layout {
     }
   }
 
-  /** An empty block closes on its opening line ({@code probe p {}}); any other on a line of its own. */
+  /**
+   * An empty block closes on its opening line ({@code probe p {}}); any other on a line of its own.
+   */
   private void close(Lexeme brace) {
     if (!out.isEmpty() && last().opensBlock() && last().last() == LexemeKind.LBRACE) {
       Line closed = last().append("", brace);

@@ -4,9 +4,9 @@ import java.util.ArrayList;
 import java.util.List;
 
 /**
- * Splits spec text into {@link Lexeme}s by the same rules as the language's lexer, keeping
- * comments and line breaks, because layout is about exactly what the parser throws away.
- * It is only trusted on text that parsed without errors; on anything else it still never throws.
+ * Splits spec text into {@link Lexeme}s by the same rules as the language's lexer, keeping comments
+ * and line breaks, because layout is about exactly what the parser throws away. It is only trusted
+ * on text that parsed without errors; on anything else it still never throws.
  */
 final class Lexer {
   private final String text;
@@ -36,7 +36,10 @@ final class Lexer {
         pos++;
         space = true;
       } else if (c == '\r' || c == '\n') {
-        int end = c == '\r' && pos + 1 < text.length() && text.charAt(pos + 1) == '\n' ? pos + 2 : pos + 1;
+        int end =
+            c == '\r' && pos + 1 < text.length() && text.charAt(pos + 1) == '\n'
+                ? pos + 2
+                : pos + 1;
         emit(LexemeKind.NL, end);
         atLineStart = true;
       } else {
@@ -61,7 +64,8 @@ final class Lexer {
     for (int i = 0; i < out.size(); i++) {
       Lexeme l = out.get(i);
       boolean endsLine = i + 1 == out.size() || out.get(i + 1).kind() == LexemeKind.NL;
-      result.add(new Lexeme(l.kind(), l.text(), l.start(), l.startsLine(), l.spaceBefore(), endsLine));
+      result.add(
+          new Lexeme(l.kind(), l.text(), l.start(), l.startsLine(), l.spaceBefore(), endsLine));
     }
     return List.copyOf(result);
   }
@@ -89,7 +93,9 @@ final class Lexer {
     }
     switch (c) {
       case '/':
-        return next == '/' ? LexemeKind.LINE_COMMENT : next == '*' ? LexemeKind.BLOCK_COMMENT : LexemeKind.SLASH;
+        return next == '/'
+            ? LexemeKind.LINE_COMMENT
+            : next == '*' ? LexemeKind.BLOCK_COMMENT : LexemeKind.SLASH;
       case '"':
         return LexemeKind.STRING;
       case '-':
@@ -100,7 +106,10 @@ final class Lexer {
         return next == '-' ? LexemeKind.PLUSMINUS : LexemeKind.SIGN;
       case '\u00B1':
         return LexemeKind.PLUSMINUS;
-      case '<': case '>': case '\u2264': case '\u2265':
+      case '<':
+      case '>':
+      case '\u2264':
+      case '\u2265':
         return LexemeKind.COMPARE;
       case '=':
         return next == '=' ? LexemeKind.COMPARE : LexemeKind.EQ;
@@ -129,7 +138,10 @@ final class Lexer {
     }
   }
 
-  /** Where the token starting here with {@code c} ends: the longest match, as the language's lexer takes it. */
+  /**
+   * Where the token starting here with {@code c} ends: the longest match, as the language's lexer
+   * takes it.
+   */
   private int end(char c) {
     switch (kindAt(c)) {
       case NUMBER:
@@ -138,13 +150,15 @@ final class Lexer {
         return wordEnd();
       case LINE_COMMENT:
         return lineEnd(pos);
-      case BLOCK_COMMENT: {
-        int close = text.indexOf("*/", pos + 2);
-        return close < 0 ? text.length() : close + 2;
-      }
+      case BLOCK_COMMENT:
+        {
+          int close = text.indexOf("*/", pos + 2);
+          return close < 0 ? text.length() : close + 2;
+        }
       case STRING:
         return stringEnd();
-      case ARROW: case RANGE:
+      case ARROW:
+      case RANGE:
         return pos + 2;
       case PLUSMINUS:
         return c == '+' ? pos + 2 : pos + 1;
@@ -173,7 +187,10 @@ final class Lexer {
 
   private int numberEnd() {
     int i = digitsEnd(pos);
-    if (i < text.length() && text.charAt(i) == '.' && i + 1 < text.length() && isDigit(text.charAt(i + 1))) {
+    if (i < text.length()
+        && text.charAt(i) == '.'
+        && i + 1 < text.length()
+        && isDigit(text.charAt(i + 1))) {
       i = digitsEnd(i + 1);
     }
     if (i < text.length() && (text.charAt(i) == 'e' || text.charAt(i) == 'E')) {
@@ -193,8 +210,12 @@ final class Lexer {
     while (i < text.length()) {
       int cp = text.codePointAt(i);
       int type = Character.getType(cp);
-      boolean part = cp == '_' || Character.isLetter(cp) || type == Character.DECIMAL_DIGIT_NUMBER
-          || type == Character.LETTER_NUMBER || type == Character.OTHER_NUMBER;
+      boolean part =
+          cp == '_'
+              || Character.isLetter(cp)
+              || type == Character.DECIMAL_DIGIT_NUMBER
+              || type == Character.LETTER_NUMBER
+              || type == Character.OTHER_NUMBER;
       if (!part) {
         break;
       }

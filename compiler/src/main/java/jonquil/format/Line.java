@@ -1,8 +1,8 @@
 package jonquil.format;
 
 /**
- * One output line before line endings are chosen: its full text with indentation, and the
- * facts the next token needs to decide whether it may join it.
+ * One output line before line endings are chosen: its full text with indentation, and the facts the
+ * next token needs to decide whether it may join it.
  *
  * @param opensBlock the line ends with the '{' of a block that has nothing in it yet
  * @param last the kind of its last token, or null for a blank line
@@ -14,7 +14,10 @@ record Line(String text, boolean opensBlock, LexemeKind last) {
     return last == null;
   }
 
-  /** A comment written after this line's last token may stay on it; nothing can follow a line comment. */
+  /**
+   * A comment written after this line's last token may stay on it; nothing can follow a line
+   * comment.
+   */
   boolean takesTrailingComment() {
     return !blank() && last != LexemeKind.LINE_COMMENT;
   }

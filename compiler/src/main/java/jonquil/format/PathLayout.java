@@ -4,10 +4,10 @@ import java.util.ArrayList;
 import java.util.List;
 
 /**
- * Lays out one beam path of a train: on one line when it fits, otherwise broken before an
- * arrow, with each continuation line starting with '->' aligned under the path's first arrow.
- * Comments stay between the same two tokens; a line comment or a comment the writer put on
- * its own line keeps its line.
+ * Lays out one beam path of a train: on one line when it fits, otherwise broken before an arrow,
+ * with each continuation line starting with '->' aligned under the path's first arrow. Comments
+ * stay between the same two tokens; a line comment or a comment the writer put on its own line
+ * keeps its line.
  */
 final class PathLayout {
   /** Columns a path line may take before it is broken at an arrow. */
@@ -48,7 +48,8 @@ final class PathLayout {
     return t.kind() == LexemeKind.LINE_COMMENT || (t.isComment() && t.startsLine() && t.endsLine());
   }
 
-  private static boolean breaksBefore(List<Lexeme> path, int i, String prefix, List<Lexeme> line, FormatOptions o) {
+  private static boolean breaksBefore(
+      List<Lexeme> path, int i, String prefix, List<Lexeme> line, FormatOptions o) {
     Lexeme t = path.get(i);
     if (t.isComment()) {
       return t.startsLine();
@@ -67,7 +68,9 @@ final class PathLayout {
     step.add(path.get(arrow));
     for (int j = arrow + 1; j < path.size(); j++) {
       Lexeme t = path.get(j);
-      if (t.kind() == LexemeKind.ARROW || t.kind() == LexemeKind.LINE_COMMENT || (t.isComment() && t.startsLine())) {
+      if (t.kind() == LexemeKind.ARROW
+          || t.kind() == LexemeKind.LINE_COMMENT
+          || (t.isComment() && t.startsLine())) {
         break;
       }
       step.add(t);
@@ -88,7 +91,9 @@ final class PathLayout {
     return columns(Spacing.join(step), FormatOptions.DEFAULT);
   }
 
-  /** Width of the last physical line of {@code text} in code points, a tab counting as one indent. */
+  /**
+   * Width of the last physical line of {@code text} in code points, a tab counting as one indent.
+   */
   static int columns(String text, FormatOptions o) {
     int from = Math.max(text.lastIndexOf('\n'), text.lastIndexOf('\r')) + 1;
     int width = 0;

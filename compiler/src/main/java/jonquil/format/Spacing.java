@@ -3,9 +3,9 @@ package jonquil.format;
 import java.util.List;
 
 /**
- * Whether one space or none goes between two tokens on a line. One space is the rule;
- * the exceptions keep units, references, signs and lists looking the way people write them.
- * A pair is only ever written together when the two texts still read back as the same two tokens.
+ * Whether one space or none goes between two tokens on a line. One space is the rule; the
+ * exceptions keep units, references, signs and lists looking the way people write them. A pair is
+ * only ever written together when the two texts still read back as the same two tokens.
  */
 final class Spacing {
   private Spacing() {}
@@ -26,8 +26,11 @@ final class Spacing {
   static boolean spaced(List<Lexeme> line, int i) {
     Lexeme prev = line.get(i - 1);
     Lexeme next = line.get(i);
-    return !glued(line, i, prev, next) || !Lexer.lex(prev.text() + next.text()).stream()
-        .map(Lexeme::text).toList().equals(List.of(prev.text(), next.text()));
+    return !glued(line, i, prev, next)
+        || !Lexer.lex(prev.text() + next.text()).stream()
+            .map(Lexeme::text)
+            .toList()
+            .equals(List.of(prev.text(), next.text()));
   }
 
   private static boolean glued(List<Lexeme> line, int i, Lexeme prev, Lexeme next) {
@@ -42,20 +45,27 @@ final class Spacing {
     if (p == LexemeKind.SIGN && n == LexemeKind.NUMBER) {
       return true; // a sign is part of its number: '-50 mm'
     }
-    if (p.isUnitOperator() || n == LexemeKind.STAR || n == LexemeKind.MIDDOT || n == LexemeKind.CARET) {
+    if (p.isUnitOperator()
+        || n == LexemeKind.STAR
+        || n == LexemeKind.MIDDOT
+        || n == LexemeKind.CARET) {
       return true; // a compound unit is one word: 'kW/cm2', 'J/cm^2'
     }
     if (n == LexemeKind.SLASH) {
       // After a value a '/' starts the unit ('0.2 /cm'); after a unit factor it continues it.
       return !(p == LexemeKind.NUMBER && !isExponent(line, i - 1));
     }
-    if ((n == LexemeKind.PERCENT || n == LexemeKind.DEGREE) && p == LexemeKind.NUMBER && !isExponent(line, i - 1)) {
+    if ((n == LexemeKind.PERCENT || n == LexemeKind.DEGREE)
+        && p == LexemeKind.NUMBER
+        && !isExponent(line, i - 1)) {
       return !next.spaceBefore(); // both '95 %' and '45°' are common: keep the writer's choice
     }
     return false;
   }
 
-  /** True when the number at {@code at} is the power of a unit factor ({@code cm^2}, {@code m^-1}). */
+  /**
+   * True when the number at {@code at} is the power of a unit factor ({@code cm^2}, {@code m^-1}).
+   */
   private static boolean isExponent(List<Lexeme> line, int at) {
     int before = at - 1;
     if (before >= 0 && line.get(before).kind() == LexemeKind.SIGN) {

@@ -6,11 +6,21 @@ import java.util.Map;
 import jonquil.diag.Diagnostic;
 import jonquil.diag.Edit;
 
-/** A quick fix for one diagnostic: its title, whether it is the preferred one, and its edits in each file. */
-public record CodeActionInfo(String title, String kind, boolean preferred, Diagnostic diagnostic,
+/**
+ * A quick fix for one diagnostic: its title, whether it is the preferred one, and its edits in each
+ * file.
+ */
+public record CodeActionInfo(
+    String title,
+    String kind,
+    boolean preferred,
+    Diagnostic diagnostic,
     Map<Path, List<Edit>> edits) {
   public CodeActionInfo {
-    edits = edits.entrySet().stream().collect(java.util.stream.Collectors.toUnmodifiableMap(
-        Map.Entry::getKey, e -> List.copyOf(e.getValue())));
+    edits =
+        edits.entrySet().stream()
+            .collect(
+                java.util.stream.Collectors.toUnmodifiableMap(
+                    Map.Entry::getKey, e -> List.copyOf(e.getValue())));
   }
 }

@@ -13,8 +13,8 @@ import jonquil.diag.Fix;
 import jonquil.source.TextRange;
 
 /**
- * The quick fixes for the diagnostics under a range: the checker's own {@link Fix}es, and
- * those that need a view of the whole file, such as a dump for a port nobody follows.
+ * The quick fixes for the diagnostics under a range: the checker's own {@link Fix}es, and those
+ * that need a view of the whole file, such as a dump for a port nobody follows.
  */
 final class CodeActions {
   private CodeActions() {}
@@ -22,7 +22,9 @@ final class CodeActions {
   static List<CodeActionInfo> of(Result r, Path file, TextRange range) {
     List<CodeActionInfo> out = new ArrayList<>();
     for (Diagnostic d : r.diagnostics()) {
-      if (!d.file().equals(file) || d.range().start() > range.end() || d.range().end() < range.start()) {
+      if (!d.file().equals(file)
+          || d.range().start() > range.end()
+          || d.range().end() < range.start()) {
         continue;
       }
       List<Fix> fixes = new ArrayList<>(d.fixes());
@@ -30,7 +32,9 @@ final class CodeActions {
         StrayDumpFix.of(r, d).ifPresent(fixes::add);
       }
       for (int i = 0; i < fixes.size(); i++) {
-        out.add(new CodeActionInfo(fixes.get(i).title(), "quickfix", i == 0, d, byFile(fixes.get(i).edits())));
+        out.add(
+            new CodeActionInfo(
+                fixes.get(i).title(), "quickfix", i == 0, d, byFile(fixes.get(i).edits())));
       }
     }
     return out;

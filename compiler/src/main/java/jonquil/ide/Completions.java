@@ -14,11 +14,16 @@ import jonquil.resolve.Measure;
 import jonquil.resolve.ParamSpec;
 import jonquil.source.SourceFile;
 
-/** Chooses what may be written at the cursor from the text before it and the names of the last check. */
+/**
+ * Chooses what may be written at the cursor from the text before it and the names of the last
+ * check.
+ */
 final class Completions {
   /** Words after which a material name comes. */
   static final Set<String> MATERIAL_WORDS = Set.of("material", "metal", "from", "to", "then", "in");
-  private static final List<String> STATES = List.of("linear", "circular", "elliptical", "unpolarized", "partial");
+
+  private static final List<String> STATES =
+      List.of("linear", "circular", "elliptical", "unpolarized", "partial");
 
   private Completions() {}
 
@@ -31,10 +36,12 @@ final class Completions {
         return List.of();
       }
       Vocabulary v = Vocabulary.of(r, file);
-      List<CompletionItemInfo> out = c.dotted().isPresent() ? ports(v, c.dotted().get()) : choose(c, v);
+      List<CompletionItemInfo> out =
+          c.dotted().isPresent() ? ports(v, c.dotted().get()) : choose(c, v);
       return unique(out);
     } catch (RuntimeException e) {
-      return List.of(); // completion must never break typing; a wrong guess costs less than an error
+      return List
+          .of(); // completion must never break typing; a wrong guess costs less than an error
     }
   }
 
@@ -70,7 +77,15 @@ final class Completions {
       return out;
     }
     if (shorthand) {
-      return ElementKind.byWord(kind).map(k -> inParameter(c, v, k, c.statement().subList(Math.min(3, c.statement().size()), c.statement().size())))
+      return ElementKind.byWord(kind)
+          .map(
+              k ->
+                  inParameter(
+                      c,
+                      v,
+                      k,
+                      c.statement()
+                          .subList(Math.min(3, c.statement().size()), c.statement().size())))
           .orElse(List.of());
     }
     return List.of();
@@ -87,15 +102,19 @@ final class Completions {
     return inParameter(c, v, kind.get(), c.statement());
   }
 
-  /** Inside one parameter line: units after a number, names after the words that take them, else the shape's words. */
-  private static List<CompletionItemInfo> inParameter(CursorContext c, Vocabulary v, ElementKind kind,
-      List<Lexeme> line) {
+  /**
+   * Inside one parameter line: units after a number, names after the words that take them, else the
+   * shape's words.
+   */
+  private static List<CompletionItemInfo> inParameter(
+      CursorContext c, Vocabulary v, ElementKind kind, List<Lexeme> line) {
     if (line.isEmpty()) {
       return parameters(kind, Set.of());
     }
     Optional<ParamSpec> spec = kind.param(line.get(0).text());
     if (c.afterNumber()) {
-      return units(spec.map(s -> ShapeSlots.unitsAfter(s.shape(), line)).orElse(UnitChoices.COMMON));
+      return units(
+          spec.map(s -> ShapeSlots.unitsAfter(s.shape(), line)).orElse(UnitChoices.COMMON));
     }
     String prev = c.previous().map(Lexeme::text).orElse("");
     if (MATERIAL_WORDS.contains(prev)) {
@@ -110,8 +129,15 @@ final class Completions {
       if (category == Category.MATERIAL) {
         out.addAll(v.materials(false));
       } else {
-        v.of(category).forEach(n -> out.add(new CompletionItemInfo(n.name(), "element",
-            n.kind().map(ElementKind::word).orElse(category.phrase()), "")));
+        v.of(category)
+            .forEach(
+                n ->
+                    out.add(
+                        new CompletionItemInfo(
+                            n.name(),
+                            "element",
+                            n.kind().map(ElementKind::word).orElse(category.phrase()),
+                            "")));
       }
     }
     return out;
@@ -138,9 +164,15 @@ final class Completions {
       List<CompletionItemInfo> out = new ArrayList<>();
       for (String s : Measure.spellings()) {
         Measure m = Measure.bySpelling(s).orElseThrow();
-        out.add(new CompletionItemInfo(s, "measure", "requirement on " + m.word(),
-            "bound written as " + m.bound().name().toLowerCase(java.util.Locale.ROOT).replace('_', ' ')
-                + "; place: " + m.where().name().toLowerCase(java.util.Locale.ROOT).replace('_', ' ')));
+        out.add(
+            new CompletionItemInfo(
+                s,
+                "measure",
+                "requirement on " + m.word(),
+                "bound written as "
+                    + m.bound().name().toLowerCase(java.util.Locale.ROOT).replace('_', ' ')
+                    + "; place: "
+                    + m.where().name().toLowerCase(java.util.Locale.ROOT).replace('_', ' ')));
       }
       out.add(keyword("yield", "the fraction of toleranced builds that must pass"));
       return out;
@@ -152,12 +184,15 @@ final class Completions {
       return STATES.stream().map(s -> keyword(s, "polarization state")).toList();
     }
     if (c.after("over")) {
-      return List.of(keyword("wavelength", "a wavelength band: over wavelength 1060 nm .. 1070 nm"));
+      return List.of(
+          keyword("wavelength", "a wavelength band: over wavelength 1060 nm .. 1070 nm"));
     }
     if (c.afterNumber()) {
       boolean band = c.statement().stream().anyMatch(l -> l.is("over"));
-      return units(band ? UnitChoices.forDimensions(List.of(jonquil.units.Dimension.LENGTH))
-          : ShapeSlots.unitsFor(measure(c).map(Measure::bound).orElse(null)));
+      return units(
+          band
+              ? UnitChoices.forDimensions(List.of(jonquil.units.Dimension.LENGTH))
+              : ShapeSlots.unitsFor(measure(c).map(Measure::bound).orElse(null)));
     }
     if (measure(c).isPresent()) {
       List<CompletionItemInfo> out = new ArrayList<>();
@@ -196,8 +231,16 @@ final class Completions {
   }
 
   private static List<CompletionItemInfo> ports(Vocabulary v, String element) {
-    return v.named(element).flatMap(Vocabulary.Named::kind).map(k -> k.ports().stream()
-        .map(p -> new CompletionItemInfo(p, "port", "port of " + k.word() + " '" + element + "'", "")).toList())
+    return v.named(element)
+        .flatMap(Vocabulary.Named::kind)
+        .map(
+            k ->
+                k.ports().stream()
+                    .map(
+                        p ->
+                            new CompletionItemInfo(
+                                p, "port", "port of " + k.word() + " '" + element + "'", ""))
+                    .toList())
         .orElse(List.of());
   }
 
@@ -206,14 +249,18 @@ final class Completions {
     for (ParamSpec p : kind.params()) {
       if (!skip.contains(p.name())) {
         String how = p.required() ? "required" : p.repeatable() ? "repeatable" : "optional";
-        out.add(new CompletionItemInfo(p.name(), "parameter", how + " parameter of " + kind.word(), p.doc()));
+        out.add(
+            new CompletionItemInfo(
+                p.name(), "parameter", how + " parameter of " + kind.word(), p.doc()));
       }
     }
     return out;
   }
 
   private static List<CompletionItemInfo> units(List<String> units) {
-    return units.stream().map(u -> new CompletionItemInfo(u, "unit", UnitChoices.describe(u), "")).toList();
+    return units.stream()
+        .map(u -> new CompletionItemInfo(u, "unit", UnitChoices.describe(u), ""))
+        .toList();
   }
 
   private static CompletionItemInfo keyword(String word, String doc) {

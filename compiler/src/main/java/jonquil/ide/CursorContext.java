@@ -5,14 +5,24 @@ import java.util.List;
 import java.util.Optional;
 
 /**
- * Where the cursor stands, read from the text before it alone: which block it is in, the
- * statement typed so far, and the word being typed. Completion works on half-written text,
- * which the parser cannot be trusted with.
+ * Where the cursor stands, read from the text before it alone: which block it is in, the statement
+ * typed so far, and the word being typed. Completion works on half-written text, which the parser
+ * cannot be trusted with.
  */
-record CursorContext(Block block, String header, List<Lexeme> statement, String word, Optional<String> dotted,
+record CursorContext(
+    Block block,
+    String header,
+    List<Lexeme> statement,
+    String word,
+    Optional<String> dotted,
     boolean inert) {
   /** The kind of block around the cursor. */
-  enum Block { TOP, DECLARATION, TRAIN, REQUIRE }
+  enum Block {
+    TOP,
+    DECLARATION,
+    TRAIN,
+    REQUIRE
+  }
 
   CursorContext {
     statement = List.copyOf(statement);
@@ -26,13 +36,16 @@ record CursorContext(Block block, String header, List<Lexeme> statement, String 
     List<Lexeme> code = new ArrayList<>();
     lexemes.stream().filter(l -> l.type() != Lexeme.Type.COMMENT).forEach(code::add);
     String word = "";
-    if (!code.isEmpty() && code.get(code.size() - 1).type() == Lexeme.Type.WORD
+    if (!code.isEmpty()
+        && code.get(code.size() - 1).type() == Lexeme.Type.WORD
         && code.get(code.size() - 1).end() == offset) {
       word = code.remove(code.size() - 1).text();
     }
     Optional<String> dotted = Optional.empty();
     int n = code.size();
-    if (n >= 2 && code.get(n - 1).is(".") && code.get(n - 1).end() == offset - word.length()
+    if (n >= 2
+        && code.get(n - 1).is(".")
+        && code.get(n - 1).end() == offset - word.length()
         && code.get(n - 2).type() == Lexeme.Type.WORD) {
       dotted = Optional.of(code.get(n - 2).text());
       code = new ArrayList<>(code.subList(0, n - 2));
@@ -42,7 +55,10 @@ record CursorContext(Block block, String header, List<Lexeme> statement, String 
     Block block = Block.TOP;
     String head = header.isEmpty() ? "" : header.get(0).text();
     if (open >= 0) {
-      block = head.equals("train") ? Block.TRAIN : head.equals("require") ? Block.REQUIRE : Block.DECLARATION;
+      block =
+          head.equals("train")
+              ? Block.TRAIN
+              : head.equals("require") ? Block.REQUIRE : Block.DECLARATION;
     }
     List<Lexeme> statement = code.subList(statementStart(code, code.size()), code.size());
     return new CursorContext(block, head, statement, word, dotted, false);
@@ -54,9 +70,12 @@ record CursorContext(Block block, String header, List<Lexeme> statement, String 
       return false;
     }
     if (last.type() == Lexeme.Type.COMMENT) {
-      return last.text().startsWith("//") || !last.text().endsWith("*/") || last.text().length() < 4;
+      return last.text().startsWith("//")
+          || !last.text().endsWith("*/")
+          || last.text().length() < 4;
     }
-    return last.type() == Lexeme.Type.STRING && (last.text().length() < 2 || !last.text().endsWith("\""));
+    return last.type() == Lexeme.Type.STRING
+        && (last.text().length() < 2 || !last.text().endsWith("\""));
   }
 
   private static int innermostOpenBrace(List<Lexeme> code) {
@@ -71,13 +90,16 @@ record CursorContext(Block block, String header, List<Lexeme> statement, String 
     return stack.isEmpty() ? -1 : stack.get(stack.size() - 1);
   }
 
-  /** A statement starts after a line break, ';', '{' or '}', unless it continues a path with '->'. */
+  /**
+   * A statement starts after a line break, ';', '{' or '}', unless it continues a path with '->'.
+   */
   private static int statementStart(List<Lexeme> code, int end) {
     int i = end;
     while (i > 0) {
       Lexeme l = code.get(i - 1);
       boolean separator = l.type() == Lexeme.Type.NEWLINE || l.is(";") || l.is("{") || l.is("}");
-      if (separator && !(l.type() == Lexeme.Type.NEWLINE && i < code.size() && code.get(i).is("->"))) {
+      if (separator
+          && !(l.type() == Lexeme.Type.NEWLINE && i < code.size() && code.get(i).is("->"))) {
         return i;
       }
       i--;
@@ -87,12 +109,16 @@ record CursorContext(Block block, String header, List<Lexeme> statement, String 
 
   /** The last token of the statement before the word being typed, or empty at its start. */
   Optional<Lexeme> previous() {
-    return statement.isEmpty() ? Optional.empty() : Optional.of(statement.get(statement.size() - 1));
+    return statement.isEmpty()
+        ? Optional.empty()
+        : Optional.of(statement.get(statement.size() - 1));
   }
 
   /** The token before {@link #previous()}. */
   Optional<Lexeme> beforePrevious() {
-    return statement.size() < 2 ? Optional.empty() : Optional.of(statement.get(statement.size() - 2));
+    return statement.size() < 2
+        ? Optional.empty()
+        : Optional.of(statement.get(statement.size() - 2));
   }
 
   boolean afterNumber() {

@@ -13,12 +13,15 @@ import jonquil.syntax.Property;
 import jonquil.syntax.SpecFile;
 import jonquil.syntax.UseDecl;
 
-/** Links the files a spec names to those files, when they exist: the check read them, or they are on disk. */
+/**
+ * Links the files a spec names to those files, when they exist: the check read them, or they are on
+ * disk.
+ */
 final class DocumentLinks {
   private DocumentLinks() {}
 
   static List<DocumentLinkInfo> of(Result r, Path file) {
-    SpecFile f = Models.tree(r, file).orElse(null);
+    SpecFile f = OwningModels.tree(r, file).orElse(null);
     if (f == null) {
       return List.of();
     }
@@ -29,7 +32,9 @@ final class DocumentLinks {
     for (Declaration d : f.declarations()) {
       for (Property p : d.properties()) {
         if (p.key().text().equals("table")) {
-          p.args().stream().filter(a -> a instanceof Arg.StringArg).map(a -> (Arg.StringArg) a)
+          p.args().stream()
+              .filter(a -> a instanceof Arg.StringArg)
+              .map(a -> (Arg.StringArg) a)
               .forEach(s -> link(r, file, s.value(), s.range(), out));
         }
       }
@@ -38,7 +43,8 @@ final class DocumentLinks {
     return out;
   }
 
-  private static void link(Result r, Path file, String written, TextRange quoted, List<DocumentLinkInfo> out) {
+  private static void link(
+      Result r, Path file, String written, TextRange quoted, List<DocumentLinkInfo> out) {
     Path target;
     try {
       target = Ide.useTarget(file, written);
@@ -48,7 +54,8 @@ final class DocumentLinks {
     if (written.isBlank() || !(r.files().containsKey(target) || Files.isRegularFile(target))) {
       return;
     }
-    TextRange inside = quoted.length() >= 2 ? new TextRange(quoted.start() + 1, quoted.end() - 1) : quoted;
+    TextRange inside =
+        quoted.length() >= 2 ? new TextRange(quoted.start() + 1, quoted.end() - 1) : quoted;
     out.add(new DocumentLinkInfo(inside, target));
   }
 }

@@ -6,13 +6,17 @@ import jonquil.source.SourceFile;
 import jonquil.source.TextRange;
 
 /**
- * What a workspace index keeps of one spec file, so that workspace-wide answers (symbol
- * search, references, rename) reach files that no check of the open documents has read:
- * the text the ranges refer to, the names it declares, every name written in it with the
- * file that declares it, the files its 'use' lines name (found or not) and the files its
- * check read. Computed from a check of the file as a root, never by a parser of its own.
+ * What a workspace index keeps of one spec file, so that workspace-wide answers (symbol search,
+ * references, rename) reach files that no check of the open documents has read: the text the ranges
+ * refer to, the names it declares, every name written in it with the file that declares it, the
+ * files its 'use' lines name (found or not) and the files its check read. Computed from a check of
+ * the file as a root, never by a parser of its own.
  */
-public record FileIndex(SourceFile source, List<SymbolInfo> declarations, List<NameUse> names, List<Path> uses,
+public record FileIndex(
+    SourceFile source,
+    List<SymbolInfo> declarations,
+    List<NameUse> names,
+    List<Path> uses,
     List<Path> reads) {
 
   /**

@@ -14,8 +14,8 @@ import jonquil.syntax.SpecParser;
 import jonquil.syntax.TrainDecl;
 
 /**
- * The foldable spans of a file: declaration blocks, trains and require blocks, block comments
- * over several lines and runs of line comments. Only spans over more than one line fold.
+ * The foldable spans of a file: declaration blocks, trains and require blocks, block comments over
+ * several lines and runs of line comments. Only spans over more than one line fold.
  */
 final class Folding {
   private Folding() {}
@@ -29,24 +29,32 @@ final class Folding {
     SpecFile f = SpecParser.parse(source).ast();
     List<FoldingRangeInfo> out = new ArrayList<>();
     for (Declaration d : f.declarations()) {
-      if (!d.properties().isEmpty() || text.substring(d.range().start(), d.range().end()).contains("{")) {
+      if (!d.properties().isEmpty()
+          || text.substring(d.range().start(), d.range().end()).contains("{")) {
         region(text, d.range(), "region", out);
       }
     }
     f.trains().stream().map(TrainDecl::range).forEach(range -> region(text, range, "region", out));
-    f.requires().stream().map(RequireDecl::range).forEach(range -> region(text, range, "region", out));
+    f.requires().stream()
+        .map(RequireDecl::range)
+        .forEach(range -> region(text, range, "region", out));
     comments(text, f.comments(), out);
-    out.sort(Comparator.comparingInt(FoldingRangeInfo::startOffset).thenComparingInt(FoldingRangeInfo::endOffset));
+    out.sort(
+        Comparator.comparingInt(FoldingRangeInfo::startOffset)
+            .thenComparingInt(FoldingRangeInfo::endOffset));
     return out;
   }
 
-  private static void region(String text, TextRange range, String kind, List<FoldingRangeInfo> out) {
+  private static void region(
+      String text, TextRange range, String kind, List<FoldingRangeInfo> out) {
     if (range.end() <= text.length() && multiLine(text, range.start(), range.end())) {
       out.add(new FoldingRangeInfo(range.start(), range.end(), kind));
     }
   }
 
-  /** A block comment folds alone; consecutive line comments, each alone on its line, fold together. */
+  /**
+   * A block comment folds alone; consecutive line comments, each alone on its line, fold together.
+   */
   private static void comments(String text, List<TextRange> comments, List<FoldingRangeInfo> out) {
     TextRange run = null;
     for (TextRange c : comments) {
@@ -54,7 +62,10 @@ final class Folding {
       if (!line) {
         region(text, c, "comment", out);
       }
-      if (line && run != null && onlySpaceAndOneBreak(text, run.end(), c.start()) && aloneOnLine(text, c.start())) {
+      if (line
+          && run != null
+          && onlySpaceAndOneBreak(text, run.end(), c.start())
+          && aloneOnLine(text, c.start())) {
         run = new TextRange(run.start(), c.end());
         continue;
       }
@@ -78,7 +89,8 @@ final class Folding {
 
   private static boolean onlySpaceAndOneBreak(String text, int from, int to) {
     String gap = text.substring(from, to);
-    return gap.isBlank() && gap.replace("\r\n", "\n").chars().filter(ch -> ch == '\n' || ch == '\r').count() == 1;
+    return gap.isBlank()
+        && gap.replace("\r\n", "\n").chars().filter(ch -> ch == '\n' || ch == '\r').count() == 1;
   }
 
   private static boolean multiLine(String text, int start, int end) {

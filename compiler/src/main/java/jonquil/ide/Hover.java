@@ -19,43 +19,56 @@ final class Hover {
   private Hover() {}
 
   static Optional<HoverInfo> at(Result r, Path file, int offset) {
-    Optional<Names.Occurrence> name = Names.of(r).at(file, offset);
+    Optional<SymbolUses.Occurrence> name = SymbolUses.of(r).at(file, offset);
     if (name.isPresent()) {
       return Optional.of(symbol(r, file, name.get().symbol(), name.get().range()));
     }
-    Optional<SpecFile> tree = Models.tree(r, file);
+    Optional<SpecFile> tree = OwningModels.tree(r, file);
     if (tree.isEmpty()) {
       return Optional.empty();
     }
     SpecFile f = tree.get();
     SourceFile text = r.files().get(file);
-    var use = Syntax.use(f, offset);
+    var use = NodeAtCursor.use(f, offset);
     if (use.isPresent()) {
       Path target = Ide.useTarget(file, use.get().target());
-      return Optional.of(new HoverInfo("**use** " + Md.code(use.get().target()) + (r.files().containsKey(target)
-          ? ": a part library; its declarations are visible in this file" : ": this file was not read"),
-          use.get().targetRange()));
+      return Optional.of(
+          new HoverInfo(
+              "**use** "
+                  + MarkdownText.code(use.get().target())
+                  + (r.files().containsKey(target)
+                      ? ": a part library; its declarations are visible in this file"
+                      : ": this file was not read"),
+              use.get().targetRange()));
     }
-    var quantity = Syntax.quantity(f, offset);
+    var quantity = NodeAtCursor.quantity(f, offset);
     if (quantity.isPresent()) {
       return Optional.of(QuantityText.hover(text.slice(quantity.get().range()), quantity.get()));
     }
-    var requirement = Syntax.requirement(f, offset);
+    var requirement = NodeAtCursor.requirement(f, offset);
     if (requirement.isPresent()) {
       return Optional.of(RequirementText.hover(r, file, requirement.get()));
     }
-    return Syntax.kindWord(f, offset).flatMap(d -> Names.of(r).at(file, d.name().range().start()))
+    return NodeAtCursor.kindWord(f, offset)
+        .flatMap(d -> SymbolUses.of(r).at(file, d.name().range().start()))
         .map(o -> symbol(r, file, o.symbol(), o.range()));
   }
 
   /** The hover of a declared or catalog name, by what it names. */
   static HoverInfo symbol(Result r, Path file, Symbol s, TextRange range) {
-    List<ResolvedModel> models = Models.reading(r, s.isCatalog() ? file : s.file());
+    List<ResolvedModel> models = OwningModels.reading(r, s.isCatalog() ? file : s.file());
     StringBuilder md = new StringBuilder();
-    md.append("**").append(s.isCatalog() ? "catalog material" : s.kind().map(ElementKind::word)
-        .orElse(s.category() == Category.TRAIN ? "train" : "name")).append("** ").append(Md.code(s.name()));
+    md.append("**")
+        .append(
+            s.isCatalog()
+                ? "catalog material"
+                : s.kind()
+                    .map(ElementKind::word)
+                    .orElse(s.category() == Category.TRAIN ? "train" : "name"))
+        .append("** ")
+        .append(MarkdownText.code(s.name()));
     if (!s.isCatalog() && !s.file().equals(file)) {
-      md.append(" — declared in ").append(Md.code(s.file().getFileName().toString()));
+      md.append(" — declared in ").append(MarkdownText.code(s.file().getFileName().toString()));
     }
     s.declaration().ifPresent(d -> parameters(md, r.files().get(s.file()), d));
     if (s.category() == Category.MATERIAL) {
@@ -68,10 +81,10 @@ final class Hover {
         if (s.kind().get() == ElementKind.SOURCE) {
           model.element(s).ifPresent(e -> lines(md, e));
         }
-        LightText.append(md, model, Models.solution(r, model), s.name(), s.kind().get());
-        OpticsText.append(md, Models.solution(r, model), s.name(), s.kind().get());
+        LightText.append(md, model, OwningModels.solution(r, model), s.name(), s.kind().get());
+        OpticsText.append(md, OwningModels.solution(r, model), s.name(), s.kind().get());
         if (s.kind().get() == ElementKind.SOURCE) {
-          SafetyText.append(md, model, Models.solution(r, model), s.name());
+          SafetyText.append(md, model, OwningModels.solution(r, model), s.name());
         }
       }
     }
@@ -81,8 +94,9 @@ final class Hover {
   /** The model whose solution carries light at the element, else the first that reads it. */
   private static ResolvedModel lightModel(Result r, List<ResolvedModel> models, String name) {
     for (ResolvedModel m : models) {
-      var s = Models.solution(r, m);
-      if (s.isPresent() && (s.get().incidentAt(name).isPresent() || s.get().port(name).isPresent())) {
+      var s = OwningModels.solution(r, m);
+      if (s.isPresent()
+          && (s.get().incidentAt(name).isPresent() || s.get().port(name).isPresent())) {
         return m;
       }
     }
@@ -92,14 +106,33 @@ final class Hover {
   /** A source's emission lines: one wavelength and power each. */
   private static void lines(StringBuilder md, jonquil.resolve.ResolvedElement source) {
     List<String> lines = new java.util.ArrayList<>();
-    source.number("wavelength", "wavelength").ifPresent(wl -> lines.add(Md.q(wl, jonquil.units.Dimension.LENGTH)
-        + source.number("power", "power").stream().mapToObj(p -> " at " + Md.q(p, jonquil.units.Dimension.POWER))
-            .findFirst().orElse("")));
-    source.all("line").forEach(g -> lines.add(g.number("wavelength").stream()
-        .mapToObj(wl -> Md.q(wl, jonquil.units.Dimension.LENGTH)).findFirst().orElse("?") + " at "
-        + g.number("power").stream().mapToObj(p -> Md.q(p, jonquil.units.Dimension.POWER)).findFirst().orElse("?")));
+    source
+        .number("wavelength", "wavelength")
+        .ifPresent(
+            wl ->
+                lines.add(
+                    MarkdownText.q(wl, jonquil.units.Dimension.LENGTH)
+                        + source.number("power", "power").stream()
+                            .mapToObj(
+                                p -> " at " + MarkdownText.q(p, jonquil.units.Dimension.POWER))
+                            .findFirst()
+                            .orElse("")));
+    source
+        .all("line")
+        .forEach(
+            g ->
+                lines.add(
+                    g.number("wavelength").stream()
+                            .mapToObj(wl -> MarkdownText.q(wl, jonquil.units.Dimension.LENGTH))
+                            .findFirst()
+                            .orElse("?")
+                        + " at "
+                        + g.number("power").stream()
+                            .mapToObj(p -> MarkdownText.q(p, jonquil.units.Dimension.POWER))
+                            .findFirst()
+                            .orElse("?")));
     if (!lines.isEmpty()) {
-      Md.para(md).append("**Lines**: ").append(String.join("; ", lines));
+      MarkdownText.para(md).append("**Lines**: ").append(String.join("; ", lines));
     }
   }
 
@@ -108,10 +141,19 @@ final class Hover {
       return;
     }
     StringBuilder lines = new StringBuilder();
-    d.shorthand().filter(args -> !args.isEmpty()).ifPresent(args -> lines.append(
-        Md.oneLine(text.slice(TextRange.span(args.get(0).range(), args.get(args.size() - 1).range())))).append('\n'));
+    d.shorthand()
+        .filter(args -> !args.isEmpty())
+        .ifPresent(
+            args ->
+                lines
+                    .append(
+                        MarkdownText.oneLine(
+                            text.slice(
+                                TextRange.span(
+                                    args.get(0).range(), args.get(args.size() - 1).range()))))
+                    .append('\n'));
     for (Property p : d.properties()) {
-      lines.append(Md.oneLine(text.slice(p.range()))).append('\n');
+      lines.append(MarkdownText.oneLine(text.slice(p.range()))).append('\n');
     }
     if (lines.length() > 0) {
       md.append("\n\n```jonquil\n").append(lines).append("```");

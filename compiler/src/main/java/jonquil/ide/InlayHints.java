@@ -14,12 +14,15 @@ import jonquil.syntax.SpecFile;
 import jonquil.syntax.TrainDecl;
 import jonquil.units.Dimension;
 
-/** Puts the solved power after each element of a train path, so the budget reads along the beam as it is typed. */
+/**
+ * Puts the solved power after each element of a train path, so the budget reads along the beam as
+ * it is typed.
+ */
 final class InlayHints {
   private InlayHints() {}
 
   static List<InlayHint> of(Result r, Path file, int start, int end) {
-    Optional<SpecFile> tree = Models.tree(r, file);
+    Optional<SpecFile> tree = OwningModels.tree(r, file);
     Optional<TrainSolution> solution = solution(r, file);
     if (tree.isEmpty() || solution.isEmpty()) {
       return List.of();
@@ -30,8 +33,12 @@ final class InlayHints {
         for (TrainDecl.Step step : path.steps()) {
           int at = step.range().end();
           if (step instanceof TrainDecl.Place place && at >= start && at <= end) {
-            leaving(solution.get(), place).ifPresent(v -> out.add(
-                new InlayHint(at, " " + Md.q(v.power(), Dimension.POWER), tooltip(v))));
+            leaving(solution.get(), place)
+                .ifPresent(
+                    v ->
+                        out.add(
+                            new InlayHint(
+                                at, " " + MarkdownText.q(v.power(), Dimension.POWER), tooltip(v))));
           }
         }
       }
@@ -41,8 +48,8 @@ final class InlayHints {
 
   /** The solution of the first root that reads this file and was analysed. */
   private static Optional<TrainSolution> solution(Result r, Path file) {
-    for (ResolvedModel m : Models.reading(r, file)) {
-      Optional<TrainSolution> s = Models.solution(r, m);
+    for (ResolvedModel m : OwningModels.reading(r, file)) {
+      Optional<TrainSolution> s = OwningModels.solution(r, m);
       if (s.isPresent()) {
         return s;
       }
@@ -50,7 +57,10 @@ final class InlayHints {
     return Optional.empty();
   }
 
-  /** The light at the port the path leaves by: the named one, else the element's own key (its exit port). */
+  /**
+   * The light at the port the path leaves by: the named one, else the element's own key (its exit
+   * port).
+   */
   private static Optional<PortValue> leaving(TrainSolution s, TrainDecl.Place place) {
     String name = place.ref().name().text();
     Optional<PortValue> v = s.port(place.ref().text());
@@ -59,12 +69,20 @@ final class InlayHints {
 
   /** Light recorded without a port is light a beam stop receives. */
   static String tooltip(PortValue v) {
-    String where = v.port().isEmpty() ? "arriving at '" + v.element() + "'" : "leaving '" + v.key() + "'";
-    return Md.q(v.power(), Dimension.POWER) + " " + where + ": " + polarization(v.light())
+    String where =
+        v.port().isEmpty() ? "arriving at '" + v.element() + "'" : "leaving '" + v.key() + "'";
+    return MarkdownText.q(v.power(), Dimension.POWER)
+        + " "
+        + where
+        + ": "
+        + polarization(v.light())
         + (v.vertical() ? " (carried frame: the beam runs vertically)" : "");
   }
 
-  /** A one-line polarization summary, with handedness as seen by the receiver looking back towards the source. */
+  /**
+   * A one-line polarization summary, with handedness as seen by the receiver looking back towards
+   * the source.
+   */
   static String polarization(Coherency c) {
     if (c.power() <= 0) {
       return "no light";
@@ -76,17 +94,22 @@ final class InlayHints {
     double ellipticity = Math.toDegrees(c.ellipticityAngle());
     String state;
     if (Math.abs(ellipticity) < 0.05) {
-      state = "linear " + Md.deg(c.azimuth());
+      state = "linear " + MarkdownText.deg(c.azimuth());
     } else if (Math.abs(Math.abs(ellipticity) - 45) < 0.05) {
       state = "circular " + hand(c.handedness());
     } else {
-      state = "elliptical " + Md.deg(c.azimuth()) + ", ellipticity " + Md.deg(c.ellipticityAngle()) + ", "
-          + hand(c.handedness());
+      state =
+          "elliptical "
+              + MarkdownText.deg(c.azimuth())
+              + ", ellipticity "
+              + MarkdownText.deg(c.ellipticityAngle())
+              + ", "
+              + hand(c.handedness());
     }
     if (c.handedness() != Handedness.NONE && Math.abs(ellipticity) >= 0.05) {
       state += " (as seen by the receiver, looking back towards the source)";
     }
-    return state + (dop < 0.9995 ? ", DOP " + Md.num(dop) : "");
+    return state + (dop < 0.9995 ? ", DOP " + MarkdownText.num(dop) : "");
   }
 
   private static String hand(Handedness h) {

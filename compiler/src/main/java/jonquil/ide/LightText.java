@@ -14,7 +14,9 @@ import jonquil.resolve.ElementKind;
 import jonquil.resolve.ResolvedModel;
 import jonquil.units.Dimension;
 
-/** Describes the light arriving at and leaving an element from the solved train, in Markdown tables. */
+/**
+ * Describes the light arriving at and leaving an element from the solved train, in Markdown tables.
+ */
 final class LightText {
   private LightText() {}
 
@@ -23,41 +25,78 @@ final class LightText {
   static final String NO_ANALYSIS =
       "_No beam analysis: the spec has errors, so power and polarization were not computed._";
 
-  /** Appends the power, beam and polarization at every port of the element, or says why there is none. */
-  static void append(StringBuilder md, ResolvedModel model, Optional<TrainSolution> solution, String name,
+  /**
+   * Appends the power, beam and polarization at every port of the element, or says why there is
+   * none.
+   */
+  static void append(
+      StringBuilder md,
+      ResolvedModel model,
+      Optional<TrainSolution> solution,
+      String name,
       ElementKind kind) {
     if (solution.isEmpty()) {
-      Md.para(md).append(NO_ANALYSIS);
+      MarkdownText.para(md).append(NO_ANALYSIS);
       return;
     }
     TrainSolution s = solution.get();
     List<Row> rows = rows(s, name, kind);
     if (rows.isEmpty()) {
-      Md.para(md).append("_No beam reaches ").append(Md.code(name)).append("._");
+      MarkdownText.para(md)
+          .append("_No beam reaches ")
+          .append(MarkdownText.code(name))
+          .append("._");
       return;
     }
-    Md.para(md).append("**Light** (power in the table frame, summed over the source's lines)\n\n");
-    md.append("| | power | beam radius | irradiance avg / peak | peak field |\n|---|---|---|---|---|\n");
+    MarkdownText.para(md)
+        .append("**Light** (power in the table frame, summed over the source's lines)\n\n");
+    md.append(
+        "| | power | beam radius | irradiance avg / peak | peak field |\n|---|---|---|---|---|\n");
     for (Row row : rows) {
       Optional<Exposure> e = row.value().exposure();
-      md.append("| ").append(row.label()).append(" | ").append(Md.q(row.value().power(), Dimension.POWER)).append(" | ")
-          .append(e.map(x -> Md.q(x.beamRadius(), Dimension.LENGTH)).orElse("unknown")).append(" | ")
-          .append(e.map(x -> Md.q(x.averageIrradiance(), Dimension.IRRADIANCE) + " / "
-              + Md.q(x.peakIrradiance(), Dimension.IRRADIANCE)).orElse("unknown")).append(" | ")
-          .append(e.map(x -> Md.q(x.peakField(), Dimension.ELECTRIC_FIELD)).orElse("unknown")).append(" |\n");
+      md.append("| ")
+          .append(row.label())
+          .append(" | ")
+          .append(MarkdownText.q(row.value().power(), Dimension.POWER))
+          .append(" | ")
+          .append(e.map(x -> MarkdownText.q(x.beamRadius(), Dimension.LENGTH)).orElse("unknown"))
+          .append(" | ")
+          .append(
+              e.map(
+                      x ->
+                          MarkdownText.q(x.averageIrradiance(), Dimension.IRRADIANCE)
+                              + " / "
+                              + MarkdownText.q(x.peakIrradiance(), Dimension.IRRADIANCE))
+                  .orElse("unknown"))
+          .append(" | ")
+          .append(
+              e.map(x -> MarkdownText.q(x.peakField(), Dimension.ELECTRIC_FIELD)).orElse("unknown"))
+          .append(" |\n");
     }
     if (rows.stream().anyMatch(r -> r.value().exposure().isEmpty())) {
       md.append("\nBeam size unknown where marked: the source states no `beam`.\n");
     }
     for (Row row : rows) {
-      row.value().exposure().filter(Exposure::pulsed).ifPresent(x -> md.append("\nPulses at ").append(row.label())
-          .append(": energy ").append(Md.q(x.pulseEnergy().getAsDouble(), Dimension.ENERGY))
-          .append(", peak power ").append(Md.q(x.peakPower().getAsDouble(), Dimension.POWER))
-          .append(", peak fluence ").append(Md.q(x.peakFluence().getAsDouble(), Dimension.FLUENCE)).append('\n'));
+      row.value()
+          .exposure()
+          .filter(Exposure::pulsed)
+          .ifPresent(
+              x ->
+                  md.append("\nPulses at ")
+                      .append(row.label())
+                      .append(": energy ")
+                      .append(MarkdownText.q(x.pulseEnergy().getAsDouble(), Dimension.ENERGY))
+                      .append(", peak power ")
+                      .append(MarkdownText.q(x.peakPower().getAsDouble(), Dimension.POWER))
+                      .append(", peak fluence ")
+                      .append(MarkdownText.q(x.peakFluence().getAsDouble(), Dimension.FLUENCE))
+                      .append('\n'));
     }
     Map<String, Double> margins = SafetySummary.damageMargins(model, s);
     if (margins.containsKey(name)) {
-      md.append("\nDamage margin: ").append(Md.num(margins.get(name))).append(" (threshold ÷ exposure)\n");
+      md.append("\nDamage margin: ")
+          .append(MarkdownText.num(margins.get(name)))
+          .append(" (threshold ÷ exposure)\n");
     }
     polarization(md, rows);
   }
@@ -76,9 +115,12 @@ final class LightText {
   }
 
   private static void polarization(StringBuilder md, List<Row> rows) {
-    Md.para(md).append("**Polarization** (azimuth against the table frame: x horizontal, y up)\n\n");
-    md.append("| | azimuth | ellipticity | handedness (as seen by the receiver, looking back towards the source)"
-        + " | DOP | Stokes [S0, S1, S2, S3] |\n|---|---|---|---|---|---|\n");
+    MarkdownText.para(md)
+        .append("**Polarization** (azimuth against the table frame: x horizontal, y up)\n\n");
+    md.append(
+        "| | azimuth | ellipticity | handedness (as seen by the receiver, looking back towards the"
+            + " source) | DOP | Stokes [S0, S1, S2, S3] |\n"
+            + "|---|---|---|---|---|---|\n");
     for (Row row : rows) {
       Coherency c = row.value().light();
       if (c.power() <= 0) {
@@ -86,15 +128,29 @@ final class LightText {
         continue;
       }
       if (c.dop() < 1e-9) {
-        md.append("| ").append(row.label()).append(" | — | — | none (unpolarized) | 0 | ").append(stokes(c)).append(" |\n");
+        md.append("| ")
+            .append(row.label())
+            .append(" | — | — | none (unpolarized) | 0 | ")
+            .append(stokes(c))
+            .append(" |\n");
         continue;
       }
-      String azimuth = Md.deg(clean(c.azimuth(), 1))
-          + (row.value().vertical() ? " (carried frame: the beam runs vertically)" : "");
-      md.append("| ").append(row.label()).append(" | ").append(azimuth).append(" | ")
-          .append(Md.deg(clean(c.ellipticityAngle(), 1))).append(" | ")
-          .append(hand(c.handedness())).append(" | ").append(Md.num(clean(c.dop(), 1))).append(" | ")
-          .append(stokes(c)).append(" |\n");
+      String azimuth =
+          MarkdownText.deg(clean(c.azimuth(), 1))
+              + (row.value().vertical() ? " (carried frame: the beam runs vertically)" : "");
+      md.append("| ")
+          .append(row.label())
+          .append(" | ")
+          .append(azimuth)
+          .append(" | ")
+          .append(MarkdownText.deg(clean(c.ellipticityAngle(), 1)))
+          .append(" | ")
+          .append(hand(c.handedness()))
+          .append(" | ")
+          .append(MarkdownText.num(clean(c.dop(), 1)))
+          .append(" | ")
+          .append(stokes(c))
+          .append(" |\n");
     }
   }
 
@@ -113,7 +169,7 @@ final class LightText {
     double[] s = c.stokes();
     List<String> parts = new ArrayList<>();
     for (double x : s) {
-      parts.add(Md.num(clean(x, s[0])));
+      parts.add(MarkdownText.num(clean(x, s[0])));
     }
     return "[" + String.join(", ", parts) + "] W";
   }

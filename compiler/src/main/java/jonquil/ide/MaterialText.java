@@ -1,13 +1,12 @@
 package jonquil.ide;
 
-import jonquil.analysis.MaterialIndex;
 import java.util.List;
 import java.util.Optional;
-import java.util.OptionalDouble;
 import java.util.TreeSet;
+import jonquil.analysis.MaterialIndex;
 import jonquil.optics.material.CatalogMaterial;
 import jonquil.optics.material.MaterialCatalog;
-import jonquil.resolve.CatalogNames;
+import jonquil.resolve.CatalogSpellings;
 import jonquil.resolve.ElementKind;
 import jonquil.resolve.ResolvedElement;
 import jonquil.resolve.ResolvedModel;
@@ -17,8 +16,8 @@ import jonquil.units.Dimension;
 import org.apache.commons.math3.complex.Complex;
 
 /**
- * The refractive index of a material at the wavelengths the train uses, with the catalog
- * entry's reference, so a hover shows the numbers the analysis works with.
+ * The refractive index of a material at the wavelengths the train uses, with the catalog entry's
+ * reference, so a hover shows the numbers the analysis works with.
  */
 final class MaterialText {
   private MaterialText() {}
@@ -33,24 +32,46 @@ final class MaterialText {
     } else {
       boolean uniaxial = entry.map(CatalogMaterial::isBirefringent).orElse(false);
       md.append("\n\n**Index n + iκ** at the wavelengths the train uses\n\n| wavelength | n | κ |")
-          .append(uniaxial ? " n (extraordinary) |" : "").append("\n|---|---|---|").append(uniaxial ? "---|" : "")
+          .append(uniaxial ? " n (extraordinary) |" : "")
+          .append("\n|---|---|---|")
+          .append(uniaxial ? "---|" : "")
           .append('\n');
       for (double wl : wavelengths) {
         Optional<Complex> n = index(models, material, wl);
-        md.append("| ").append(Md.q(wl, Dimension.LENGTH)).append(" | ")
-            .append(n.map(c -> Md.num(c.getReal())).orElse("not known")).append(" | ")
-            .append(n.map(c -> Md.num(c.getImaginary())).orElse("not known")).append(" |");
+        md.append("| ")
+            .append(MarkdownText.q(wl, Dimension.LENGTH))
+            .append(" | ")
+            .append(n.map(c -> MarkdownText.num(c.getReal())).orElse("not known"))
+            .append(" | ")
+            .append(n.map(c -> MarkdownText.num(c.getImaginary())).orElse("not known"))
+            .append(" |");
         if (uniaxial) {
-          md.append(' ').append(entry.get().absoluteExtraordinaryIndex(wl).map(c -> Md.num(c.getReal())).orElse(""))
+          md.append(' ')
+              .append(
+                  entry
+                      .get()
+                      .absoluteExtraordinaryIndex(wl)
+                      .map(c -> MarkdownText.num(c.getReal()))
+                      .orElse(""))
               .append(" |");
         }
         md.append('\n');
-        entry.filter(e -> !e.isValidAt(wl)).ifPresent(e -> md.append("\n_")
-            .append(Md.q(wl, Dimension.LENGTH)).append(" lies outside the wavelengths the data cover._\n"));
+        entry
+            .filter(e -> !e.isValidAt(wl))
+            .ifPresent(
+                e ->
+                    md.append("\n_")
+                        .append(MarkdownText.q(wl, Dimension.LENGTH))
+                        .append(" lies outside the wavelengths the data cover._\n"));
       }
     }
-    entry.ifPresent(e -> md.append("\nCatalog entry ").append(Md.code(e.name())).append(", absolute index; source: ")
-        .append(e.reference().citation()).append('\n'));
+    entry.ifPresent(
+        e ->
+            md.append("\nCatalog entry ")
+                .append(MarkdownText.code(e.name()))
+                .append(", absolute index; source: ")
+                .append(e.reference().citation())
+                .append('\n'));
   }
 
   /** The vacuum wavelengths of every source line of the model. */
@@ -66,11 +87,15 @@ final class MaterialText {
     return List.copyOf(out);
   }
 
-  private static Optional<CatalogMaterial> catalogEntry(List<ResolvedModel> models, Symbol material) {
+  private static Optional<CatalogMaterial> catalogEntry(
+      List<ResolvedModel> models, Symbol material) {
     if (material.isCatalog()) {
-      return CatalogNames.lookup(material.name()).flatMap(n -> MaterialCatalog.lookup(n.name()));
+      return CatalogSpellings.lookup(material.name())
+          .flatMap(n -> MaterialCatalog.lookup(n.name()));
     }
-    return declared(models, material).flatMap(MaterialText::catalogRef).flatMap(s -> catalogEntry(models, s));
+    return declared(models, material)
+        .flatMap(MaterialText::catalogRef)
+        .flatMap(s -> catalogEntry(models, s));
   }
 
   private static Optional<ResolvedElement> declared(List<ResolvedModel> models, Symbol s) {
@@ -85,9 +110,13 @@ final class MaterialText {
   /** The index the analysis itself uses (one evaluation, so hover and verdicts cannot differ). */
   private static Optional<Complex> index(List<ResolvedModel> models, Symbol material, double wl) {
     if (material.isCatalog()) {
-      return models.isEmpty() ? Optional.empty() : Optional.of(MaterialIndex.at(models.get(0), material, wl));
+      return models.isEmpty()
+          ? Optional.empty()
+          : Optional.of(MaterialIndex.at(models.get(0), material, wl));
     }
-    return models.stream().filter(m -> m.element(material).isPresent()).findFirst()
+    return models.stream()
+        .filter(m -> m.element(material).isPresent())
+        .findFirst()
         .map(m -> MaterialIndex.at(m, material, wl));
   }
 }

@@ -23,7 +23,7 @@ final class Outline {
   private Outline() {}
 
   static List<SymbolInfo> of(Result r, Path file) {
-    SpecFile f = Models.tree(r, file).orElse(null);
+    SpecFile f = OwningModels.tree(r, file).orElse(null);
     return f == null ? List.of() : of(r.files().get(file), f);
   }
 
@@ -40,15 +40,27 @@ final class Outline {
       List<SymbolInfo> paths = new ArrayList<>();
       for (TrainDecl.BeamPath p : t.paths()) {
         TextRange first = p.steps().isEmpty() ? p.range() : p.steps().get(0).range();
-        paths.add(node(Md.oneLine(text.slice(p.range())), "path", p.range(), first, List.of()));
+        paths.add(
+            node(MarkdownText.oneLine(text.slice(p.range())), "path", p.range(), first, List.of()));
       }
-      out.add(node(t.name().map(n -> n.text()).orElse("train"), "train", t.range(),
-          t.name().map(n -> n.range()).orElse(t.range()), paths));
+      out.add(
+          node(
+              t.name().map(n -> n.text()).orElse("train"),
+              "train",
+              t.range(),
+              t.name().map(n -> n.range()).orElse(t.range()),
+              paths));
     }
     for (RequireDecl block : f.requires()) {
       List<SymbolInfo> lines = new ArrayList<>();
       for (Requirement q : block.requirements()) {
-        lines.add(node(Md.oneLine(q.text()), "requirement", q.range(), q.check().measure().range(), List.of()));
+        lines.add(
+            node(
+                MarkdownText.oneLine(q.text()),
+                "requirement",
+                q.range(),
+                q.check().measure().range(),
+                List.of()));
       }
       out.add(node("require", "require", block.range(), keyword(block.range(), "require"), lines));
     }
@@ -59,13 +71,20 @@ final class Outline {
   private static SymbolInfo declaration(SourceFile text, Declaration d) {
     List<SymbolInfo> children = new ArrayList<>();
     for (Property p : d.properties()) {
-      children.add(node(Md.oneLine(text.slice(p.range())), "parameter", p.range(), p.key().range(), List.of()));
+      children.add(
+          node(
+              MarkdownText.oneLine(text.slice(p.range())),
+              "parameter",
+              p.range(),
+              p.key().range(),
+              List.of()));
     }
     return node(d.name().text(), d.kind().text(), d.range(), d.name().range(), children);
   }
 
   /** A node whose selection is clamped inside its range, as editors require. */
-  private static SymbolInfo node(String name, String kind, TextRange range, TextRange selection, List<SymbolInfo> kids) {
+  private static SymbolInfo node(
+      String name, String kind, TextRange range, TextRange selection, List<SymbolInfo> kids) {
     TextRange full = TextRange.span(range, selection);
     return new SymbolInfo(name.isBlank() ? kind : name, kind, full, selection, kids);
   }
@@ -79,7 +98,9 @@ final class Outline {
   }
 
   static List<Location> searchLocations(Result r, String query) {
-    return matches(r, query).stream().map(m -> new Location(m.file(), m.symbol().selectionRange())).toList();
+    return matches(r, query).stream()
+        .map(m -> new Location(m.file(), m.symbol().selectionRange()))
+        .toList();
   }
 
   private record Match(Path file, SymbolInfo symbol) {}
@@ -87,8 +108,11 @@ final class Outline {
   private static List<Match> matches(Result r, String query) {
     String q = query == null ? "" : query.toLowerCase(Locale.ROOT);
     List<Match> out = new ArrayList<>();
-    List<Path> files = r.files().keySet().stream().filter(p -> Models.isSpec(r, p))
-        .sorted(Comparator.comparing(Path::toString)).toList();
+    List<Path> files =
+        r.files().keySet().stream()
+            .filter(p -> OwningModels.isSpec(r, p))
+            .sorted(Comparator.comparing(Path::toString))
+            .toList();
     for (Path file : files) {
       for (SymbolInfo s : declared(of(r, file))) {
         if (matches(s, q)) {
@@ -102,11 +126,17 @@ final class Outline {
     return out;
   }
 
-  /** A workspace search over indexed files, by path, with the same matching and cap as {@link #search}. */
+  /**
+   * A workspace search over indexed files, by path, with the same matching and cap as {@link
+   * #search}.
+   */
   static List<FoundSymbol> search(java.util.Collection<FileIndex> indexed, String query) {
     String q = query == null ? "" : query.toLowerCase(Locale.ROOT);
     List<FoundSymbol> out = new ArrayList<>();
-    List<FileIndex> files = indexed.stream().sorted(Comparator.comparing((FileIndex f) -> f.file().toString())).toList();
+    List<FileIndex> files =
+        indexed.stream()
+            .sorted(Comparator.comparing((FileIndex f) -> f.file().toString()))
+            .toList();
     for (FileIndex f : files) {
       for (SymbolInfo s : f.declarations()) {
         if (matches(s, q)) {
@@ -125,14 +155,16 @@ final class Outline {
   }
 
   /**
-   * The outline's nodes that declare a name a search can find (elements, materials, named
-   * trains), without their children: not 'use' lines, require blocks or unnamed trains.
+   * The outline's nodes that declare a name a search can find (elements, materials, named trains),
+   * without their children: not 'use' lines, require blocks or unnamed trains.
    */
   static List<SymbolInfo> declared(List<SymbolInfo> outline) {
     List<SymbolInfo> out = new ArrayList<>();
     for (SymbolInfo s : outline) {
-      boolean declared = !s.kind().equals("use") && !s.kind().equals("require")
-          && !(s.kind().equals("train") && s.selectionRange().equals(s.range()));
+      boolean declared =
+          !s.kind().equals("use")
+              && !s.kind().equals("require")
+              && !(s.kind().equals("train") && s.selectionRange().equals(s.range()));
       if (declared) {
         out.add(new SymbolInfo(s.name(), s.kind(), s.range(), s.selectionRange(), List.of()));
       }

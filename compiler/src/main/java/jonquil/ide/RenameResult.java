@@ -5,11 +5,17 @@ import java.util.List;
 import java.util.Map;
 import jonquil.diag.Edit;
 
-/** The edits of a rename in every file it touches, or why it was refused ({@code error} is null when ok). */
+/**
+ * The edits of a rename in every file it touches, or why it was refused ({@code error} is null when
+ * ok).
+ */
 public record RenameResult(Map<Path, List<Edit>> edits, String error) {
   public RenameResult {
-    edits = edits.entrySet().stream().collect(java.util.stream.Collectors.toUnmodifiableMap(
-        Map.Entry::getKey, e -> List.copyOf(e.getValue())));
+    edits =
+        edits.entrySet().stream()
+            .collect(
+                java.util.stream.Collectors.toUnmodifiableMap(
+                    Map.Entry::getKey, e -> List.copyOf(e.getValue())));
   }
 
   static RenameResult refused(String error) {

@@ -10,33 +10,59 @@ import java.util.Optional;
 import java.util.Set;
 import jonquil.Result;
 import jonquil.diag.Edit;
-import jonquil.resolve.CatalogNames;
+import jonquil.resolve.CatalogSpellings;
 
-/** Renames a declared name at its declaration and every use, refusing names the language would reject. */
+/**
+ * Renames a declared name at its declaration and every use, refusing names the language would
+ * reject.
+ */
 final class Renamer {
   private Renamer() {}
 
   /** The grammar's reserved words (JonquilLexer.g4): they can never be names. */
-  static final Set<String> RESERVED = Set.of("use", "train", "require", "yield", "at", "in", "for", "over", "from",
-      "to", "is", "then", "everywhere", "linear", "circular", "elliptical", "unpolarized", "partial", "right", "left",
-      "OD");
+  static final Set<String> RESERVED =
+      Set.of(
+          "use",
+          "train",
+          "require",
+          "yield",
+          "at",
+          "in",
+          "for",
+          "over",
+          "from",
+          "to",
+          "is",
+          "then",
+          "everywhere",
+          "linear",
+          "circular",
+          "elliptical",
+          "unpolarized",
+          "partial",
+          "right",
+          "left",
+          "OD");
 
   private static final String IDENTIFIER = "[\\p{L}_][\\p{L}\\p{N}_]*";
 
-  static Optional<Names.Occurrence> renamable(Names names, Path file, int offset) {
+  static Optional<SymbolUses.Occurrence> renamable(SymbolUses names, Path file, int offset) {
     return names.at(file, offset).filter(o -> !o.symbol().isCatalog());
   }
 
   static RenameResult rename(Result r, Path file, int offset, String newName) {
-    Names names = Names.of(r);
-    Optional<Names.Occurrence> at = renamable(names, file, offset);
+    SymbolUses names = SymbolUses.of(r);
+    Optional<SymbolUses.Occurrence> at = renamable(names, file, offset);
     if (at.isEmpty()) {
       return RenameResult.refused("nothing that can be renamed is at this position");
     }
     String old = at.get().symbol().name();
     if (newName == null || !newName.matches(IDENTIFIER)) {
-      return RenameResult.refused("'" + newName + "' is not a name: a name starts with a letter or '_' and"
-          + " continues with letters, digits or '_'");
+      return RenameResult.refused(
+          "'"
+              + newName
+              + "' is not a name: a name starts with a letter or '_' and"
+              + " continues with letters, digits or '_'");
     }
     if (RESERVED.contains(newName)) {
       return RenameResult.refused("'" + newName + "' is a reserved word and cannot be a name");
@@ -47,12 +73,14 @@ final class Renamer {
     if (names.declarations().stream().anyMatch(o -> o.symbol().name().equals(newName))) {
       return RenameResult.refused("'" + newName + "' is already declared; names must be unique");
     }
-    if (CatalogNames.lookup(newName).isPresent()) {
+    if (CatalogSpellings.lookup(newName).isPresent()) {
       return RenameResult.refused("'" + newName + "' is the name of a catalog material");
     }
     Map<Path, List<Edit>> edits = new LinkedHashMap<>();
-    for (Names.Occurrence o : names.of(at.get().key())) {
-      edits.computeIfAbsent(o.file(), k -> new ArrayList<>()).add(new Edit(o.file(), o.range(), newName));
+    for (SymbolUses.Occurrence o : names.of(at.get().key())) {
+      edits
+          .computeIfAbsent(o.file(), k -> new ArrayList<>())
+          .add(new Edit(o.file(), o.range(), newName));
     }
     edits.values().forEach(list -> list.sort(Comparator.comparing(Edit::range)));
     return new RenameResult(edits, null);

@@ -3,8 +3,8 @@ package jonquil.ide;
 import java.nio.file.Path;
 import java.util.Optional;
 import jonquil.Result;
-import jonquil.analysis.Figures;
 import jonquil.analysis.RequirementOutcome;
+import jonquil.analysis.VerdictText;
 import jonquil.diag.Diagnostic;
 import jonquil.diag.DiagnosticCode;
 import jonquil.syntax.Requirement;
@@ -14,26 +14,53 @@ final class RequirementText {
   private RequirementText() {}
 
   static HoverInfo hover(Result r, Path file, Requirement req) {
-    StringBuilder md = new StringBuilder("**requirement** ").append(Md.code(Md.oneLine(req.text())));
-    Optional<RequirementOutcome> outcome = r.requirements().stream()
-        .filter(o -> o.file().equals(file) && o.range().equals(req.range())).findFirst();
+    StringBuilder md =
+        new StringBuilder("**requirement** ")
+            .append(MarkdownText.code(MarkdownText.oneLine(req.text())));
+    Optional<RequirementOutcome> outcome =
+        r.requirements().stream()
+            .filter(o -> o.file().equals(file) && o.range().equals(req.range()))
+            .findFirst();
     if (outcome.isEmpty()) {
       md.append("\n\n_Not evaluated: no checked root reads this requirement._");
     } else {
       RequirementOutcome o = outcome.get();
-      md.append("\n\n| status | value | bound | margin |\n|---|---|---|---|\n| ").append(o.status().word()).append(" | ")
-          .append(o.value().isPresent() ? Md.cell(Figures.format(o.value().getAsDouble(), o.siUnit())) : "—")
-          .append(" | ").append(o.bound().isPresent() ? Md.cell(Figures.format(o.bound().getAsDouble(), o.siUnit())) : "—")
-          .append(" | ").append(o.margin().isPresent() ? Md.cell(Figures.format(o.margin().getAsDouble(), o.siUnit())) : "—")
+      md.append("\n\n| status | value | bound | margin |\n|---|---|---|---|\n| ")
+          .append(o.status().word())
+          .append(" | ")
+          .append(
+              o.value().isPresent()
+                  ? MarkdownText.cell(VerdictText.format(o.value().getAsDouble(), o.siUnit()))
+                  : "—")
+          .append(" | ")
+          .append(
+              o.bound().isPresent()
+                  ? MarkdownText.cell(VerdictText.format(o.bound().getAsDouble(), o.siUnit()))
+                  : "—")
+          .append(" | ")
+          .append(
+              o.margin().isPresent()
+                  ? MarkdownText.cell(VerdictText.format(o.margin().getAsDouble(), o.siUnit()))
+                  : "—")
           .append(" |\n");
       if (!o.reason().isBlank()) {
         md.append("\n").append(o.reason()).append('\n');
       }
     }
-    r.diagnostics().stream().filter(d -> d.file().equals(file) && d.range().equals(req.range()))
-        .filter(d -> d.code() == DiagnosticCode.REQUIREMENT_FAILED || d.code() == DiagnosticCode.REQUIREMENT_MET)
-        .findFirst().ifPresent((Diagnostic d) -> md.append("\n").append(d.code().id()).append(": ")
-            .append(d.message()).append('\n'));
+    r.diagnostics().stream()
+        .filter(d -> d.file().equals(file) && d.range().equals(req.range()))
+        .filter(
+            d ->
+                d.code() == DiagnosticCode.REQUIREMENT_FAILED
+                    || d.code() == DiagnosticCode.REQUIREMENT_MET)
+        .findFirst()
+        .ifPresent(
+            (Diagnostic d) ->
+                md.append("\n")
+                    .append(d.code().id())
+                    .append(": ")
+                    .append(d.message())
+                    .append('\n'));
     return new HoverInfo(md.toString().stripTrailing(), req.range());
   }
 }

@@ -7,35 +7,66 @@ import jonquil.resolve.ResolvedModel;
 import jonquil.safety.Outcome;
 import jonquil.units.Dimension;
 
-/** The eye-safety figures of one source, each with its standard or the reason it was not evaluated, and the caution. */
+/**
+ * The eye-safety figures of one source, each with its standard or the reason it was not evaluated,
+ * and the caution.
+ */
 final class SafetyText {
   private SafetyText() {}
 
-  static void append(StringBuilder md, ResolvedModel model, Optional<TrainSolution> solution, String source) {
+  static void append(
+      StringBuilder md, ResolvedModel model, Optional<TrainSolution> solution, String source) {
     beam(md, solution, source);
-    Md.para(md).append("**Eye safety** (IEC 60825-1:2014, at the source's exit)\n\n");
-    Optional<SafetySummary.SourceSafety> found = solution.flatMap(s -> SafetySummary.sources(model, s).stream()
-        .filter(x -> x.source().equals(source)).findFirst());
+    MarkdownText.para(md).append("**Eye safety** (IEC 60825-1:2014, at the source's exit)\n\n");
+    Optional<SafetySummary.SourceSafety> found =
+        solution.flatMap(
+            s ->
+                SafetySummary.sources(model, s).stream()
+                    .filter(x -> x.source().equals(source))
+                    .findFirst());
     if (found.isEmpty()) {
-      md.append(solution.isEmpty() ? "_Not evaluated: the spec has errors._" : "_Not evaluated: no beam leaves this source._");
+      md.append(
+          solution.isEmpty()
+              ? "_Not evaluated: the spec has errors._"
+              : "_Not evaluated: no beam leaves this source._");
     } else {
       SafetySummary.SourceSafety s = found.get();
-      md.append("- hazard class: ").append(figure(s.hazardClass(), c -> c.name().substring("CLASS_".length())))
-          .append("\n- ocular MPE: ").append(figure(s.mpe(), e -> Md.q(e.irradiance(), Dimension.IRRADIANCE)
-              + " (" + Md.q(e.radiantExposure(), Dimension.FLUENCE) + " over " + Md.q(e.exposureDuration(), Dimension.TIME)
-              + ")"))
-          .append("\n- NOHD: ").append(figure(s.nohd(), d -> Md.q(d, Dimension.LENGTH))).append('\n');
+      md.append("- hazard class: ")
+          .append(figure(s.hazardClass(), c -> c.name().substring("CLASS_".length())))
+          .append("\n- ocular MPE: ")
+          .append(
+              figure(
+                  s.mpe(),
+                  e ->
+                      MarkdownText.q(e.irradiance(), Dimension.IRRADIANCE)
+                          + " ("
+                          + MarkdownText.q(e.radiantExposure(), Dimension.FLUENCE)
+                          + " over "
+                          + MarkdownText.q(e.exposureDuration(), Dimension.TIME)
+                          + ")"))
+          .append("\n- NOHD: ")
+          .append(figure(s.nohd(), d -> MarkdownText.q(d, Dimension.LENGTH)))
+          .append('\n');
     }
-    Md.para(md).append("> ").append(Outcome.CAUTION);
+    MarkdownText.para(md).append("> ").append(Outcome.CAUTION);
   }
 
   /** The source's lines and the Gaussian beam leaving it. */
   private static void beam(StringBuilder md, Optional<TrainSolution> solution, String source) {
-    Optional<jonquil.analysis.PortValue> out = solution.flatMap(s -> s.port(source + ".out").or(() -> s.port(source)));
-    out.flatMap(jonquil.analysis.PortValue::mode).ifPresent(g -> Md.para(md).append("**Beam** at the exit: waist radius ")
-        .append(Md.q(g.waistRadius(), Dimension.LENGTH)).append(", M² ").append(Md.num(g.m2()))
-        .append(", divergence (half angle) ").append(Md.num(g.divergence() * 1e3) + " mrad")
-        .append(", Rayleigh range ").append(Md.q(g.rayleighRange(), Dimension.LENGTH)));
+    Optional<jonquil.analysis.PortValue> out =
+        solution.flatMap(s -> s.port(source + ".out").or(() -> s.port(source)));
+    out.flatMap(jonquil.analysis.PortValue::mode)
+        .ifPresent(
+            g ->
+                MarkdownText.para(md)
+                    .append("**Beam** at the exit: waist radius ")
+                    .append(MarkdownText.q(g.waistRadius(), Dimension.LENGTH))
+                    .append(", M² ")
+                    .append(MarkdownText.num(g.m2()))
+                    .append(", divergence (half angle) ")
+                    .append(MarkdownText.num(g.divergence() * 1e3) + " mrad")
+                    .append(", Rayleigh range ")
+                    .append(MarkdownText.q(g.rayleighRange(), Dimension.LENGTH)));
   }
 
   private static <T> String figure(Outcome<T> o, java.util.function.Function<T, String> show) {

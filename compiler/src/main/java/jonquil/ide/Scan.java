@@ -4,13 +4,13 @@ import java.util.ArrayList;
 import java.util.List;
 
 /**
- * Splits text into {@link Lexeme}s by the language's token rules, keeping comments and line
- * breaks: completion reads half-typed text, and semantic tokens need the keywords and
- * operators the syntax tree does not keep. It never throws.
+ * Splits text into {@link Lexeme}s by the language's token rules, keeping comments and line breaks:
+ * completion reads half-typed text, and semantic tokens need the keywords and operators the syntax
+ * tree does not keep. It never throws.
  */
 final class Scan {
-  private static final List<String> OPERATORS = List.of("->", "..", "+-", "<=", ">=", "==", "\u2264", "\u2265",
-      "\u00B1", "<", ">", "=");
+  private static final List<String> OPERATORS =
+      List.of("->", "..", "+-", "<=", ">=", "==", "\u2264", "\u2265", "\u00B1", "<", ">", "=");
 
   private Scan() {}
 
@@ -38,12 +38,14 @@ final class Scan {
       } else if (c == '"') {
         end = string(text, pos);
         type = Lexeme.Type.STRING;
-      } else if (Character.isDigit(c) || (c == '.' && pos + 1 < n && Character.isDigit(text.charAt(pos + 1)))) {
+      } else if (Character.isDigit(c)
+          || (c == '.' && pos + 1 < n && Character.isDigit(text.charAt(pos + 1)))) {
         end = number(text, pos);
         type = Lexeme.Type.NUMBER;
       } else if (Character.isLetter(c) || c == '_') {
         end = pos + 1;
-        while (end < n && (Character.isLetterOrDigit(text.charAt(end)) || text.charAt(end) == '_')) {
+        while (end < n
+            && (Character.isLetterOrDigit(text.charAt(end)) || text.charAt(end) == '_')) {
           end++;
         }
         type = Lexeme.Type.WORD;
@@ -91,10 +93,15 @@ final class Scan {
     return text.length();
   }
 
-  /** Digits, an optional fraction (only when a digit follows the point, so '1..2' is a range) and exponent. */
+  /**
+   * Digits, an optional fraction (only when a digit follows the point, so '1..2' is a range) and
+   * exponent.
+   */
   private static int number(String text, int pos) {
     int end = digits(text, pos);
-    if (end + 1 < text.length() && text.charAt(end) == '.' && Character.isDigit(text.charAt(end + 1))) {
+    if (end + 1 < text.length()
+        && text.charAt(end) == '.'
+        && Character.isDigit(text.charAt(end + 1))) {
       end = digits(text, end + 1);
     }
     if (end < text.length() && (text.charAt(end) == 'e' || text.charAt(end) == 'E')) {

@@ -5,7 +5,7 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import jonquil.Result;
-import jonquil.resolve.CatalogNames;
+import jonquil.resolve.CatalogSpellings;
 import jonquil.source.SourceFile;
 import jonquil.source.TextRange;
 import jonquil.syntax.Arg;
@@ -19,17 +19,17 @@ import jonquil.syntax.SpecParser;
 import jonquil.syntax.TrainDecl;
 
 /**
- * Classifies a file's text for highlighting: the syntax tree says what each name, key, number
- * and unit is; keywords and operators, which the tree does not keep, come from a scan of the
- * text around them. Comments spanning lines are split per line, as most editors require.
+ * Classifies a file's text for highlighting: the syntax tree says what each name, key, number and
+ * unit is; keywords and operators, which the tree does not keep, come from a scan of the text
+ * around them. Comments spanning lines are split per line, as most editors require.
  */
 final class SemanticTokens {
   private final String text;
-  private final Names names;
+  private final SymbolUses names;
   private final Path file;
   private final List<SemanticToken> out = new ArrayList<>();
 
-  private SemanticTokens(String text, Names names, Path file) {
+  private SemanticTokens(String text, SymbolUses names, Path file) {
     this.text = text;
     this.names = names;
     this.file = file;
@@ -40,7 +40,7 @@ final class SemanticTokens {
     if (source == null) {
       return List.of();
     }
-    SemanticTokens t = new SemanticTokens(source.text(), Names.of(r), file);
+    SemanticTokens t = new SemanticTokens(source.text(), SymbolUses.of(r), file);
     SpecFile tree = SpecParser.parse(source).ast();
     tree.comments().forEach(t::comment);
     t.tree(tree);
@@ -94,11 +94,13 @@ final class SemanticTokens {
       e.measure().ifPresent(m -> m.words().forEach(w -> add(w.range(), "property", false)));
       condition(e.condition());
     }
-    c.band().ifPresent(b -> {
-      add(b.quantity().range(), "property", false);
-      arg(b.low());
-      arg(b.high());
-    });
+    c.band()
+        .ifPresent(
+            b -> {
+              add(b.quantity().range(), "property", false);
+              arg(b.low());
+              arg(b.high());
+            });
   }
 
   private void condition(Requirement.Condition c) {
@@ -116,10 +118,12 @@ final class SemanticTokens {
     if (a instanceof Arg.QuantityArg q) {
       add(q.number().range(), "number", false);
       q.unit().ifPresent(u -> add(u.range(), "unit", false));
-      q.tolerance().ifPresent(t -> {
-        add(t.number().range(), "number", false);
-        t.unit().ifPresent(u -> add(u.range(), "unit", false));
-      });
+      q.tolerance()
+          .ifPresent(
+              t -> {
+                add(t.number().range(), "number", false);
+                t.unit().ifPresent(u -> add(u.range(), "unit", false));
+              });
     } else if (a instanceof Arg.RefArg ref) {
       ref(ref, false);
     } else if (a instanceof Arg.StringArg s) {
@@ -130,16 +134,27 @@ final class SemanticTokens {
     }
   }
 
-  /** A name in a path or place is always a name; in a parameter it may be one of the parameter's fixed words. */
+  /**
+   * A name in a path or place is always a name; in a parameter it may be one of the parameter's
+   * fixed words.
+   */
   private void ref(Arg.RefArg ref, boolean alwaysName) {
     Name n = ref.name();
-    boolean isName = alwaysName || names.at(file, n.range().start()).filter(o -> o.range().equals(n.range())).isPresent()
-        || CatalogNames.lookup(n.text()).isPresent();
+    boolean isName =
+        alwaysName
+            || names
+                .at(file, n.range().start())
+                .filter(o -> o.range().equals(n.range()))
+                .isPresent()
+            || CatalogSpellings.lookup(n.text()).isPresent();
     add(n.range(), isName && !Renamer.RESERVED.contains(n.text()) ? "variable" : "keyword", false);
     ref.port().ifPresent(p -> add(p.range(), "property", false));
   }
 
-  /** Reserved words, operators, and literals the tree lost to recovery, wherever nothing else claimed them. */
+  /**
+   * Reserved words, operators, and literals the tree lost to recovery, wherever nothing else
+   * claimed them.
+   */
   private void lexical() {
     for (Lexeme l : Scan.lex(text)) {
       String type = null;
@@ -183,7 +198,10 @@ final class SemanticTokens {
     }
   }
 
-  /** In start order; a later claim on text already classified loses, so comments and the tree win over the scan. */
+  /**
+   * In start order; a later claim on text already classified loses, so comments and the tree win
+   * over the scan.
+   */
   private List<SemanticToken> sorted() {
     java.util.BitSet claimed = new java.util.BitSet(text.length());
     List<SemanticToken> kept = new ArrayList<>();

@@ -10,8 +10,8 @@ import jonquil.resolve.Shape;
 import jonquil.units.Dimension;
 
 /**
- * Reads a parameter's {@link Shape} as a flat sequence of words and value slots, which is
- * enough to tell which words may come next and which unit follows a given number.
+ * Reads a parameter's {@link Shape} as a flat sequence of words and value slots, which is enough to
+ * tell which words may come next and which unit follows a given number.
  */
 final class ShapeSlots {
   private ShapeSlots() {}
@@ -66,14 +66,17 @@ final class ShapeSlots {
   }
 
   private static boolean numeric(Shape s) {
-    return s instanceof Shape.Quantity || s instanceof Shape.Ratio || s instanceof Shape.PowerRatio
-        || s instanceof Shape.Density || s instanceof Shape.Count;
+    return s instanceof Shape.Quantity
+        || s instanceof Shape.Ratio
+        || s instanceof Shape.PowerRatio
+        || s instanceof Shape.Density
+        || s instanceof Shape.Count;
   }
 
   /**
-   * Units for the number that ends {@code line} (key first): the value slot after the word
-   * before the number when the shape has that word ('at 1064', 'waist 1'), else the slot
-   * counted by position, else every common unit.
+   * Units for the number that ends {@code line} (key first): the value slot after the word before
+   * the number when the shape has that word ('at 1064', 'waist 1'), else the slot counted by
+   * position, else every common unit.
    */
   static List<String> unitsAfter(Shape shape, List<Lexeme> line) {
     List<Shape> flat = flatten(shape);
@@ -90,7 +93,9 @@ final class ShapeSlots {
     }
     List<Shape> slots = flat.stream().filter(ShapeSlots::numeric).toList();
     int index = (int) line.stream().filter(l -> l.type() == Lexeme.Type.NUMBER).count() - 1;
-    return index >= 0 && index < slots.size() ? UnitChoices.forShape(slots.get(index)) : UnitChoices.COMMON;
+    return index >= 0 && index < slots.size()
+        ? UnitChoices.forShape(slots.get(index))
+        : UnitChoices.COMMON;
   }
 
   private static boolean introduces(Shape s, String word) {

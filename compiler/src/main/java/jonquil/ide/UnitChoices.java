@@ -9,12 +9,16 @@ import jonquil.units.UnitParser;
 
 /**
  * The units worth offering after a number: a short list of the common ones, narrowed to the
- * dimension the parameter expects when that is known (the unit parser decides each unit's dimension).
+ * dimension the parameter expects when that is known (the unit parser decides each unit's
+ * dimension).
  */
 final class UnitChoices {
-  static final List<String> COMMON = List.of("nm", "um", "mm", "cm", "m", "uW", "mW", "W", "kW", "uJ", "mJ", "J",
-      "fs", "ps", "ns", "us", "ms", "s", "Hz", "kHz", "MHz", "deg", "mrad", "rad", "wave", "%", "ppm", "W/cm2",
-      "kW/cm2", "MW/cm2", "W/cm", "mJ/cm2", "J/cm2", "V/m", "kV/cm", "dB", "/cm", "degC", "A/W");
+  static final List<String> COMMON =
+      List.of(
+          "nm", "um", "mm", "cm", "m", "uW", "mW", "W", "kW", "uJ", "mJ", "J", "fs", "ps", "ns",
+          "us", "ms", "s", "Hz", "kHz", "MHz", "deg", "mrad", "rad", "wave", "%", "ppm", "W/cm2",
+          "kW/cm2", "MW/cm2", "W/cm", "mJ/cm2", "J/cm2", "V/m", "kV/cm", "dB", "/cm", "degC",
+          "A/W");
 
   private UnitChoices() {}
 

@@ -7,7 +7,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import jonquil.Result;
-import jonquil.resolve.CatalogNames;
+import jonquil.resolve.CatalogSpellings;
 import jonquil.resolve.Category;
 import jonquil.resolve.ElementKind;
 import jonquil.resolve.Symbol;
@@ -16,8 +16,8 @@ import jonquil.syntax.Declaration;
 import jonquil.syntax.SpecParser;
 
 /**
- * The names a file may use, from the last check's scope (which includes used files), or from
- * the file's own declarations when that check resolved nothing for it.
+ * The names a file may use, from the last check's scope (which includes used files), or from the
+ * file's own declarations when that check resolved nothing for it.
  */
 final class Vocabulary {
   /** A declared name with its kind, when the kind is known. */
@@ -31,15 +31,22 @@ final class Vocabulary {
 
   static Vocabulary of(Result r, Path file) {
     Map<String, Named> out = new LinkedHashMap<>();
-    Models.primary(r, file).map(m -> m.scopes().get(file)).ifPresent(scope -> scope.symbols().values().stream()
-        .filter(s -> !s.isCatalog()).sorted(java.util.Comparator.comparing(Symbol::name))
-        .forEach(s -> out.put(s.name(), new Named(s.name(), s.kind(), s.category()))));
+    OwningModels.primary(r, file)
+        .map(m -> m.scopes().get(file))
+        .ifPresent(
+            scope ->
+                scope.symbols().values().stream()
+                    .filter(s -> !s.isCatalog())
+                    .sorted(java.util.Comparator.comparing(Symbol::name))
+                    .forEach(s -> out.put(s.name(), new Named(s.name(), s.kind(), s.category()))));
     SourceFile source = r.files().get(file);
     if (out.isEmpty() && source != null) {
       for (Declaration d : SpecParser.parse(source).ast().declarations()) {
         Optional<ElementKind> kind = ElementKind.byWord(d.kind().text());
-        out.putIfAbsent(d.name().text(), new Named(d.name().text(), kind, kind.map(ElementKind::category)
-            .orElse(Category.OPTIC)));
+        out.putIfAbsent(
+            d.name().text(),
+            new Named(
+                d.name().text(), kind, kind.map(ElementKind::category).orElse(Category.OPTIC)));
       }
     }
     return new Vocabulary(new ArrayList<>(out.values()));
@@ -61,16 +68,24 @@ final class Vocabulary {
   /** Declared materials first, then every catalog spelling (only metals when {@code metalOnly}). */
   List<CompletionItemInfo> materials(boolean metalOnly) {
     List<CompletionItemInfo> out = new ArrayList<>();
-    of(Category.MATERIAL).forEach(n -> out.add(new CompletionItemInfo(n.name(), "material", "declared material", "")));
-    for (String spelling : CatalogNames.spellings()) {
-      CatalogNames.Entry e = CatalogNames.lookup(spelling).orElseThrow();
-      if (metalOnly && e.materialClass() != CatalogNames.MaterialClass.METAL) {
+    of(Category.MATERIAL)
+        .forEach(
+            n -> out.add(new CompletionItemInfo(n.name(), "material", "declared material", "")));
+    for (String spelling : CatalogSpellings.spellings()) {
+      CatalogSpellings.Entry e = CatalogSpellings.lookup(spelling).orElseThrow();
+      if (metalOnly && e.materialClass() != CatalogSpellings.MaterialClass.METAL) {
         continue;
       }
-      String detail = "catalog material (" + e.materialClass().name().toLowerCase(java.util.Locale.ROOT)
-          .replace('_', ' ') + ")";
-      out.add(new CompletionItemInfo(spelling, "material", detail,
-          spelling.equals(e.name()) ? "" : "another spelling of '" + e.name() + "'"));
+      String detail =
+          "catalog material ("
+              + e.materialClass().name().toLowerCase(java.util.Locale.ROOT).replace('_', ' ')
+              + ")";
+      out.add(
+          new CompletionItemInfo(
+              spelling,
+              "material",
+              detail,
+              spelling.equals(e.name()) ? "" : "another spelling of '" + e.name() + "'"));
     }
     return out;
   }

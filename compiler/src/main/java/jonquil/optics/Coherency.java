@@ -3,8 +3,8 @@ package jonquil.optics;
 import java.util.Locale;
 
 /**
- * The coherency (polarization) matrix Φ = ⟨E E†⟩ in watts, because it carries partially
- * polarized light through Jones elements exactly, where a Jones vector cannot.
+ * The coherency (polarization) matrix Φ = ⟨E E†⟩ in watts, because it carries partially polarized
+ * light through Jones elements exactly, where a Jones vector cannot.
  */
 public final class Coherency {
   /** No light. */
@@ -12,6 +12,7 @@ public final class Coherency {
 
   /** Below this fraction of S0, a circular component is rounding noise, not a handedness. */
   private static final double HANDEDNESS_FLOOR = 1e-9;
+
   /** Eigenvalue ratios beyond this are below double rounding and reported as infinite. */
   private static final double EXTINCTION_CEILING = 1e15;
 
@@ -21,7 +22,10 @@ public final class Coherency {
   private final double xyIm;
 
   private Coherency(double xx, double yy, double xyRe, double xyIm) {
-    if (!(Double.isFinite(xx) && Double.isFinite(yy) && Double.isFinite(xyRe) && Double.isFinite(xyIm))) {
+    if (!(Double.isFinite(xx)
+        && Double.isFinite(yy)
+        && Double.isFinite(xyRe)
+        && Double.isFinite(xyIm))) {
       throw new IllegalArgumentException("coherency entries must be finite");
     }
     this.xx = xx;
@@ -68,22 +72,32 @@ public final class Coherency {
     }
   }
 
-  /** Fully polarized elliptical light: azimuth ψ, ellipticity angle χ in [−π/4, π/4] (positive = right). */
+  /**
+   * Fully polarized elliptical light: azimuth ψ, ellipticity angle χ in [−π/4, π/4] (positive =
+   * right).
+   */
   public static Coherency elliptical(double azimuth, double ellipticityAngle, double power) {
     requirePower(power);
     requireFinite(azimuth, "azimuth");
     if (!(Math.abs(ellipticityAngle) <= Math.PI / 4 + 1e-15)) {
-      throw new IllegalArgumentException("ellipticity angle must be within ±π/4: " + ellipticityAngle);
+      throw new IllegalArgumentException(
+          "ellipticity angle must be within ±π/4: " + ellipticityAngle);
     }
     double c2x = Math.cos(2 * ellipticityAngle);
-    return fromStokes(power, power * c2x * Math.cos(2 * azimuth), power * c2x * Math.sin(2 * azimuth),
+    return fromStokes(
+        power,
+        power * c2x * Math.cos(2 * azimuth),
+        power * c2x * Math.sin(2 * azimuth),
         power * Math.sin(2 * ellipticityAngle));
   }
 
   /** The fully polarized state of a Jones vector; its power is |E|². */
   public static Coherency fromJonesVector(double exRe, double exIm, double eyRe, double eyIm) {
     // Φxy = Ex Ey*
-    return new Coherency(exRe * exRe + exIm * exIm, eyRe * eyRe + eyIm * eyIm, exRe * eyRe + exIm * eyIm,
+    return new Coherency(
+        exRe * exRe + exIm * exIm,
+        eyRe * eyRe + eyIm * eyIm,
+        exRe * eyRe + exIm * eyIm,
         exIm * eyRe - exRe * eyIm);
   }
 
@@ -212,7 +226,10 @@ public final class Coherency {
     return max / min;
   }
 
-  /** Whether Φ is positive semidefinite within {@code tol} relative to its power (it is Hermitian by construction). */
+  /**
+   * Whether Φ is positive semidefinite within {@code tol} relative to its power (it is Hermitian by
+   * construction).
+   */
   public boolean isPhysical(double tol) {
     double scale = Math.max(Math.abs(xx) + Math.abs(yy), Double.MIN_NORMAL);
     return xx >= -tol * scale && yy >= -tol * scale && polarizedPower() - (xx + yy) <= tol * scale;
@@ -220,7 +237,9 @@ public final class Coherency {
 
   /** Entry-wise comparison within an absolute tolerance (watts). */
   public boolean approxEquals(Coherency o, double tol) {
-    return Math.abs(xx - o.xx) <= tol && Math.abs(yy - o.yy) <= tol && Math.abs(xyRe - o.xyRe) <= tol
+    return Math.abs(xx - o.xx) <= tol
+        && Math.abs(yy - o.yy) <= tol
+        && Math.abs(xyRe - o.xyRe) <= tol
         && Math.abs(xyIm - o.xyIm) <= tol;
   }
 
@@ -256,7 +275,9 @@ public final class Coherency {
       return false;
     }
     Coherency c = (Coherency) o;
-    return Double.compare(xx, c.xx) == 0 && Double.compare(yy, c.yy) == 0 && Double.compare(xyRe, c.xyRe) == 0
+    return Double.compare(xx, c.xx) == 0
+        && Double.compare(yy, c.yy) == 0
+        && Double.compare(xyRe, c.xyRe) == 0
         && Double.compare(xyIm, c.xyIm) == 0;
   }
 
@@ -270,7 +291,8 @@ public final class Coherency {
 
   @Override
   public String toString() {
-    return String.format(Locale.ROOT, "Coherency[xx=%.6g W, yy=%.6g W, xy=%.6g%+.6gi W]", xx, yy, xyRe, xyIm);
+    return String.format(
+        Locale.ROOT, "Coherency[xx=%.6g W, yy=%.6g W, xy=%.6g%+.6gi W]", xx, yy, xyRe, xyIm);
   }
 
   private static void requirePower(double power) {

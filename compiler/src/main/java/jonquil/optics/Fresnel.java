@@ -5,17 +5,15 @@ import org.apache.commons.math3.complex.Complex;
 
 /** Reflection and transmission at one plane interface, under the package's sign conventions. */
 public final class Fresnel {
-  private Fresnel() {
-  }
+  private Fresnel() {}
 
   /**
    * Amplitude and power coefficients of an interface (or of a whole stack, for {@link ThinFilm}).
    * Powers are fractions of the incident power; T is the normal Poynting flux leaving the last
    * interface.
    */
-  public record Coefficients(Complex rs, Complex rp, Complex ts, Complex tp, double Rs, double Rp, double Ts,
-      double Tp) {
-  }
+  public record Coefficients(
+      Complex rs, Complex rp, Complex ts, Complex tp, double Rs, double Rp, double Ts, double Tp) {}
 
   /**
    * Coefficients for light in medium n1 meeting medium n2 at angle of incidence {@code aoi}
@@ -60,8 +58,8 @@ public final class Fresnel {
   }
 
   /**
-   * ξ = n cos θ = √(n² − u²) for the invariant u = n1 sin θi, on the branch where the wave
-   * leaves the interface: Re ξ ≥ 0 for a propagating wave, Im ξ ≥ 0 for an evanescent one.
+   * ξ = n cos θ = √(n² − u²) for the invariant u = n1 sin θi, on the branch where the wave leaves
+   * the interface: Re ξ ≥ 0 for a propagating wave, Im ξ ≥ 0 for an evanescent one.
    */
   static Complex normalComponent(Complex n, Complex u) {
     Complex radicand = n.multiply(n).subtract(u.multiply(u));
@@ -84,8 +82,15 @@ public final class Fresnel {
   }
 
   /** Bundles amplitudes with the power fractions they imply, shared with the stack method. */
-  static Coefficients coefficients(Complex n1, Complex xi1, Complex n2, Complex xi2, Complex rs, Complex rp,
-      Complex ts, Complex tp) {
+  static Coefficients coefficients(
+      Complex n1,
+      Complex xi1,
+      Complex n2,
+      Complex xi2,
+      Complex rs,
+      Complex rp,
+      Complex ts,
+      Complex tp) {
     double rsAbs = rs.abs();
     double rpAbs = rp.abs();
     double tsAbs = ts.abs();

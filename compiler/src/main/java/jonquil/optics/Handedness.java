@@ -12,7 +12,9 @@ public enum Handedness {
     this.description = description;
   }
 
-  /** A human-readable name that states the viewpoint, because handedness is ambiguous without it. */
+  /**
+   * A human-readable name that states the viewpoint, because handedness is ambiguous without it.
+   */
   public String describe() {
     return description;
   }

@@ -17,7 +17,15 @@ public final class Jones {
   private final double dRe;
   private final double dIm;
 
-  private Jones(double aRe, double aIm, double bRe, double bIm, double cRe, double cIm, double dRe, double dIm) {
+  private Jones(
+      double aRe,
+      double aIm,
+      double bRe,
+      double bIm,
+      double cRe,
+      double cIm,
+      double dRe,
+      double dIm) {
     this.aRe = aRe;
     this.aIm = aIm;
     this.bRe = bRe;
@@ -29,10 +37,23 @@ public final class Jones {
   }
 
   /** The matrix [[a, b], [c, d]] from real and imaginary parts; rejects NaN and infinities. */
-  public static Jones of(double aRe, double aIm, double bRe, double bIm, double cRe, double cIm, double dRe,
+  public static Jones of(
+      double aRe,
+      double aIm,
+      double bRe,
+      double bIm,
+      double cRe,
+      double cIm,
+      double dRe,
       double dIm) {
-    if (!(Double.isFinite(aRe) && Double.isFinite(aIm) && Double.isFinite(bRe) && Double.isFinite(bIm)
-        && Double.isFinite(cRe) && Double.isFinite(cIm) && Double.isFinite(dRe) && Double.isFinite(dIm))) {
+    if (!(Double.isFinite(aRe)
+        && Double.isFinite(aIm)
+        && Double.isFinite(bRe)
+        && Double.isFinite(bIm)
+        && Double.isFinite(cRe)
+        && Double.isFinite(cIm)
+        && Double.isFinite(dRe)
+        && Double.isFinite(dIm))) {
       throw new IllegalArgumentException("Jones matrix entries must be finite");
     }
     return new Jones(aRe, aIm, bRe, bIm, cRe, cIm, dRe, dIm);
@@ -51,53 +72,67 @@ public final class Jones {
     return new Jones(c, 0, -s, 0, s, 0, c, 0);
   }
 
-  /** A linear retarder: fast axis at {@code fastAxis}, the slow component delayed by {@code retardance}. */
+  /**
+   * A linear retarder: fast axis at {@code fastAxis}, the slow component delayed by {@code
+   * retardance}.
+   */
   public static Jones retarder(double retardance, double fastAxis) {
     requireFinite(retardance, "retardance");
     return diagonal(1, 0, Math.cos(retardance), Math.sin(retardance)).rotatedBy(fastAxis);
   }
 
   /**
-   * A linear polarizer (diattenuator): power transmittance T along {@code axis} and T/ER across
-   * it; ER may be infinite for an ideal polarizer.
+   * A linear polarizer (diattenuator): power transmittance T along {@code axis} and T/ER across it;
+   * ER may be infinite for an ideal polarizer.
    */
-  public static Jones polarizer(double axis, double principalTransmittance, double extinctionRatio) {
+  public static Jones polarizer(
+      double axis, double principalTransmittance, double extinctionRatio) {
     if (!(principalTransmittance >= 0 && principalTransmittance <= 1)) {
-      throw new IllegalArgumentException("principal transmittance must be in [0, 1]: " + principalTransmittance);
+      throw new IllegalArgumentException(
+          "principal transmittance must be in [0, 1]: " + principalTransmittance);
     }
     if (!(extinctionRatio >= 1)) {
       throw new IllegalArgumentException("extinction ratio must be at least 1: " + extinctionRatio);
     }
-    double across = Double.isInfinite(extinctionRatio) ? 0 : Math.sqrt(principalTransmittance / extinctionRatio);
+    double across =
+        Double.isInfinite(extinctionRatio)
+            ? 0
+            : Math.sqrt(principalTransmittance / extinctionRatio);
     return diagonal(Math.sqrt(principalTransmittance), 0, across, 0).rotatedBy(axis);
   }
 
-  /** A rotator (optical activity, Faraday rotation in one pass): turns the field by {@code angle}. */
+  /**
+   * A rotator (optical activity, Faraday rotation in one pass): turns the field by {@code angle}.
+   */
   public static Jones rotator(double angle) {
     return rotation(angle);
   }
 
   /**
-   * A reflection, R(φ)·diag(rp, rs)·R(−φ), with the plane of incidence at azimuth φ (p along φ,
-   * s along φ + 90°), expressed in the reflected beam's frame that keeps the s axis.
+   * A reflection, R(φ)·diag(rp, rs)·R(−φ), with the plane of incidence at azimuth φ (p along φ, s
+   * along φ + 90°), expressed in the reflected beam's frame that keeps the s axis.
    */
   public static Jones reflection(Complex rp, Complex rs, double planeAzimuth) {
-    return diagonal(rp.getReal(), rp.getImaginary(), rs.getReal(), rs.getImaginary()).rotatedBy(planeAzimuth);
+    return diagonal(rp.getReal(), rp.getImaginary(), rs.getReal(), rs.getImaginary())
+        .rotatedBy(planeAzimuth);
   }
 
   /**
-   * A transmission through an interface, with amplitudes scaled by √(power factor) so that
-   * |J·E|² is the transmitted power (the factor is Re(n2 cos θt)/Re(n1 cos θi) or its p form).
+   * A transmission through an interface, with amplitudes scaled by √(power factor) so that |J·E|²
+   * is the transmitted power (the factor is Re(n2 cos θt)/Re(n1 cos θi) or its p form).
    */
-  public static Jones transmission(Complex tp, Complex ts, double planeAzimuth, double powerFactorP,
-      double powerFactorS) {
-    if (!(powerFactorP >= 0) || !(powerFactorS >= 0) || Double.isInfinite(powerFactorP)
+  public static Jones transmission(
+      Complex tp, Complex ts, double planeAzimuth, double powerFactorP, double powerFactorS) {
+    if (!(powerFactorP >= 0)
+        || !(powerFactorS >= 0)
+        || Double.isInfinite(powerFactorP)
         || Double.isInfinite(powerFactorS)) {
       throw new IllegalArgumentException("power factors must be finite and non-negative");
     }
     double kp = Math.sqrt(powerFactorP);
     double ks = Math.sqrt(powerFactorS);
-    return diagonal(tp.getReal() * kp, tp.getImaginary() * kp, ts.getReal() * ks, ts.getImaginary() * ks)
+    return diagonal(
+            tp.getReal() * kp, tp.getImaginary() * kp, ts.getReal() * ks, ts.getImaginary() * ks)
         .rotatedBy(planeAzimuth);
   }
 
@@ -133,8 +168,14 @@ public final class Jones {
   /** Whether J†J = I within {@code tol} on every entry: lossless elements only. */
   public boolean isUnitary(double tol) {
     Jones h = dagger().times(this);
-    return Math.abs(h.aRe - 1) <= tol && Math.abs(h.aIm) <= tol && Math.abs(h.bRe) <= tol && Math.abs(h.bIm) <= tol
-        && Math.abs(h.cRe) <= tol && Math.abs(h.cIm) <= tol && Math.abs(h.dRe - 1) <= tol && Math.abs(h.dIm) <= tol;
+    return Math.abs(h.aRe - 1) <= tol
+        && Math.abs(h.aIm) <= tol
+        && Math.abs(h.bRe) <= tol
+        && Math.abs(h.bIm) <= tol
+        && Math.abs(h.cRe) <= tol
+        && Math.abs(h.cIm) <= tol
+        && Math.abs(h.dRe - 1) <= tol
+        && Math.abs(h.dIm) <= tol;
   }
 
   /**
@@ -158,9 +199,14 @@ public final class Jones {
 
   /** Entry-wise comparison within an absolute tolerance. */
   public boolean approxEquals(Jones o, double tol) {
-    return Math.abs(aRe - o.aRe) <= tol && Math.abs(aIm - o.aIm) <= tol && Math.abs(bRe - o.bRe) <= tol
-        && Math.abs(bIm - o.bIm) <= tol && Math.abs(cRe - o.cRe) <= tol && Math.abs(cIm - o.cIm) <= tol
-        && Math.abs(dRe - o.dRe) <= tol && Math.abs(dIm - o.dIm) <= tol;
+    return Math.abs(aRe - o.aRe) <= tol
+        && Math.abs(aIm - o.aIm) <= tol
+        && Math.abs(bRe - o.bRe) <= tol
+        && Math.abs(bIm - o.bIm) <= tol
+        && Math.abs(cRe - o.cRe) <= tol
+        && Math.abs(cIm - o.cIm) <= tol
+        && Math.abs(dRe - o.dRe) <= tol
+        && Math.abs(dIm - o.dIm) <= tol;
   }
 
   public Complex a() {
@@ -220,9 +266,14 @@ public final class Jones {
       return false;
     }
     Jones j = (Jones) o;
-    return Double.compare(aRe, j.aRe) == 0 && Double.compare(aIm, j.aIm) == 0 && Double.compare(bRe, j.bRe) == 0
-        && Double.compare(bIm, j.bIm) == 0 && Double.compare(cRe, j.cRe) == 0 && Double.compare(cIm, j.cIm) == 0
-        && Double.compare(dRe, j.dRe) == 0 && Double.compare(dIm, j.dIm) == 0;
+    return Double.compare(aRe, j.aRe) == 0
+        && Double.compare(aIm, j.aIm) == 0
+        && Double.compare(bRe, j.bRe) == 0
+        && Double.compare(bIm, j.bIm) == 0
+        && Double.compare(cRe, j.cRe) == 0
+        && Double.compare(cIm, j.cIm) == 0
+        && Double.compare(dRe, j.dRe) == 0
+        && Double.compare(dIm, j.dIm) == 0;
   }
 
   @Override
@@ -239,7 +290,15 @@ public final class Jones {
 
   @Override
   public String toString() {
-    return "Jones[[" + fmt(aRe, aIm) + ", " + fmt(bRe, bIm) + "], [" + fmt(cRe, cIm) + ", " + fmt(dRe, dIm) + "]]";
+    return "Jones[["
+        + fmt(aRe, aIm)
+        + ", "
+        + fmt(bRe, bIm)
+        + "], ["
+        + fmt(cRe, cIm)
+        + ", "
+        + fmt(dRe, dIm)
+        + "]]";
   }
 
   private static String fmt(double re, double im) {

@@ -9,15 +9,15 @@ import org.apache.commons.math3.complex.Complex;
  * method (Born &amp; Wolf §1.6; Macleod ch. 2), with the same signs as {@link Fresnel}.
  */
 public final class ThinFilm {
-  private ThinFilm() {
-  }
+  private ThinFilm() {}
 
   /** One homogeneous isotropic layer: complex index and physical thickness in metres. */
   public record Layer(Complex n, double thickness) {
     public Layer {
       Objects.requireNonNull(n, "index");
       if (!(thickness >= 0) || Double.isInfinite(thickness)) {
-        throw new IllegalArgumentException("layer thickness must be finite and non-negative: " + thickness);
+        throw new IllegalArgumentException(
+            "layer thickness must be finite and non-negative: " + thickness);
       }
       if (n.isNaN() || n.isInfinite()) {
         throw new IllegalArgumentException("layer index must be finite: " + n);
@@ -27,11 +27,11 @@ public final class ThinFilm {
 
   /**
    * Coefficients of a stack seen from the incidence medium n0 (lossless), layers listed from the
-   * incidence side to the substrate, at angle {@code aoi} in n0 and vacuum {@code wavelength}.
-   * An empty stack gives {@link Fresnel#at(Complex, Complex, double)}.
+   * incidence side to the substrate, at angle {@code aoi} in n0 and vacuum {@code wavelength}. An
+   * empty stack gives {@link Fresnel#at(Complex, Complex, double)}.
    */
-  public static Fresnel.Coefficients stack(Complex n0, List<Layer> layers, Complex substrate, double aoi,
-      double wavelength) {
+  public static Fresnel.Coefficients stack(
+      Complex n0, List<Layer> layers, Complex substrate, double aoi, double wavelength) {
     Fresnel.requireAngle(aoi);
     if (!(wavelength > 0) || Double.isInfinite(wavelength)) {
       throw new IllegalArgumentException("wavelength must be positive and finite: " + wavelength);
@@ -65,14 +65,16 @@ public final class ThinFilm {
   }
 
   /**
-   * The physical thickness of a quarter-wave layer of index n at the given vacuum wavelength,
-   * for light arriving at {@code aoi} from vacuum (index 1): λ / (4 n cos θ_layer).
+   * The physical thickness of a quarter-wave layer of index n at the given vacuum wavelength, for
+   * light arriving at {@code aoi} from vacuum (index 1): λ / (4 n cos θ_layer).
    */
   public static double quarterWaveThickness(double n, double wavelength, double aoi) {
     return quarterWaveThickness(n, wavelength, 1.0, aoi);
   }
 
-  /** As {@link #quarterWaveThickness(double, double, double)}, arriving from a medium of index n0. */
+  /**
+   * As {@link #quarterWaveThickness(double, double, double)}, arriving from a medium of index n0.
+   */
   public static double quarterWaveThickness(double n, double wavelength, double n0, double aoi) {
     Fresnel.requireAngle(aoi);
     if (!(n > 0) || !(wavelength > 0) || !(n0 > 0)) {
@@ -88,13 +90,16 @@ public final class ThinFilm {
   /** B&amp;W's characteristic matrix [[cos β, −i sin β / p], [−i p sin β, cos β]] for e^{−iωt}. */
   private static Complex[] characteristic(Complex cos, Complex sin, Complex admittance) {
     Complex minusI = Complex.I.negate();
-    return new Complex[] {cos, minusI.multiply(sin).divide(admittance), minusI.multiply(admittance).multiply(sin), cos};
+    return new Complex[] {
+      cos, minusI.multiply(sin).divide(admittance), minusI.multiply(admittance).multiply(sin), cos
+    };
   }
 
   private static Complex[] multiply(Complex[] m, Complex[] n) {
     return new Complex[] {
-        m[0].multiply(n[0]).add(m[1].multiply(n[2])), m[0].multiply(n[1]).add(m[1].multiply(n[3])),
-        m[2].multiply(n[0]).add(m[3].multiply(n[2])), m[2].multiply(n[1]).add(m[3].multiply(n[3]))};
+      m[0].multiply(n[0]).add(m[1].multiply(n[2])), m[0].multiply(n[1]).add(m[1].multiply(n[3])),
+      m[2].multiply(n[0]).add(m[3].multiply(n[2])), m[2].multiply(n[1]).add(m[3].multiply(n[3]))
+    };
   }
 
   /** r = (p₁B − C)/(p₁B + C), t = 2p₁/(p₁B + C) with (B, C) = M·(1, p_sub). */

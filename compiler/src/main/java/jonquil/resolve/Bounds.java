@@ -1,11 +1,15 @@
 package jonquil.resolve;
 
 /** The physically meaningful range of a value, in SI units. */
-public record Bounds(double min, boolean minInclusive, double max, boolean maxInclusive, boolean nonZero) {
-  public static final Bounds ANY = new Bounds(Double.NEGATIVE_INFINITY, true, Double.POSITIVE_INFINITY, true, false);
+public record Bounds(
+    double min, boolean minInclusive, double max, boolean maxInclusive, boolean nonZero) {
+  public static final Bounds ANY =
+      new Bounds(Double.NEGATIVE_INFINITY, true, Double.POSITIVE_INFINITY, true, false);
   public static final Bounds POSITIVE = new Bounds(0, false, Double.POSITIVE_INFINITY, true, false);
-  public static final Bounds NON_NEGATIVE = new Bounds(0, true, Double.POSITIVE_INFINITY, true, false);
-  public static final Bounds NON_ZERO = new Bounds(Double.NEGATIVE_INFINITY, true, Double.POSITIVE_INFINITY, true, true);
+  public static final Bounds NON_NEGATIVE =
+      new Bounds(0, true, Double.POSITIVE_INFINITY, true, false);
+  public static final Bounds NON_ZERO =
+      new Bounds(Double.NEGATIVE_INFINITY, true, Double.POSITIVE_INFINITY, true, true);
 
   public static Bounds closed(double min, double max) {
     return new Bounds(min, true, max, true, false);

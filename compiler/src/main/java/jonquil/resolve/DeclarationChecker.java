@@ -22,7 +22,11 @@ final class DeclarationChecker {
 
   private final Map<java.nio.file.Path, String> dataFiles;
 
-  DeclarationChecker(Sink sink, Scope scope, jonquil.syntax.SpecFile file, Map<java.nio.file.Path, String> dataFiles) {
+  DeclarationChecker(
+      Sink sink,
+      Scope scope,
+      jonquil.syntax.SpecFile file,
+      Map<java.nio.file.Path, String> dataFiles) {
     this.sink = sink;
     this.values = new ValueChecker(sink, scope);
     this.file = file;
@@ -38,33 +42,58 @@ final class DeclarationChecker {
       if (spec.isEmpty()) {
         List<String> names = kind.params().stream().map(ParamSpec::name).toList();
         Optional<String> close = Suggest.closest(key, names);
-        sink.report(DiagnosticCode.UNKNOWN_PARAMETER, p.key().range(),
-            "'" + key + "' is not a parameter of " + ShapeMatcher.article(kind.word())
-                + close.map(n -> "; did you mean '" + n + "'?").orElse("; it takes " + ShapeMatcher.quoteList(names)),
+        sink.report(
+            DiagnosticCode.UNKNOWN_PARAMETER,
+            p.key().range(),
+            "'"
+                + key
+                + "' is not a parameter of "
+                + ShapeMatcher.article(kind.word())
+                + close
+                    .map(n -> "; did you mean '" + n + "'?")
+                    .orElse("; it takes " + ShapeMatcher.quoteList(names)),
             Resolver.replacement(sink.file, p.key().range(), key, close));
         continue;
       }
       Property earlier = firstSeen.putIfAbsent(key, p);
       if (earlier != null && !spec.get().repeatable()) {
-        var d = sink.report(DiagnosticCode.DUPLICATE_PARAMETER, p.key().range(),
-            "'" + key + "' is given twice for " + kind.word() + " '" + symbol.name() + "'; keep one");
-        sink.replace(d, d.withRelated(new Related(sink.file, earlier.key().range(), "first given here")));
+        var d =
+            sink.report(
+                DiagnosticCode.DUPLICATE_PARAMETER,
+                p.key().range(),
+                "'"
+                    + key
+                    + "' is given twice for "
+                    + kind.word()
+                    + " '"
+                    + symbol.name()
+                    + "'; keep one");
+        sink.replace(
+            d, d.withRelated(new Related(sink.file, earlier.key().range(), "first given here")));
         continue;
       }
       if (spec.get().shape() instanceof Shape.Seq seq && seq.parts().isEmpty()) {
         if (!p.args().isEmpty()) {
-          sink.report(DiagnosticCode.BAD_ARGUMENT, TextRange.span(p.args().get(0).range(), p.args().get(p.args().size() - 1).range()),
+          sink.report(
+              DiagnosticCode.BAD_ARGUMENT,
+              TextRange.span(p.args().get(0).range(), p.args().get(p.args().size() - 1).range()),
               "'" + key + "' takes no value; write it alone on its line");
           continue;
         }
-        params.computeIfAbsent(key, k -> new ArrayList<>()).add(new Value.Group(Map.of(), List.of(), p.range()));
+        params
+            .computeIfAbsent(key, k -> new ArrayList<>())
+            .add(new Value.Group(Map.of(), List.of(), p.range()));
         continue;
       }
-      values.check(spec.get().shape(), p.args(), key, p.range())
+      values
+          .check(spec.get().shape(), p.args(), key, p.range())
           .ifPresent(g -> params.computeIfAbsent(key, k -> new ArrayList<>()).add(g));
     }
-    // After a syntax error or a misused '=', what looks missing was most likely written but not read.
-    boolean incomplete = file.damaged(decl.range()) || (decl.shorthand().isPresent() && kind != ElementKind.MATERIAL);
+    // After a syntax error or a misused '=', what looks missing was most likely written but not
+    // read.
+    boolean incomplete =
+        file.damaged(decl.range())
+            || (decl.shorthand().isPresent() && kind != ElementKind.MATERIAL);
     if (!incomplete) {
       checkRequired(symbol, kind, decl, firstSeen.keySet());
       checkRules(symbol, kind, decl, firstSeen);
@@ -90,14 +119,26 @@ final class DeclarationChecker {
     }
     String text = target == null ? null : dataFiles.get(target);
     if (text == null) {
-      sink.report(DiagnosticCode.DATA_FILE_NOT_FOUND, name.range(),
-          "table file '" + name.text() + "' not found in the project (paths are relative to this file)");
+      sink.report(
+          DiagnosticCode.DATA_FILE_NOT_FOUND,
+          name.range(),
+          "table file '"
+              + name.text()
+              + "' not found in the project (paths are relative to this file)");
       params.remove("table");
       return;
     }
-    TableReader.read(target, text, sink.diagnostics).ifPresentOrElse(rows -> params.put("table",
-        List.of(new Value.Group(Map.of("file", name, "rows", new Value.Table(rows, name.range())), List.of(), g.range()))),
-        () -> params.remove("table"));
+    TableReader.read(target, text, sink.diagnostics)
+        .ifPresentOrElse(
+            rows ->
+                params.put(
+                    "table",
+                    List.of(
+                        new Value.Group(
+                            Map.of("file", name, "rows", new Value.Table(rows, name.range())),
+                            List.of(),
+                            g.range()))),
+            () -> params.remove("table"));
   }
 
   /** Block lines as written, or the '=' shorthand split into lines at parameter names. */
@@ -108,8 +149,11 @@ final class DeclarationChecker {
     List<Arg> args = decl.shorthand().get();
     if (kind != ElementKind.MATERIAL) {
       TextRange at = args.isEmpty() ? decl.name().range() : args.get(0).range();
-      sink.report(DiagnosticCode.BAD_ARGUMENT, at,
-          "'=' gives a material in one line; write a block '{ ... }' for " + ShapeMatcher.article(kind.word()));
+      sink.report(
+          DiagnosticCode.BAD_ARGUMENT,
+          at,
+          "'=' gives a material in one line; write a block '{ ... }' for "
+              + ShapeMatcher.article(kind.word()));
       return List.of();
     }
     List<Property> out = new ArrayList<>();
@@ -117,9 +161,13 @@ final class DeclarationChecker {
     List<Arg> current = new ArrayList<>();
     for (Arg a : args) {
       // '= index 1.5 k 0.001' reads '1.5 k' as a number with unit 'k'; 'k' is the next parameter.
-      if (a instanceof Arg.QuantityArg q && q.unit().isPresent() && q.tolerance().isEmpty()
+      if (a instanceof Arg.QuantityArg q
+          && q.unit().isPresent()
+          && q.tolerance().isEmpty()
           && kind.param(q.unit().get().text()).isPresent()) {
-        current.add(new Arg.QuantityArg(q.number(), Optional.empty(), Optional.empty(), q.number().range()));
+        current.add(
+            new Arg.QuantityArg(
+                q.number(), Optional.empty(), Optional.empty(), q.number().range()));
         out.add(property(key, current, decl));
         key = new Name(q.unit().get().text(), q.unit().get().range());
         current = new ArrayList<>();
@@ -128,7 +176,9 @@ final class DeclarationChecker {
       if (a instanceof Arg.CommaArg && key != null) {
         continue; // '= index 1.5, k 0.001': commas only separate parameters here
       }
-      if (a instanceof Arg.RefArg r && r.port().isEmpty() && kind.param(r.name().text()).isPresent()) {
+      if (a instanceof Arg.RefArg r
+          && r.port().isEmpty()
+          && kind.param(r.name().text()).isPresent()) {
         if (key != null || !current.isEmpty()) {
           out.add(property(key, current, decl));
         }
@@ -146,37 +196,69 @@ final class DeclarationChecker {
 
   private static Property property(Name key, List<Arg> args, Declaration decl) {
     // A shorthand that starts with a plain name ('= water') means the catalog entry of that name.
-    Name k = key != null ? key : new Name("catalog", args.isEmpty() ? decl.name().range() : args.get(0).range());
+    Name k =
+        key != null
+            ? key
+            : new Name("catalog", args.isEmpty() ? decl.name().range() : args.get(0).range());
     TextRange end = args.isEmpty() ? k.range() : args.get(args.size() - 1).range();
     return new Property(k, args, TextRange.span(k.range(), end));
   }
 
-  private void checkRequired(Symbol symbol, ElementKind kind, Declaration decl, java.util.Set<String> given) {
+  private void checkRequired(
+      Symbol symbol, ElementKind kind, Declaration decl, java.util.Set<String> given) {
     for (ParamSpec p : kind.params()) {
       if (p.required() && !given.contains(p.name())) {
-        sink.report(DiagnosticCode.MISSING_PARAMETER, decl.name().range(),
+        sink.report(
+            DiagnosticCode.MISSING_PARAMETER,
+            decl.name().range(),
             kind.word() + " '" + symbol.name() + "' needs '" + p.name() + "' (" + p.doc() + ")");
       }
     }
     for (List<String> group : kind.rules().atLeastOneOf()) {
       if (group.stream().noneMatch(given::contains)) {
-        sink.report(DiagnosticCode.MISSING_PARAMETER, decl.name().range(),
-            kind.word() + " '" + symbol.name() + "' needs " + (group.size() == 1 ? "" : "one of ")
+        sink.report(
+            DiagnosticCode.MISSING_PARAMETER,
+            decl.name().range(),
+            kind.word()
+                + " '"
+                + symbol.name()
+                + "' needs "
+                + (group.size() == 1 ? "" : "one of ")
                 + ShapeMatcher.quoteList(group));
       }
     }
   }
 
-  private void checkRules(Symbol symbol, ElementKind kind, Declaration decl, Map<String, Property> given) {
+  private void checkRules(
+      Symbol symbol, ElementKind kind, Declaration decl, Map<String, Property> given) {
     for (List<String> group : kind.rules().mutuallyExclusive()) {
-      List<Property> present = group.stream().filter(given::containsKey).map(given::get)
-          .sorted(java.util.Comparator.comparing(Property::range)).toList();
+      List<Property> present =
+          group.stream()
+              .filter(given::containsKey)
+              .map(given::get)
+              .sorted(java.util.Comparator.comparing(Property::range))
+              .toList();
       for (int i = 1; i < present.size(); i++) {
-        var d = sink.report(DiagnosticCode.CONFLICTING_PARAMETERS, present.get(i).key().range(),
-            "'" + present.get(i).key().text() + "' and '" + present.get(0).key().text() + "' exclude each other in "
-                + kind.word() + " '" + symbol.name() + "'; keep one");
-        sink.replace(d, d.withRelated(new Related(sink.file, present.get(0).key().range(),
-            "'" + present.get(0).key().text() + "' is given here")));
+        var d =
+            sink.report(
+                DiagnosticCode.CONFLICTING_PARAMETERS,
+                present.get(i).key().range(),
+                "'"
+                    + present.get(i).key().text()
+                    + "' and '"
+                    + present.get(0).key().text()
+                    + "' exclude each other in "
+                    + kind.word()
+                    + " '"
+                    + symbol.name()
+                    + "'; keep one");
+        sink.replace(
+            d,
+            d.withRelated(
+                new Related(
+                    sink.file,
+                    present.get(0).key().range(),
+                    "'" + present.get(0).key().text() + "' is given here")));
       }
     }
   }

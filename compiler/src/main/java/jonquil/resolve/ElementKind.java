@@ -5,9 +5,9 @@ import java.util.List;
 import java.util.Optional;
 
 /**
- * Every kind of declaration the language knows, with the word that introduces it, its
- * role, its output ports and its parameter table (see {@link KindTables}).
- * To add a kind: add a constant here, its table in KindTables, and a test case.
+ * Every kind of declaration the language knows, with the word that introduces it, its role, its
+ * output ports and its parameter table (see {@link KindTables}). To add a kind: add a constant
+ * here, its table in KindTables, and a test case.
  */
 public enum ElementKind {
   SOURCE("source", Category.SOURCE, List.of("out")),
@@ -54,8 +54,8 @@ public enum ElementKind {
   }
 
   /**
-   * Ports whose light is a designed output: if no branch follows one, the writer most
-   * likely forgot it. (A window's 'reflected' port is a ghost, expected to go unfollowed.)
+   * Ports whose light is a designed output: if no branch follows one, the writer most likely forgot
+   * it. (A window's 'reflected' port is a ghost, expected to go unfollowed.)
    */
   public List<String> primaryPorts() {
     return this == SPLITTER ? ports : List.of();
@@ -80,7 +80,8 @@ public enum ElementKind {
   }
 
   private static final java.util.Map<String, ElementKind> BY_WORD =
-      Arrays.stream(values()).collect(java.util.stream.Collectors.toUnmodifiableMap(k -> k.word, k -> k));
+      Arrays.stream(values())
+          .collect(java.util.stream.Collectors.toUnmodifiableMap(k -> k.word, k -> k));
 
   public static Optional<ElementKind> byWord(String word) {
     return Optional.ofNullable(word == null ? null : BY_WORD.get(word));

@@ -6,7 +6,13 @@ import java.util.Optional;
 
 /** Laser hazard classes in increasing order of hazard, as named by the laser-safety standards. */
 public enum HazardClass {
-  CLASS_1("1"), CLASS_1M("1M"), CLASS_2("2"), CLASS_2M("2M"), CLASS_3R("3R"), CLASS_3B("3B"), CLASS_4("4");
+  CLASS_1("1"),
+  CLASS_1M("1M"),
+  CLASS_2("2"),
+  CLASS_2M("2M"),
+  CLASS_3R("3R"),
+  CLASS_3B("3B"),
+  CLASS_4("4");
 
   private final String label;
 

@@ -13,11 +13,19 @@ import jonquil.units.QuantityFormat;
 final class KindChecks {
   private KindChecks() {}
 
-  /** Relative mismatch tolerated between average power and pulse energy × repetition rate (rounding in datasheets). */
+  /**
+   * Relative mismatch tolerated between average power and pulse energy × repetition rate (rounding
+   * in datasheets).
+   */
   static final double PULSE_CONSISTENCY = 0.01;
 
-  static void check(Sink sink, Symbol symbol, ElementKind kind, Declaration decl,
-      Map<String, List<Value.Group>> params, Map<String, Property> given) {
+  static void check(
+      Sink sink,
+      Symbol symbol,
+      ElementKind kind,
+      Declaration decl,
+      Map<String, List<Value.Group>> params,
+      Map<String, Property> given) {
     String who = kind.word() + " '" + symbol.name() + "'";
     switch (kind) {
       case SOURCE -> pulses(sink, who, decl, params, given);
@@ -32,31 +40,54 @@ final class KindChecks {
           needs(sink, who, decl, given, "reflect_p", "reflect_s");
         }
       }
-      default -> { }
+      default -> {}
     }
   }
 
-  private static void needs(Sink sink, String who, Declaration decl, Map<String, Property> given, String has, String needs) {
+  private static void needs(
+      Sink sink,
+      String who,
+      Declaration decl,
+      Map<String, Property> given,
+      String has,
+      String needs) {
     if (given.containsKey(has) && !given.containsKey(needs)) {
-      sink.report(DiagnosticCode.MISSING_PARAMETER, given.get(has).key().range(),
+      sink.report(
+          DiagnosticCode.MISSING_PARAMETER,
+          given.get(has).key().range(),
           "'" + has + "' in " + who + " needs '" + needs + "' as well");
     }
   }
 
-  private static void pulses(Sink sink, String who, Declaration decl, Map<String, List<Value.Group>> params,
+  private static void pulses(
+      Sink sink,
+      String who,
+      Declaration decl,
+      Map<String, List<Value.Group>> params,
       Map<String, Property> given) {
-    boolean pulsed = given.containsKey("pulse_energy") || given.containsKey("pulse_duration")
-        || given.containsKey("repetition_rate");
+    boolean pulsed =
+        given.containsKey("pulse_energy")
+            || given.containsKey("pulse_duration")
+            || given.containsKey("repetition_rate");
     if (!pulsed) {
       return;
     }
     if (!given.containsKey("pulse_duration")) {
-      sink.report(DiagnosticCode.MISSING_PARAMETER, decl.name().range(),
+      sink.report(
+          DiagnosticCode.MISSING_PARAMETER,
+          decl.name().range(),
           "pulsed " + who + " needs 'pulse_duration'");
     }
-    if (given.containsKey("power") && !given.containsKey("pulse_energy") && !given.containsKey("repetition_rate")) {
-      sink.report(DiagnosticCode.MISSING_PARAMETER, given.get("power").key().range(),
-          "pulsed " + who + " gives an average 'power'; add 'repetition_rate' (or 'pulse_energy') to know the pulses");
+    if (given.containsKey("power")
+        && !given.containsKey("pulse_energy")
+        && !given.containsKey("repetition_rate")) {
+      sink.report(
+          DiagnosticCode.MISSING_PARAMETER,
+          given.get("power").key().range(),
+          "pulsed "
+              + who
+              + " gives an average 'power'; add 'repetition_rate' (or 'pulse_energy') to know the"
+              + " pulses");
     }
     OptionalDouble p = number(params, "power", "power");
     OptionalDouble e = number(params, "pulse_energy", "energy");
@@ -64,15 +95,20 @@ final class KindChecks {
     if (p.isPresent() && e.isPresent() && f.isPresent()) {
       double product = e.getAsDouble() * f.getAsDouble();
       if (Math.abs(product - p.getAsDouble()) > PULSE_CONSISTENCY * p.getAsDouble()) {
-        sink.report(DiagnosticCode.CONFLICTING_PARAMETERS, given.get("power").range(),
-            "'power' " + QuantityFormat.format(p.getAsDouble(), Dimension.POWER)
-                + " disagrees with pulse_energy × repetition_rate = " + QuantityFormat.format(product, Dimension.POWER)
+        sink.report(
+            DiagnosticCode.CONFLICTING_PARAMETERS,
+            given.get("power").range(),
+            "'power' "
+                + QuantityFormat.format(p.getAsDouble(), Dimension.POWER)
+                + " disagrees with pulse_energy × repetition_rate = "
+                + QuantityFormat.format(product, Dimension.POWER)
                 + "; give two of the three, or make them agree");
       }
     }
   }
 
-  private static OptionalDouble number(Map<String, List<Value.Group>> params, String param, String slot) {
+  private static OptionalDouble number(
+      Map<String, List<Value.Group>> params, String param, String slot) {
     List<Value.Group> v = params.get(param);
     return v == null || v.isEmpty() ? OptionalDouble.empty() : v.get(0).number(slot);
   }

@@ -8,7 +8,12 @@ import java.util.Optional;
 public enum Measure {
   POWER(Bound.POWER_OR_RELATIVE, Where.AT, "power"),
   TRANSMISSION(Bound.RATIO_OR_DB, Where.BETWEEN, "transmission"),
-  IRRADIANCE(Bound.IRRADIANCE, Where.AT_OR_EVERYWHERE, "irradiance", "irradiance average", "average irradiance"),
+  IRRADIANCE(
+      Bound.IRRADIANCE,
+      Where.AT_OR_EVERYWHERE,
+      "irradiance",
+      "irradiance average",
+      "average irradiance"),
   PEAK_IRRADIANCE(Bound.IRRADIANCE, Where.AT_OR_EVERYWHERE, "irradiance peak", "peak irradiance"),
   FLUENCE(Bound.FLUENCE, Where.AT_OR_EVERYWHERE, "fluence"),
   PEAK_FIELD(Bound.FIELD, Where.AT_OR_EVERYWHERE, "peak field", "field"),
@@ -31,12 +36,31 @@ public enum Measure {
 
   /** How the bound is written. */
   public enum Bound {
-    POWER, POWER_OR_RELATIVE, RATIO, RATIO_OR_DB, IRRADIANCE, FLUENCE, FIELD, ENERGY, LENGTH, ANGLE, PLAIN,
-    HAZARD_CLASS, DENSITY, STATE, HANDEDNESS
+    POWER,
+    POWER_OR_RELATIVE,
+    RATIO,
+    RATIO_OR_DB,
+    IRRADIANCE,
+    FLUENCE,
+    FIELD,
+    ENERGY,
+    LENGTH,
+    ANGLE,
+    PLAIN,
+    HAZARD_CLASS,
+    DENSITY,
+    STATE,
+    HANDEDNESS
   }
 
   /** Which places the measure takes. */
-  public enum Where { AT, AT_OR_EVERYWHERE, BETWEEN, NONE, OPTIONAL_AT }
+  public enum Where {
+    AT,
+    AT_OR_EVERYWHERE,
+    BETWEEN,
+    NONE,
+    OPTIONAL_AT
+  }
 
   private final Bound bound;
   private final Where where;
@@ -71,6 +95,10 @@ public enum Measure {
 
   /** Measures that may follow a polarization requirement after a comma. */
   public boolean polarizationDetail() {
-    return this == AZIMUTH || this == ELLIPTICITY || this == HANDEDNESS || this == EXTINCTION || this == DOP;
+    return this == AZIMUTH
+        || this == ELLIPTICITY
+        || this == HANDEDNESS
+        || this == EXTINCTION
+        || this == DOP;
   }
 }

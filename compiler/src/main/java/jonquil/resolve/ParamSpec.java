@@ -1,7 +1,8 @@
 package jonquil.resolve;
 
 /** One parameter an element kind accepts: its name, its argument shape, and what it means. */
-public record ParamSpec(String name, Shape shape, boolean required, boolean repeatable, String doc) {
+public record ParamSpec(
+    String name, Shape shape, boolean required, boolean repeatable, String doc) {
   public static ParamSpec optional(String name, Shape shape, String doc) {
     return new ParamSpec(name, shape, false, false, doc);
   }

@@ -10,7 +10,9 @@ import jonquil.syntax.Arg;
 import jonquil.syntax.Requirement;
 import jonquil.units.Dimension;
 
-/** Checks each requirement line: a known measure, the places it needs, and bounds of the right kind. */
+/**
+ * Checks each requirement line: a known measure, the places it needs, and bounds of the right kind.
+ */
 final class RequirementResolver {
   private final Sink sink;
   private final Scope scope;
@@ -53,19 +55,27 @@ final class RequirementResolver {
     }
     List<ResolvedRequirement.Criterion> criteria = new ArrayList<>();
     if (check.condition().isEmpty() && !damaged) {
-      sink.report(DiagnosticCode.MISSING_CONDITION, check.measure().range(),
-          "this requirement has no bound: add one such as " + measure.map(RequirementResolver::example).orElse("'>= 400 mW'"));
+      sink.report(
+          DiagnosticCode.MISSING_CONDITION,
+          check.measure().range(),
+          "this requirement has no bound: add one such as "
+              + measure.map(RequirementResolver::example).orElse("'>= 400 mW'"));
     }
     if (measure.isPresent() && check.condition().isPresent()) {
       criterion(measure.get(), check.condition().get()).ifPresent(criteria::add);
     }
     for (Requirement.Extra extra : check.extras()) {
       Optional<Measure> m = extra.measure().isPresent() ? measure(extra.measure().get()) : measure;
-      if (m.isPresent() && measure.isPresent() && extra.measure().isPresent()
-          && measure.get() == Measure.POLARIZATION && !m.get().polarizationDetail()) {
-        sink.report(DiagnosticCode.UNKNOWN_MEASURE, extra.measure().get().range(),
-            "after a polarization requirement, a comma adds one of 'azimuth', 'ellipticity', 'handedness', "
-                + "'extinction' or 'dop'");
+      if (m.isPresent()
+          && measure.isPresent()
+          && extra.measure().isPresent()
+          && measure.get() == Measure.POLARIZATION
+          && !m.get().polarizationDetail()) {
+        sink.report(
+            DiagnosticCode.UNKNOWN_MEASURE,
+            extra.measure().get().range(),
+            "after a polarization requirement, a comma adds one of 'azimuth', 'ellipticity',"
+                + " 'handedness', 'extinction' or 'dop'");
         continue;
       }
       m.flatMap(x -> criterion(x, extra.condition())).ifPresent(criteria::add);
@@ -73,21 +83,34 @@ final class RequirementResolver {
     Optional<ResolvedRequirement.Band> band = check.band().flatMap(this::band);
     Optional<ResolvedRequirement.Criterion> yield = req.yield().flatMap(this::yield);
     boolean valid = errorCount() == errorsBefore;
-    return new ResolvedRequirement(sink.file, req, measure, at, from, to, everywhere, criteria, band, yield, valid);
+    return new ResolvedRequirement(
+        sink.file, req, measure, at, from, to, everywhere, criteria, band, yield, valid);
   }
 
   private int errorCount() {
-    return (int) sink.diagnostics.stream().filter(d -> d.severity() == jonquil.diag.Severity.ERROR).count();
+    return (int)
+        sink.diagnostics.stream().filter(d -> d.severity() == jonquil.diag.Severity.ERROR).count();
   }
 
   private Optional<Measure> measure(Requirement.Measure written) {
     Optional<Measure> m = Measure.bySpelling(written.text());
     if (m.isEmpty()) {
       Optional<String> close = Suggest.closest(written.text(), Measure.spellings());
-      sink.report(DiagnosticCode.UNKNOWN_MEASURE, written.range(),
-          "'" + written.text() + "' is not a quantity a requirement can bound"
-              + close.map(x -> "; did you mean '" + x + "'?").orElse("; the measures are " + String.join(", ",
-                  java.util.Arrays.stream(Measure.values()).map(Measure::word).toList())),
+      sink.report(
+          DiagnosticCode.UNKNOWN_MEASURE,
+          written.range(),
+          "'"
+              + written.text()
+              + "' is not a quantity a requirement can bound"
+              + close
+                  .map(x -> "; did you mean '" + x + "'?")
+                  .orElse(
+                      "; the measures are "
+                          + String.join(
+                              ", ",
+                              java.util.Arrays.stream(Measure.values())
+                                  .map(Measure::word)
+                                  .toList())),
           Resolver.replacement(sink.file, written.range(), written.text(), close));
     }
     return m;
@@ -95,26 +118,34 @@ final class RequirementResolver {
 
   private void checkPlaces(Measure m, Requirement.Check check) {
     boolean hasAt = check.places().stream().anyMatch(p -> p instanceof Requirement.At);
-    boolean hasEverywhere = check.places().stream().anyMatch(p -> p instanceof Requirement.Everywhere);
+    boolean hasEverywhere =
+        check.places().stream().anyMatch(p -> p instanceof Requirement.Everywhere);
     boolean hasBetween = check.places().stream().anyMatch(p -> p instanceof Requirement.Between);
     TextRange where = check.measure().range();
     switch (m.where()) {
       case AT -> {
         if (!hasAt) {
-          sink.report(DiagnosticCode.MISSING_PLACE, where, "'" + m.word() + "' is measured at a place: add 'at' and a name");
+          sink.report(
+              DiagnosticCode.MISSING_PLACE,
+              where,
+              "'" + m.word() + "' is measured at a place: add 'at' and a name");
         }
         unexpected(check, hasEverywhere, hasBetween, m);
       }
       case AT_OR_EVERYWHERE -> {
         if (!hasAt && !hasEverywhere) {
-          sink.report(DiagnosticCode.MISSING_PLACE, where,
+          sink.report(
+              DiagnosticCode.MISSING_PLACE,
+              where,
               "'" + m.word() + "' needs a place: add 'at' and a name, or 'everywhere'");
         }
         unexpected(check, false, hasBetween, m);
       }
       case BETWEEN -> {
         if (!hasBetween) {
-          sink.report(DiagnosticCode.MISSING_PLACE, where,
+          sink.report(
+              DiagnosticCode.MISSING_PLACE,
+              where,
               "'" + m.word() + "' is measured between two places: add 'from' a name 'to' a name");
         }
         unexpected(check, hasEverywhere || hasAt, false, m);
@@ -123,7 +154,10 @@ final class RequirementResolver {
       case OPTIONAL_AT -> unexpected(check, hasEverywhere, hasBetween, m);
     }
     if (check.places().stream().filter(p -> p instanceof Requirement.At).count() > 1) {
-      sink.report(DiagnosticCode.UNEXPECTED_PLACE, where, "a requirement is measured at one place; split it into one line per place");
+      sink.report(
+          DiagnosticCode.UNEXPECTED_PLACE,
+          where,
+          "a requirement is measured at one place; split it into one line per place");
     }
   }
 
@@ -132,14 +166,18 @@ final class RequirementResolver {
       return;
     }
     for (Requirement.Place p : check.places()) {
-      boolean bad = switch (m.where()) {
-        case AT, OPTIONAL_AT -> !(p instanceof Requirement.At);
-        case AT_OR_EVERYWHERE -> p instanceof Requirement.Between;
-        case BETWEEN -> !(p instanceof Requirement.Between);
-        case NONE -> !(p instanceof Requirement.Everywhere);
-      };
+      boolean bad =
+          switch (m.where()) {
+            case AT, OPTIONAL_AT -> !(p instanceof Requirement.At);
+            case AT_OR_EVERYWHERE -> p instanceof Requirement.Between;
+            case BETWEEN -> !(p instanceof Requirement.Between);
+            case NONE -> !(p instanceof Requirement.Everywhere);
+          };
       if (bad) {
-        sink.report(DiagnosticCode.UNEXPECTED_PLACE, p.range(), "'" + m.word() + "' does not take this place");
+        sink.report(
+            DiagnosticCode.UNEXPECTED_PLACE,
+            p.range(),
+            "'" + m.word() + "' does not take this place");
       }
     }
   }
@@ -152,8 +190,14 @@ final class RequirementResolver {
     }
     Symbol s = found.get();
     if (!s.category().placeable() || s.kind().isEmpty()) {
-      sink.report(DiagnosticCode.WRONG_KIND, ref.name().range(),
-          "'" + name + "' is " + s.kindPhrase() + "; a requirement is measured at a source, element, probe or beam stop");
+      sink.report(
+          DiagnosticCode.WRONG_KIND,
+          ref.name().range(),
+          "'"
+              + name
+              + "' is "
+              + s.kindPhrase()
+              + "; a requirement is measured at a source, element, probe or beam stop");
       return Optional.empty();
     }
     Optional<String> port = refs.port(ref, s.kind().get());
@@ -161,25 +205,38 @@ final class RequirementResolver {
       return Optional.empty();
     }
     if (!placed.contains(s)) {
-      sink.report(DiagnosticCode.TARGET_NOT_PLACED, ref.name().range(),
+      sink.report(
+          DiagnosticCode.TARGET_NOT_PLACED,
+          ref.name().range(),
           "no beam path reaches '" + name + "', so this requirement cannot be evaluated");
     }
     return Optional.of(new ResolvedRequirement.Target(s, port, ref.range()));
   }
 
-  private Optional<ResolvedRequirement.Criterion> criterion(Measure m, Requirement.Condition condition) {
+  private Optional<ResolvedRequirement.Criterion> criterion(
+      Measure m, Requirement.Condition condition) {
     if (condition instanceof Requirement.Is is) {
       return state(m, is);
     }
     if (m.bound() == Measure.Bound.STATE || m.bound() == Measure.Bound.HANDEDNESS) {
-      sink.report(DiagnosticCode.BAD_POLARIZATION_STATE, condition.range(),
+      sink.report(
+          DiagnosticCode.BAD_POLARIZATION_STATE,
+          condition.range(),
           "'" + m.word() + "' is stated with 'is', e.g. " + example(m));
       return Optional.empty();
     }
     if (condition instanceof Requirement.Compare c) {
       Optional<Bound> b = bound(m, c.value());
-      return b.map(v -> new ResolvedRequirement.Criterion(m, relation(c.comparator()), v.value, v.value, v.relative,
-          Optional.empty(), c.range()));
+      return b.map(
+          v ->
+              new ResolvedRequirement.Criterion(
+                  m,
+                  relation(c.comparator()),
+                  v.value,
+                  v.value,
+                  v.relative,
+                  Optional.empty(),
+                  c.range()));
     }
     Requirement.Within w = (Requirement.Within) condition;
     Optional<Bound> low = bound(m, w.low());
@@ -188,15 +245,28 @@ final class RequirementResolver {
       return Optional.empty();
     }
     if (low.get().relative != high.get().relative) {
-      sink.report(DiagnosticCode.BAD_ARGUMENT, w.range(), "both ends of the range must be absolute, or both in dB");
+      sink.report(
+          DiagnosticCode.BAD_ARGUMENT,
+          w.range(),
+          "both ends of the range must be absolute, or both in dB");
       return Optional.empty();
     }
     if (low.get().value > high.get().value) {
-      sink.report(DiagnosticCode.INVERTED_RANGE, w.range(), "the range runs backwards: its low end is above its high end");
+      sink.report(
+          DiagnosticCode.INVERTED_RANGE,
+          w.range(),
+          "the range runs backwards: its low end is above its high end");
       return Optional.empty();
     }
-    return Optional.of(new ResolvedRequirement.Criterion(m, ResolvedRequirement.Relation.WITHIN, low.get().value,
-        high.get().value, low.get().relative, Optional.empty(), w.range()));
+    return Optional.of(
+        new ResolvedRequirement.Criterion(
+            m,
+            ResolvedRequirement.Relation.WITHIN,
+            low.get().value,
+            high.get().value,
+            low.get().relative,
+            Optional.empty(),
+            w.range()));
   }
 
   private Optional<ResolvedRequirement.Criterion> state(Measure m, Requirement.Is is) {
@@ -206,49 +276,78 @@ final class RequirementResolver {
     } else if (m == Measure.HANDEDNESS) {
       shape = Shape.word("handedness", "right", "left");
     } else {
-      sink.report(DiagnosticCode.BAD_POLARIZATION_STATE, is.range(),
-          "'is' states a polarization; bound '" + m.word() + "' with a comparison such as " + example(m));
+      sink.report(
+          DiagnosticCode.BAD_POLARIZATION_STATE,
+          is.range(),
+          "'is' states a polarization; bound '"
+              + m.word()
+              + "' with a comparison such as "
+              + example(m));
       return Optional.empty();
     }
     int before = sink.diagnostics.size();
     Optional<Value.Group> g = values.check(shape, is.state(), m.word(), is.range());
     if (g.isEmpty() && sink.diagnostics.size() > before) {
       var last = sink.diagnostics.get(sink.diagnostics.size() - 1);
-      if (last.code() == DiagnosticCode.BAD_ARGUMENT || last.code() == DiagnosticCode.MISSING_ARGUMENT) {
-        sink.replace(last, new jonquil.diag.Diagnostic(DiagnosticCode.BAD_POLARIZATION_STATE, last.severity(),
-            last.file(), last.range(), last.message(), last.fixes(), last.related()));
+      if (last.code() == DiagnosticCode.BAD_ARGUMENT
+          || last.code() == DiagnosticCode.MISSING_ARGUMENT) {
+        sink.replace(
+            last,
+            new jonquil.diag.Diagnostic(
+                DiagnosticCode.BAD_POLARIZATION_STATE,
+                last.severity(),
+                last.file(),
+                last.range(),
+                last.message(),
+                last.fixes(),
+                last.related()));
       }
     }
-    return g.map(state -> new ResolvedRequirement.Criterion(m, ResolvedRequirement.Relation.IS, 0, 0, false,
-        Optional.of(state), is.range()));
+    return g.map(
+        state ->
+            new ResolvedRequirement.Criterion(
+                m, ResolvedRequirement.Relation.IS, 0, 0, false, Optional.of(state), is.range()));
   }
 
   private record Bound(double value, boolean relative) {}
 
   private Optional<Bound> bound(Measure m, Arg arg) {
     if (!(arg instanceof Arg.QuantityArg q)) {
-      sink.report(DiagnosticCode.BAD_ARGUMENT, arg.range(),
-          "expected a number for '" + m.word() + "', found " + ValueChecker.describeArg(arg) + "; e.g. " + example(m));
+      sink.report(
+          DiagnosticCode.BAD_ARGUMENT,
+          arg.range(),
+          "expected a number for '"
+              + m.word()
+              + "', found "
+              + ValueChecker.describeArg(arg)
+              + "; e.g. "
+              + example(m));
       return Optional.empty();
     }
     String what = m.word();
     switch (m.bound()) {
       case POWER -> {
-        return values.quantity(q, List.of(Dimension.POWER), Bounds.NON_NEGATIVE, "5 mW", what).map(v -> new Bound(v.si(), false));
+        return values
+            .quantity(q, List.of(Dimension.POWER), Bounds.NON_NEGATIVE, "5 mW", what)
+            .map(v -> new Bound(v.si(), false));
       }
       case POWER_OR_RELATIVE, RATIO_OR_DB -> {
         if (q.unit().isPresent() && q.unit().get().text().equals("dB")) {
           return values.powerRatio(q, Bounds.POSITIVE, what).map(v -> new Bound(v.si(), true));
         }
         if (m.bound() == Measure.Bound.POWER_OR_RELATIVE) {
-          return values.quantity(q, List.of(Dimension.POWER), Bounds.NON_NEGATIVE, "400 mW", what)
+          return values
+              .quantity(q, List.of(Dimension.POWER), Bounds.NON_NEGATIVE, "400 mW", what)
               .map(v -> new Bound(v.si(), false));
         }
-        return (m == Measure.EXTINCTION ? values.powerRatio(q, Bounds.atLeast(1), what)
-            : values.ratio(q, Bounds.closed(0, 1), what)).map(v -> new Bound(v.si(), false));
+        return (m == Measure.EXTINCTION
+                ? values.powerRatio(q, Bounds.atLeast(1), what)
+                : values.ratio(q, Bounds.closed(0, 1), what))
+            .map(v -> new Bound(v.si(), false));
       }
       case RATIO -> {
-        return values.ratio(q, m == Measure.EXPOSURE ? Bounds.NON_NEGATIVE : Bounds.closed(0, 1), what)
+        return values
+            .ratio(q, m == Measure.EXPOSURE ? Bounds.NON_NEGATIVE : Bounds.closed(0, 1), what)
             .map(v -> new Bound(v.si(), false));
       }
       case IRRADIANCE -> {
@@ -267,11 +366,15 @@ final class RequirementResolver {
         return si(q, Dimension.LENGTH, "2 m", what);
       }
       case ANGLE -> {
-        return values.quantity(q, List.of(Dimension.ANGLE), Bounds.ANY, "2 deg", what).map(v -> new Bound(v.si(), false));
+        return values
+            .quantity(q, List.of(Dimension.ANGLE), Bounds.ANY, "2 deg", what)
+            .map(v -> new Bound(v.si(), false));
       }
       case PLAIN -> {
         if (q.unit().isPresent()) {
-          sink.report(DiagnosticCode.UNEXPECTED_UNIT, q.unit().get().range(),
+          sink.report(
+              DiagnosticCode.UNEXPECTED_UNIT,
+              q.unit().get().range(),
               "'" + what + "' is a plain number; remove the unit '" + q.unit().get().text() + "'");
           return Optional.empty();
         }
@@ -279,7 +382,9 @@ final class RequirementResolver {
       }
       case DENSITY -> {
         if (q.unit().isPresent() && !q.unit().get().text().equals("OD")) {
-          sink.report(DiagnosticCode.WRONG_DIMENSION, q.unit().get().range(),
+          sink.report(
+              DiagnosticCode.WRONG_DIMENSION,
+              q.unit().get().range(),
               "'" + what + "' is an optical density, written 'OD 4' or '4'");
           return Optional.empty();
         }
@@ -289,8 +394,12 @@ final class RequirementResolver {
         String label = q.number().text() + q.unit().map(u -> u.text()).orElse("");
         Optional<HazardClass> c = HazardClass.byLabel(label);
         if (c.isEmpty()) {
-          sink.report(DiagnosticCode.UNKNOWN_HAZARD_CLASS, q.range(),
-              "'" + ValueChecker.written(q) + "' is not a laser hazard class; the classes are "
+          sink.report(
+              DiagnosticCode.UNKNOWN_HAZARD_CLASS,
+              q.range(),
+              "'"
+                  + ValueChecker.written(q)
+                  + "' is not a laser hazard class; the classes are "
                   + String.join(", ", HazardClass.labels()));
           return Optional.empty();
         }
@@ -303,26 +412,43 @@ final class RequirementResolver {
   }
 
   private Optional<Bound> si(Arg.QuantityArg q, Dimension dim, String example, String what) {
-    return values.quantity(q, List.of(dim), Bounds.NON_NEGATIVE, example, what).map(v -> new Bound(v.si(), false));
+    return values
+        .quantity(q, List.of(dim), Bounds.NON_NEGATIVE, example, what)
+        .map(v -> new Bound(v.si(), false));
   }
 
   private Optional<ResolvedRequirement.Band> band(Requirement.Band band) {
     if (!band.quantity().text().equals("wavelength")) {
-      sink.report(DiagnosticCode.BAD_ARGUMENT, band.quantity().range(),
-          "a requirement can hold over a 'wavelength' band; '" + band.quantity().text() + "' is not supported");
+      sink.report(
+          DiagnosticCode.BAD_ARGUMENT,
+          band.quantity().range(),
+          "a requirement can hold over a 'wavelength' band; '"
+              + band.quantity().text()
+              + "' is not supported");
       return Optional.empty();
     }
-    if (!(band.low() instanceof Arg.QuantityArg lo) || !(band.high() instanceof Arg.QuantityArg hi)) {
-      sink.report(DiagnosticCode.BAD_ARGUMENT, band.range(), "a band is written like 'wavelength 1060 nm .. 1070 nm'");
+    if (!(band.low() instanceof Arg.QuantityArg lo)
+        || !(band.high() instanceof Arg.QuantityArg hi)) {
+      sink.report(
+          DiagnosticCode.BAD_ARGUMENT,
+          band.range(),
+          "a band is written like 'wavelength 1060 nm .. 1070 nm'");
       return Optional.empty();
     }
-    Optional<Value.Num> low = values.quantity(lo, List.of(Dimension.LENGTH), KindTables.WAVELENGTH, "1060 nm", "wavelength");
-    Optional<Value.Num> high = values.quantity(hi, List.of(Dimension.LENGTH), KindTables.WAVELENGTH, "1070 nm", "wavelength");
+    Optional<Value.Num> low =
+        values.quantity(
+            lo, List.of(Dimension.LENGTH), KindTables.WAVELENGTH, "1060 nm", "wavelength");
+    Optional<Value.Num> high =
+        values.quantity(
+            hi, List.of(Dimension.LENGTH), KindTables.WAVELENGTH, "1070 nm", "wavelength");
     if (low.isEmpty() || high.isEmpty()) {
       return Optional.empty();
     }
     if (low.get().si() > high.get().si()) {
-      sink.report(DiagnosticCode.INVERTED_RANGE, band.range(), "the wavelength band runs backwards: its low end is above its high end");
+      sink.report(
+          DiagnosticCode.INVERTED_RANGE,
+          band.range(),
+          "the wavelength band runs backwards: its low end is above its high end");
       return Optional.empty();
     }
     return Optional.of(new ResolvedRequirement.Band(low.get().si(), high.get().si(), band.range()));
@@ -330,11 +456,22 @@ final class RequirementResolver {
 
   private Optional<ResolvedRequirement.Criterion> yield(Requirement.Yield y) {
     if (!(y.bound() instanceof Arg.QuantityArg q)) {
-      sink.report(DiagnosticCode.BAD_ARGUMENT, y.bound().range(), "a yield is a fraction such as '99 %'");
+      sink.report(
+          DiagnosticCode.BAD_ARGUMENT, y.bound().range(), "a yield is a fraction such as '99 %'");
       return Optional.empty();
     }
-    return values.ratio(q, Bounds.closed(0, 1), "yield").map(v -> new ResolvedRequirement.Criterion(
-        null, relation(y.comparator()), v.si(), v.si(), false, Optional.empty(), y.range()));
+    return values
+        .ratio(q, Bounds.closed(0, 1), "yield")
+        .map(
+            v ->
+                new ResolvedRequirement.Criterion(
+                    null,
+                    relation(y.comparator()),
+                    v.si(),
+                    v.si(),
+                    false,
+                    Optional.empty(),
+                    y.range()));
   }
 
   private static ResolvedRequirement.Relation relation(Requirement.Comparator c) {
@@ -352,7 +489,8 @@ final class RequirementResolver {
       case POWER -> "'< 5 mW'";
       case POWER_OR_RELATIVE -> "'>= 400 mW' or '>= -3 dB'";
       case RATIO -> "'<= 50 %'";
-      case RATIO_OR_DB -> m == Measure.EXTINCTION ? "'>= 1000' or '>= 30 dB'" : "'>= 90 %' or '>= -0.5 dB'";
+      case RATIO_OR_DB ->
+          m == Measure.EXTINCTION ? "'>= 1000' or '>= 30 dB'" : "'>= 90 %' or '>= -0.5 dB'";
       case IRRADIANCE -> "'<= 1 kW/cm2'";
       case FLUENCE -> "'<= 2 J/cm2'";
       case FIELD -> "'<= 1 MV/m'";

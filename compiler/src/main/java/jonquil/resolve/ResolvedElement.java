@@ -5,8 +5,11 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
 
-/** A declaration with its parameters checked: parameter name to its values (several if repeatable). */
-public record ResolvedElement(Symbol symbol, ElementKind kind, Map<String, List<Value.Group>> params) {
+/**
+ * A declaration with its parameters checked: parameter name to its values (several if repeatable).
+ */
+public record ResolvedElement(
+    Symbol symbol, ElementKind kind, Map<String, List<Value.Group>> params) {
   public ResolvedElement {
     params = Map.copyOf(params);
   }

@@ -7,9 +7,9 @@ import java.util.Optional;
 import jonquil.diag.Diagnostic;
 
 /**
- * The spec rooted at one file, with names, units and parameters checked: its elements,
- * trains and requirements, plus a side table of every name reference (for navigation).
- * The syntax trees are untouched; everything learned lives here.
+ * The spec rooted at one file, with names, units and parameters checked: its elements, trains and
+ * requirements, plus a side table of every name reference (for navigation). The syntax trees are
+ * untouched; everything learned lives here.
  */
 public record ResolvedModel(
     Path root,

@@ -7,8 +7,8 @@ import jonquil.source.TextRange;
 import jonquil.syntax.Requirement;
 
 /**
- * A requirement with its measure, places and bounds checked and converted to SI, ready
- * for an analysis to evaluate. {@code valid} is false when the line had errors.
+ * A requirement with its measure, places and bounds checked and converted to SI, ready for an
+ * analysis to evaluate. {@code valid} is false when the line had errors.
  */
 public record ResolvedRequirement(
     Path file,
@@ -31,11 +31,25 @@ public record ResolvedRequirement(
   public record Target(Symbol symbol, Optional<String> port, TextRange range) {}
 
   /** One bound on one measure; for 'is' conditions {@code state} holds the checked state. */
-  public record Criterion(Measure measure, Relation relation, double low, double high, boolean relativeToSource,
-      Optional<Value.Group> state, TextRange range) {}
+  public record Criterion(
+      Measure measure,
+      Relation relation,
+      double low,
+      double high,
+      boolean relativeToSource,
+      Optional<Value.Group> state,
+      TextRange range) {}
 
   /** How a computed value is compared with the bound. */
-  public enum Relation { AT_MOST, BELOW, AT_LEAST, ABOVE, EQUAL, WITHIN, IS }
+  public enum Relation {
+    AT_MOST,
+    BELOW,
+    AT_LEAST,
+    ABOVE,
+    EQUAL,
+    WITHIN,
+    IS
+  }
 
   /** 'over wavelength a .. b', in metres. */
   public record Band(double low, double high, TextRange range) {}

@@ -7,7 +7,8 @@ import java.util.OptionalDouble;
 import jonquil.source.TextRange;
 
 /** A train with names resolved: each path starts at a source or at a port of a placed element. */
-public record ResolvedTrain(Path file, Optional<String> name, List<BeamPath> paths, TextRange range) {
+public record ResolvedTrain(
+    Path file, Optional<String> name, List<BeamPath> paths, TextRange range) {
   public ResolvedTrain {
     paths = List.copyOf(paths);
   }
@@ -30,6 +31,10 @@ public record ResolvedTrain(Path file, Optional<String> name, List<BeamPath> pat
   /** The beam passes an element and leaves it by {@code exitPort}. */
   public record Element(Symbol symbol, String exitPort, TextRange range) implements Step {}
 
-  /** Free propagation over a length, in a medium (empty: the surrounding medium, air by default). */
-  public record Gap(double length, OptionalDouble tolerance, Optional<Symbol> medium, TextRange range) implements Step {}
+  /**
+   * Free propagation over a length, in a medium (empty: the surrounding medium, air by default).
+   */
+  public record Gap(
+      double length, OptionalDouble tolerance, Optional<Symbol> medium, TextRange range)
+      implements Step {}
 }

@@ -17,24 +17,37 @@ import jonquil.syntax.SpecFile;
 import jonquil.syntax.TrainDecl;
 
 /**
- * Resolution of a spec rooted at one file: a pure function of the parsed files and their
- * 'use' edges. Each file sees its own names and those of the files it uses directly.
+ * Resolution of a spec rooted at one file: a pure function of the parsed files and their 'use'
+ * edges. Each file sees its own names and those of the files it uses directly.
  */
 public final class Resolver {
   private Resolver() {}
 
-  /** The fix of a "did you mean": replace what was written by the close name, or no fix when there is none. */
-  static jonquil.diag.Fix replacement(Path file, TextRange range, String written, Optional<String> suggestion) {
-    return suggestion.map(s -> new jonquil.diag.Fix("change '" + written + "' to '" + s + "'",
-        List.of(new jonquil.diag.Edit(file, range, s)))).orElse(null);
+  /**
+   * The fix of a "did you mean": replace what was written by the close name, or no fix when there
+   * is none.
+   */
+  static jonquil.diag.Fix replacement(
+      Path file, TextRange range, String written, Optional<String> suggestion) {
+    return suggestion
+        .map(
+            s ->
+                new jonquil.diag.Fix(
+                    "change '" + written + "' to '" + s + "'",
+                    List.of(new jonquil.diag.Edit(file, range, s))))
+        .orElse(null);
   }
 
-  public static ResolvedModel resolve(Path root, Map<Path, SpecFile> files, Map<Path, List<UseEdge>> uses) {
+  public static ResolvedModel resolve(
+      Path root, Map<Path, SpecFile> files, Map<Path, List<UseEdge>> uses) {
     return resolve(root, files, uses, Map.of());
   }
 
   /** As above, with the text of the data files (n,k tables) the specs name, read by the loader. */
-  public static ResolvedModel resolve(Path root, Map<Path, SpecFile> files, Map<Path, List<UseEdge>> uses,
+  public static ResolvedModel resolve(
+      Path root,
+      Map<Path, SpecFile> files,
+      Map<Path, List<UseEdge>> uses,
       Map<Path, String> dataFiles) {
     Map<Path, Sink> sinks = new LinkedHashMap<>();
     files.keySet().forEach(p -> sinks.put(p, new Sink(p)));
@@ -47,31 +60,47 @@ public final class Resolver {
     }
 
     Map<Symbol, ResolvedElement> elements = new LinkedHashMap<>();
-    files.forEach((path, file) -> {
-      DeclarationChecker checker = new DeclarationChecker(sinks.get(path), scopes.get(path), file, dataFiles);
-      for (Declaration decl : file.declarations()) {
-        Symbol symbol = own.get(path).get(decl.name().text());
-        if (symbol == null || symbol.declaration().orElse(null) != decl || symbol.kind().isEmpty()) {
-          continue; // duplicate or unknown kind: already reported
-        }
-        elements.put(symbol, checker.check(symbol, symbol.kind().get(), decl));
-      }
-    });
+    files.forEach(
+        (path, file) -> {
+          DeclarationChecker checker =
+              new DeclarationChecker(sinks.get(path), scopes.get(path), file, dataFiles);
+          for (Declaration decl : file.declarations()) {
+            Symbol symbol = own.get(path).get(decl.name().text());
+            if (symbol == null
+                || symbol.declaration().orElse(null) != decl
+                || symbol.kind().isEmpty()) {
+              continue; // duplicate or unknown kind: already reported
+            }
+            elements.put(symbol, checker.check(symbol, symbol.kind().get(), decl));
+          }
+        });
 
-    uses.forEach((from, edges) -> edges.forEach(edge -> {
-      SpecFile lib = files.get(edge.target());
-      if (lib != null && !edge.target().equals(root)) {
-        Sink sink = sinks.get(edge.target());
-        for (TrainDecl t : lib.trains()) {
-          sink.report(DiagnosticCode.USED_FILE_HAS_TRAIN, t.range(), "this file is used as a part library by '"
-              + from.getFileName() + "', so it may only declare parts; move the train to the main spec");
-        }
-        for (RequireDecl r : lib.requires()) {
-          sink.report(DiagnosticCode.USED_FILE_HAS_TRAIN, r.range(), "this file is used as a part library by '"
-              + from.getFileName() + "', so it may only declare parts; move the requirements to the main spec");
-        }
-      }
-    }));
+    uses.forEach(
+        (from, edges) ->
+            edges.forEach(
+                edge -> {
+                  SpecFile lib = files.get(edge.target());
+                  if (lib != null && !edge.target().equals(root)) {
+                    Sink sink = sinks.get(edge.target());
+                    for (TrainDecl t : lib.trains()) {
+                      sink.report(
+                          DiagnosticCode.USED_FILE_HAS_TRAIN,
+                          t.range(),
+                          "this file is used as a part library by '"
+                              + from.getFileName()
+                              + "', so it may only declare parts; move the train to the main spec");
+                    }
+                    for (RequireDecl r : lib.requires()) {
+                      sink.report(
+                          DiagnosticCode.USED_FILE_HAS_TRAIN,
+                          r.range(),
+                          "this file is used as a part library by '"
+                              + from.getFileName()
+                              + "', so it may only declare parts; move the requirements to the main"
+                              + " spec");
+                    }
+                  }
+                }));
 
     List<ResolvedTrain> trains = List.of();
     List<ResolvedRequirement> requirements = new ArrayList<>();
@@ -80,7 +109,8 @@ public final class Resolver {
       Sink sink = sinks.get(root);
       TrainResolver trainResolver = new TrainResolver(sink, scopes.get(root), rootFile);
       trains = trainResolver.resolve(rootFile.trains());
-      RequirementResolver reqs = new RequirementResolver(sink, scopes.get(root), trainResolver.placedElements(), rootFile);
+      RequirementResolver reqs =
+          new RequirementResolver(sink, scopes.get(root), trainResolver.placedElements(), rootFile);
       for (RequireDecl block : rootFile.requires()) {
         block.requirements().forEach(r -> requirements.add(reqs.resolve(r)));
       }
@@ -102,19 +132,44 @@ public final class Resolver {
       Optional<ElementKind> kind = ElementKind.byWord(decl.kind().text());
       if (kind.isEmpty()) {
         Optional<String> close = Suggest.closest(decl.kind().text(), ElementKind.words());
-        sink.report(DiagnosticCode.UNKNOWN_KIND, decl.kind().range(), "unknown kind '" + decl.kind().text() + "'"
-            + close.map(k -> "; did you mean '" + k + "'?").orElse("; the kinds are " + String.join(", ", ElementKind.words())),
+        sink.report(
+            DiagnosticCode.UNKNOWN_KIND,
+            decl.kind().range(),
+            "unknown kind '"
+                + decl.kind().text()
+                + "'"
+                + close
+                    .map(k -> "; did you mean '" + k + "'?")
+                    .orElse("; the kinds are " + String.join(", ", ElementKind.words())),
             replacement(sink.file, decl.kind().range(), decl.kind().text(), close));
       }
       Category category = kind.map(ElementKind::category).orElse(Category.OPTIC);
-      Symbol symbol = new Symbol(decl.name().text(), category, kind, file.path(), Optional.of(decl.name()),
-          Optional.of(decl));
+      Symbol symbol =
+          new Symbol(
+              decl.name().text(),
+              category,
+              kind,
+              file.path(),
+              Optional.of(decl.name()),
+              Optional.of(decl));
       add(symbols, symbol, decl.name().range(), sink);
     }
     for (TrainDecl train : file.trains()) {
-      train.name().ifPresent(n -> add(symbols,
-          new Symbol(n.text(), Category.TRAIN, Optional.empty(), file.path(), Optional.of(n), Optional.empty()),
-          n.range(), sink));
+      train
+          .name()
+          .ifPresent(
+              n ->
+                  add(
+                      symbols,
+                      new Symbol(
+                          n.text(),
+                          Category.TRAIN,
+                          Optional.empty(),
+                          file.path(),
+                          Optional.of(n),
+                          Optional.empty()),
+                      n.range(),
+                      sink));
     }
     return symbols;
   }
@@ -122,13 +177,20 @@ public final class Resolver {
   private static void add(Map<String, Symbol> symbols, Symbol symbol, TextRange at, Sink sink) {
     Symbol earlier = symbols.putIfAbsent(symbol.name(), symbol);
     if (earlier != null) {
-      var d = sink.report(DiagnosticCode.DUPLICATE_NAME, at,
-          "'" + symbol.name() + "' is already declared in this file; names must be unique");
-      sink.replace(d, d.withRelated(new Related(sink.file, earlier.nameNode().get().range(), "first declared here")));
+      var d =
+          sink.report(
+              DiagnosticCode.DUPLICATE_NAME,
+              at,
+              "'" + symbol.name() + "' is already declared in this file; names must be unique");
+      sink.replace(
+          d,
+          d.withRelated(
+              new Related(sink.file, earlier.nameNode().get().range(), "first declared here")));
     }
   }
 
-  private static Scope scope(Path path, Map<Path, Map<String, Symbol>> own, List<UseEdge> edges, Sink sink) {
+  private static Scope scope(
+      Path path, Map<Path, Map<String, Symbol>> own, List<UseEdge> edges, Sink sink) {
     Map<String, Symbol> visible = new HashMap<>(own.getOrDefault(path, Map.of()));
     Map<String, UseEdge> via = new HashMap<>();
     for (UseEdge edge : edges) {
@@ -138,19 +200,40 @@ public final class Resolver {
         }
         Symbol mine = own.getOrDefault(path, Map.of()).get(s.name());
         if (mine != null) {
-          var d = sink.report(DiagnosticCode.DUPLICATE_NAME, mine.nameNode().get().range(),
-              "'" + s.name() + "' is also declared in '" + edge.decl().target() + "', which this file uses; rename one");
-          sink.replace(d, d.withRelated(new Related(s.file(), s.nameNode().get().range(), "also declared here")));
+          var d =
+              sink.report(
+                  DiagnosticCode.DUPLICATE_NAME,
+                  mine.nameNode().get().range(),
+                  "'"
+                      + s.name()
+                      + "' is also declared in '"
+                      + edge.decl().target()
+                      + "', which this file uses; rename one");
+          sink.replace(
+              d,
+              d.withRelated(
+                  new Related(s.file(), s.nameNode().get().range(), "also declared here")));
           continue;
         }
         Symbol other = visible.get(s.name());
         if (other != null && !other.equals(s)) {
           UseEdge first = via.get(s.name());
-          var d = sink.report(DiagnosticCode.DUPLICATE_NAME, edge.decl().range(),
-              "'" + s.name() + "' is declared both in '" + first.decl().target() + "' and in '" + edge.decl().target()
-                  + "'; rename one");
-          sink.replace(d, d.withRelated(new Related(other.file(), other.nameNode().get().range(), "declared here"))
-              .withRelated(new Related(s.file(), s.nameNode().get().range(), "and here")));
+          var d =
+              sink.report(
+                  DiagnosticCode.DUPLICATE_NAME,
+                  edge.decl().range(),
+                  "'"
+                      + s.name()
+                      + "' is declared both in '"
+                      + first.decl().target()
+                      + "' and in '"
+                      + edge.decl().target()
+                      + "'; rename one");
+          sink.replace(
+              d,
+              d.withRelated(
+                      new Related(other.file(), other.nameNode().get().range(), "declared here"))
+                  .withRelated(new Related(s.file(), s.nameNode().get().range(), "and here")));
           continue;
         }
         visible.put(s.name(), s);

@@ -15,12 +15,17 @@ public record Scope(Map<String, Symbol> symbols) {
     return Optional.ofNullable(symbols.get(name));
   }
 
-  /** Names of the given categories, plus catalog names when materials are wanted, for suggestions. */
+  /**
+   * Names of the given categories, plus catalog names when materials are wanted, for suggestions.
+   */
   public Collection<String> namesOf(List<Category> categories) {
     java.util.List<String> names = new java.util.ArrayList<>();
-    symbols.values().stream().filter(s -> categories.contains(s.category())).map(Symbol::name).forEach(names::add);
+    symbols.values().stream()
+        .filter(s -> categories.contains(s.category()))
+        .map(Symbol::name)
+        .forEach(names::add);
     if (categories.contains(Category.MATERIAL)) {
-      names.addAll(CatalogNames.spellings());
+      names.addAll(CatalogSpellings.spellings());
     }
     return names;
   }

@@ -4,14 +4,18 @@ import java.util.List;
 import jonquil.units.Dimension;
 
 /**
- * The expected form of a parameter's arguments, written as data so that each element
- * kind's table reads like documentation. Matching is structural (is there a quantity
- * here?); units, dimensions and ranges are then checked on the match, which gives
- * messages about the value ("'45 mm' is a length") rather than about the grammar.
+ * The expected form of a parameter's arguments, written as data so that each element kind's table
+ * reads like documentation. Matching is structural (is there a quantity here?); units, dimensions
+ * and ranges are then checked on the match, which gives messages about the value ("'45 mm' is a
+ * length") rather than about the grammar.
  */
 public sealed interface Shape {
-  /** A number with a unit of one of the given dimensions (a plain number if DIMENSIONLESS is listed). */
-  record Quantity(String slot, List<Dimension> dimensions, Bounds bounds, String example) implements Shape {}
+  /**
+   * A number with a unit of one of the given dimensions (a plain number if DIMENSIONLESS is
+   * listed).
+   */
+  record Quantity(String slot, List<Dimension> dimensions, Bounds bounds, String example)
+      implements Shape {}
 
   /** A fraction written as '95 %', '200 ppm' or a plain number from 0 to 1. */
   record Ratio(String slot, Bounds bounds) implements Shape {}
@@ -34,7 +38,9 @@ public sealed interface Shape {
   /** A fixed word that introduces what follows ('at', 'for'). */
   record Literal(String word) implements Shape {}
 
-  /** A name that must resolve to a declaration of one of the given categories (or a catalog entry). */
+  /**
+   * A name that must resolve to a declaration of one of the given categories (or a catalog entry).
+   */
   record Reference(String slot, List<Category> categories) implements Shape {}
 
   /** A quoted string. */

@@ -8,8 +8,8 @@ import jonquil.syntax.Arg;
 import jonquil.units.Dimension;
 
 /**
- * Structural matching of an argument list against a {@link Shape}, with backtracking
- * (argument lists are a handful of items) and the furthest failure kept for the message.
+ * Structural matching of an argument list against a {@link Shape}, with backtracking (argument
+ * lists are a handful of items) and the furthest failure kept for the message.
  */
 final class ShapeMatcher {
 
@@ -63,52 +63,52 @@ final class ShapeMatcher {
 
   private List<Partial> match(Shape shape, Partial p) {
     if (shape instanceof Shape.Seq seq) {
-        List<Partial> current = List.of(p);
-        for (Shape part : seq.parts()) {
-          List<Partial> next = new ArrayList<>();
-          for (Partial c : current) {
-            next.addAll(match(part, c));
-          }
-          current = next;
-          if (current.isEmpty()) {
-            break;
-          }
+      List<Partial> current = List.of(p);
+      for (Shape part : seq.parts()) {
+        List<Partial> next = new ArrayList<>();
+        for (Partial c : current) {
+          next.addAll(match(part, c));
         }
-        return current;
+        current = next;
+        if (current.isEmpty()) {
+          break;
+        }
+      }
+      return current;
     }
     if (shape instanceof Shape.Opt opt) {
-        List<Partial> out = new ArrayList<>(match(opt.part(), p));
-        out.add(p);
-        return out;
+      List<Partial> out = new ArrayList<>(match(opt.part(), p));
+      out.add(p);
+      return out;
     }
     if (shape instanceof Shape.OneOf one) {
-        List<Partial> out = new ArrayList<>();
-        int before = furthest;
-        for (Shape alt : one.alternatives()) {
-          out.addAll(match(alt, p));
-        }
-        if (out.isEmpty() && furthest == p.pos && before < p.pos) {
-          expected.clear();
-          expected.add(one.description());
-        }
-        return out;
+      List<Partial> out = new ArrayList<>();
+      int before = furthest;
+      for (Shape alt : one.alternatives()) {
+        out.addAll(match(alt, p));
+      }
+      if (out.isEmpty() && furthest == p.pos && before < p.pos) {
+        expected.clear();
+        expected.add(one.description());
+      }
+      return out;
     }
     if (shape instanceof Shape.ListOf list) {
-        List<Partial> out = new ArrayList<>();
-        List<Partial> frontier = match(list.item(), new Partial(p.pos, p.bindings, 0));
-        int item = 0;
-        while (!frontier.isEmpty()) {
-          out.addAll(frontier);
-          item++;
-          List<Partial> next = new ArrayList<>();
-          for (Partial f : frontier) {
-            if (f.pos < args.size() && args.get(f.pos) instanceof Arg.CommaArg) {
-              next.addAll(match(list.item(), new Partial(f.pos + 1, f.bindings, item)));
-            }
+      List<Partial> out = new ArrayList<>();
+      List<Partial> frontier = match(list.item(), new Partial(p.pos, p.bindings, 0));
+      int item = 0;
+      while (!frontier.isEmpty()) {
+        out.addAll(frontier);
+        item++;
+        List<Partial> next = new ArrayList<>();
+        for (Partial f : frontier) {
+          if (f.pos < args.size() && args.get(f.pos) instanceof Arg.CommaArg) {
+            next.addAll(match(list.item(), new Partial(f.pos + 1, f.bindings, item)));
           }
-          frontier = next;
         }
-        return out.stream().map(x -> new Partial(x.pos, x.bindings, -1)).toList();
+        frontier = next;
+      }
+      return out.stream().map(x -> new Partial(x.pos, x.bindings, -1)).toList();
     }
     if (shape instanceof Shape.Keyed keyed) {
       return matchKeyed(keyed, p, new boolean[keyed.clauses().size()]);
@@ -127,7 +127,8 @@ final class ShapeMatcher {
         if (after.pos < args.size() && args.get(after.pos) instanceof Arg.CommaArg) {
           boolean[] nowUsed = used.clone();
           nowUsed[i] = true;
-          out.addAll(matchKeyed(keyed, new Partial(after.pos + 1, after.bindings, after.item), nowUsed));
+          out.addAll(
+              matchKeyed(keyed, new Partial(after.pos + 1, after.bindings, after.item), nowUsed));
         }
       }
     }
@@ -141,16 +142,27 @@ final class ShapeMatcher {
     }
     Arg arg = args.get(p.pos);
     boolean fits;
-    if (shape instanceof Shape.Quantity || shape instanceof Shape.Ratio || shape instanceof Shape.PowerRatio
-        || shape instanceof Shape.Count || shape instanceof Shape.Density) {
+    if (shape instanceof Shape.Quantity
+        || shape instanceof Shape.Ratio
+        || shape instanceof Shape.PowerRatio
+        || shape instanceof Shape.Count
+        || shape instanceof Shape.Density) {
       fits = arg instanceof Arg.QuantityArg;
     } else if (shape instanceof Shape.Span) {
-      fits = arg instanceof Arg.RangeArg r && r.low() instanceof Arg.QuantityArg && r.high() instanceof Arg.QuantityArg;
+      fits =
+          arg instanceof Arg.RangeArg r
+              && r.low() instanceof Arg.QuantityArg
+              && r.high() instanceof Arg.QuantityArg;
     } else if (shape instanceof Shape.Word w) {
-      fits = arg instanceof Arg.RefArg ref && ref.port().isEmpty()
-          && (w.choices().isEmpty() || w.choices().contains(ref.name().text()));
+      fits =
+          arg instanceof Arg.RefArg ref
+              && ref.port().isEmpty()
+              && (w.choices().isEmpty() || w.choices().contains(ref.name().text()));
     } else if (shape instanceof Shape.Literal l) {
-      fits = arg instanceof Arg.RefArg ref && ref.port().isEmpty() && ref.name().text().equals(l.word());
+      fits =
+          arg instanceof Arg.RefArg ref
+              && ref.port().isEmpty()
+              && ref.name().text().equals(l.word());
     } else if (shape instanceof Shape.Reference) {
       fits = arg instanceof Arg.RefArg ref && ref.port().isEmpty();
     } else if (shape instanceof Shape.Text) {
@@ -186,7 +198,8 @@ final class ShapeMatcher {
     } else if (shape instanceof Shape.Literal l) {
       return "'" + l.word() + "'";
     } else if (shape instanceof Shape.Reference r) {
-      return "the name of " + String.join(" or ", r.categories().stream().map(Category::phrase).toList());
+      return "the name of "
+          + String.join(" or ", r.categories().stream().map(Category::phrase).toList());
     } else if (shape instanceof Shape.Text) {
       return "a quoted file name";
     } else if (shape instanceof Shape.Comma) {
@@ -223,6 +236,8 @@ final class ShapeMatcher {
     if (quoted.size() <= 1) {
       return quoted.isEmpty() ? "a word" : quoted.get(0);
     }
-    return String.join(", ", quoted.subList(0, quoted.size() - 1)) + " or " + quoted.get(quoted.size() - 1);
+    return String.join(", ", quoted.subList(0, quoted.size() - 1))
+        + " or "
+        + quoted.get(quoted.size() - 1);
   }
 }

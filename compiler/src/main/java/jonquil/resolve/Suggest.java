@@ -21,7 +21,9 @@ public final class Suggest {
       }
     }
     int allowed = Math.max(1, Math.min(3, w.length() / 3));
-    return best != null && bestDistance <= allowed && bestDistance > 0 ? Optional.of(best) : Optional.empty();
+    return best != null && bestDistance <= allowed && bestDistance > 0
+        ? Optional.of(best)
+        : Optional.empty();
   }
 
   /** "; did you mean 'x'?" or nothing. */
@@ -42,7 +44,10 @@ public final class Suggest {
       for (int j = 1; j <= b.length(); j++) {
         int cost = a.charAt(i - 1) == b.charAt(j - 1) ? 0 : 1;
         d[i][j] = Math.min(Math.min(d[i - 1][j] + 1, d[i][j - 1] + 1), d[i - 1][j - 1] + cost);
-        if (i > 1 && j > 1 && a.charAt(i - 1) == b.charAt(j - 2) && a.charAt(i - 2) == b.charAt(j - 1)) {
+        if (i > 1
+            && j > 1
+            && a.charAt(i - 1) == b.charAt(j - 2)
+            && a.charAt(i - 2) == b.charAt(j - 1)) {
           d[i][j] = Math.min(d[i][j], d[i - 2][j - 2] + 1);
         }
       }

@@ -14,9 +14,9 @@ import jonquil.units.UnitParse;
 import jonquil.units.UnitParser;
 
 /**
- * Reads an n,k table file: one row per line, {@code <wavelength> <unit> <n> [<k>]}, e.g.
- * {@code 532 nm 1.5195 0}; '#' or '//' starts a comment. Rows must rise in wavelength.
- * Every bad row is a diagnostic at its line in the table file.
+ * Reads an n,k table file: one row per line, {@code <wavelength> <unit> <n> [<k>]}, e.g. {@code 532
+ * nm 1.5195 0}; '#' or '//' starts a comment. Rows must rise in wavelength. Every bad row is a
+ * diagnostic at its line in the table file.
  */
 public final class TableReader {
   private TableReader() {}
@@ -35,7 +35,10 @@ public final class TableReader {
       if (data.isEmpty()) {
         continue;
       }
-      TextRange range = new TextRange(start + content.indexOf(data.charAt(0)), start + content.indexOf(data.charAt(0)) + data.length());
+      TextRange range =
+          new TextRange(
+              start + content.indexOf(data.charAt(0)),
+              start + content.indexOf(data.charAt(0)) + data.length());
       String problem = null;
       double[] row = null;
       String[] f = data.split("[\\s,;]+");
@@ -49,7 +52,8 @@ public final class TableReader {
           } else {
             Unit u = ((UnitParse.Ok) unit).unit();
             if (!u.dimension().equals(Dimension.LENGTH)) {
-              problem = "the wavelength needs a length unit such as 'nm'; '" + f[1] + "' is not one";
+              problem =
+                  "the wavelength needs a length unit such as 'nm'; '" + f[1] + "' is not one";
             } else {
               double wl = u.toSi(Double.parseDouble(f[0]));
               double n = Double.parseDouble(f[2]);
@@ -57,7 +61,12 @@ public final class TableReader {
               if (!(wl > 0) || !(n > 0) || !(k >= 0)) {
                 problem = "the wavelength and n must be positive and k zero or more";
               } else if (!KindTables.WAVELENGTH.contains(wl)) {
-                problem = "'" + f[0] + " " + f[1] + "' is outside the wavelengths Jonquil models (150 nm to 20 µm)";
+                problem =
+                    "'"
+                        + f[0]
+                        + " "
+                        + f[1]
+                        + "' is outside the wavelengths Jonquil models (150 nm to 20 µm)";
               } else if (!rows.isEmpty() && wl <= rows.get(rows.size() - 1)[0]) {
                 problem = "rows must rise in wavelength; this one does not";
               } else {
@@ -79,8 +88,12 @@ public final class TableReader {
       }
     }
     if (errors == 0 && rows.size() < 2) {
-      out.add(Diagnostic.of(DiagnosticCode.BAD_TABLE_ROW, file, TextRange.EMPTY,
-          "an n,k table needs at least two rows to interpolate between"));
+      out.add(
+          Diagnostic.of(
+              DiagnosticCode.BAD_TABLE_ROW,
+              file,
+              TextRange.EMPTY,
+              "an n,k table needs at least two rows to interpolate between"));
       errors++;
     }
     return errors == 0 ? Optional.of(rows) : Optional.empty();

@@ -17,23 +17,27 @@ import jonquil.syntax.TrainDecl;
 import jonquil.units.Dimension;
 
 /**
- * Resolves the beam paths of a file's trains into a graph and checks that it is well
- * formed: paths start at a source or a port, every element sits in one place, ports
- * exist and are followed at most once, and paths end where the beam is stopped.
+ * Resolves the beam paths of a file's trains into a graph and checks that it is well formed: paths
+ * start at a source or a port, every element sits in one place, ports exist and are followed at
+ * most once, and paths end where the beam is stopped.
  */
 final class TrainResolver {
   private final Sink sink;
   private final Scope scope;
   private final ElementRefs refs;
   private final ValueChecker values;
+
   /** Where each element is placed: the step that placed it. */
   private final Map<Symbol, ResolvedTrain.Element> placed = new LinkedHashMap<>();
+
   /** Output ports already followed, with where. */
   private final Map<String, TextRange> followedPorts = new HashMap<>();
+
   private final List<Pending> branches = new ArrayList<>();
 
   /** Elements named with a wrong port somewhere: whether their ports are followed is unknowable. */
   private final Set<Symbol> badPorts = new HashSet<>();
+
   private final jonquil.syntax.SpecFile file;
 
   private record Pending(ResolvedTrain.PortRef port) {}
@@ -50,8 +54,12 @@ final class TrainResolver {
     List<ResolvedTrain> out = new ArrayList<>();
     for (TrainDecl train : trains) {
       if (train.paths().isEmpty()) {
-        sink.report(DiagnosticCode.EMPTY_TRAIN, train.range(),
-            "train" + train.name().map(n -> " '" + n.text() + "'").orElse("") + " has no beam paths");
+        sink.report(
+            DiagnosticCode.EMPTY_TRAIN,
+            train.range(),
+            "train"
+                + train.name().map(n -> " '" + n.text() + "'").orElse("")
+                + " has no beam paths");
       }
       List<ResolvedTrain.BeamPath> paths = new ArrayList<>();
       for (TrainDecl.BeamPath path : train.paths()) {
@@ -81,14 +89,20 @@ final class TrainResolver {
       boolean last = i == written.size() - 1;
       if (step instanceof TrainDecl.Distance d) {
         if (first) {
-          sink.report(DiagnosticCode.PATH_START_NOT_SOURCE, d.range(),
-              "a beam path cannot start with a distance: start it at a source, or at a port such as 'bs1.reflected'");
+          sink.report(
+              DiagnosticCode.PATH_START_NOT_SOURCE,
+              d.range(),
+              "a beam path cannot start with a distance: start it at a source, or at a port such as"
+                  + " 'bs1.reflected'");
           return Optional.empty();
         }
         gap(d).ifPresent(steps::add);
         if (last && !damaged) {
-          sink.report(DiagnosticCode.PATH_ENDS_WITH_DISTANCE, d.range(),
-              "the path ends in empty space after this distance: end it at a dump, a detector or a probe");
+          sink.report(
+              DiagnosticCode.PATH_ENDS_WITH_DISTANCE,
+              d.range(),
+              "the path ends in empty space after this distance: end it at a dump, a detector or a"
+                  + " probe");
         }
         continue;
       }
@@ -106,34 +120,60 @@ final class TrainResolver {
         continue;
       }
       if (first && kind.category() != Category.SOURCE) {
-        sink.report(DiagnosticCode.PATH_START_NOT_SOURCE, ref.range(),
-            "a beam path starts at a source, or at an output port such as 'bs1.reflected'; '" + s.name()
-                + "' is " + s.kindPhrase());
+        sink.report(
+            DiagnosticCode.PATH_START_NOT_SOURCE,
+            ref.range(),
+            "a beam path starts at a source, or at an output port such as 'bs1.reflected'; '"
+                + s.name()
+                + "' is "
+                + s.kindPhrase());
         return Optional.empty();
       }
       if (!first && kind.category() == Category.SOURCE) {
-        sink.report(DiagnosticCode.SOURCE_INSIDE_PATH, ref.range(),
+        sink.report(
+            DiagnosticCode.SOURCE_INSIDE_PATH,
+            ref.range(),
             "source '" + s.name() + "' can only start a path; a beam cannot pass through it");
         continue;
       }
       if (!inThisPath.add(s)) {
-        sink.report(DiagnosticCode.ELEMENT_TWICE_IN_PATH, ref.range(),
-            "'" + s.name() + "' appears twice in this path; for a second pass, declare a second element");
+        sink.report(
+            DiagnosticCode.ELEMENT_TWICE_IN_PATH,
+            ref.range(),
+            "'"
+                + s.name()
+                + "' appears twice in this path; for a second pass, declare a second element");
         continue;
       }
       ResolvedTrain.Element already = placed.get(s);
       if (already != null) {
-        var diag = sink.report(DiagnosticCode.ELEMENT_PLACED_TWICE, ref.range(),
-            "'" + s.name() + "' is already placed in another path; "
-                + (kind.ports().size() > 1
-                    ? "to continue from it, start a path at one of its ports, such as '" + s.name() + "." + kind.ports().get(1) + "'"
-                    : "an element sits in one place; for a second pass, declare a second element"));
-        sink.replace(diag, diag.withRelated(new Related(sink.file, already.range(), "placed here")));
+        var diag =
+            sink.report(
+                DiagnosticCode.ELEMENT_PLACED_TWICE,
+                ref.range(),
+                "'"
+                    + s.name()
+                    + "' is already placed in another path; "
+                    + (kind.ports().size() > 1
+                        ? "to continue from it, start a path at one of its ports, such as '"
+                            + s.name()
+                            + "."
+                            + kind.ports().get(1)
+                            + "'"
+                        : "an element sits in one place; for a second pass, declare a second"
+                            + " element"));
+        sink.replace(
+            diag, diag.withRelated(new Related(sink.file, already.range(), "placed here")));
         continue;
       }
       if (kind.category() == Category.TERMINAL && !last) {
-        sink.report(DiagnosticCode.TERMINAL_INSIDE_PATH, ref.range(),
-            kind.word() + " '" + s.name() + "' stops the beam, so nothing can follow it in the path");
+        sink.report(
+            DiagnosticCode.TERMINAL_INSIDE_PATH,
+            ref.range(),
+            kind.word()
+                + " '"
+                + s.name()
+                + "' stops the beam, so nothing can follow it in the path");
       }
       String exit;
       if (ref.port().isPresent()) {
@@ -151,9 +191,16 @@ final class TrainResolver {
         followedPorts.put(s.name() + "." + exit, ref.range());
       }
       steps.add(element);
-      if (last && !damaged && kind.category() != Category.TERMINAL && kind.category() != Category.PROBE) {
-        sink.report(DiagnosticCode.UNTERMINATED_BRANCH, ref.range(),
-            "the beam leaving " + s.describe() + " goes nowhere: end the path at a dump, a detector or a probe"
+      if (last
+          && !damaged
+          && kind.category() != Category.TERMINAL
+          && kind.category() != Category.PROBE) {
+        sink.report(
+            DiagnosticCode.UNTERMINATED_BRANCH,
+            ref.range(),
+            "the beam leaving "
+                + s.describe()
+                + " goes nowhere: end the path at a dump, a detector or a probe"
                 + " (until then its light counts as stray)");
       }
     }
@@ -161,11 +208,13 @@ final class TrainResolver {
   }
 
   private Optional<ResolvedTrain.Step> gap(TrainDecl.Distance d) {
-    Optional<Value.Num> length = values.quantity(d.length(), List.of(Dimension.LENGTH), Bounds.POSITIVE, "150 mm",
-        "distance");
+    Optional<Value.Num> length =
+        values.quantity(
+            d.length(), List.of(Dimension.LENGTH), Bounds.POSITIVE, "150 mm", "distance");
     Optional<Symbol> medium = Optional.empty();
     if (d.medium().isPresent()) {
-      Optional<Value.Ref> ref = values.reference(d.medium().get(), List.of(Category.MATERIAL), "distance");
+      Optional<Value.Ref> ref =
+          values.reference(d.medium().get(), List.of(Category.MATERIAL), "distance");
       if (ref.isEmpty()) {
         return Optional.empty();
       }
@@ -186,15 +235,26 @@ final class TrainResolver {
     }
     Symbol s = found.get();
     if (!s.category().placeable() || s.kind().isEmpty()) {
-      sink.report(DiagnosticCode.NOT_PLACEABLE, ref.name().range(),
-          "'" + name + "' is " + s.kindPhrase() + ", which cannot stand in a beam path"
-              + (s.category() == Category.MATERIAL ? "; to run a distance in it, write '10 mm in " + name + "'" : ""));
+      sink.report(
+          DiagnosticCode.NOT_PLACEABLE,
+          ref.name().range(),
+          "'"
+              + name
+              + "' is "
+              + s.kindPhrase()
+              + ", which cannot stand in a beam path"
+              + (s.category() == Category.MATERIAL
+                  ? "; to run a distance in it, write '10 mm in " + name + "'"
+                  : ""));
       return Optional.empty();
     }
     return found;
   }
 
-  /** The port written after the name, checked; an element named with a bad port is remembered, so its path is not followed. */
+  /**
+   * The port written after the name, checked; an element named with a bad port is remembered, so
+   * its path is not followed.
+   */
   private Optional<String> portOf(Arg.RefArg ref, ElementKind kind) {
     Optional<String> port = refs.port(ref, kind);
     if (ref.port().isPresent() && port.isEmpty()) {
@@ -207,16 +267,26 @@ final class TrainResolver {
     for (Pending p : branches) {
       ResolvedTrain.PortRef port = p.port();
       if (!placed.containsKey(port.element())) {
-        sink.report(DiagnosticCode.BRANCH_FROM_UNPLACED, port.range(),
-            "this path branches from '" + port.element().name() + "', but no path places '" + port.element().name()
+        sink.report(
+            DiagnosticCode.BRANCH_FROM_UNPLACED,
+            port.range(),
+            "this path branches from '"
+                + port.element().name()
+                + "', but no path places '"
+                + port.element().name()
                 + "' in the beam");
         continue;
       }
       String key = port.element().name() + "." + port.port();
       TextRange earlier = followedPorts.putIfAbsent(key, port.range());
       if (earlier != null) {
-        var d = sink.report(DiagnosticCode.PORT_USED_TWICE, port.range(),
-            "port '" + key + "' is already followed by another path; each output port feeds one path");
+        var d =
+            sink.report(
+                DiagnosticCode.PORT_USED_TWICE,
+                port.range(),
+                "port '"
+                    + key
+                    + "' is already followed by another path; each output port feeds one path");
         sink.replace(d, d.withRelated(new Related(sink.file, earlier, "already followed here")));
       }
     }
@@ -231,8 +301,13 @@ final class TrainResolver {
       for (String port : kind.primaryPorts()) {
         String key = e.symbol().name() + "." + port;
         if (!followedPorts.containsKey(key)) {
-          sink.report(DiagnosticCode.PORT_NOT_FOLLOWED, e.range(),
-              "light leaving '" + key + "' is not followed by any path; add one such as '" + key
+          sink.report(
+              DiagnosticCode.PORT_NOT_FOLLOWED,
+              e.range(),
+              "light leaving '"
+                  + key
+                  + "' is not followed by any path; add one such as '"
+                  + key
                   + " -> 50 mm -> dump1' (until then it counts as stray)");
         }
       }

@@ -11,7 +11,8 @@ public sealed interface Value {
   TextRange range();
 
   /** A quantity in SI units; the tolerance is a ± half-width in the same units. */
-  record Num(double si, Dimension dimension, OptionalDouble tolerance, TextRange range) implements Value {}
+  record Num(double si, Dimension dimension, OptionalDouble tolerance, TextRange range)
+      implements Value {}
 
   /** A word from a fixed list. */
   record Word(String text, TextRange range) implements Value {}
@@ -22,7 +23,10 @@ public sealed interface Value {
   /** A quoted string. */
   record Text(String text, TextRange range) implements Value {}
 
-  /** Tabulated optical constants read from a data file: wavelength (m), n and k, ascending in wavelength. */
+  /**
+   * Tabulated optical constants read from a data file: wavelength (m), n and k, ascending in
+   * wavelength.
+   */
   record Table(java.util.List<double[]> rows, TextRange range) implements Value {
     public Table {
       rows = java.util.List.copyOf(rows);
@@ -48,7 +52,9 @@ public sealed interface Value {
     }
 
     public java.util.Optional<String> word(String name) {
-      return slots.get(name) instanceof Word w ? java.util.Optional.of(w.text()) : java.util.Optional.empty();
+      return slots.get(name) instanceof Word w
+          ? java.util.Optional.of(w.text())
+          : java.util.Optional.empty();
     }
   }
 }

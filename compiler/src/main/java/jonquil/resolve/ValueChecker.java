@@ -18,9 +18,9 @@ import jonquil.units.UnitParse;
 import jonquil.units.UnitParser;
 
 /**
- * Turns matched arguments into checked SI values: units parsed and dimension-checked,
- * physical ranges enforced, names resolved. Every problem becomes a diagnostic at the
- * literal that caused it; the value is then left out and checking goes on.
+ * Turns matched arguments into checked SI values: units parsed and dimension-checked, physical
+ * ranges enforced, names resolved. Every problem becomes a diagnostic at the literal that caused
+ * it; the value is then left out and checking goes on.
  */
 final class ValueChecker {
   private final Sink sink;
@@ -31,7 +31,10 @@ final class ValueChecker {
     this.scope = scope;
   }
 
-  /** Match {@code args} against {@code shape} and check every bound value; empty if the form is wrong. */
+  /**
+   * Match {@code args} against {@code shape} and check every bound value; empty if the form is
+   * wrong.
+   */
   Optional<Value.Group> check(Shape shape, List<Arg> args, String what, TextRange whole) {
     ShapeMatcher.Outcome outcome = ShapeMatcher.match(shape, args);
     if (!outcome.matched()) {
@@ -62,19 +65,22 @@ final class ValueChecker {
         slots.put(slot, v.get());
       }
     }
-    List<Value.Group> itemGroups = items.values().stream()
-        .map(m -> new Value.Group(m, List.of(), whole)).toList();
+    List<Value.Group> itemGroups =
+        items.values().stream().map(m -> new Value.Group(m, List.of(), whole)).toList();
     return Optional.of(new Value.Group(slots, itemGroups, whole));
   }
 
-  private void reportMismatch(ShapeMatcher.Outcome outcome, List<Arg> args, String what, TextRange whole) {
+  private void reportMismatch(
+      ShapeMatcher.Outcome outcome, List<Arg> args, String what, TextRange whole) {
     String expected = ShapeMatcher.quoteFree(outcome.expected());
     if (outcome.failedArg() == null) {
       if (args.isEmpty()) {
         sink.report(DiagnosticCode.MISSING_ARGUMENT, whole, "'" + what + "' needs " + expected);
       } else {
         Arg last = args.get(args.size() - 1);
-        sink.report(DiagnosticCode.MISSING_ARGUMENT, last.range(),
+        sink.report(
+            DiagnosticCode.MISSING_ARGUMENT,
+            last.range(),
             "'" + what + "' is incomplete: expected " + expected + " after " + describeArg(last));
       }
       return;
@@ -82,16 +88,23 @@ final class ValueChecker {
     Arg bad = outcome.failedArg();
     String hint = "";
     if (bad instanceof Arg.RefArg ref) {
-      List<String> words = outcome.expected().stream()
-          .flatMap(e -> java.util.Arrays.stream(e.split("'")).filter(x -> x.matches("[a-z_0-9]+"))).toList();
+      List<String> words =
+          outcome.expected().stream()
+              .flatMap(
+                  e -> java.util.Arrays.stream(e.split("'")).filter(x -> x.matches("[a-z_0-9]+")))
+              .toList();
       hint = Suggest.hint(ref.name().text(), words);
     }
     String found = describeArg(bad);
     if (expected.equals("nothing more")) {
-      sink.report(DiagnosticCode.BAD_ARGUMENT, TextRange.span(bad.range(), args.get(args.size() - 1).range()),
+      sink.report(
+          DiagnosticCode.BAD_ARGUMENT,
+          TextRange.span(bad.range(), args.get(args.size() - 1).range()),
           "unexpected " + found + ": '" + what + "' takes no more values here");
     } else {
-      sink.report(DiagnosticCode.BAD_ARGUMENT, bad.range(),
+      sink.report(
+          DiagnosticCode.BAD_ARGUMENT,
+          bad.range(),
           "expected " + expected + " in '" + what + "', found " + found + hint);
     }
   }
@@ -137,7 +150,8 @@ final class ValueChecker {
 
   private Optional<Value> value(Shape leaf, Arg arg, String what) {
     if (leaf instanceof Shape.Quantity q) {
-      return quantity((Arg.QuantityArg) arg, q.dimensions(), q.bounds(), q.example(), what).map(v -> v);
+      return quantity((Arg.QuantityArg) arg, q.dimensions(), q.bounds(), q.example(), what)
+          .map(v -> v);
     } else if (leaf instanceof Shape.Ratio r) {
       return ratio((Arg.QuantityArg) arg, r.bounds(), what).map(v -> v);
     } else if (leaf instanceof Shape.PowerRatio r) {
@@ -161,23 +175,37 @@ final class ValueChecker {
   }
 
   private Optional<Value> span(Arg.RangeArg arg, Shape.Span s, String what) {
-    Optional<Value.Num> low = quantity((Arg.QuantityArg) arg.low(), s.low().dimensions(), s.low().bounds(),
-        s.low().example(), what);
-    Optional<Value.Num> high = quantity((Arg.QuantityArg) arg.high(), s.high().dimensions(), s.high().bounds(),
-        s.high().example(), what);
+    Optional<Value.Num> low =
+        quantity(
+            (Arg.QuantityArg) arg.low(),
+            s.low().dimensions(),
+            s.low().bounds(),
+            s.low().example(),
+            what);
+    Optional<Value.Num> high =
+        quantity(
+            (Arg.QuantityArg) arg.high(),
+            s.high().dimensions(),
+            s.high().bounds(),
+            s.high().example(),
+            what);
     if (low.isEmpty() || high.isEmpty()) {
       return Optional.empty();
     }
     if (low.get().si() > high.get().si()) {
-      sink.report(DiagnosticCode.INVERTED_RANGE, arg.range(),
+      sink.report(
+          DiagnosticCode.INVERTED_RANGE,
+          arg.range(),
           "the range in '" + what + "' runs backwards: its low end is above its high end");
       return Optional.empty();
     }
-    return Optional.of(new Value.Group(Map.of("low", low.get(), "high", high.get()), List.of(), arg.range()));
+    return Optional.of(
+        new Value.Group(Map.of("low", low.get(), "high", high.get()), List.of(), arg.range()));
   }
 
   /** A dimensioned quantity, converted to SI and checked against its bounds. */
-  Optional<Value.Num> quantity(Arg.QuantityArg a, List<Dimension> dims, Bounds bounds, String example, String what) {
+  Optional<Value.Num> quantity(
+      Arg.QuantityArg a, List<Dimension> dims, Bounds bounds, String example, String what) {
     Optional<Unit> unit = unitOf(a);
     if (unit == null) {
       return Optional.empty();
@@ -186,9 +214,19 @@ final class ValueChecker {
     Dimension dim;
     if (unit.isEmpty()) {
       if (!dims.contains(Dimension.DIMENSIONLESS)) {
-        sink.report(DiagnosticCode.MISSING_UNIT, a.range(),
-            "'" + a.number().text() + "' needs a unit: '" + what + "' is " + ShapeMatcher.describeDimensions(dims)
-                + ", e.g. '" + example + "'", exampleUnitFix(a, example));
+        sink.report(
+            DiagnosticCode.MISSING_UNIT,
+            a.range(),
+            "'"
+                + a.number().text()
+                + "' needs a unit: '"
+                + what
+                + "' is "
+                + ShapeMatcher.describeDimensions(dims)
+                + ", e.g. '"
+                + example
+                + "'",
+            exampleUnitFix(a, example));
         return Optional.empty();
       }
       si = a.number().value();
@@ -196,9 +234,20 @@ final class ValueChecker {
     } else {
       Unit u = unit.get();
       if (!dims.contains(u.dimension())) {
-        sink.report(DiagnosticCode.WRONG_DIMENSION, a.unit().get().range(),
-            "'" + a.unit().get().text() + "' is a unit of " + u.dimension().describe() + ", but '" + what + "' is "
-                + ShapeMatcher.describeDimensions(dims) + ", e.g. '" + example + "'");
+        sink.report(
+            DiagnosticCode.WRONG_DIMENSION,
+            a.unit().get().range(),
+            "'"
+                + a.unit().get().text()
+                + "' is a unit of "
+                + u.dimension().describe()
+                + ", but '"
+                + what
+                + "' is "
+                + ShapeMatcher.describeDimensions(dims)
+                + ", e.g. '"
+                + example
+                + "'");
         return Optional.empty();
       }
       si = u.toSi(a.number().value());
@@ -206,19 +255,30 @@ final class ValueChecker {
     }
     if (!bounds.contains(si)) {
       if (bounds.equals(KindTables.WAVELENGTH)) {
-        sink.report(DiagnosticCode.UNSUPPORTED_WAVELENGTH, a.range(), "Jonquil models wavelengths from "
-            + QuantityFormat.format(bounds.min(), dim) + " to " + QuantityFormat.format(bounds.max(), dim) + "; '"
-            + written(a) + "' is outside that range");
+        sink.report(
+            DiagnosticCode.UNSUPPORTED_WAVELENGTH,
+            a.range(),
+            "Jonquil models wavelengths from "
+                + QuantityFormat.format(bounds.min(), dim)
+                + " to "
+                + QuantityFormat.format(bounds.max(), dim)
+                + "; '"
+                + written(a)
+                + "' is outside that range");
       } else {
-        sink.report(DiagnosticCode.OUT_OF_RANGE, a.range(),
+        sink.report(
+            DiagnosticCode.OUT_OF_RANGE,
+            a.range(),
             "'" + what + "' must be " + describe(bounds, dim) + "; got '" + written(a) + "'");
       }
       return Optional.empty();
     }
-    return Optional.of(new Value.Num(si, dim, tolerance(a, unit.orElse(null), si, dim, what), a.range()));
+    return Optional.of(
+        new Value.Num(si, dim, tolerance(a, unit.orElse(null), si, dim, what), a.range()));
   }
 
-  private OptionalDouble tolerance(Arg.QuantityArg a, Unit valueUnit, double si, Dimension dim, String what) {
+  private OptionalDouble tolerance(
+      Arg.QuantityArg a, Unit valueUnit, double si, Dimension dim, String what) {
     if (a.tolerance().isEmpty()) {
       return OptionalDouble.empty();
     }
@@ -236,16 +296,26 @@ final class ValueChecker {
       if (u.symbol().equals("%") && !dim.isDimensionless()) {
         halfWidth = Math.abs(si) * t.number().value() / 100;
       } else if (!u.dimension().equals(dim) || u.scale() != Scale.LINEAR) {
-        sink.report(DiagnosticCode.TOLERANCE_MISMATCH, t.unit().get().range(),
-            "the tolerance of '" + what + "' is in '" + t.unit().get().text() + "', which does not fit a value of "
-                + dim.describe() + "; use the value's unit or '%'");
+        sink.report(
+            DiagnosticCode.TOLERANCE_MISMATCH,
+            t.unit().get().range(),
+            "the tolerance of '"
+                + what
+                + "' is in '"
+                + t.unit().get().text()
+                + "', which does not fit a value of "
+                + dim.describe()
+                + "; use the value's unit or '%'");
         return OptionalDouble.empty();
       } else {
         halfWidth = Math.abs(t.number().value()) * u.factor();
       }
     }
     if (t.number().value() < 0) {
-      sink.report(DiagnosticCode.OUT_OF_RANGE, t.range(), "a tolerance is a ± half-width and cannot be negative");
+      sink.report(
+          DiagnosticCode.OUT_OF_RANGE,
+          t.range(),
+          "a tolerance is a ± half-width and cannot be negative");
       return OptionalDouble.empty();
     }
     return OptionalDouble.of(halfWidth);
@@ -261,25 +331,39 @@ final class ValueChecker {
     if (unit.isPresent()) {
       Unit u = unit.get();
       if (!u.dimension().isDimensionless() || u.scale() != Scale.LINEAR) {
-        sink.report(DiagnosticCode.WRONG_DIMENSION, a.unit().get().range(),
-            "'" + what + "' is a fraction, written like '95 %'; '" + a.unit().get().text() + "' does not fit");
+        sink.report(
+            DiagnosticCode.WRONG_DIMENSION,
+            a.unit().get().range(),
+            "'"
+                + what
+                + "' is a fraction, written like '95 %'; '"
+                + a.unit().get().text()
+                + "' does not fit");
         return Optional.empty();
       }
       si = u.toSi(si);
     } else if (!bounds.contains(si) && bounds.contains(si / 100)) {
       TextRange at = new TextRange(a.number().range().end(), a.number().range().end());
-      sink.report(DiagnosticCode.OUT_OF_RANGE, a.range(),
+      sink.report(
+          DiagnosticCode.OUT_OF_RANGE,
+          a.range(),
           "'" + what + "' is a fraction from 0 to 1; did you mean '" + a.number().text() + " %'?",
           new Fix("write '" + a.number().text() + " %'", List.of(new Edit(sink.file, at, " %"))));
       return Optional.empty();
     }
     if (!bounds.contains(si)) {
-      String allowed = Double.isFinite(bounds.max())
-          ? "between " + percent(bounds.min()) + " and " + percent(bounds.max()) : "zero or more";
-      sink.report(DiagnosticCode.OUT_OF_RANGE, a.range(), "'" + what + "' must be " + allowed + "; got '" + written(a) + "'");
+      String allowed =
+          Double.isFinite(bounds.max())
+              ? "between " + percent(bounds.min()) + " and " + percent(bounds.max())
+              : "zero or more";
+      sink.report(
+          DiagnosticCode.OUT_OF_RANGE,
+          a.range(),
+          "'" + what + "' must be " + allowed + "; got '" + written(a) + "'");
       return Optional.empty();
     }
-    return Optional.of(new Value.Num(si, Dimension.DIMENSIONLESS, OptionalDouble.empty(), a.range()));
+    return Optional.of(
+        new Value.Num(si, Dimension.DIMENSIONLESS, OptionalDouble.empty(), a.range()));
   }
 
   /** A power ratio: plain (1000) or in dB (30 dB). */
@@ -292,51 +376,90 @@ final class ValueChecker {
     if (unit.isPresent()) {
       Unit u = unit.get();
       if (u.scale() != Scale.DECIBEL) {
-        sink.report(DiagnosticCode.WRONG_DIMENSION, a.unit().get().range(),
-            "'" + what + "' is a ratio, written as a plain number ('1000') or in decibels ('30 dB'); '"
-                + a.unit().get().text() + "' does not fit");
+        sink.report(
+            DiagnosticCode.WRONG_DIMENSION,
+            a.unit().get().range(),
+            "'"
+                + what
+                + "' is a ratio, written as a plain number ('1000') or in decibels ('30 dB'); '"
+                + a.unit().get().text()
+                + "' does not fit");
         return Optional.empty();
       }
       si = u.toSi(si);
     }
     if (!bounds.contains(si)) {
-      sink.report(DiagnosticCode.OUT_OF_RANGE, a.range(),
-          "'" + what + "' must be " + describe(bounds, Dimension.DIMENSIONLESS) + "; got '" + written(a) + "'");
+      sink.report(
+          DiagnosticCode.OUT_OF_RANGE,
+          a.range(),
+          "'"
+              + what
+              + "' must be "
+              + describe(bounds, Dimension.DIMENSIONLESS)
+              + "; got '"
+              + written(a)
+              + "'");
       return Optional.empty();
     }
-    return Optional.of(new Value.Num(si, Dimension.DIMENSIONLESS, OptionalDouble.empty(), a.range()));
+    return Optional.of(
+        new Value.Num(si, Dimension.DIMENSIONLESS, OptionalDouble.empty(), a.range()));
   }
 
   private Optional<Value.Num> count(Arg.QuantityArg a, Shape.Count c, String what) {
     if (a.unit().isPresent()) {
-      sink.report(DiagnosticCode.UNEXPECTED_UNIT, a.unit().get().range(),
+      sink.report(
+          DiagnosticCode.UNEXPECTED_UNIT,
+          a.unit().get().range(),
           "'" + what + "' is a plain number; remove the unit '" + a.unit().get().text() + "'");
       return Optional.empty();
     }
     double v = a.number().value();
     if (c.integer() && v != Math.rint(v)) {
-      sink.report(DiagnosticCode.OUT_OF_RANGE, a.range(), "'" + what + "' must be a whole number; got '" + written(a) + "'");
+      sink.report(
+          DiagnosticCode.OUT_OF_RANGE,
+          a.range(),
+          "'" + what + "' must be a whole number; got '" + written(a) + "'");
       return Optional.empty();
     }
     if (!c.bounds().contains(v)) {
-      sink.report(DiagnosticCode.OUT_OF_RANGE, a.range(),
-          "'" + what + "' must be " + describe(c.bounds(), Dimension.DIMENSIONLESS) + "; got '" + written(a) + "'");
+      sink.report(
+          DiagnosticCode.OUT_OF_RANGE,
+          a.range(),
+          "'"
+              + what
+              + "' must be "
+              + describe(c.bounds(), Dimension.DIMENSIONLESS)
+              + "; got '"
+              + written(a)
+              + "'");
       return Optional.empty();
     }
-    return Optional.of(new Value.Num(v, Dimension.DIMENSIONLESS, OptionalDouble.empty(), a.range()));
+    return Optional.of(
+        new Value.Num(v, Dimension.DIMENSIONLESS, OptionalDouble.empty(), a.range()));
   }
 
   private Optional<Value.Num> density(Arg.QuantityArg a, String what) {
     if (a.unit().isPresent() && !a.unit().get().text().equals("OD")) {
-      sink.report(DiagnosticCode.WRONG_DIMENSION, a.unit().get().range(),
-          "'" + what + "' is an optical density, written 'OD 3' or '3'; '" + a.unit().get().text() + "' does not fit");
+      sink.report(
+          DiagnosticCode.WRONG_DIMENSION,
+          a.unit().get().range(),
+          "'"
+              + what
+              + "' is an optical density, written 'OD 3' or '3'; '"
+              + a.unit().get().text()
+              + "' does not fit");
       return Optional.empty();
     }
     if (a.number().value() < 0) {
-      sink.report(DiagnosticCode.OUT_OF_RANGE, a.range(), "an optical density cannot be negative; got '" + written(a) + "'");
+      sink.report(
+          DiagnosticCode.OUT_OF_RANGE,
+          a.range(),
+          "an optical density cannot be negative; got '" + written(a) + "'");
       return Optional.empty();
     }
-    return Optional.of(new Value.Num(a.number().value(), Dimension.DIMENSIONLESS, OptionalDouble.empty(), a.range()));
+    return Optional.of(
+        new Value.Num(
+            a.number().value(), Dimension.DIMENSIONLESS, OptionalDouble.empty(), a.range()));
   }
 
   /** Resolves a name to a declaration or catalog entry of an allowed category. */
@@ -344,44 +467,88 @@ final class ValueChecker {
     String name = ref.name().text();
     Optional<Symbol> found = scope.lookup(name);
     if (found.isEmpty() && categories.contains(Category.MATERIAL)) {
-      found = CatalogNames.lookup(name).map(e -> Symbol.catalog(e.name()));
+      found = CatalogSpellings.lookup(name).map(e -> Symbol.catalog(e.name()));
     }
     if (found.isEmpty() && categories.contains(Category.MATERIAL)) {
-      List<String> catalog = CatalogNames.entries().stream()
-          .filter(e -> !what.equals("metal") || e.materialClass() == CatalogNames.MaterialClass.METAL)
-          .map(CatalogNames.Entry::name).toList();
+      List<String> catalog =
+          CatalogSpellings.entries().stream()
+              .filter(
+                  e ->
+                      !what.equals("metal")
+                          || e.materialClass() == CatalogSpellings.MaterialClass.METAL)
+              .map(CatalogSpellings.Entry::name)
+              .toList();
       Optional<String> close = Suggest.closest(name, scope.namesOf(categories));
-      sink.report(DiagnosticCode.UNKNOWN_CATALOG_MATERIAL, ref.range(),
-          "'" + name + "' is neither a declared material nor in the material catalog"
-              + close.map(s -> "; did you mean '" + s + "'?").orElse("; the catalog has " + String.join(", ", catalog)),
+      sink.report(
+          DiagnosticCode.UNKNOWN_CATALOG_MATERIAL,
+          ref.range(),
+          "'"
+              + name
+              + "' is neither a declared material nor in the material catalog"
+              + close
+                  .map(s -> "; did you mean '" + s + "'?")
+                  .orElse("; the catalog has " + String.join(", ", catalog)),
           Resolver.replacement(sink.file, ref.name().range(), name, close));
       return Optional.empty();
     }
     if (found.isEmpty()) {
-      sink.report(DiagnosticCode.UNDEFINED_NAME, ref.range(),
-          "unknown name '" + name + "' in '" + what + "'" + Suggest.hint(name, scope.namesOf(categories)),
-          Resolver.replacement(sink.file, ref.name().range(), name, Suggest.closest(name, scope.namesOf(categories))));
+      sink.report(
+          DiagnosticCode.UNDEFINED_NAME,
+          ref.range(),
+          "unknown name '"
+              + name
+              + "' in '"
+              + what
+              + "'"
+              + Suggest.hint(name, scope.namesOf(categories)),
+          Resolver.replacement(
+              sink.file,
+              ref.name().range(),
+              name,
+              Suggest.closest(name, scope.namesOf(categories))));
       return Optional.empty();
     }
     Symbol s = found.get();
     if (!categories.contains(s.category())) {
-      sink.report(DiagnosticCode.WRONG_KIND, ref.range(),
-          "'" + name + "' is " + s.describe() + ", but '" + what + "' needs the name of "
+      sink.report(
+          DiagnosticCode.WRONG_KIND,
+          ref.range(),
+          "'"
+              + name
+              + "' is "
+              + s.describe()
+              + ", but '"
+              + what
+              + "' needs the name of "
               + String.join(" or ", categories.stream().map(Category::phrase).toList()));
       return Optional.empty();
     }
-    if (what.equals("metal") && s.isCatalog()
-        && CatalogNames.lookup(s.name()).map(e -> e.materialClass() != CatalogNames.MaterialClass.METAL).orElse(false)) {
-      sink.report(DiagnosticCode.WRONG_KIND, ref.range(), "'" + name + "' is not a metal; the catalog metals are "
-          + String.join(", ", CatalogNames.entries().stream()
-              .filter(e -> e.materialClass() == CatalogNames.MaterialClass.METAL).map(CatalogNames.Entry::name).toList()));
+    if (what.equals("metal")
+        && s.isCatalog()
+        && CatalogSpellings.lookup(s.name())
+            .map(e -> e.materialClass() != CatalogSpellings.MaterialClass.METAL)
+            .orElse(false)) {
+      sink.report(
+          DiagnosticCode.WRONG_KIND,
+          ref.range(),
+          "'"
+              + name
+              + "' is not a metal; the catalog metals are "
+              + String.join(
+                  ", ",
+                  CatalogSpellings.entries().stream()
+                      .filter(e -> e.materialClass() == CatalogSpellings.MaterialClass.METAL)
+                      .map(CatalogSpellings.Entry::name)
+                      .toList()));
       return Optional.empty();
     }
     sink.refs.add(new ResolvedRef(sink.file, ref.name().range(), s));
     return Optional.of(new Value.Ref(s, ref.range()));
   }
 
-  /** The literal's unit: empty when none was written, null when it is unknown (already reported). */
+  /**
+   * The literal's unit: empty when none was written, null when it is unknown (already reported).
+   */
   private Optional<Unit> unitOf(Arg.QuantityArg a) {
     if (a.unit().isEmpty()) {
       return Optional.empty();
@@ -395,23 +562,29 @@ final class ValueChecker {
   }
 
   /**
-   * For a bare number where a unit is needed: write it in the unit of the slot's example
-   * ('100' for a focal length becomes '100 mm'), the unit such values are usually given in.
-   * Null when the example has no unit to offer.
+   * For a bare number where a unit is needed: write it in the unit of the slot's example ('100' for
+   * a focal length becomes '100 mm'), the unit such values are usually given in. Null when the
+   * example has no unit to offer.
    */
   private Fix exampleUnitFix(Arg.QuantityArg a, String example) {
     String unit = example.replaceFirst("^[-+]?[0-9.]+([eE][-+]?[0-9]+)?\\s*", "");
-    if (unit.isEmpty() || unit.equals(example) || !(UnitParser.parse(unit) instanceof UnitParse.Ok)) {
+    if (unit.isEmpty()
+        || unit.equals(example)
+        || !(UnitParser.parse(unit) instanceof UnitParse.Ok)) {
       return null;
     }
     TextRange at = new TextRange(a.number().range().end(), a.number().range().end());
-    return new Fix("write '" + a.number().text() + " " + unit + "'", List.of(new Edit(sink.file, at, " " + unit)));
+    return new Fix(
+        "write '" + a.number().text() + " " + unit + "'",
+        List.of(new Edit(sink.file, at, " " + unit)));
   }
 
   /** The literal as written: '3 mm' keeps its space, '3R' stays without one. */
   static String written(Arg.QuantityArg a) {
-    return a.number().text() + a.unit()
-        .map(u -> (u.range().start() > a.number().range().end() ? " " : "") + u.text()).orElse("");
+    return a.number().text()
+        + a.unit()
+            .map(u -> (u.range().start() > a.number().range().end() ? " " : "") + u.text())
+            .orElse("");
   }
 
   private static String percent(double fraction) {
@@ -421,8 +594,10 @@ final class ValueChecker {
   static String describe(Bounds b, Dimension dim) {
     String max = QuantityFormat.format(b.max(), dim);
     // Zero prints in the unit of the other end: "from 0° up to 90°", not "from 0 rad".
-    String min = b.min() == 0 && Double.isFinite(b.max()) ? "0" + max.replaceFirst("^[-+0-9.eE]+", "")
-        : QuantityFormat.format(b.min(), dim);
+    String min =
+        b.min() == 0 && Double.isFinite(b.max())
+            ? "0" + max.replaceFirst("^[-+0-9.eE]+", "")
+            : QuantityFormat.format(b.min(), dim);
     boolean finiteMin = Double.isFinite(b.min());
     boolean finiteMax = Double.isFinite(b.max());
     if (b.nonZero() && !finiteMin && !finiteMax) {
@@ -438,7 +613,9 @@ final class ValueChecker {
       return (b.maxInclusive() ? "at most " : "less than ") + max;
     }
     if (finiteMin && finiteMax) {
-      return b.maxInclusive() ? "between " + min + " and " + max : "from " + min + " up to (not including) " + max;
+      return b.maxInclusive()
+          ? "between " + min + " and " + max
+          : "from " + min + " up to (not including) " + max;
     }
     return "a number";
   }

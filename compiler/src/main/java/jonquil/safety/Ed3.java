@@ -9,15 +9,17 @@ package jonquil.safety;
  * value could not be confirmed by a published secondary source it is marked "from memory".
  *
  * <p>Confirmed by secondary sources (see the tests for the exact citations):
+ *
  * <ul>
- *   <li>C4 (ICNIRP C<sub>A</sub>), C3 (C<sub>B</sub>), C7 (C<sub>C</sub>, 700–1200 nm): ICNIRP factors as
- *       reproduced in the Norwegian regulations on action and limit values, §11-5 (transposing
- *       Directive 2006/25/EC, which reproduces the ICNIRP laser tables).</li>
- *   <li>Retinal MPE 400–700 nm, 18 t^0.75 J/m² (1.8 t^0.75 mJ/cm²) and its 0.25 s value 2.55 mW/cm²:
- *       university laser-safety "Sample calculations" appendix (AS/NZS 2211.1, i.e. IEC 60825-1).</li>
- *   <li>Class 1 visible cw 0.39 mW, Class 2 1 mW, Class 3R
- *       = 5 × Class 2 (visible) or 5 × Class 1 (other λ), Class 3B 0.5 W cw: several vendor and
- *       university class summaries of IEC 60825-1 (cited in ClassifierTest).</li>
+ *   <li>C4 (ICNIRP C<sub>A</sub>), C3 (C<sub>B</sub>), C7 (C<sub>C</sub>, 700–1200 nm): ICNIRP
+ *       factors as reproduced in the Norwegian regulations on action and limit values, §11-5
+ *       (transposing Directive 2006/25/EC, which reproduces the ICNIRP laser tables).
+ *   <li>Retinal MPE 400–700 nm, 18 t^0.75 J/m² (1.8 t^0.75 mJ/cm²) and its 0.25 s value 2.55
+ *       mW/cm²: university laser-safety "Sample calculations" appendix (AS/NZS 2211.1, i.e. IEC
+ *       60825-1).
+ *   <li>Class 1 visible cw 0.39 mW, Class 2 1 mW, Class 3R = 5 × Class 2 (visible) or 5 × Class 1
+ *       (other λ), Class 3B 0.5 W cw: several vendor and university class summaries of IEC 60825-1
+ *       (cited in ClassifierTest).
  * </ul>
  */
 final class Ed3 {
@@ -26,31 +28,43 @@ final class Ed3 {
   static final String EDITION = "IEC 60825-1:2014 (Ed. 3)";
   static final String MPE_EYE_TABLE = EDITION + ", Annex A, Table A.1 (MPE at the cornea, C6 = 1)";
   static final String MPE_SKIN_TABLE = EDITION + ", Annex A, Table A.5 (MPE of the skin)";
-  static final String FACTORS_TABLE = EDITION + ", Table 9 (correction factors; ICNIRP C_A/C_B/C_C)";
+  static final String FACTORS_TABLE =
+      EDITION + ", Table 9 (correction factors; ICNIRP C_A/C_B/C_C)";
 
   /** Lowest wavelength evaluated, m (retinal hazard region starts at 400 nm). */
   static final double LAMBDA_MIN = 400e-9;
+
   /**
-   * Upper end of the evaluated ocular range, m. From 1250 nm to 1400 nm Ed. 3 adds a corneal/lens dual
-   * limit to the retinal one (confirmed: "Comparison of corneal injury thresholds with laser safety
-   * limits", a paper comparing ANSI Z136.1-2014, ICNIRP 2013 and IEC 60825-1:2014 for
+   * Upper end of the evaluated ocular range, m. From 1250 nm to 1400 nm Ed. 3 adds a corneal/lens
+   * dual limit to the retinal one (confirmed: "Comparison of corneal injury thresholds with laser
+   * safety limits", a paper comparing ANSI Z136.1-2014, ICNIRP 2013 and IEC 60825-1:2014 for
    * 1250–1400 nm); that dual limit is not implemented, so 1250–1400 nm is "not evaluated".
    */
   static final double LAMBDA_MAX_EYE = 1250e-9;
+
   /** Upper end of the evaluated skin range, m (skin row 400–1400 nm). */
   static final double LAMBDA_MAX_SKIN = 1400e-9;
+
   /** Longest exposure the tables cover, s. */
   static final double T_MAX = 3e4;
+
   /**
    * Shortest pulse evaluated for the eye, s. Ed. 3 has a row below 10 ps, from memory; not
    * implemented, so shorter pulses are "not evaluated".
    */
   static final double T_MIN_EYE = 1e-11;
-  /** Shortest pulse evaluated for the skin, s (Table A.5 row 1 ns–100 ns; below: not implemented). */
+
+  /**
+   * Shortest pulse evaluated for the skin, s (Table A.5 row 1 ns–100 ns; below: not implemented).
+   */
   static final double T_MIN_SKIN = 1e-9;
 
-  /** Limiting aperture for the eye, 400–1400 nm: 7 mm (Table A.3 of Ed. 3, from memory; 7 mm pupil confirmed by the sources above). */
+  /**
+   * Limiting aperture for the eye, 400–1400 nm: 7 mm (Table A.3 of Ed. 3, from memory; 7 mm pupil
+   * confirmed by the sources above).
+   */
   static final double APERTURE_EYE = 7e-3;
+
   /** Limiting aperture for the skin: 3.5 mm (Table A.3 of Ed. 3, from memory). */
   static final double APERTURE_SKIN = 3.5e-3;
 
@@ -58,13 +72,18 @@ final class Ed3 {
     return lambda / 1e-9;
   }
 
-  /** C3 (ICNIRP C_B): 1 for 400–450 nm, 10^(0.02(λ−450)) for 450–700 nm. Confirmed (ICNIRP/§11-5). */
+  /**
+   * C3 (ICNIRP C_B): 1 for 400–450 nm, 10^(0.02(λ−450)) for 450–700 nm. Confirmed (ICNIRP/§11-5).
+   */
   static double c3(double lambda) {
     double n = nm(lambda);
     return n < 450 ? 1.0 : Math.pow(10, 0.02 * (n - 450));
   }
 
-  /** C4 (ICNIRP C_A): 1 below 700 nm, 10^(0.002(λ−700)) for 700–1050 nm, 5 for 1050–1400 nm. Confirmed. */
+  /**
+   * C4 (ICNIRP C_A): 1 below 700 nm, 10^(0.002(λ−700)) for 700–1050 nm, 5 for 1050–1400 nm.
+   * Confirmed.
+   */
   static double c4(double lambda) {
     double n = nm(lambda);
     if (n < 700) {
@@ -74,9 +93,9 @@ final class Ed3 {
   }
 
   /**
-   * C7 (ICNIRP C_C): 1 for 700–1150 nm, 10^(0.018(λ−1150)) for 1150–1200 nm (confirmed, ICNIRP/§11-5);
-   * 8 for 1200–1250 nm. Ed. 3 gives 8 + 10^(0.04(λ−1250)) there (from memory), which is ≥ 8, so the
-   * confirmed ICNIRP value 8 used here is the more restrictive.
+   * C7 (ICNIRP C_C): 1 for 700–1150 nm, 10^(0.018(λ−1150)) for 1150–1200 nm (confirmed,
+   * ICNIRP/§11-5); 8 for 1200–1250 nm. Ed. 3 gives 8 + 10^(0.04(λ−1250)) there (from memory), which
+   * is ≥ 8, so the confirmed ICNIRP value 8 used here is the more restrictive.
    */
   static double c7(double lambda) {
     double n = nm(lambda);
@@ -97,14 +116,16 @@ final class Ed3 {
   /**
    * Retinal thermal MPE as radiant exposure over the whole exposure t, J/m², point source (C6 = 1),
    * 400 nm ≤ λ &lt; 1250 nm, T_MIN_EYE ≤ t ≤ T_MAX. Table A.1 of Ed. 3:
+   *
    * <ul>
-   *   <li>400–1050 nm: 10 ps–5 µs: 2×10⁻³ C4 J/m² (from memory; the 2014 editions lowered the ns value from
-   *       5×10⁻³ — the change is confirmed qualitatively by J. Biomed. Opt. 20(9) 095011 (2015),
-   *       "Trends in nanosecond melanosome microcavitation up to 1540 nm", which notes the 2014 MPE changes
-   *       "in the visible region in the nanosecond time regime"); 5 µs–10 s: 18 t^0.75 C4 J/m² (confirmed);
-   *       10 s–3×10⁴ s: 10 C4 C7 W/m² (from memory; = 18·T2^-0.25 with T2 = 10 s, rounded down).</li>
-   *   <li>1050–1250 nm: 10 ps–13 µs: 2×10⁻² C7 J/m² (from memory); 13 µs–10 s: 90 t^0.75 C7 J/m²
-   *       (= 18·C4 t^0.75 with C4 = 5; from memory); 10 s–3×10⁴ s: 10 C4 C7 W/m² (from memory).</li>
+   *   <li>400–1050 nm: 10 ps–5 µs: 2×10⁻³ C4 J/m² (from memory; the 2014 editions lowered the ns
+   *       value from 5×10⁻³ — the change is confirmed qualitatively by J. Biomed. Opt. 20(9) 095011
+   *       (2015), "Trends in nanosecond melanosome microcavitation up to 1540 nm", which notes the
+   *       2014 MPE changes "in the visible region in the nanosecond time regime"); 5 µs–10 s: 18
+   *       t^0.75 C4 J/m² (confirmed); 10 s–3×10⁴ s: 10 C4 C7 W/m² (from memory; = 18·T2^-0.25 with
+   *       T2 = 10 s, rounded down).
+   *   <li>1050–1250 nm: 10 ps–13 µs: 2×10⁻² C7 J/m² (from memory); 13 µs–10 s: 90 t^0.75 C7 J/m² (=
+   *       18·C4 t^0.75 with C4 = 5; from memory); 10 s–3×10⁴ s: 10 C4 C7 W/m² (from memory).
    * </ul>
    */
   static double retinalThermal(double lambda, double t) {
@@ -130,9 +151,9 @@ final class Ed3 {
   }
 
   /**
-   * Retinal photochemical MPE, J/m², point source, 400–600 nm, t ≥ 10 s: 10–100 s: 100 C3 J/m²;
-   * 100 s–3×10⁴ s: 1 C3 W/m² (Table A.1; from memory, consistent with ANSI Z136.1 Table 5a
-   * C_B×10⁻² J/cm² and C_B×10⁻⁴ W/cm²; C3 confirmed). NaN where it does not apply.
+   * Retinal photochemical MPE, J/m², point source, 400–600 nm, t ≥ 10 s: 10–100 s: 100 C3 J/m²; 100
+   * s–3×10⁴ s: 1 C3 W/m² (Table A.1; from memory, consistent with ANSI Z136.1 Table 5a C_B×10⁻²
+   * J/cm² and C_B×10⁻⁴ W/cm²; C3 confirmed). NaN where it does not apply.
    */
   static double retinalPhotochemical(double lambda, double t) {
     double n = nm(lambda);
@@ -142,7 +163,9 @@ final class Ed3 {
     return t < 100 ? 100 * c3(lambda) : c3(lambda) * t;
   }
 
-  /** Ocular MPE (radiant exposure over t, J/m²): the lower of the thermal and photochemical limits. */
+  /**
+   * Ocular MPE (radiant exposure over t, J/m²): the lower of the thermal and photochemical limits.
+   */
   static double ocularMpe(double lambda, double t) {
     double thermal = retinalThermal(lambda, t);
     double photo = retinalPhotochemical(lambda, t);
@@ -151,8 +174,8 @@ final class Ed3 {
 
   /**
    * Skin MPE, J/m², 400–1400 nm (Table A.5 of Ed. 3, from memory; same values as ANSI Z136.1-2014
-   * Table 7: 2 C_A×10⁻² J/cm², 1.1 C_A t^0.25 J/cm², 0.2 C_A W/cm²): 1 ns–100 ns: 200 C4 J/m²;
-   * 100 ns–10 s: 1.1×10⁴ C4 t^0.25 J/m²; 10 s–3×10⁴ s: 2000 C4 W/m².
+   * Table 7: 2 C_A×10⁻² J/cm², 1.1 C_A t^0.25 J/cm², 0.2 C_A W/cm²): 1 ns–100 ns: 200 C4 J/m²; 100
+   * ns–10 s: 1.1×10⁴ C4 t^0.25 J/m²; 10 s–3×10⁴ s: 2000 C4 W/m².
    */
   static double skinMpe(double lambda, double t) {
     double c4 = c4(lambda);
@@ -167,13 +190,15 @@ final class Ed3 {
 
   /**
    * Class 1 AEL, J accessible within t, point source (C6 = 1), 400 nm ≤ λ &lt; 1250 nm. Table 3 of
-   * Ed. 3 (from memory; each coefficient is the MPE above times the 7 mm aperture area 3.85×10⁻⁵ m²,
-   * rounded as the table rounds, which ClassifierTest checks):
+   * Ed. 3 (from memory; each coefficient is the MPE above times the 7 mm aperture area 3.85×10⁻⁵
+   * m², rounded as the table rounds, which ClassifierTest checks):
+   *
    * <ul>
-   *   <li>400–1050 nm: t &lt; 5 µs: 7.7×10⁻⁸ C4 J; 5 µs–10 s: 7×10⁻⁴ t^0.75 C4 J; ≥ 10 s: 3.9×10⁻⁴ C4 C7 W
-   *       (0.39 mW visible confirmed); 400–600 nm also photochemical: 10–100 s: 3.9×10⁻³ C3 J,
-   *       ≥ 100 s: 3.9×10⁻⁵ C3 W (0.039 mW at 400–450 nm; from memory).</li>
-   *   <li>1050–1250 nm: t &lt; 13 µs: 7.7×10⁻⁷ C7 J; 13 µs–10 s: 3.5×10⁻³ t^0.75 C7 J; ≥ 10 s: 3.9×10⁻⁴ C4 C7 W.</li>
+   *   <li>400–1050 nm: t &lt; 5 µs: 7.7×10⁻⁸ C4 J; 5 µs–10 s: 7×10⁻⁴ t^0.75 C4 J; ≥ 10 s: 3.9×10⁻⁴
+   *       C4 C7 W (0.39 mW visible confirmed); 400–600 nm also photochemical: 10–100 s: 3.9×10⁻³ C3
+   *       J, ≥ 100 s: 3.9×10⁻⁵ C3 W (0.039 mW at 400–450 nm; from memory).
+   *   <li>1050–1250 nm: t &lt; 13 µs: 7.7×10⁻⁷ C7 J; 13 µs–10 s: 3.5×10⁻³ t^0.75 C7 J; ≥ 10 s:
+   *       3.9×10⁻⁴ C4 C7 W.
    * </ul>
    */
   static double class1Ael(double lambda, double t) {
@@ -206,16 +231,17 @@ final class Ed3 {
   }
 
   /**
-   * Class 2 AEL, J within t, 400–700 nm only (Table 5 of Ed. 3): t &lt; 0.25 s: the Class 1 AEL;
-   * t ≥ 0.25 s: C6 × 10⁻³ W (1 mW with C6 = 1; confirmed).
+   * Class 2 AEL, J within t, 400–700 nm only (Table 5 of Ed. 3): t &lt; 0.25 s: the Class 1 AEL; t
+   * ≥ 0.25 s: C6 × 10⁻³ W (1 mW with C6 = 1; confirmed).
    */
   static double class2Ael(double lambda, double t) {
     return t < 0.25 ? class1Ael(lambda, t) : 1e-3 * t;
   }
 
   /**
-   * Class 3R AEL, J within t (Table 6 of Ed. 3): 5 × the Class 2 AEL for 400–700 nm, 5 × the Class 1 AEL
-   * elsewhere (rule confirmed by the class summaries cited in ClassifierTest; the table itself rounds).
+   * Class 3R AEL, J within t (Table 6 of Ed. 3): 5 × the Class 2 AEL for 400–700 nm, 5 × the Class
+   * 1 AEL elsewhere (rule confirmed by the class summaries cited in ClassifierTest; the table
+   * itself rounds).
    */
   static double class3rAel(double lambda, double t) {
     return 5 * (visible(lambda) ? class2Ael(lambda, t) : class1Ael(lambda, t));
@@ -229,8 +255,15 @@ final class Ed3 {
     return n >= 400 && n <= 700;
   }
 
-  /** Time base for Class 1/1M and non-visible 3R (Ed. 3 clause 4.3 e; 100 s for λ > 400 nm, from memory). */
+  /**
+   * Time base for Class 1/1M and non-visible 3R (Ed. 3 clause 4.3 e; 100 s for λ > 400 nm, from
+   * memory).
+   */
   static final double TIME_BASE_CLASS1 = 100;
-  /** Time base for Class 2/2M and visible 3R: 0.25 s (aversion response; confirmed by the class summaries). */
+
+  /**
+   * Time base for Class 2/2M and visible 3R: 0.25 s (aversion response; confirmed by the class
+   * summaries).
+   */
   static final double TIME_BASE_CLASS2 = 0.25;
 }

@@ -9,7 +9,11 @@ package jonquil.safety;
  * @param pulseDuration pulse duration (FWHM), s (0 for continuous wave)
  * @param repetitionRate pulse repetition rate, Hz (0 for continuous wave or a single pulse)
  */
-public record Emission(double wavelength, double averagePower, double pulseEnergy, double pulseDuration,
+public record Emission(
+    double wavelength,
+    double averagePower,
+    double pulseEnergy,
+    double pulseDuration,
     double repetitionRate) {
 
   public Emission {
@@ -38,8 +42,10 @@ public record Emission(double wavelength, double averagePower, double pulseEnerg
   }
 
   /** A repetitively pulsed emission; the average power is energy × rate. */
-  public static Emission pulseTrain(double wavelength, double pulseEnergy, double pulseDuration, double repetitionRate) {
-    return new Emission(wavelength, pulseEnergy * repetitionRate, pulseEnergy, pulseDuration, repetitionRate);
+  public static Emission pulseTrain(
+      double wavelength, double pulseEnergy, double pulseDuration, double repetitionRate) {
+    return new Emission(
+        wavelength, pulseEnergy * repetitionRate, pulseEnergy, pulseDuration, repetitionRate);
   }
 
   /** A single pulse. */
@@ -62,8 +68,8 @@ public record Emission(double wavelength, double averagePower, double pulseEnerg
   }
 
   /**
-   * Why a pulse train cannot be judged as pulses over an exposure duration, or null when
-   * it can: both standards' pulse rules assume pulses shorter than their spacing and the exposure.
+   * Why a pulse train cannot be judged as pulses over an exposure duration, or null when it can:
+   * both standards' pulse rules assume pulses shorter than their spacing and the exposure.
    */
   public String trainProblem(double exposureDuration) {
     if (pulseDuration() * repetitionRate() >= 1) {

@@ -1,24 +1,34 @@
 package jonquil.safety;
 
 /**
- * Why it exists: one maximum permissible exposure, stated both as radiant exposure and as irradiance,
- * with the aperture it is averaged over and the criterion that limited it.
+ * Why it exists: one maximum permissible exposure, stated both as radiant exposure and as
+ * irradiance, with the aperture it is averaged over and the criterion that limited it.
  *
- * @param radiantExposure MPE as radiant exposure, J/m²: per pulse for pulsed emission, over the whole
- *     exposure duration for continuous wave
- * @param irradiance MPE as irradiance, W/m²: for cw and pulse trains the time-averaged irradiance over the
- *     exposure duration (per-pulse limit × repetition rate); for a single pulse the radiant exposure divided
- *     by the pulse duration
+ * @param radiantExposure MPE as radiant exposure, J/m²: per pulse for pulsed emission, over the
+ *     whole exposure duration for continuous wave
+ * @param irradiance MPE as irradiance, W/m²: for cw and pulse trains the time-averaged irradiance
+ *     over the exposure duration (per-pulse limit × repetition rate); for a single pulse the
+ *     radiant exposure divided by the pulse duration
  * @param exposureDuration exposure duration the MPE applies to, s
  * @param apertureDiameter limiting aperture the exposure is averaged over, m
  * @param singlePulse per-pulse limit from the single-pulse rule, J/m² (NaN for cw)
- * @param averagePower per-pulse limit from the average-power rule, J/m² (NaN for cw or a single pulse)
- * @param repetitivePulse per-pulse limit from the repetitive-pulse (C5 / T_i) rule, J/m² (NaN where not applied)
+ * @param averagePower per-pulse limit from the average-power rule, J/m² (NaN for cw or a single
+ *     pulse)
+ * @param repetitivePulse per-pulse limit from the repetitive-pulse (C5 / T_i) rule, J/m² (NaN where
+ *     not applied)
  * @param limitingCriterion which criterion gave the value
  * @param table standard, edition and table it came from
  */
-public record Exposure(double radiantExposure, double irradiance, double exposureDuration, double apertureDiameter,
-    double singlePulse, double averagePower, double repetitivePulse, String limitingCriterion, String table) {
+public record Exposure(
+    double radiantExposure,
+    double irradiance,
+    double exposureDuration,
+    double apertureDiameter,
+    double singlePulse,
+    double averagePower,
+    double repetitivePulse,
+    String limitingCriterion,
+    String table) {
 
   /** The caution that goes with every MPE. */
   public String caution() {

@@ -2,9 +2,10 @@ package jonquil.safety;
 
 /**
  * Why it exists: the optical density protective eyewear needs, OD = log10(H/MPE), where H is the
- * anticipated exposure (ANSI Z136.1-2014, eyewear OD formula; EN 207 uses the same ratio — clause numbers
- * from memory; formula and worked example confirmed by a university laser-safety "Sample calculations"
- * appendix, see EyewearTest). Never negative: 0 means the exposure is already at or below the MPE.
+ * anticipated exposure (ANSI Z136.1-2014, eyewear OD formula; EN 207 uses the same ratio — clause
+ * numbers from memory; formula and worked example confirmed by a university laser-safety "Sample
+ * calculations" appendix, see EyewearTest). Never negative: 0 means the exposure is already at or
+ * below the MPE.
  */
 public final class Eyewear {
   private Eyewear() {}
@@ -20,11 +21,12 @@ public final class Eyewear {
   }
 
   /**
-   * OD for the direct beam at the point where its 1/e² diameter is beamDiameter: averaged over the 7 mm
-   * aperture and at the Gaussian peak. cw: irradiance against the irradiance MPE; pulsed: per-pulse radiant
-   * exposure against the per-pulse MPE.
+   * OD for the direct beam at the point where its 1/e² diameter is beamDiameter: averaged over the
+   * 7 mm aperture and at the Gaussian peak. cw: irradiance against the irradiance MPE; pulsed:
+   * per-pulse radiant exposure against the per-pulse MPE.
    */
-  public static Outcome<OpticalDensity> required(Emission e, double beamDiameter, double exposureDuration) {
+  public static Outcome<OpticalDensity> required(
+      Emission e, double beamDiameter, double exposureDuration) {
     if (!(beamDiameter > 0)) {
       throw new IllegalArgumentException("beam diameter must be > 0 m");
     }
@@ -37,7 +39,8 @@ public final class Eyewear {
     double limit = e.pulsed() ? mpe.get().radiantExposure() : mpe.get().irradiance();
     double ap = GaussianBeam.averagedOver(q, beamDiameter, OcularMpe.LIMITING_APERTURE);
     double peak = GaussianBeam.peak(q, beamDiameter);
-    return Outcome.of(new OpticalDensity(od(ap, limit), od(peak, limit), ap, peak, limit), standard);
+    return Outcome.of(
+        new OpticalDensity(od(ap, limit), od(peak, limit), ap, peak, limit), standard);
   }
 
   private static double od(double exposure, double mpe) {

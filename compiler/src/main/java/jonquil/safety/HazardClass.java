@@ -5,4 +5,12 @@ package jonquil.safety;
  * computed by {@link Classifier}; a separate copy from the resolver's enum so that the safety code
  * depends on nothing above it.
  */
-public enum HazardClass { CLASS_1, CLASS_1M, CLASS_2, CLASS_2M, CLASS_3R, CLASS_3B, CLASS_4 }
+public enum HazardClass {
+  CLASS_1,
+  CLASS_1M,
+  CLASS_2,
+  CLASS_2M,
+  CLASS_3R,
+  CLASS_3B,
+  CLASS_4
+}

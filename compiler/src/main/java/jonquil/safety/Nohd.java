@@ -2,30 +2,33 @@ package jonquil.safety;
 
 /**
  * Why it exists: the nominal ocular hazard distance, the distance beyond which the beam no longer
- * exceeds the ocular MPE: NOHD = (√(4P/(π·MPE)) − a)/φ (ANSI Z136.1-2014, section 3 hazard evaluation,
- * NOHD formula for a circular beam; IEC TR 60825-14:2004 (Ed. 1), clause on the NOHD — formula confirmed
- * by university laser-safety guidance, e.g. the UNIRPA "Guide to calculating nominal optical hazard
- * distance"; the clause numbers are from memory). For pulses P is the per-pulse energy and MPE the
- * per-pulse radiant-exposure MPE.
+ * exceeds the ocular MPE: NOHD = (√(4P/(π·MPE)) − a)/φ (ANSI Z136.1-2014, section 3 hazard
+ * evaluation, NOHD formula for a circular beam; IEC TR 60825-14:2004 (Ed. 1), clause on the NOHD —
+ * formula confirmed by university laser-safety guidance, e.g. the UNIRPA "Guide to calculating
+ * nominal optical hazard distance"; the clause numbers are from memory). For pulses P is the
+ * per-pulse energy and MPE the per-pulse radiant-exposure MPE.
  */
 public final class Nohd {
   private Nohd() {}
 
-  static final String FORMULA = "NOHD = (sqrt(4P/(pi MPE)) - a)/phi, ANSI Z136.1-2014 / IEC TR 60825-14:2004 (Ed. 1)";
+  static final String FORMULA =
+      "NOHD = (sqrt(4P/(pi MPE)) - a)/phi, ANSI Z136.1-2014 / IEC TR 60825-14:2004 (Ed. 1)";
 
   /**
-   * The bare formula, with a and φ as the standard defines them (ANSI Z136.1: diameter and divergence at
-   * the 1/e irradiance points). 0 when the beam is below the MPE at the exit; +∞ for a hazardous beam that
-   * does not diverge.
+   * The bare formula, with a and φ as the standard defines them (ANSI Z136.1: diameter and
+   * divergence at the 1/e irradiance points). 0 when the beam is below the MPE at the exit; +∞ for
+   * a hazardous beam that does not diverge.
    *
    * @param powerOrEnergy W (cw, MPE in W/m²) or J per pulse (MPE in J/m²)
    * @param exitDiameter a, m
    * @param divergence φ, full angle, rad
    * @param mpe W/m² or J/m², same basis as powerOrEnergy
    */
-  public static Outcome<Double> forLimit(double powerOrEnergy, double exitDiameter, double divergence, double mpe) {
+  public static Outcome<Double> forLimit(
+      double powerOrEnergy, double exitDiameter, double divergence, double mpe) {
     if (!(mpe > 0) || !(powerOrEnergy >= 0) || !(exitDiameter >= 0) || !(divergence >= 0)) {
-      throw new IllegalArgumentException("need mpe > 0 and non-negative power, diameter, divergence");
+      throw new IllegalArgumentException(
+          "need mpe > 0 and non-negative power, diameter, divergence");
     }
     double hazardDiameter = Math.sqrt(4 * powerOrEnergy / (Math.PI * mpe));
     if (hazardDiameter <= exitDiameter) {
@@ -38,12 +41,13 @@ public final class Nohd {
   }
 
   /**
-   * NOHD of a Gaussian beam given by its 1/e² exit diameter and full-angle 1/e² divergence, with the ocular
-   * MPE of {@link OcularMpe} for the exposure duration. The 1/e² values are converted to the 1/e values the
-   * formula uses (÷√2), which makes P/(π a²/4) the beam's peak irradiance — conservative against the
-   * 7 mm aperture average.
+   * NOHD of a Gaussian beam given by its 1/e² exit diameter and full-angle 1/e² divergence, with
+   * the ocular MPE of {@link OcularMpe} for the exposure duration. The 1/e² values are converted to
+   * the 1/e values the formula uses (÷√2), which makes P/(π a²/4) the beam's peak irradiance —
+   * conservative against the 7 mm aperture average.
    */
-  public static Outcome<Double> of(Emission e, double exitDiameter1e2, double divergence1e2, double exposureDuration) {
+  public static Outcome<Double> of(
+      Emission e, double exitDiameter1e2, double divergence1e2, double exposureDuration) {
     Outcome<Exposure> mpe = OcularMpe.at(e, exposureDuration);
     String standard = FORMULA + "; MPE: " + mpe.standard();
     if (!mpe.evaluated()) {
@@ -51,9 +55,10 @@ public final class Nohd {
     }
     double a = exitDiameter1e2 / Math.sqrt(2);
     double phi = divergence1e2 / Math.sqrt(2);
-    Outcome<Double> d = e.pulsed()
-        ? forLimit(e.pulseEnergy(), a, phi, mpe.get().radiantExposure())
-        : forLimit(e.averagePower(), a, phi, mpe.get().irradiance());
+    Outcome<Double> d =
+        e.pulsed()
+            ? forLimit(e.pulseEnergy(), a, phi, mpe.get().radiantExposure())
+            : forLimit(e.averagePower(), a, phi, mpe.get().irradiance());
     return Outcome.of(d.get(), standard);
   }
 }

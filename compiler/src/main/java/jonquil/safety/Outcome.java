@@ -4,8 +4,8 @@ import java.util.Objects;
 import java.util.Optional;
 
 /**
- * Why it exists: a safety figure is either a value with the standard/table it came from, or
- * "not evaluated" with a reason; a caller can never mistake a gap in coverage for a number.
+ * Why it exists: a safety figure is either a value with the standard/table it came from, or "not
+ * evaluated" with a reason; a caller can never mistake a gap in coverage for a number.
  *
  * @param value the value, empty when not evaluated
  * @param reason why it was not evaluated (empty string when evaluated)
@@ -15,8 +15,10 @@ import java.util.Optional;
 public record Outcome<T>(Optional<T> value, String reason, String standard, String caution) {
 
   /** Caution carried by every MPE, AEL/class, NOHD and OD result. */
-  public static final String CAUTION = "Computed estimate only: a qualified laser safety officer must confirm it"
-      + " under the applicable standard and local regulations; this tool does not replace a hazard evaluation.";
+  public static final String CAUTION =
+      "Computed estimate only: a qualified laser safety officer must confirm it under the"
+          + " applicable standard and local regulations; this tool does not replace a hazard"
+          + " evaluation.";
 
   public Outcome {
     Objects.requireNonNull(value, "value");

@@ -3,9 +3,9 @@ package jonquil.source;
 import java.util.Arrays;
 
 /**
- * Maps UTF-16 offsets to lines and columns and back.
- * The one line splitter of the project: '\n', "\r\n" and '\r' all end a line, and no
- * position ever points between '\r' and '\n'. Parser, CLI and language server all use it.
+ * Maps UTF-16 offsets to lines and columns and back. The one line splitter of the project: '\n',
+ * "\r\n" and '\r' all end a line, and no position ever points between '\r' and '\n'. Parser, CLI
+ * and language server all use it.
  */
 public final class LineIndex {
   private final String text;
@@ -90,8 +90,10 @@ public final class LineIndex {
     int start = lineStart(line);
     int end = lineContentEnd(line);
     int offset = Math.min(start + Math.max(0, column), end);
-    if (offset > start && offset < text.length()
-        && Character.isLowSurrogate(text.charAt(offset)) && Character.isHighSurrogate(text.charAt(offset - 1))) {
+    if (offset > start
+        && offset < text.length()
+        && Character.isLowSurrogate(text.charAt(offset))
+        && Character.isHighSurrogate(text.charAt(offset - 1))) {
       offset--; // never split a surrogate pair
     }
     return offset;

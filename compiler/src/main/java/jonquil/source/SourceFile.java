@@ -28,7 +28,8 @@ public final class SourceFile {
   }
 
   public String slice(TextRange range) {
-    return text.substring(Math.min(range.start(), text.length()), Math.min(range.end(), text.length()));
+    return text.substring(
+        Math.min(range.start(), text.length()), Math.min(range.end(), text.length()));
   }
 
   /** 1-based line of an offset, for people. */

@@ -1,9 +1,9 @@
 package jonquil.source;
 
 /**
- * A half-open span [start, end) of UTF-16 char offsets into one source text.
- * Offsets are Java string indices so that every layer can slice text directly;
- * line/column forms for people and for LSP are derived by {@link LineIndex}.
+ * A half-open span [start, end) of UTF-16 char offsets into one source text. Offsets are Java
+ * string indices so that every layer can slice text directly; line/column forms for people and for
+ * LSP are derived by {@link LineIndex}.
  */
 public record TextRange(int start, int end) implements Comparable<TextRange> {
   public static final TextRange EMPTY = new TextRange(0, 0);

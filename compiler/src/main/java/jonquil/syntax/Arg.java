@@ -17,7 +17,8 @@ public sealed interface Arg {
   record Tolerance(NumberLit number, Optional<UnitLit> unit, TextRange range) {}
 
   /** {@code 22.5 deg ± 0.5 deg}, {@code 1000}, {@code OD 3}. */
-  record QuantityArg(NumberLit number, Optional<UnitLit> unit, Optional<Tolerance> tolerance, TextRange range)
+  record QuantityArg(
+      NumberLit number, Optional<UnitLit> unit, Optional<Tolerance> tolerance, TextRange range)
       implements Arg {}
 
   /** A name, a keyword used as a word, or {@code element.port}. */

@@ -13,9 +13,9 @@ import org.antlr.v4.runtime.tree.ParseTree;
 import org.antlr.v4.runtime.tree.TerminalNode;
 
 /**
- * The one visitor over ANTLR's parse tree: builds our immutable AST and drops pieces
- * that error recovery left incomplete (their errors are already reported).
- * The grammar has no recursive rules, so this walk is shallow whatever the input.
+ * The one visitor over ANTLR's parse tree: builds our immutable AST and drops pieces that error
+ * recovery left incomplete (their errors are already reported). The grammar has no recursive rules,
+ * so this walk is shallow whatever the input.
  */
 final class AstBuilder {
   private final SourceFile source;
@@ -36,7 +36,10 @@ final class AstBuilder {
     return assemble(statements);
   }
 
-  /** One top-level statement: a UseDecl, TrainDecl, RequireDecl or Declaration; empty if recovery left too little. */
+  /**
+   * One top-level statement: a UseDecl, TrainDecl, RequireDecl or Declaration; empty if recovery
+   * left too little.
+   */
   Optional<Object> statement(TopStatementContext top) {
     if (top.useDecl() != null) {
       return useDecl(top.useDecl()).map(u -> u);
@@ -81,17 +84,20 @@ final class AstBuilder {
     if (!present(ctx.kind) || !present(ctx.name)) {
       return Optional.empty();
     }
-    Optional<List<Arg>> shorthand = ctx.args() != null ? Optional.of(args(ctx.args())) : Optional.empty();
+    Optional<List<Arg>> shorthand =
+        ctx.args() != null ? Optional.of(args(ctx.args())) : Optional.empty();
     List<Property> properties = new ArrayList<>();
     if (ctx.block() != null) {
       for (PropertyContext p : ctx.block().property()) {
         Name key = word(p.key);
         if (key != null) {
-          properties.add(new Property(key, p.args() == null ? List.of() : args(p.args()), range(p)));
+          properties.add(
+              new Property(key, p.args() == null ? List.of() : args(p.args()), range(p)));
         }
       }
     }
-    return Optional.of(new Declaration(name(ctx.kind), name(ctx.name), shorthand, properties, range(ctx)));
+    return Optional.of(
+        new Declaration(name(ctx.kind), name(ctx.name), shorthand, properties, range(ctx)));
   }
 
   private List<Arg> args(ArgsContext ctx) {
@@ -151,8 +157,12 @@ final class AstBuilder {
     if (ctx.tolerance() != null) {
       Arg.NumberLit tol = number(ctx.tolerance().number());
       if (tol != null) {
-        tolerance = Optional.of(new Arg.Tolerance(tol, Optional.ofNullable(unit(ctx.tolerance().unit())),
-            range(ctx.tolerance())));
+        tolerance =
+            Optional.of(
+                new Arg.Tolerance(
+                    tol,
+                    Optional.ofNullable(unit(ctx.tolerance().unit())),
+                    range(ctx.tolerance())));
       }
     }
     return new Arg.QuantityArg(number, unit, tolerance, range(ctx));
@@ -205,7 +215,8 @@ final class AstBuilder {
     if (first == null) {
       return null;
     }
-    Optional<Name> port = words.size() > 1 ? Optional.ofNullable(word(words.get(1))) : Optional.empty();
+    Optional<Name> port =
+        words.size() > 1 ? Optional.ofNullable(word(words.get(1))) : Optional.empty();
     return new Arg.RefArg(first, port, range(ctx));
   }
 
@@ -222,8 +233,10 @@ final class AstBuilder {
         } else if (s.distance() != null) {
           Arg.QuantityArg length = quantity(s.distance().quantity());
           if (length != null) {
-            Optional<Arg.RefArg> medium = s.distance().medium == null
-                ? Optional.empty() : Optional.ofNullable(reference(s.distance().medium));
+            Optional<Arg.RefArg> medium =
+                s.distance().medium == null
+                    ? Optional.empty()
+                    : Optional.ofNullable(reference(s.distance().medium));
             steps.add(new TrainDecl.Distance(length, medium, range(s)));
           }
         }
@@ -256,7 +269,10 @@ final class AstBuilder {
       Arg bound = value(ctx.bound);
       Requirement.Comparator cmp = comparator(ctx.comparator);
       if (bound != null && cmp != null) {
-        yield = Optional.of(new Requirement.Yield(cmp, bound, TextRange.span(range(ctx.YIELD().getSymbol()), bound.range())));
+        yield =
+            Optional.of(
+                new Requirement.Yield(
+                    cmp, bound, TextRange.span(range(ctx.YIELD().getSymbol()), bound.range())));
       }
     }
     CheckContext c = ctx.check();
@@ -276,7 +292,8 @@ final class AstBuilder {
     for (ExtraContext e : c.extra()) {
       Requirement.Condition extra = condition(e.condition());
       if (extra != null) {
-        Optional<Requirement.Measure> m = e.measure() == null ? Optional.empty() : Optional.ofNullable(measure(e.measure()));
+        Optional<Requirement.Measure> m =
+            e.measure() == null ? Optional.empty() : Optional.ofNullable(measure(e.measure()));
         extras.add(new Requirement.Extra(m, extra, range(e)));
       }
     }
@@ -285,10 +302,14 @@ final class AstBuilder {
       Arg low = value(c.band().low);
       Arg high = value(c.band().high);
       if (low != null && high != null) {
-        band = Optional.of(new Requirement.Band(name(c.band().IDENT().getSymbol()), low, high, range(c.band())));
+        band =
+            Optional.of(
+                new Requirement.Band(
+                    name(c.band().IDENT().getSymbol()), low, high, range(c.band())));
       }
     }
-    Requirement.Check check = new Requirement.Check(measure, places, condition, extras, band, range(c));
+    Requirement.Check check =
+        new Requirement.Check(measure, places, condition, extras, band, range(c));
     return new Requirement(yield, check, source.slice(range(ctx)), range(ctx));
   }
 
@@ -333,7 +354,9 @@ final class AstBuilder {
       List<Arg> state = new ArrayList<>();
       for (int i = 0; i < s.state().getChildCount(); i++) {
         ParseTree child = s.state().getChild(i);
-        if (child instanceof StateWordContext w && w.getStart() != null && w.getStart().getTokenIndex() >= 0) {
+        if (child instanceof StateWordContext w
+            && w.getStart() != null
+            && w.getStart().getTokenIndex() >= 0) {
           state.add(new Arg.RefArg(name(w.getStart()), Optional.empty(), range(w)));
         } else if (child instanceof QuantityContext q) {
           Arg.QuantityArg qa = quantity(q);
@@ -384,7 +407,10 @@ final class AstBuilder {
     return SpecParser.range(t, offsets);
   }
 
-  /** The span from the first to the last real token of a rule (recovery may leave stop before start). */
+  /**
+   * The span from the first to the last real token of a rule (recovery may leave stop before
+   * start).
+   */
   private TextRange range(ParserRuleContext ctx) {
     Token start = ctx.getStart();
     Token stop = ctx.getStop();
@@ -393,9 +419,10 @@ final class AstBuilder {
       return new TextRange(at, at);
     }
     int from = offsets.toUtf16(start.getStartIndex());
-    int to = stop == null || stop.getStopIndex() < start.getStartIndex()
-        ? offsets.toUtf16(start.getStopIndex() + 1)
-        : offsets.toUtf16(stop.getStopIndex() + 1);
+    int to =
+        stop == null || stop.getStopIndex() < start.getStartIndex()
+            ? offsets.toUtf16(start.getStopIndex() + 1)
+            : offsets.toUtf16(stop.getStopIndex() + 1);
     return new TextRange(from, Math.max(from, to));
   }
 
@@ -406,11 +433,12 @@ final class AstBuilder {
       char c = body.charAt(i);
       if (c == '\\' && i + 1 < body.length()) {
         char next = body.charAt(++i);
-        out.append(switch (next) {
-          case 'n' -> '\n';
-          case 't' -> '\t';
-          default -> next;
-        });
+        out.append(
+            switch (next) {
+              case 'n' -> '\n';
+              case 't' -> '\t';
+              default -> next;
+            });
       } else {
         out.append(c);
       }

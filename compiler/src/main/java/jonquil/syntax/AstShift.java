@@ -6,10 +6,10 @@ import java.util.function.UnaryOperator;
 import jonquil.source.TextRange;
 
 /**
- * Moves a top-level statement's syntax tree by a number of UTF-16 units: a statement an
- * edit did not touch keeps its tree, only further along the text. Every range of every
- * node moves; {@code IncrementalParseTest} compares shifted trees with fresh parses, so a
- * node kind added without a case here fails that test.
+ * Moves a top-level statement's syntax tree by a number of UTF-16 units: a statement an edit did
+ * not touch keeps its tree, only further along the text. Every range of every node moves; {@code
+ * IncrementalParseTest} compares shifted trees with fresh parses, so a node kind added without a
+ * case here fails that test.
  */
 final class AstShift {
   private final int delta;
@@ -28,19 +28,28 @@ final class AstShift {
       return new UseDecl(u.target(), s.range(u.targetRange()), s.range(u.range()));
     }
     if (statement instanceof Declaration d) {
-      return new Declaration(s.name(d.kind()), s.name(d.name()), d.shorthand().map(s::args),
-          s.list(d.properties(), p -> new Property(s.name(p.key()), s.args(p.args()), s.range(p.range()))),
+      return new Declaration(
+          s.name(d.kind()),
+          s.name(d.name()),
+          d.shorthand().map(s::args),
+          s.list(
+              d.properties(),
+              p -> new Property(s.name(p.key()), s.args(p.args()), s.range(p.range()))),
           s.range(d.range()));
     }
     if (statement instanceof TrainDecl t) {
-      return new TrainDecl(t.name().map(s::name),
-          s.list(t.paths(), p -> new TrainDecl.BeamPath(s.list(p.steps(), s::step), s.range(p.range()))),
+      return new TrainDecl(
+          t.name().map(s::name),
+          s.list(
+              t.paths(),
+              p -> new TrainDecl.BeamPath(s.list(p.steps(), s::step), s.range(p.range()))),
           s.range(t.range()));
     }
     if (statement instanceof RequireDecl r) {
       return new RequireDecl(s.list(r.requirements(), s::requirement), s.range(r.range()));
     }
-    throw new IllegalArgumentException("not a top-level statement: " + statement.getClass().getSimpleName());
+    throw new IllegalArgumentException(
+        "not a top-level statement: " + statement.getClass().getSimpleName());
   }
 
   private TextRange range(TextRange r) {
@@ -79,8 +88,15 @@ final class AstShift {
   }
 
   private Arg.QuantityArg quantity(Arg.QuantityArg q) {
-    return new Arg.QuantityArg(number(q.number()), q.unit().map(this::unit), q.tolerance().map(t ->
-        new Arg.Tolerance(number(t.number()), t.unit().map(this::unit), range(t.range()))), range(q.range()));
+    return new Arg.QuantityArg(
+        number(q.number()),
+        q.unit().map(this::unit),
+        q.tolerance()
+            .map(
+                t ->
+                    new Arg.Tolerance(
+                        number(t.number()), t.unit().map(this::unit), range(t.range()))),
+        range(q.range()));
   }
 
   private Arg.NumberLit number(Arg.NumberLit n) {
@@ -100,21 +116,34 @@ final class AstShift {
       return new TrainDecl.Place(ref(p.ref()));
     }
     if (step instanceof TrainDecl.Distance d) {
-      return new TrainDecl.Distance(quantity(d.length()), d.medium().map(this::ref), range(d.range()));
+      return new TrainDecl.Distance(
+          quantity(d.length()), d.medium().map(this::ref), range(d.range()));
     }
     throw new IllegalArgumentException("unknown step: " + step.getClass().getSimpleName());
   }
 
   private Requirement requirement(Requirement r) {
     Requirement.Check c = r.check();
-    Requirement.Check check = new Requirement.Check(measure(c.measure()), list(c.places(), this::place),
-        c.condition().map(this::condition),
-        list(c.extras(), e -> new Requirement.Extra(e.measure().map(this::measure), condition(e.condition()),
-            range(e.range()))),
-        c.band().map(b -> new Requirement.Band(name(b.quantity()), arg(b.low()), arg(b.high()), range(b.range()))),
-        range(c.range()));
-    Optional<Requirement.Yield> yield = r.yield().map(y ->
-        new Requirement.Yield(y.comparator(), arg(y.bound()), range(y.range())));
+    Requirement.Check check =
+        new Requirement.Check(
+            measure(c.measure()),
+            list(c.places(), this::place),
+            c.condition().map(this::condition),
+            list(
+                c.extras(),
+                e ->
+                    new Requirement.Extra(
+                        e.measure().map(this::measure),
+                        condition(e.condition()),
+                        range(e.range()))),
+            c.band()
+                .map(
+                    b ->
+                        new Requirement.Band(
+                            name(b.quantity()), arg(b.low()), arg(b.high()), range(b.range()))),
+            range(c.range()));
+    Optional<Requirement.Yield> yield =
+        r.yield().map(y -> new Requirement.Yield(y.comparator(), arg(y.bound()), range(y.range())));
     return new Requirement(yield, check, r.text(), range(r.range()));
   }
 

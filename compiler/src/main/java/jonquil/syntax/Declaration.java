@@ -9,7 +9,11 @@ import jonquil.source.TextRange;
  * or a bare {@code probe trap}. The kind is kept as written; the checker validates it.
  */
 public record Declaration(
-    Name kind, Name name, Optional<List<Arg>> shorthand, List<Property> properties, TextRange range) {
+    Name kind,
+    Name name,
+    Optional<List<Arg>> shorthand,
+    List<Property> properties,
+    TextRange range) {
   public Declaration {
     shorthand = shorthand.map(List::copyOf);
     properties = List.copyOf(properties);

@@ -1,8 +1,8 @@
 package jonquil.syntax;
 
 /**
- * Converts ANTLR's code-point indices to UTF-16 offsets. ANTLR counts code points;
- * the rest of Jonquil (and LSP) counts UTF-16 units, which differ after any emoji.
+ * Converts ANTLR's code-point indices to UTF-16 offsets. ANTLR counts code points; the rest of
+ * Jonquil (and LSP) counts UTF-16 units, which differ after any emoji.
  */
 final class OffsetMap {
   private final int[] charOffsetOfCodePoint;

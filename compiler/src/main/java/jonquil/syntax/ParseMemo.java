@@ -8,11 +8,11 @@ import java.util.Map;
 import java.util.Set;
 
 /**
- * What an editor keeps between checks so that an edit costs a parse of what it touched:
- * each file's last parse, whole (a file whose text did not change is not parsed again) and
- * by top-level statement (an unchanged statement keeps its tree, moved if text before it
- * grew or shrank). Parsing stays a pure function of the text; this is only its memory.
- * Not thread-safe: one memo per checking thread.
+ * What an editor keeps between checks so that an edit costs a parse of what it touched: each file's
+ * last parse, whole (a file whose text did not change is not parsed again) and by top-level
+ * statement (an unchanged statement keeps its tree, moved if text before it grew or shrank).
+ * Parsing stays a pure function of the text; this is only its memory. Not thread-safe: one memo per
+ * checking thread.
  */
 public final class ParseMemo {
   /** A statement's tree as parsed at UTF-16 offset {@code start}. */

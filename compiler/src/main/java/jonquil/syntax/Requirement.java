@@ -15,8 +15,12 @@ public record Requirement(Optional<Yield> yield, Check check, String text, TextR
 
   /** The core of a requirement. */
   public record Check(
-      Measure measure, List<Place> places, Optional<Condition> condition, List<Extra> extras,
-      Optional<Band> band, TextRange range) {
+      Measure measure,
+      List<Place> places,
+      Optional<Condition> condition,
+      List<Extra> extras,
+      Optional<Band> band,
+      TextRange range) {
     public Check {
       places = List.copyOf(places);
       extras = List.copyOf(extras);
@@ -74,7 +78,11 @@ public record Requirement(Optional<Yield> yield, Check check, String text, TextR
 
   /** Comparison operators. */
   public enum Comparator {
-    LE("<="), GE(">="), LT("<"), GT(">"), EQ("==");
+    LE("<="),
+    GE(">="),
+    LT("<"),
+    GT(">"),
+    EQ("==");
 
     private final String symbol;
 

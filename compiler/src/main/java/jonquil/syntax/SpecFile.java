@@ -32,8 +32,8 @@ public record SpecFile(
   }
 
   /**
-   * True when a syntax error touches this range: error recovery may have left the
-   * construct incomplete, so checks for what is "missing" in it would only add noise.
+   * True when a syntax error touches this range: error recovery may have left the construct
+   * incomplete, so checks for what is "missing" in it would only add noise.
    */
   public boolean damaged(TextRange range) {
     return damaged.stream().anyMatch(d -> d.start() <= range.end() && d.end() >= range.start());

@@ -16,8 +16,8 @@ import org.antlr.v4.runtime.misc.IntervalSet;
 import org.antlr.v4.runtime.misc.ParseCancellationException;
 
 /**
- * ANTLR's recovery, with its reports rewritten in plain words ("expected a name after
- * 'lens', found '{'") instead of token-set dumps, and a stop after too many errors.
+ * ANTLR's recovery, with its reports rewritten in plain words ("expected a name after 'lens', found
+ * '{'") instead of token-set dumps, and a stop after too many errors.
  */
 final class SyntaxErrorStrategy extends DefaultErrorStrategy {
   private static final int MAX_REPORTS = 400;
@@ -68,14 +68,19 @@ final class SyntaxErrorStrategy extends DefaultErrorStrategy {
     if (++reports > MAX_REPORTS || reporter.full()) {
       throw new ParseCancellationException("too many syntax errors");
     }
-    boolean valueNext = offending.getType() == JonquilLexer.NUMBER || offending.getType() == JonquilLexer.MINUS
-        || offending.getType() == JonquilLexer.OD;
+    boolean valueNext =
+        offending.getType() == JonquilLexer.NUMBER
+            || offending.getType() == JonquilLexer.MINUS
+            || offending.getType() == JonquilLexer.OD;
     boolean onSameLine = previousOnSameLine(parser, offending) != null;
     if (!missing && onSameLine && valueNext && within(parser, JonquilParser.RULE_requireDecl)) {
-      // 'power at spot 15 mW': the number is the bound; what is missing is the comparison before it.
+      // 'power at spot 15 mW': the number is the bound; what is missing is the comparison before
+      // it.
       missing = true;
       expected = "a comparison such as '>=' or 'in'";
-    } else if (!missing && onSameLine && within(parser, JonquilParser.RULE_trainDecl)
+    } else if (!missing
+        && onSameLine
+        && within(parser, JonquilParser.RULE_trainDecl)
         && (valueNext || offending.getType() == JonquilLexer.IDENT)) {
       // 'seed -> 40 mm spot': two steps side by side; the arrow between them is missing.
       missing = true;
@@ -91,7 +96,10 @@ final class SyntaxErrorStrategy extends DefaultErrorStrategy {
       int end = offsets.toUtf16(offending.getStartIndex());
       range = new TextRange(end, end);
     } else {
-      range = new TextRange(offsets.toUtf16(offending.getStartIndex()), offsets.toUtf16(offending.getStopIndex() + 1));
+      range =
+          new TextRange(
+              offsets.toUtf16(offending.getStartIndex()),
+              offsets.toUtf16(offending.getStopIndex() + 1));
     }
     StringBuilder message = new StringBuilder();
     String after = previous != null ? " after '" + TokenText.shorten(previous.getText()) + "'" : "";
@@ -101,9 +109,17 @@ final class SyntaxErrorStrategy extends DefaultErrorStrategy {
         message.append(" (before ").append(TokenText.found(offending)).append(')');
       }
     } else {
-      message.append("expected ").append(expected).append(after).append(", found ").append(TokenText.found(offending));
+      message
+          .append("expected ")
+          .append(expected)
+          .append(after)
+          .append(", found ")
+          .append(TokenText.found(offending));
     }
-    reporter.parse(missing ? DiagnosticCode.SYNTAX_MISSING : DiagnosticCode.SYNTAX_UNEXPECTED, range, message.toString(),
+    reporter.parse(
+        missing ? DiagnosticCode.SYNTAX_MISSING : DiagnosticCode.SYNTAX_UNEXPECTED,
+        range,
+        message.toString(),
         offending.getType() == Token.EOF);
   }
 
@@ -124,8 +140,10 @@ final class SyntaxErrorStrategy extends DefaultErrorStrategy {
       if (t.getChannel() != Token.DEFAULT_CHANNEL) {
         continue;
       }
-      boolean offendingEndsLine = offending.getType() == JonquilLexer.NL || offending.getType() == Token.EOF;
-      if (t.getType() == JonquilLexer.NL || (!offendingEndsLine && t.getLine() != offending.getLine())) {
+      boolean offendingEndsLine =
+          offending.getType() == JonquilLexer.NL || offending.getType() == Token.EOF;
+      if (t.getType() == JonquilLexer.NL
+          || (!offendingEndsLine && t.getLine() != offending.getLine())) {
         return null;
       }
       return t;
@@ -148,12 +166,19 @@ final class SyntaxErrorStrategy extends DefaultErrorStrategy {
       case JonquilParser.RULE_block, JonquilParser.RULE_property -> "a parameter line or '}'";
       case JonquilParser.RULE_args, JonquilParser.RULE_arg, JonquilParser.RULE_value ->
           "a value (a number with its unit, a name or a quoted string)";
-      case JonquilParser.RULE_quantity, JonquilParser.RULE_number, JonquilParser.RULE_tolerance -> "a number";
+      case JonquilParser.RULE_quantity, JonquilParser.RULE_number, JonquilParser.RULE_tolerance ->
+          "a number";
       case JonquilParser.RULE_unit, JonquilParser.RULE_unitFactor -> "a unit";
-      case JonquilParser.RULE_trainDecl, JonquilParser.RULE_path, JonquilParser.RULE_step,
-          JonquilParser.RULE_distance -> "an element name or a distance such as '150 mm'";
-      case JonquilParser.RULE_requireDecl, JonquilParser.RULE_requirement, JonquilParser.RULE_check,
-          JonquilParser.RULE_measure -> "a requirement such as 'power at probe1 >= 400 mW'";
+      case JonquilParser.RULE_trainDecl,
+          JonquilParser.RULE_path,
+          JonquilParser.RULE_step,
+          JonquilParser.RULE_distance ->
+          "an element name or a distance such as '150 mm'";
+      case JonquilParser.RULE_requireDecl,
+          JonquilParser.RULE_requirement,
+          JonquilParser.RULE_check,
+          JonquilParser.RULE_measure ->
+          "a requirement such as 'power at probe1 >= 400 mW'";
       case JonquilParser.RULE_condition, JonquilParser.RULE_extra ->
           "a condition such as '>= 400 mW', 'in 1 W .. 2 W' or 'is linear 0 deg'";
       case JonquilParser.RULE_place -> "'at' a name, 'everywhere' or 'from' a name 'to' a name";

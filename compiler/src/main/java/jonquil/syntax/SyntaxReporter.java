@@ -11,8 +11,8 @@ import jonquil.diag.Related;
 import jonquil.source.TextRange;
 
 /**
- * Collects syntax diagnostics for one file, keeping one per line and none at tokens that
- * the lexical pre-scan already explained (so a stray '}' is reported once, not thrice).
+ * Collects syntax diagnostics for one file, keeping one per line and none at tokens that the
+ * lexical pre-scan already explained (so a stray '}' is reported once, not thrice).
  */
 final class SyntaxReporter {
   static final int MAX_DIAGNOSTICS = 100;
@@ -37,7 +37,8 @@ final class SyntaxReporter {
   }
 
   void parse(DiagnosticCode code, TextRange range, String message, boolean atEndOfFile) {
-    // An error at the very end after earlier ones is their cascade (a '{' recovery conjured needs its '}').
+    // An error at the very end after earlier ones is their cascade (a '{' recovery conjured needs
+    // its '}').
     if (explainedOffsets.contains(range.start()) || (atEndOfFile && !diagnostics.isEmpty())) {
       return;
     }
@@ -52,8 +53,14 @@ final class SyntaxReporter {
       diagnostics.add(d);
     } else if (!dropped) {
       dropped = true;
-      diagnostics.add(Diagnostic.of(DiagnosticCode.TOO_MANY_ERRORS, file, d.range(),
-          "stopped reporting syntax errors in this file after " + MAX_DIAGNOSTICS + "; fix the first ones and check again"));
+      diagnostics.add(
+          Diagnostic.of(
+              DiagnosticCode.TOO_MANY_ERRORS,
+              file,
+              d.range(),
+              "stopped reporting syntax errors in this file after "
+                  + MAX_DIAGNOSTICS
+                  + "; fix the first ones and check again"));
     }
   }
 
@@ -61,9 +68,15 @@ final class SyntaxReporter {
   void stopped() {
     if (!dropped) {
       dropped = true;
-      TextRange at = diagnostics.isEmpty() ? TextRange.EMPTY : diagnostics.get(diagnostics.size() - 1).range();
-      diagnostics.add(Diagnostic.of(DiagnosticCode.TOO_MANY_ERRORS, file, at,
-          "stopped reading this file after too many syntax errors; fix the first ones and check again"));
+      TextRange at =
+          diagnostics.isEmpty() ? TextRange.EMPTY : diagnostics.get(diagnostics.size() - 1).range();
+      diagnostics.add(
+          Diagnostic.of(
+              DiagnosticCode.TOO_MANY_ERRORS,
+              file,
+              at,
+              "stopped reading this file after too many syntax errors; fix the first ones and check"
+                  + " again"));
     }
   }
 

@@ -12,18 +12,37 @@ import org.antlr.v4.runtime.misc.IntervalSet;
 final class TokenText {
   private TokenText() {}
 
-  private static final Set<Integer> WORDS = Set.of(
-      JonquilLexer.IDENT, JonquilLexer.AT, JonquilLexer.IN, JonquilLexer.FOR, JonquilLexer.OVER,
-      JonquilLexer.FROM, JonquilLexer.TO, JonquilLexer.IS, JonquilLexer.THEN, JonquilLexer.EVERYWHERE,
-      JonquilLexer.LINEAR, JonquilLexer.CIRCULAR, JonquilLexer.ELLIPTICAL, JonquilLexer.UNPOLARIZED,
-      JonquilLexer.PARTIAL, JonquilLexer.RIGHT, JonquilLexer.LEFT);
-  private static final Set<Integer> NUMBER_START = Set.of(
-      JonquilLexer.NUMBER, JonquilLexer.MINUS, JonquilLexer.PLUS, JonquilLexer.OD);
-  private static final Set<Integer> UNIT_PARTS = Set.of(
-      JonquilLexer.SLASH, JonquilLexer.STAR, JonquilLexer.MIDDOT, JonquilLexer.CARET,
-      JonquilLexer.PERCENT, JonquilLexer.DEGREE);
-  private static final Set<Integer> COMPARATORS = Set.of(
-      JonquilLexer.LE, JonquilLexer.GE, JonquilLexer.LT, JonquilLexer.GT, JonquilLexer.EQEQ);
+  private static final Set<Integer> WORDS =
+      Set.of(
+          JonquilLexer.IDENT,
+          JonquilLexer.AT,
+          JonquilLexer.IN,
+          JonquilLexer.FOR,
+          JonquilLexer.OVER,
+          JonquilLexer.FROM,
+          JonquilLexer.TO,
+          JonquilLexer.IS,
+          JonquilLexer.THEN,
+          JonquilLexer.EVERYWHERE,
+          JonquilLexer.LINEAR,
+          JonquilLexer.CIRCULAR,
+          JonquilLexer.ELLIPTICAL,
+          JonquilLexer.UNPOLARIZED,
+          JonquilLexer.PARTIAL,
+          JonquilLexer.RIGHT,
+          JonquilLexer.LEFT);
+  private static final Set<Integer> NUMBER_START =
+      Set.of(JonquilLexer.NUMBER, JonquilLexer.MINUS, JonquilLexer.PLUS, JonquilLexer.OD);
+  private static final Set<Integer> UNIT_PARTS =
+      Set.of(
+          JonquilLexer.SLASH,
+          JonquilLexer.STAR,
+          JonquilLexer.MIDDOT,
+          JonquilLexer.CARET,
+          JonquilLexer.PERCENT,
+          JonquilLexer.DEGREE);
+  private static final Set<Integer> COMPARATORS =
+      Set.of(JonquilLexer.LE, JonquilLexer.GE, JonquilLexer.LT, JonquilLexer.GT, JonquilLexer.EQEQ);
 
   /** How a token that was found is named in a message: {@code 'm1'}, "end of line". */
   static String found(Token t) {
@@ -58,8 +77,8 @@ final class TokenText {
   }
 
   /**
-   * Describes an expected set in at most three plain alternatives, or returns null when
-   * the set is too broad to be useful (the caller then uses a phrase for the context).
+   * Describes an expected set in at most three plain alternatives, or returns null when the set is
+   * too broad to be useful (the caller then uses a phrase for the context).
    */
   static String expectedSet(IntervalSet set) {
     Set<String> parts = new LinkedHashSet<>();
@@ -84,7 +103,9 @@ final class TokenText {
     if (parts.size() == 1) {
       return parts.get(0);
     }
-    return String.join(", ", parts.subList(0, parts.size() - 1)) + " or " + parts.get(parts.size() - 1);
+    return String.join(", ", parts.subList(0, parts.size() - 1))
+        + " or "
+        + parts.get(parts.size() - 1);
   }
 
   static String shorten(String text) {

@@ -31,5 +31,6 @@ public record TrainDecl(Optional<Name> name, List<BeamPath> paths, TextRange ran
   }
 
   /** {@code 150 mm} or {@code 2.8 mm in saline}. */
-  public record Distance(Arg.QuantityArg length, Optional<Arg.RefArg> medium, TextRange range) implements Step {}
+  public record Distance(Arg.QuantityArg length, Optional<Arg.RefArg> medium, TextRange range)
+      implements Step {}
 }

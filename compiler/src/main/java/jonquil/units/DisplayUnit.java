@@ -1,8 +1,8 @@
 package jonquil.units;
 
 /**
- * A unit QuantityFormat may print, and from what SI magnitude on it is preferred; kept apart
- * from the parser's catalog so that printing and reading check each other in tests.
+ * A unit QuantityFormat may print, and from what SI magnitude on it is preferred; kept apart from
+ * the parser's catalog so that printing and reading check each other in tests.
  *
  * @param from smallest |SI value| for which this unit is chosen from a ladder
  * @param spaced whether a space separates number and symbol ("500 mW" but "22.5°")

@@ -21,7 +21,8 @@ final class EditDistance {
       char ca = a.charAt(i - 1);
       for (int j = 1; j <= b.length(); j++) {
         char cb = b.charAt(j - 1);
-        int replace = ca == cb ? 0 : Character.toLowerCase(ca) == Character.toLowerCase(cb) ? 1 : EDIT;
+        int replace =
+            ca == cb ? 0 : Character.toLowerCase(ca) == Character.toLowerCase(cb) ? 1 : EDIT;
         cur[j] = Math.min(prev[j - 1] + replace, Math.min(prev[j], cur[j - 1]) + EDIT);
       }
       int[] t = prev;

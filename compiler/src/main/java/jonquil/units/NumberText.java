@@ -4,7 +4,9 @@ import java.math.BigDecimal;
 import java.math.MathContext;
 import java.math.RoundingMode;
 
-/** Prints numbers to four significant digits without trailing zeros, identically in every locale. */
+/**
+ * Prints numbers to four significant digits without trailing zeros, identically in every locale.
+ */
 final class NumberText {
   static final int SIGNIFICANT = 4;
   private static final MathContext FOUR = new MathContext(SIGNIFICANT, RoundingMode.HALF_EVEN);

@@ -2,7 +2,10 @@ package jonquil.units;
 
 import java.util.Objects;
 
-/** A measured amount held in coherent SI, so arithmetic and comparison never meet a prefix or offset. */
+/**
+ * A measured amount held in coherent SI, so arithmetic and comparison never meet a prefix or
+ * offset.
+ */
 public record Quantity(double si, Dimension dimension) {
   public Quantity {
     Objects.requireNonNull(dimension, "dimension");

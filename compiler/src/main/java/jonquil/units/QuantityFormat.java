@@ -7,9 +7,9 @@ import java.util.Objects;
 import java.util.Set;
 
 /**
- * Turns SI values back into the units people read ("500 mW", "1064 nm", "1 kW/cm²"), so that
- * SI stays inside and diagnostics speak the author's language. Every printed unit is one
- * {@link UnitParser} reads back.
+ * Turns SI values back into the units people read ("500 mW", "1064 nm", "1 kW/cm²"), so that SI
+ * stays inside and diagnostics speak the author's language. Every printed unit is one {@link
+ * UnitParser} reads back.
  */
 public final class QuantityFormat {
   private QuantityFormat() {}
@@ -22,8 +22,8 @@ public final class QuantityFormat {
 
   /**
    * The same value in other common units, for hovers and messages ("W" and "dBm" for a power,
-   * "W/cm²" and "W/m²" for an irradiance). Never repeats what {@link #format} prints; omits
-   * units in which the number would be unreadably large or small, except the coherent SI unit.
+   * "W/cm²" and "W/m²" for an irradiance). Never repeats what {@link #format} prints; omits units
+   * in which the number would be unreadably large or small, except the coherent SI unit.
    */
   public static List<String> alternatives(double si, Dimension dim) {
     Objects.requireNonNull(dim, "dim");
@@ -84,32 +84,62 @@ public final class QuantityFormat {
   private static List<DisplayUnit> extras(Dimension dim) {
     List<DisplayUnit> out = new ArrayList<>();
     if (dim.equals(Dimension.LENGTH)) {
-      out.addAll(List.of(DisplayUnit.of("mm", 1e-3), DisplayUnit.of("µm", 1e-6), DisplayUnit.of("nm", 1e-9)));
+      out.addAll(
+          List.of(
+              DisplayUnit.of("mm", 1e-3), DisplayUnit.of("µm", 1e-6), DisplayUnit.of("nm", 1e-9)));
     } else if (dim.equals(Dimension.AREA)) {
-      out.addAll(List.of(DisplayUnit.of("cm²", 1e-4), DisplayUnit.of("mm²", 1e-6), DisplayUnit.of("µm²", 1e-12)));
+      out.addAll(
+          List.of(
+              DisplayUnit.of("cm²", 1e-4),
+              DisplayUnit.of("mm²", 1e-6),
+              DisplayUnit.of("µm²", 1e-12)));
     } else if (dim.equals(Dimension.INVERSE_LENGTH)) {
       out.addAll(List.of(DisplayUnit.of("/m", 1), DisplayUnit.of("/mm", 1e3)));
     } else if (dim.equals(Dimension.POWER)) {
       out.addAll(List.of(DisplayUnit.of("mW", 1e-3), DisplayUnit.of("kW", 1e3)));
     } else if (dim.equals(Dimension.ENERGY)) {
-      out.addAll(List.of(DisplayUnit.of("mJ", 1e-3), DisplayUnit.of("µJ", 1e-6),
-          DisplayUnit.of("eV", UnitCatalog.lookup("eV").orElseThrow().unit().factor())));
+      out.addAll(
+          List.of(
+              DisplayUnit.of("mJ", 1e-3),
+              DisplayUnit.of("µJ", 1e-6),
+              DisplayUnit.of("eV", UnitCatalog.lookup("eV").orElseThrow().unit().factor())));
     } else if (dim.equals(Dimension.TIME)) {
-      out.addAll(List.of(DisplayUnit.of("ms", 1e-3), DisplayUnit.of("µs", 1e-6), DisplayUnit.of("ns", 1e-9),
-          DisplayUnit.of("ps", 1e-12), DisplayUnit.of("fs", 1e-15), DisplayUnit.of("min", 60), DisplayUnit.of("h", 3600)));
+      out.addAll(
+          List.of(
+              DisplayUnit.of("ms", 1e-3),
+              DisplayUnit.of("µs", 1e-6),
+              DisplayUnit.of("ns", 1e-9),
+              DisplayUnit.of("ps", 1e-12),
+              DisplayUnit.of("fs", 1e-15),
+              DisplayUnit.of("min", 60),
+              DisplayUnit.of("h", 3600)));
     } else if (dim.equals(Dimension.FREQUENCY)) {
-      out.addAll(List.of(DisplayUnit.of("kHz", 1e3), DisplayUnit.of("MHz", 1e6), DisplayUnit.of("GHz", 1e9),
-          DisplayUnit.of("THz", 1e12)));
+      out.addAll(
+          List.of(
+              DisplayUnit.of("kHz", 1e3),
+              DisplayUnit.of("MHz", 1e6),
+              DisplayUnit.of("GHz", 1e9),
+              DisplayUnit.of("THz", 1e12)));
     } else if (dim.equals(Dimension.ANGLE)) {
-      out.addAll(List.of(DisplayLadders.DEGREE, DisplayUnit.of("mrad", 1e-3), DisplayUnit.of("µrad", 1e-6)));
+      out.addAll(
+          List.of(
+              DisplayLadders.DEGREE, DisplayUnit.of("mrad", 1e-3), DisplayUnit.of("µrad", 1e-6)));
     } else if (dim.equals(Dimension.IRRADIANCE)) {
-      out.addAll(List.of(DisplayUnit.of("W/cm²", 1e4), DisplayUnit.of("kW/cm²", 1e7), DisplayUnit.of("MW/cm²", 1e10)));
+      out.addAll(
+          List.of(
+              DisplayUnit.of("W/cm²", 1e4),
+              DisplayUnit.of("kW/cm²", 1e7),
+              DisplayUnit.of("MW/cm²", 1e10)));
     } else if (dim.equals(Dimension.FLUENCE)) {
       out.addAll(List.of(DisplayUnit.of("J/cm²", 1e4), DisplayUnit.of("mJ/cm²", 1e1)));
     } else if (dim.equals(Dimension.LINEAR_POWER_DENSITY)) {
       out.add(DisplayUnit.of("W/cm", 1e2));
     } else if (dim.equals(Dimension.ELECTRIC_FIELD)) {
-      out.addAll(List.of(DisplayUnit.of("V/cm", 1e2), DisplayUnit.of("kV/cm", 1e5), DisplayUnit.of("MV/m", 1e6)));
+      out.addAll(
+          List.of(
+              DisplayUnit.of("V/cm", 1e2),
+              DisplayUnit.of("kV/cm", 1e5),
+              DisplayUnit.of("MV/m", 1e6)));
     } else if (dim.equals(Dimension.TEMPERATURE)) {
       out.add(new DisplayUnit("°C", 1, 273.15, 0, true));
       out.add(new DisplayUnit("°F", 5.0 / 9, 273.15 - 32.0 * 5 / 9, 0, true));

@@ -3,15 +3,16 @@ package jonquil.units;
 import java.util.Objects;
 
 /**
- * One written unit and how to bring its numbers into SI; the only place where a number
- * stops being "as the author wrote it" and becomes SI.
+ * One written unit and how to bring its numbers into SI; the only place where a number stops being
+ * "as the author wrote it" and becomes SI.
  *
- * <p>{@code offset} is non-zero only for temperature scales with a shifted zero (°C, °F).
- * For the logarithmic scales {@code factor} is the reference level (1 for dB and OD,
- * 1e-3 W for dBm) and {@code offset} must be 0.
+ * <p>{@code offset} is non-zero only for temperature scales with a shifted zero (°C, °F). For the
+ * logarithmic scales {@code factor} is the reference level (1 for dB and OD, 1e-3 W for dBm) and
+ * {@code offset} must be 0.
  */
 public record Unit(String symbol, double factor, double offset, Dimension dimension, Scale scale) {
-  private static final Unit DIMENSIONLESS = new Unit("", 1, 0, Dimension.DIMENSIONLESS, Scale.LINEAR);
+  private static final Unit DIMENSIONLESS =
+      new Unit("", 1, 0, Dimension.DIMENSIONLESS, Scale.LINEAR);
 
   public Unit {
     Objects.requireNonNull(symbol, "symbol");

@@ -7,8 +7,8 @@ import java.util.Map;
 import java.util.Optional;
 
 /**
- * The unit symbols Jonquil knows, one place for the parser, the "did you mean" hints and the
- * tests to agree on. Values: SI Brochure 9th ed. (2019) Tables 4 and 8; NIST SP 811 (2008) for °F.
+ * The unit symbols Jonquil knows, one place for the parser, the "did you mean" hints and the tests
+ * to agree on. Values: SI Brochure 9th ed. (2019) Tables 4 and 8; NIST SP 811 (2008) for °F.
  */
 final class UnitCatalog {
   /** How a symbol may be used inside a compound unit. */
@@ -17,7 +17,9 @@ final class UnitCatalog {
     PREFIXABLE,
     /** Combines freely but takes no prefix ("min", "deg"). */
     PLAIN,
-    /** Must stand alone: a logarithmic, offset or percentage scale has no meaning inside a product. */
+    /**
+     * Must stand alone: a logarithmic, offset or percentage scale has no meaning inside a product.
+     */
     ALONE
   }
 
@@ -42,7 +44,8 @@ final class UnitCatalog {
     // Exact since the 2019 redefinition fixed the elementary charge (SI Brochure 9th ed., Table 8).
     prefixable("eV", 1.602176634e-19, Dimension.ENERGY);
 
-    // Non-SI units accepted for use with the SI (SI Brochure 9th ed., Table 8); no prefixes on these.
+    // Non-SI units accepted for use with the SI (SI Brochure 9th ed., Table 8); no prefixes on
+    // these.
     plain("min", 60, Dimension.TIME);
     plain("h", 3600, Dimension.TIME);
     plain("d", 86400, Dimension.TIME);
@@ -63,12 +66,17 @@ final class UnitCatalog {
     alone(celsius);
     alone(new Unit("degC", 1, celsius.offset(), Dimension.TEMPERATURE, Scale.LINEAR));
     // t/°C = (t/°F − 32)/1.8, so T/K = (5/9)·t/°F + 273.15 − 32·5/9.
-    Unit fahrenheit = new Unit("°F", 5.0 / 9, 273.15 - 32.0 * 5 / 9, Dimension.TEMPERATURE, Scale.LINEAR);
+    Unit fahrenheit =
+        new Unit("°F", 5.0 / 9, 273.15 - 32.0 * 5 / 9, Dimension.TEMPERATURE, Scale.LINEAR);
     alone(fahrenheit);
-    alone(new Unit("degF", fahrenheit.factor(), fahrenheit.offset(), Dimension.TEMPERATURE, Scale.LINEAR));
+    alone(
+        new Unit(
+            "degF", fahrenheit.factor(), fahrenheit.offset(), Dimension.TEMPERATURE, Scale.LINEAR));
   }
 
-  /** Hint candidates, commonest first so that ties in edit distance favour what people usually mean. */
+  /**
+   * Hint candidates, commonest first so that ties in edit distance favour what people usually mean.
+   */
   private static final List<String> SUGGESTIONS = buildSuggestions();
 
   private UnitCatalog() {}
@@ -86,8 +94,8 @@ final class UnitCatalog {
   }
 
   /**
-   * The atom a symbol names. Exact symbols win over prefix + symbol, so "m" is the metre,
-   * "min" the minute and "cd" nothing (the day takes no prefix).
+   * The atom a symbol names. Exact symbols win over prefix + symbol, so "m" is the metre, "min" the
+   * minute and "cd" nothing (the day takes no prefix).
    */
   static Optional<Atom> lookup(String text) {
     Atom exact = EXACT.get(text);
@@ -102,8 +110,9 @@ final class UnitCatalog {
         Atom base = EXACT.get(text.substring(spelling.length()));
         if (base != null && base.use() == Use.PREFIXABLE) {
           Unit u = base.unit();
-          return Optional.of(new Atom(
-              Unit.linear(text, prefix.factor() * u.factor(), u.dimension()), Use.PREFIXABLE));
+          return Optional.of(
+              new Atom(
+                  Unit.linear(text, prefix.factor() * u.factor(), u.dimension()), Use.PREFIXABLE));
         }
       }
     }
@@ -112,7 +121,10 @@ final class UnitCatalog {
 
   /** The closest known symbol, if one is close enough to be a plausible slip. */
   static Optional<String> suggest(String unknown) {
-    int limit = unknown.length() <= 1 ? 1 : unknown.length() <= 3 ? EditDistance.EDIT : 2 * EditDistance.EDIT;
+    int limit =
+        unknown.length() <= 1
+            ? 1
+            : unknown.length() <= 3 ? EditDistance.EDIT : 2 * EditDistance.EDIT;
     String best = null;
     int bestDistance = Integer.MAX_VALUE;
     for (String candidate : SUGGESTIONS) {
@@ -132,15 +144,20 @@ final class UnitCatalog {
 
   /** Every symbol that takes SI prefixes. */
   static List<String> prefixableSymbols() {
-    return EXACT.entrySet().stream().filter(e -> e.getValue().use() == Use.PREFIXABLE).map(Map.Entry::getKey).toList();
+    return EXACT.entrySet().stream()
+        .filter(e -> e.getValue().use() == Use.PREFIXABLE)
+        .map(Map.Entry::getKey)
+        .toList();
   }
 
   private static List<String> buildSuggestions() {
-    List<String> out = new ArrayList<>(List.of(
-        "nm", "µm", "um", "mm", "cm", "m", "km", "W", "mW", "kW", "MW", "J", "mJ", "µJ", "uJ",
-        "s", "ns", "ps", "fs", "ms", "Hz", "kHz", "MHz", "GHz", "THz", "rad", "mrad", "µrad", "urad",
-        "deg", "K", "dB", "dBm", "OD", "%", "ppm", "wave", "waves", "min", "h", "A", "mA", "V", "kV",
-        "g", "kg", "eV"));
+    List<String> out =
+        new ArrayList<>(
+            List.of(
+                "nm", "µm", "um", "mm", "cm", "m", "km", "W", "mW", "kW", "MW", "J", "mJ", "µJ",
+                "uJ", "s", "ns", "ps", "fs", "ms", "Hz", "kHz", "MHz", "GHz", "THz", "rad", "mrad",
+                "µrad", "urad", "deg", "K", "dB", "dBm", "OD", "%", "ppm", "wave", "waves", "min",
+                "h", "A", "mA", "V", "kV", "g", "kg", "eV"));
     for (String symbol : EXACT.keySet()) {
       if (!out.contains(symbol)) {
         out.add(symbol);

@@ -2,7 +2,10 @@ package jonquil.units;
 
 import java.util.Objects;
 
-/** The outcome of reading a unit: a failure is an ordinary value with a message for people, never an exception. */
+/**
+ * The outcome of reading a unit: a failure is an ordinary value with a message for people, never an
+ * exception.
+ */
 public sealed interface UnitParse {
   /** The text named a unit. */
   record Ok(Unit unit) implements UnitParse {
@@ -11,7 +14,10 @@ public sealed interface UnitParse {
     }
   }
 
-  /** The text did not name a unit; {@code message} is one plain-English sentence fit for a diagnostic. */
+  /**
+   * The text did not name a unit; {@code message} is one plain-English sentence fit for a
+   * diagnostic.
+   */
   record Failure(String message) implements UnitParse {
     public Failure {
       Objects.requireNonNull(message, "message");

@@ -5,13 +5,13 @@ import java.util.List;
 import java.util.Optional;
 
 /**
- * Reads the compact unit written after a number ("mW", "W/cm2", "kV/cm", "µm^2") into a
- * {@link Unit}; every way the text can be wrong comes back as a {@link UnitParse.Failure}.
+ * Reads the compact unit written after a number ("mW", "W/cm2", "kV/cm", "µm^2") into a {@link
+ * Unit}; every way the text can be wrong comes back as a {@link UnitParse.Failure}.
  *
  * <p>Grammar: {@code ["/" | "1/"] factor (("/" | "*" | "·") factor)*}, where a factor is a symbol
- * followed by an optional exponent: trailing digits ("cm2"), superscripts ("cm²", "m⁻¹") or
- * "^" and a signed integer ("m^-1"). A "/" divides only the factor right after it, so
- * "W/m/s" is W·m⁻¹·s⁻¹ and "W/cm*s" is W·cm⁻¹·s.
+ * followed by an optional exponent: trailing digits ("cm2"), superscripts ("cm²", "m⁻¹") or "^" and
+ * a signed integer ("m^-1"). A "/" divides only the factor right after it, so "W/m/s" is W·m⁻¹·s⁻¹
+ * and "W/cm*s" is W·cm⁻¹·s.
  */
 public final class UnitParser {
   /** Beyond this no real unit goes, and prefix powers would overflow a double. */
@@ -51,8 +51,12 @@ public final class UnitParser {
     }
   }
 
-  /** Units written in specs are few and repeat; parsing is pure, so each text is read once (bounded: input may be hostile). */
+  /**
+   * Units written in specs are few and repeat; parsing is pure, so each text is read once (bounded:
+   * input may be hostile).
+   */
   private static final int CACHE_LIMIT = 4096;
+
   private static final java.util.concurrent.ConcurrentHashMap<String, UnitParse> CACHE =
       new java.util.concurrent.ConcurrentHashMap<>();
 
@@ -99,9 +103,10 @@ public final class UnitParser {
       if (symbol.isEmpty()) {
         char c = in.peek();
         if (isOperator(c)) {
-          return fail(in.pos == 0
-              ? "missing unit before '" + c + "' in '" + compact + "'"
-              : "missing unit between two operators in '" + compact + "'");
+          return fail(
+              in.pos == 0
+                  ? "missing unit before '" + c + "' in '" + compact + "'"
+                  : "missing unit between two operators in '" + compact + "'");
         }
         return fail("unexpected character '" + c + "' in '" + compact + "'");
       }
@@ -120,11 +125,25 @@ public final class UnitParser {
       } else if (c == '*' || c == '·' || c == '⋅') {
         divided = false;
       } else if (c == '-' || c == '−') {
-        return fail("unexpected '" + c + "' after '" + written + "' in '" + compact
-            + "'; write a negative exponent as '" + symbol + "^-1'");
+        return fail(
+            "unexpected '"
+                + c
+                + "' after '"
+                + written
+                + "' in '"
+                + compact
+                + "'; write a negative exponent as '"
+                + symbol
+                + "^-1'");
       } else if (isSymbolChar(c)) {
-        return fail("unexpected '" + compact.substring(in.pos) + "' after '" + written + "' in '"
-            + compact + "'; join units with '*' or '/'");
+        return fail(
+            "unexpected '"
+                + compact.substring(in.pos)
+                + "' after '"
+                + written
+                + "' in '"
+                + compact
+                + "'; join units with '*' or '/'");
       } else {
         return fail("unexpected character '" + c + "' in '" + compact + "'");
       }
@@ -138,7 +157,8 @@ public final class UnitParser {
     for (Term t : terms) {
       Optional<UnitCatalog.Atom> atom = UnitCatalog.lookup(t.symbol());
       if (atom.isEmpty()) {
-        String hint = UnitCatalog.suggest(t.symbol()).map(s -> "; did you mean '" + s + "'?").orElse("");
+        String hint =
+            UnitCatalog.suggest(t.symbol()).map(s -> "; did you mean '" + s + "'?").orElse("");
         return fail("unknown unit '" + t.symbol() + "'" + hint);
       }
       atoms.add(atom.get());
@@ -148,7 +168,8 @@ public final class UnitParser {
         continue;
       }
       Term t = terms.get(i);
-      String advice = atoms.get(i).unit().offset() != 0 ? "; use 'K' for temperature differences" : "";
+      String advice =
+          atoms.get(i).unit().offset() != 0 ? "; use 'K' for temperature differences" : "";
       if (terms.size() > 1 || t.divided()) {
         return fail("'" + t.symbol() + "' cannot be combined with other units" + advice);
       }
@@ -167,7 +188,8 @@ public final class UnitParser {
       dim = dim.times(u.dimension().pow(power));
     }
     if (factor == 0 || !Double.isFinite(factor)) {
-      return fail("unit '" + compact + "' is too " + (factor == 0 ? "small" : "large") + " to work with");
+      return fail(
+          "unit '" + compact + "' is too " + (factor == 0 ? "small" : "large") + " to work with");
     }
     return new UnitParse.Ok(new Unit(compact, factor, 0, dim, Scale.LINEAR));
   }
@@ -226,11 +248,18 @@ public final class UnitParser {
     // Long runs of digits are out of range anyway; checking length first keeps parseInt safe.
     int value = digits.length() > 3 ? Integer.MAX_VALUE : Integer.parseInt(digits.toString());
     if (value == 0) {
-      return Exponent.error("exponent '" + written + "' in '" + in.text + "' is zero, which cancels the unit");
+      return Exponent.error(
+          "exponent '" + written + "' in '" + in.text + "' is zero, which cancels the unit");
     }
     if (value > MAX_EXPONENT) {
       return Exponent.error(
-          "exponent '" + written + "' in '" + in.text + "' is out of range (at most " + MAX_EXPONENT + ")");
+          "exponent '"
+              + written
+              + "' in '"
+              + in.text
+              + "' is out of range (at most "
+              + MAX_EXPONENT
+              + ")");
     }
     return Exponent.ok(negative ? -value : value);
   }

@@ -12,13 +12,16 @@ class BeamAlongTheTrainTest {
   @Test
   void aCollimatedBeamFocusesNearTheFocalPlaneToTheTextbookSpot() {
     // w_f ≈ λ f / (π w0) for a collimated TEM00 beam with z_R ≫ f
-    // (Saleh & Teich, Fundamentals of Photonics, 2nd ed. 2007, §3.2, eq. 3.2-14 form). [section numbers from memory]
-    TrainSolution s = Bench.solve("""
-        source s { wavelength 1064 nm; power 1 W; beam waist 2 mm }
-        lens l { focal 100 mm }
-        probe focus
-        train t { s -> 10 mm -> l -> 100 mm -> focus }
-        """);
+    // (Saleh & Teich, Fundamentals of Photonics, 2nd ed. 2007, §3.2, eq. 3.2-14 form). [section
+    // numbers from memory]
+    TrainSolution s =
+        Bench.solve(
+            """
+            source s { wavelength 1064 nm; power 1 W; beam waist 2 mm }
+            lens l { focal 100 mm }
+            probe focus
+            train t { s -> 10 mm -> l -> 100 mm -> focus }
+            """);
     double expected = 1064e-9 * 0.1 / (Math.PI * 2e-3);
     double radius = s.port("focus").orElseThrow().exposure().orElseThrow().beamRadius();
     assertEquals(expected, radius, expected * 0.01);
@@ -35,7 +38,8 @@ class BeamAlongTheTrainTest {
 
   @Test
   void aGaussianPeakIsTwiceTheAverageIrradiance() {
-    // I(0) = 2P/(πw²) for a Gaussian beam of 1/e² radius w (Siegman, Lasers, 1986, §17.1). [section numbers from memory]
+    // I(0) = 2P/(πw²) for a Gaussian beam of 1/e² radius w (Siegman, Lasers, 1986, §17.1). [section
+    // numbers from memory]
     Exposure e = Exposure.of(1.0, 1e-3, java.util.Optional.empty(), 1);
     assertEquals(2 / (Math.PI * 1e-6), e.peakIrradiance(), 1e-6);
     assertEquals(e.peakIrradiance() / 2, e.averageIrradiance(), 1e-9);
@@ -53,12 +57,14 @@ class BeamAlongTheTrainTest {
   void anApertureOfTheBeamDiameterPassesEightySixPercentAndIsFlagged() {
     // 1 − e^{−2} of a Gaussian passes a circular aperture of its 1/e² diameter
     // (Saleh & Teich, 2nd ed. 2007, §3.1). [section numbers from memory]
-    Result r = Bench.check("""
-        source s { wavelength 633 nm; power 1 W; beam waist 1 mm }
-        aperture iris { diameter 2 mm }
-        probe p
-        train t { s -> 1 mm -> iris -> 1 mm -> p }
-        """);
+    Result r =
+        Bench.check(
+            """
+            source s { wavelength 633 nm; power 1 W; beam waist 1 mm }
+            aperture iris { diameter 2 mm }
+            probe p
+            train t { s -> 1 mm -> iris -> 1 mm -> p }
+            """);
     TrainSolution s = r.solutions().values().iterator().next();
     assertEquals(1 - Math.exp(-2), s.port("p").orElseThrow().power(), 1e-4);
     assertTrue(r.diagnostics().stream().anyMatch(d -> d.code() == DiagnosticCode.APERTURE_CLIPS));

@@ -20,9 +20,9 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 
 /**
- * Every watt is accounted for: source power = absorbed + stopped + observed at path ends
- * + stray, to 1e-9 of the source power, for every sample and for random trains; and no
- * passive element puts out more than it takes in.
+ * Every watt is accounted for: source power = absorbed + stopped + observed at path ends + stray,
+ * to 1e-9 of the source power, for every sample and for random trains; and no passive element puts
+ * out more than it takes in.
  */
 class ConservationTest {
   static Stream<Path> benches() throws IOException {
@@ -46,63 +46,151 @@ class ConservationTest {
     TrainSolution s = Bench.solve(spec);
     assertTrue(s.conservationError() < 1e-9, "error " + s.conservationError() + " for\n" + spec);
     assertPassive(s);
-    s.ports().values().forEach(v -> {
-      double dop = v.light().dop();
-      assertTrue(dop >= 0 && dop <= 1 + 1e-12, "DOP " + dop + " at " + v.key() + " for\n" + spec);
-    });
+    s.ports()
+        .values()
+        .forEach(
+            v -> {
+              double dop = v.light().dop();
+              assertTrue(
+                  dop >= 0 && dop <= 1 + 1e-12, "DOP " + dop + " at " + v.key() + " for\n" + spec);
+            });
   }
 
   static void assertPassive(TrainSolution s) {
     for (ElementBudget b : s.budgets()) {
       double out = b.out().values().stream().mapToDouble(Double::doubleValue).sum() + b.ghosts();
-      assertFalse(out > b.in() * (1 + 1e-12) + 1e-15, b.element() + " puts out " + out + " W from " + b.in() + " W");
-      assertTrue(Math.abs(b.in() - out - b.absorbed()) <= 1e-12 * Math.max(1, b.in()), b.element() + " leaks");
+      assertFalse(
+          out > b.in() * (1 + 1e-12) + 1e-15,
+          b.element() + " puts out " + out + " W from " + b.in() + " W");
+      assertTrue(
+          Math.abs(b.in() - out - b.absorbed()) <= 1e-12 * Math.max(1, b.in()),
+          b.element() + " leaks");
     }
   }
 
-  /** A source, then a random chain of passive elements with random settings, ending at a probe or dump. */
+  /**
+   * A source, then a random chain of passive elements with random settings, ending at a probe or
+   * dump.
+   */
   static String randomSpec(SplittableRandom r) {
     StringBuilder decl = new StringBuilder();
     StringBuilder path = new StringBuilder("src");
     List<String> branches = new ArrayList<>();
-    String[] states = {"linear %.1f deg", "circular right", "circular left", "unpolarized", "partial 0.6 linear %.1f deg",
-        "elliptical %.1f deg 0.3"};
-    decl.append(String.format(Locale.ROOT, "source src { wavelength %.0f nm; power %.3f W; polarization %s }%n",
-        400 + r.nextDouble() * 1200, 0.001 + r.nextDouble() * 10,
-        String.format(Locale.ROOT, states[r.nextInt(states.length)], r.nextDouble() * 180)));
-    decl.append("material g = index 1.").append(4 + r.nextInt(4)).append(" k 0.0000").append(1 + r.nextInt(9)).append('\n');
+    String[] states = {
+      "linear %.1f deg",
+      "circular right",
+      "circular left",
+      "unpolarized",
+      "partial 0.6 linear %.1f deg",
+      "elliptical %.1f deg 0.3"
+    };
+    decl.append(
+        String.format(
+            Locale.ROOT,
+            "source src { wavelength %.0f nm; power %.3f W; polarization %s }%n",
+            400 + r.nextDouble() * 1200,
+            0.001 + r.nextDouble() * 10,
+            String.format(Locale.ROOT, states[r.nextInt(states.length)], r.nextDouble() * 180)));
+    decl.append("material g = index 1.")
+        .append(4 + r.nextInt(4))
+        .append(" k 0.0000")
+        .append(1 + r.nextInt(9))
+        .append('\n');
     int count = 1 + r.nextInt(12);
     for (int i = 0; i < count; i++) {
       String name = "e" + i;
       double angle = r.nextDouble() * 180;
       String line;
       switch (r.nextInt(11)) {
-        case 0 -> line = String.format(Locale.ROOT, "polarizer %s { axis %.2f deg; extinction %.0f; transmission %.0f %% }", name,
-            angle, 10 + r.nextDouble() * 1e5, 50 + r.nextDouble() * 50);
-        case 1 -> line = String.format(Locale.ROOT, "waveplate %s { retardance %.3f wave at 800 nm; fast_axis %.2f deg }", name,
-            r.nextDouble(), angle);
-        case 2 -> line = String.format(Locale.ROOT, "rotator %s { rotation %.2f deg; transmission 97 %% }", name, angle);
-        case 3 -> line = String.format(Locale.ROOT, "mirror %s { metal %s; aoi %.1f deg; plane %.1f deg }", name,
-            new String[] {"silver", "gold", "aluminium", "copper"}[r.nextInt(4)], r.nextDouble() * 80, angle);
-        case 4 -> line = String.format(Locale.ROOT, "window %s { material g; thickness %.2f mm; aoi %.1f deg; plane %.1f deg }",
-            name, 0.1 + r.nextDouble() * 20, r.nextDouble() * 80, angle);
-        case 5 -> line = String.format(Locale.ROOT, "lens %s { focal %.0f mm; material g }", name, 10 + r.nextDouble() * 200);
-        case 6 -> line = String.format(Locale.ROOT, "filter %s { od OD %.2f }", name, r.nextDouble() * 3);
-        case 7 -> line = String.format(Locale.ROOT, "depolarizer %s { depolarization %.0f %% }", name, r.nextDouble() * 100);
-        case 8 -> line = String.format(Locale.ROOT, "rhomb %s { material g; aoi %.1f deg; axis %.1f deg }", name,
-            45 + r.nextDouble() * 40, angle);
+        case 0 ->
+            line =
+                String.format(
+                    Locale.ROOT,
+                    "polarizer %s { axis %.2f deg; extinction %.0f; transmission %.0f %% }",
+                    name,
+                    angle,
+                    10 + r.nextDouble() * 1e5,
+                    50 + r.nextDouble() * 50);
+        case 1 ->
+            line =
+                String.format(
+                    Locale.ROOT,
+                    "waveplate %s { retardance %.3f wave at 800 nm; fast_axis %.2f deg }",
+                    name,
+                    r.nextDouble(),
+                    angle);
+        case 2 ->
+            line =
+                String.format(
+                    Locale.ROOT,
+                    "rotator %s { rotation %.2f deg; transmission 97 %% }",
+                    name,
+                    angle);
+        case 3 ->
+            line =
+                String.format(
+                    Locale.ROOT,
+                    "mirror %s { metal %s; aoi %.1f deg; plane %.1f deg }",
+                    name,
+                    new String[] {"silver", "gold", "aluminium", "copper"}[r.nextInt(4)],
+                    r.nextDouble() * 80,
+                    angle);
+        case 4 ->
+            line =
+                String.format(
+                    Locale.ROOT,
+                    "window %s { material g; thickness %.2f mm; aoi %.1f deg; plane %.1f deg }",
+                    name,
+                    0.1 + r.nextDouble() * 20,
+                    r.nextDouble() * 80,
+                    angle);
+        case 5 ->
+            line =
+                String.format(
+                    Locale.ROOT,
+                    "lens %s { focal %.0f mm; material g }",
+                    name,
+                    10 + r.nextDouble() * 200);
+        case 6 ->
+            line = String.format(Locale.ROOT, "filter %s { od OD %.2f }", name, r.nextDouble() * 3);
+        case 7 ->
+            line =
+                String.format(
+                    Locale.ROOT,
+                    "depolarizer %s { depolarization %.0f %% }",
+                    name,
+                    r.nextDouble() * 100);
+        case 8 ->
+            line =
+                String.format(
+                    Locale.ROOT,
+                    "rhomb %s { material g; aoi %.1f deg; axis %.1f deg }",
+                    name,
+                    45 + r.nextDouble() * 40,
+                    angle);
         case 9 -> {
-          line = String.format(Locale.ROOT, "splitter %s { polarizing; extinction %.0f; aoi 45 deg; plane %.1f deg }", name,
-              10 + r.nextDouble() * 1e4, angle);
+          line =
+              String.format(
+                  Locale.ROOT,
+                  "splitter %s { polarizing; extinction %.0f; aoi 45 deg; plane %.1f deg }",
+                  name,
+                  10 + r.nextDouble() * 1e4,
+                  angle);
           if (r.nextBoolean()) {
             branches.add(name + ".reflected -> 10 mm -> d" + i);
             decl.append("dump d").append(i).append('\n');
           }
         }
-        default -> line = String.format(Locale.ROOT, "splitter %s { ratio %.0f %% }", name, r.nextDouble() * 100);
+        default ->
+            line =
+                String.format(
+                    Locale.ROOT, "splitter %s { ratio %.0f %% }", name, r.nextDouble() * 100);
       }
       decl.append(line).append('\n');
-      path.append(" -> ").append(String.format(Locale.ROOT, "%.1f mm", 1 + r.nextDouble() * 500)).append(" -> ").append(name);
+      path.append(" -> ")
+          .append(String.format(Locale.ROOT, "%.1f mm", 1 + r.nextDouble() * 500))
+          .append(" -> ")
+          .append(name);
     }
     decl.append(r.nextBoolean() ? "probe end\n" : "dump end\n");
     path.append(" -> 10 mm -> end");

@@ -10,10 +10,10 @@ import org.junit.jupiter.api.RepeatedTest;
 import org.junit.jupiter.api.RepetitionInfo;
 
 /**
- * The Jones matrix the hover shows for a port is the one the analysis applied: on seeded
- * random chains, J·ρ·J† of the light arriving at an element equals the light leaving its
- * port. Checked up to the first mirror, while the beam's frame is the table frame (after a
- * reflection the solution reports light in the table frame, the matrices in the beam's).
+ * The Jones matrix the hover shows for a port is the one the analysis applied: on seeded random
+ * chains, J·ρ·J† of the light arriving at an element equals the light leaving its port. Checked up
+ * to the first mirror, while the beam's frame is the table frame (after a reflection the solution
+ * reports light in the table frame, the matrices in the beam's).
  */
 class JonesReportTest {
   @RepeatedTest(60)
@@ -43,10 +43,13 @@ class JonesReportTest {
       double[] actual = s.port(name + "." + j.port()).orElseThrow().light().stokes();
       double scale = Math.max(in.power(), 1e-300);
       for (int k = 0; k < 4; k++) {
-        assertEquals(expected[k], actual[k], 1e-9 * scale, "S" + k + " after " + name + " in\n" + spec);
+        assertEquals(
+            expected[k], actual[k], 1e-9 * scale, "S" + k + " after " + name + " in\n" + spec);
       }
       checked++;
     }
-    assertTrue(checked > 0 || spec.contains("mirror e0") || spec.contains("depolarizer e0"), "nothing checked in\n" + spec);
+    assertTrue(
+        checked > 0 || spec.contains("mirror e0") || spec.contains("depolarizer e0"),
+        "nothing checked in\n" + spec);
   }
 }

@@ -51,7 +51,8 @@ class CliTest {
   void anUnknownFlagIsAUsageError() {
     CliRun run = CliRun.of(dir, "check", "--frobnicate", "a.jonq");
     assertEquals(2, run.exitCode());
-    assertEquals("jonquil: unknown option: '--frobnicate'\ntry 'jonquil check --help'\n", run.err());
+    assertEquals(
+        "jonquil: unknown option: '--frobnicate'\ntry 'jonquil check --help'\n", run.err());
     assertEquals("", run.out());
   }
 
@@ -59,7 +60,9 @@ class CliTest {
   void anUnknownFormatIsAUsageErrorNamingTheChoices() {
     CliRun run = CliRun.of(dir, "check", "--format", "xml", "a.jonq");
     assertEquals(2, run.exitCode());
-    assertTrue(run.err().startsWith("jonquil: ") && run.err().contains("unknown format 'xml' (expected one of text, json, sarif)"),
+    assertTrue(
+        run.err().startsWith("jonquil: ")
+            && run.err().contains("unknown format 'xml' (expected one of text, json, sarif)"),
         run.err());
     assertTrue(run.err().endsWith("try 'jonquil check --help'\n"), run.err());
   }
@@ -104,7 +107,9 @@ class CliTest {
     spec("clean.jonq");
     CliRun run = CliRun.of(dir, "check", "clean.jonq");
     assertEquals(0, run.exitCode(), run.err());
-    assertEquals("checked 1 file: 0 errors, 0 warnings, 0 notes; requirements: 0 pass, 0 fail, 0 not evaluated\n",
+    assertEquals(
+        "checked 1 file: 0 errors, 0 warnings, 0 notes; requirements: 0 pass, 0 fail, 0 not"
+            + " evaluated\n",
         run.out());
     assertEquals("", run.err());
   }
@@ -117,7 +122,8 @@ class CliTest {
     Files.writeString(dir.resolve("specs/notes.txt"), "not a spec");
     CliRun run = CliRun.of(dir, "check", "--format", "json", "specs");
     assertEquals(0, run.exitCode(), run.err());
-    assertEquals(3, JsonParser.parseString(run.out()).getAsJsonObject().getAsJsonArray("files").size());
+    assertEquals(
+        3, JsonParser.parseString(run.out()).getAsJsonObject().getAsJsonArray("files").size());
   }
 
   @Test
@@ -132,9 +138,13 @@ class CliTest {
   void jsonAndSarifGoToStdoutAsOneDocument() throws IOException {
     spec("clean.jonq");
     CliRun json = CliRun.of(dir, "check", "--format", "json", "clean.jonq");
-    assertEquals("jonquil.check/1", JsonParser.parseString(json.out()).getAsJsonObject().get("schema").getAsString());
+    assertEquals(
+        "jonquil.check/1",
+        JsonParser.parseString(json.out()).getAsJsonObject().get("schema").getAsString());
     CliRun sarif = CliRun.of(dir, "check", "--format", "sarif", "clean.jonq");
-    assertEquals("2.1.0", JsonParser.parseString(sarif.out()).getAsJsonObject().get("version").getAsString());
+    assertEquals(
+        "2.1.0",
+        JsonParser.parseString(sarif.out()).getAsJsonObject().get("version").getAsString());
   }
 
   @Test
@@ -148,9 +158,16 @@ class CliTest {
   @Test
   void theRootOptionAnchorsReportPaths() throws IOException {
     spec("proj/specs/clean.jonq");
-    CliRun run = CliRun.of(dir, "check", "--format", "json", "--root", "proj", "proj/specs/clean.jonq");
-    String path = JsonParser.parseString(run.out()).getAsJsonObject().getAsJsonArray("files").get(0)
-        .getAsJsonObject().get("path").getAsString();
+    CliRun run =
+        CliRun.of(dir, "check", "--format", "json", "--root", "proj", "proj/specs/clean.jonq");
+    String path =
+        JsonParser.parseString(run.out())
+            .getAsJsonObject()
+            .getAsJsonArray("files")
+            .get(0)
+            .getAsJsonObject()
+            .get("path")
+            .getAsString();
     assertEquals("specs/clean.jonq", path);
   }
 }

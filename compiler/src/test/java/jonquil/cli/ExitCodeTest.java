@@ -5,21 +5,23 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
+import java.util.OptionalDouble;
 import jonquil.Result;
 import jonquil.analysis.RequirementOutcome;
 import jonquil.analysis.RequirementStatus;
 import jonquil.diag.Diagnostic;
 import jonquil.diag.DiagnosticCode;
 import jonquil.source.TextRange;
-import java.util.OptionalDouble;
 import org.junit.jupiter.api.Test;
 
 class ExitCodeTest {
   private static final Path FILE = Path.of("a.jonq").toAbsolutePath();
 
   private static Result with(DiagnosticCode... codes) {
-    List<Diagnostic> diagnostics = java.util.Arrays.stream(codes)
-        .map(c -> Diagnostic.of(c, FILE, TextRange.EMPTY, "finding")).toList();
+    List<Diagnostic> diagnostics =
+        java.util.Arrays.stream(codes)
+            .map(c -> Diagnostic.of(c, FILE, TextRange.EMPTY, "finding"))
+            .toList();
     return new Result(Map.of(), diagnostics, List.of());
   }
 
@@ -27,9 +29,21 @@ class ExitCodeTest {
   private static final Result ERROR = with(DiagnosticCode.UNKNOWN_UNIT);
   private static final Result WARNING = with(DiagnosticCode.EMPTY_TRAIN);
   private static final Result NOTE = with(DiagnosticCode.TOO_MANY_ERRORS);
-  private static final Result FAILED_REQUIREMENT = new Result(Map.of(), List.of(), List.of(
-      new RequirementOutcome(FILE, TextRange.EMPTY, "power <= 1 mW", RequirementStatus.FAIL,
-          OptionalDouble.of(0.002), OptionalDouble.of(0.001), OptionalDouble.of(-0.001), "W", "")));
+  private static final Result FAILED_REQUIREMENT =
+      new Result(
+          Map.of(),
+          List.of(),
+          List.of(
+              new RequirementOutcome(
+                  FILE,
+                  TextRange.EMPTY,
+                  "power <= 1 mW",
+                  RequirementStatus.FAIL,
+                  OptionalDouble.of(0.002),
+                  OptionalDouble.of(0.001),
+                  OptionalDouble.of(-0.001),
+                  "W",
+                  "")));
 
   @Test
   void aCleanCheckExitsZero() {

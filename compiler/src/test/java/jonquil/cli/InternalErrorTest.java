@@ -16,7 +16,8 @@ class InternalErrorTest {
   /** Stands in for a subcommand with a bug, the way the lsp module adds its own. */
   @Command(name = "explode")
   static final class Explode implements Callable<Integer> {
-    @Option(names = "--debug") boolean debug;
+    @Option(names = "--debug")
+    boolean debug;
 
     @Override
     public Integer call() {
@@ -28,7 +29,9 @@ class InternalErrorTest {
   void anInternalErrorIsOneLineExitingTwo() {
     CliRun run = CliRun.withCommands(dir, new Object[] {new Explode()}, "explode");
     assertEquals(2, run.exitCode());
-    assertEquals("jonquil: internal error: beam went sideways (run again with --debug for the stack trace)\n",
+    assertEquals(
+        "jonquil: internal error: beam went sideways (run again with --debug for the stack"
+            + " trace)\n",
         run.err());
   }
 

@@ -38,22 +38,28 @@ class JsonReportTest {
   void namesItsSchemaVersionAndTool() {
     JsonObject report = report();
     assertEquals("jonquil.check/1", report.get("schema").getAsString());
-    assertEquals(ToolVersion.current(), report.getAsJsonObject("tool").get("version").getAsString());
+    assertEquals(
+        ToolVersion.current(), report.getAsJsonObject("tool").get("version").getAsString());
   }
 
   @Test
   void keysComeInTheDocumentedOrderWithTwoSpaceIndent() {
     String json = JsonReport.render(SampleRun.run());
-    assertTrue(json.startsWith("{\n  \"schema\": \"jonquil.check/1\",\n  \"tool\": {\n    \"name\""), json);
+    assertTrue(
+        json.startsWith("{\n  \"schema\": \"jonquil.check/1\",\n  \"tool\": {\n    \"name\""),
+        json);
     List<String> keys = List.copyOf(report().keySet());
-    assertEquals(List.of("schema", "tool", "files", "diagnostics", "requirements", "values", "summary"), keys);
+    assertEquals(
+        List.of("schema", "tool", "files", "diagnostics", "requirements", "values", "summary"),
+        keys);
   }
 
   @Test
   void filesAreSortedAndRelativeToTheRoot() {
     JsonArray files = report().getAsJsonArray("files");
     assertEquals("specs/main.jonq", files.get(0).getAsJsonObject().get("path").getAsString());
-    assertEquals("specs/parts lib/Lïnsen.jonq", files.get(1).getAsJsonObject().get("path").getAsString());
+    assertEquals(
+        "specs/parts lib/Lïnsen.jonq", files.get(1).getAsJsonObject().get("path").getAsString());
   }
 
   @Test
@@ -71,9 +77,11 @@ class JsonReportTest {
   @Test
   void messagesKeepQuotesAndNonAsciiExactly() {
     JsonObject duplicate = report().getAsJsonArray("diagnostics").get(1).getAsJsonObject();
-    assertEquals("the name 'laser' is already declared — pick another \"name\" <here>",
+    assertEquals(
+        "the name 'laser' is already declared — pick another \"name\" <here>",
         duplicate.get("message").getAsString());
-    assertFalse(JsonReport.render(SampleRun.run()).contains("\\u003c"), "HTML escaping must be off");
+    assertFalse(
+        JsonReport.render(SampleRun.run()).contains("\\u003c"), "HTML escaping must be off");
   }
 
   @Test

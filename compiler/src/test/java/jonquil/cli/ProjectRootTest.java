@@ -25,7 +25,8 @@ class ProjectRootTest {
   void aGitFileCountsLikeAGitDirectoryAsInWorktrees() throws IOException {
     Files.createDirectories(dir.resolve("wt/specs"));
     Files.writeString(dir.resolve("wt/.git"), "gitdir: /elsewhere\n");
-    assertEquals(dir.resolve("wt"), ProjectRoot.discover(dir.resolve("wt/specs"), dir.resolve("wt/specs")));
+    assertEquals(
+        dir.resolve("wt"), ProjectRoot.discover(dir.resolve("wt/specs"), dir.resolve("wt/specs")));
   }
 
   @Test

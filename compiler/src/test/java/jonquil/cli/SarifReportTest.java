@@ -24,8 +24,11 @@ class SarifReportTest {
   }
 
   private static JsonObject sarifRun(CheckRun run) {
-    return JsonParser.parseString(SarifReport.render(run)).getAsJsonObject()
-        .getAsJsonArray("runs").get(0).getAsJsonObject();
+    return JsonParser.parseString(SarifReport.render(run))
+        .getAsJsonObject()
+        .getAsJsonArray("runs")
+        .get(0)
+        .getAsJsonObject();
   }
 
   private static List<JsonObject> results(JsonObject run) {
@@ -41,11 +44,16 @@ class SarifReportTest {
 
   @Test
   void outputWithUnreadableInputsIsValidSarif210AndMarkedUnsuccessful() {
-    CheckRun partial = new CheckRun(SampleRun.result(), SampleRun.ROOT, SampleRun.ROOT,
-        List.of("jonquil: cannot read 'gone.jonq': no such file"));
+    CheckRun partial =
+        new CheckRun(
+            SampleRun.result(),
+            SampleRun.ROOT,
+            SampleRun.ROOT,
+            List.of("jonquil: cannot read 'gone.jonq': no such file"));
     String sarif = SarifReport.render(partial);
     assertEquals(List.of(), sarif210().errors(sarif));
-    JsonObject invocation = sarifRun(partial).getAsJsonArray("invocations").get(0).getAsJsonObject();
+    JsonObject invocation =
+        sarifRun(partial).getAsJsonArray("invocations").get(0).getAsJsonObject();
     assertFalse(invocation.get("executionSuccessful").getAsBoolean());
   }
 
@@ -53,21 +61,31 @@ class SarifReportTest {
   void theSchemaCheckRejectsABrokenDocument() {
     JsonObject broken = SarifReport.build(SampleRun.run());
     broken.addProperty("version", "2.0.0");
-    broken.getAsJsonArray("runs").get(0).getAsJsonObject()
-        .getAsJsonArray("results").get(0).getAsJsonObject().addProperty("level", "fatal");
+    broken
+        .getAsJsonArray("runs")
+        .get(0)
+        .getAsJsonObject()
+        .getAsJsonArray("results")
+        .get(0)
+        .getAsJsonObject()
+        .addProperty("level", "fatal");
     assertFalse(sarif210().errors(broken.toString()).isEmpty());
   }
 
   @Test
   void declaresOneRulePerDiagnosticCodeInDeclarationOrder() {
-    JsonArray rules = sarifRun(SampleRun.run()).getAsJsonObject("tool").getAsJsonObject("driver")
-        .getAsJsonArray("rules");
+    JsonArray rules =
+        sarifRun(SampleRun.run())
+            .getAsJsonObject("tool")
+            .getAsJsonObject("driver")
+            .getAsJsonArray("rules");
     assertEquals(DiagnosticCode.values().length, rules.size());
     for (DiagnosticCode code : DiagnosticCode.values()) {
       JsonObject rule = rules.get(code.ordinal()).getAsJsonObject();
       assertEquals(code.id(), rule.get("id").getAsString());
       assertEquals(code.ruleName(), rule.get("name").getAsString());
-      assertEquals(code.summary(), rule.getAsJsonObject("shortDescription").get("text").getAsString());
+      assertEquals(
+          code.summary(), rule.getAsJsonObject("shortDescription").get("text").getAsString());
     }
   }
 
@@ -89,12 +107,21 @@ class SarifReportTest {
   @Test
   void locationsAreRelativeToTheRootWithForwardSlashesAndEncoded() {
     JsonObject run = sarifRun(SampleRun.run());
-    String rootUri = run.getAsJsonObject("originalUriBaseIds").getAsJsonObject("SRCROOT").get("uri").getAsString();
+    String rootUri =
+        run.getAsJsonObject("originalUriBaseIds")
+            .getAsJsonObject("SRCROOT")
+            .get("uri")
+            .getAsString();
     assertTrue(rootUri.startsWith("file:") && rootUri.endsWith("/"), rootUri);
     List<String> uris = new ArrayList<>();
     for (JsonObject result : results(run)) {
-      JsonObject artifact = result.getAsJsonArray("locations").get(0).getAsJsonObject()
-          .getAsJsonObject("physicalLocation").getAsJsonObject("artifactLocation");
+      JsonObject artifact =
+          result
+              .getAsJsonArray("locations")
+              .get(0)
+              .getAsJsonObject()
+              .getAsJsonObject("physicalLocation")
+              .getAsJsonObject("artifactLocation");
       assertEquals("SRCROOT", artifact.get("uriBaseId").getAsString());
       uris.add(artifact.get("uri").getAsString());
     }
@@ -106,10 +133,18 @@ class SarifReportTest {
   void columnsCountCodePointsAndSaySo() {
     JsonObject run = sarifRun(SampleRun.run());
     assertEquals("unicodeCodePoints", run.get("columnKind").getAsString());
-    JsonObject duplicate = results(run).stream().filter(r -> r.get("ruleId").getAsString().equals("J201"))
-        .findFirst().orElseThrow();
-    JsonObject region = duplicate.getAsJsonArray("locations").get(0).getAsJsonObject()
-        .getAsJsonObject("physicalLocation").getAsJsonObject("region");
+    JsonObject duplicate =
+        results(run).stream()
+            .filter(r -> r.get("ruleId").getAsString().equals("J201"))
+            .findFirst()
+            .orElseThrow();
+    JsonObject region =
+        duplicate
+            .getAsJsonArray("locations")
+            .get(0)
+            .getAsJsonObject()
+            .getAsJsonObject("physicalLocation")
+            .getAsJsonObject("region");
     // Line 4 is: source "🔦 Grün" laser {}  — 'laser' starts at code point 17.
     assertEquals(4, region.get("startLine").getAsInt());
     assertEquals(17, region.get("startColumn").getAsInt());
@@ -118,49 +153,92 @@ class SarifReportTest {
 
   @Test
   void relatedPlacesAndFixesAreCarriedOver() {
-    JsonObject duplicate = results(sarifRun(SampleRun.run())).stream()
-        .filter(r -> r.get("ruleId").getAsString().equals("J201")).findFirst().orElseThrow();
+    JsonObject duplicate =
+        results(sarifRun(SampleRun.run())).stream()
+            .filter(r -> r.get("ruleId").getAsString().equals("J201"))
+            .findFirst()
+            .orElseThrow();
     JsonObject related = duplicate.getAsJsonArray("relatedLocations").get(0).getAsJsonObject();
-    assertEquals("first declared here", related.getAsJsonObject("message").get("text").getAsString());
-    JsonObject replacement = duplicate.getAsJsonArray("fixes").get(0).getAsJsonObject()
-        .getAsJsonArray("artifactChanges").get(0).getAsJsonObject()
-        .getAsJsonArray("replacements").get(0).getAsJsonObject();
-    assertEquals("laser2", replacement.getAsJsonObject("insertedContent").get("text").getAsString());
+    assertEquals(
+        "first declared here", related.getAsJsonObject("message").get("text").getAsString());
+    JsonObject replacement =
+        duplicate
+            .getAsJsonArray("fixes")
+            .get(0)
+            .getAsJsonObject()
+            .getAsJsonArray("artifactChanges")
+            .get(0)
+            .getAsJsonObject()
+            .getAsJsonArray("replacements")
+            .get(0)
+            .getAsJsonObject();
+    assertEquals(
+        "laser2", replacement.getAsJsonObject("insertedContent").get("text").getAsString());
     assertEquals(17, replacement.getAsJsonObject("deletedRegion").get("startColumn").getAsInt());
   }
 
   @Test
   void aFixTouchingTwoFilesHasOneChangePerFile() {
-    JsonObject undefined = results(sarifRun(SampleRun.run())).stream()
-        .filter(r -> r.get("ruleId").getAsString().equals("J202")).findFirst().orElseThrow();
-    JsonArray changes = undefined.getAsJsonArray("fixes").get(0).getAsJsonObject().getAsJsonArray("artifactChanges");
+    JsonObject undefined =
+        results(sarifRun(SampleRun.run())).stream()
+            .filter(r -> r.get("ruleId").getAsString().equals("J202"))
+            .findFirst()
+            .orElseThrow();
+    JsonArray changes =
+        undefined
+            .getAsJsonArray("fixes")
+            .get(0)
+            .getAsJsonObject()
+            .getAsJsonArray("artifactChanges");
     assertEquals(2, changes.size());
   }
 
   @Test
   void fingerprintsTellApartTheSameFindingTwiceInOneFile() {
-    Diagnostic once = Diagnostic.of(DiagnosticCode.UNKNOWN_UNIT, SampleRun.MAIN, TextRange.of(0, 1), "unknown unit 'mw'");
-    Diagnostic again = Diagnostic.of(DiagnosticCode.UNKNOWN_UNIT, SampleRun.MAIN, TextRange.of(9, 10), "unknown unit 'mw'");
-    Result twice = new Result(Map.of(SampleRun.MAIN, new SourceFile(SampleRun.MAIN, SampleRun.MAIN_TEXT)),
-        List.of(once, again), List.of());
+    Diagnostic once =
+        Diagnostic.of(
+            DiagnosticCode.UNKNOWN_UNIT, SampleRun.MAIN, TextRange.of(0, 1), "unknown unit 'mw'");
+    Diagnostic again =
+        Diagnostic.of(
+            DiagnosticCode.UNKNOWN_UNIT, SampleRun.MAIN, TextRange.of(9, 10), "unknown unit 'mw'");
+    Result twice =
+        new Result(
+            Map.of(SampleRun.MAIN, new SourceFile(SampleRun.MAIN, SampleRun.MAIN_TEXT)),
+            List.of(once, again),
+            List.of());
     List<String> prints = new ArrayList<>();
-    for (JsonObject result : results(sarifRun(new CheckRun(twice, SampleRun.ROOT, SampleRun.ROOT, List.of())))) {
-      prints.add(result.getAsJsonObject("partialFingerprints").get(SarifReport.FINGERPRINT_KEY).getAsString());
+    for (JsonObject result :
+        results(sarifRun(new CheckRun(twice, SampleRun.ROOT, SampleRun.ROOT, List.of())))) {
+      prints.add(
+          result
+              .getAsJsonObject("partialFingerprints")
+              .get(SarifReport.FINGERPRINT_KEY)
+              .getAsString());
     }
     assertEquals(2, prints.stream().distinct().count(), prints.toString());
   }
 
   @Test
   void fingerprintsIgnoreTheLineSoAlertsSurviveEditsAbove() {
-    Diagnostic high = Diagnostic.of(DiagnosticCode.UNKNOWN_UNIT, SampleRun.MAIN, TextRange.of(0, 1), "unknown unit 'mw'");
-    Diagnostic low = Diagnostic.of(DiagnosticCode.UNKNOWN_UNIT, SampleRun.MAIN, TextRange.of(30, 31), "unknown unit 'mw'");
+    Diagnostic high =
+        Diagnostic.of(
+            DiagnosticCode.UNKNOWN_UNIT, SampleRun.MAIN, TextRange.of(0, 1), "unknown unit 'mw'");
+    Diagnostic low =
+        Diagnostic.of(
+            DiagnosticCode.UNKNOWN_UNIT, SampleRun.MAIN, TextRange.of(30, 31), "unknown unit 'mw'");
     assertEquals(fingerprintOfOnly(high), fingerprintOfOnly(low));
   }
 
   private static String fingerprintOfOnly(Diagnostic d) {
-    Result one = new Result(Map.of(SampleRun.MAIN, new SourceFile(SampleRun.MAIN, SampleRun.MAIN_TEXT)),
-        List.of(d), List.of());
-    return results(sarifRun(new CheckRun(one, SampleRun.ROOT, SampleRun.ROOT, List.of()))).get(0)
-        .getAsJsonObject("partialFingerprints").get(SarifReport.FINGERPRINT_KEY).getAsString();
+    Result one =
+        new Result(
+            Map.of(SampleRun.MAIN, new SourceFile(SampleRun.MAIN, SampleRun.MAIN_TEXT)),
+            List.of(d),
+            List.of());
+    return results(sarifRun(new CheckRun(one, SampleRun.ROOT, SampleRun.ROOT, List.of())))
+        .get(0)
+        .getAsJsonObject("partialFingerprints")
+        .get(SarifReport.FINGERPRINT_KEY)
+        .getAsString();
   }
 }

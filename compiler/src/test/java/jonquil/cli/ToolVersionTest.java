@@ -14,8 +14,9 @@ class ToolVersionTest {
   @Test
   void theReportedVersionIsTheMavenProjectVersion() throws IOException {
     Path pom = Path.of(System.getProperty("jonquil.repo", ".."), "pom.xml");
-    Matcher m = Pattern.compile("<artifactId>jonquil-parent</artifactId>\\s*<version>([^<]+)</version>")
-        .matcher(Files.readString(pom));
+    Matcher m =
+        Pattern.compile("<artifactId>jonquil-parent</artifactId>\\s*<version>([^<]+)</version>")
+            .matcher(Files.readString(pom));
     assertTrue(m.find(), "no version in " + pom);
     assertEquals(m.group(1), ToolVersion.current());
   }

@@ -29,9 +29,14 @@ class FormatCommandTest {
     String[] all = new String[args.length + 1];
     all[0] = "fmt";
     System.arraycopy(args, 0, all, 1, args.length);
-    int code = Cli.run(all, new PrintStream(out, true, StandardCharsets.UTF_8),
-        new PrintStream(err, true, StandardCharsets.UTF_8), dir);
-    return new Run(code, out.toString(StandardCharsets.UTF_8), err.toString(StandardCharsets.UTF_8));
+    int code =
+        Cli.run(
+            all,
+            new PrintStream(out, true, StandardCharsets.UTF_8),
+            new PrintStream(err, true, StandardCharsets.UTF_8),
+            dir);
+    return new Run(
+        code, out.toString(StandardCharsets.UTF_8), err.toString(StandardCharsets.UTF_8));
   }
 
   private Path write(String name, String text) throws IOException {
@@ -96,10 +101,14 @@ class FormatCommandTest {
     write("a.jonq", MESSY);
     Run both = fmt("--check", "--stdout", "a.jonq");
     assertEquals(2, both.exitCode());
-    assertTrue(both.err().startsWith("jonquil: --check and --stdout cannot be used together\n"), both.err());
-    assertEquals(new Run(2, "", "jonquil: cannot read 'gone.jonq': no such file\n"), fmt("gone.jonq"));
+    assertTrue(
+        both.err().startsWith("jonquil: --check and --stdout cannot be used together\n"),
+        both.err());
+    assertEquals(
+        new Run(2, "", "jonquil: cannot read 'gone.jonq': no such file\n"), fmt("gone.jonq"));
     Files.write(dir.resolve("bad.jonq"), new byte[] {(byte) 0xC3, (byte) 0x28});
-    assertEquals(new Run(2, "", "jonquil: cannot read 'bad.jonq': not valid UTF-8\n"), fmt("bad.jonq"));
+    assertEquals(
+        new Run(2, "", "jonquil: cannot read 'bad.jonq': not valid UTF-8\n"), fmt("bad.jonq"));
   }
 
   @Test

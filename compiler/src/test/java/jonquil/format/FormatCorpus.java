@@ -24,8 +24,11 @@ final class FormatCorpus {
   static List<Path> wellFormedSpecs() {
     List<Path> files = new ArrayList<>();
     try (Stream<Path> samples = Files.walk(Repo.samples());
-         Stream<Path> corpus = Files.walk(Repo.testResources().resolve("diagnostics"))) {
-      Stream.concat(samples, corpus).filter(p -> p.toString().endsWith(".jonq")).sorted().forEach(files::add);
+        Stream<Path> corpus = Files.walk(Repo.testResources().resolve("diagnostics"))) {
+      Stream.concat(samples, corpus)
+          .filter(p -> p.toString().endsWith(".jonq"))
+          .sorted()
+          .forEach(files::add);
     } catch (IOException e) {
       throw new UncheckedIOException(e);
     }
@@ -45,20 +48,28 @@ final class FormatCorpus {
   }
 
   /**
-   * The syntax tree without positions and with all whitespace removed from its strings
-   * (a requirement keeps its source text): equal exactly when formatting changed only layout.
+   * The syntax tree without positions and with all whitespace removed from its strings (a
+   * requirement keeps its source text): equal exactly when formatting changed only layout.
    */
   static String tree(String text) {
     SpecFile ast = SpecParser.parse(source(text)).ast();
-    return render(new SpecFile(ast.path(), ast.uses(), ast.declarations(), ast.trains(), ast.requires(),
-        List.of(), List.of()));
+    return render(
+        new SpecFile(
+            ast.path(),
+            ast.uses(),
+            ast.declarations(),
+            ast.trains(),
+            ast.requires(),
+            List.of(),
+            List.of()));
   }
 
   /** Comment texts in order, as the parser found them, without trailing blanks. */
   static List<String> comments(String text) {
     SourceFile file = source(text);
     return SpecParser.parse(file).ast().comments().stream()
-        .map(r -> Lexer.stripTrailingSpace(file.slice(r))).toList();
+        .map(r -> Lexer.stripTrailingSpace(file.slice(r)))
+        .toList();
   }
 
   private static String render(Object value) {
@@ -81,7 +92,10 @@ final class FormatCorpus {
       StringBuilder out = new StringBuilder(record.getClass().getSimpleName()).append('(');
       for (RecordComponent c : record.getClass().getRecordComponents()) {
         try {
-          out.append(c.getName()).append('=').append(render(c.getAccessor().invoke(record))).append(' ');
+          out.append(c.getName())
+              .append('=')
+              .append(render(c.getAccessor().invoke(record)))
+              .append(' ');
         } catch (ReflectiveOperationException e) {
           throw new IllegalStateException(e);
         }

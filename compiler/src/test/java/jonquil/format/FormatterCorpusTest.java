@@ -11,7 +11,10 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 
-/** Every sample and every well-formed corpus spec formats without losing a token, a comment or meaning, and stays put. */
+/**
+ * Every sample and every well-formed corpus spec formats without losing a token, a comment or
+ * meaning, and stays put.
+ */
 class FormatterCorpusTest {
   static Stream<Path> specs() {
     return FormatCorpus.wellFormedSpecs().stream();
@@ -27,14 +30,16 @@ class FormatterCorpusTest {
   @ParameterizedTest
   @MethodSource("specs")
   void formatsFaithfullyAndIdempotently(Path file) {
-    FormatAssertions.formatsFaithfully(FormatCorpus.source(file).text(), Repo.root().relativize(file).toString());
+    FormatAssertions.formatsFaithfully(
+        FormatCorpus.source(file).text(), Repo.root().relativize(file).toString());
   }
 
   @ParameterizedTest
   @MethodSource("specs")
   void theFormattersLexerFindsTheSameCommentsAsTheParser(Path file) {
     String text = FormatCorpus.source(file).text();
-    List<String> lexed = Lexer.lex(text).stream().filter(Lexeme::isComment).map(Lexeme::text).toList();
+    List<String> lexed =
+        Lexer.lex(text).stream().filter(Lexeme::isComment).map(Lexeme::text).toList();
     assertEquals(FormatCorpus.comments(text), lexed);
   }
 }

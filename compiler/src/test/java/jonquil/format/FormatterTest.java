@@ -10,7 +10,9 @@ import jonquil.source.SourceFile;
 import jonquil.source.TextRange;
 import org.junit.jupiter.api.Test;
 
-/** The API's small promises: broken files are left alone, edits are minimal, options are honoured. */
+/**
+ * The API's small promises: broken files are left alone, edits are minimal, options are honoured.
+ */
 class FormatterTest {
   private static String format(String text, FormatOptions options) {
     return Formatter.format(FormatCorpus.source(text), options).orElseThrow();
@@ -25,13 +27,16 @@ class FormatterTest {
 
   @Test
   void aCanonicalFileNeedsNoEdit() {
-    assertEquals(List.of(), Formatter.edits(FormatCorpus.source("probe p\n"), FormatOptions.DEFAULT));
+    assertEquals(
+        List.of(), Formatter.edits(FormatCorpus.source("probe p\n"), FormatOptions.DEFAULT));
   }
 
   @Test
   void aChangedFileIsOneReplacementOfTheWholeText() {
     SourceFile file = FormatCorpus.source("probe   p");
-    assertEquals(List.of(new Edit(file.path(), new TextRange(0, 9), "probe p\n")), Formatter.edits(file, FormatOptions.DEFAULT));
+    assertEquals(
+        List.of(new Edit(file.path(), new TextRange(0, 9), "probe p\n")),
+        Formatter.edits(file, FormatOptions.DEFAULT));
   }
 
   @Test
@@ -44,16 +49,22 @@ class FormatterTest {
 
   @Test
   void unitsSignsAndReferencesAreWrittenTogether() {
-    assertEquals("mirror m {\n  damage 10 J/cm^2 for 10 ns at 1064 nm\n  aoi -45 deg\n}\n",
-        format("mirror m{damage 10 J / cm ^ 2 for 10ns at 1064nm;aoi - 45deg}", FormatOptions.DEFAULT));
-    assertEquals("train t {\n  a -> pbs.reflected -> 5 mm in saline -> d\n}\n",
+    assertEquals(
+        "mirror m {\n  damage 10 J/cm^2 for 10 ns at 1064 nm\n  aoi -45 deg\n}\n",
+        format(
+            "mirror m{damage 10 J / cm ^ 2 for 10ns at 1064nm;aoi - 45deg}",
+            FormatOptions.DEFAULT));
+    assertEquals(
+        "train t {\n  a -> pbs.reflected -> 5 mm in saline -> d\n}\n",
         format("train t { a->pbs . reflected->5mm in saline->d }", FormatOptions.DEFAULT));
   }
 
   @Test
   void tolerancesKeepTheirSpellingAndPercentAndDegreeKeepTheirSpacing() {
-    assertEquals("waveplate w {\n  fast_axis 45° +- 1°\n  retardance 0.5 wave ± 2 %\n}\n",
-        format("waveplate w { fast_axis 45°+-1°; retardance 0.5 wave±2 % }", FormatOptions.DEFAULT));
+    assertEquals(
+        "waveplate w {\n  fast_axis 45° +- 1°\n  retardance 0.5 wave ± 2 %\n}\n",
+        format(
+            "waveplate w { fast_axis 45°+-1°; retardance 0.5 wave±2 % }", FormatOptions.DEFAULT));
   }
 
   @Test

@@ -8,9 +8,9 @@ import java.util.SplittableRandom;
 import org.junit.jupiter.api.Test;
 
 /**
- * Seeded random layout edits of the well-formed corpus (spaces, tabs, blank lines, comments,
- * ';' for line breaks, CRLF, over-long paths): every edited spec that still parses formats
- * faithfully and idempotently. A failure names the seed and the variant, to replay it.
+ * Seeded random layout edits of the well-formed corpus (spaces, tabs, blank lines, comments, ';'
+ * for line breaks, CRLF, over-long paths): every edited spec that still parses formats faithfully
+ * and idempotently. A failure names the seed and the variant, to replay it.
  */
 class RandomEditTest {
   private static final long SEED = 0x6A6F6E7175696CL;
@@ -39,7 +39,9 @@ class RandomEditTest {
       }
     }
     assertTrue(tried > VARIANTS / 3, "only " + tried + " edited specs still parsed");
-    assertTrue(withBlockComments > VARIANTS / 10, "only " + withBlockComments + " edited specs with block comments");
+    assertTrue(
+        withBlockComments > VARIANTS / 10,
+        "only " + withBlockComments + " edited specs with block comments");
   }
 
   private static String edit(String text, SplittableRandom random) {
@@ -52,29 +54,40 @@ class RandomEditTest {
     switch (random.nextInt(9)) {
       case 0:
         return insert(text, pos, random.nextBoolean() ? "   " : "\t ");
-      case 1: {
-        int start = pos;
-        while (start > 0 && Lexer.isSpace(text.charAt(start - 1))) {
-          start--;
+      case 1:
+        {
+          int start = pos;
+          while (start > 0 && Lexer.isSpace(text.charAt(start - 1))) {
+            start--;
+          }
+          return text.substring(0, start)
+              + text.substring(pos); // may join tokens; then it rarely parses
         }
-        return text.substring(0, start) + text.substring(pos); // may join tokens; then it rarely parses
-      }
       case 2:
         return at.kind() == LexemeKind.NL ? insert(text, pos, "\n\n") : insert(text, pos, " ");
-      case 3: {
-        String comment = COMMENTS[random.nextInt(COMMENTS.length)];
-        return comment.startsWith("//") ? insertBeforeLineEnd(text, pos, " " + comment) : insert(text, pos, comment + " ");
-      }
+      case 3:
+        {
+          String comment = COMMENTS[random.nextInt(COMMENTS.length)];
+          return comment.startsWith("//")
+              ? insertBeforeLineEnd(text, pos, " " + comment)
+              : insert(text, pos, comment + " ");
+        }
       case 4:
-        return at.kind() == LexemeKind.NL ? text.substring(0, pos) + " ; " + text.substring(pos + at.text().length()) : text;
+        return at.kind() == LexemeKind.NL
+            ? text.substring(0, pos) + " ; " + text.substring(pos + at.text().length())
+            : text;
       case 5:
         return text.replace("\r\n", "\n").replace("\n", "\r\n");
       case 6:
-        return at.kind() == LexemeKind.ARROW ? insert(text, pos, "-> 12.5 mm -> 0.25 mm in saline ".repeat(1 + random.nextInt(4))) : text;
+        return at.kind() == LexemeKind.ARROW
+            ? insert(text, pos, "-> 12.5 mm -> 0.25 mm in saline ".repeat(1 + random.nextInt(4)))
+            : text;
       case 7:
         return at.kind() == LexemeKind.ARROW ? insert(text, pos, "\n      ") : text;
       default:
-        return at.kind() == LexemeKind.NL ? text.substring(0, pos) + " " + text.substring(pos + at.text().length()) : text;
+        return at.kind() == LexemeKind.NL
+            ? text.substring(0, pos) + " " + text.substring(pos + at.text().length())
+            : text;
     }
   }
 

@@ -5,15 +5,18 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
-import jonquil.resolve.CatalogNames;
+import jonquil.resolve.CatalogSpellings;
 import jonquil.resolve.ElementKind;
 import jonquil.resolve.Measure;
 import org.junit.jupiter.api.Test;
 
-/** Completion offers what is valid at the cursor, on the half-typed text of a spec being written. */
+/**
+ * Completion offers what is valid at the cursor, on the half-typed text of a spec being written.
+ */
 class CompletionTest {
   /** A bench being written: the cursor is wherever the test puts {@code $0}. */
-  private static final String BENCH = """
+  private static final String BENCH =
+      """
       source seed { wavelength 1064 nm; power 2 W }
       material slab_glass = index 1.5
       splitter  pbs { polarizing }
@@ -41,7 +44,10 @@ class CompletionTest {
   }
 
   private static List<String> labels(List<CompletionItemInfo> items, String kind) {
-    return items.stream().filter(i -> i.kind().equals(kind)).map(CompletionItemInfo::label).toList();
+    return items.stream()
+        .filter(i -> i.kind().equals(kind))
+        .map(CompletionItemInfo::label)
+        .toList();
   }
 
   @Test
@@ -59,10 +65,17 @@ class CompletionTest {
   @Test
   void insideALensBlockTheLensParametersWithTheirDocs() {
     List<CompletionItemInfo> items = at(BENCH.replace("focal 100 mm }", "focal 100 mm\n  $0\n}"));
-    assertEquals(ElementKind.LENS.params().stream().map(p -> p.name()).toList(), labels(items, "parameter"));
-    CompletionItemInfo focal = items.stream().filter(i -> i.label().equals("focal")).findFirst().orElseThrow();
-    assertEquals(new CompletionItemInfo("focal", "parameter", "required parameter of lens",
-        "focal length (negative: diverging)"), focal);
+    assertEquals(
+        ElementKind.LENS.params().stream().map(p -> p.name()).toList(), labels(items, "parameter"));
+    CompletionItemInfo focal =
+        items.stream().filter(i -> i.label().equals("focal")).findFirst().orElseThrow();
+    assertEquals(
+        new CompletionItemInfo(
+            "focal",
+            "parameter",
+            "required parameter of lens",
+            "focal length (negative: diverging)"),
+        focal);
   }
 
   @Test
@@ -75,19 +88,24 @@ class CompletionTest {
 
   @Test
   void afterADotThePortsOfThatElement() {
-    assertEquals(List.of("through", "reflected"), labels(at(BENCH.replace("pbs.reflected", "pbs.$0"))));
+    assertEquals(
+        List.of("through", "reflected"), labels(at(BENCH.replace("pbs.reflected", "pbs.$0"))));
   }
 
   @Test
   void afterANumberInAPathLengthUnits() {
-    assertEquals(List.of("nm", "um", "mm", "cm", "m"), labels(at(BENCH.replace("-> 50 mm ->", "-> 50 $0"))));
+    assertEquals(
+        List.of("nm", "um", "mm", "cm", "m"), labels(at(BENCH.replace("-> 50 mm ->", "-> 50 $0"))));
   }
 
   @Test
   void afterANumberInAParameterTheUnitsOfItsDimension() {
-    assertEquals(List.of("uW", "mW", "W", "kW"), labels(at(BENCH.replace("power 2 W", "power 2 $0"))));
-    assertEquals(List.of("nm", "um", "mm", "cm", "m"), labels(at(BENCH.replace("1064 nm", "1064$0"))));
-    List<CompletionItemInfo> units = at(BENCH.replace("power 2 W }", "power 2 W; pulse_duration 8 $0 }"));
+    assertEquals(
+        List.of("uW", "mW", "W", "kW"), labels(at(BENCH.replace("power 2 W", "power 2 $0"))));
+    assertEquals(
+        List.of("nm", "um", "mm", "cm", "m"), labels(at(BENCH.replace("1064 nm", "1064$0"))));
+    List<CompletionItemInfo> units =
+        at(BENCH.replace("power 2 W }", "power 2 W; pulse_duration 8 $0 }"));
     assertEquals(List.of("fs", "ps", "ns", "us", "ms", "s"), labels(units));
     assertEquals("unit of time", units.get(0).detail());
   }
@@ -103,10 +121,11 @@ class CompletionTest {
   @Test
   void afterMetalOnlyMetalsAfterMaterialEveryMaterial() {
     List<CompletionItemInfo> metals = at(BENCH.replace("@", "mirror m1 { metal $0 }"));
-    assertEquals(List.of("slab_glass", "silver", "gold", "aluminium", "aluminum", "copper"), labels(metals));
+    assertEquals(
+        List.of("slab_glass", "silver", "gold", "aluminium", "aluminum", "copper"), labels(metals));
     assertEquals("catalog material (metal)", metals.get(1).detail());
     List<CompletionItemInfo> all = at(BENCH.replace("@", "window w1 {\n  material $0\n}"));
-    assertTrue(labels(all).containsAll(CatalogNames.spellings()));
+    assertTrue(labels(all).containsAll(CatalogSpellings.spellings()));
     assertEquals("slab_glass", all.get(0).label());
   }
 
@@ -117,7 +136,8 @@ class CompletionTest {
 
   @Test
   void atTheStartOfARequirementTheMeasures() {
-    List<CompletionItemInfo> items = at(BENCH.replace("power at spot >= 1 W", "power at spot >= 1 W\n  $0"));
+    List<CompletionItemInfo> items =
+        at(BENCH.replace("power at spot >= 1 W", "power at spot >= 1 W\n  $0"));
     assertEquals(Measure.spellings(), labels(items, "measure"));
     assertEquals(List.of("yield"), labels(items, "keyword"));
   }
@@ -126,7 +146,8 @@ class CompletionTest {
   void inARequirementPlacesStatesAndUnitsOfTheMeasure() {
     assertTrue(labels(at(BENCH.replace("power at spot", "power at $0"))).contains("spot"));
     assertEquals(List.of("uW", "mW", "W", "kW"), labels(at(BENCH.replace(">= 1 W", ">= 1 $0"))));
-    assertEquals(List.of("linear", "circular", "elliptical", "unpolarized", "partial"),
+    assertEquals(
+        List.of("linear", "circular", "elliptical", "unpolarized", "partial"),
         labels(at(BENCH.replace("power at spot >= 1 W", "polarization at spot is $0"))));
   }
 
@@ -143,7 +164,9 @@ class CompletionTest {
     for (int i = -2; i <= broken.length() + 2; i++) {
       Ide.completions(c.result(), Specs.MAIN, i);
     }
-    assertEquals(List.of("nm", "um", "mm", "cm", "m"), labels(Ide.completions(c.result(), Specs.MAIN, broken.indexOf("10") + 2)));
+    assertEquals(
+        List.of("nm", "um", "mm", "cm", "m"),
+        labels(Ide.completions(c.result(), Specs.MAIN, broken.indexOf("10") + 2)));
     assertTrue(labels(Ide.completions(c.result(), Specs.MAIN, broken.length())).contains("l"));
   }
 }

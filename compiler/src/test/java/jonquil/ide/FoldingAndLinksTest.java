@@ -7,7 +7,10 @@ import java.util.Map;
 import jonquil.Result;
 import org.junit.jupiter.api.Test;
 
-/** Folding ranges cover multi-line blocks and comments; document links point at the files a spec names. */
+/**
+ * Folding ranges cover multi-line blocks and comments; document links point at the files a spec
+ * names.
+ */
 class FoldingAndLinksTest {
   private static String render(String text, List<FoldingRangeInfo> ranges) {
     StringBuilder out = new StringBuilder();
@@ -15,14 +18,20 @@ class FoldingAndLinksTest {
       String span = text.substring(f.startOffset(), f.endOffset());
       String first = span.lines().findFirst().orElse("");
       String last = span.lines().reduce((a, b) -> b).orElse("");
-      out.append(f.kind()).append(": ").append(first).append(" ... ").append(last.strip()).append('\n');
+      out.append(f.kind())
+          .append(": ")
+          .append(first)
+          .append(" ... ")
+          .append(last.strip())
+          .append('\n');
     }
     return out.toString();
   }
 
   @Test
   void blocksAndCommentsThatSpanLinesFold() {
-    String spec = """
+    String spec =
+        """
         // bench notes
         // second line
         source seed {
@@ -41,18 +50,21 @@ class FoldingAndLinksTest {
         }
         """;
     Result r = Specs.check(spec).result();
-    assertEquals("""
+    assertEquals(
+        """
         comment: // bench notes ... // second line
         region: source seed { ... }
         comment: /* a block ... comment */
         region: train main { ... }
         region: require { ... }
-        """, render(spec, Ide.foldingRanges(r, Specs.MAIN)));
+        """,
+        render(spec, Ide.foldingRanges(r, Specs.MAIN)));
   }
 
   @Test
   void linksForUseAndTableStringsThatNameExistingFiles() {
-    String main = """
+    String main =
+        """
         use "parts/optics.jonq"
         use "parts/missing.jonq"
         material glass { table "data/glass.nk" }
@@ -61,13 +73,22 @@ class FoldingAndLinksTest {
         dump d1
         train main { seed -> 10 mm in glass -> d1 }
         """;
-    Specs.Checked c = Specs.check(Map.of("main.jonq", main, "parts/optics.jonq", "probe spare\n",
-        "data/glass.nk", "500 nm 1.5 0\n600 nm 1.49 0\n"));
+    Specs.Checked c =
+        Specs.check(
+            Map.of(
+                "main.jonq",
+                main,
+                "parts/optics.jonq",
+                "probe spare\n",
+                "data/glass.nk",
+                "500 nm 1.5 0\n600 nm 1.49 0\n"));
     Result r = c.result();
     List<DocumentLinkInfo> links = Ide.documentLinks(r, Specs.MAIN);
-    assertEquals(List.of("parts/optics.jonq", "data/glass.nk"),
+    assertEquals(
+        List.of("parts/optics.jonq", "data/glass.nk"),
         links.stream().map(l -> main.substring(l.range().start(), l.range().end())).toList());
-    assertEquals(List.of(Specs.ROOT.resolve("parts/optics.jonq"), Specs.ROOT.resolve("data/glass.nk")),
+    assertEquals(
+        List.of(Specs.ROOT.resolve("parts/optics.jonq"), Specs.ROOT.resolve("data/glass.nk")),
         links.stream().map(DocumentLinkInfo::target).toList());
   }
 }

@@ -29,7 +29,9 @@ class HoverTest {
 
   private static String hover(Map<String, String> files) {
     Specs.Checked c = Specs.check(files);
-    HoverInfo h = Ide.hover(c.result(), c.file(), c.offset()).orElseThrow(() -> new AssertionError("no hover"));
+    HoverInfo h =
+        Ide.hover(c.result(), c.file(), c.offset())
+            .orElseThrow(() -> new AssertionError("no hover"));
     assertTrue(h.range().contains(c.offset()), "the hover range covers the cursor");
     String under = c.result().files().get(c.file()).slice(h.range());
     return "<!-- hover over '" + under.replaceAll("\\s+", " ") + "' -->\n\n" + h.markdown() + "\n";
@@ -54,7 +56,10 @@ class HoverTest {
     // (E. Hecht, Optics, 5th ed., 2017, §8.13.2, Table 8.6, from memory). The checker splits the
     // retardance symmetrically, e^{∓iπ/4}, so the same matrix times e^{iπ/4}: entries (1 ± i)/2.
     assertTrue(md.contains("**Jones matrix**, out `out`"), md);
-    assertTrue(md.contains("| to x | 0.5 + 0.5i | 0.5 - 0.5i |") && md.contains("| to y | 0.5 - 0.5i | 0.5 + 0.5i |"), md);
+    assertTrue(
+        md.contains("| to x | 0.5 + 0.5i | 0.5 - 0.5i |")
+            && md.contains("| to y | 0.5 - 0.5i | 0.5 + 0.5i |"),
+        md);
     Golden.check(GOLDEN.resolve("waveplate.md"), md);
   }
 
@@ -62,7 +67,8 @@ class HoverTest {
   void anInterfaceShowsItsReflectancesAndItsBrewsterAndCriticalAngles() {
     String spec = Specs.read("interface.jonq");
     String md = hover(spec);
-    // From 1 into 1.5 at 45°, by the Fresnel equations (E. Hecht, Optics, 5th ed., 2017, eqs. 4.42-4.43,
+    // From 1 into 1.5 at 45°, by the Fresnel equations (E. Hecht, Optics, 5th ed., 2017, eqs.
+    // 4.42-4.43,
     // from memory), worked by hand: θt = 28.13°, rs = −0.3033, rp = 0.0920, so Rs = 9.201 %,
     // Rp = 0.8466 %; Brewster angle arctan 1.5 = 56.31° (Hecht eq. 4.52, from memory).
     assertTrue(md.contains("| 9.201 % | 0.8466 % | 90.8 % | 99.15 % |"), md);
@@ -70,9 +76,13 @@ class HoverTest {
     assertTrue(md.contains("no critical angle"), md);
     Golden.check(GOLDEN.resolve("interface.md"), md);
 
-    String inside = hover(spec.replace("$0entry", "entry").replace("interface exit", "interface $0exit"));
-    // From 1.5 into 1: critical angle arcsin(1/1.5) = 41.81°; at normal incidence R = ((n−1)/(n+1))² = 4 %.
-    assertTrue(inside.contains("critical angle 41.81°") && inside.contains("| 4 % | 4 % | 96 % | 96 % |"), inside);
+    String inside =
+        hover(spec.replace("$0entry", "entry").replace("interface exit", "interface $0exit"));
+    // From 1.5 into 1: critical angle arcsin(1/1.5) = 41.81°; at normal incidence R =
+    // ((n−1)/(n+1))² = 4 %.
+    assertTrue(
+        inside.contains("critical angle 41.81°") && inside.contains("| 4 % | 4 % | 96 % | 96 % |"),
+        inside);
   }
 
   @Test
@@ -108,7 +118,8 @@ class HoverTest {
 
   @Test
   void aSpecWithErrorsSaysThatNothingWasComputed() {
-    String spec = """
+    String spec =
+        """
         source seed { wavelength 1064 nm; power 2 W }
         mirror m1 { reflectance 140 % }
         dump d1
@@ -121,14 +132,16 @@ class HoverTest {
 
   @Test
   void anElementFromAPartLibrarySaysWhereItIsDeclared() {
-    Map<String, String> files = Map.of(
-        "main.jonq", """
-            use "parts/optics.jonq"
-            source seed { wavelength 532 nm; power 10 mW; beam waist 0.5 mm }
-            dump d1
-            train main { seed -> 10 mm -> $0fold -> 10 mm -> d1 }
-            """,
-        "parts/optics.jonq", "mirror fold { reflectance 99 %; aoi 45 deg }\n");
+    Map<String, String> files =
+        Map.of(
+            "main.jonq",
+                """
+                use "parts/optics.jonq"
+                source seed { wavelength 532 nm; power 10 mW; beam waist 0.5 mm }
+                dump d1
+                train main { seed -> 10 mm -> $0fold -> 10 mm -> d1 }
+                """,
+            "parts/optics.jonq", "mirror fold { reflectance 99 %; aoi 45 deg }\n");
     Golden.check(GOLDEN.resolve("element-from-library.md"), hover(files));
   }
 }

@@ -15,7 +15,8 @@ class NavigationTest {
   static final Path PARTS = Specs.ROOT.resolve("parts/optics.jonq");
 
   static Map<String, String> twoFiles(String cursorIn, String word) {
-    String main = """
+    String main =
+        """
         use "parts/optics.jonq"
         source seed { wavelength 532 nm; power 10 mW }
         dump d1
@@ -24,17 +25,28 @@ class NavigationTest {
           power at fold >= 1 mW
         }
         """;
-    String parts = "mirror fold { reflectance 99 %; aoi 45 deg }\nmirror spare { reflectance 90 % }\n";
+    String parts =
+        "mirror fold { reflectance 99 %; aoi 45 deg }\nmirror spare { reflectance 90 % }\n";
     if (cursorIn.equals("main")) {
-      main = main.replaceFirst(java.util.regex.Pattern.quote(word), "\\$0" + java.util.regex.Matcher.quoteReplacement(word));
+      main =
+          main.replaceFirst(
+              java.util.regex.Pattern.quote(word),
+              "\\$0" + java.util.regex.Matcher.quoteReplacement(word));
     } else {
-      parts = parts.replaceFirst(java.util.regex.Pattern.quote(word), "\\$0" + java.util.regex.Matcher.quoteReplacement(word));
+      parts =
+          parts.replaceFirst(
+              java.util.regex.Pattern.quote(word),
+              "\\$0" + java.util.regex.Matcher.quoteReplacement(word));
     }
     return Map.of("main.jonq", main, "parts/optics.jonq", parts);
   }
 
   private static String at(Result r, Location l) {
-    return l.file().getFileName() + ":" + r.files().get(l.file()).slice(l.range()) + "@" + l.range().start();
+    return l.file().getFileName()
+        + ":"
+        + r.files().get(l.file()).slice(l.range())
+        + "@"
+        + l.range().start();
   }
 
   @Test
@@ -49,7 +61,9 @@ class NavigationTest {
   @Test
   void theUsePathItselfGoesToThatFile() {
     Specs.Checked c = Specs.check(twoFiles("main", "parts/optics"));
-    assertEquals(List.of(new Location(PARTS, TextRange.EMPTY)), Ide.definition(c.result(), c.file(), c.offset()));
+    assertEquals(
+        List.of(new Location(PARTS, TextRange.EMPTY)),
+        Ide.definition(c.result(), c.file(), c.offset()));
   }
 
   @Test
@@ -63,20 +77,27 @@ class NavigationTest {
   void keywordsLiteralsAndCatalogNamesHaveNoDefinition() {
     Specs.Checked c = Specs.check(Specs.BENCH);
     Result r = c.result();
-    assertEquals(List.of(), Ide.definition(r, Specs.MAIN, Specs.offsetOf(r, Specs.MAIN, "train", 0) + 1));
-    assertEquals(List.of(), Ide.definition(r, Specs.MAIN, Specs.offsetOf(r, Specs.MAIN, "1064", 0) + 1));
-    assertEquals(List.of(), Ide.definition(r, Specs.MAIN, Specs.offsetOf(r, Specs.MAIN, "silver", 0) + 1));
+    assertEquals(
+        List.of(), Ide.definition(r, Specs.MAIN, Specs.offsetOf(r, Specs.MAIN, "train", 0) + 1));
+    assertEquals(
+        List.of(), Ide.definition(r, Specs.MAIN, Specs.offsetOf(r, Specs.MAIN, "1064", 0) + 1));
+    assertEquals(
+        List.of(), Ide.definition(r, Specs.MAIN, Specs.offsetOf(r, Specs.MAIN, "silver", 0) + 1));
   }
 
   @Test
   void referencesAcrossFilesWithAndWithoutTheDeclaration() {
     Specs.Checked c = Specs.check(twoFiles("main", "fold ->"));
     Result r = c.result();
-    List<String> with = Ide.references(r, c.file(), c.offset(), true).stream().map(l -> at(r, l)).toList();
-    List<String> without = Ide.references(r, c.file(), c.offset(), false).stream().map(l -> at(r, l)).toList();
+    List<String> with =
+        Ide.references(r, c.file(), c.offset(), true).stream().map(l -> at(r, l)).toList();
+    List<String> without =
+        Ide.references(r, c.file(), c.offset(), false).stream().map(l -> at(r, l)).toList();
     int pathUse = Specs.offsetOf(r, Specs.MAIN, "fold", 0);
     int requireUse = Specs.offsetOf(r, Specs.MAIN, "fold", 1);
-    assertEquals(List.of("optics.jonq:fold@7", "main.jonq:fold@" + pathUse, "main.jonq:fold@" + requireUse), with);
+    assertEquals(
+        List.of("optics.jonq:fold@7", "main.jonq:fold@" + pathUse, "main.jonq:fold@" + requireUse),
+        with);
     assertEquals(with.subList(1, 3), without);
   }
 
@@ -84,7 +105,8 @@ class NavigationTest {
   void referencesFromTheDeclarationFindTheSameUses() {
     Specs.Checked fromUse = Specs.check(twoFiles("main", "fold ->"));
     Specs.Checked fromDecl = Specs.check(twoFiles("parts", "fold"));
-    assertEquals(Ide.references(fromUse.result(), fromUse.file(), fromUse.offset(), true),
+    assertEquals(
+        Ide.references(fromUse.result(), fromUse.file(), fromUse.offset(), true),
         Ide.references(fromDecl.result(), fromDecl.file(), fromDecl.offset(), true));
   }
 
@@ -99,8 +121,10 @@ class NavigationTest {
   void aCatalogMaterialIsFoundWhereverItIsUsed() {
     Specs.Checked c = Specs.check(Specs.BENCH);
     Result r = c.result();
-    List<Location> refs = Ide.references(r, Specs.MAIN, Specs.offsetOf(r, Specs.MAIN, "silver", 0), true);
+    List<Location> refs =
+        Ide.references(r, Specs.MAIN, Specs.offsetOf(r, Specs.MAIN, "silver", 0), true);
     assertEquals(1, refs.size());
-    assertTrue(refs.stream().allMatch(l -> r.files().get(l.file()).slice(l.range()).equals("silver")));
+    assertTrue(
+        refs.stream().allMatch(l -> r.files().get(l.file()).slice(l.range()).equals("silver")));
   }
 }

@@ -14,7 +14,10 @@ import jonquil.diag.Edit;
 import jonquil.source.TextRange;
 import org.junit.jupiter.api.Test;
 
-/** Rename touches the declaration and every use in every file, and refuses names the language rejects. */
+/**
+ * Rename touches the declaration and every use in every file, and refuses names the language
+ * rejects.
+ */
 class RenameTest {
   private static String apply(String text, List<Edit> edits) {
     StringBuilder out = new StringBuilder(text);
@@ -33,7 +36,8 @@ class RenameTest {
     assertNull(rename.error());
     assertEquals(2, rename.edits().size());
     Path parts = NavigationTest.PARTS;
-    assertEquals("mirror steer { reflectance 99 %; aoi 45 deg }\nmirror spare { reflectance 90 % }\n",
+    assertEquals(
+        "mirror steer { reflectance 99 %; aoi 45 deg }\nmirror spare { reflectance 90 % }\n",
         apply(r.files().get(parts).text(), rename.edits().get(parts)));
     String main = apply(r.files().get(Specs.MAIN).text(), rename.edits().get(Specs.MAIN));
     assertTrue(main.contains("seed -> 10 mm -> steer -> 20 mm"));
@@ -45,11 +49,13 @@ class RenameTest {
   void theRenamedSpecChecksAsBefore() {
     Specs.Checked c = Specs.check(Specs.BENCH);
     Result r = c.result();
-    RenameResult rename = Ide.rename(r, Specs.MAIN, Specs.offsetOf(r, Specs.MAIN, "w1", 0), "entry_window");
+    RenameResult rename =
+        Ide.rename(r, Specs.MAIN, Specs.offsetOf(r, Specs.MAIN, "w1", 0), "entry_window");
     String renamed = apply(r.files().get(Specs.MAIN).text(), rename.edits().get(Specs.MAIN));
     assertTrue(renamed.contains("entry_window.reflected -> 30 mm"));
     Result again = Specs.check(renamed).result();
-    assertEquals(r.requirements().stream().map(o -> o.status()).toList(),
+    assertEquals(
+        r.requirements().stream().map(o -> o.status()).toList(),
         again.requirements().stream().map(o -> o.status()).toList());
     assertEquals(r.diagnostics().size(), again.diagnostics().size());
   }
@@ -57,7 +63,8 @@ class RenameTest {
   @Test
   void theSameNameGivesNoEdits() {
     Specs.Checked c = Specs.check(Specs.BENCH);
-    RenameResult rename = Ide.rename(c.result(), Specs.MAIN, Specs.offsetOf(c.result(), Specs.MAIN, "qwp", 0), "qwp");
+    RenameResult rename =
+        Ide.rename(c.result(), Specs.MAIN, Specs.offsetOf(c.result(), Specs.MAIN, "qwp", 0), "qwp");
     assertNull(rename.error());
     assertEquals(Map.of(), rename.edits());
   }
@@ -77,18 +84,23 @@ class RenameTest {
   @Test
   void refusesReservedWords() {
     Specs.Checked c = Specs.check(Specs.BENCH);
-    RenameResult rename = Ide.rename(c.result(), Specs.MAIN, Specs.offsetOf(c.result(), Specs.MAIN, "qwp", 0), "linear");
+    RenameResult rename =
+        Ide.rename(
+            c.result(), Specs.MAIN, Specs.offsetOf(c.result(), Specs.MAIN, "qwp", 0), "linear");
     assertEquals("'linear' is a reserved word and cannot be a name", rename.error());
   }
 
   @Test
   void refusesANameThatIsTakenInAnyFile() {
     Specs.Checked c = Specs.check(NavigationTest.twoFiles("main", "fold ->"));
-    assertEquals("'spare' is already declared; names must be unique",
+    assertEquals(
+        "'spare' is already declared; names must be unique",
         Ide.rename(c.result(), c.file(), c.offset(), "spare").error());
-    assertEquals("'seed' is already declared; names must be unique",
+    assertEquals(
+        "'seed' is already declared; names must be unique",
         Ide.rename(c.result(), c.file(), c.offset(), "seed").error());
-    assertEquals("'water' is the name of a catalog material",
+    assertEquals(
+        "'water' is the name of a catalog material",
         Ide.rename(c.result(), c.file(), c.offset(), "water").error());
   }
 
@@ -98,7 +110,8 @@ class RenameTest {
     Result r = c.result();
     int m1 = Specs.offsetOf(r, Specs.MAIN, "m1", 1);
     assertEquals(Optional.of(new TextRange(m1, m1 + 2)), Ide.prepareRename(r, Specs.MAIN, m1 + 1));
-    for (String notAName : List.of("train", "require", "1064", "5 kW", "silver", "through", "wavelength")) {
+    for (String notAName :
+        List.of("train", "require", "1064", "5 kW", "silver", "through", "wavelength")) {
       int at = Specs.offsetOf(r, Specs.MAIN, notAName, 0);
       assertEquals(Optional.empty(), Ide.prepareRename(r, Specs.MAIN, at + 1), notAName);
       assertNotNull(Ide.rename(r, Specs.MAIN, at + 1, "x").error(), notAName);

@@ -13,7 +13,8 @@ import org.junit.jupiter.api.Test;
 
 /** Semantic tokens classify every meaningful span of a spec, in order and without overlap. */
 class SemanticTokensTest {
-  static final String FIXTURE = """
+  static final String FIXTURE =
+      """
       use "parts.jonq"  // the library
       /* two
          lines */
@@ -32,15 +33,19 @@ class SemanticTokensTest {
   static String render(String text, List<SemanticToken> tokens) {
     StringBuilder out = new StringBuilder();
     for (SemanticToken t : tokens) {
-      out.append(text, t.start(), t.start() + t.length()).append("  ").append(t.type())
-          .append(t.declaration() ? " *" : "").append('\n');
+      out.append(text, t.start(), t.start() + t.length())
+          .append("  ")
+          .append(t.type())
+          .append(t.declaration() ? " *" : "")
+          .append('\n');
     }
     return out.toString();
   }
 
   @Test
   void theFixtureIsClassifiedExactly() throws IOException {
-    Specs.Checked c = Specs.check(java.util.Map.of("main.jonq", FIXTURE, "parts.jonq", "probe spare\n"));
+    Specs.Checked c =
+        Specs.check(java.util.Map.of("main.jonq", FIXTURE, "parts.jonq", "probe spare\n"));
     List<SemanticToken> tokens = Ide.semanticTokens(c.result(), Specs.MAIN);
     Path golden = Path.of("src/test/resources/ide/tokens/fixture.txt");
     String actual = render(FIXTURE, tokens);
@@ -54,14 +59,18 @@ class SemanticTokensTest {
 
   @Test
   void sortedAndNeverOverlapping() {
-    for (String spec : List.of(FIXTURE, Specs.BENCH, "lens { focal 3 mm\n/* open", "train { a -> -> 3 }")) {
+    for (String spec :
+        List.of(FIXTURE, Specs.BENCH, "lens { focal 3 mm\n/* open", "train { a -> -> 3 }")) {
       Result r = Specs.check(spec).result();
       List<SemanticToken> tokens = Ide.semanticTokens(r, Specs.MAIN);
       for (int i = 1; i < tokens.size(); i++) {
         SemanticToken a = tokens.get(i - 1);
-        assertTrue(a.start() + a.length() <= tokens.get(i).start(), spec + ": " + a + " overlaps " + tokens.get(i));
+        assertTrue(
+            a.start() + a.length() <= tokens.get(i).start(),
+            spec + ": " + a + " overlaps " + tokens.get(i));
       }
-      assertTrue(tokens.stream().allMatch(t -> t.length() > 0 && t.start() + t.length() <= spec.length()));
+      assertTrue(
+          tokens.stream().allMatch(t -> t.length() > 0 && t.start() + t.length() <= spec.length()));
     }
   }
 
@@ -69,12 +78,14 @@ class SemanticTokensTest {
   void offsetsAreUtf16AndCommentsNeverSpanALine() {
     String spec = "// 🔆 beam\nprobe spot /* x\ny */\n";
     Result r = Specs.check(spec).result();
-    assertEquals("""
+    assertEquals(
+        """
         // 🔆 beam  comment
         probe  type
         spot  variable *
         /* x  comment
         y */  comment
-        """, render(spec, Ide.semanticTokens(r, Specs.MAIN)));
+        """,
+        render(spec, Ide.semanticTokens(r, Specs.MAIN)));
   }
 }

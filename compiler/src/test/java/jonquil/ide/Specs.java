@@ -57,15 +57,16 @@ final class Specs {
   }
 
   /**
-   * The bench most editor tests use; a file, so that the language server's own hover test
-   * ({@code HoverGoldenTest} in lsp/) hovers on the very same text and compares with the same goldens.
+   * The bench most editor tests use; a file, so that the language server's own hover test ({@code
+   * HoverGoldenTest} in lsp/) hovers on the very same text and compares with the same goldens.
    */
   static final String BENCH = read("bench.jonq");
 
   /** A spec under compiler/src/test/resources/ide/. */
   static String read(String name) {
     try {
-      return java.nio.file.Files.readString(jonquil.testing.Repo.testResources().resolve("ide").resolve(name));
+      return java.nio.file.Files.readString(
+          jonquil.testing.Repo.testResources().resolve("ide").resolve(name));
     } catch (java.io.IOException e) {
       throw new java.io.UncheckedIOException(e);
     }

@@ -29,7 +29,8 @@ class SymbolsTest {
     Result r = Specs.check(Specs.BENCH).result();
     StringBuilder out = new StringBuilder();
     render(Ide.documentSymbols(r, Specs.MAIN), "", out);
-    assertEquals("""
+    assertEquals(
+        """
         source seed
           parameter wavelength 1064 nm
           parameter power 2 W
@@ -56,7 +57,8 @@ class SymbolsTest {
           requirement power at spot >= 1 W
           requirement power at spot >= 1.95 W
           requirement stray < 5 mW
-        """, out.toString());
+        """,
+        out.toString());
   }
 
   @Test
@@ -81,7 +83,11 @@ class SymbolsTest {
   @Test
   void theSelectionOfADeclarationIsItsName() {
     Result r = Specs.check(Specs.BENCH).result();
-    SymbolInfo m1 = Ide.documentSymbols(r, Specs.MAIN).stream().filter(s -> s.name().equals("m1")).findFirst().orElseThrow();
+    SymbolInfo m1 =
+        Ide.documentSymbols(r, Specs.MAIN).stream()
+            .filter(s -> s.name().equals("m1"))
+            .findFirst()
+            .orElseThrow();
     assertEquals("m1", r.files().get(Specs.MAIN).slice(m1.selectionRange()));
     assertTrue(r.files().get(Specs.MAIN).slice(m1.range()).startsWith("mirror"));
   }
@@ -89,10 +95,15 @@ class SymbolsTest {
   @Test
   void workspaceSearchIsACaseInsensitiveSubstringMatchOverAllFiles() {
     Result r = Specs.check(NavigationTest.twoFiles("main", "fold")).result();
-    assertEquals(List.of("fold"), Ide.workspaceSymbols(r, "OL").stream().map(SymbolInfo::name).toList());
-    assertEquals(List.of(NavigationTest.PARTS), Ide.workspaceSymbolLocations(r, "OL").stream().map(Location::file).toList());
-    List<String> all = Ide.workspaceSymbols(r, "").stream().map(s -> s.kind() + " " + s.name()).toList();
-    assertEquals(List.of("source seed", "dump d1", "train main", "mirror fold", "mirror spare"), all);
+    assertEquals(
+        List.of("fold"), Ide.workspaceSymbols(r, "OL").stream().map(SymbolInfo::name).toList());
+    assertEquals(
+        List.of(NavigationTest.PARTS),
+        Ide.workspaceSymbolLocations(r, "OL").stream().map(Location::file).toList());
+    List<String> all =
+        Ide.workspaceSymbols(r, "").stream().map(s -> s.kind() + " " + s.name()).toList();
+    assertEquals(
+        List.of("source seed", "dump d1", "train main", "mirror fold", "mirror spare"), all);
     assertEquals(List.of(), Ide.workspaceSymbols(r, "nothing_like_this"));
   }
 

@@ -40,7 +40,10 @@ class FresnelTest {
     assertEquals(-Math.sin(ti - tt) / Math.sin(ti + tt), c.rs().getReal(), 1e-14);
     assertEquals(Math.tan(ti - tt) / Math.tan(ti + tt), c.rp().getReal(), 1e-14);
     assertEquals(2 * Math.sin(tt) * Math.cos(ti) / Math.sin(ti + tt), c.ts().getReal(), 1e-14);
-    assertEquals(2 * Math.sin(tt) * Math.cos(ti) / (Math.sin(ti + tt) * Math.cos(ti - tt)), c.tp().getReal(), 1e-14);
+    assertEquals(
+        2 * Math.sin(tt) * Math.cos(ti) / (Math.sin(ti + tt) * Math.cos(ti - tt)),
+        c.tp().getReal(),
+        1e-14);
     assertEquals(0, c.rs().getImaginary(), 1e-15);
     assertEquals(0, c.rp().getImaginary(), 1e-15);
   }
@@ -61,7 +64,9 @@ class FresnelTest {
     // Hecht, Optics, 5th ed. 2017, §4.7: sin θc = nt/ni; for n = 1.5 glass to air θc ≈ 41.8°
     // (from memory: Hecht quotes "about 42°").
     assertEquals(41.81, Math.toDegrees(Fresnel.criticalAngle(1.5, 1.0).getAsDouble()), 0.005);
-    assertFalse(Fresnel.criticalAngle(1.0, 1.5).isPresent(), "no total reflection going to a denser medium");
+    assertFalse(
+        Fresnel.criticalAngle(1.0, 1.5).isPresent(),
+        "no total reflection going to a denser medium");
     Fresnel.Coefficients justBelow = Fresnel.at(GLASS, AIR, Math.toRadians(41.5));
     assertTrue(justBelow.Rs() < 1 && justBelow.Ts() > 0);
   }
@@ -128,7 +133,8 @@ class FresnelTest {
     assertTrue(r0 > 0.98, "R = " + r0);
     // At 45° a metal reflects s more strongly than p and the retardance is neither 0 nor π.
     assertTrue(c.Rs() > c.Rp());
-    assertTrue(Math.abs(Fresnel.retardance(c)) > 0.1 && Math.abs(Fresnel.retardance(c)) < Math.PI - 0.1);
+    assertTrue(
+        Math.abs(Fresnel.retardance(c)) > 0.1 && Math.abs(Fresnel.retardance(c)) < Math.PI - 0.1);
   }
 
   @Test
@@ -136,7 +142,8 @@ class FresnelTest {
     // With n = n' + iκ, κ > 0, the transmitted field e^{i k0 ξ z} must decay: Im ξ > 0.
     Complex xi = Fresnel.normalComponent(new Complex(0.2, 3.0), new Complex(Math.sin(0.7)));
     assertTrue(xi.getImaginary() > 0);
-    Complex evanescent = Fresnel.normalComponent(new Complex(1.0), new Complex(1.5 * Math.sin(1.0)));
+    Complex evanescent =
+        Fresnel.normalComponent(new Complex(1.0), new Complex(1.5 * Math.sin(1.0)));
     assertEquals(0, evanescent.getReal(), 1e-15);
     assertTrue(evanescent.getImaginary() > 0);
     // A lossless medium whose radicand picked up a −6e-19 imaginary part by rounding still
@@ -152,7 +159,8 @@ class FresnelTest {
     // medium too when T is that flux just inside it.
     SplittableRandom rnd = new SplittableRandom(1000 + info.getCurrentRepetition());
     Complex n1 = new Complex(1 + 2 * rnd.nextDouble());
-    Complex n2 = new Complex(0.05 + 3 * rnd.nextDouble(), rnd.nextBoolean() ? 0 : 5 * rnd.nextDouble());
+    Complex n2 =
+        new Complex(0.05 + 3 * rnd.nextDouble(), rnd.nextBoolean() ? 0 : 5 * rnd.nextDouble());
     double th = rnd.nextDouble() * Math.toRadians(89.9);
     Fresnel.Coefficients c = Fresnel.at(n1, n2, th);
     assertEquals(1, c.Rs() + c.Ts(), 1e-12, () -> "s: " + n1 + " → " + n2 + " at " + th);
@@ -173,8 +181,9 @@ class FresnelTest {
 
   @Test
   void retardanceIsWrappedIntoTheHalfOpenInterval() {
-    Fresnel.Coefficients c = new Fresnel.Coefficients(new Complex(-1, 0.0), new Complex(1), Complex.ONE,
-        Complex.ONE, 1, 1, 0, 0);
+    Fresnel.Coefficients c =
+        new Fresnel.Coefficients(
+            new Complex(-1, 0.0), new Complex(1), Complex.ONE, Complex.ONE, 1, 1, 0, 0);
     assertEquals(Math.PI, Fresnel.retardance(c), 1e-15);
   }
 }

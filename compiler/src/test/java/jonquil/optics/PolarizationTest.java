@@ -18,7 +18,8 @@ class PolarizationTest {
   void malusLaw(double degrees) {
     // Hecht, Optics, 5th ed. 2017, §8.2, Malus's law I(θ) = I(0) cos²θ (eq. 8.24, from memory).
     double th = Math.toRadians(degrees);
-    Coherency out = Coherency.linear(0, W).transform(Jones.polarizer(th, 1, Double.POSITIVE_INFINITY));
+    Coherency out =
+        Coherency.linear(0, W).transform(Jones.polarizer(th, 1, Double.POSITIVE_INFINITY));
     assertEquals(W * Math.cos(th) * Math.cos(th), out.power(), 1e-18);
   }
 
@@ -98,7 +99,8 @@ class PolarizationTest {
   void unpolarizedLightThroughAnIdealPolarizerKeepsHalfAndBecomesPolarized() {
     // Hecht 2017, §8.2 (from memory): an ideal polarizer passes half the irradiance of natural
     // light, and what passes is linearly polarized along its axis.
-    Coherency out = Coherency.unpolarized(W).transform(Jones.polarizer(0.3, 1, Double.POSITIVE_INFINITY));
+    Coherency out =
+        Coherency.unpolarized(W).transform(Jones.polarizer(0.3, 1, Double.POSITIVE_INFINITY));
     assertEquals(W / 2, out.power(), 1e-18);
     assertEquals(1, out.dop(), 1e-12);
     assertEquals(0.3, out.azimuth(), 1e-12);
@@ -129,8 +131,9 @@ class PolarizationTest {
     assertEquals(-1, c.rs().getReal(), 1e-4);
     // Any interface at normal incidence has rp = −rs, so glass flips the hand too.
     Fresnel.Coefficients glass = Fresnel.at(Complex.ONE, new Complex(1.5), 0);
-    Coherency fromGlass = Coherency.circular(Handedness.RIGHT, W)
-        .transform(Jones.reflection(glass.rp(), glass.rs(), 0));
+    Coherency fromGlass =
+        Coherency.circular(Handedness.RIGHT, W)
+            .transform(Jones.reflection(glass.rp(), glass.rs(), 0));
     assertSame(Handedness.LEFT, fromGlass.handedness());
     assertEquals(0.04 * W, fromGlass.power(), 1e-18);
   }
@@ -142,8 +145,13 @@ class PolarizationTest {
     Jones r = Jones.reflection(c.rp(), c.rs(), phi);
     assertEquals(c.Rp() * W, Coherency.linear(phi, W).transform(r).power(), 1e-18);
     assertEquals(c.Rs() * W, Coherency.linear(phi + Math.PI / 2, W).transform(r).power(), 1e-18);
-    Jones t = Jones.transmission(c.tp(), c.ts(), phi, c.Tp() / (c.tp().abs() * c.tp().abs()),
-        c.Ts() / (c.ts().abs() * c.ts().abs()));
+    Jones t =
+        Jones.transmission(
+            c.tp(),
+            c.ts(),
+            phi,
+            c.Tp() / (c.tp().abs() * c.tp().abs()),
+            c.Ts() / (c.ts().abs() * c.ts().abs()));
     assertEquals(c.Tp() * W, Coherency.linear(phi, W).transform(t).power(), 1e-18);
     assertEquals(c.Ts() * W, Coherency.linear(phi + Math.PI / 2, W).transform(t).power(), 1e-18);
   }

@@ -13,8 +13,9 @@ class PropertiesTest {
 
   static Coherency randomState(SplittableRandom rnd) {
     double power = rnd.nextDouble() * 2;
-    Coherency pure = Coherency.elliptical((rnd.nextDouble() - 0.5) * Math.PI, (rnd.nextDouble() - 0.5) * Math.PI / 2,
-        power);
+    Coherency pure =
+        Coherency.elliptical(
+            (rnd.nextDouble() - 0.5) * Math.PI, (rnd.nextDouble() - 0.5) * Math.PI / 2, power);
     return pure.depolarized(rnd.nextDouble());
   }
 
@@ -36,8 +37,11 @@ class PropertiesTest {
       case 3:
         return Jones.rotator(angle);
       default:
-        Fresnel.Coefficients c = Fresnel.at(Complex.ONE, new Complex(1 + 3 * rnd.nextDouble(), 4 * rnd.nextDouble()),
-            rnd.nextDouble() * 1.5);
+        Fresnel.Coefficients c =
+            Fresnel.at(
+                Complex.ONE,
+                new Complex(1 + 3 * rnd.nextDouble(), 4 * rnd.nextDouble()),
+                rnd.nextDouble() * 1.5);
         return Jones.reflection(c.rp(), c.rs(), angle);
     }
   }
@@ -45,9 +49,11 @@ class PropertiesTest {
   @RepeatedTest(200)
   void idealRetardersAndRotatorsAreUnitary(RepetitionInfo info) {
     SplittableRandom rnd = new SplittableRandom(6000 + info.getCurrentRepetition());
-    assertTrue(Jones.retarder(rnd.nextDouble() * 4 * Math.PI, rnd.nextDouble() * 7).isUnitary(1e-14));
+    assertTrue(
+        Jones.retarder(rnd.nextDouble() * 4 * Math.PI, rnd.nextDouble() * 7).isUnitary(1e-14));
     assertTrue(Jones.rotator(rnd.nextDouble() * 7).isUnitary(1e-14));
-    assertTrue(!Jones.polarizer(rnd.nextDouble(), 0.99, 10).isUnitary(1e-3), "a polarizer is lossy");
+    assertTrue(
+        !Jones.polarizer(rnd.nextDouble(), 0.99, 10).isUnitary(1e-3), "a polarizer is lossy");
   }
 
   @RepeatedTest(300)
@@ -106,14 +112,23 @@ class PropertiesTest {
     // Transforming Φ = E E† by J must equal the coherency of J·E, for any J and E.
     SplittableRandom rnd = new SplittableRandom(10000 + info.getCurrentRepetition());
     double[] e = {rnd.nextGaussian(), rnd.nextGaussian(), rnd.nextGaussian(), rnd.nextGaussian()};
-    Jones j = Jones.of(rnd.nextGaussian(), rnd.nextGaussian(), rnd.nextGaussian(), rnd.nextGaussian(),
-        rnd.nextGaussian(), rnd.nextGaussian(), rnd.nextGaussian(), rnd.nextGaussian());
+    Jones j =
+        Jones.of(
+            rnd.nextGaussian(),
+            rnd.nextGaussian(),
+            rnd.nextGaussian(),
+            rnd.nextGaussian(),
+            rnd.nextGaussian(),
+            rnd.nextGaussian(),
+            rnd.nextGaussian(),
+            rnd.nextGaussian());
     Complex ex = new Complex(e[0], e[1]);
     Complex ey = new Complex(e[2], e[3]);
     Complex ox = j.a().multiply(ex).add(j.b().multiply(ey));
     Complex oy = j.c().multiply(ex).add(j.d().multiply(ey));
     Coherency viaMatrix = Coherency.fromJonesVector(e[0], e[1], e[2], e[3]).transform(j);
-    Coherency viaVector = Coherency.fromJonesVector(ox.getReal(), ox.getImaginary(), oy.getReal(), oy.getImaginary());
+    Coherency viaVector =
+        Coherency.fromJonesVector(ox.getReal(), ox.getImaginary(), oy.getReal(), oy.getImaginary());
     assertTrue(viaMatrix.approxEquals(viaVector, 1e-12), viaMatrix + " vs " + viaVector);
     // (AB)† = B†A†, and rotating an element equals rotating the frame around it.
     Jones k = randomPassive(rnd);

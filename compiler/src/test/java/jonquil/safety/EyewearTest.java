@@ -13,14 +13,16 @@ class EyewearTest {
 
   @Test
   void publishedWorkedExample() {
-    // University laser-safety "Sample calculations" appendix (citing AS/NZS IEC 60825.1/.14): argon 488 nm,
+    // University laser-safety "Sample calculations" appendix (citing AS/NZS IEC 60825.1/.14): argon
+    // 488 nm,
     // 0.25 s, MPE 2.55 mW/cm2, worst-case exposure 3.8 W/cm2 -> OD = log10(1490) = 3.2.
     assertEquals(3.2, Eyewear.forLimit(3.8e4, 25.5).get(), 0.05);
   }
 
   @Test
   void apertureAndPeakForASmallBeam() {
-    // 1 W at 532 nm, 2 mm 1/e2 beam, 0.25 s: over 7 mm 1 W*(1-exp(-24.5))/3.848e-5 m2 = 25985 W/m2 -> OD 3.01;
+    // 1 W at 532 nm, 2 mm 1/e2 beam, 0.25 s: over 7 mm 1 W*(1-exp(-24.5))/3.848e-5 m2 = 25985 W/m2
+    // -> OD 3.01;
     // peak 2P/(pi w^2) = 2/(pi*1e-6) = 636620 W/m2 -> OD 4.40.
     OpticalDensity od = Eyewear.required(Emission.continuous(532e-9, 1), 2e-3, 0.25).get();
     assertEquals(3.01, od.atAperture(), 0.01);
@@ -37,7 +39,8 @@ class EyewearTest {
 
   @Test
   void pulsedUsesPerPulseRadiantExposure() {
-    // 1064 nm, 10 ns, 10 mJ single pulse, 4 mm beam: peak 2*0.01/(pi*4e-6) = 1591.5 J/m2 vs 2e-2 J/m2 -> OD 4.90
+    // 1064 nm, 10 ns, 10 mJ single pulse, 4 mm beam: peak 2*0.01/(pi*4e-6) = 1591.5 J/m2 vs 2e-2
+    // J/m2 -> OD 4.90
     OpticalDensity od = Eyewear.required(Emission.singlePulse(1064e-9, 1e-2, 1e-8), 4e-3, 1).get();
     assertEquals(4.90, od.atPeak(), 0.01);
   }

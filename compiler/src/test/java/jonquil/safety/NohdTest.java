@@ -6,10 +6,11 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import org.junit.jupiter.api.Test;
 
 /**
- * NOHD = (sqrt(4P/(pi MPE)) - a)/phi (ANSI Z136.1-2014; IEC TR 60825-14:2004). Inputs of the first case
- * follow example 1 of the UNIRPA "Guide to calculating nominal optical hazard distance" (argon laser,
- * 100 mW, 1 mm exit beam); the stored copy of that guide breaks off before its divergence and result, so
- * the divergence (1 mrad) is assumed and the expected distance was computed by hand, not copied.
+ * NOHD = (sqrt(4P/(pi MPE)) - a)/phi (ANSI Z136.1-2014; IEC TR 60825-14:2004). Inputs of the first
+ * case follow example 1 of the UNIRPA "Guide to calculating nominal optical hazard distance" (argon
+ * laser, 100 mW, 1 mm exit beam); the stored copy of that guide breaks off before its divergence
+ * and result, so the divergence (1 mrad) is assumed and the expected distance was computed by hand,
+ * not copied.
  */
 class NohdTest {
 
@@ -23,17 +24,24 @@ class NohdTest {
 
   @Test
   void gaussianInputsUseTheOneOverEDiameter() {
-    // 1/e^2 values sqrt(2) mm and sqrt(2) mrad are 1 mm and 1 mrad at 1/e: same 69.7 m with the computed MPE.
-    Outcome<Double> o = Nohd.of(Emission.continuous(532e-9, 0.1), Math.sqrt(2) * 1e-3, Math.sqrt(2) * 1e-3, 0.25);
+    // 1/e^2 values sqrt(2) mm and sqrt(2) mrad are 1 mm and 1 mrad at 1/e: same 69.7 m with the
+    // computed MPE.
+    Outcome<Double> o =
+        Nohd.of(Emission.continuous(532e-9, 0.1), Math.sqrt(2) * 1e-3, Math.sqrt(2) * 1e-3, 0.25);
     assertEquals(69.7, o.get(), 0.1);
   }
 
   @Test
   void pulsedUsesEnergyAndRadiantExposure() {
-    // 1064 nm, 1 mJ, 10 ns single pulse; MPE 2e-2 J/m2 (Ed. 3, from memory); a = 2 mm, phi = 1 mrad at 1/e:
+    // 1064 nm, 1 mJ, 10 ns single pulse; MPE 2e-2 J/m2 (Ed. 3, from memory); a = 2 mm, phi = 1 mrad
+    // at 1/e:
     // sqrt(4e-3/(pi*0.02)) = 0.25231 m -> (0.25231 - 0.002)/0.001 = 250.3 m
-    Outcome<Double> o = Nohd.of(Emission.singlePulse(1064e-9, 1e-3, 1e-8), 2 * Math.sqrt(2) * 1e-3,
-        Math.sqrt(2) * 1e-3, 1);
+    Outcome<Double> o =
+        Nohd.of(
+            Emission.singlePulse(1064e-9, 1e-3, 1e-8),
+            2 * Math.sqrt(2) * 1e-3,
+            Math.sqrt(2) * 1e-3,
+            1);
     assertEquals(250.3, o.get(), 0.2);
   }
 

@@ -9,24 +9,31 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
 /**
- * Reference cases for the ocular MPE, IEC 60825-1:2014 (Ed. 3) Table A.1, point source. Each row names
- * its source; "from memory" rows were not confirmed by a published source during this work.
+ * Reference cases for the ocular MPE, IEC 60825-1:2014 (Ed. 3) Table A.1, point source. Each row
+ * names its source; "from memory" rows were not confirmed by a published source during this work.
  */
 class OcularMpeTest {
 
   @ParameterizedTest(name = "{0} nm cw for {1} s -> {2} W/m2 ({3})")
-  @CsvSource(delimiter = '|', value = {
-      // λ nm | t s | irradiance MPE W/m² | source
-      "532 | 0.25 | 25.5 | confirmed: univ. laser-safety 'Sample calculations' (AS/NZS 2211.1 = IEC 60825-1): 1.8 t^0.75 mJ/cm2 -> 2.55 mW/cm2 at 0.25 s; brief: 25.4 W/m2",
-      "488 | 0.25 | 25.5 | confirmed: same sample calculation, argon 488 nm, 0.25 s -> 2.55 mW/cm2",
-      "633 | 1    | 18.0 | 18 t^0.75 J/m2 (confirmed row) at t = 1 s",
-      "1064 | 100 | 50.0 | from memory: 10 C4 C7 W/m2, C4 = 5 (C4 confirmed, ICNIRP C_A)",
-      "1064 | 1   | 90.0 | from memory: 90 t^0.75 C7 J/m2 (= 18 C4 t^0.75, C4 = 5)",
-      "808 | 100  | 16.44 | from memory: 10 C4 W/m2 with C4 = 10^(0.002*108) (C4 formula confirmed)",
-      "450 | 1000 | 1.0  | from memory: photochemical 1 C3 W/m2 (C3 = 1 at 450 nm, confirmed) below thermal 10 W/m2",
-      "532 | 1000 | 10.0 | from memory: thermal 10 W/m2 below photochemical C3 = 43.7 W/m2",
-      "1175 | 100 | 140.9 | from memory: 10 C4 C7 W/m2, C7 = 10^(0.018*25) (C7 formula confirmed, ICNIRP C_C)",
-  })
+  @CsvSource(
+      delimiter = '|',
+      value = {
+        // λ nm | t s | irradiance MPE W/m² | source
+        "532 | 0.25 | 25.5 | confirmed: univ. laser-safety 'Sample calculations' (AS/NZS 2211.1 ="
+            + " IEC 60825-1): 1.8 t^0.75 mJ/cm2 -> 2.55 mW/cm2 at 0.25 s; brief: 25.4 W/m2",
+        "488 | 0.25 | 25.5 | confirmed: same sample calculation, argon 488 nm, 0.25 s -> 2.55"
+            + " mW/cm2",
+        "633 | 1    | 18.0 | 18 t^0.75 J/m2 (confirmed row) at t = 1 s",
+        "1064 | 100 | 50.0 | from memory: 10 C4 C7 W/m2, C4 = 5 (C4 confirmed, ICNIRP C_A)",
+        "1064 | 1   | 90.0 | from memory: 90 t^0.75 C7 J/m2 (= 18 C4 t^0.75, C4 = 5)",
+        "808 | 100  | 16.44 | from memory: 10 C4 W/m2 with C4 = 10^(0.002*108) (C4 formula"
+            + " confirmed)",
+        "450 | 1000 | 1.0  | from memory: photochemical 1 C3 W/m2 (C3 = 1 at 450 nm, confirmed)"
+            + " below thermal 10 W/m2",
+        "532 | 1000 | 10.0 | from memory: thermal 10 W/m2 below photochemical C3 = 43.7 W/m2",
+        "1175 | 100 | 140.9 | from memory: 10 C4 C7 W/m2, C7 = 10^(0.018*25) (C7 formula confirmed,"
+            + " ICNIRP C_C)",
+      })
   void continuousWave(double nm, double t, double irradiance, String source) {
     Outcome<Exposure> o = OcularMpe.at(Emission.continuous(nm * 1e-9, 1e-3), t);
     assertTrue(o.evaluated(), source);
@@ -37,12 +44,15 @@ class OcularMpeTest {
   }
 
   @ParameterizedTest(name = "{0} nm single {1} s pulse -> {2} J/m2 ({3})")
-  @CsvSource(delimiter = '|', value = {
-      "532 | 1e-8 | 2e-3 | from memory: Ed. 3 / ANSI Z136.1-2014 Table 5a value 2e-3 J/m2 for 10 ps-5 us (Ed. 2: 5e-3)",
-      "1064 | 1e-8 | 2e-2 | from memory: Ed. 3 2e-2 C7 J/m2 for 10 ps-13 us (Ed. 2: 5e-2)",
-      "532 | 1e-3 | 0.1012 | confirmed row 18 t^0.75 J/m2 at 1 ms",
-      "905 | 1e-7 | 5.14e-3 | from memory: 2e-3 C4 J/m2, C4 = 10^(0.002*205) = 2.57",
-  })
+  @CsvSource(
+      delimiter = '|',
+      value = {
+        "532 | 1e-8 | 2e-3 | from memory: Ed. 3 / ANSI Z136.1-2014 Table 5a value 2e-3 J/m2 for 10"
+            + " ps-5 us (Ed. 2: 5e-3)",
+        "1064 | 1e-8 | 2e-2 | from memory: Ed. 3 2e-2 C7 J/m2 for 10 ps-13 us (Ed. 2: 5e-2)",
+        "532 | 1e-3 | 0.1012 | confirmed row 18 t^0.75 J/m2 at 1 ms",
+        "905 | 1e-7 | 5.14e-3 | from memory: 2e-3 C4 J/m2, C4 = 10^(0.002*205) = 2.57",
+      })
   void singlePulse(double nm, double tau, double h, String source) {
     Outcome<Exposure> o = OcularMpe.at(Emission.singlePulse(nm * 1e-9, 1e-6, tau), 0.25);
     assertTrue(o.evaluated(), source);
@@ -50,7 +60,10 @@ class OcularMpeTest {
     assertEquals("single pulse", o.get().limitingCriterion());
   }
 
-  /** Breakpoints of Table A.1 join within a few per cent: a wrong coefficient or exponent shows up here. */
+  /**
+   * Breakpoints of Table A.1 join within a few per cent: a wrong coefficient or exponent shows up
+   * here.
+   */
   @ParameterizedTest(name = "{0} nm continuous at {1} s")
   @CsvSource({"532, 5e-6", "808, 5e-6", "1064, 1.3e-5", "532, 10", "1064, 10", "905, 10"})
   void breakpointsJoin(double nm, double t) {
@@ -61,7 +74,8 @@ class OcularMpeTest {
 
   @Test
   void lowRateTrainIsLimitedBySinglePulse() {
-    // 532 nm, 10 ns, 1 kHz, 0.25 s: single 2e-3; average 6.364/250 = 0.0255; repetitive (C5 = 1) = single.
+    // 532 nm, 10 ns, 1 kHz, 0.25 s: single 2e-3; average 6.364/250 = 0.0255; repetitive (C5 = 1) =
+    // single.
     Exposure x = OcularMpe.at(Emission.pulseTrain(532e-9, 1e-6, 1e-8, 1e3), 0.25).get();
     assertEquals(2e-3, x.radiantExposure(), 1e-6);
     assertEquals(18 * Math.pow(0.25, 0.75) / 250, x.averagePower(), 1e-6);
@@ -71,7 +85,8 @@ class OcularMpeTest {
 
   @Test
   void highRateTrainIsLimitedByAveragePower() {
-    // 532 nm, 10 ns, 10 MHz, 0.25 s: average 6.364/2.5e6 = 2.55e-6 J/m2 per pulse; pulses within T_i = 5 us
+    // 532 nm, 10 ns, 10 MHz, 0.25 s: average 6.364/2.5e6 = 2.55e-6 J/m2 per pulse; pulses within
+    // T_i = 5 us
     // grouped: 18 (5e-6)^0.75 / 50 = 3.8e-5; single 2e-3.
     Exposure x = OcularMpe.at(Emission.pulseTrain(532e-9, 1e-9, 1e-8, 1e7), 0.25).get();
     assertEquals(18 * Math.pow(0.25, 0.75) / 2.5e6, x.radiantExposure(), 1e-9);
@@ -83,23 +98,29 @@ class OcularMpeTest {
 
   @Test
   void nearInfraredTrainGroupsPulsesWithinTi() {
-    // 1064 nm, 10 ns, 100 kHz, 10 s: T_i = 13 us (from memory) > 10 us spacing -> 1.3 pulses per group.
+    // 1064 nm, 10 ns, 100 kHz, 10 s: T_i = 13 us (from memory) > 10 us spacing -> 1.3 pulses per
+    // group.
     Exposure x = OcularMpe.at(Emission.pulseTrain(1064e-9, 1e-6, 1e-8, 1e5), 10).get();
     assertEquals(90 * Math.pow(1.3e-5, 0.75) / 1.3, x.repetitivePulse(), 1e-6);
     assertEquals(500.0 / 1e6, x.radiantExposure(), 1e-9);
   }
 
   @ParameterizedTest(name = "{0} nm, pulse {1} s, exposure {2} s: not evaluated")
-  @CsvSource(delimiter = '|', value = {
-      "10600 | 0     | 10   | CO2 laser, outside 400-1400 nm",
-      "250   | 0     | 10   | ultraviolet",
-      "1300  | 0     | 10   | 1250-1400 nm: corneal dual limit not implemented",
-      "1550  | 0     | 10   | beyond 1400 nm",
-      "532   | 1e-12 | 0.25 | sub-10-ps pulse",
-      "532   | 0     | 1e5  | beyond 3e4 s",
-  })
+  @CsvSource(
+      delimiter = '|',
+      value = {
+        "10600 | 0     | 10   | CO2 laser, outside 400-1400 nm",
+        "250   | 0     | 10   | ultraviolet",
+        "1300  | 0     | 10   | 1250-1400 nm: corneal dual limit not implemented",
+        "1550  | 0     | 10   | beyond 1400 nm",
+        "532   | 1e-12 | 0.25 | sub-10-ps pulse",
+        "532   | 0     | 1e5  | beyond 3e4 s",
+      })
   void outsideCoverageIsNotEvaluated(double nm, double tau, double t, String why) {
-    Emission e = tau == 0 ? Emission.continuous(nm * 1e-9, 1) : Emission.pulseTrain(nm * 1e-9, 1e-6, tau, 1e3);
+    Emission e =
+        tau == 0
+            ? Emission.continuous(nm * 1e-9, 1)
+            : Emission.pulseTrain(nm * 1e-9, 1e-6, tau, 1e3);
     Outcome<Exposure> o = OcularMpe.at(e, t);
     assertFalse(o.evaluated(), why);
     assertFalse(o.reason().isBlank());

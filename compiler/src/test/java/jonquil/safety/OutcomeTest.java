@@ -10,8 +10,11 @@ class OutcomeTest {
 
   @Test
   void cautionTextIsExact() {
-    assertEquals("Computed estimate only: a qualified laser safety officer must confirm it under the applicable"
-        + " standard and local regulations; this tool does not replace a hazard evaluation.", Outcome.CAUTION);
+    assertEquals(
+        "Computed estimate only: a qualified laser safety officer must confirm it under the"
+            + " applicable standard and local regulations; this tool does not replace a hazard"
+            + " evaluation.",
+        Outcome.CAUTION);
   }
 
   @Test

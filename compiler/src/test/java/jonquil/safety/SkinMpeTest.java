@@ -12,15 +12,18 @@ import org.junit.jupiter.params.provider.CsvSource;
 class SkinMpeTest {
 
   @ParameterizedTest(name = "{0} nm, {1} s -> {2} J/m2")
-  @CsvSource(delimiter = '|', value = {
-      "1064 | 1e-8 | 1000  | from memory: 200 C4 J/m2 (1-100 ns), C4 = 5",
-      "532  | 1    | 11000 | from memory: 1.1e4 C4 t^0.25 J/m2",
-      "532  | 100  | 2e5   | from memory: 2000 C4 W/m2 for 10 s-3e4 s",
-      "1064 | 100  | 1e6   | from memory: 2000 C4 W/m2, C4 = 5",
-      "1300 | 100  | 1e6   | from memory: skin row extends to 1400 nm",
-  })
+  @CsvSource(
+      delimiter = '|',
+      value = {
+        "1064 | 1e-8 | 1000  | from memory: 200 C4 J/m2 (1-100 ns), C4 = 5",
+        "532  | 1    | 11000 | from memory: 1.1e4 C4 t^0.25 J/m2",
+        "532  | 100  | 2e5   | from memory: 2000 C4 W/m2 for 10 s-3e4 s",
+        "1064 | 100  | 1e6   | from memory: 2000 C4 W/m2, C4 = 5",
+        "1300 | 100  | 1e6   | from memory: skin row extends to 1400 nm",
+      })
   void table(double nm, double t, double h, String source) {
-    Emission e = t < 1e-6 ? Emission.singlePulse(nm * 1e-9, 1e-3, t) : Emission.continuous(nm * 1e-9, 1);
+    Emission e =
+        t < 1e-6 ? Emission.singlePulse(nm * 1e-9, 1e-3, t) : Emission.continuous(nm * 1e-9, 1);
     Outcome<Exposure> o = SkinMpe.at(e, t);
     assertTrue(o.evaluated(), source);
     assertEquals(h, o.get().radiantExposure(), h * 0.01, source);

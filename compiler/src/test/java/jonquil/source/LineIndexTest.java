@@ -55,14 +55,23 @@ class LineIndexTest {
     String s = text.toString();
     LineIndex index = new LineIndex(s);
     for (int offset = 0; offset <= s.length(); offset++) {
-      boolean insidePair = offset > 0 && offset < s.length() && Character.isLowSurrogate(s.charAt(offset));
-      boolean insideCrLf = offset > 0 && offset < s.length() && s.charAt(offset - 1) == '\r' && s.charAt(offset) == '\n';
+      boolean insidePair =
+          offset > 0 && offset < s.length() && Character.isLowSurrogate(s.charAt(offset));
+      boolean insideCrLf =
+          offset > 0
+              && offset < s.length()
+              && s.charAt(offset - 1) == '\r'
+              && s.charAt(offset) == '\n';
       if (insidePair || insideCrLf) {
         continue;
       }
       int line = index.line(offset);
-      assertEquals(offset, index.offsetOfUtf16(line, index.utf16Column(offset)), "utf16 at " + offset);
-      assertEquals(offset, index.offsetOfCodePoint(line, index.codePointColumn(offset)), "code points at " + offset);
+      assertEquals(
+          offset, index.offsetOfUtf16(line, index.utf16Column(offset)), "utf16 at " + offset);
+      assertEquals(
+          offset,
+          index.offsetOfCodePoint(line, index.codePointColumn(offset)),
+          "code points at " + offset);
       assertTrue(index.utf8Column(offset) >= index.codePointColumn(offset));
     }
   }

@@ -17,7 +17,8 @@ class CommentsTest {
 
   @Test
   void aClosedBlockCommentBeforeMoreCodeIsJustAComment() {
-    ParseResult r = parse("/* bench notes */\nprobe p /* inline */\n/* a\n * multi-line ** note */\ndump d\n");
+    ParseResult r =
+        parse("/* bench notes */\nprobe p /* inline */\n/* a\n * multi-line ** note */\ndump d\n");
     assertEquals(List.of(), r.diagnostics());
     assertEquals(3, r.ast().comments().size());
     assertEquals(2, r.ast().declarations().size());
@@ -26,6 +27,8 @@ class CommentsTest {
   @Test
   void onlyACommentThatNeverClosesIsReported() {
     ParseResult r = parse("probe p\n/* closed */\n/* open until the end\ndump d\n");
-    assertEquals(List.of(DiagnosticCode.UNTERMINATED_COMMENT), r.diagnostics().stream().map(Diagnostic::code).toList());
+    assertEquals(
+        List.of(DiagnosticCode.UNTERMINATED_COMMENT),
+        r.diagnostics().stream().map(Diagnostic::code).toList());
   }
 }

@@ -13,17 +13,18 @@ import jonquil.testing.Repo;
 import org.junit.jupiter.api.Test;
 
 /**
- * The parser tries fast SLL prediction first and falls back to full LL only at a syntax
- * error. That is only sound if the fast path never changes what the user sees: for every
- * sample, every corpus file, every prefix of each sample and seeded mutations, the tree
- * (with its ranges) and the diagnostics equal those of a full-LL-only parse.
+ * The parser tries fast SLL prediction first and falls back to full LL only at a syntax error. That
+ * is only sound if the fast path never changes what the user sees: for every sample, every corpus
+ * file, every prefix of each sample and seeded mutations, the tree (with its ranges) and the
+ * diagnostics equal those of a full-LL-only parse.
  */
 class TwoStageParseTest {
   private static void sameBothWays(Path file, String text) {
     SourceFile source = new SourceFile(file, text);
     ParseResult twoStage = SpecParser.parse(source, true);
     ParseResult fullLl = SpecParser.parse(source, false);
-    assertEquals(fullLl.diagnostics(), twoStage.diagnostics(), () -> "diagnostics differ on:\n" + text);
+    assertEquals(
+        fullLl.diagnostics(), twoStage.diagnostics(), () -> "diagnostics differ on:\n" + text);
     assertEquals(fullLl.ast(), twoStage.ast(), () -> "trees differ on:\n" + text);
   }
 
@@ -43,7 +44,8 @@ class TwoStageParseTest {
       for (int end = 0; end <= text.length(); end += 7) {
         sameBothWays(sample, text.substring(0, end));
       }
-      SplittableRandom random = new SplittableRandom(41 + sample.getFileName().toString().hashCode());
+      SplittableRandom random =
+          new SplittableRandom(41 + sample.getFileName().toString().hashCode());
       String alphabet = "{}->.,=\" %/*^\nabz019µ";
       for (int round = 0; round < 200; round++) {
         StringBuilder mutated = new StringBuilder(text);

@@ -8,8 +8,8 @@ import jonquil.source.SourceFile;
 import jonquil.source.TextRange;
 
 /**
- * The golden-file form of a result's diagnostics: one line each with its full range,
- * {@code path:line:col-line:col: severity J123: message}, related places indented below.
+ * The golden-file form of a result's diagnostics: one line each with its full range, {@code
+ * path:line:col-line:col: severity J123: message}, related places indented below.
  */
 public final class DiagnosticText {
   private DiagnosticText() {}
@@ -17,10 +17,19 @@ public final class DiagnosticText {
   public static String render(Result result, Path base) {
     StringBuilder out = new StringBuilder();
     for (Diagnostic d : result.diagnostics()) {
-      out.append(where(result, base, d.file(), d.range())).append(": ").append(d.severity().word()).append(' ')
-          .append(d.code().id()).append(": ").append(d.message()).append('\n');
+      out.append(where(result, base, d.file(), d.range()))
+          .append(": ")
+          .append(d.severity().word())
+          .append(' ')
+          .append(d.code().id())
+          .append(": ")
+          .append(d.message())
+          .append('\n');
       for (Related r : d.related()) {
-        out.append("    related ").append(where(result, base, r.file(), r.range())).append(": ").append(r.message())
+        out.append("    related ")
+            .append(where(result, base, r.file(), r.range()))
+            .append(": ")
+            .append(r.message())
             .append('\n');
       }
     }
@@ -33,7 +42,14 @@ public final class DiagnosticText {
     if (source == null) {
       return path;
     }
-    return path + ":" + source.humanLine(range.start()) + ":" + source.humanColumn(range.start()) + "-"
-        + source.humanLine(range.end()) + ":" + source.humanColumn(range.end());
+    return path
+        + ":"
+        + source.humanLine(range.start())
+        + ":"
+        + source.humanColumn(range.start())
+        + "-"
+        + source.humanLine(range.end())
+        + ":"
+        + source.humanColumn(range.end());
   }
 }

@@ -9,9 +9,9 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 
 /**
- * Compares produced text with a golden file. A missing golden is written and the test
- * fails ("new golden created"); {@code -Dgolden.update=true} rewrites all of them, to be
- * reviewed in git diff like code.
+ * Compares produced text with a golden file. A missing golden is written and the test fails ("new
+ * golden created"); {@code -Dgolden.update=true} rewrites all of them, to be reviewed in git diff
+ * like code.
  */
 public final class Golden {
   private Golden() {}
@@ -27,7 +27,10 @@ public final class Golden {
         return;
       }
       String expected = Files.readString(golden, StandardCharsets.UTF_8).replace("\r\n", "\n");
-      assertEquals(expected, actual, "output differs from " + golden + " (rerun with -Dgolden.update=true to accept)");
+      assertEquals(
+          expected,
+          actual,
+          "output differs from " + golden + " (rerun with -Dgolden.update=true to accept)");
     } catch (IOException e) {
       throw new java.io.UncheckedIOException(e);
     }

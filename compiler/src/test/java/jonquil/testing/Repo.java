@@ -24,7 +24,8 @@ public final class Repo {
   /** Every sample and every broken-spec corpus file, sorted within each. */
   public static java.util.List<Path> specFiles() throws java.io.IOException {
     java.util.List<Path> out = new java.util.ArrayList<>(sampleFiles());
-    try (java.util.stream.Stream<Path> corpus = java.nio.file.Files.walk(testResources().resolve("diagnostics"))) {
+    try (java.util.stream.Stream<Path> corpus =
+        java.nio.file.Files.walk(testResources().resolve("diagnostics"))) {
       corpus.filter(p -> p.toString().endsWith(".jonq")).sorted().forEach(out::add);
     }
     return out;

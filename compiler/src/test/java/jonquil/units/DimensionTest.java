@@ -10,7 +10,9 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
 
-/** The named dimensions agree with the base-unit forms of their SI units and read well in messages. */
+/**
+ * The named dimensions agree with the base-unit forms of their SI units and read well in messages.
+ */
 class DimensionTest {
   static Stream<Arguments> baseForms() {
     // The coherent unit of each named dimension in base units, as the source writes it.
@@ -23,7 +25,8 @@ class DimensionTest {
         Arguments.of(Dimension.IRRADIANCE, "kg·s⁻³", Sources.SI_T4 + ", watt per square metre"),
         Arguments.of(Dimension.FLUENCE, "kg·s⁻²", Sources.SI_T4 + ", joule per square metre"),
         Arguments.of(Dimension.RESPONSIVITY, "kg⁻¹·m⁻²·s³·A", Sources.SI_T4 + ", ampere per watt"),
-        Arguments.of(Dimension.LINEAR_POWER_DENSITY, "kg·m·s⁻³", Sources.SI_T4 + ", watt per metre"),
+        Arguments.of(
+            Dimension.LINEAR_POWER_DENSITY, "kg·m·s⁻³", Sources.SI_T4 + ", watt per metre"),
         Arguments.of(Dimension.LENGTH4, "m⁴", Sources.SI_T2),
         Arguments.of(Dimension.INVERSE_LENGTH, "m⁻¹", Sources.SI_5_4));
   }

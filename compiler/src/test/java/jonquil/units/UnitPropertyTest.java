@@ -12,20 +12,26 @@ import org.junit.jupiter.api.RepetitionInfo;
 class UnitPropertyTest {
   private static final long SEED = 0x4A6F6E7175696CL;
 
-  private static final List<String> KNOWN = List.of(
-      "nm", "µm", "mm", "cm", "m", "km", "W", "mW", "kW", "MW", "GW", "J", "mJ", "uJ", "s", "ns",
-      "ps", "fs", "ms", "Hz", "kHz", "MHz", "rad", "mrad", "urad", "deg", "°", "°C", "degC", "K",
-      "°F", "%", "ppm", "dB", "dBm", "OD", "wave", "W/cm2", "kW/cm^2", "J/cm²", "mJ/cm2", "W/m2",
-      "W/cm", "V/m", "kV/cm", "MV/m", "um2", "um4", "/cm", "m^-1", "A/W", "W·m^-2", "A", "mA", "V",
-      "g", "kg", "min", "h", "eV");
+  private static final List<String> KNOWN =
+      List.of(
+          "nm", "µm", "mm", "cm", "m", "km", "W", "mW", "kW", "MW", "GW", "J", "mJ", "uJ", "s",
+          "ns", "ps", "fs", "ms", "Hz", "kHz", "MHz", "rad", "mrad", "urad", "deg", "°", "°C",
+          "degC", "K", "°F", "%", "ppm", "dB", "dBm", "OD", "wave", "W/cm2", "kW/cm^2", "J/cm²",
+          "mJ/cm2", "W/m2", "W/cm", "V/m", "kV/cm", "MV/m", "um2", "um4", "/cm", "m^-1", "A/W",
+          "W·m^-2", "A", "mA", "V", "g", "kg", "min", "h", "eV");
 
   private static SplittableRandom rng(RepetitionInfo info) {
     return new SplittableRandom(SEED + info.getCurrentRepetition());
   }
 
   private static Dimension randomDimension(SplittableRandom r) {
-    return new Dimension(r.nextInt(-4, 5), r.nextInt(-4, 5), r.nextInt(-4, 5),
-        r.nextInt(-4, 5), r.nextInt(-4, 5), r.nextInt(-4, 5));
+    return new Dimension(
+        r.nextInt(-4, 5),
+        r.nextInt(-4, 5),
+        r.nextInt(-4, 5),
+        r.nextInt(-4, 5),
+        r.nextInt(-4, 5),
+        r.nextInt(-4, 5));
   }
 
   /** Log-uniform magnitude over 1e-12..1e12 with random sign: the span optical specs use. */
@@ -67,7 +73,8 @@ class UnitPropertyTest {
     Unit u = assertInstanceOf(UnitParse.Ok.class, UnitParser.parse(symbol), symbol).unit();
     double v = randomValue(r);
     if (u.scale() != Scale.LINEAR) {
-      // Levels beyond ±300 dB (or OD 30) leave double range; real filters and links stay far inside.
+      // Levels beyond ±300 dB (or OD 30) leave double range; real filters and links stay far
+      // inside.
       v = v % 30;
     }
     double back = u.fromSi(u.toSi(v));

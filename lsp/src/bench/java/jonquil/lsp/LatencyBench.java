@@ -1,8 +1,5 @@
 package jonquil.lsp;
 
-import java.io.IOException;
-import java.io.InputStream;
-import java.io.OutputStream;
 import java.nio.channels.Channels;
 import java.nio.channels.Pipe;
 import java.nio.file.Files;
@@ -42,17 +39,18 @@ import org.eclipse.lsp4j.services.LanguageServer;
 
 /**
  * Measures what an editor user feels on a large spec (about 10 000 lines): the time from a
- * one-character didChange to the publishDiagnostics of that version, and hover latency. The
- * real server runs in-process behind pipes that carry the real JSON-RPC. Not a unit test:
- * run it with {@code mvn -q -o -P bench -pl lsp compile exec:exec} (after an install), and
- * pass {@code -Dbench.args="--debounce-ms 0 --reps 50"} to change the defaults.
+ * one-character didChange to the publishDiagnostics of that version, and hover latency. The real
+ * server runs in-process behind pipes that carry the real JSON-RPC. Not a unit test: run it with
+ * {@code mvn -q -o -P bench -pl lsp compile exec:exec} (after an install), and pass {@code
+ * -Dbench.args="--debounce-ms 0 --reps 50"} to change the defaults.
  */
 public final class LatencyBench {
   private LatencyBench() {}
 
   /** The client side: hands each publish to whoever waits for its version. */
   static final class Client implements LanguageClient {
-    final ConcurrentHashMap<Integer, CompletableFuture<PublishDiagnosticsParams>> byVersion = new ConcurrentHashMap<>();
+    final ConcurrentHashMap<Integer, CompletableFuture<PublishDiagnosticsParams>> byVersion =
+        new ConcurrentHashMap<>();
 
     CompletableFuture<PublishDiagnosticsParams> publishOf(int version) {
       return byVersion.computeIfAbsent(version, v -> new CompletableFuture<>());
@@ -76,7 +74,8 @@ public final class LatencyBench {
     public void showMessage(MessageParams messageParams) {}
 
     @Override
-    public CompletableFuture<MessageActionItem> showMessageRequest(ShowMessageRequestParams requestParams) {
+    public CompletableFuture<MessageActionItem> showMessageRequest(
+        ShowMessageRequestParams requestParams) {
       return CompletableFuture.completedFuture(null);
     }
 
@@ -84,14 +83,24 @@ public final class LatencyBench {
     public void logMessage(MessageParams message) {}
   }
 
-  /** A valid spec of {@code trains} trains, each a source, {@code windows} windows and a probe, with a power requirement per probe. */
+  /**
+   * A valid spec of {@code trains} trains, each a source, {@code windows} windows and a probe, with
+   * a power requirement per probe.
+   */
   static String spec(int trains, int windows) {
-    StringBuilder s = new StringBuilder("// Generated for the language server benchmark.\n\nmaterial glass = index 1.5\n\n");
+    StringBuilder s =
+        new StringBuilder(
+            "// Generated for the language server benchmark.\n\nmaterial glass = index 1.5\n\n");
     for (int t = 0; t < trains; t++) {
-      s.append("source laser_").append(t).append(" {\n  wavelength    1064 nm\n  power         1 W\n")
+      s.append("source laser_")
+          .append(t)
+          .append(" {\n  wavelength    1064 nm\n  power         1 W\n")
           .append("  polarization  linear 0 deg\n  beam          waist 1.0 mm, m2 1.1\n}\n\n");
       for (int w = 0; w < windows; w++) {
-        s.append("window w_").append(t).append('_').append(w)
+        s.append("window w_")
+            .append(t)
+            .append('_')
+            .append(w)
             .append(" {\n  material   glass\n  thickness  1 mm\n  coating    ar 0.2 %\n}\n\n");
       }
       s.append("probe p_").append(t).append("\n\n");
@@ -121,8 +130,14 @@ public final class LatencyBench {
       }
     }
     int warmup = 10;
-    System.out.printf(Locale.ROOT, "%d cores, Java %s, debounce %d ms, %d repetitions after %d warm-up%n",
-        Runtime.getRuntime().availableProcessors(), System.getProperty("java.version"), debounceMs, reps, warmup);
+    System.out.printf(
+        Locale.ROOT,
+        "%d cores, Java %s, debounce %d ms, %d repetitions after %d warm-up%n",
+        Runtime.getRuntime().availableProcessors(),
+        System.getProperty("java.version"),
+        debounceMs,
+        reps,
+        warmup);
 
     try (Session big = Session.open(spec(40, 36), debounceMs)) {
       // (a) an edit after a pause: the user stops typing and waits for the verdict.
@@ -134,7 +149,8 @@ public final class LatencyBench {
           paused.add(ms);
         }
       }
-      // (b) the last keystroke of a burst of five, 60 ms apart: the debounce holds the check until typing stops.
+      // (b) the last keystroke of a burst of five, 60 ms apart: the debounce holds the check until
+      // typing stops.
       List<Double> burst = new ArrayList<>();
       int publishedInBursts = 0;
       for (int i = 0; i < warmup + reps; i++) {
@@ -147,13 +163,15 @@ public final class LatencyBench {
         }
       }
       // (c) the checker alone on the same one-character edits, in this JVM: from scratch (as the
-      // command line checks) and with the parse memo the server keeps (only the edited statement is parsed).
+      // command line checks) and with the parse memo the server keeps (only the edited statement is
+      // parsed).
       List<Double> check = new ArrayList<>();
       List<Double> memoCheck = new ArrayList<>();
       jonquil.syntax.ParseMemo memo = new jonquil.syntax.ParseMemo();
       for (int i = 0; i < warmup + reps; i++) {
         big.flip();
-        jonquil.Workspace w = jonquil.Workspace.withOverlay(big.dir, java.util.Map.of(big.file, big.text));
+        jonquil.Workspace w =
+            jonquil.Workspace.withOverlay(big.dir, java.util.Map.of(big.file, big.text));
         long t0 = System.nanoTime();
         jonquil.Checker.check(w, List.of(big.file), jonquil.CheckOptions.EDITOR);
         long t1 = System.nanoTime();
@@ -167,7 +185,10 @@ public final class LatencyBench {
       List<Double> hover = big.hovers(warmup, reps);
       report("didChange after a pause -> publishDiagnostics", paused);
       report("last of 5 keystrokes 60 ms apart -> publish", burst);
-      System.out.printf(Locale.ROOT, "  (%.1f publishes per burst of 5 edits)%n", publishedInBursts / (double) reps);
+      System.out.printf(
+          Locale.ROOT,
+          "  (%.1f publishes per burst of 5 edits)%n",
+          publishedInBursts / (double) reps);
       report("checker alone, from scratch (as the CLI)", check);
       report("checker alone, with the server's parse memo", memoCheck);
       report("hover (" + big.lineCount() + " lines)", hover);
@@ -178,7 +199,9 @@ public final class LatencyBench {
     System.exit(0);
   }
 
-  /** The real server in this JVM behind two pipes carrying real JSON-RPC, with one large spec open. */
+  /**
+   * The real server in this JVM behind two pipes carrying real JSON-RPC, with one large spec open.
+   */
   static final class Session implements AutoCloseable {
     final Client client = new Client();
     final Path dir;
@@ -202,22 +225,36 @@ public final class LatencyBench {
       this.uri = file.toUri().toString();
       Pipe toServer = Pipe.open();
       Pipe toClient = Pipe.open();
-      ExecutorService threads = Executors.newCachedThreadPool(r -> {
-        Thread t = new Thread(r, "bench-io");
-        t.setDaemon(true);
-        return t;
-      });
+      ExecutorService threads =
+          Executors.newCachedThreadPool(
+              r -> {
+                Thread t = new Thread(r, "bench-io");
+                t.setDaemon(true);
+                return t;
+              });
       this.server = new JonquilLanguageServer(new IdeAnswers(), Duration.ofMillis(debounceMs));
-      Launcher<LanguageClient> serverSide = LSPLauncher.createServerLauncher(server,
-          Channels.newInputStream(toServer.source()), Channels.newOutputStream(toClient.sink()), threads, null);
+      Launcher<LanguageClient> serverSide =
+          LSPLauncher.createServerLauncher(
+              server,
+              Channels.newInputStream(toServer.source()),
+              Channels.newOutputStream(toClient.sink()),
+              threads,
+              null);
       server.connect(serverSide.getRemoteProxy());
       serverSide.startListening();
-      Launcher<LanguageServer> clientSide = LSPLauncher.createClientLauncher(client,
-          Channels.newInputStream(toClient.source()), Channels.newOutputStream(toServer.sink()), threads, null);
+      Launcher<LanguageServer> clientSide =
+          LSPLauncher.createClientLauncher(
+              client,
+              Channels.newInputStream(toClient.source()),
+              Channels.newOutputStream(toServer.sink()),
+              threads,
+              null);
       clientSide.startListening();
       this.remote = clientSide.getRemoteProxy();
       // The edited value: a window's thickness in the middle of the file, "1 mm" <-> "2 mm".
-      this.line = Arrays.asList(lines).indexOf("window w_" + (lineCountOf(text) > 8000 ? 20 : 10) + "_18 {") + 2;
+      this.line =
+          Arrays.asList(lines).indexOf("window w_" + (lineCountOf(text) > 8000 ? 20 : 10) + "_18 {")
+              + 2;
       this.column = lines[line].indexOf("1 mm");
     }
 
@@ -237,15 +274,31 @@ public final class LatencyBench {
       s.remote.initialize(init).get(30, TimeUnit.SECONDS);
       s.remote.initialized(new InitializedParams());
       long opened = System.nanoTime();
-      s.remote.getTextDocumentService().didOpen(new DidOpenTextDocumentParams(new TextDocumentItem(s.uri, "jonquil", 1, text)));
+      s.remote
+          .getTextDocumentService()
+          .didOpen(new DidOpenTextDocumentParams(new TextDocumentItem(s.uri, "jonquil", 1, text)));
       PublishDiagnosticsParams first = s.client.publishOf(1).get(120, TimeUnit.SECONDS);
-      long errors = first.getDiagnostics().stream().filter(d -> d.getSeverity() == DiagnosticSeverity.Error).count();
-      long warnings = first.getDiagnostics().stream().filter(d -> d.getSeverity() == DiagnosticSeverity.Warning).count();
-      System.out.printf(Locale.ROOT, "spec: %d lines, %d characters; first check %.0f ms, %d diagnostics (%d errors, "
-          + "%d warnings, the rest notes)%n", s.lineCount(), text.length(), (System.nanoTime() - opened) / 1e6,
-          first.getDiagnostics().size(), errors, warnings);
+      long errors =
+          first.getDiagnostics().stream()
+              .filter(d -> d.getSeverity() == DiagnosticSeverity.Error)
+              .count();
+      long warnings =
+          first.getDiagnostics().stream()
+              .filter(d -> d.getSeverity() == DiagnosticSeverity.Warning)
+              .count();
+      System.out.printf(
+          Locale.ROOT,
+          "spec: %d lines, %d characters; first check %.0f ms, %d diagnostics (%d errors, "
+              + "%d warnings, the rest notes)%n",
+          s.lineCount(),
+          text.length(),
+          (System.nanoTime() - opened) / 1e6,
+          first.getDiagnostics().size(),
+          errors,
+          warnings);
       if (errors > 0) {
-        System.out.println("the generated spec has errors: " + first.getDiagnostics().get(0).getMessage());
+        System.out.println(
+            "the generated spec has errors: " + first.getDiagnostics().get(0).getMessage());
       }
       return s;
     }
@@ -257,7 +310,10 @@ public final class LatencyBench {
       return (client.arrivals.get(version) - sent) / 1e6;
     }
 
-    /** Sends {@code keys} edits {@code gapMs} apart; returns ms from the last one to the publish of its version. */
+    /**
+     * Sends {@code keys} edits {@code gapMs} apart; returns ms from the last one to the publish of
+     * its version.
+     */
     double burst(int keys, long gapMs) throws Exception {
       long sent = 0;
       for (int k = 0; k < keys; k++) {
@@ -285,9 +341,15 @@ public final class LatencyBench {
       String digit = flip();
       client.publishOf(version);
       long sent = System.nanoTime();
-      remote.getTextDocumentService().didChange(new DidChangeTextDocumentParams(
-          new VersionedTextDocumentIdentifier(uri, version), List.of(new TextDocumentContentChangeEvent(
-              new Range(new Position(line, column), new Position(line, column + 1)), digit))));
+      remote
+          .getTextDocumentService()
+          .didChange(
+              new DidChangeTextDocumentParams(
+                  new VersionedTextDocumentIdentifier(uri, version),
+                  List.of(
+                      new TextDocumentContentChangeEvent(
+                          new Range(new Position(line, column), new Position(line, column + 1)),
+                          digit))));
       return sent;
     }
 
@@ -304,8 +366,11 @@ public final class LatencyBench {
       for (int i = 0; i < warmup + reps; i++) {
         Position p = targets.get((i * 7919) % targets.size());
         long sent = System.nanoTime();
-        Hover h = remote.getTextDocumentService().hover(new HoverParams(new TextDocumentIdentifier(uri), p))
-            .get(30, TimeUnit.SECONDS);
+        Hover h =
+            remote
+                .getTextDocumentService()
+                .hover(new HoverParams(new TextDocumentIdentifier(uri), p))
+                .get(30, TimeUnit.SECONDS);
         double ms = (System.nanoTime() - sent) / 1e6;
         if (h == null) {
           misses++;
@@ -331,7 +396,12 @@ public final class LatencyBench {
     double[] sorted = millis.stream().mapToDouble(Double::doubleValue).sorted().toArray();
     double median = sorted[(sorted.length - 1) / 2];
     double p95 = sorted[(int) Math.ceil(0.95 * sorted.length) - 1];
-    System.out.printf(Locale.ROOT, "%-48s median %7.1f ms   p95 %7.1f ms   max %7.1f ms%n", what, median, p95,
+    System.out.printf(
+        Locale.ROOT,
+        "%-48s median %7.1f ms   p95 %7.1f ms   max %7.1f ms%n",
+        what,
+        median,
+        p95,
         sorted[sorted.length - 1]);
   }
 }

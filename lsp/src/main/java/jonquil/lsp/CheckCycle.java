@@ -20,7 +20,10 @@ import org.eclipse.lsp4j.Diagnostic;
 import org.eclipse.lsp4j.PublishDiagnosticsParams;
 import org.eclipse.lsp4j.services.LanguageClient;
 
-/** One check of all open documents, publishing each affected file's diagnostics for the version they saw and dropping stale ones. */
+/**
+ * One check of all open documents, publishing each affected file's diagnostics for the version they
+ * saw and dropping stale ones.
+ */
 final class CheckCycle implements CheckScheduler.Task {
   /** Marks a project root where there is no version control, as the command line does. */
   static final String ROOT_MARKER = ".jonquil-root";
@@ -32,15 +35,26 @@ final class CheckCycle implements CheckScheduler.Task {
   private final Supplier<JonquilLanguageServer.Folders> folders;
   private final Supplier<Convert> convert;
   private final Supplier<LanguageClient> client;
+
   /** True when the client pulls the diagnostics of open documents: they are then never pushed. */
   private final BooleanSupplier pull;
-  /** Earlier parses, so an edit re-parses only the statements it touched; used by the worker thread only. */
+
+  /**
+   * Earlier parses, so an edit re-parses only the statements it touched; used by the worker thread
+   * only.
+   */
   private final jonquil.syntax.ParseMemo memo = new jonquil.syntax.ParseMemo();
+
   /** What the editor shows now, per file; touched by the worker thread only. */
   private final Map<Path, Published> published = new HashMap<>();
 
-  CheckCycle(Documents documents, Snapshots snapshots, Supplier<JonquilLanguageServer.Folders> folders, Supplier<Convert> convert,
-      Supplier<LanguageClient> client, BooleanSupplier pull) {
+  CheckCycle(
+      Documents documents,
+      Snapshots snapshots,
+      Supplier<JonquilLanguageServer.Folders> folders,
+      Supplier<Convert> convert,
+      Supplier<LanguageClient> client,
+      BooleanSupplier pull) {
     this.documents = documents;
     this.snapshots = snapshots;
     this.folders = folders;
@@ -57,15 +71,24 @@ final class CheckCycle implements CheckScheduler.Task {
     Map<Path, List<Path>> byRoot = new LinkedHashMap<>();
     JonquilLanguageServer.Folders now = folders.get();
     List<Path> roots = now.paths();
-    open.values().stream().sorted((a, b) -> a.path().compareTo(b.path())).forEach(doc -> {
-      buffers.put(doc.path(), doc.text());
-      versions.put(doc.path(), doc.version());
-      byRoot.computeIfAbsent(projectRoot(doc.path(), roots), k -> new ArrayList<>()).add(doc.path());
-    });
+    open.values().stream()
+        .sorted((a, b) -> a.path().compareTo(b.path()))
+        .forEach(
+            doc -> {
+              buffers.put(doc.path(), doc.text());
+              versions.put(doc.path(), doc.version());
+              byRoot
+                  .computeIfAbsent(projectRoot(doc.path(), roots), k -> new ArrayList<>())
+                  .add(doc.path());
+            });
     List<Result> results = new ArrayList<>();
     for (Map.Entry<Path, List<Path>> root : byRoot.entrySet()) {
-      Optional<Result> result = Checker.check(Workspace.withOverlay(root.getKey(), buffers).withMemo(memo),
-          root.getValue(), jonquil.CheckOptions.EDITOR, superseded);
+      Optional<Result> result =
+          Checker.check(
+              Workspace.withOverlay(root.getKey(), buffers).withMemo(memo),
+              root.getValue(),
+              jonquil.CheckOptions.EDITOR,
+              superseded);
       if (result.isEmpty()) {
         return false; // a newer edit is waiting; its check publishes instead
       }
@@ -119,7 +142,8 @@ final class CheckCycle implements CheckScheduler.Task {
       if (pulled && doc != null) {
         Published before = published.remove(path);
         if (before != null && !before.diagnostics().isEmpty()) {
-          // Pushed while it was closed (as a used file); now the client pulls it, so the push is taken back.
+          // Pushed while it was closed (as a used file); now the client pulls it, so the push is
+          // taken back.
           to.publishDiagnostics(new PublishDiagnosticsParams(before.uri(), List.of(), null));
         }
         continue;
@@ -133,7 +157,8 @@ final class CheckCycle implements CheckScheduler.Task {
         continue; // a clean file the editor never showed
       }
       String uri = doc != null ? doc.uri() : before != null ? before.uri() : conv.uri(path);
-      Published next = new Published(uri, doc != null ? doc.version() : null, List.copyOf(diagnostics));
+      Published next =
+          new Published(uri, doc != null ? doc.version() : null, List.copyOf(diagnostics));
       if (next.equals(before)) {
         continue;
       }
@@ -155,7 +180,10 @@ final class CheckCycle implements CheckScheduler.Task {
     return out;
   }
 
-  /** The results' diagnostics by file, in the results' order, each once (a file used by two roots is checked twice). */
+  /**
+   * The results' diagnostics by file, in the results' order, each once (a file used by two roots is
+   * checked twice).
+   */
   static Map<Path, Set<jonquil.diag.Diagnostic>> byFile(List<Result> results) {
     Map<Path, Set<jonquil.diag.Diagnostic>> out = new LinkedHashMap<>();
     for (Result r : results) {
@@ -167,13 +195,14 @@ final class CheckCycle implements CheckScheduler.Task {
   }
 
   /**
-   * The root 'use' paths are anchored to: the innermost workspace folder holding the file,
-   * else the nearest ancestor with {@code .git} or the root marker, else the file's folder.
+   * The root 'use' paths are anchored to: the innermost workspace folder holding the file, else the
+   * nearest ancestor with {@code .git} or the root marker, else the file's folder.
    */
   static Path projectRoot(Path file, List<Path> folders) {
     Path best = null;
     for (Path folder : folders) {
-      if (file.startsWith(folder) && (best == null || folder.getNameCount() > best.getNameCount())) {
+      if (file.startsWith(folder)
+          && (best == null || folder.getNameCount() > best.getNameCount())) {
         best = folder;
       }
     }

@@ -5,18 +5,20 @@ import java.util.function.BooleanSupplier;
 import java.util.function.Consumer;
 
 /**
- * Runs checks off LSP4J's reader thread, on one 16 MB-stack worker that outlives any
- * Throwable. Debounced on both edges: an edit after a pause in typing is checked at once
- * (the user is looking), while edits in quick succession are coalesced into one check a
- * debounce after the last of them. A running check that a newer edit has made stale may
- * give up between stages, so the check for the newer text starts sooner; once the oldest
- * unserved edit has waited {@code maxDelay}, the check runs to the end regardless, so
- * steady typing still gets diagnostics.
+ * Runs checks off LSP4J's reader thread, on one 16 MB-stack worker that outlives any Throwable.
+ * Debounced on both edges: an edit after a pause in typing is checked at once (the user is
+ * looking), while edits in quick succession are coalesced into one check a debounce after the last
+ * of them. A running check that a newer edit has made stale may give up between stages, so the
+ * check for the newer text starts sooner; once the oldest unserved edit has waited {@code
+ * maxDelay}, the check runs to the end regardless, so steady typing still gets diagnostics.
  */
 final class CheckScheduler implements AutoCloseable {
   static final long STACK_BYTES = 16L << 20;
 
-  /** One check; returns false when it gave up because {@code superseded} said a newer edit made it stale. */
+  /**
+   * One check; returns false when it gave up because {@code superseded} said a newer edit made it
+   * stale.
+   */
   interface Task {
     boolean run(BooleanSupplier superseded);
   }
@@ -29,31 +31,49 @@ final class CheckScheduler implements AutoCloseable {
   private final Thread worker;
   private final Runnable warmUp;
   private final boolean runAfterPause;
+
   /** A request is waiting that the running check (if any) has not seen. */
   private boolean dirty;
+
   /** The waiting requests began after a pause: run them without waiting for the debounce. */
   private boolean leading;
+
   /** When the oldest request not yet served by a finished check came. */
   private long firstRequest;
+
   private long lastRequest;
   private boolean anyRequest;
+
   /** {@link #firstRequest} of the batch the running check serves. */
   private long servingSince;
+
   private boolean stopped;
 
-  CheckScheduler(Runnable task, Consumer<Throwable> onFailure, Duration debounce, Duration maxDelay) {
-    this(superseded -> {
-      task.run();
-      return true;
-    }, onFailure, debounce, maxDelay, () -> {}, true);
+  CheckScheduler(
+      Runnable task, Consumer<Throwable> onFailure, Duration debounce, Duration maxDelay) {
+    this(
+        superseded -> {
+          task.run();
+          return true;
+        },
+        onFailure,
+        debounce,
+        maxDelay,
+        () -> {},
+        true);
   }
 
   /**
-   * As above, running {@code warmUp} once on the worker before the first check (a failure there
-   * is ignored). With {@code runAfterPause} false every run waits for the debounce (tests use it
-   * to hold checks back).
+   * As above, running {@code warmUp} once on the worker before the first check (a failure there is
+   * ignored). With {@code runAfterPause} false every run waits for the debounce (tests use it to
+   * hold checks back).
    */
-  CheckScheduler(Task task, Consumer<Throwable> onFailure, Duration debounce, Duration maxDelay, Runnable warmUp,
+  CheckScheduler(
+      Task task,
+      Consumer<Throwable> onFailure,
+      Duration debounce,
+      Duration maxDelay,
+      Runnable warmUp,
       boolean runAfterPause) {
     this.task = task;
     this.runAfterPause = runAfterPause;
@@ -98,7 +118,10 @@ final class CheckScheduler implements AutoCloseable {
     }
   }
 
-  /** Asked by the running check: a newer request is waiting, and the oldest unserved one has not waited too long. */
+  /**
+   * Asked by the running check: a newer request is waiting, and the oldest unserved one has not
+   * waited too long.
+   */
   private boolean superseded() {
     synchronized (lock) {
       return stopped || dirty && System.nanoTime() - servingSince < maxDelayNanos;
@@ -117,7 +140,8 @@ final class CheckScheduler implements AutoCloseable {
         try {
           while (!stopped) {
             if (dirty) {
-              long due = leading ? 0 : Math.min(lastRequest + debounceNanos, firstRequest + maxDelayNanos);
+              long due =
+                  leading ? 0 : Math.min(lastRequest + debounceNanos, firstRequest + maxDelayNanos);
               long wait = due - System.nanoTime();
               if (wait <= 0) {
                 break;
@@ -153,7 +177,8 @@ final class CheckScheduler implements AutoCloseable {
       }
       if (!finished) {
         synchronized (lock) {
-          // The edits that run served are still unserved: they keep their age for the maxDelay bound.
+          // The edits that run served are still unserved: they keep their age for the maxDelay
+          // bound.
           firstRequest = Math.min(firstRequest, since);
         }
       }

@@ -1,5 +1,17 @@
 package jonquil.lsp;
 
+import com.google.gson.JsonElement;
+import com.google.gson.JsonObject;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.function.Function;
+import jonquil.diag.Edit;
+import jonquil.diag.Related;
+import jonquil.diag.Severity;
+import jonquil.format.FormatOptions;
 import jonquil.ide.CodeActionInfo;
 import jonquil.ide.CompletionItemInfo;
 import jonquil.ide.DocumentLinkInfo;
@@ -7,19 +19,6 @@ import jonquil.ide.FoldingRangeInfo;
 import jonquil.ide.HoverInfo;
 import jonquil.ide.SemanticToken;
 import jonquil.ide.SymbolInfo;
-
-import java.nio.file.Path;
-import java.util.ArrayList;
-import java.util.List;
-import java.util.Map;
-import java.util.Optional;
-import java.util.function.Function;
-import com.google.gson.JsonElement;
-import com.google.gson.JsonObject;
-import jonquil.diag.Edit;
-import jonquil.diag.Related;
-import jonquil.diag.Severity;
-import jonquil.format.FormatOptions;
 import jonquil.source.LineIndex;
 import jonquil.source.SourceFile;
 import jonquil.source.TextRange;
@@ -67,7 +66,10 @@ import org.eclipse.lsp4j.WorkspaceServerCapabilities;
 import org.eclipse.lsp4j.WorkspaceSymbol;
 import org.eclipse.lsp4j.jsonrpc.messages.Either;
 
-/** The one place where compiler values and LSP4J values convert: positions in the negotiated encoding, ranges, URIs, severities. */
+/**
+ * The one place where compiler values and LSP4J values convert: positions in the negotiated
+ * encoding, ranges, URIs, severities.
+ */
 final class Convert {
 
   /** How the {@code character} of a position counts: the three encodings LSP 3.17 names. */
@@ -86,9 +88,12 @@ final class Convert {
       return wire;
     }
 
-    /** The client's most preferred encoding that we support; UTF-16 (mandatory) when it offers none. */
+    /**
+     * The client's most preferred encoding that we support; UTF-16 (mandatory) when it offers none.
+     */
     static Encoding negotiate(ClientCapabilities capabilities) {
-      if (capabilities == null || capabilities.getGeneral() == null
+      if (capabilities == null
+          || capabilities.getGeneral() == null
           || capabilities.getGeneral().getPositionEncodings() == null) {
         return UTF_16;
       }
@@ -106,10 +111,15 @@ final class Convert {
   static final String SOURCE = "jonquil";
   private static final Path BUFFER = Path.of("buffer.jonq");
 
-  /** The semantic token types every client gets, in legend order; jonquil.ide's "unit" joins them only on request. */
+  /**
+   * The semantic token types every client gets, in legend order; jonquil.ide's "unit" joins them
+   * only on request.
+   */
   static final List<String> TOKEN_TYPES =
       List.of("keyword", "type", "variable", "property", "number", "string", "comment", "operator");
+
   static final String UNIT_TOKEN = "unit";
+
   /** The one modifier: bit 0 of a token's modifier set. */
   static final List<String> TOKEN_MODIFIERS = List.of("declaration");
 
@@ -123,8 +133,8 @@ final class Convert {
   }
 
   /**
-   * {@code unitTokens}: the client named a "unit" token type among those it knows, so units get
-   * a type of their own in the legend; otherwise they are shown as "type", a standard one.
+   * {@code unitTokens}: the client named a "unit" token type among those it knows, so units get a
+   * type of their own in the legend; otherwise they are shown as "type", a standard one.
    */
   Convert(Encoding encoding, Function<Path, String> openUri, boolean unitTokens) {
     this.encoding = encoding;
@@ -178,21 +188,22 @@ final class Convert {
       return text.length();
     }
     switch (encoding) {
-      case UTF_8: {
-        int offset = lines.lineStart(line);
-        int end = lines.lineContentEnd(line);
-        int bytes = 0;
-        while (offset < end) {
-          int cp = text.codePointAt(offset);
-          int size = cp < 0x80 ? 1 : cp < 0x800 ? 2 : cp < 0x10000 ? 3 : 4;
-          if (bytes + size > column) {
-            break;
+      case UTF_8:
+        {
+          int offset = lines.lineStart(line);
+          int end = lines.lineContentEnd(line);
+          int bytes = 0;
+          while (offset < end) {
+            int cp = text.codePointAt(offset);
+            int size = cp < 0x80 ? 1 : cp < 0x800 ? 2 : cp < 0x10000 ? 3 : 4;
+            if (bytes + size > column) {
+              break;
+            }
+            bytes += size;
+            offset += Character.charCount(cp);
           }
-          bytes += size;
-          offset += Character.charCount(cp);
+          return offset;
         }
-        return offset;
-      }
       case UTF_32:
         return lines.offsetOfCodePoint(line, column);
       default:
@@ -244,28 +255,37 @@ final class Convert {
 
   Diagnostic diagnostic(jonquil.diag.Diagnostic d, Function<Path, SourceFile> sources) {
     SourceFile source = orEmpty(d.file(), sources.apply(d.file()));
-    Diagnostic out = new Diagnostic(range(source, d.range()), d.message(), severity(d.severity()), SOURCE,
-        d.code().id());
+    Diagnostic out =
+        new Diagnostic(
+            range(source, d.range()), d.message(), severity(d.severity()), SOURCE, d.code().id());
     if (!d.related().isEmpty()) {
       List<DiagnosticRelatedInformation> related = new ArrayList<>();
       for (Related r : d.related()) {
         SourceFile at = orEmpty(r.file(), sources.apply(r.file()));
-        related.add(new DiagnosticRelatedInformation(new Location(uri(r.file()), range(at, r.range())), r.message()));
+        related.add(
+            new DiagnosticRelatedInformation(
+                new Location(uri(r.file()), range(at, r.range())), r.message()));
       }
       out.setRelatedInformation(related);
     }
     return out;
   }
 
-  /** Pull diagnostics per document: they depend on the files a document uses; no workspace-wide pull. */
+  /**
+   * Pull diagnostics per document: they depend on the files a document uses; no workspace-wide
+   * pull.
+   */
   static DiagnosticRegistrationOptions diagnosticProvider() {
     DiagnosticRegistrationOptions out = new DiagnosticRegistrationOptions(true, false);
     out.setIdentifier(SOURCE);
     return out;
   }
 
-  /** A pull answer: "unchanged" when the client already holds {@code resultId}, else the full list. */
-  static DocumentDiagnosticReport diagnosticReport(String resultId, String previousResultId, List<Diagnostic> items) {
+  /**
+   * A pull answer: "unchanged" when the client already holds {@code resultId}, else the full list.
+   */
+  static DocumentDiagnosticReport diagnosticReport(
+      String resultId, String previousResultId, List<Diagnostic> items) {
     if (resultId.equals(previousResultId)) {
       return new DocumentDiagnosticReport(new RelatedUnchangedDocumentDiagnosticReport(resultId));
     }
@@ -282,7 +302,9 @@ final class Convert {
 
   // ---- registrations ----
 
-  /** The registration options that ask the editor to report changes to files matching {@code globs}. */
+  /**
+   * The registration options that ask the editor to report changes to files matching {@code globs}.
+   */
   static DidChangeWatchedFilesRegistrationOptions fileWatchers(List<String> globs) {
     List<FileSystemWatcher> watchers = new ArrayList<>();
     for (String glob : globs) {
@@ -297,7 +319,8 @@ final class Convert {
     return new org.eclipse.lsp4j.WorkDoneProgressCreateParams(Either.forLeft(token));
   }
 
-  static org.eclipse.lsp4j.ProgressParams progressBegin(String token, String title, String message) {
+  static org.eclipse.lsp4j.ProgressParams progressBegin(
+      String token, String title, String message) {
     org.eclipse.lsp4j.WorkDoneProgressBegin begin = new org.eclipse.lsp4j.WorkDoneProgressBegin();
     begin.setTitle(title);
     begin.setMessage(message);
@@ -306,8 +329,10 @@ final class Convert {
     return new org.eclipse.lsp4j.ProgressParams(Either.forLeft(token), Either.forLeft(begin));
   }
 
-  static org.eclipse.lsp4j.ProgressParams progressReport(String token, String message, int percentage) {
-    org.eclipse.lsp4j.WorkDoneProgressReport report = new org.eclipse.lsp4j.WorkDoneProgressReport();
+  static org.eclipse.lsp4j.ProgressParams progressReport(
+      String token, String message, int percentage) {
+    org.eclipse.lsp4j.WorkDoneProgressReport report =
+        new org.eclipse.lsp4j.WorkDoneProgressReport();
     report.setMessage(message);
     report.setPercentage(Math.max(0, Math.min(100, percentage)));
     return new org.eclipse.lsp4j.ProgressParams(Either.forLeft(token), Either.forLeft(report));
@@ -327,7 +352,9 @@ final class Convert {
     return token.isLeft() ? token.getLeft() : String.valueOf(token.getRight());
   }
 
-  /** The workspace part of the server capabilities: multi-root folders, with change notifications. */
+  /**
+   * The workspace part of the server capabilities: multi-root folders, with change notifications.
+   */
   static WorkspaceServerCapabilities workspaceFolders() {
     WorkspaceFoldersOptions folders = new WorkspaceFoldersOptions();
     folders.setSupported(true);
@@ -337,14 +364,20 @@ final class Convert {
 
   // ---- formatting ----
 
-  /** The formatter's options from the editor's: its tab size (clamped to what the formatter takes) and tab choice. */
+  /**
+   * The formatter's options from the editor's: its tab size (clamped to what the formatter takes)
+   * and tab choice.
+   */
   static FormatOptions formatOptions(FormattingOptions options) {
     int tab = options == null ? FormatOptions.DEFAULT.indent() : options.getTabSize();
     boolean spaces = options == null || options.isInsertSpaces();
     return new FormatOptions(Math.max(0, Math.min(16, tab)), spaces);
   }
 
-  /** The lines of a range, as the formatter's hunks are chosen by: from the start line to the end line (inclusive). */
+  /**
+   * The lines of a range, as the formatter's hunks are chosen by: from the start line to the end
+   * line (inclusive).
+   */
   static int[] lines(Range range) {
     int first = Math.max(0, range.getStart().getLine());
     int last = Math.max(first, range.getEnd().getLine());
@@ -370,11 +403,14 @@ final class Convert {
   }
 
   /**
-   * A definition as a link: the target's range serves as both its whole and its selected
-   * range (the editor answers give the declared name); {@code origin} is the name under the
-   * cursor in {@code from}, or null when there is none.
+   * A definition as a link: the target's range serves as both its whole and its selected range (the
+   * editor answers give the declared name); {@code origin} is the name under the cursor in {@code
+   * from}, or null when there is none.
    */
-  LocationLink locationLink(jonquil.ide.Location target, Function<Path, SourceFile> sources, SourceFile from,
+  LocationLink locationLink(
+      jonquil.ide.Location target,
+      Function<Path, SourceFile> sources,
+      SourceFile from,
       TextRange origin) {
     SourceFile source = orEmpty(target.file(), sources.apply(target.file()));
     Range at = range(source, target.range());
@@ -386,8 +422,11 @@ final class Convert {
   }
 
   Hover hover(HoverInfo info, SourceFile source, boolean markdown) {
-    Hover hover = new Hover(markdown ? new MarkupContent(MarkupKind.MARKDOWN, info.markdown())
-        : new MarkupContent(MarkupKind.PLAINTEXT, PlainMarkdown.strip(info.markdown())));
+    Hover hover =
+        new Hover(
+            markdown
+                ? new MarkupContent(MarkupKind.MARKDOWN, info.markdown())
+                : new MarkupContent(MarkupKind.PLAINTEXT, PlainMarkdown.strip(info.markdown())));
     if (info.range() != null) {
       hover.setRange(range(source, info.range()));
     }
@@ -419,8 +458,10 @@ final class Convert {
 
   DocumentSymbol documentSymbol(SymbolInfo symbol, SourceFile source) {
     Range whole = range(source, symbol.range());
-    Range name = range(source, symbol.selectionRange() != null ? symbol.selectionRange() : symbol.range());
-    DocumentSymbol out = new DocumentSymbol(symbol.name(), symbolKind(symbol.kind()), whole, name, symbol.kind());
+    Range name =
+        range(source, symbol.selectionRange() != null ? symbol.selectionRange() : symbol.range());
+    DocumentSymbol out =
+        new DocumentSymbol(symbol.name(), symbolKind(symbol.kind()), whole, name, symbol.kind());
     List<DocumentSymbol> children = new ArrayList<>();
     for (SymbolInfo child : symbol.children() == null ? List.<SymbolInfo>of() : symbol.children()) {
       children.add(documentSymbol(child, source));
@@ -431,44 +472,60 @@ final class Convert {
 
   /** The flat form, for clients without hierarchical document symbols. */
   @SuppressWarnings("deprecation")
-  void flatten(SymbolInfo symbol, SourceFile source, String container, List<SymbolInformation> out) {
-    SymbolInformation info = new SymbolInformation(symbol.name(), symbolKind(symbol.kind()),
-        new Location(uri(source.path()), range(source, symbol.range())), container);
+  void flatten(
+      SymbolInfo symbol, SourceFile source, String container, List<SymbolInformation> out) {
+    SymbolInformation info =
+        new SymbolInformation(
+            symbol.name(),
+            symbolKind(symbol.kind()),
+            new Location(uri(source.path()), range(source, symbol.range())),
+            container);
     out.add(info);
     for (SymbolInfo child : symbol.children() == null ? List.<SymbolInfo>of() : symbol.children()) {
       flatten(child, source, symbol.name(), out);
     }
   }
 
-  WorkspaceSymbol workspaceSymbol(EditorAnswers.FileSymbol found, Function<Path, SourceFile> sources) {
+  WorkspaceSymbol workspaceSymbol(
+      EditorAnswers.FileSymbol found, Function<Path, SourceFile> sources) {
     SourceFile source = orEmpty(found.file(), sources.apply(found.file()));
     SymbolInfo s = found.symbol();
     TextRange at = s.selectionRange() != null ? s.selectionRange() : s.range();
-    return new WorkspaceSymbol(s.name(), symbolKind(s.kind()), Either.forLeft(new Location(uri(found.file()), range(source, at))));
+    return new WorkspaceSymbol(
+        s.name(),
+        symbolKind(s.kind()),
+        Either.forLeft(new Location(uri(found.file()), range(source, at))));
   }
 
   /**
-   * A rename's edits; versioned document changes when the client takes them
-   * ({@code versions} gives an open file's version, or null).
+   * A rename's edits; versioned document changes when the client takes them ({@code versions} gives
+   * an open file's version, or null).
    */
-  WorkspaceEdit workspaceEdit(Map<Path, List<Edit>> edits, Function<Path, SourceFile> sources,
-      Function<Path, Integer> versions, boolean documentChanges) {
+  WorkspaceEdit workspaceEdit(
+      Map<Path, List<Edit>> edits,
+      Function<Path, SourceFile> sources,
+      Function<Path, Integer> versions,
+      boolean documentChanges) {
     WorkspaceEdit out = new WorkspaceEdit();
     List<Either<TextDocumentEdit, org.eclipse.lsp4j.ResourceOperation>> changes = new ArrayList<>();
     Map<String, List<TextEdit>> plain = new java.util.LinkedHashMap<>();
-    edits.forEach((file, list) -> {
-      SourceFile source = orEmpty(file, sources.apply(file));
-      List<TextEdit> textEdits = new ArrayList<>();
-      for (Edit e : list) {
-        textEdits.add(new TextEdit(range(source, e.range()), e.newText()));
-      }
-      if (documentChanges) {
-        changes.add(Either.forLeft(new TextDocumentEdit(new VersionedTextDocumentIdentifier(uri(file), versions.apply(file)),
-            textEdits)));
-      } else {
-        plain.put(uri(file), textEdits);
-      }
-    });
+    edits.forEach(
+        (file, list) -> {
+          SourceFile source = orEmpty(file, sources.apply(file));
+          List<TextEdit> textEdits = new ArrayList<>();
+          for (Edit e : list) {
+            textEdits.add(new TextEdit(range(source, e.range()), e.newText()));
+          }
+          if (documentChanges) {
+            changes.add(
+                Either.forLeft(
+                    new TextDocumentEdit(
+                        new VersionedTextDocumentIdentifier(uri(file), versions.apply(file)),
+                        textEdits)));
+          } else {
+            plain.put(uri(file), textEdits);
+          }
+        });
     if (documentChanges) {
       out.setChanges(null); // LSP4J starts every edit with an empty 'changes'; send only one form
       out.setDocumentChanges(changes);
@@ -480,7 +537,9 @@ final class Convert {
 
   // ---- completion ----
 
-  /** The compiler's completion kinds as LSP kinds; all are in the range every client knows (1-18). */
+  /**
+   * The compiler's completion kinds as LSP kinds; all are in the range every client knows (1-18).
+   */
   static CompletionItemKind completionKind(String kind) {
     switch (kind == null ? "" : kind) {
       case "keyword":
@@ -504,12 +563,15 @@ final class Convert {
     }
   }
 
-  /** Names a completion item for a later completionItem/resolve: the answer it came in, and its place there. */
+  /**
+   * Names a completion item for a later completionItem/resolve: the answer it came in, and its
+   * place there.
+   */
   record CompletionKey(long answer, int index) {}
 
   /**
-   * One completion item, inserted as plain text (never a snippet). Its documentation comes now,
-   * or, when {@code key} is given, from completionItem/resolve.
+   * One completion item, inserted as plain text (never a snippet). Its documentation comes now, or,
+   * when {@code key} is given, from completionItem/resolve.
    */
   static CompletionItem completionItem(CompletionItemInfo info, CompletionKey key) {
     CompletionItem out = new CompletionItem(info.label());
@@ -540,7 +602,10 @@ final class Convert {
     JsonElement answer = o.get("answer");
     JsonElement index = o.get("index");
     try {
-      if (answer == null || index == null || !answer.isJsonPrimitive() || !index.isJsonPrimitive()) {
+      if (answer == null
+          || index == null
+          || !answer.isJsonPrimitive()
+          || !index.isJsonPrimitive()) {
         return Optional.empty();
       }
       return Optional.of(new CompletionKey(answer.getAsLong(), index.getAsInt()));
@@ -565,8 +630,8 @@ final class Convert {
 
   /**
    * The tokens in the protocol's relative encoding (line delta, start delta, length, type,
-   * modifiers), columns in the negotiated encoding. A token that crosses a line break is cut
-   * into one token per line, since clients need not take multi-line tokens.
+   * modifiers), columns in the negotiated encoding. A token that crosses a line break is cut into
+   * one token per line, since clients need not take multi-line tokens.
    */
   List<Integer> semanticTokenData(SourceFile source, List<SemanticToken> tokens) {
     List<Integer> data = new ArrayList<>(tokens.size() * 5);
@@ -612,8 +677,12 @@ final class Convert {
     return new SemanticTokens(resultId, data);
   }
 
-  /** The change from one token array to the next as one edit over the part that differs (none when equal). */
-  static SemanticTokensDelta semanticTokensDelta(String resultId, List<Integer> before, List<Integer> after) {
+  /**
+   * The change from one token array to the next as one edit over the part that differs (none when
+   * equal).
+   */
+  static SemanticTokensDelta semanticTokensDelta(
+      String resultId, List<Integer> before, List<Integer> after) {
     int prefix = 0;
     int most = Math.min(before.size(), after.size());
     while (prefix < most && before.get(prefix).equals(after.get(prefix))) {
@@ -636,9 +705,9 @@ final class Convert {
   // ---- inlay hints, folding, links ----
 
   /**
-   * Names a hint for a later inlayHint/resolve: its document (as the client spells the URI),
-   * the state of it the hint was computed from (its version, null for a file the editor has
-   * not open, and a hash of the text) and the offset of the step it follows.
+   * Names a hint for a later inlayHint/resolve: its document (as the client spells the URI), the
+   * state of it the hint was computed from (its version, null for a file the editor has not open,
+   * and a hash of the text) and the offset of the step it follows.
    */
   record HintKey(String uri, Integer version, int textHash, int offset) {}
 
@@ -650,8 +719,8 @@ final class Convert {
   }
 
   /**
-   * A hint after a train step. Its tooltip is plain text (which every client that asks for
-   * hints takes) and comes now, or, when {@code key} is given, from inlayHint/resolve.
+   * A hint after a train step. Its tooltip is plain text (which every client that asks for hints
+   * takes) and comes now, or, when {@code key} is given, from inlayHint/resolve.
    */
   InlayHint inlayHint(SourceFile source, jonquil.ide.InlayHint hint, HintKey key) {
     InlayHint out = new InlayHint(position(source, hint.offset()), Either.forLeft(hint.label()));
@@ -682,12 +751,21 @@ final class Convert {
     JsonElement text = o.get("text");
     JsonElement offset = o.get("offset");
     try {
-      if (uri == null || text == null || offset == null || !uri.isJsonPrimitive() || !text.isJsonPrimitive()
-          || !offset.isJsonPrimitive() || (version != null && !version.isJsonPrimitive())) {
+      if (uri == null
+          || text == null
+          || offset == null
+          || !uri.isJsonPrimitive()
+          || !text.isJsonPrimitive()
+          || !offset.isJsonPrimitive()
+          || (version != null && !version.isJsonPrimitive())) {
         return Optional.empty();
       }
-      return Optional.of(new HintKey(uri.getAsString(), version == null ? null : version.getAsInt(), text.getAsInt(),
-          offset.getAsInt()));
+      return Optional.of(
+          new HintKey(
+              uri.getAsString(),
+              version == null ? null : version.getAsInt(),
+              text.getAsInt(),
+              offset.getAsInt()));
     } catch (RuntimeException e) {
       return Optional.empty(); // not numbers: someone else's data
     }
@@ -695,7 +773,9 @@ final class Convert {
 
   /** The hint's label as plain text, or null when it is made of parts (ours never are). */
   static String hintLabel(InlayHint hint) {
-    return hint == null || hint.getLabel() == null || !hint.getLabel().isLeft() ? null : hint.getLabel().getLeft();
+    return hint == null || hint.getLabel() == null || !hint.getLabel().isLeft()
+        ? null
+        : hint.getLabel().getLeft();
   }
 
   /** The hint with its tooltip (plain text), if there is one. */
@@ -707,8 +787,8 @@ final class Convert {
   }
 
   /**
-   * A folding range, or null when it folds nothing. For a client that folds whole lines only,
-   * a block's closing line stays visible when it holds nothing but the closing brace.
+   * A folding range, or null when it folds nothing. For a client that folds whole lines only, a
+   * block's closing line stays visible when it holds nothing but the closing brace.
    */
   FoldingRange foldingRange(SourceFile source, FoldingRangeInfo info, boolean lineFoldingOnly) {
     Position start = position(source, info.startOffset());
@@ -743,7 +823,10 @@ final class Convert {
 
   // ---- code actions ----
 
-  /** Whether a context's {@code only} filter admits a kind: the kind itself or one of its parents ("" is every kind). */
+  /**
+   * Whether a context's {@code only} filter admits a kind: the kind itself or one of its parents
+   * ("" is every kind).
+   */
   static boolean kindRequested(String kind, List<String> only) {
     if (only == null || only.isEmpty()) {
       return true;
@@ -757,8 +840,12 @@ final class Convert {
   }
 
   /** A quick fix as a literal code action, with the diagnostic it fixes as it was published. */
-  CodeAction codeAction(CodeActionInfo info, Function<Path, SourceFile> sources, Function<Path, Integer> versions,
-      boolean documentChanges, boolean preferredSupport) {
+  CodeAction codeAction(
+      CodeActionInfo info,
+      Function<Path, SourceFile> sources,
+      Function<Path, Integer> versions,
+      boolean documentChanges,
+      boolean preferredSupport) {
     CodeAction out = new CodeAction(info.title());
     out.setKind(info.kind());
     out.setDiagnostics(List.of(diagnostic(info.diagnostic(), sources)));

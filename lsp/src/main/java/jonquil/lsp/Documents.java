@@ -11,7 +11,10 @@ import java.util.Optional;
 import java.util.concurrent.ConcurrentHashMap;
 import java.util.function.UnaryOperator;
 
-/** The open documents keyed by normalised path, so every spelling of one file's URI finds the same text and version. */
+/**
+ * The open documents keyed by normalised path, so every spelling of one file's URI finds the same
+ * text and version.
+ */
 final class Documents {
 
   /** One open document as the editor last sent it; {@code uri} is the client's own spelling. */
@@ -39,7 +42,10 @@ final class Documents {
     if (path == null) {
       return Optional.empty();
     }
-    if (path.length() >= 3 && path.charAt(0) == '/' && Character.isLetter(path.charAt(1)) && path.charAt(2) == ':') {
+    if (path.length() >= 3
+        && path.charAt(0) == '/'
+        && Character.isLetter(path.charAt(1))
+        && path.charAt(2) == ':') {
       // "/c:/x", "/C:/x" and "/c%3A/x" are one Windows drive path.
       path = "/" + Character.toUpperCase(path.charAt(1)) + path.substring(2);
       if (File.separatorChar == '\\') {
@@ -60,14 +66,17 @@ final class Documents {
     pathOf(uri).ifPresent(p -> open.put(p, new Doc(uri, p, version, text)));
   }
 
-  /** Applies an edit to an open document's text and records its new version; empty when not open. */
+  /**
+   * Applies an edit to an open document's text and records its new version; empty when not open.
+   */
   Optional<Doc> change(String uri, int version, UnaryOperator<String> edit) {
     Optional<Path> path = pathOf(uri);
     if (path.isEmpty()) {
       return Optional.empty();
     }
-    return Optional.ofNullable(open.computeIfPresent(path.get(),
-        (p, doc) -> new Doc(doc.uri(), p, version, edit.apply(doc.text()))));
+    return Optional.ofNullable(
+        open.computeIfPresent(
+            path.get(), (p, doc) -> new Doc(doc.uri(), p, version, edit.apply(doc.text()))));
   }
 
   Optional<Doc> close(String uri) {

@@ -1,8 +1,14 @@
 package jonquil.lsp;
 
+import java.nio.file.Path;
+import java.util.Collection;
+import java.util.List;
+import java.util.Optional;
+import jonquil.Result;
 import jonquil.ide.CodeActionInfo;
 import jonquil.ide.CompletionItemInfo;
 import jonquil.ide.DocumentLinkInfo;
+import jonquil.ide.FileIndex;
 import jonquil.ide.FoldingRangeInfo;
 import jonquil.ide.HoverInfo;
 import jonquil.ide.InlayHint;
@@ -10,19 +16,11 @@ import jonquil.ide.Location;
 import jonquil.ide.RenameResult;
 import jonquil.ide.SemanticToken;
 import jonquil.ide.SymbolInfo;
-import java.nio.file.Path;
-import java.util.Collection;
-import jonquil.ide.FileIndex;
-import java.util.List;
-import java.util.Map;
-import java.util.Optional;
-import jonquil.Result;
-import jonquil.diag.Edit;
 import jonquil.source.TextRange;
 
 /**
- * What the server asks the compiler's editor answers (jonquil.ide), in compiler types and
- * UTF-16 offsets, so the protocol layer computes nothing; an interface so tests can stand in.
+ * What the server asks the compiler's editor answers (jonquil.ide), in compiler types and UTF-16
+ * offsets, so the protocol layer computes nothing; an interface so tests can stand in.
  */
 public interface EditorAnswers {
 
@@ -61,7 +59,10 @@ public interface EditorAnswers {
 
   // ---- the workspace index: stand-ins that know nothing index nothing ----
 
-  /** What the workspace index keeps of a file that {@code result} checked as a root; empty when nothing is known. */
+  /**
+   * What the workspace index keeps of a file that {@code result} checked as a root; empty when
+   * nothing is known.
+   */
   default Optional<FileIndex> index(Result result, Path file) {
     return Optional.empty();
   }
@@ -72,13 +73,18 @@ public interface EditorAnswers {
   }
 
   /** The references in {@code result}, and in the indexed files it did not read. */
-  default List<Location> references(Result result, Path file, int offset, boolean includeDeclaration,
+  default List<Location> references(
+      Result result,
+      Path file,
+      int offset,
+      boolean includeDeclaration,
       Collection<FileIndex> elsewhere) {
     return references(result, file, offset, includeDeclaration);
   }
 
   /** A rename's edits in {@code result}, and in the indexed files it did not read. */
-  default RenameResult rename(Result result, Path file, int offset, String newName, Collection<FileIndex> elsewhere) {
+  default RenameResult rename(
+      Result result, Path file, int offset, String newName, Collection<FileIndex> elsewhere) {
     return rename(result, file, offset, newName);
   }
 }

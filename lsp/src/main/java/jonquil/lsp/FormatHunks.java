@@ -8,15 +8,18 @@ import jonquil.diag.Edit;
 import jonquil.source.TextRange;
 
 /**
- * Cuts the formatter's whole-file rewrite into line hunks, because the protocol's range
- * formatting must change only what the selection touches while the compiler formats whole
- * files. Text in, text edits out: no knowledge of the language.
+ * Cuts the formatter's whole-file rewrite into line hunks, because the protocol's range formatting
+ * must change only what the selection touches while the compiler formats whole files. Text in, text
+ * edits out: no knowledge of the language.
  */
 final class FormatHunks {
   /** Past this many changed lines the diff stops looking for a finer cut and makes one hunk. */
   static final int MAX_CHANGES = 2000;
 
-  /** Old lines {@code [firstLine, endLine)} at UTF-16 offsets {@code [start, end)} become {@code newText}. */
+  /**
+   * Old lines {@code [firstLine, endLine)} at UTF-16 offsets {@code [start, end)} become {@code
+   * newText}.
+   */
   record Hunk(int firstLine, int endLine, int start, int end, String newText) {}
 
   private FormatHunks() {}
@@ -25,9 +28,11 @@ final class FormatHunks {
   static List<Edit> within(Path file, String before, String after, int firstLine, int lastLine) {
     List<Edit> out = new ArrayList<>();
     for (Hunk h : hunks(before, after)) {
-      boolean touches = h.endLine() > h.firstLine()
-          ? h.firstLine() <= lastLine && h.endLine() > firstLine
-          : h.firstLine() >= firstLine && h.firstLine() <= lastLine + 1; // a pure insertion at a line boundary
+      boolean touches =
+          h.endLine() > h.firstLine()
+              ? h.firstLine() <= lastLine && h.endLine() > firstLine
+              : h.firstLine() >= firstLine
+                  && h.firstLine() <= lastLine + 1; // a pure insertion at a line boundary
       if (touches) {
         out.add(new Edit(file, new TextRange(h.start(), h.end()), h.newText()));
       }
@@ -48,7 +53,8 @@ final class FormatHunks {
       prefix++;
     }
     int suffix = 0;
-    while (suffix < a.size() - prefix && suffix < b.size() - prefix
+    while (suffix < a.size() - prefix
+        && suffix < b.size() - prefix
         && a.get(a.size() - 1 - suffix).equals(b.get(b.size() - 1 - suffix))) {
       suffix++;
     }
@@ -76,14 +82,16 @@ final class FormatHunks {
       for (int k = j0; k < j; k++) {
         text.append(midB.get(k));
       }
-      out.add(new Hunk(prefix + i0, prefix + i, starts[prefix + i0], starts[prefix + i], text.toString()));
+      out.add(
+          new Hunk(
+              prefix + i0, prefix + i, starts[prefix + i0], starts[prefix + i], text.toString()));
     }
     return out;
   }
 
   /**
-   * Marks the lines of {@code a} deleted and of {@code b} inserted by a shortest edit script
-   * (the greedy O((N+M)D) method of E. W. Myers, 1986, "An O(ND) difference algorithm and its
+   * Marks the lines of {@code a} deleted and of {@code b} inserted by a shortest edit script (the
+   * greedy O((N+M)D) method of E. W. Myers, 1986, "An O(ND) difference algorithm and its
    * variations", Algorithmica 1:251-266); past {@link #MAX_CHANGES} every line is marked.
    */
   static boolean[][] changedLines(List<String> a, List<String> b) {
@@ -102,7 +110,10 @@ final class FormatHunks {
     for (int d = 0; d <= Math.min(max, MAX_CHANGES) && found < 0; d++) {
       trace.add(Arrays.copyOfRange(v, offset - d - 1, offset + d + 2));
       for (int k = -d; k <= d; k += 2) {
-        int x = k == -d || (k != d && v[offset + k - 1] < v[offset + k + 1]) ? v[offset + k + 1] : v[offset + k - 1] + 1;
+        int x =
+            k == -d || (k != d && v[offset + k - 1] < v[offset + k + 1])
+                ? v[offset + k + 1]
+                : v[offset + k - 1] + 1;
         int y = x - k;
         while (x < n && y < m && a.get(x).equals(b.get(y))) {
           x++;

@@ -34,7 +34,8 @@ final class IdeAnswers implements EditorAnswers {
   }
 
   @Override
-  public List<Location> references(Result result, Path file, int offset, boolean includeDeclaration) {
+  public List<Location> references(
+      Result result, Path file, int offset, boolean includeDeclaration) {
     return Ide.references(result, file, offset, includeDeclaration);
   }
 
@@ -79,13 +80,18 @@ final class IdeAnswers implements EditorAnswers {
   }
 
   @Override
-  public List<Location> references(Result result, Path file, int offset, boolean includeDeclaration,
+  public List<Location> references(
+      Result result,
+      Path file,
+      int offset,
+      boolean includeDeclaration,
       Collection<FileIndex> elsewhere) {
     return Ide.references(result, file, offset, includeDeclaration, elsewhere);
   }
 
   @Override
-  public RenameResult rename(Result result, Path file, int offset, String newName, Collection<FileIndex> elsewhere) {
+  public RenameResult rename(
+      Result result, Path file, int offset, String newName, Collection<FileIndex> elsewhere) {
     return Ide.rename(result, file, offset, newName, elsewhere);
   }
 

@@ -59,17 +59,29 @@ import org.eclipse.lsp4j.services.LanguageServer;
 import org.eclipse.lsp4j.services.TextDocumentService;
 import org.eclipse.lsp4j.services.WorkspaceService;
 
-/** The server's lifecycle and plumbing, with a guard that turns any handler failure into an error response, never a dead server. */
+/**
+ * The server's lifecycle and plumbing, with a guard that turns any handler failure into an error
+ * response, never a dead server.
+ */
 public final class JonquilLanguageServer implements LanguageServer, LanguageClientAware {
   static final Duration DEBOUNCE = Duration.ofMillis(100);
   static final Duration MAX_DELAY = Duration.ofMillis(1000);
+
   /** How long a request waits for the check of the version it was asked about. */
   static final Duration FRESH_WAIT = Duration.ofSeconds(5);
+
   /** The files whose change on disk can change a check: specs, and the n,k tables they name. */
-  static final List<String> WATCHED_GLOBS = List.of("**/*.jonq", "**/*.txt", "**/*.csv", "**/*.tsv");
+  static final List<String> WATCHED_GLOBS =
+      List.of("**/*.jonq", "**/*.txt", "**/*.csv", "**/*.tsv");
+
   static final String WATCHERS_ID = "jonquil-watched-files";
 
-  private enum State { NEW, RUNNING, SHUT_DOWN, EXITED }
+  private enum State {
+    NEW,
+    RUNNING,
+    SHUT_DOWN,
+    EXITED
+  }
 
   final EditorAnswers answers;
   final Documents documents = new Documents();
@@ -78,12 +90,14 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
   private final CheckCycle cycle;
   private final CheckScheduler scheduler;
   private final ExecutorService requests;
+
   /**
-   * Completes replies, which makes LSP4J write them: a thread that is never interrupted, so
-   * a cancel (which interrupts the request worker) can never land mid-write. On a
-   * channel-backed stream that interrupt would close the channel, and the connection with it.
+   * Completes replies, which makes LSP4J write them: a thread that is never interrupted, so a
+   * cancel (which interrupts the request worker) can never land mid-write. On a channel-backed
+   * stream that interrupt would close the channel, and the connection with it.
    */
   private final ExecutorService replies;
+
   private final JonquilTextDocumentService textDocuments;
   private final JonquilWorkspaceService workspace;
   private final CompletableFuture<Integer> exitCode = new CompletableFuture<>();
@@ -92,10 +106,17 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
   private volatile Convert convert = new Convert(Convert.Encoding.UTF_16, documents::uriOf);
   private volatile ClientCapabilities capabilities = new ClientCapabilities();
   private volatile Folders folders = new Folders(List.of(), 0);
-  /** Where `jonquil lsp --verbose` writes its debug lines (standard error), or null when they are off. */
+
+  /**
+   * Where `jonquil lsp --verbose` writes its debug lines (standard error), or null when they are
+   * off.
+   */
   private final PrintStream debug;
 
-  /** The workspace folders, and how many times they were set (so a request can wait for a check under them). */
+  /**
+   * The workspace folders, and how many times they were set (so a request can wait for a check
+   * under them).
+   */
   record Folders(List<Path> paths, long generation) {
     Folders {
       paths = List.copyOf(paths);
@@ -115,36 +136,64 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     this(answers, DEBOUNCE, true, debug);
   }
 
-  /** A server whose checks wait {@code debounce} after the last edit (tests and benchmarks shorten it). */
+  /**
+   * A server whose checks wait {@code debounce} after the last edit (tests and benchmarks shorten
+   * it).
+   */
   JonquilLanguageServer(EditorAnswers answers, Duration debounce) {
     this(answers, debounce, true, null);
   }
 
-  /** As above; with {@code checkAfterPause} false even an edit after a pause waits for the debounce (for tests). */
+  /**
+   * As above; with {@code checkAfterPause} false even an edit after a pause waits for the debounce
+   * (for tests).
+   */
   JonquilLanguageServer(EditorAnswers answers, Duration debounce, boolean checkAfterPause) {
     this(answers, debounce, checkAfterPause, null);
   }
 
-  private JonquilLanguageServer(EditorAnswers answers, Duration debounce, boolean checkAfterPause, PrintStream debug) {
+  private JonquilLanguageServer(
+      EditorAnswers answers, Duration debounce, boolean checkAfterPause, PrintStream debug) {
     this.answers = answers;
     this.debug = debug;
-    this.cycle = new CheckCycle(documents, snapshots, () -> folders, () -> convert, () -> client,
-        () -> ClientSupport.pullDiagnostics(capabilities));
-    this.scheduler = new CheckScheduler(debug == null ? cycle : this::timedCheck, this::checkFailed, debounce,
-        MAX_DELAY.compareTo(debounce) > 0 ? MAX_DELAY : debounce, debug == null ? WarmUp::run : this::timedWarmUp,
-        checkAfterPause);
+    this.cycle =
+        new CheckCycle(
+            documents,
+            snapshots,
+            () -> folders,
+            () -> convert,
+            () -> client,
+            () -> ClientSupport.pullDiagnostics(capabilities));
+    this.scheduler =
+        new CheckScheduler(
+            debug == null ? cycle : this::timedCheck,
+            this::checkFailed,
+            debounce,
+            MAX_DELAY.compareTo(debounce) > 0 ? MAX_DELAY : debounce,
+            debug == null ? WarmUp::run : this::timedWarmUp,
+            checkAfterPause);
     AtomicInteger n = new AtomicInteger();
     ThreadGroup group = new ThreadGroup("jonquil-requests");
-    this.requests = Executors.newFixedThreadPool(2, r -> {
-      Thread t = new Thread(group, r, "jonquil-request-" + n.incrementAndGet(), CheckScheduler.STACK_BYTES);
-      t.setDaemon(true);
-      return t;
-    });
-    this.replies = Executors.newSingleThreadExecutor(r -> {
-      Thread t = new Thread(group, r, "jonquil-replies");
-      t.setDaemon(true);
-      return t;
-    });
+    this.requests =
+        Executors.newFixedThreadPool(
+            2,
+            r -> {
+              Thread t =
+                  new Thread(
+                      group,
+                      r,
+                      "jonquil-request-" + n.incrementAndGet(),
+                      CheckScheduler.STACK_BYTES);
+              t.setDaemon(true);
+              return t;
+            });
+    this.replies =
+        Executors.newSingleThreadExecutor(
+            r -> {
+              Thread t = new Thread(group, r, "jonquil-replies");
+              t.setDaemon(true);
+              return t;
+            });
     this.index = new WorkspaceIndex(answers, documents, () -> client, this::log);
     this.textDocuments = new JonquilTextDocumentService(this);
     this.workspace = new JonquilWorkspaceService(this);
@@ -159,16 +208,23 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
   public CompletableFuture<InitializeResult> initialize(InitializeParams params) {
     try {
       if (!state.compareAndSet(State.NEW, State.RUNNING)) {
-        return CompletableFuture.failedFuture(new ResponseErrorException(
-            new ResponseError(ResponseErrorCode.InvalidRequest, "initialize was already received", null)));
+        return CompletableFuture.failedFuture(
+            new ResponseErrorException(
+                new ResponseError(
+                    ResponseErrorCode.InvalidRequest, "initialize was already received", null)));
       }
-      ClientCapabilities caps = params.getCapabilities() != null ? params.getCapabilities() : new ClientCapabilities();
+      ClientCapabilities caps =
+          params.getCapabilities() != null ? params.getCapabilities() : new ClientCapabilities();
       capabilities = caps;
-      convert = new Convert(Convert.Encoding.negotiate(caps), documents::uriOf,
-          ClientSupport.semanticTokenType(caps, Convert.UNIT_TOKEN));
+      convert =
+          new Convert(
+              Convert.Encoding.negotiate(caps),
+              documents::uriOf,
+              ClientSupport.semanticTokenType(caps, Convert.UNIT_TOKEN));
       folders = new Folders(foldersOf(params), folders.generation() + 1);
-      return CompletableFuture.completedFuture(new InitializeResult(capabilities(caps), new ServerInfo("jonquil",
-          ToolVersion.current())));
+      return CompletableFuture.completedFuture(
+          new InitializeResult(
+              capabilities(caps), new ServerInfo("jonquil", ToolVersion.current())));
     } catch (RuntimeException e) {
       return CompletableFuture.failedFuture(asResponseError("initialize", e));
     }
@@ -197,8 +253,9 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     out.setDocumentRangeFormattingProvider(true);
     CompletionOptions completion = new CompletionOptions(true, List.of("."));
     out.setCompletionProvider(completion);
-    out.setSemanticTokensProvider(new SemanticTokensWithRegistrationOptions(convert.semanticTokensLegend(),
-        new SemanticTokensServerFull(true), false));
+    out.setSemanticTokensProvider(
+        new SemanticTokensWithRegistrationOptions(
+            convert.semanticTokensLegend(), new SemanticTokensServerFull(true), false));
     // Advertised to every client: one without the capability simply never asks, and one that
     // cannot resolve tooltips gets them inline.
     out.setInlayHintProvider(Convert.inlayHintProvider());
@@ -211,7 +268,8 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     if (ClientSupport.codeActionLiterals(caps)) {
       out.setCodeActionProvider(new CodeActionOptions(List.of(CodeActionKind.QuickFix)));
     } else {
-      // A client without literal code actions would need commands; it gets none, so it is told nothing is offered.
+      // A client without literal code actions would need commands; it gets none, so it is told
+      // nothing is offered.
       out.setCodeActionProvider(false);
     }
     return out;
@@ -240,21 +298,32 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
 
   @Override
   public void initialized(InitializedParams params) {
-    log(MessageType.Log, "jonquil language server ready (positions in " + convert.encoding().wire() + ")");
+    log(
+        MessageType.Log,
+        "jonquil language server ready (positions in " + convert.encoding().wire() + ")");
     LanguageClient c = client;
     boolean watching = c != null && ClientSupport.watchedFilesRegistration(capabilities);
     index.start(folders.paths(), ClientSupport.workDoneProgress(capabilities), watching);
     if (watching) {
       // Never wait for the reply here: this runs on the reader thread, which must read it.
-      c.registerCapability(new RegistrationParams(List.of(new Registration(WATCHERS_ID,
-          "workspace/didChangeWatchedFiles", Convert.fileWatchers(WATCHED_GLOBS)))))
-          .whenComplete((ok, error) -> {
-            if (error != null) {
-              index.notWatched();
-              log(MessageType.Warning, "the editor refused file watching (" + describe(error)
-                  + "); used files are still re-read on every check");
-            }
-          });
+      c.registerCapability(
+              new RegistrationParams(
+                  List.of(
+                      new Registration(
+                          WATCHERS_ID,
+                          "workspace/didChangeWatchedFiles",
+                          Convert.fileWatchers(WATCHED_GLOBS)))))
+          .whenComplete(
+              (ok, error) -> {
+                if (error != null) {
+                  index.notWatched();
+                  log(
+                      MessageType.Warning,
+                      "the editor refused file watching ("
+                          + describe(error)
+                          + "); used files are still re-read on every check");
+                }
+              });
     }
   }
 
@@ -274,7 +343,10 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     exitCode.complete(was == State.SHUT_DOWN ? 0 : 1);
   }
 
-  /** Completes with the process exit status once the client sent {@code exit}: 0 after shutdown, else 1. */
+  /**
+   * Completes with the process exit status once the client sent {@code exit}: 0 after shutdown,
+   * else 1.
+   */
   public CompletableFuture<Integer> exitCode() {
     return exitCode;
   }
@@ -313,7 +385,10 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     return capabilities;
   }
 
-  /** Replaces the workspace folders; called on the reader thread only, so the generation never goes back. */
+  /**
+   * Replaces the workspace folders; called on the reader thread only, so the generation never goes
+   * back.
+   */
   void setFolders(List<Path> newFolders) {
     folders = new Folders(newFolders, folders.generation() + 1);
     index.setFolders(newFolders);
@@ -324,9 +399,9 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
   }
 
   /**
-   * An open buffer changed (or a file it uses): check again. The workspace index reads the
-   * buffers only when a workspace request needs it, so typing never re-parses a large buffer
-   * a second time behind the check's back.
+   * An open buffer changed (or a file it uses): check again. The workspace index reads the buffers
+   * only when a workspace request needs it, so typing never re-parses a large buffer a second time
+   * behind the check's back.
    */
   void scheduleCheck() {
     scheduler.request();
@@ -334,10 +409,15 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
 
   @Override
   public void cancelProgress(WorkDoneProgressCancelParams params) {
-    onNotification("window/workDoneProgress/cancel", () -> index.cancelProgress(Convert.progressToken(params.getToken())));
+    onNotification(
+        "window/workDoneProgress/cancel",
+        () -> index.cancelProgress(Convert.progressToken(params.getToken())));
   }
 
-  /** Runs a notification's recording step if the server is running; a failure is logged, never thrown at LSP4J. */
+  /**
+   * Runs a notification's recording step if the server is running; a failure is logged, never
+   * thrown at LSP4J.
+   */
   void onNotification(String method, Runnable body) {
     if (state.get() != State.RUNNING) {
       return; // before initialize and after shutdown, notifications are dropped
@@ -351,149 +431,207 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
   }
 
   /**
-   * A request about a position in a document, answered on the request pool from a snapshot that saw the document;
-   * {@code versions} are the document versions that result read (for versioned edits).
+   * A request about a position in a document, answered on the request pool from a snapshot that saw
+   * the document; {@code versions} are the document versions that result read (for versioned
+   * edits).
    */
-  record At(Result result, Path path, SourceFile source, int offset, Convert convert, Map<Path, Integer> versions) {}
+  record At(
+      Result result,
+      Path path,
+      SourceFile source,
+      int offset,
+      Convert convert,
+      Map<Path, Integer> versions) {}
 
-  <T> CompletableFuture<T> atPosition(String method, String uri, Position position, T none, Function<At, T> body) {
+  <T> CompletableFuture<T> atPosition(
+      String method, String uri, Position position, T none, Function<At, T> body) {
     return atPosition(method, uri, null, position, none, body);
   }
 
   /** As above, answered once {@code before} is done too (e.g. a fresh workspace index). */
-  <T> CompletableFuture<T> atPosition(String method, String uri, Supplier<? extends CompletableFuture<?>> before,
-      Position position, T none, Function<At, T> body) {
-    return answer(method, uri, before, (snapshot, path) -> {
-      Optional<Result> result = snapshot.resultFor(path);
-      if (result.isEmpty()) {
-        return none;
-      }
-      SourceFile source = result.get().files().get(path);
-      Convert conv = convert;
-      int offset = position == null ? 0 : conv.offset(source, position);
-      return body.apply(new At(result.get(), path, source, offset, conv, snapshot.versions()));
-    });
+  <T> CompletableFuture<T> atPosition(
+      String method,
+      String uri,
+      Supplier<? extends CompletableFuture<?>> before,
+      Position position,
+      T none,
+      Function<At, T> body) {
+    return answer(
+        method,
+        uri,
+        before,
+        (snapshot, path) -> {
+          Optional<Result> result = snapshot.resultFor(path);
+          if (result.isEmpty()) {
+            return none;
+          }
+          SourceFile source = result.get().files().get(path);
+          Convert conv = convert;
+          int offset = position == null ? 0 : conv.offset(source, position);
+          return body.apply(new At(result.get(), path, source, offset, conv, snapshot.versions()));
+        });
   }
 
   /**
-   * Like {@link #atPosition}, but answered at once from the document's text as the request
-   * found it: from the latest check when that read the same text, else from a check of the
-   * buffer run here, on the request pool. For answers that read the text around the cursor
-   * (completion), where waiting for the debounced check would lag the typing.
+   * Like {@link #atPosition}, but answered at once from the document's text as the request found
+   * it: from the latest check when that read the same text, else from a check of the buffer run
+   * here, on the request pool. For answers that read the text around the cursor (completion), where
+   * waiting for the debounced check would lag the typing.
    */
-  <T> CompletableFuture<T> atBuffer(String method, String uri, Position position, T none, Function<At, T> body) {
+  <T> CompletableFuture<T> atBuffer(
+      String method, String uri, Position position, T none, Function<At, T> body) {
     // Read on the reader thread, so the text is the one every earlier didChange made.
     Optional<Documents.Doc> doc = uri == null ? Optional.empty() : documents.get(uri);
-    return answer(method, null, (snapshot, ignored) -> {
-      if (doc.isEmpty()) {
-        return none;
-      }
-      Documents.Doc d = doc.get();
-      Path path = d.path();
-      Map<Path, Integer> versions = snapshot.versions();
-      Result result = snapshot.resultFor(path).filter(r -> d.text().equals(r.files().get(path).text())).orElse(null);
-      if (result == null) {
-        result = checkBuffer(d);
-        Map<Path, Integer> seen = new HashMap<>(versions);
-        seen.put(path, d.version());
-        versions = seen;
-      }
-      SourceFile source = result.files().get(path);
-      if (source == null) {
-        return none;
-      }
-      Convert conv = convert;
-      int offset = position == null ? 0 : conv.offset(source, position);
-      return body.apply(new At(result, path, source, offset, conv, versions));
-    });
+    return answer(
+        method,
+        null,
+        (snapshot, ignored) -> {
+          if (doc.isEmpty()) {
+            return none;
+          }
+          Documents.Doc d = doc.get();
+          Path path = d.path();
+          Map<Path, Integer> versions = snapshot.versions();
+          Result result =
+              snapshot
+                  .resultFor(path)
+                  .filter(r -> d.text().equals(r.files().get(path).text()))
+                  .orElse(null);
+          if (result == null) {
+            result = checkBuffer(d);
+            Map<Path, Integer> seen = new HashMap<>(versions);
+            seen.put(path, d.version());
+            versions = seen;
+          }
+          SourceFile source = result.files().get(path);
+          if (source == null) {
+            return none;
+          }
+          Convert conv = convert;
+          int offset = position == null ? 0 : conv.offset(source, position);
+          return body.apply(new At(result, path, source, offset, conv, versions));
+        });
   }
 
-  /** A check of one document's text as given, the other open buffers overlaid, rooted as the check cycle roots it. */
+  /**
+   * A check of one document's text as given, the other open buffers overlaid, rooted as the check
+   * cycle roots it.
+   */
   private Result checkBuffer(Documents.Doc doc) {
     Map<Path, String> buffers = new HashMap<>();
     documents.snapshot().forEach((p, open) -> buffers.put(p, open.text()));
     buffers.put(doc.path(), doc.text());
     Path root = CheckCycle.projectRoot(doc.path(), folders.paths());
-    return Checker.check(Workspace.withOverlay(root, buffers), List.of(doc.path()), CheckOptions.EDITOR);
+    return Checker.check(
+        Workspace.withOverlay(root, buffers), List.of(doc.path()), CheckOptions.EDITOR);
   }
 
-  /** The functional shape of a request body: the snapshot to answer from and the document's path (null when none). */
+  /**
+   * The functional shape of a request body: the snapshot to answer from and the document's path
+   * (null when none).
+   */
   interface Body<T> {
     T apply(Snapshots.Snapshot snapshot, Path path);
   }
 
   /**
-   * Answers a request off the reader thread: refuses it before initialize (-32002) and
-   * after shutdown, waits (without blocking) for a check that saw the document's current
-   * version, and turns any exception into an internal-error response plus a log line.
+   * Answers a request off the reader thread: refuses it before initialize (-32002) and after
+   * shutdown, waits (without blocking) for a check that saw the document's current version, and
+   * turns any exception into an internal-error response plus a log line.
    */
   <T> CompletableFuture<T> answer(String method, String uri, Body<T> body) {
     return answer(method, uri, null, body);
   }
 
-  /** As above, also waiting (without blocking) for {@code before}, when given, e.g. a fresh workspace index. */
-  <T> CompletableFuture<T> answer(String method, String uri, Supplier<? extends CompletableFuture<?>> before,
-      Body<T> body) {
+  /**
+   * As above, also waiting (without blocking) for {@code before}, when given, e.g. a fresh
+   * workspace index.
+   */
+  <T> CompletableFuture<T> answer(
+      String method, String uri, Supplier<? extends CompletableFuture<?>> before, Body<T> body) {
     try {
       State s = state.get();
       if (s == State.NEW) {
         return CompletableFuture.failedFuture(notInitialized());
       }
       if (s != State.RUNNING) {
-        return CompletableFuture.failedFuture(new ResponseErrorException(
-            new ResponseError(ResponseErrorCode.InvalidRequest, "the server is shutting down", null)));
+        return CompletableFuture.failedFuture(
+            new ResponseErrorException(
+                new ResponseError(
+                    ResponseErrorCode.InvalidRequest, "the server is shutting down", null)));
       }
       Path path = uri == null ? null : Documents.pathOf(uri).orElse(null);
-      Integer version = path == null ? null : documents.get(path).map(Documents.Doc::version).orElse(null);
-      CompletableFuture<Snapshots.Snapshot> checked = snapshots.fresh(path, version, folders.generation(), FRESH_WAIT);
-      CompletableFuture<Snapshots.Snapshot> fresh = before == null ? checked
-          : checked.thenCombine(before.get(), (snapshot, ignored) -> snapshot);
+      Integer version =
+          path == null ? null : documents.get(path).map(Documents.Doc::version).orElse(null);
+      CompletableFuture<Snapshots.Snapshot> checked =
+          snapshots.fresh(path, version, folders.generation(), FRESH_WAIT);
+      CompletableFuture<Snapshots.Snapshot> fresh =
+          before == null
+              ? checked
+              : checked.thenCombine(before.get(), (snapshot, ignored) -> snapshot);
       CompletableFuture<T> reply = new CompletableFuture<>();
       if (debug != null) {
         long start = System.nanoTime();
-        reply.whenComplete((value, error) -> debug("request " + method + ": "
-            + (error == null ? "answered" : "failed (" + describe(error) + ")") + " in " + millisSince(start) + " ms"));
+        reply.whenComplete(
+            (value, error) ->
+                debug(
+                    "request "
+                        + method
+                        + ": "
+                        + (error == null ? "answered" : "failed (" + describe(error) + ")")
+                        + " in "
+                        + millisSince(start)
+                        + " ms"));
       }
       AtomicReference<Future<?>> running = new AtomicReference<>();
-      fresh.whenComplete((snapshot, waitError) -> {
-        if (reply.isDone()) {
-          return; // cancelled while waiting for a fresh check
-        }
-        if (waitError != null) {
-          reply.completeExceptionally(asResponseError(method, waitError));
-          return;
-        }
-        try {
-          running.set(requests.submit(() -> {
+      fresh.whenComplete(
+          (snapshot, waitError) -> {
             if (reply.isDone()) {
+              return; // cancelled while waiting for a fresh check
+            }
+            if (waitError != null) {
+              reply.completeExceptionally(asResponseError(method, waitError));
               return;
             }
             try {
-              T value = body.apply(snapshot, path);
-              replies.execute(() -> reply.complete(value));
-            } catch (Throwable error) {
-              if (!reply.isDone()) { // after a cancel, the interrupt's own failure is no error to report
-                Throwable response = asResponseError(method, error);
-                replies.execute(() -> reply.completeExceptionally(response));
-              }
+              running.set(
+                  requests.submit(
+                      () -> {
+                        if (reply.isDone()) {
+                          return;
+                        }
+                        try {
+                          T value = body.apply(snapshot, path);
+                          replies.execute(() -> reply.complete(value));
+                        } catch (Throwable error) {
+                          if (!reply
+                              .isDone()) { // after a cancel, the interrupt's own failure is no
+                            // error to report
+                            Throwable response = asResponseError(method, error);
+                            replies.execute(() -> reply.completeExceptionally(response));
+                          }
+                        }
+                      }));
+            } catch (RejectedExecutionException e) {
+              reply.completeExceptionally(
+                  new ResponseErrorException(
+                      new ResponseError(
+                          ResponseErrorCode.InvalidRequest, "the server is shutting down", null)));
             }
-          }));
-        } catch (RejectedExecutionException e) {
-          reply.completeExceptionally(new ResponseErrorException(
-              new ResponseError(ResponseErrorCode.InvalidRequest, "the server is shutting down", null)));
-        }
-        if (reply.isCancelled()) {
-          cancel(running.get());
-        }
-      });
-      reply.whenComplete((value, error) -> {
-        if (reply.isCancelled()) {
-          // $/cancelRequest: LSP4J answers -32800 at once; interrupting frees the worker for the next request.
-          fresh.cancel(false);
-          checked.cancel(false);
-          cancel(running.get());
-        }
-      });
+            if (reply.isCancelled()) {
+              cancel(running.get());
+            }
+          });
+      reply.whenComplete(
+          (value, error) -> {
+            if (reply.isCancelled()) {
+              // $/cancelRequest: LSP4J answers -32800 at once; interrupting frees the worker for
+              // the next request.
+              fresh.cancel(false);
+              checked.cancel(false);
+              cancel(running.get());
+            }
+          });
       return reply;
     } catch (RuntimeException | StackOverflowError e) {
       return CompletableFuture.failedFuture(asResponseError(method, e));
@@ -508,13 +646,15 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
 
   private static ResponseErrorException notInitialized() {
     return new ResponseErrorException(
-        new ResponseError(ResponseErrorCode.ServerNotInitialized, "the server is not initialized yet", null));
+        new ResponseError(
+            ResponseErrorCode.ServerNotInitialized, "the server is not initialized yet", null));
   }
 
   /** A response error for a failed handler; anything unexpected becomes -32603 and is logged. */
   Throwable asResponseError(String method, Throwable error) {
     Throwable cause = error;
-    while ((cause instanceof CompletionException || cause instanceof ExecutionException) && cause.getCause() != null) {
+    while ((cause instanceof CompletionException || cause instanceof ExecutionException)
+        && cause.getCause() != null) {
       cause = cause.getCause();
     }
     if (cause instanceof ResponseErrorException || cause instanceof CancellationException) {
@@ -523,11 +663,15 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     String message = "internal error in " + method + ": " + describe(cause);
     log(MessageType.Error, message);
     cause.printStackTrace(System.err);
-    return new ResponseErrorException(new ResponseError(ResponseErrorCode.InternalError, message, null));
+    return new ResponseErrorException(
+        new ResponseError(ResponseErrorCode.InternalError, message, null));
   }
 
   private void checkFailed(Throwable error) {
-    String message = "the language server failed while checking (" + describe(error) + "); please report this file";
+    String message =
+        "the language server failed while checking ("
+            + describe(error)
+            + "); please report this file";
     log(MessageType.Error, message);
     error.printStackTrace(System.err);
     cycle.publishFailure(message);
@@ -535,7 +679,9 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
 
   static String describe(Throwable e) {
     String m = e.getMessage();
-    return m == null || m.isBlank() ? e.getClass().getSimpleName() : e.getClass().getSimpleName() + ": " + m.strip();
+    return m == null || m.isBlank()
+        ? e.getClass().getSimpleName()
+        : e.getClass().getSimpleName() + ": " + m.strip();
   }
 
   /** The check cycle, followed by one debug line: documents open, files read, diagnostics, time. */
@@ -549,8 +695,16 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     Set<Path> read = new HashSet<>();
     done.results().forEach(r -> read.addAll(r.files().keySet()));
     int diagnostics = CheckCycle.byFile(done.results()).values().stream().mapToInt(Set::size).sum();
-    debug("check: " + done.versions().size() + " open, " + read.size() + " files read, " + diagnostics
-        + " diagnostics, " + millisSince(start) + " ms");
+    debug(
+        "check: "
+            + done.versions().size()
+            + " open, "
+            + read.size()
+            + " files read, "
+            + diagnostics
+            + " diagnostics, "
+            + millisSince(start)
+            + " ms");
     return true;
   }
 
@@ -564,7 +718,10 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     return (System.nanoTime() - startNanos) / 1_000_000;
   }
 
-  /** A line for `--verbose` only: to standard error, never to the client (it would flood its log) nor stdout. */
+  /**
+   * A line for `--verbose` only: to standard error, never to the client (it would flood its log)
+   * nor stdout.
+   */
   void debug(String message) {
     PrintStream to = debug;
     if (to != null) {
@@ -572,7 +729,10 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     }
   }
 
-  /** Logs to stderr and, when connected, to the client's log; never to stdout, which carries the protocol. */
+  /**
+   * Logs to stderr and, when connected, to the client's log; never to stdout, which carries the
+   * protocol.
+   */
   void log(MessageType type, String message) {
     System.err.println("jonquil lsp: " + message);
     LanguageClient c = client;
@@ -590,88 +750,137 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     private ClientSupport() {}
 
     static boolean prepareRename(ClientCapabilities c) {
-      return c != null && c.getTextDocument() != null && c.getTextDocument().getRename() != null
+      return c != null
+          && c.getTextDocument() != null
+          && c.getTextDocument().getRename() != null
           && Boolean.TRUE.equals(c.getTextDocument().getRename().getPrepareSupport());
     }
 
     static boolean markdownHover(ClientCapabilities c) {
-      return c != null && c.getTextDocument() != null && c.getTextDocument().getHover() != null
+      return c != null
+          && c.getTextDocument() != null
+          && c.getTextDocument().getHover() != null
           && c.getTextDocument().getHover().getContentFormat() != null
           && c.getTextDocument().getHover().getContentFormat().contains("markdown");
     }
 
-    /** The client pulls document diagnostics (textDocument/diagnostic), so they are not pushed to it. */
+    /**
+     * The client pulls document diagnostics (textDocument/diagnostic), so they are not pushed to
+     * it.
+     */
     static boolean pullDiagnostics(ClientCapabilities c) {
-      return c != null && c.getTextDocument() != null && c.getTextDocument().getDiagnostic() != null;
+      return c != null
+          && c.getTextDocument() != null
+          && c.getTextDocument().getDiagnostic() != null;
     }
 
     static boolean definitionLinks(ClientCapabilities c) {
-      return c != null && c.getTextDocument() != null && c.getTextDocument().getDefinition() != null
+      return c != null
+          && c.getTextDocument() != null
+          && c.getTextDocument().getDefinition() != null
           && Boolean.TRUE.equals(c.getTextDocument().getDefinition().getLinkSupport());
     }
 
     static boolean hierarchicalSymbols(ClientCapabilities c) {
-      return c != null && c.getTextDocument() != null && c.getTextDocument().getDocumentSymbol() != null
-          && Boolean.TRUE.equals(c.getTextDocument().getDocumentSymbol().getHierarchicalDocumentSymbolSupport());
+      return c != null
+          && c.getTextDocument() != null
+          && c.getTextDocument().getDocumentSymbol() != null
+          && Boolean.TRUE.equals(
+              c.getTextDocument().getDocumentSymbol().getHierarchicalDocumentSymbolSupport());
     }
 
     static boolean workDoneProgress(ClientCapabilities c) {
-      return c != null && c.getWindow() != null && Boolean.TRUE.equals(c.getWindow().getWorkDoneProgress());
+      return c != null
+          && c.getWindow() != null
+          && Boolean.TRUE.equals(c.getWindow().getWorkDoneProgress());
     }
 
     static boolean watchedFilesRegistration(ClientCapabilities c) {
-      return c != null && c.getWorkspace() != null && c.getWorkspace().getDidChangeWatchedFiles() != null
-          && Boolean.TRUE.equals(c.getWorkspace().getDidChangeWatchedFiles().getDynamicRegistration());
+      return c != null
+          && c.getWorkspace() != null
+          && c.getWorkspace().getDidChangeWatchedFiles() != null
+          && Boolean.TRUE.equals(
+              c.getWorkspace().getDidChangeWatchedFiles().getDynamicRegistration());
     }
 
     /** The client resolves completion items lazily and takes their documentation that way. */
     static boolean lazyCompletionDocumentation(ClientCapabilities c) {
-      return c != null && c.getTextDocument() != null && c.getTextDocument().getCompletion() != null
+      return c != null
+          && c.getTextDocument() != null
+          && c.getTextDocument().getCompletion() != null
           && c.getTextDocument().getCompletion().getCompletionItem() != null
           && c.getTextDocument().getCompletion().getCompletionItem().getResolveSupport() != null
-          && c.getTextDocument().getCompletion().getCompletionItem().getResolveSupport().getProperties() != null
-          && c.getTextDocument().getCompletion().getCompletionItem().getResolveSupport().getProperties()
+          && c.getTextDocument()
+                  .getCompletion()
+                  .getCompletionItem()
+                  .getResolveSupport()
+                  .getProperties()
+              != null
+          && c.getTextDocument()
+              .getCompletion()
+              .getCompletionItem()
+              .getResolveSupport()
+              .getProperties()
               .contains("documentation");
     }
 
     /** The client resolves inlay hints lazily and takes their tooltips that way. */
     static boolean lazyInlayHintTooltips(ClientCapabilities c) {
-      return c != null && c.getTextDocument() != null && c.getTextDocument().getInlayHint() != null
+      return c != null
+          && c.getTextDocument() != null
+          && c.getTextDocument().getInlayHint() != null
           && c.getTextDocument().getInlayHint().getResolveSupport() != null
           && c.getTextDocument().getInlayHint().getResolveSupport().getProperties() != null
-          && c.getTextDocument().getInlayHint().getResolveSupport().getProperties().contains("tooltip");
+          && c.getTextDocument()
+              .getInlayHint()
+              .getResolveSupport()
+              .getProperties()
+              .contains("tooltip");
     }
 
     /** The client names this token type among those it knows. */
     static boolean semanticTokenType(ClientCapabilities c, String type) {
-      return c != null && c.getTextDocument() != null && c.getTextDocument().getSemanticTokens() != null
+      return c != null
+          && c.getTextDocument() != null
+          && c.getTextDocument().getSemanticTokens() != null
           && c.getTextDocument().getSemanticTokens().getTokenTypes() != null
           && c.getTextDocument().getSemanticTokens().getTokenTypes().contains(type);
     }
 
     static boolean lineFoldingOnly(ClientCapabilities c) {
-      return c != null && c.getTextDocument() != null && c.getTextDocument().getFoldingRange() != null
+      return c != null
+          && c.getTextDocument() != null
+          && c.getTextDocument().getFoldingRange() != null
           && Boolean.TRUE.equals(c.getTextDocument().getFoldingRange().getLineFoldingOnly());
     }
 
     /** The most folding ranges the client wants, or null when it sets no limit. */
     static Integer foldingRangeLimit(ClientCapabilities c) {
-      return c == null || c.getTextDocument() == null || c.getTextDocument().getFoldingRange() == null
-          ? null : c.getTextDocument().getFoldingRange().getRangeLimit();
+      return c == null
+              || c.getTextDocument() == null
+              || c.getTextDocument().getFoldingRange() == null
+          ? null
+          : c.getTextDocument().getFoldingRange().getRangeLimit();
     }
 
     static boolean codeActionLiterals(ClientCapabilities c) {
-      return c != null && c.getTextDocument() != null && c.getTextDocument().getCodeAction() != null
+      return c != null
+          && c.getTextDocument() != null
+          && c.getTextDocument().getCodeAction() != null
           && c.getTextDocument().getCodeAction().getCodeActionLiteralSupport() != null;
     }
 
     static boolean preferredCodeActions(ClientCapabilities c) {
-      return c != null && c.getTextDocument() != null && c.getTextDocument().getCodeAction() != null
+      return c != null
+          && c.getTextDocument() != null
+          && c.getTextDocument().getCodeAction() != null
           && Boolean.TRUE.equals(c.getTextDocument().getCodeAction().getIsPreferredSupport());
     }
 
     static boolean documentChanges(ClientCapabilities c) {
-      return c != null && c.getWorkspace() != null && c.getWorkspace().getWorkspaceEdit() != null
+      return c != null
+          && c.getWorkspace() != null
+          && c.getWorkspace().getWorkspaceEdit() != null
           && Boolean.TRUE.equals(c.getWorkspace().getWorkspaceEdit().getDocumentChanges());
     }
   }

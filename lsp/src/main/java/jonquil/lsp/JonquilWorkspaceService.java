@@ -35,31 +35,44 @@ final class JonquilWorkspaceService implements WorkspaceService {
   }
 
   @Override
-  public CompletableFuture<Either<List<? extends SymbolInformation>, List<? extends WorkspaceSymbol>>> symbol(
-      WorkspaceSymbolParams params) {
+  public CompletableFuture<
+          Either<List<? extends SymbolInformation>, List<? extends WorkspaceSymbol>>>
+      symbol(WorkspaceSymbolParams params) {
     String query = params.getQuery() == null ? "" : params.getQuery();
-    return server.answer("workspace/symbol", null, server.index::fresh, (snapshot, none) -> {
-      // The checks of the open documents answer for the files they read; the workspace index for all others.
-      Set<EditorAnswers.FileSymbol> found = new LinkedHashSet<>();
-      Set<Path> checked = new HashSet<>();
-      for (Result r : snapshot.results()) {
-        found.addAll(server.answers.workspaceSymbols(r, query));
-        checked.addAll(r.files().keySet());
-      }
-      WorkspaceIndex.Snapshot index = server.index.latest();
-      List<FileIndex> unchecked = index.files().stream().filter(f -> !checked.contains(f.file())).toList();
-      found.addAll(server.answers.workspaceSymbols(unchecked, query));
-      List<WorkspaceSymbol> out = new ArrayList<>();
-      Convert convert = server.convert();
-      for (EditorAnswers.FileSymbol s : found) {
-        if (out.size() == MAX_SYMBOLS) {
-          break;
-        }
-        out.add(convert.workspaceSymbol(s, file -> snapshot.resultFor(file).map(r -> r.files().get(file))
-            .orElseGet(() -> index.source(file))));
-      }
-      return Either.forRight(out);
-    });
+    return server.answer(
+        "workspace/symbol",
+        null,
+        server.index::fresh,
+        (snapshot, none) -> {
+          // The checks of the open documents answer for the files they read; the workspace index
+          // for all others.
+          Set<EditorAnswers.FileSymbol> found = new LinkedHashSet<>();
+          Set<Path> checked = new HashSet<>();
+          for (Result r : snapshot.results()) {
+            found.addAll(server.answers.workspaceSymbols(r, query));
+            checked.addAll(r.files().keySet());
+          }
+          WorkspaceIndex.Snapshot index = server.index.latest();
+          List<FileIndex> unchecked =
+              index.files().stream().filter(f -> !checked.contains(f.file())).toList();
+          found.addAll(server.answers.workspaceSymbols(unchecked, query));
+          List<WorkspaceSymbol> out = new ArrayList<>();
+          Convert convert = server.convert();
+          for (EditorAnswers.FileSymbol s : found) {
+            if (out.size() == MAX_SYMBOLS) {
+              break;
+            }
+            out.add(
+                convert.workspaceSymbol(
+                    s,
+                    file ->
+                        snapshot
+                            .resultFor(file)
+                            .map(r -> r.files().get(file))
+                            .orElseGet(() -> index.source(file))));
+          }
+          return Either.forRight(out);
+        });
   }
 
   @Override
@@ -69,31 +82,36 @@ final class JonquilWorkspaceService implements WorkspaceService {
 
   @Override
   public void didChangeWatchedFiles(DidChangeWatchedFilesParams params) {
-    server.onNotification("workspace/didChangeWatchedFiles", () -> {
-      List<Path> files = new ArrayList<>();
-      for (FileEvent e : params.getChanges() == null ? List.<FileEvent>of() : params.getChanges()) {
-        Documents.pathOf(e.getUri()).ifPresent(files::add);
-      }
-      server.index.filesChanged(files);
-      server.scheduleCheck();
-    });
+    server.onNotification(
+        "workspace/didChangeWatchedFiles",
+        () -> {
+          List<Path> files = new ArrayList<>();
+          for (FileEvent e :
+              params.getChanges() == null ? List.<FileEvent>of() : params.getChanges()) {
+            Documents.pathOf(e.getUri()).ifPresent(files::add);
+          }
+          server.index.filesChanged(files);
+          server.scheduleCheck();
+        });
   }
 
   @Override
   public void didChangeWorkspaceFolders(DidChangeWorkspaceFoldersParams params) {
-    server.onNotification("workspace/didChangeWorkspaceFolders", () -> {
-      Set<Path> folders = new LinkedHashSet<>(server.folders());
-      if (params.getEvent() != null) {
-        for (WorkspaceFolder f : nonNull(params.getEvent().getRemoved())) {
-          Documents.pathOf(f.getUri()).ifPresent(folders::remove);
-        }
-        for (WorkspaceFolder f : nonNull(params.getEvent().getAdded())) {
-          Documents.pathOf(f.getUri()).ifPresent(folders::add);
-        }
-      }
-      server.setFolders(new ArrayList<>(folders));
-      server.scheduleCheck();
-    });
+    server.onNotification(
+        "workspace/didChangeWorkspaceFolders",
+        () -> {
+          Set<Path> folders = new LinkedHashSet<>(server.folders());
+          if (params.getEvent() != null) {
+            for (WorkspaceFolder f : nonNull(params.getEvent().getRemoved())) {
+              Documents.pathOf(f.getUri()).ifPresent(folders::remove);
+            }
+            for (WorkspaceFolder f : nonNull(params.getEvent().getAdded())) {
+              Documents.pathOf(f.getUri()).ifPresent(folders::add);
+            }
+          }
+          server.setFolders(new ArrayList<>(folders));
+          server.scheduleCheck();
+        });
   }
 
   private static List<WorkspaceFolder> nonNull(List<WorkspaceFolder> list) {

@@ -14,14 +14,25 @@ import org.eclipse.lsp4j.services.LanguageClient;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 
-/** The `jonquil lsp` subcommand: runs the language server on stdin/stdout until exit or until stdin closes. */
-@Command(name = "lsp", description = "Run the Jonquil language server over standard input and output.")
+/**
+ * The `jonquil lsp` subcommand: runs the language server on stdin/stdout until exit or until stdin
+ * closes.
+ */
+@Command(
+    name = "lsp",
+    description = "Run the Jonquil language server over standard input and output.")
 public final class LspCommand implements java.util.concurrent.Callable<Integer> {
-  @Option(names = {"-h", "--help"}, usageHelp = true, description = "Show this help and exit.")
+  @Option(
+      names = {"-h", "--help"},
+      usageHelp = true,
+      description = "Show this help and exit.")
   boolean help;
 
-  @Option(names = "--verbose", description = "Also write debug lines to standard error: one per check (open "
-      + "documents, files read, diagnostics, milliseconds) and one per request (method, outcome, milliseconds).")
+  @Option(
+      names = "--verbose",
+      description =
+          "Also write debug lines to standard error: one per check (open documents, files read,"
+              + " diagnostics, milliseconds) and one per request (method, outcome, milliseconds).")
   boolean verbose;
 
   private final InputStream in;
@@ -39,7 +50,10 @@ public final class LspCommand implements java.util.concurrent.Callable<Integer> 
     this(in, out, null, answers);
   }
 
-  /** As above, with {@code --verbose} writing its debug lines to {@code err} (null: the process's stderr). */
+  /**
+   * As above, with {@code --verbose} writing its debug lines to {@code err} (null: the process's
+   * stderr).
+   */
   public LspCommand(InputStream in, OutputStream out, PrintStream err, EditorAnswers answers) {
     this.in = in;
     this.out = out;
@@ -60,23 +74,29 @@ public final class LspCommand implements java.util.concurrent.Callable<Integer> 
     PrintStream debug = verbose ? (err != null ? err : System.err) : null;
     JonquilLanguageServer server = new JonquilLanguageServer(answers, debug);
     AtomicInteger n = new AtomicInteger();
-    ExecutorService io = Executors.newCachedThreadPool(r -> {
-      Thread t = new Thread(r, "jonquil-lsp-io-" + n.incrementAndGet());
-      t.setDaemon(true);
-      return t;
-    });
+    ExecutorService io =
+        Executors.newCachedThreadPool(
+            r -> {
+              Thread t = new Thread(r, "jonquil-lsp-io-" + n.incrementAndGet());
+              t.setDaemon(true);
+              return t;
+            });
     try {
-      Launcher<LanguageClient> launcher = LSPLauncher.createServerLauncher(server, input, output, io, null);
+      Launcher<LanguageClient> launcher =
+          LSPLauncher.createServerLauncher(server, input, output, io, null);
       server.connect(launcher.getRemoteProxy());
       Future<Void> listening = launcher.startListening();
-      CompletableFuture<Integer> inputClosed = CompletableFuture.supplyAsync(() -> {
-        try {
-          listening.get();
-        } catch (Exception e) {
-          // the stream failed: the same as closing it
-        }
-        return -1;
-      }, io);
+      CompletableFuture<Integer> inputClosed =
+          CompletableFuture.supplyAsync(
+              () -> {
+                try {
+                  listening.get();
+                } catch (Exception e) {
+                  // the stream failed: the same as closing it
+                }
+                return -1;
+              },
+              io);
       int code = (Integer) CompletableFuture.anyOf(server.exitCode(), inputClosed).join();
       if (code < 0) {
         // stdin closed without 'exit': the editor is gone, so must we be (no orphan servers).

@@ -3,11 +3,15 @@ package jonquil.lsp;
 import java.nio.file.Path;
 import jonquil.cli.Cli;
 
-/** Entry point of lsp/target/jonquil.jar (`check` and `lsp`), assembled here because lsp sits on top of every module. */
+/**
+ * Entry point of lsp/target/jonquil.jar (`check` and `lsp`), assembled here because lsp sits on top
+ * of every module.
+ */
 public final class Main {
   private Main() {}
 
   public static void main(String[] args) {
-    System.exit(Cli.run(args, System.out, System.err, Path.of("").toAbsolutePath(), new LspCommand()));
+    System.exit(
+        Cli.run(args, System.out, System.err, Path.of("").toAbsolutePath(), new LspCommand()));
   }
 }

@@ -11,7 +11,10 @@ import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.TimeUnit;
 import jonquil.Result;
 
-/** The latest finished check that requests answer from, and a non-blocking wait for one that saw a given document version. */
+/**
+ * The latest finished check that requests answer from, and a non-blocking wait for one that saw a
+ * given document version.
+ */
 final class Snapshots {
 
   /**
@@ -26,7 +29,10 @@ final class Snapshots {
       versions = Map.copyOf(versions);
     }
 
-    /** The result that read this file, if any check did; none for a document that names no file (null). */
+    /**
+     * The result that read this file, if any check did; none for a document that names no file
+     * (null).
+     */
     Optional<Result> resultFor(Path file) {
       if (file == null) {
         return Optional.empty(); // the results' file maps reject null keys
@@ -40,7 +46,8 @@ final class Snapshots {
     }
   }
 
-  private record Waiter(Path path, Integer version, long folders, CompletableFuture<Snapshot> future) {}
+  private record Waiter(
+      Path path, Integer version, long folders, CompletableFuture<Snapshot> future) {}
 
   private volatile Snapshot latest = Snapshot.EMPTY;
   private final List<Waiter> waiters = new ArrayList<>();
@@ -76,10 +83,10 @@ final class Snapshots {
   }
 
   /**
-   * A snapshot that saw at least {@code version} of the file ({@code null}: any will do) under
-   * at least generation {@code folders} of the workspace folders; after {@code timeout}, the
-   * latest one whatever it saw. Before the first check, a request about no document version
-   * gets the empty snapshot at once. Never blocks the caller.
+   * A snapshot that saw at least {@code version} of the file ({@code null}: any will do) under at
+   * least generation {@code folders} of the workspace folders; after {@code timeout}, the latest
+   * one whatever it saw. Before the first check, a request about no document version gets the empty
+   * snapshot at once. Never blocks the caller.
    */
   CompletableFuture<Snapshot> fresh(Path file, Integer version, long folders, Duration timeout) {
     Snapshot now = latest;
@@ -94,7 +101,8 @@ final class Snapshots {
     if (saw(latest, file, version, folders)) {
       future.complete(latest);
     }
-    return future.completeOnTimeout(null, timeout.toMillis(), TimeUnit.MILLISECONDS)
+    return future
+        .completeOnTimeout(null, timeout.toMillis(), TimeUnit.MILLISECONDS)
         .thenApply(s -> s != null ? s : latest);
   }
 

@@ -14,21 +14,32 @@ import jonquil.format.FormatOptions;
 import jonquil.format.Formatter;
 import jonquil.ide.Ide;
 
-/** Checks a small built-in spec once at start-up, because the first check in a fresh JVM is 15-20 times slower than the next. */
+/**
+ * Checks a small built-in spec once at start-up, because the first check in a fresh JVM is 15-20
+ * times slower than the next.
+ */
 final class WarmUp {
   static final String RESOURCE = "warmup.jonq";
 
   private WarmUp() {}
 
-  /** Parses, checks, hovers and formats the built-in spec in memory; nothing is published and no file is read. */
+  /**
+   * Parses, checks, hovers and formats the built-in spec in memory; nothing is published and no
+   * file is read.
+   */
   static void run() {
     String text = text();
     if (text.isEmpty()) {
       return;
     }
-    Path root = Path.of(System.getProperty("java.io.tmpdir"), "jonquil-warm-up").toAbsolutePath().normalize();
+    Path root =
+        Path.of(System.getProperty("java.io.tmpdir"), "jonquil-warm-up")
+            .toAbsolutePath()
+            .normalize();
     Path file = root.resolve(RESOURCE);
-    Result result = Checker.check(Workspace.withOverlay(root, Map.of(file, text)), List.of(file), CheckOptions.EDITOR);
+    Result result =
+        Checker.check(
+            Workspace.withOverlay(root, Map.of(file, text)), List.of(file), CheckOptions.EDITOR);
     Ide.hover(result, file, text.indexOf("warm_lens"));
     Ide.documentSymbols(result, file);
     if (result.files().containsKey(file)) {

@@ -43,27 +43,47 @@ import org.eclipse.lsp4j.MessageType;
 import org.eclipse.lsp4j.services.LanguageClient;
 
 /**
- * The workspace index (shared checklist, trap 8): every spec file under the workspace folders,
- * read from disk with the open buffers laid over it, kept as the compiler's {@link FileIndex}
- * entries, so that workspace/symbol, references and rename reach files that no open document
- * uses. Each file is checked names-only under its innermost folder, as the check cycle roots it.
- * All work runs on one worker thread of its own, never on LSP4J's reader thread; answers read
- * the immutable {@link Snapshot}.
+ * The workspace index (shared checklist, trap 8): every spec file under the workspace folders, read
+ * from disk with the open buffers laid over it, kept as the compiler's {@link FileIndex} entries,
+ * so that workspace/symbol, references and rename reach files that no open document uses. Each file
+ * is checked names-only under its innermost folder, as the check cycle roots it. All work runs on
+ * one worker thread of its own, never on LSP4J's reader thread; answers read the immutable {@link
+ * Snapshot}.
  */
 final class WorkspaceIndex implements AutoCloseable {
-  /** Spec files indexed across all folders; a workspace with more is not a spec project, and the rest is left out. */
+  /**
+   * Spec files indexed across all folders; a workspace with more is not a spec project, and the
+   * rest is left out.
+   */
   static final int MAX_FILES = 5_000;
-  /** Larger files are left out (precedent: editors cap at about 1 MiB; specs are hand-written and far smaller). */
+
+  /**
+   * Larger files are left out (precedent: editors cap at about 1 MiB; specs are hand-written and
+   * far smaller).
+   */
   static final long MAX_FILE_BYTES = 1L << 20;
-  /** The index keeps every file's text (positions are converted from it), so the first pass caps the total too. */
+
+  /**
+   * The index keeps every file's text (positions are converted from it), so the first pass caps the
+   * total too.
+   */
   static final long MAX_TOTAL_BYTES = 64L << 20;
-  /** Files checked together, so that a library they share is parsed once; progress is reported per batch. */
+
+  /**
+   * Files checked together, so that a library they share is parsed once; progress is reported per
+   * batch.
+   */
   static final int BATCH = 32;
+
   /** Quiet time after an edit of an open buffer before the index reads the buffers again. */
   static final Duration BUFFER_DEBOUNCE = Duration.ofMillis(300);
+
   static final String PROGRESS_TITLE = "Indexing Jonquil specs";
 
-  /** The index as answers read it: each folder's entries by file, and the buffer versions the entries read. */
+  /**
+   * The index as answers read it: each folder's entries by file, and the buffer versions the
+   * entries read.
+   */
   record Snapshot(Map<Path, Map<Path, FileIndex>> folders, Map<Path, Integer> versions) {
     static final Snapshot EMPTY = new Snapshot(Map.of(), Map.of());
 
@@ -122,8 +142,12 @@ final class WorkspaceIndex implements AutoCloseable {
   private final ConcurrentLinkedQueue<Path> diskChanges = new ConcurrentLinkedQueue<>();
   private final AtomicBoolean bufferSyncQueued = new AtomicBoolean();
   private final Object syncLock = new Object();
-  /** A sync that is queued and has not started yet, which later requests join; guarded by syncLock. */
+
+  /**
+   * A sync that is queued and has not started yet, which later requests join; guarded by syncLock.
+   */
   private CompletableFuture<Snapshot> queuedSync;
+
   private volatile boolean started;
   private volatile boolean progress;
   private volatile boolean watched;
@@ -136,24 +160,35 @@ final class WorkspaceIndex implements AutoCloseable {
   private Map<Path, Map<Path, FileIndex>> byFolder = new LinkedHashMap<>();
   private List<Path> indexedFolders = List.of();
   private final Map<Path, Stamp> stamps = new HashMap<>();
-  /** The open buffers the entries read (text and version), so that a changed or closed buffer is read again. */
+
+  /**
+   * The open buffers the entries read (text and version), so that a changed or closed buffer is
+   * read again.
+   */
   private final Map<Path, Documents.Doc> overlaid = new HashMap<>();
+
   /** Files a cancelled pass did not reach: left out until the folders change. */
   private final Set<Path> notReached = new HashSet<>();
+
   private boolean fullLogged;
 
-  WorkspaceIndex(EditorAnswers answers, Documents documents, Supplier<LanguageClient> client,
+  WorkspaceIndex(
+      EditorAnswers answers,
+      Documents documents,
+      Supplier<LanguageClient> client,
       BiConsumer<MessageType, String> log) {
     this.answers = answers;
     this.documents = documents;
     this.client = client;
     this.log = log;
     ThreadGroup group = new ThreadGroup("jonquil-index");
-    this.worker = Executors.newSingleThreadScheduledExecutor(r -> {
-      Thread t = new Thread(group, r, "jonquil-index", CheckScheduler.STACK_BYTES);
-      t.setDaemon(true);
-      return t;
-    });
+    this.worker =
+        Executors.newSingleThreadScheduledExecutor(
+            r -> {
+              Thread t = new Thread(group, r, "jonquil-index", CheckScheduler.STACK_BYTES);
+              t.setDaemon(true);
+              return t;
+            });
   }
 
   // ---- called from LSP4J's reader thread: record and queue, never wait ----
@@ -169,7 +204,10 @@ final class WorkspaceIndex implements AutoCloseable {
     setFolders(folders);
   }
 
-  /** A new set of workspace folders: added folders are indexed, removed ones dropped, the others kept. */
+  /**
+   * A new set of workspace folders: added folders are indexed, removed ones dropped, the others
+   * kept.
+   */
   void setFolders(List<Path> folders) {
     wanted = List.copyOf(folders);
     if (!started) {
@@ -179,15 +217,18 @@ final class WorkspaceIndex implements AutoCloseable {
     submit(() -> pass(g));
   }
 
-  /** The client will not report file changes after all (it refused the registration): requests re-scan. */
+  /**
+   * The client will not report file changes after all (it refused the registration): requests
+   * re-scan.
+   */
   void notWatched() {
     watched = false;
   }
 
   /**
-   * Files the client reports changed, created or deleted on disk: read after a quiet time,
-   * with the open buffers. (Edits of open buffers alone wait for the next request that needs
-   * the index: {@link #fresh()} reads them.)
+   * Files the client reports changed, created or deleted on disk: read after a quiet time, with the
+   * open buffers. (Edits of open buffers alone wait for the next request that needs the index:
+   * {@link #fresh()} reads them.)
    */
   void filesChanged(Collection<Path> files) {
     diskChanges.addAll(files);
@@ -197,10 +238,14 @@ final class WorkspaceIndex implements AutoCloseable {
   private void syncSoon() {
     if (started && bufferSyncQueued.compareAndSet(false, true)) {
       try {
-        worker.schedule(guarded(() -> {
-          bufferSyncQueued.set(false);
-          sync(false);
-        }), BUFFER_DEBOUNCE.toMillis(), TimeUnit.MILLISECONDS);
+        worker.schedule(
+            guarded(
+                () -> {
+                  bufferSyncQueued.set(false);
+                  sync(false);
+                }),
+            BUFFER_DEBOUNCE.toMillis(),
+            TimeUnit.MILLISECONDS);
       } catch (RejectedExecutionException e) {
         // closed: nothing left to keep fresh
       }
@@ -219,10 +264,10 @@ final class WorkspaceIndex implements AutoCloseable {
   }
 
   /**
-   * The index once it has read the current buffers, the reported file changes and (for a
-   * client that does not watch files) every file whose size or modification time changed; after
-   * {@code JonquilLanguageServer.FRESH_WAIT} (e.g. while a large first pass runs), the latest
-   * one whatever it holds. Never blocks the caller.
+   * The index once it has read the current buffers, the reported file changes and (for a client
+   * that does not watch files) every file whose size or modification time changed; after {@code
+   * JonquilLanguageServer.FRESH_WAIT} (e.g. while a large first pass runs), the latest one whatever
+   * it holds. Never blocks the caller.
    */
   CompletableFuture<Snapshot> fresh() {
     if (!started) {
@@ -234,25 +279,27 @@ final class WorkspaceIndex implements AutoCloseable {
         CompletableFuture<Snapshot> mine = new CompletableFuture<>();
         queuedSync = mine;
         boolean scan = !watched;
-        if (!submit(() -> {
-          synchronized (syncLock) {
-            if (queuedSync == mine) {
-              queuedSync = null;
-            }
-          }
-          try {
-            sync(scan);
-          } finally {
-            mine.complete(latest);
-          }
-        })) {
+        if (!submit(
+            () -> {
+              synchronized (syncLock) {
+                if (queuedSync == mine) {
+                  queuedSync = null;
+                }
+              }
+              try {
+                sync(scan);
+              } finally {
+                mine.complete(latest);
+              }
+            })) {
           queuedSync = null;
           mine.complete(latest);
         }
       }
       sync = queuedSync != null ? queuedSync : CompletableFuture.completedFuture(latest);
     }
-    return sync.copy().completeOnTimeout(null, JonquilLanguageServer.FRESH_WAIT.toMillis(), TimeUnit.MILLISECONDS)
+    return sync.copy()
+        .completeOnTimeout(null, JonquilLanguageServer.FRESH_WAIT.toMillis(), TimeUnit.MILLISECONDS)
         .thenApply(s -> s != null ? s : latest);
   }
 
@@ -277,14 +324,20 @@ final class WorkspaceIndex implements AutoCloseable {
       try {
         task.run();
       } catch (Throwable t) {
-        log.accept(MessageType.Error, "the workspace index failed (" + JonquilLanguageServer.describe(t)
-            + "); workspace answers use what was indexed before");
+        log.accept(
+            MessageType.Error,
+            "the workspace index failed ("
+                + JonquilLanguageServer.describe(t)
+                + "); workspace answers use what was indexed before");
         t.printStackTrace(System.err);
       }
     };
   }
 
-  /** A full pass for the folders of generation {@code g}: folders kept as they were are not read again. */
+  /**
+   * A full pass for the folders of generation {@code g}: folders kept as they were are not read
+   * again.
+   */
   private void pass(long g) {
     if (g != generation.get()) {
       return; // a newer set of folders is queued behind this one
@@ -344,8 +397,13 @@ final class WorkspaceIndex implements AutoCloseable {
       }
     } finally {
       publish();
-      endProgress(token, superseded ? "the workspace folders changed; indexing them again"
-          : cancelled ? "stopped after " + done + " of " + total + " files" : "indexed " + done + " files");
+      endProgress(
+          token,
+          superseded
+              ? "the workspace folders changed; indexing them again"
+              : cancelled
+                  ? "stopped after " + done + " of " + total + " files"
+                  : "indexed " + done + " files");
     }
     if (!superseded) {
       logPass(done, total, folders.size(), budget, cancelled);
@@ -353,8 +411,8 @@ final class WorkspaceIndex implements AutoCloseable {
   }
 
   /**
-   * Reads what changed since the last sync: the reported disk changes, the open buffers, and
-   * with {@code scan} every file whose stamp changed; re-indexes them and the files that read them.
+   * Reads what changed since the last sync: the reported disk changes, the open buffers, and with
+   * {@code scan} every file whose stamp changed; re-indexes them and the files that read them.
    */
   private void sync(boolean scan) {
     Set<Path> changed = new LinkedHashSet<>();
@@ -362,12 +420,16 @@ final class WorkspaceIndex implements AutoCloseable {
       changed.add(p);
     }
     Map<Path, Documents.Doc> open = documents.snapshot();
-    open.forEach((p, doc) -> {
-      Documents.Doc seen = overlaid.get(p);
-      if (owner(p) != null && (seen == null || seen.version() != doc.version() || !seen.text().equals(doc.text()))) {
-        changed.add(p);
-      }
-    });
+    open.forEach(
+        (p, doc) -> {
+          Documents.Doc seen = overlaid.get(p);
+          if (owner(p) != null
+              && (seen == null
+                  || seen.version() != doc.version()
+                  || !seen.text().equals(doc.text()))) {
+            changed.add(p);
+          }
+        });
     for (Path p : overlaid.keySet()) {
       if (!open.containsKey(p)) {
         changed.add(p); // closed: the disk has the text now
@@ -382,17 +444,21 @@ final class WorkspaceIndex implements AutoCloseable {
     }
   }
 
-  /** Files created, changed or deleted on disk since they were indexed (the cheap check: size, time, file key). */
+  /**
+   * Files created, changed or deleted on disk since they were indexed (the cheap check: size, time,
+   * file key).
+   */
   private Set<Path> changedOnDisk(Set<Path> open) {
     Set<Path> out = new LinkedHashSet<>();
     Budget budget = new Budget();
     for (Path folder : indexedFolders) {
       Map<Path, Stamp> now = walk(folder, indexedFolders, budget);
-      now.forEach((p, stamp) -> {
-        if (!notReached.contains(p) && !stamp.equals(stamps.get(p))) {
-          out.add(p);
-        }
-      });
+      now.forEach(
+          (p, stamp) -> {
+            if (!notReached.contains(p) && !stamp.equals(stamps.get(p))) {
+              out.add(p);
+            }
+          });
       for (Path p : byFolder.getOrDefault(folder, Map.of()).keySet()) {
         if (!now.containsKey(p) && !open.contains(p)) {
           out.add(p);
@@ -404,8 +470,8 @@ final class WorkspaceIndex implements AutoCloseable {
 
   /**
    * Re-indexes the changed files, then, for those whose names, 'use' lines or read files changed
-   * (or that came or went), every indexed file that reads or uses one of them, however
-   * indirectly. Editing the body of a library that many files use re-reads the library alone.
+   * (or that came or went), every indexed file that reads or uses one of them, however indirectly.
+   * Editing the body of a library that many files use re-reads the library alone.
    */
   private void refresh(Set<Path> changed) {
     Map<Path, Signature> before = new HashMap<>();
@@ -423,7 +489,8 @@ final class WorkspaceIndex implements AutoCloseable {
       grew = false;
       for (Map<Path, FileIndex> files : byFolder.values()) {
         for (FileIndex f : files.values()) {
-          if (!affected.contains(f.file()) && (anyIn(f.reads(), affected) || anyIn(f.uses(), affected))) {
+          if (!affected.contains(f.file())
+              && (anyIn(f.reads(), affected) || anyIn(f.uses(), affected))) {
             affected.add(f.file());
             grew = true;
           }
@@ -436,7 +503,10 @@ final class WorkspaceIndex implements AutoCloseable {
     }
   }
 
-  /** What other files' entries depend on: the names a file declares, the files it uses and the files it reads. */
+  /**
+   * What other files' entries depend on: the names a file declares, the files it uses and the files
+   * it reads.
+   */
   private record Signature(Set<String> declared, List<Path> uses, List<Path> reads) {}
 
   private Signature signature(Path file) {
@@ -444,14 +514,19 @@ final class WorkspaceIndex implements AutoCloseable {
       FileIndex f = m.get(file);
       if (f != null) {
         Set<String> declared = new HashSet<>();
-        f.names().stream().filter(FileIndex.NameUse::declaration).forEach(n -> declared.add(n.name()));
+        f.names().stream()
+            .filter(FileIndex.NameUse::declaration)
+            .forEach(n -> declared.add(n.name()));
         return new Signature(declared, f.uses(), f.reads());
       }
     }
     return null;
   }
 
-  /** Indexes the files again, or forgets those that are gone, unreadable, too large or outside every folder. */
+  /**
+   * Indexes the files again, or forgets those that are gone, unreadable, too large or outside every
+   * folder.
+   */
   private void reindex(Set<Path> files) {
     Set<Path> open = documents.snapshot().keySet();
     int count = byFolder.values().stream().mapToInt(Map::size).sum();
@@ -472,12 +547,13 @@ final class WorkspaceIndex implements AutoCloseable {
       }
       toIndex.computeIfAbsent(folder, k -> new ArrayList<>()).add(p);
     }
-    toIndex.forEach((folder, list) -> {
-      list.sort(null);
-      for (int i = 0; i < list.size(); i += BATCH) {
-        index(folder, list.subList(i, Math.min(list.size(), i + BATCH)), null);
-      }
-    });
+    toIndex.forEach(
+        (folder, list) -> {
+          list.sort(null);
+          for (int i = 0; i < list.size(); i += BATCH) {
+            index(folder, list.subList(i, Math.min(list.size(), i + BATCH)), null);
+          }
+        });
   }
 
   /**
@@ -491,9 +567,14 @@ final class WorkspaceIndex implements AutoCloseable {
     open.forEach((p, doc) -> buffers.put(p, doc.text()));
     Map<Path, Stamp> before = new HashMap<>();
     for (Path f : files) {
-      stamp(f).ifPresent(s -> before.put(f, s)); // taken before reading, so a write during the check shows next time
+      stamp(f)
+          .ifPresent(
+              s ->
+                  before.put(
+                      f, s)); // taken before reading, so a write during the check shows next time
     }
-    Result result = Checker.check(Workspace.withOverlay(folder, buffers), files, CheckOptions.NAMES);
+    Result result =
+        Checker.check(Workspace.withOverlay(folder, buffers), files, CheckOptions.NAMES);
     Map<Path, FileIndex> into = byFolder.get(folder);
     int stored = 0;
     for (Path f : files) {
@@ -543,18 +624,24 @@ final class WorkspaceIndex implements AutoCloseable {
     return byFolder.values().stream().anyMatch(m -> m.containsKey(file));
   }
 
-  /** The innermost indexed folder holding the file, as the check cycle roots it; null outside every folder. */
+  /**
+   * The innermost indexed folder holding the file, as the check cycle roots it; null outside every
+   * folder.
+   */
   private Path owner(Path file) {
     Path best = null;
     for (Path folder : indexedFolders) {
-      if (file.startsWith(folder) && (best == null || folder.getNameCount() > best.getNameCount())) {
+      if (file.startsWith(folder)
+          && (best == null || folder.getNameCount() > best.getNameCount())) {
         best = folder;
       }
     }
     return best;
   }
 
-  /** The folders strictly inside {@code folder}: their files are indexed under them, not under it. */
+  /**
+   * The folders strictly inside {@code folder}: their files are indexed under them, not under it.
+   */
   private static Set<Path> nested(Path folder, List<Path> all) {
     Set<Path> out = new HashSet<>();
     for (Path f : all) {
@@ -579,51 +666,66 @@ final class WorkspaceIndex implements AutoCloseable {
     return true;
   }
 
-  /** Hidden directories (.git, editor state) and Maven's build output hold no specs of the project. */
+  /**
+   * Hidden directories (.git, editor state) and Maven's build output hold no specs of the project.
+   */
   private static boolean skippedDirectory(String name) {
     return name.startsWith(".") || name.equals("target");
   }
 
-  /** The spec files below {@code folder} with their stamps, by path, within the budget; nested folders are theirs. */
+  /**
+   * The spec files below {@code folder} with their stamps, by path, within the budget; nested
+   * folders are theirs.
+   */
   private Map<Path, Stamp> walk(Path folder, List<Path> folders, Budget budget) {
     Map<Path, Stamp> out = new TreeMap<>();
     try {
-      Files.walkFileTree(folder, EnumSet.noneOf(FileVisitOption.class), Integer.MAX_VALUE, new SimpleFileVisitor<>() {
-        @Override
-        public FileVisitResult preVisitDirectory(Path dir, BasicFileAttributes attrs) {
-          if (!dir.equals(folder) && (skippedDirectory(dir.getFileName().toString()) || folders.contains(dir))) {
-            return FileVisitResult.SKIP_SUBTREE;
-          }
-          return FileVisitResult.CONTINUE;
-        }
+      Files.walkFileTree(
+          folder,
+          EnumSet.noneOf(FileVisitOption.class),
+          Integer.MAX_VALUE,
+          new SimpleFileVisitor<>() {
+            @Override
+            public FileVisitResult preVisitDirectory(Path dir, BasicFileAttributes attrs) {
+              if (!dir.equals(folder)
+                  && (skippedDirectory(dir.getFileName().toString()) || folders.contains(dir))) {
+                return FileVisitResult.SKIP_SUBTREE;
+              }
+              return FileVisitResult.CONTINUE;
+            }
 
-        @Override
-        public FileVisitResult visitFile(Path file, BasicFileAttributes attrs) {
-          if (!attrs.isRegularFile() || !file.getFileName().toString().endsWith(".jonq")) {
-            return FileVisitResult.CONTINUE;
-          }
-          if (attrs.size() > MAX_FILE_BYTES) {
-            budget.tooLarge++;
-            return FileVisitResult.CONTINUE;
-          }
-          if (budget.files >= MAX_FILES || budget.bytes + attrs.size() > MAX_TOTAL_BYTES) {
-            budget.capped = true;
-            return FileVisitResult.TERMINATE;
-          }
-          budget.files++;
-          budget.bytes += attrs.size();
-          out.put(file, Stamp.of(attrs));
-          return FileVisitResult.CONTINUE;
-        }
+            @Override
+            public FileVisitResult visitFile(Path file, BasicFileAttributes attrs) {
+              if (!attrs.isRegularFile() || !file.getFileName().toString().endsWith(".jonq")) {
+                return FileVisitResult.CONTINUE;
+              }
+              if (attrs.size() > MAX_FILE_BYTES) {
+                budget.tooLarge++;
+                return FileVisitResult.CONTINUE;
+              }
+              if (budget.files >= MAX_FILES || budget.bytes + attrs.size() > MAX_TOTAL_BYTES) {
+                budget.capped = true;
+                return FileVisitResult.TERMINATE;
+              }
+              budget.files++;
+              budget.bytes += attrs.size();
+              out.put(file, Stamp.of(attrs));
+              return FileVisitResult.CONTINUE;
+            }
 
-        @Override
-        public FileVisitResult visitFileFailed(Path file, IOException e) {
-          return FileVisitResult.CONTINUE; // unreadable or gone: not indexed
-        }
-      });
+            @Override
+            public FileVisitResult visitFileFailed(Path file, IOException e) {
+              return FileVisitResult.CONTINUE; // unreadable or gone: not indexed
+            }
+          });
     } catch (IOException | RuntimeException e) {
-      log.accept(MessageType.Warning, "could not list the spec files under '" + folder + "' ("
-          + JonquilLanguageServer.describe(e) + ")");
+      log.accept(
+          MessageType.Warning,
+          "could not list the spec files under '"
+              + folder
+              + "' ("
+              + JonquilLanguageServer.describe(e)
+              + ")");
     }
     return out;
   }
@@ -661,16 +763,19 @@ final class WorkspaceIndex implements AutoCloseable {
     progressToken = token; // set before asking, so a cancel that overtakes the reply still counts
     try {
       // Waiting here is safe: this is the index worker, and the reader thread delivers the reply.
-      c.createProgress(Convert.progressCreate(token)).get(JonquilLanguageServer.FRESH_WAIT.toMillis(),
-          TimeUnit.MILLISECONDS);
+      c.createProgress(Convert.progressCreate(token))
+          .get(JonquilLanguageServer.FRESH_WAIT.toMillis(), TimeUnit.MILLISECONDS);
     } catch (InterruptedException e) {
       Thread.currentThread().interrupt();
       progressToken = null;
       return null;
     } catch (ExecutionException | TimeoutException | RuntimeException e) {
       progressToken = null;
-      log.accept(MessageType.Log, "the editor did not accept a progress token (" + JonquilLanguageServer.describe(e)
-          + "); indexing without progress");
+      log.accept(
+          MessageType.Log,
+          "the editor did not accept a progress token ("
+              + JonquilLanguageServer.describe(e)
+              + "); indexing without progress");
       return null;
     }
     c.notifyProgress(Convert.progressBegin(token, PROGRESS_TITLE, total + " spec files"));
@@ -684,7 +789,9 @@ final class WorkspaceIndex implements AutoCloseable {
   private void reportProgress(String token, int done, int total) {
     LanguageClient c = client.get();
     if (token != null && c != null) {
-      c.notifyProgress(Convert.progressReport(token, done + "/" + total + " files", done * 100 / Math.max(1, total)));
+      c.notifyProgress(
+          Convert.progressReport(
+              token, done + "/" + total + " files", done * 100 / Math.max(1, total)));
     }
   }
 
@@ -699,25 +806,40 @@ final class WorkspaceIndex implements AutoCloseable {
   }
 
   private void logPass(int done, int total, int folders, Budget budget, boolean cancelled) {
-    StringBuilder m = new StringBuilder("workspace index: " + done + " of " + total + " new spec files indexed under "
-        + folders + " folder(s)");
+    StringBuilder m =
+        new StringBuilder(
+            "workspace index: "
+                + done
+                + " of "
+                + total
+                + " new spec files indexed under "
+                + folders
+                + " folder(s)");
     if (cancelled) {
       m.append("; stopped by the editor, the rest is indexed when the folders change");
     }
     if (budget.capped) {
-      m.append("; stopped at the cap of " + MAX_FILES + " files or " + (MAX_TOTAL_BYTES >> 20) + " MiB of text");
+      m.append(
+          "; stopped at the cap of "
+              + MAX_FILES
+              + " files or "
+              + (MAX_TOTAL_BYTES >> 20)
+              + " MiB of text");
     }
     if (budget.tooLarge > 0) {
-      m.append("; " + budget.tooLarge + " file(s) over " + (MAX_FILE_BYTES >> 20) + " MiB left out");
+      m.append(
+          "; " + budget.tooLarge + " file(s) over " + (MAX_FILE_BYTES >> 20) + " MiB left out");
     }
-    log.accept(budget.capped || budget.tooLarge > 0 ? MessageType.Warning : MessageType.Log, m.toString());
+    log.accept(
+        budget.capped || budget.tooLarge > 0 ? MessageType.Warning : MessageType.Log, m.toString());
   }
 
   private void logFull() {
     if (!fullLogged) {
       fullLogged = true;
-      log.accept(MessageType.Warning, "workspace index: " + MAX_FILES + " files reached; new files are left out");
+      log.accept(
+          MessageType.Warning,
+          "workspace index: " + MAX_FILES + " files reached; new files are left out");
     }
   }
-
 }

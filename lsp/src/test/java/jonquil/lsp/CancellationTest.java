@@ -24,8 +24,7 @@ import org.junit.jupiter.api.io.TempDir;
 
 /** $/cancelRequest answers a slow request with -32800 at once and frees the worker it held. */
 class CancellationTest {
-  @TempDir
-  Path dir;
+  @TempDir Path dir;
 
   @Test
   void cancellingSlowHoversAnswers32800QuicklyAndFreesBothWorkers() throws Exception {
@@ -37,22 +36,23 @@ class CancellationTest {
     CountDownLatch never = new CountDownLatch(1);
     CountDownLatch started = new CountDownLatch(2);
     AtomicInteger interrupted = new AtomicInteger();
-    EditorAnswers slow = new Delegating(new NoAnswers()) {
-      @Override
-      public Optional<HoverInfo> hover(Result result, Path f, int offset) {
-        if (offset == 0) {
-          started.countDown();
-          try {
-            never.await(); // only an interrupt ends this
-          } catch (InterruptedException e) {
-            interrupted.incrementAndGet();
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException("interrupted");
+    EditorAnswers slow =
+        new Delegating(new NoAnswers()) {
+          @Override
+          public Optional<HoverInfo> hover(Result result, Path f, int offset) {
+            if (offset == 0) {
+              started.countDown();
+              try {
+                never.await(); // only an interrupt ends this
+              } catch (InterruptedException e) {
+                interrupted.incrementAndGet();
+                Thread.currentThread().interrupt();
+                throw new IllegalStateException("interrupted");
+              }
+            }
+            return Optional.of(new HoverInfo("fast", null));
           }
-        }
-        return Optional.of(new HoverInfo("fast", null));
-      }
-    };
+        };
     try (LspHarness h = new LspHarness(slow)) {
       h.initialize(dir);
       h.open(uri, 1, text);
@@ -69,7 +69,8 @@ class CancellationTest {
       List<ResponseMessage> cancelled = awaitCancelled(h, 2);
       long millis = TimeUnit.NANOSECONDS.toMillis(System.nanoTime() - sent);
       assertEquals(2, cancelled.size());
-      // LSP4J answers -32800 as soon as the reader takes $/cancelRequest; the body's interrupt is separate.
+      // LSP4J answers -32800 as soon as the reader takes $/cancelRequest; the body's interrupt is
+      // separate.
       assertTrue(millis < 100, "cancellation answered after " + millis + " ms");
       System.err.println("cancellation: both -32800 answers after " + millis + " ms");
 
@@ -77,15 +78,24 @@ class CancellationTest {
       Hover next = service.hover(new HoverParams(doc, new Position(0, 3))).get(5, TimeUnit.SECONDS);
       assertEquals("fast", next.getContents().getRight().getValue());
       assertEquals(2, interrupted.get(), "the cancelled bodies were interrupted");
-      assertEquals(0, h.responses.stream().filter(r -> r.getError() != null
-          && r.getError().getCode() != ResponseErrorCode.RequestCancelled.getValue()).count(), "no other error");
+      assertEquals(
+          0,
+          h.responses.stream()
+              .filter(
+                  r ->
+                      r.getError() != null
+                          && r.getError().getCode()
+                              != ResponseErrorCode.RequestCancelled.getValue())
+              .count(),
+          "no other error");
     }
   }
 
   @Test
   void repliesAreWrittenByAThreadThatCancelsNeverInterrupt() throws Exception {
     Files.writeString(dir.resolve(".jonquil-root"), "");
-    String text = "material glass = index 1.5\nwindow w1 {\n  material   glass\n  thickness  2 mm\n}\n";
+    String text =
+        "material glass = index 1.5\nwindow w1 {\n  material   glass\n  thickness  2 mm\n}\n";
     Path file = dir.resolve("writer.jonq");
     Files.writeString(file, text);
     String uri = file.toUri().toString();
@@ -95,23 +105,34 @@ class CancellationTest {
       var service = h.remote.getTextDocumentService();
       TextDocumentIdentifier doc = new TextDocumentIdentifier(uri);
       for (int i = 0; i < 5; i++) {
-        assertTrue(service.hover(new HoverParams(doc, new Position(1, 8))).get(10, TimeUnit.SECONDS) != null);
+        assertTrue(
+            service.hover(new HoverParams(doc, new Position(1, 8))).get(10, TimeUnit.SECONDS)
+                != null);
       }
       // A cancel interrupts the request worker; had it been writing a reply to a channel-backed
       // stream, the interrupt would close the channel and silence the server. So no worker writes.
-      assertTrue(h.serverWriters.contains("jonquil-replies"), "replies are written: " + h.serverWriters);
-      assertTrue(h.serverWriters.stream().noneMatch(t -> t.startsWith("jonquil-request-")),
+      assertTrue(
+          h.serverWriters.contains("jonquil-replies"), "replies are written: " + h.serverWriters);
+      assertTrue(
+          h.serverWriters.stream().noneMatch(t -> t.startsWith("jonquil-request-")),
           "a request worker wrote to the output: " + h.serverWriters);
     }
   }
 
-  private static List<ResponseMessage> awaitCancelled(LspHarness h, int count) throws InterruptedException {
+  private static List<ResponseMessage> awaitCancelled(LspHarness h, int count)
+      throws InterruptedException {
     long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(10);
     while (true) {
       List<ResponseMessage> found;
       synchronized (h.responses) {
-        found = h.responses.stream().filter(r -> r.getError() != null
-            && r.getError().getCode() == ResponseErrorCode.RequestCancelled.getValue()).toList();
+        found =
+            h.responses.stream()
+                .filter(
+                    r ->
+                        r.getError() != null
+                            && r.getError().getCode()
+                                == ResponseErrorCode.RequestCancelled.getValue())
+                .toList();
       }
       if (found.size() >= count || System.nanoTime() > deadline) {
         return found;

@@ -6,7 +6,10 @@ import java.util.List;
 import org.eclipse.lsp4j.Position;
 import org.eclipse.lsp4j.TextEdit;
 
-/** The client's side of a buffer: UTF-16 positions over LF, CRLF and CR lines, and applying text edits, written apart from the server's code. */
+/**
+ * The client's side of a buffer: UTF-16 positions over LF, CRLF and CR lines, and applying text
+ * edits, written apart from the server's code.
+ */
 final class ClientText {
   private ClientText() {}
 
@@ -45,10 +48,14 @@ final class ClientText {
     return new Position(line, offset - lineStart);
   }
 
-  /** Applies edits that do not overlap, as an editor does: all ranges refer to the text before any of them. */
+  /**
+   * Applies edits that do not overlap, as an editor does: all ranges refer to the text before any
+   * of them.
+   */
   static String apply(String text, List<? extends TextEdit> edits) {
     List<TextEdit> sorted = new ArrayList<>(edits);
-    sorted.sort(Comparator.comparingInt((TextEdit e) -> offset(text, e.getRange().getStart())).reversed());
+    sorted.sort(
+        Comparator.comparingInt((TextEdit e) -> offset(text, e.getRange().getStart())).reversed());
     String out = text;
     for (TextEdit e : sorted) {
       int start = offset(text, e.getRange().getStart());

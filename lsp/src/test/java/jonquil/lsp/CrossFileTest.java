@@ -37,15 +37,17 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * References, rename, document and workspace symbols through the real editor answers
- * ({@link IdeAnswers}), across an open file and the unopened library it uses.
+ * References, rename, document and workspace symbols through the real editor answers ({@link
+ * IdeAnswers}), across an open file and the unopened library it uses.
  */
 class CrossFileTest {
-  static final String LIB = """
+  static final String LIB =
+      """
       mirror m1 { metal silver; aoi 45 deg }
       mirror abc_fold { metal silver; aoi 45 deg }
       """;
-  static final String MAIN = """
+  static final String MAIN =
+      """
       use "lib.jonq"
       source seed { wavelength 1064 nm; power 2 W }
       probe spot
@@ -53,13 +55,14 @@ class CrossFileTest {
         seed -> 100 mm -> m1 -> 20 mm -> spot
       }
       """;
+
   /** 'm1' in MAIN (line 4, columns 20-22) and its declaration in LIB (line 0, columns 7-9). */
   static final Range USE = new Range(new Position(4, 20), new Position(4, 22));
+
   static final Range DECLARATION = new Range(new Position(0, 7), new Position(0, 9));
   static final Position ON_M1 = new Position(4, 21);
 
-  @TempDir
-  Path dir;
+  @TempDir Path dir;
 
   private String libUri;
   private String mainUri;
@@ -82,10 +85,14 @@ class CrossFileTest {
     return h;
   }
 
-  private List<? extends Location> references(LspHarness h, boolean includeDeclaration) throws Exception {
-    ReferenceParams params = new ReferenceParams(new TextDocumentIdentifier(mainUri), ON_M1,
-        new ReferenceContext(includeDeclaration));
-    List<Location> out = new ArrayList<>(h.remote.getTextDocumentService().references(params).get(20, TimeUnit.SECONDS));
+  private List<? extends Location> references(LspHarness h, boolean includeDeclaration)
+      throws Exception {
+    ReferenceParams params =
+        new ReferenceParams(
+            new TextDocumentIdentifier(mainUri), ON_M1, new ReferenceContext(includeDeclaration));
+    List<Location> out =
+        new ArrayList<>(
+            h.remote.getTextDocumentService().references(params).get(20, TimeUnit.SECONDS));
     out.sort(Comparator.comparing(Location::getUri));
     return out;
   }
@@ -94,7 +101,9 @@ class CrossFileTest {
   void referencesReachTheUnopenedLibraryOnlyWithTheDeclaration() throws Exception {
     write(LIB);
     try (LspHarness h = openMain(new ClientCapabilities(), 1)) {
-      assertEquals(List.of(new Location(libUri, DECLARATION), new Location(mainUri, USE)), references(h, true));
+      assertEquals(
+          List.of(new Location(libUri, DECLARATION), new Location(mainUri, USE)),
+          references(h, true));
       assertEquals(List.of(new Location(mainUri, USE)), references(h, false));
     }
   }
@@ -110,8 +119,10 @@ class CrossFileTest {
   }
 
   private WorkspaceEdit rename(LspHarness h, String newName) throws Exception {
-    return h.remote.getTextDocumentService()
-        .rename(new RenameParams(new TextDocumentIdentifier(mainUri), ON_M1, newName)).get(20, TimeUnit.SECONDS);
+    return h.remote
+        .getTextDocumentService()
+        .rename(new RenameParams(new TextDocumentIdentifier(mainUri), ON_M1, newName))
+        .get(20, TimeUnit.SECONDS);
   }
 
   @Test
@@ -122,14 +133,23 @@ class CrossFileTest {
       TextDocumentIdentifier doc = new TextDocumentIdentifier(mainUri);
       // Keywords are not names: 'use', 'train', 'source' cannot be renamed.
       for (Position keyword : List.of(new Position(0, 1), new Position(3, 2), new Position(1, 3))) {
-        assertNull(service.prepareRename(new PrepareRenameParams(doc, keyword)).get(20, TimeUnit.SECONDS),
+        assertNull(
+            service.prepareRename(new PrepareRenameParams(doc, keyword)).get(20, TimeUnit.SECONDS),
             "prepareRename on a keyword at " + keyword);
       }
-      assertEquals(USE, service.prepareRename(new PrepareRenameParams(doc, ON_M1)).get(20, TimeUnit.SECONDS).getFirst());
+      assertEquals(
+          USE,
+          service
+              .prepareRename(new PrepareRenameParams(doc, ON_M1))
+              .get(20, TimeUnit.SECONDS)
+              .getFirst());
 
       WorkspaceEdit edit = rename(h, "m9");
-      // (LSP4J's client fills an absent 'changes' with an empty map, so absent and empty look alike here)
-      assertTrue(edit.getChanges() == null || edit.getChanges().isEmpty(), "documentChanges only: " + edit);
+      // (LSP4J's client fills an absent 'changes' with an empty map, so absent and empty look alike
+      // here)
+      assertTrue(
+          edit.getChanges() == null || edit.getChanges().isEmpty(),
+          "documentChanges only: " + edit);
       Map<String, Integer> versions = new java.util.HashMap<>();
       List<Location> touched = new ArrayList<>();
       for (Either<TextDocumentEdit, ?> change : edit.getDocumentChanges()) {
@@ -146,11 +166,15 @@ class CrossFileTest {
       expectedVersions.put(libUri, null); // the unopened file has none
       assertEquals(expectedVersions, versions);
       touched.sort(Comparator.comparing(Location::getUri));
-      assertEquals(references(h, true), touched, "the rename touches every reference, declaration included");
+      assertEquals(
+          references(h, true), touched, "the rename touches every reference, declaration included");
 
       WorkspaceEdit identity = rename(h, "m1");
-      assertTrue(identity.getChanges() == null || identity.getChanges().isEmpty(), "identity: " + identity);
-      assertTrue(identity.getDocumentChanges() == null || identity.getDocumentChanges().isEmpty(),
+      assertTrue(
+          identity.getChanges() == null || identity.getChanges().isEmpty(),
+          "identity: " + identity);
+      assertTrue(
+          identity.getDocumentChanges() == null || identity.getDocumentChanges().isEmpty(),
           "identity: " + identity);
     }
   }
@@ -162,14 +186,22 @@ class CrossFileTest {
       try (LspHarness h = openMain(caps, 1)) {
         WorkspaceEdit edit = rename(h, "m9");
         assertNull(edit.getDocumentChanges());
-        assertEquals(Map.of(mainUri, List.of(new TextEdit(USE, "m9")), libUri, List.of(new TextEdit(DECLARATION, "m9"))),
+        assertEquals(
+            Map.of(
+                mainUri,
+                List.of(new TextEdit(USE, "m9")),
+                libUri,
+                List.of(new TextEdit(DECLARATION, "m9"))),
             edit.getChanges());
       }
     }
   }
 
-  private List<Either<SymbolInformation, DocumentSymbol>> documentSymbols(LspHarness h) throws Exception {
-    return h.remote.getTextDocumentService().documentSymbol(new DocumentSymbolParams(new TextDocumentIdentifier(mainUri)))
+  private List<Either<SymbolInformation, DocumentSymbol>> documentSymbols(LspHarness h)
+      throws Exception {
+    return h.remote
+        .getTextDocumentService()
+        .documentSymbol(new DocumentSymbolParams(new TextDocumentIdentifier(mainUri)))
         .get(20, TimeUnit.SECONDS);
   }
 
@@ -178,7 +210,8 @@ class CrossFileTest {
   }
 
   private static boolean before(Position a, Position b) {
-    return a.getLine() < b.getLine() || (a.getLine() == b.getLine() && a.getCharacter() < b.getCharacter());
+    return a.getLine() < b.getLine()
+        || (a.getLine() == b.getLine() && a.getCharacter() < b.getCharacter());
   }
 
   /** Checks every node below {@code s} and returns how many there are, s included. */
@@ -188,7 +221,8 @@ class CrossFileTest {
       assertTrue(within(s.getRange(), parent), "a child lies within its parent: " + s);
     }
     int count = 1;
-    for (DocumentSymbol child : s.getChildren() == null ? List.<DocumentSymbol>of() : s.getChildren()) {
+    for (DocumentSymbol child :
+        s.getChildren() == null ? List.<DocumentSymbol>of() : s.getChildren()) {
       count += checkTree(child, s.getRange());
     }
     return count;
@@ -214,18 +248,25 @@ class CrossFileTest {
         treeNames.add(s.getRight().getName());
       }
     }
-    assertTrue(treeNames.containsAll(List.of("seed", "spot", "main")), "top-level symbols: " + treeNames);
+    assertTrue(
+        treeNames.containsAll(List.of("seed", "spot", "main")), "top-level symbols: " + treeNames);
     assertTrue(nested, "some symbol has children");
     try (LspHarness h = openMain(new ClientCapabilities(), 1)) {
       var flat = documentSymbols(h);
-      assertTrue(flat.stream().allMatch(Either::isLeft), "SymbolInformation without the capability: " + flat);
+      assertTrue(
+          flat.stream().allMatch(Either::isLeft),
+          "SymbolInformation without the capability: " + flat);
       assertEquals(nodes, flat.size(), "the flat form lists every node of the tree");
       assertTrue(flat.stream().allMatch(s -> mainUri.equals(s.getLeft().getLocation().getUri())));
     }
   }
 
   private List<WorkspaceSymbol> workspaceSymbols(LspHarness h, String query) throws Exception {
-    var found = h.remote.getWorkspaceService().symbol(new WorkspaceSymbolParams(query)).get(20, TimeUnit.SECONDS);
+    var found =
+        h.remote
+            .getWorkspaceService()
+            .symbol(new WorkspaceSymbolParams(query))
+            .get(20, TimeUnit.SECONDS);
     assertTrue(found.isRight(), "WorkspaceSymbol answers: " + found);
     return new ArrayList<>(found.getRight());
   }
@@ -236,7 +277,8 @@ class CrossFileTest {
     try (LspHarness h = openMain(new ClientCapabilities(), 1)) {
       List<WorkspaceSymbol> found = workspaceSymbols(h, "ab");
       assertEquals(List.of("abc_fold"), found.stream().map(WorkspaceSymbol::getName).toList());
-      assertEquals(new Location(libUri, new Range(new Position(1, 7), new Position(1, 15))),
+      assertEquals(
+          new Location(libUri, new Range(new Position(1, 7), new Position(1, 15))),
           found.get(0).getLocation().getLeft());
     }
   }
@@ -252,9 +294,14 @@ class CrossFileTest {
     try (LspHarness h = openMain(new ClientCapabilities(), 1)) {
       List<WorkspaceSymbol> found = workspaceSymbols(h, "ab_");
       assertEquals(JonquilWorkspaceService.MAX_SYMBOLS, found.size());
-      assertTrue(found.stream().allMatch(s -> s.getName().startsWith("ab_")
-          && libUri.equals(s.getLocation().getLeft().getUri())));
-      assertEquals(1, workspaceSymbols(h, "ab_" + (declared - 1)).size(), "every declaration is searchable");
+      assertTrue(
+          found.stream()
+              .allMatch(
+                  s ->
+                      s.getName().startsWith("ab_")
+                          && libUri.equals(s.getLocation().getLeft().getUri())));
+      assertEquals(
+          1, workspaceSymbols(h, "ab_" + (declared - 1)).size(), "every declaration is searchable");
     }
   }
 }

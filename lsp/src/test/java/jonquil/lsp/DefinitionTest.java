@@ -21,10 +21,14 @@ import org.eclipse.lsp4j.jsonrpc.messages.Either;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-/** Go to definition into a used file that is not open: a LocationLink only for clients that take links, else a Location. */
+/**
+ * Go to definition into a used file that is not open: a LocationLink only for clients that take
+ * links, else a Location.
+ */
 class DefinitionTest {
   static final String LIB = "mirror m1 { metal silver; aoi 45 deg }\n";
-  static final String MAIN = """
+  static final String MAIN =
+      """
       use "lib.jonq"
       source seed { wavelength 1064 nm; power 2 W }
       probe spot
@@ -32,12 +36,13 @@ class DefinitionTest {
         seed -> 100 mm -> m1 -> 20 mm -> spot
       }
       """;
+
   /** Where 'm1' is in MAIN: line 4, UTF-16 columns 20 to 22. */
   static final Range ORIGIN = new Range(new Position(4, 20), new Position(4, 22));
+
   static final Range TARGET = new Range(new Position(0, 7), new Position(0, 9));
 
-  @TempDir
-  Path dir;
+  @TempDir Path dir;
 
   private String libUri;
   private String mainUri;
@@ -62,10 +67,12 @@ class DefinitionTest {
     return caps;
   }
 
-  private Either<List<? extends Location>, List<? extends LocationLink>> definition(LspHarness h, Position at)
-      throws Exception {
-    return h.remote.getTextDocumentService()
-        .definition(new DefinitionParams(new TextDocumentIdentifier(mainUri), at)).get(20, TimeUnit.SECONDS);
+  private Either<List<? extends Location>, List<? extends LocationLink>> definition(
+      LspHarness h, Position at) throws Exception {
+    return h.remote
+        .getTextDocumentService()
+        .definition(new DefinitionParams(new TextDocumentIdentifier(mainUri), at))
+        .get(20, TimeUnit.SECONDS);
   }
 
   @Test

@@ -1,22 +1,19 @@
 package jonquil.lsp;
 
-import jonquil.ide.Location;
-import jonquil.ide.SymbolInfo;
-
-import jonquil.ide.RenameResult;
-
-import jonquil.ide.HoverInfo;
-
 import java.nio.file.Path;
+import java.util.List;
+import java.util.Optional;
+import jonquil.Result;
 import jonquil.ide.CodeActionInfo;
 import jonquil.ide.CompletionItemInfo;
 import jonquil.ide.DocumentLinkInfo;
 import jonquil.ide.FoldingRangeInfo;
+import jonquil.ide.HoverInfo;
 import jonquil.ide.InlayHint;
+import jonquil.ide.Location;
+import jonquil.ide.RenameResult;
 import jonquil.ide.SemanticToken;
-import java.util.List;
-import java.util.Optional;
-import jonquil.Result;
+import jonquil.ide.SymbolInfo;
 import jonquil.source.TextRange;
 
 /** Editor answers that forward to another, so a test can override the one answer it is about. */
@@ -38,7 +35,8 @@ class Delegating implements EditorAnswers {
   }
 
   @Override
-  public List<Location> references(Result result, Path file, int offset, boolean includeDeclaration) {
+  public List<Location> references(
+      Result result, Path file, int offset, boolean includeDeclaration) {
     return to.references(result, file, offset, includeDeclaration);
   }
 
@@ -98,7 +96,8 @@ class Delegating implements EditorAnswers {
   }
 
   @Override
-  public List<FileSymbol> workspaceSymbols(java.util.Collection<jonquil.ide.FileIndex> indexed, String query) {
+  public List<FileSymbol> workspaceSymbols(
+      java.util.Collection<jonquil.ide.FileIndex> indexed, String query) {
     return to.workspaceSymbols(indexed, query);
   }
 }

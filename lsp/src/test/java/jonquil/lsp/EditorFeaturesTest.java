@@ -63,7 +63,8 @@ class EditorFeaturesTest {
   private static final long SECONDS = 20;
 
   /** A bench being written, from the compiler's completion tests. */
-  static final String BENCH = """
+  static final String BENCH =
+      """
       source seed { wavelength 1064 nm; power 2 W }
       material slab_glass = index 1.5
       splitter  pbs { polarizing }
@@ -77,7 +78,8 @@ class EditorFeaturesTest {
       """;
 
   /** A bench that checks clean, from the compiler's code action tests. */
-  static final String CLEAN = """
+  static final String CLEAN =
+      """
       source seed { wavelength 1064 nm; power 2 W }
       splitter pbs { polarizing }
       mirror m1 { metal silver; aoi 45 deg }
@@ -90,8 +92,7 @@ class EditorFeaturesTest {
       }
       """;
 
-  @TempDir
-  Path dir;
+  @TempDir Path dir;
 
   private String write(String name, String text) throws Exception {
     Files.writeString(dir.resolve(".jonquil-root"), "");
@@ -107,14 +108,21 @@ class EditorFeaturesTest {
     return caps.getTextDocument();
   }
 
-  /** A client that resolves completion documentation lazily and takes literal, preferred code actions. */
+  /**
+   * A client that resolves completion documentation lazily and takes literal, preferred code
+   * actions.
+   */
   private static ClientCapabilities modernClient(boolean documentChanges) {
     ClientCapabilities caps = new ClientCapabilities();
     CompletionItemCapabilities item = new CompletionItemCapabilities(false);
-    item.setResolveSupport(new CompletionItemResolveSupportCapabilities(List.of("documentation", "detail")));
+    item.setResolveSupport(
+        new CompletionItemResolveSupportCapabilities(List.of("documentation", "detail")));
     textDocument(caps).setCompletion(new CompletionCapabilities(item));
-    CodeActionCapabilities actions = new CodeActionCapabilities(new CodeActionLiteralSupportCapabilities(
-        new CodeActionKindCapabilities(List.of(CodeActionKind.QuickFix))), false);
+    CodeActionCapabilities actions =
+        new CodeActionCapabilities(
+            new CodeActionLiteralSupportCapabilities(
+                new CodeActionKindCapabilities(List.of(CodeActionKind.QuickFix))),
+            false);
     actions.setIsPreferredSupport(true);
     textDocument(caps).setCodeAction(actions);
     FoldingRangeCapabilities folding = new FoldingRangeCapabilities();
@@ -126,10 +134,16 @@ class EditorFeaturesTest {
     return caps;
   }
 
-  private static List<CompletionItem> complete(LspHarness h, String uri, String text, int offset) throws Exception {
-    return h.remote.getTextDocumentService()
-        .completion(new CompletionParams(new TextDocumentIdentifier(uri), ClientText.position(text, offset)))
-        .get(SECONDS, TimeUnit.SECONDS).getRight().getItems();
+  private static List<CompletionItem> complete(LspHarness h, String uri, String text, int offset)
+      throws Exception {
+    return h.remote
+        .getTextDocumentService()
+        .completion(
+            new CompletionParams(
+                new TextDocumentIdentifier(uri), ClientText.position(text, offset)))
+        .get(SECONDS, TimeUnit.SECONDS)
+        .getRight()
+        .getItems();
   }
 
   private static List<String> labels(List<CompletionItem> items, CompletionItemKind kind) {
@@ -142,26 +156,40 @@ class EditorFeaturesTest {
       ServerCapabilities caps = h.initialize(dir, modernClient(false)).getCapabilities();
       assertTrue(caps.getCompletionProvider().getResolveProvider());
       assertEquals(List.of("."), caps.getCompletionProvider().getTriggerCharacters());
-      assertEquals(Convert.TOKEN_TYPES, caps.getSemanticTokensProvider().getLegend().getTokenTypes());
-      assertEquals(List.of("declaration"), caps.getSemanticTokensProvider().getLegend().getTokenModifiers());
+      assertEquals(
+          Convert.TOKEN_TYPES, caps.getSemanticTokensProvider().getLegend().getTokenTypes());
+      assertEquals(
+          List.of("declaration"), caps.getSemanticTokensProvider().getLegend().getTokenModifiers());
       assertTrue(caps.getSemanticTokensProvider().getFull().getRight().getDelta());
       assertTrue(caps.getInlayHintProvider().getRight().getResolveProvider());
       assertTrue(caps.getFoldingRangeProvider().getLeft());
       assertNotNull(caps.getDocumentLinkProvider());
-      assertEquals(List.of(CodeActionKind.QuickFix), caps.getCodeActionProvider().getRight().getCodeActionKinds());
+      assertEquals(
+          List.of(CodeActionKind.QuickFix),
+          caps.getCodeActionProvider().getRight().getCodeActionKinds());
     }
     try (LspHarness h = new LspHarness(new IdeAnswers())) {
       ServerCapabilities caps = h.initialize(dir).getCapabilities();
-      assertFalse(caps.getCodeActionProvider().getLeft(), "no code actions for a client without literal ones");
+      assertFalse(
+          caps.getCodeActionProvider().getLeft(),
+          "no code actions for a client without literal ones");
     }
     try (LspHarness h = new LspHarness(new IdeAnswers())) {
       ClientCapabilities client = new ClientCapabilities();
-      org.eclipse.lsp4j.SemanticTokensCapabilities tokens = new org.eclipse.lsp4j.SemanticTokensCapabilities(false);
+      org.eclipse.lsp4j.SemanticTokensCapabilities tokens =
+          new org.eclipse.lsp4j.SemanticTokensCapabilities(false);
       tokens.setTokenTypes(List.of("keyword", "unit"));
       textDocument(client).setSemanticTokens(tokens);
-      List<String> legend = h.initialize(dir, client).getCapabilities().getSemanticTokensProvider().getLegend()
-          .getTokenTypes();
-      assertEquals("unit", legend.get(legend.size() - 1), "a client that knows a 'unit' type gets units as such");
+      List<String> legend =
+          h.initialize(dir, client)
+              .getCapabilities()
+              .getSemanticTokensProvider()
+              .getLegend()
+              .getTokenTypes();
+      assertEquals(
+          "unit",
+          legend.get(legend.size() - 1),
+          "a client that knows a 'unit' type gets units as such");
     }
   }
 
@@ -172,20 +200,28 @@ class EditorFeaturesTest {
     try (LspHarness h = new LspHarness(new IdeAnswers())) {
       h.initialize(dir, modernClient(false));
       h.open(uri, 1, text);
-      List<CompletionItem> items = complete(h, uri, text, text.indexOf("-> 50 mm -> ") + "-> 50 mm -> ".length());
-      assertEquals(List.of("d1", "l1", "pbs", "seed", "spot"), labels(items, CompletionItemKind.Variable));
-      assertEquals(List.of("pbs.through", "pbs.reflected"), labels(items, CompletionItemKind.Field));
-      assertTrue(items.stream().allMatch(i -> i.getInsertTextFormat() == InsertTextFormat.PlainText));
+      List<CompletionItem> items =
+          complete(h, uri, text, text.indexOf("-> 50 mm -> ") + "-> 50 mm -> ".length());
+      assertEquals(
+          List.of("d1", "l1", "pbs", "seed", "spot"), labels(items, CompletionItemKind.Variable));
+      assertEquals(
+          List.of("pbs.through", "pbs.reflected"), labels(items, CompletionItemKind.Field));
+      assertTrue(
+          items.stream().allMatch(i -> i.getInsertTextFormat() == InsertTextFormat.PlainText));
 
       String inLens = text.replace("focal 100 mm }", "focal 100 mm\n  \n}");
       h.changeAll(uri, 2, inLens);
       List<CompletionItem> params = complete(h, uri, inLens, inLens.indexOf("mm\n  \n}") + 5);
       assertTrue(labels(params, CompletionItemKind.Property).contains("focal"), params.toString());
-      CompletionItem focal = params.stream().filter(i -> i.getLabel().equals("focal")).findFirst().orElseThrow();
+      CompletionItem focal =
+          params.stream().filter(i -> i.getLabel().equals("focal")).findFirst().orElseThrow();
       assertNull(focal.getDocumentation(), "documentation waits for resolve");
       assertEquals("required parameter of lens", focal.getDetail());
-      CompletionItem resolved = h.remote.getTextDocumentService().resolveCompletionItem(focal)
-          .get(SECONDS, TimeUnit.SECONDS);
+      CompletionItem resolved =
+          h.remote
+              .getTextDocumentService()
+              .resolveCompletionItem(focal)
+              .get(SECONDS, TimeUnit.SECONDS);
       assertEquals("focal length (negative: diverging)", resolved.getDocumentation().getLeft());
     }
   }
@@ -197,8 +233,11 @@ class EditorFeaturesTest {
     try (LspHarness h = new LspHarness(new IdeAnswers())) {
       h.initialize(dir);
       h.open(uri, 1, text);
-      CompletionItem focal = complete(h, uri, text, text.indexOf("mm\n  \n}") + 5).stream()
-          .filter(i -> i.getLabel().equals("focal")).findFirst().orElseThrow();
+      CompletionItem focal =
+          complete(h, uri, text, text.indexOf("mm\n  \n}") + 5).stream()
+              .filter(i -> i.getLabel().equals("focal"))
+              .findFirst()
+              .orElseThrow();
       assertEquals("focal length (negative: diverging)", focal.getDocumentation().getLeft());
       assertNull(focal.getData());
     }
@@ -208,23 +247,30 @@ class EditorFeaturesTest {
   void completionReadsTheBufferEvenBeforeItsCheck() throws Exception {
     String text = BENCH.replace("-> 50 mm -> spot", "-> 50 mm -> ");
     String uri = write("stale.jonq", BENCH);
-    // The debounce never ends within the test and nothing runs early: no check runs, so no snapshot saw this text.
+    // The debounce never ends within the test and nothing runs early: no check runs, so no snapshot
+    // saw this text.
     try (LspHarness h = new LspHarness(new IdeAnswers(), Duration.ofMinutes(5), false)) {
       h.initialize(dir, modernClient(false));
       h.open(uri, 1, text);
       int cursor = text.indexOf("-> 50 mm -> ") + "-> 50 mm -> ".length();
-      assertEquals(List.of("d1", "l1", "pbs", "seed", "spot"),
+      assertEquals(
+          List.of("d1", "l1", "pbs", "seed", "spot"),
           labels(complete(h, uri, text, cursor), CompletionItemKind.Variable));
 
       String more = "probe late\n" + text;
       h.changeAll(uri, 2, more);
-      assertEquals(List.of("d1", "l1", "late", "pbs", "seed", "spot"),
-          labels(complete(h, uri, more, cursor + "probe late\n".length()), CompletionItemKind.Variable));
+      assertEquals(
+          List.of("d1", "l1", "late", "pbs", "seed", "spot"),
+          labels(
+              complete(h, uri, more, cursor + "probe late\n".length()),
+              CompletionItemKind.Variable));
       assertTrue(h.client.publishedFor(uri).isEmpty(), "answered without the debounced check");
     }
   }
 
-  /** One decoded token: absolute line and UTF-16 column, length, type name, and whether it declares. */
+  /**
+   * One decoded token: absolute line and UTF-16 column, length, type name, and whether it declares.
+   */
   record Token(int line, int character, int length, String type, boolean declaration) {}
 
   static List<Token> decode(List<Integer> data, List<String> legend) {
@@ -234,7 +280,13 @@ class EditorFeaturesTest {
     for (int i = 0; i + 4 < data.size(); i += 5) {
       character = data.get(i) == 0 ? character + data.get(i + 1) : data.get(i + 1);
       line += data.get(i);
-      out.add(new Token(line, character, data.get(i + 2), legend.get(data.get(i + 3)), (data.get(i + 4) & 1) != 0));
+      out.add(
+          new Token(
+              line,
+              character,
+              data.get(i + 2),
+              legend.get(data.get(i + 3)),
+              (data.get(i + 4) & 1) != 0));
     }
     return out;
   }
@@ -255,40 +307,63 @@ class EditorFeaturesTest {
     String text = "// é😀\nmirror m1 { reflectance 99 % }\n/* 😀 */ probe p\n";
     String uri = write("tokens.jonq", text);
     try (LspHarness h = new LspHarness(new IdeAnswers())) {
-      List<String> legend = h.initialize(dir).getCapabilities().getSemanticTokensProvider().getLegend()
-          .getTokenTypes();
+      List<String> legend =
+          h.initialize(dir)
+              .getCapabilities()
+              .getSemanticTokensProvider()
+              .getLegend()
+              .getTokenTypes();
       h.open(uri, 1, text);
       TextDocumentIdentifier doc = new TextDocumentIdentifier(uri);
-      SemanticTokens full = h.remote.getTextDocumentService().semanticTokensFull(new SemanticTokensParams(doc))
-          .get(SECONDS, TimeUnit.SECONDS);
-      assertEquals(List.of(
-          new Token(0, 0, 6, "comment", false),
-          new Token(1, 0, 6, "type", false),
-          new Token(1, 7, 2, "variable", true),
-          new Token(1, 12, 11, "property", false),
-          new Token(1, 24, 2, "number", false),
-          new Token(1, 27, 1, "type", false), // the unit '%': "type" for a client that knows no "unit" type
-          new Token(2, 0, 8, "comment", false),
-          new Token(2, 9, 5, "type", false),
-          new Token(2, 15, 1, "variable", true)), decode(full.getData(), legend));
+      SemanticTokens full =
+          h.remote
+              .getTextDocumentService()
+              .semanticTokensFull(new SemanticTokensParams(doc))
+              .get(SECONDS, TimeUnit.SECONDS);
+      assertEquals(
+          List.of(
+              new Token(0, 0, 6, "comment", false),
+              new Token(1, 0, 6, "type", false),
+              new Token(1, 7, 2, "variable", true),
+              new Token(1, 12, 11, "property", false),
+              new Token(1, 24, 2, "number", false),
+              new Token(
+                  1, 27, 1, "type",
+                  false), // the unit '%': "type" for a client that knows no "unit" type
+              new Token(2, 0, 8, "comment", false),
+              new Token(2, 9, 5, "type", false),
+              new Token(2, 15, 1, "variable", true)),
+          decode(full.getData(), legend));
       assertNotNull(full.getResultId());
 
       String renamed = text.replace("m1", "mirror_one");
       h.changeAll(uri, 2, renamed);
-      var delta = h.remote.getTextDocumentService().semanticTokensFullDelta(
-          new SemanticTokensDeltaParams(doc, full.getResultId())).get(SECONDS, TimeUnit.SECONDS);
+      var delta =
+          h.remote
+              .getTextDocumentService()
+              .semanticTokensFullDelta(new SemanticTokensDeltaParams(doc, full.getResultId()))
+              .get(SECONDS, TimeUnit.SECONDS);
       assertTrue(delta.isRight(), "a delta against the result the client holds");
       SemanticTokensDelta d = delta.getRight();
       assertEquals(1, d.getEdits().size());
       List<Integer> patched = applyDelta(full.getData(), d.getEdits());
-      SemanticTokens again = h.remote.getTextDocumentService().semanticTokensFull(new SemanticTokensParams(doc))
-          .get(SECONDS, TimeUnit.SECONDS);
+      SemanticTokens again =
+          h.remote
+              .getTextDocumentService()
+              .semanticTokensFull(new SemanticTokensParams(doc))
+              .get(SECONDS, TimeUnit.SECONDS);
       assertEquals(again.getData(), patched);
       assertEquals(new Token(1, 7, 10, "variable", true), decode(patched, legend).get(2));
 
-      var unknown = h.remote.getTextDocumentService().semanticTokensFullDelta(
-          new SemanticTokensDeltaParams(doc, "no-such-result")).get(SECONDS, TimeUnit.SECONDS);
-      assertEquals(again.getData(), unknown.getLeft().getData(), "an unknown previous result gets the full tokens");
+      var unknown =
+          h.remote
+              .getTextDocumentService()
+              .semanticTokensFullDelta(new SemanticTokensDeltaParams(doc, "no-such-result"))
+              .get(SECONDS, TimeUnit.SECONDS);
+      assertEquals(
+          again.getData(),
+          unknown.getLeft().getData(),
+          "an unknown previous result gets the full tokens");
     }
   }
 
@@ -300,23 +375,45 @@ class EditorFeaturesTest {
       h.initialize(dir);
       h.open(uri, 1, text);
       TextDocumentIdentifier doc = new TextDocumentIdentifier(uri);
-      List<InlayHint> all = h.remote.getTextDocumentService().inlayHint(new InlayHintParams(doc,
-          new Range(new Position(0, 0), new Position(9, 0)))).get(SECONDS, TimeUnit.SECONDS);
-      assertEquals(List.of(new Position(5, 6), new Position(5, 29), new Position(5, 44), new Position(6, 14),
-          new Position(6, 29)), all.stream().map(InlayHint::getPosition).toList());
+      List<InlayHint> all =
+          h.remote
+              .getTextDocumentService()
+              .inlayHint(
+                  new InlayHintParams(doc, new Range(new Position(0, 0), new Position(9, 0))))
+              .get(SECONDS, TimeUnit.SECONDS);
+      assertEquals(
+          List.of(
+              new Position(5, 6),
+              new Position(5, 29),
+              new Position(5, 44),
+              new Position(6, 14),
+              new Position(6, 29)),
+          all.stream().map(InlayHint::getPosition).toList());
       assertEquals(" 10 mW", all.get(0).getLabel().getLeft());
       assertEquals(" 5 mW", all.get(4).getLabel().getLeft());
-      assertTrue(all.get(0).getTooltip().getLeft().startsWith("10 mW leaving 'seed.out'"), all.get(0).toString());
+      assertTrue(
+          all.get(0).getTooltip().getLeft().startsWith("10 mW leaving 'seed.out'"),
+          all.get(0).toString());
 
-      List<InlayHint> branch = h.remote.getTextDocumentService().inlayHint(new InlayHintParams(doc,
-          new Range(new Position(6, 0), new Position(6, 30)))).get(SECONDS, TimeUnit.SECONDS);
+      List<InlayHint> branch =
+          h.remote
+              .getTextDocumentService()
+              .inlayHint(
+                  new InlayHintParams(doc, new Range(new Position(6, 0), new Position(6, 30))))
+              .get(SECONDS, TimeUnit.SECONDS);
       assertEquals(all.subList(3, 5), branch);
-      assertEquals(List.of(), h.remote.getTextDocumentService().inlayHint(new InlayHintParams(doc,
-          new Range(new Position(0, 0), new Position(4, 0)))).get(SECONDS, TimeUnit.SECONDS));
+      assertEquals(
+          List.of(),
+          h.remote
+              .getTextDocumentService()
+              .inlayHint(
+                  new InlayHintParams(doc, new Range(new Position(0, 0), new Position(4, 0))))
+              .get(SECONDS, TimeUnit.SECONDS));
     }
   }
 
-  static final String FOLDS = """
+  static final String FOLDS =
+      """
       // bench notes
       // second line
       source seed {
@@ -332,11 +429,14 @@ class EditorFeaturesTest {
       """;
 
   private static List<FoldingRange> fold(LspHarness h, String uri) throws Exception {
-    return h.remote.getTextDocumentService().foldingRange(new FoldingRangeRequestParams(new TextDocumentIdentifier(uri)))
+    return h.remote
+        .getTextDocumentService()
+        .foldingRange(new FoldingRangeRequestParams(new TextDocumentIdentifier(uri)))
         .get(SECONDS, TimeUnit.SECONDS);
   }
 
-  private static FoldingRange range(int start, int end, String kind, Integer startChar, Integer endChar) {
+  private static FoldingRange range(
+      int start, int end, String kind, Integer startChar, Integer endChar) {
     FoldingRange r = new FoldingRange(start, end);
     r.setKind(kind);
     r.setStartCharacter(startChar);
@@ -350,20 +450,24 @@ class EditorFeaturesTest {
     try (LspHarness h = new LspHarness(new IdeAnswers())) {
       h.initialize(dir, modernClient(false));
       h.open(uri, 1, FOLDS);
-      assertEquals(List.of(
-          range(0, 1, FoldingRangeKind.Comment, null, null),
-          range(2, 4, FoldingRangeKind.Region, null, null),
-          range(7, 8, FoldingRangeKind.Comment, null, null),
-          range(9, 10, FoldingRangeKind.Region, null, null)), fold(h, uri));
+      assertEquals(
+          List.of(
+              range(0, 1, FoldingRangeKind.Comment, null, null),
+              range(2, 4, FoldingRangeKind.Region, null, null),
+              range(7, 8, FoldingRangeKind.Comment, null, null),
+              range(9, 10, FoldingRangeKind.Region, null, null)),
+          fold(h, uri));
     }
     try (LspHarness h = new LspHarness(new IdeAnswers())) {
       h.initialize(dir);
       h.open(uri, 1, FOLDS);
-      assertEquals(List.of(
-          range(0, 1, FoldingRangeKind.Comment, 0, 14),
-          range(2, 5, FoldingRangeKind.Region, 0, 1),
-          range(7, 8, FoldingRangeKind.Comment, 0, 13),
-          range(9, 11, FoldingRangeKind.Region, 0, 1)), fold(h, uri));
+      assertEquals(
+          List.of(
+              range(0, 1, FoldingRangeKind.Comment, 0, 14),
+              range(2, 5, FoldingRangeKind.Region, 0, 1),
+              range(7, 8, FoldingRangeKind.Comment, 0, 13),
+              range(9, 11, FoldingRangeKind.Region, 0, 1)),
+          fold(h, uri));
     }
   }
 
@@ -375,23 +479,38 @@ class EditorFeaturesTest {
     try (LspHarness h = new LspHarness(new IdeAnswers())) {
       h.initialize(dir);
       h.open(uri, 1, main);
-      List<DocumentLink> links = h.remote.getTextDocumentService()
-          .documentLink(new DocumentLinkParams(new TextDocumentIdentifier(uri))).get(SECONDS, TimeUnit.SECONDS);
-      assertEquals(List.of(new DocumentLink(new Range(new Position(0, 5), new Position(0, 15)), partsUri)), links);
+      List<DocumentLink> links =
+          h.remote
+              .getTextDocumentService()
+              .documentLink(new DocumentLinkParams(new TextDocumentIdentifier(uri)))
+              .get(SECONDS, TimeUnit.SECONDS);
+      assertEquals(
+          List.of(new DocumentLink(new Range(new Position(0, 5), new Position(0, 15)), partsUri)),
+          links);
     }
   }
 
-  /** The quick fixes offered for one published diagnostic, asked as an editor asks: its range and itself. */
-  private static List<CodeAction> actions(LspHarness h, String uri, Diagnostic d, List<String> only) throws Exception {
+  /**
+   * The quick fixes offered for one published diagnostic, asked as an editor asks: its range and
+   * itself.
+   */
+  private static List<CodeAction> actions(LspHarness h, String uri, Diagnostic d, List<String> only)
+      throws Exception {
     CodeActionContext context = new CodeActionContext(List.of(d));
     context.setOnly(only);
-    return h.remote.getTextDocumentService()
+    return h
+        .remote
+        .getTextDocumentService()
         .codeAction(new CodeActionParams(new TextDocumentIdentifier(uri), d.getRange(), context))
-        .get(SECONDS, TimeUnit.SECONDS).stream().map(e -> e.getRight()).toList();
+        .get(SECONDS, TimeUnit.SECONDS)
+        .stream()
+        .map(e -> e.getRight())
+        .toList();
   }
 
   private static Diagnostic only(PublishDiagnosticsParams p, String code) {
-    List<Diagnostic> found = p.getDiagnostics().stream().filter(d -> code.equals(d.getCode().getLeft())).toList();
+    List<Diagnostic> found =
+        p.getDiagnostics().stream().filter(d -> code.equals(d.getCode().getLeft())).toList();
     assertEquals(1, found.size(), p.toString());
     return found.get(0);
   }
@@ -403,10 +522,15 @@ class EditorFeaturesTest {
     try (LspHarness h = new LspHarness(new IdeAnswers())) {
       h.initialize(dir, modernClient(false));
       h.open(uri, 1, text);
-      Diagnostic d = only(h.client.await(uri, p -> Integer.valueOf(1).equals(p.getVersion())), "J202");
-      assertEquals(List.of(), actions(h, uri, d, List.of(CodeActionKind.Refactor)), "only quick fixes are offered");
+      Diagnostic d =
+          only(h.client.await(uri, p -> Integer.valueOf(1).equals(p.getVersion())), "J202");
+      assertEquals(
+          List.of(),
+          actions(h, uri, d, List.of(CodeActionKind.Refactor)),
+          "only quick fixes are offered");
       List<CodeAction> fixes = actions(h, uri, d, List.of(CodeActionKind.QuickFix));
-      assertEquals(List.of("change 'm11' to 'm1'"), fixes.stream().map(CodeAction::getTitle).toList());
+      assertEquals(
+          List.of("change 'm11' to 'm1'"), fixes.stream().map(CodeAction::getTitle).toList());
       CodeAction fix = fixes.get(0);
       assertEquals(CodeActionKind.QuickFix, fix.getKind());
       assertTrue(fix.getIsPreferred());
@@ -416,8 +540,11 @@ class EditorFeaturesTest {
       String fixed = ClientText.apply(text, edit.getChanges().get(uri));
       assertEquals(CLEAN, fixed);
       h.changeAll(uri, 2, fixed);
-      PublishDiagnosticsParams after = h.client.await(uri, p -> Integer.valueOf(2).equals(p.getVersion()));
-      assertTrue(after.getDiagnostics().stream().noneMatch(x -> "J202".equals(x.getCode().getLeft())), after.toString());
+      PublishDiagnosticsParams after =
+          h.client.await(uri, p -> Integer.valueOf(2).equals(p.getVersion()));
+      assertTrue(
+          after.getDiagnostics().stream().noneMatch(x -> "J202".equals(x.getCode().getLeft())),
+          after.toString());
     }
   }
 
@@ -428,19 +555,28 @@ class EditorFeaturesTest {
     try (LspHarness h = new LspHarness(new IdeAnswers())) {
       h.initialize(dir, modernClient(true));
       h.open(uri, 7, text);
-      Diagnostic d = only(h.client.await(uri, p -> Integer.valueOf(7).equals(p.getVersion())), "J510");
+      Diagnostic d =
+          only(h.client.await(uri, p -> Integer.valueOf(7).equals(p.getVersion())), "J510");
       List<CodeAction> fixes = actions(h, uri, d, null);
-      assertEquals(List.of("add a dump for the stray beam"), fixes.stream().map(CodeAction::getTitle).toList());
-      List<TextDocumentEdit> changes = fixes.get(0).getEdit().getDocumentChanges().stream()
-          .map(e -> e.getLeft()).toList();
+      assertEquals(
+          List.of("add a dump for the stray beam"),
+          fixes.stream().map(CodeAction::getTitle).toList());
+      List<TextDocumentEdit> changes =
+          fixes.get(0).getEdit().getDocumentChanges().stream().map(e -> e.getLeft()).toList();
       assertEquals(1, changes.size());
       assertEquals(uri, changes.get(0).getTextDocument().getUri());
-      assertEquals(7, changes.get(0).getTextDocument().getVersion(), "the version the fix was computed from");
+      assertEquals(
+          7,
+          changes.get(0).getTextDocument().getVersion(),
+          "the version the fix was computed from");
       List<TextEdit> edits = changes.get(0).getEdits();
       String fixed = ClientText.apply(text, edits);
       h.changeAll(uri, 8, fixed);
-      PublishDiagnosticsParams after = h.client.await(uri, p -> Integer.valueOf(8).equals(p.getVersion()));
-      assertTrue(after.getDiagnostics().stream().noneMatch(x -> "J510".equals(x.getCode().getLeft())), fixed);
+      PublishDiagnosticsParams after =
+          h.client.await(uri, p -> Integer.valueOf(8).equals(p.getVersion()));
+      assertTrue(
+          after.getDiagnostics().stream().noneMatch(x -> "J510".equals(x.getCode().getLeft())),
+          fixed);
       assertTrue(fixed.contains("pbs.reflected -> 50 mm -> reflected_dump"), fixed);
     }
   }

@@ -20,10 +20,12 @@ import org.eclipse.lsp4j.TextDocumentIdentifier;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-/** Hover honours the client's contentFormat: Markdown when it takes Markdown, plain text (Markdown stripped) otherwise. */
+/**
+ * Hover honours the client's contentFormat: Markdown when it takes Markdown, plain text (Markdown
+ * stripped) otherwise.
+ */
 class HoverFormatTest {
-  @TempDir
-  Path dir;
+  @TempDir Path dir;
 
   /** A client whose hover takes these formats, in order of preference. */
   static ClientCapabilities hoverClient(String... formats) {
@@ -46,8 +48,10 @@ class HoverFormatTest {
       h.open(uri, 1, EditorFeaturesTest.CLEAN);
       h.client.await(uri, p -> Integer.valueOf(1).equals(p.getVersion()));
       int line = 2; // "mirror m1 { ... }"
-      return h.remote.getTextDocumentService()
-          .hover(new HoverParams(new TextDocumentIdentifier(uri), new Position(line, 8))).get(20, TimeUnit.SECONDS);
+      return h.remote
+          .getTextDocumentService()
+          .hover(new HoverParams(new TextDocumentIdentifier(uri), new Position(line, 8)))
+          .get(20, TimeUnit.SECONDS);
     }
   }
 
@@ -63,7 +67,8 @@ class HoverFormatTest {
 
   @Test
   void plainTextWhenTheClientTakesOnlyPlainTextOrSaysNothing() throws Exception {
-    for (ClientCapabilities caps : List.of(hoverClient(MarkupKind.PLAINTEXT), new ClientCapabilities())) {
+    for (ClientCapabilities caps :
+        List.of(hoverClient(MarkupKind.PLAINTEXT), new ClientCapabilities())) {
       Hover hover = hoverOnMirror(caps);
       assertNotNull(hover);
       assertEquals(MarkupKind.PLAINTEXT, hover.getContents().getRight().getKind());
@@ -78,9 +83,21 @@ class HoverFormatTest {
 
   @Test
   void strippingKeepsTheWordsAndTheTableCells() {
-    String md = "## Title\n\n**mirror** `m_1` — see [docs](https://x.test)\n\n```jonquil\naoi 45 deg\n```\n\n"
-        + "| | power |\n|---|---|\n| in `out` | 1 W \\| 2 W |\n";
-    assertEquals("Title\n\nmirror m_1 — see docs (https://x.test)\n\naoi 45 deg\n\n| power\nin out | 1 W | 2 W",
+    String md =
+        "## Title\n\n"
+            + "**mirror** `m_1` — see [docs](https://x.test)\n\n"
+            + "```jonquil\n"
+            + "aoi 45 deg\n"
+            + "```\n\n"
+            + "| | power |\n"
+            + "|---|---|\n"
+            + "| in `out` | 1 W \\| 2 W |\n";
+    assertEquals(
+        "Title\n\n"
+            + "mirror m_1 — see docs (https://x.test)\n\n"
+            + "aoi 45 deg\n\n"
+            + "| power\n"
+            + "in out | 1 W | 2 W",
         PlainMarkdown.strip(md));
   }
 }

@@ -17,9 +17,9 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * Hover through the real server, at each kind of node, equals the golden Markdown the
- * compiler's HoverTest keeps (compiler/src/test/resources/ide/hover/): the same spec files,
- * the same cursor, and the hover's range converted back to the text it covers.
+ * Hover through the real server, at each kind of node, equals the golden Markdown the compiler's
+ * HoverTest keeps (compiler/src/test/resources/ide/hover/): the same spec files, the same cursor,
+ * and the hover's range converted back to the text it covers.
  */
 class HoverGoldenTest {
   private static final Path IDE = ParityTest.REPO.resolve("compiler/src/test/resources/ide");
@@ -27,19 +27,19 @@ class HoverGoldenTest {
   /** A golden file, the spec it hovers in, and the cursor: before the n-th occurrence of a word. */
   private record Case(String golden, String spec, String word, int nth) {}
 
-  private static final List<Case> CASES = List.of(
-      new Case("element.md", "bench.jonq", "m1", 1),
-      new Case("window.md", "bench.jonq", "w1", 0),
-      new Case("waveplate.md", "bench.jonq", "qwp", 1),
-      new Case("source.md", "bench.jonq", "seed", 0),
-      new Case("material-declared.md", "bench.jonq", "slab_glass", 1),
-      new Case("material-catalog.md", "bench.jonq", "silver", 0),
-      new Case("quantity.md", "bench.jonq", "5 kW/cm2", 0),
-      new Case("requirement.md", "bench.jonq", "power at spot >= 1.95", 0),
-      new Case("interface.md", "interface.jonq", "$0", 0));
+  private static final List<Case> CASES =
+      List.of(
+          new Case("element.md", "bench.jonq", "m1", 1),
+          new Case("window.md", "bench.jonq", "w1", 0),
+          new Case("waveplate.md", "bench.jonq", "qwp", 1),
+          new Case("source.md", "bench.jonq", "seed", 0),
+          new Case("material-declared.md", "bench.jonq", "slab_glass", 1),
+          new Case("material-catalog.md", "bench.jonq", "silver", 0),
+          new Case("quantity.md", "bench.jonq", "5 kW/cm2", 0),
+          new Case("requirement.md", "bench.jonq", "power at spot >= 1.95", 0),
+          new Case("interface.md", "interface.jonq", "$0", 0));
 
-  @TempDir
-  Path dir;
+  @TempDir Path dir;
 
   @Test
   void hoverAtEachKindOfNodeEqualsItsGoldenMarkdown() throws Exception {
@@ -59,13 +59,20 @@ class HoverGoldenTest {
         String uri = file.toUri().toString();
         h.open(uri, 1, text);
         Position cursor = position(text, at);
-        Hover hover = h.remote.getTextDocumentService()
-            .hover(new HoverParams(new TextDocumentIdentifier(uri), cursor)).get(20, TimeUnit.SECONDS);
+        Hover hover =
+            h.remote
+                .getTextDocumentService()
+                .hover(new HoverParams(new TextDocumentIdentifier(uri), cursor))
+                .get(20, TimeUnit.SECONDS);
         assertNotNull(hover, c.golden());
         Range r = hover.getRange();
         String under = text.substring(offset(text, r.getStart()), offset(text, r.getEnd()));
-        String got = "<!-- hover over '" + under.replaceAll("\\s+", " ") + "' -->\n\n"
-            + hover.getContents().getRight().getValue() + "\n";
+        String got =
+            "<!-- hover over '"
+                + under.replaceAll("\\s+", " ")
+                + "' -->\n\n"
+                + hover.getContents().getRight().getValue()
+                + "\n";
         assertEquals(Files.readString(IDE.resolve("hover").resolve(c.golden())), got, c.golden());
       }
     }

@@ -25,13 +25,14 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * inlayHint/resolve: a client that can resolve tooltips lazily gets hints without them and
- * the tooltip on resolve, the same text a client without that capability gets inline; a hint
- * whose document has changed or closed since comes back unchanged, never as an error.
+ * inlayHint/resolve: a client that can resolve tooltips lazily gets hints without them and the
+ * tooltip on resolve, the same text a client without that capability gets inline; a hint whose
+ * document has changed or closed since comes back unchanged, never as an error.
  */
 class InlayHintResolveTest {
   private static final long SECONDS = 20;
-  static final String BENCH = """
+  static final String BENCH =
+      """
       source seed { wavelength 532 nm; power 10 mW }
       splitter bs { ratio 50 % }
       dump d1
@@ -43,8 +44,7 @@ class InlayHintResolveTest {
       """;
   static final Range ALL = new Range(new Position(0, 0), new Position(9, 0));
 
-  @TempDir
-  Path dir;
+  @TempDir Path dir;
 
   private String write(String text) throws Exception {
     Files.writeString(dir.resolve(".jonquil-root"), "");
@@ -65,7 +65,9 @@ class InlayHintResolveTest {
   }
 
   private static List<InlayHint> hints(LspHarness h, String uri) throws Exception {
-    return h.remote.getTextDocumentService().inlayHint(new InlayHintParams(new TextDocumentIdentifier(uri), ALL))
+    return h.remote
+        .getTextDocumentService()
+        .inlayHint(new InlayHintParams(new TextDocumentIdentifier(uri), ALL))
         .get(SECONDS, TimeUnit.SECONDS);
   }
 
@@ -75,15 +77,23 @@ class InlayHintResolveTest {
 
   private static void assertNoErrorResponse(LspHarness h) {
     synchronized (h.responses) {
-      assertEquals(List.of(), h.responses.stream().filter(r -> r.getError() != null).toList(), "no error response");
+      assertEquals(
+          List.of(),
+          h.responses.stream().filter(r -> r.getError() != null).toList(),
+          "no error response");
     }
   }
 
-  /** The hints a client without lazy tooltips gets for the text: each with its tooltip inline, and no data. */
+  /**
+   * The hints a client without lazy tooltips gets for the text: each with its tooltip inline, and
+   * no data.
+   */
   private List<InlayHint> inlineHints(String uri, String text) throws Exception {
     try (LspHarness h = new LspHarness(new IdeAnswers())) {
       ServerCapabilities caps = h.initialize(dir, new ClientCapabilities()).getCapabilities();
-      assertTrue(caps.getInlayHintProvider().getRight().getResolveProvider(), "resolve is offered to every client");
+      assertTrue(
+          caps.getInlayHintProvider().getRight().getResolveProvider(),
+          "resolve is offered to every client");
       h.open(uri, 1, text);
       List<InlayHint> out = hints(h, uri);
       for (InlayHint hint : out) {
@@ -101,16 +111,21 @@ class InlayHintResolveTest {
     String uri = write(BENCH);
     List<InlayHint> inline = inlineHints(uri, BENCH);
     assertEquals(5, inline.size());
-    assertTrue(inline.get(0).getTooltip().getLeft().startsWith("10 mW leaving 'seed.out'"), inline.get(0).toString());
+    assertTrue(
+        inline.get(0).getTooltip().getLeft().startsWith("10 mW leaving 'seed.out'"),
+        inline.get(0).toString());
 
     try (LspHarness h = new LspHarness(new IdeAnswers())) {
       ServerCapabilities caps = h.initialize(dir, resolvingClient("tooltip")).getCapabilities();
       assertTrue(caps.getInlayHintProvider().getRight().getResolveProvider());
       h.open(uri, 1, BENCH);
       List<InlayHint> lazy = hints(h, uri);
-      assertEquals(inline.stream().map(InlayHint::getPosition).toList(),
+      assertEquals(
+          inline.stream().map(InlayHint::getPosition).toList(),
           lazy.stream().map(InlayHint::getPosition).toList());
-      assertEquals(inline.stream().map(InlayHint::getLabel).toList(), lazy.stream().map(InlayHint::getLabel).toList());
+      assertEquals(
+          inline.stream().map(InlayHint::getLabel).toList(),
+          lazy.stream().map(InlayHint::getLabel).toList());
       List<InlayHint> resolved = new ArrayList<>();
       for (InlayHint hint : lazy) {
         assertNull(hint.getTooltip(), "the tooltip waits for resolve: " + hint);
@@ -118,7 +133,8 @@ class InlayHintResolveTest {
         resolved.add(resolve(h, hint));
       }
       for (int i = 0; i < inline.size(); i++) {
-        assertEquals(inline.get(i).getTooltip(), resolved.get(i).getTooltip(), "tooltip of hint " + i);
+        assertEquals(
+            inline.get(i).getTooltip(), resolved.get(i).getTooltip(), "tooltip of hint " + i);
         assertEquals(inline.get(i).getPosition(), resolved.get(i).getPosition());
         assertEquals(inline.get(i).getLabel(), resolved.get(i).getLabel());
       }
@@ -155,7 +171,8 @@ class InlayHintResolveTest {
       assertEquals(" 20 mW", now.getLabel().getLeft());
       assertTrue(resolve(h, now).getTooltip().getLeft().startsWith("20 mW leaving 'seed.out'"));
 
-      // The same text again under a new version: the hint names a version the document no longer has.
+      // The same text again under a new version: the hint names a version the document no longer
+      // has.
       h.changeAll(uri, 3, stronger);
       assertEquals(now, resolve(h, now), "a hint of version 2 after version 3");
       InlayHint third = hints(h, uri).get(0);
@@ -163,10 +180,14 @@ class InlayHintResolveTest {
       h.close(uri);
       assertEquals(third, resolve(h, third), "a hint of a closed document");
 
-      InlayHint foreign = new InlayHint(new Position(0, 0), org.eclipse.lsp4j.jsonrpc.messages.Either.forLeft(" x"));
+      InlayHint foreign =
+          new InlayHint(
+              new Position(0, 0), org.eclipse.lsp4j.jsonrpc.messages.Either.forLeft(" x"));
       foreign.setData(new JsonPrimitive("not ours"));
       assertEquals(foreign, resolve(h, foreign), "a hint with someone else's data");
-      InlayHint bare = new InlayHint(new Position(0, 0), org.eclipse.lsp4j.jsonrpc.messages.Either.forLeft(" y"));
+      InlayHint bare =
+          new InlayHint(
+              new Position(0, 0), org.eclipse.lsp4j.jsonrpc.messages.Either.forLeft(" y"));
       assertEquals(bare, resolve(h, bare), "a hint without data");
       assertNoErrorResponse(h);
     }

@@ -39,7 +39,10 @@ import org.eclipse.lsp4j.launch.LSPLauncher;
 import org.eclipse.lsp4j.services.LanguageClient;
 import org.eclipse.lsp4j.services.LanguageServer;
 
-/** An in-process LSP4J client wired to a real server over pipes, so tests speak the actual JSON-RPC protocol. */
+/**
+ * An in-process LSP4J client wired to a real server over pipes, so tests speak the actual JSON-RPC
+ * protocol.
+ */
 final class LspHarness implements AutoCloseable {
   static final Duration WAIT = Duration.ofSeconds(20);
 
@@ -48,8 +51,10 @@ final class LspHarness implements AutoCloseable {
     final List<PublishDiagnosticsParams> published = new ArrayList<>();
     final List<MessageParams> logs = new ArrayList<>();
     final List<RegistrationParams> registrations = new ArrayList<>();
+
     /** The tokens the server asked to create, and every $/progress it sent, in order. */
     final List<String> progressTokens = new ArrayList<>();
+
     final List<ProgressParams> progress = new ArrayList<>();
 
     @Override
@@ -59,7 +64,8 @@ final class LspHarness implements AutoCloseable {
     }
 
     @Override
-    public synchronized CompletableFuture<Void> createProgress(WorkDoneProgressCreateParams params) {
+    public synchronized CompletableFuture<Void> createProgress(
+        WorkDoneProgressCreateParams params) {
       progressTokens.add(Convert.progressToken(params.getToken()));
       return CompletableFuture.completedFuture(null);
     }
@@ -71,7 +77,8 @@ final class LspHarness implements AutoCloseable {
     }
 
     /** Waits until a $/progress matches {@code test}; fails the test after {@link #WAIT}. */
-    synchronized ProgressParams awaitProgress(Predicate<ProgressParams> test) throws InterruptedException {
+    synchronized ProgressParams awaitProgress(Predicate<ProgressParams> test)
+        throws InterruptedException {
       long deadline = System.nanoTime() + WAIT.toNanos();
       while (true) {
         for (ProgressParams p : progress) {
@@ -87,7 +94,9 @@ final class LspHarness implements AutoCloseable {
       }
     }
 
-    /** Drops what was recorded so far (long soak runs would otherwise measure the client's memory). */
+    /**
+     * Drops what was recorded so far (long soak runs would otherwise measure the client's memory).
+     */
     synchronized void forget() {
       published.clear();
       logs.clear();
@@ -106,7 +115,8 @@ final class LspHarness implements AutoCloseable {
     public void showMessage(MessageParams messageParams) {}
 
     @Override
-    public CompletableFuture<MessageActionItem> showMessageRequest(ShowMessageRequestParams requestParams) {
+    public CompletableFuture<MessageActionItem> showMessageRequest(
+        ShowMessageRequestParams requestParams) {
       return CompletableFuture.completedFuture(null);
     }
 
@@ -119,9 +129,12 @@ final class LspHarness implements AutoCloseable {
       return published.stream().filter(p -> p.getUri().equals(uri)).toList();
     }
 
-    /** Waits for a publish for {@code uri} matching {@code test}; fails the test after {@link #WAIT}. */
-    synchronized PublishDiagnosticsParams await(String uri, Predicate<PublishDiagnosticsParams> test)
-        throws InterruptedException {
+    /**
+     * Waits for a publish for {@code uri} matching {@code test}; fails the test after {@link
+     * #WAIT}.
+     */
+    synchronized PublishDiagnosticsParams await(
+        String uri, Predicate<PublishDiagnosticsParams> test) throws InterruptedException {
       long deadline = System.nanoTime() + WAIT.toNanos();
       int seen = 0;
       while (true) {
@@ -133,7 +146,8 @@ final class LspHarness implements AutoCloseable {
         }
         long left = deadline - System.nanoTime();
         if (left <= 0) {
-          throw new AssertionError("no matching publishDiagnostics for " + uri + "; got " + published);
+          throw new AssertionError(
+              "no matching publishDiagnostics for " + uri + "; got " + published);
         }
         wait(Math.max(1, left / 1_000_000));
       }
@@ -143,18 +157,28 @@ final class LspHarness implements AutoCloseable {
   final JonquilLanguageServer server;
   final RecordingClient client = new RecordingClient();
   final LanguageServer remote;
-  private final ExecutorService threads = Executors.newCachedThreadPool(r -> {
-    Thread t = new Thread(r, "harness");
-    t.setDaemon(true);
-    return t;
-  });
+  private final ExecutorService threads =
+      Executors.newCachedThreadPool(
+          r -> {
+            Thread t = new Thread(r, "harness");
+            t.setDaemon(true);
+            return t;
+          });
   private final OutputStream clientOut;
   private final OutputStream serverOut;
-  /** The names of the server's threads that wrote to its output, so a test can see who writes replies. */
+
+  /**
+   * The names of the server's threads that wrote to its output, so a test can see who writes
+   * replies.
+   */
   final java.util.Set<String> serverWriters = java.util.concurrent.ConcurrentHashMap.newKeySet();
+
   /** Every response the client received, as it came off the wire (error codes included). */
   final List<ResponseMessage> responses = java.util.Collections.synchronizedList(new ArrayList<>());
-  /** Completes when the server's message loop ends: while it is not done, the server still reads. */
+
+  /**
+   * Completes when the server's message loop ends: while it is not done, the server still reads.
+   */
   final java.util.concurrent.Future<Void> serverListening;
 
   LspHarness(EditorAnswers answers) throws IOException {
@@ -165,7 +189,10 @@ final class LspHarness implements AutoCloseable {
     this(answers, debounce, true);
   }
 
-  /** With {@code checkAfterPause} false, no check runs before {@code debounce} has passed since the last edit. */
+  /**
+   * With {@code checkAfterPause} false, no check runs before {@code debounce} has passed since the
+   * last edit.
+   */
   LspHarness(EditorAnswers answers, Duration debounce, boolean checkAfterPause) throws IOException {
     Pipe toServer = Pipe.open();
     Pipe toClient = Pipe.open();
@@ -173,30 +200,35 @@ final class LspHarness implements AutoCloseable {
     clientOut = Channels.newOutputStream(toServer.sink());
     InputStream clientIn = Channels.newInputStream(toClient.source());
     OutputStream sink = Channels.newOutputStream(toClient.sink());
-    serverOut = new java.io.FilterOutputStream(sink) {
-      @Override
-      public void write(byte[] b, int off, int len) throws IOException {
-        serverWriters.add(Thread.currentThread().getName());
-        sink.write(b, off, len);
-      }
-    };
+    serverOut =
+        new java.io.FilterOutputStream(sink) {
+          @Override
+          public void write(byte[] b, int off, int len) throws IOException {
+            serverWriters.add(Thread.currentThread().getName());
+            sink.write(b, off, len);
+          }
+        };
     server = new JonquilLanguageServer(answers, debounce, checkAfterPause);
-    Launcher<LanguageClient> serverSide = LSPLauncher.createServerLauncher(server, serverIn, serverOut, threads, null);
+    Launcher<LanguageClient> serverSide =
+        LSPLauncher.createServerLauncher(server, serverIn, serverOut, threads, null);
     server.connect(serverSide.getRemoteProxy());
     serverListening = serverSide.startListening();
-    Launcher<LanguageServer> clientSide = new LSPLauncher.Builder<LanguageServer>()
-        .setLocalService(client)
-        .setRemoteInterface(LanguageServer.class)
-        .setInput(clientIn)
-        .setOutput(clientOut)
-        .setExecutorService(threads)
-        .wrapMessages(next -> message -> {
-          if (message instanceof ResponseMessage) {
-            responses.add((ResponseMessage) message);
-          }
-          next.consume(message);
-        })
-        .create();
+    Launcher<LanguageServer> clientSide =
+        new LSPLauncher.Builder<LanguageServer>()
+            .setLocalService(client)
+            .setRemoteInterface(LanguageServer.class)
+            .setInput(clientIn)
+            .setOutput(clientOut)
+            .setExecutorService(threads)
+            .wrapMessages(
+                next ->
+                    message -> {
+                      if (message instanceof ResponseMessage) {
+                        responses.add((ResponseMessage) message);
+                      }
+                      next.consume(message);
+                    })
+            .create();
     clientSide.startListening();
     remote = clientSide.getRemoteProxy();
   }
@@ -233,7 +265,8 @@ final class LspHarness implements AutoCloseable {
     params.setProcessId(null);
     List<org.eclipse.lsp4j.WorkspaceFolder> list = new ArrayList<>();
     for (Path f : folders) {
-      list.add(new org.eclipse.lsp4j.WorkspaceFolder(f.toUri().toString(), f.getFileName().toString()));
+      list.add(
+          new org.eclipse.lsp4j.WorkspaceFolder(f.toUri().toString(), f.getFileName().toString()));
     }
     params.setWorkspaceFolders(list);
     params.setCapabilities(caps);
@@ -243,21 +276,33 @@ final class LspHarness implements AutoCloseable {
   }
 
   void open(String uri, int version, String text) {
-    remote.getTextDocumentService().didOpen(new DidOpenTextDocumentParams(new TextDocumentItem(uri, "jonquil", version, text)));
+    remote
+        .getTextDocumentService()
+        .didOpen(
+            new DidOpenTextDocumentParams(new TextDocumentItem(uri, "jonquil", version, text)));
   }
 
   void changeAll(String uri, int version, String text) {
-    remote.getTextDocumentService().didChange(new DidChangeTextDocumentParams(
-        new VersionedTextDocumentIdentifier(uri, version), List.of(new TextDocumentContentChangeEvent(text))));
+    remote
+        .getTextDocumentService()
+        .didChange(
+            new DidChangeTextDocumentParams(
+                new VersionedTextDocumentIdentifier(uri, version),
+                List.of(new TextDocumentContentChangeEvent(text))));
   }
 
   void change(String uri, int version, TextDocumentContentChangeEvent change) {
-    remote.getTextDocumentService().didChange(new DidChangeTextDocumentParams(
-        new VersionedTextDocumentIdentifier(uri, version), List.of(change)));
+    remote
+        .getTextDocumentService()
+        .didChange(
+            new DidChangeTextDocumentParams(
+                new VersionedTextDocumentIdentifier(uri, version), List.of(change)));
   }
 
   void close(String uri) {
-    remote.getTextDocumentService().didClose(new DidCloseTextDocumentParams(new TextDocumentIdentifier(uri)));
+    remote
+        .getTextDocumentService()
+        .didClose(new DidCloseTextDocumentParams(new TextDocumentIdentifier(uri)));
   }
 
   @Override

@@ -7,7 +7,6 @@ import java.lang.management.ManagementFactory;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
-import java.util.List;
 import java.util.concurrent.TimeUnit;
 import org.eclipse.lsp4j.Position;
 import org.eclipse.lsp4j.Range;
@@ -16,27 +15,28 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * Retained heap stays flat over 10 000 didChange and 1 000 open/close cycles of distinct
- * files. Method: warm the server with the same kinds of traffic, let it go quiet, run the
- * collector until the used heap stops falling and take that as the baseline; then run the
- * soak, go quiet, collect the same way and compare. The bound is 10 % of the baseline or
- * 8 MB, whichever is larger (the floor absorbs collector noise on a small heap). A leak of
- * one document text (about 2 KB) per edit would retain about 20 MB; one retained check
- * result per closed file, far more.
+ * Retained heap stays flat over 10 000 didChange and 1 000 open/close cycles of distinct files.
+ * Method: warm the server with the same kinds of traffic, let it go quiet, run the collector until
+ * the used heap stops falling and take that as the baseline; then run the soak, go quiet, collect
+ * the same way and compare. The bound is 10 % of the baseline or 8 MB, whichever is larger (the
+ * floor absorbs collector noise on a small heap). A leak of one document text (about 2 KB) per edit
+ * would retain about 20 MB; one retained check result per closed file, far more.
  */
 class MemorySoakTest {
   static final int CHANGES = 10_000;
   static final int OPEN_CLOSE = 1_000;
   static final long FLOOR_BYTES = 8L << 20;
 
-  @TempDir
-  Path dir;
+  @TempDir Path dir;
 
   @Test
   void retainedHeapStaysFlat() throws Exception {
     Path repo = Path.of(System.getProperty("jonquil.repo", "..")).toAbsolutePath().normalize();
-    String sample = Files.readString(repo.resolve("samples/optical_trap.jonq"))
-        .replace("use \"parts/bench_parts.jonq\"\n", "material demo_crown = index 1.5\nmaterial saline = water\n");
+    String sample =
+        Files.readString(repo.resolve("samples/optical_trap.jonq"))
+            .replace(
+                "use \"parts/bench_parts.jonq\"\n",
+                "material demo_crown = index 1.5\nmaterial saline = water\n");
     Files.writeString(dir.resolve(".jonquil-root"), "");
     String main = dir.resolve("main.jonq").toUri().toString();
     try (LspHarness h = new LspHarness(new NoAnswers(), Duration.ofMillis(5))) {
@@ -51,28 +51,48 @@ class MemorySoakTest {
 
       long bound = Math.max(baseline / 10, FLOOR_BYTES);
       long max = Runtime.getRuntime().maxMemory();
-      System.err.printf("memory soak: baseline %.1f MB, after %.1f MB, max heap %.0f MB%n", mb(baseline), mb(after),
-          mb(max));
-      assertTrue(after - baseline < bound, String.format("retained heap grew from %.1f MB to %.1f MB (bound +%.1f MB)",
-          mb(baseline), mb(after), mb(bound)));
+      System.err.printf(
+          "memory soak: baseline %.1f MB, after %.1f MB, max heap %.0f MB%n",
+          mb(baseline), mb(after), mb(max));
+      assertTrue(
+          after - baseline < bound,
+          String.format(
+              "retained heap grew from %.1f MB to %.1f MB (bound +%.1f MB)",
+              mb(baseline), mb(after), mb(bound)));
       assertEquals(1, h.server.documents.snapshot().size(), "only the main document is still open");
     }
   }
 
-  /** Edits that keep the text's size (type a digit, delete it) and open/close cycles of distinct files, interleaved. */
-  private static void traffic(LspHarness h, String main, String sample, int[] version, int changes, int cycles,
-      String prefix) throws Exception {
+  /**
+   * Edits that keep the text's size (type a digit, delete it) and open/close cycles of distinct
+   * files, interleaved.
+   */
+  private static void traffic(
+      LspHarness h,
+      String main,
+      String sample,
+      int[] version,
+      int changes,
+      int cycles,
+      String prefix)
+      throws Exception {
     int line = 1;
     int everyCycle = Math.max(1, changes / cycles);
     for (int i = 0; i < changes; i++) {
       Position at = new Position(line, 0);
-      TextDocumentContentChangeEvent change = i % 2 == 0
-          ? new TextDocumentContentChangeEvent(new Range(at, at), "7")
-          : new TextDocumentContentChangeEvent(new Range(at, new Position(line, 1)), "");
+      TextDocumentContentChangeEvent change =
+          i % 2 == 0
+              ? new TextDocumentContentChangeEvent(new Range(at, at), "7")
+              : new TextDocumentContentChangeEvent(new Range(at, new Position(line, 1)), "");
       h.change(main, ++version[0], change);
       if (i % everyCycle == 0) {
-        String other = h.server.convert().uri(Path.of(Documents.pathOf(main).orElseThrow().getParent().toString(),
-            prefix + "-" + i + ".jonq"));
+        String other =
+            h.server
+                .convert()
+                .uri(
+                    Path.of(
+                        Documents.pathOf(main).orElseThrow().getParent().toString(),
+                        prefix + "-" + i + ".jonq"));
         h.open(other, 1, sample);
         if (i % (everyCycle * 50) == 0) {
           h.client.await(other, p -> Integer.valueOf(1).equals(p.getVersion()));
@@ -87,7 +107,10 @@ class MemorySoakTest {
     }
   }
 
-  /** The used heap after the server went quiet and repeated collections stopped freeing more than 1 %. */
+  /**
+   * The used heap after the server went quiet and repeated collections stopped freeing more than 1
+   * %.
+   */
   private static long settledHeap(LspHarness h) throws InterruptedException {
     Thread.sleep(300); // past the debounce: no check is running
     h.client.forget();

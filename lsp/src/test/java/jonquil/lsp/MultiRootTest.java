@@ -31,25 +31,27 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * Two workspace folders that each declare {@code fold1}, then one folder removed and a third
- * added: each file is checked under its innermost folder, and a change of folders re-roots the
- * open documents.
+ * Two workspace folders that each declare {@code fold1}, then one folder removed and a third added:
+ * each file is checked under its innermost folder, and a change of folders re-roots the open
+ * documents.
  */
 class MultiRootTest {
   static final String MIRROR = " { metal silver; aoi 45 deg }\n";
+
   /** A train through {@code fold1} (line 4, columns 20-25), after the given 'use' lines. */
   static String main(String uses, String extra) {
-    return uses + """
+    return uses
+        + """
         source seed { wavelength 1064 nm; power 2 W }
         probe spot
         train main {
           seed -> 100 mm -> fold1 -> 20 mm ->%s spot
         }
-        """.formatted(extra);
+        """
+            .formatted(extra);
   }
 
-  @TempDir
-  Path base;
+  @TempDir Path base;
 
   private static String uri(Path p) {
     return p.toAbsolutePath().normalize().toUri().toString();
@@ -62,23 +64,35 @@ class MultiRootTest {
   }
 
   private static List<Location> definition(LspHarness h, String uri, Position at) throws Exception {
-    Either<List<? extends Location>, List<? extends LocationLink>> found = h.remote.getTextDocumentService()
-        .definition(new DefinitionParams(new TextDocumentIdentifier(uri), at)).get(20, TimeUnit.SECONDS);
+    Either<List<? extends Location>, List<? extends LocationLink>> found =
+        h.remote
+            .getTextDocumentService()
+            .definition(new DefinitionParams(new TextDocumentIdentifier(uri), at))
+            .get(20, TimeUnit.SECONDS);
     return found == null || found.getLeft() == null ? List.of() : new ArrayList<>(found.getLeft());
   }
 
   private static List<Location> references(LspHarness h, String uri, Position at) throws Exception {
-    List<Location> out = new ArrayList<>(h.remote.getTextDocumentService()
-        .references(new ReferenceParams(new TextDocumentIdentifier(uri), at, new ReferenceContext(true)))
-        .get(20, TimeUnit.SECONDS));
+    List<Location> out =
+        new ArrayList<>(
+            h.remote
+                .getTextDocumentService()
+                .references(
+                    new ReferenceParams(
+                        new TextDocumentIdentifier(uri), at, new ReferenceContext(true)))
+                .get(20, TimeUnit.SECONDS));
     out.sort(Comparator.comparing(Location::getUri));
     return out;
   }
 
   private static List<Location> workspaceSymbols(LspHarness h, String query) throws Exception {
     List<Location> out = new ArrayList<>();
-    for (WorkspaceSymbol s : h.remote.getWorkspaceService().symbol(new WorkspaceSymbolParams(query))
-        .get(20, TimeUnit.SECONDS).getRight()) {
+    for (WorkspaceSymbol s :
+        h.remote
+            .getWorkspaceService()
+            .symbol(new WorkspaceSymbolParams(query))
+            .get(20, TimeUnit.SECONDS)
+            .getRight()) {
       assertEquals(query, s.getName());
       out.add(s.getLocation().getLeft());
     }
@@ -102,7 +116,8 @@ class MultiRootTest {
     Path b = base.resolve("b");
     Path c = a.resolve("sub");
     String aLib = uri(write(a.resolve("lib.jonq"), "mirror fold1" + MIRROR));
-    String bLib = uri(write(b.resolve("lib.jonq"), "mirror pad" + MIRROR + "mirror fold1" + MIRROR));
+    String bLib =
+        uri(write(b.resolve("lib.jonq"), "mirror pad" + MIRROR + "mirror fold1" + MIRROR));
     String aMainText = main("use \"lib.jonq\"\n", "");
     // B's main also reaches above its folder, which a workspace folder forbids.
     String bMainText = main("use \"lib.jonq\"\nuse \"../shared.jonq\"\n", " wide -> 5 mm ->");
@@ -114,20 +129,31 @@ class MultiRootTest {
 
     try (LspHarness h = new LspHarness(new IdeAnswers())) {
       InitializeResult init = h.initialize(List.of(a, b), new ClientCapabilities());
-      WorkspaceFoldersOptions advertised = init.getCapabilities().getWorkspace().getWorkspaceFolders();
+      WorkspaceFoldersOptions advertised =
+          init.getCapabilities().getWorkspace().getWorkspaceFolders();
       assertEquals(Boolean.TRUE, advertised.getSupported());
       assertEquals(Either.forRight(true), advertised.getChangeNotifications());
 
       h.open(aMain, 1, aMainText);
       h.open(bMain, 1, bMainText);
       h.open(inner, 1, innerText);
-      PublishDiagnosticsParams aDiags = h.client.await(aMain, p -> Integer.valueOf(1).equals(p.getVersion()));
-      PublishDiagnosticsParams bDiags = h.client.await(bMain, p -> Integer.valueOf(1).equals(p.getVersion()));
-      PublishDiagnosticsParams innerDiags = h.client.await(inner, p -> Integer.valueOf(1).equals(p.getVersion()));
+      PublishDiagnosticsParams aDiags =
+          h.client.await(aMain, p -> Integer.valueOf(1).equals(p.getVersion()));
+      PublishDiagnosticsParams bDiags =
+          h.client.await(bMain, p -> Integer.valueOf(1).equals(p.getVersion()));
+      PublishDiagnosticsParams innerDiags =
+          h.client.await(inner, p -> Integer.valueOf(1).equals(p.getVersion()));
       assertEquals(List.of(), aDiags.getDiagnostics(), "A is clean whatever B says");
-      assertTrue(messages(bDiags).contains("'../shared.jonq' leads outside the project root 'b'; keep used files inside"
-          + " the project"), "B's 'use' above its folder is an error in B only: " + messages(bDiags));
-      assertEquals(List.of(), innerDiags.getDiagnostics(), "a/sub is under folder a, so '../lib.jonq' is allowed");
+      assertTrue(
+          messages(bDiags)
+              .contains(
+                  "'../shared.jonq' leads outside the project root 'b'; keep used files inside"
+                      + " the project"),
+          "B's 'use' above its folder is an error in B only: " + messages(bDiags));
+      assertEquals(
+          List.of(),
+          innerDiags.getDiagnostics(),
+          "a/sub is under folder a, so '../lib.jonq' is allowed");
 
       Location aDecl = new Location(aLib, new Range(new Position(0, 7), new Position(0, 12)));
       Location bDecl = new Location(bLib, new Range(new Position(1, 7), new Position(1, 12)));
@@ -136,22 +162,38 @@ class MultiRootTest {
       assertEquals(List.of(bDecl), definition(h, bMain, new Position(5, 22)));
       assertEquals(List.of(aDecl), definition(h, inner, onFold1));
       List<Location> aRefs = references(h, aMain, onFold1);
-      assertTrue(aRefs.contains(aDecl) && aRefs.contains(new Location(aMain, use)), "A's references: " + aRefs);
-      assertTrue(aRefs.stream().allMatch(l -> l.getUri().startsWith(uri(a))), "nothing of B's: " + aRefs);
+      assertTrue(
+          aRefs.contains(aDecl) && aRefs.contains(new Location(aMain, use)),
+          "A's references: " + aRefs);
+      assertTrue(
+          aRefs.stream().allMatch(l -> l.getUri().startsWith(uri(a))), "nothing of B's: " + aRefs);
       List<Location> bRefs = references(h, bMain, new Position(5, 22));
-      assertTrue(bRefs.stream().allMatch(l -> l.getUri().startsWith(uri(b))), "nothing of A's: " + bRefs);
-      assertEquals(List.of(aDecl, bDecl), workspaceSymbols(h, "fold1"), "one fold1 per folder, each in its own file");
+      assertTrue(
+          bRefs.stream().allMatch(l -> l.getUri().startsWith(uri(b))), "nothing of A's: " + bRefs);
+      assertEquals(
+          List.of(aDecl, bDecl),
+          workspaceSymbols(h, "fold1"),
+          "one fold1 per folder, each in its own file");
       assertTrue(h.client.publishedFor(aMain).stream().allMatch(p -> p.getDiagnostics().isEmpty()));
 
-      // Folder b goes, a/sub comes: b/main falls back to the root marker in base, a/sub/inner is checked under a/sub.
-      h.remote.getWorkspaceService().didChangeWorkspaceFolders(new DidChangeWorkspaceFoldersParams(
-          new WorkspaceFoldersChangeEvent(List.of(folder(c)), List.of(folder(b)))));
+      // Folder b goes, a/sub comes: b/main falls back to the root marker in base, a/sub/inner is
+      // checked under a/sub.
+      h.remote
+          .getWorkspaceService()
+          .didChangeWorkspaceFolders(
+              new DidChangeWorkspaceFoldersParams(
+                  new WorkspaceFoldersChangeEvent(List.of(folder(c)), List.of(folder(b)))));
       // Asked at once: the answer waits for the check under the new folders, not the one before.
-      assertEquals(List.of(), definition(h, inner, onFold1), "'../lib.jonq' now leaves inner's folder");
+      assertEquals(
+          List.of(), definition(h, inner, onFold1), "'../lib.jonq' now leaves inner's folder");
       h.client.await(bMain, p -> p.getDiagnostics().isEmpty());
       PublishDiagnosticsParams innerNow = h.client.await(inner, p -> !p.getDiagnostics().isEmpty());
-      assertTrue(messages(innerNow).contains("'../lib.jonq' leads outside the project root 'sub'; keep used files inside"
-          + " the project"), "inner is checked under the added folder: " + messages(innerNow));
+      assertTrue(
+          messages(innerNow)
+              .contains(
+                  "'../lib.jonq' leads outside the project root 'sub'; keep used files inside"
+                      + " the project"),
+          "inner is checked under the added folder: " + messages(innerNow));
       assertEquals(List.of(bDecl), definition(h, bMain, new Position(5, 22)));
       assertEquals(List.of(aDecl), definition(h, aMain, onFold1));
       assertEquals(List.of(aDecl, bDecl), workspaceSymbols(h, "fold1"));

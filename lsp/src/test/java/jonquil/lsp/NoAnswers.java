@@ -1,27 +1,25 @@
 package jonquil.lsp;
 
-import jonquil.ide.Location;
-
-import jonquil.ide.SymbolInfo;
-
-import jonquil.ide.RenameResult;
-
-import jonquil.ide.HoverInfo;
-
 import java.nio.file.Path;
-import jonquil.ide.CodeActionInfo;
-import jonquil.ide.CompletionItemInfo;
-import jonquil.ide.DocumentLinkInfo;
-import jonquil.ide.FoldingRangeInfo;
-import jonquil.ide.InlayHint;
-import jonquil.ide.SemanticToken;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import jonquil.Result;
+import jonquil.ide.CodeActionInfo;
+import jonquil.ide.CompletionItemInfo;
+import jonquil.ide.DocumentLinkInfo;
+import jonquil.ide.FoldingRangeInfo;
+import jonquil.ide.HoverInfo;
+import jonquil.ide.InlayHint;
+import jonquil.ide.Location;
+import jonquil.ide.RenameResult;
+import jonquil.ide.SemanticToken;
+import jonquil.ide.SymbolInfo;
 import jonquil.source.TextRange;
 
-/** Editor answers that know nothing, so the server runs before the compiler's answers are wired in. */
+/**
+ * Editor answers that know nothing, so the server runs before the compiler's answers are wired in.
+ */
 public final class NoAnswers implements EditorAnswers {
   @Override
   public Optional<HoverInfo> hover(Result result, Path file, int offset) {
@@ -34,7 +32,8 @@ public final class NoAnswers implements EditorAnswers {
   }
 
   @Override
-  public List<Location> references(Result result, Path file, int offset, boolean includeDeclaration) {
+  public List<Location> references(
+      Result result, Path file, int offset, boolean includeDeclaration) {
     return List.of();
   }
 

@@ -34,17 +34,24 @@ import org.junit.jupiter.api.Test;
  * publishes for the opened file are the command line's, code for code, severity, message and range.
  */
 class ParityTest {
-  static final Path REPO = Path.of(System.getProperty("jonquil.repo", "..")).toAbsolutePath().normalize();
+  static final Path REPO =
+      Path.of(System.getProperty("jonquil.repo", "..")).toAbsolutePath().normalize();
   static final Path CORPUS = REPO.resolve("compiler/src/test/resources/diagnostics");
 
-  /** One file to check: its project root and the file itself, as DiagnosticsCorpusTest and SamplesTest root them. */
+  /**
+   * One file to check: its project root and the file itself, as DiagnosticsCorpusTest and
+   * SamplesTest root them.
+   */
   record Case(String name, Path root, Path main) {}
 
   static List<Case> cases() throws IOException {
     List<Case> out = new ArrayList<>();
     try (Stream<Path> samples = Files.list(REPO.resolve("samples"))) {
-      samples.filter(p -> p.toString().endsWith(".jonq")).sorted()
-          .forEach(p -> out.add(new Case("samples/" + p.getFileName(), REPO.resolve("samples"), p)));
+      samples
+          .filter(p -> p.toString().endsWith(".jonq"))
+          .sorted()
+          .forEach(
+              p -> out.add(new Case("samples/" + p.getFileName(), REPO.resolve("samples"), p)));
     }
     try (Stream<Path> areas = Files.list(CORPUS)) {
       for (Path area : areas.filter(Files::isDirectory).sorted().toList()) {
@@ -63,10 +70,25 @@ class ParityTest {
     return out;
   }
 
-  /** A diagnostic as the CLI shows it: code, severity word, 1-based lines and code-point columns, message. */
-  static String cli(String code, String severity, LineIndex lines, int start, int end, String message) {
-    return code + " " + severity + " " + (lines.line(start) + 1) + ":" + (lines.codePointColumn(start) + 1) + "-"
-        + (lines.line(end) + 1) + ":" + (lines.codePointColumn(end) + 1) + " " + message;
+  /**
+   * A diagnostic as the CLI shows it: code, severity word, 1-based lines and code-point columns,
+   * message.
+   */
+  static String cli(
+      String code, String severity, LineIndex lines, int start, int end, String message) {
+    return code
+        + " "
+        + severity
+        + " "
+        + (lines.line(start) + 1)
+        + ":"
+        + (lines.codePointColumn(start) + 1)
+        + "-"
+        + (lines.line(end) + 1)
+        + ":"
+        + (lines.codePointColumn(end) + 1)
+        + " "
+        + message;
   }
 
   /** The LSP severity back in the CLI's words, written apart from the server's mapping. */
@@ -85,19 +107,24 @@ class ParityTest {
   }
 
   /**
-   * The requirement lines the CLI judges but an editor leaves "not evaluated": by design
-   * ({@code CheckOptions.EDITOR}) the server skips the Monte Carlo yields while typing, so
-   * their verdict notes are the CLI's alone. Anything else must be the same.
+   * The requirement lines the CLI judges but an editor leaves "not evaluated": by design ({@code
+   * CheckOptions.EDITOR}) the server skips the Monte Carlo yields while typing, so their verdict
+   * notes are the CLI's alone. Anything else must be the same.
    */
   static Set<jonquil.source.TextRange> yieldsLeftToTheCli(Result cli, Result editor, Path file) {
     Set<jonquil.source.TextRange> out = new LinkedHashSet<>();
     for (RequirementOutcome e : editor.requirements()) {
-      if (e.file().equals(file) && e.status() == RequirementStatus.NOT_EVALUATED
+      if (e.file().equals(file)
+          && e.status() == RequirementStatus.NOT_EVALUATED
           && e.text().strip().startsWith("yield")) {
         cli.requirements().stream()
-            .filter(o -> o.file().equals(file) && o.range().equals(e.range())
-                && o.status() != RequirementStatus.NOT_EVALUATED)
-            .findFirst().ifPresent(o -> out.add(o.range()));
+            .filter(
+                o ->
+                    o.file().equals(file)
+                        && o.range().equals(e.range())
+                        && o.status() != RequirementStatus.NOT_EVALUATED)
+            .findFirst()
+            .ifPresent(o -> out.add(o.range()));
       }
     }
     return out;
@@ -120,31 +147,53 @@ class ParityTest {
         Path main = c.main().toAbsolutePath().normalize();
         String text;
         try {
-          text = StandardCharsets.UTF_8.newDecoder().decode(java.nio.ByteBuffer.wrap(Files.readAllBytes(main)))
-              .toString();
+          text =
+              StandardCharsets.UTF_8
+                  .newDecoder()
+                  .decode(java.nio.ByteBuffer.wrap(Files.readAllBytes(main)))
+                  .toString();
         } catch (CharacterCodingException e) {
-          continue; // not UTF-8: an editor could not send it as it is on disk (the CLI reports J902)
+          continue; // not UTF-8: an editor could not send it as it is on disk (the CLI reports
+          // J902)
         }
         Result result = Checker.check(Workspace.onDisk(c.root()), List.of(main));
-        Set<jonquil.source.TextRange> editorSkips = yieldsLeftToTheCli(result,
-            Checker.check(Workspace.onDisk(c.root()), List.of(main), CheckOptions.EDITOR), main);
+        Set<jonquil.source.TextRange> editorSkips =
+            yieldsLeftToTheCli(
+                result,
+                Checker.check(Workspace.onDisk(c.root()), List.of(main), CheckOptions.EDITOR),
+                main);
         skipped += editorSkips.size();
         LineIndex lines = new LineIndex(text);
         List<String> expected = new ArrayList<>();
         for (jonquil.diag.Diagnostic d : result.diagnostics()) {
-          boolean verdict = d.code() == DiagnosticCode.REQUIREMENT_MET || d.code() == DiagnosticCode.REQUIREMENT_FAILED;
+          boolean verdict =
+              d.code() == DiagnosticCode.REQUIREMENT_MET
+                  || d.code() == DiagnosticCode.REQUIREMENT_FAILED;
           if (d.file().equals(main) && !(verdict && editorSkips.contains(d.range()))) {
-            expected.add(cli(d.code().id(), d.severity().word(), lines, d.range().start(), d.range().end(),
-                d.message()));
+            expected.add(
+                cli(
+                    d.code().id(),
+                    d.severity().word(),
+                    lines,
+                    d.range().start(),
+                    d.range().end(),
+                    d.message()));
           }
         }
         String uri = main.toUri().toString();
         h.open(uri, 1, text);
-        PublishDiagnosticsParams p = h.client.await(uri, q -> Integer.valueOf(1).equals(q.getVersion()));
+        PublishDiagnosticsParams p =
+            h.client.await(uri, q -> Integer.valueOf(1).equals(q.getVersion()));
         List<String> actual = new ArrayList<>();
         for (Diagnostic d : p.getDiagnostics()) {
-          actual.add(cli(d.getCode().getLeft(), word(d.getSeverity()), lines, offset(lines, d.getRange().getStart()),
-              offset(lines, d.getRange().getEnd()), d.getMessage()));
+          actual.add(
+              cli(
+                  d.getCode().getLeft(),
+                  word(d.getSeverity()),
+                  lines,
+                  offset(lines, d.getRange().getStart()),
+                  offset(lines, d.getRange().getEnd()),
+                  d.getMessage()));
         }
         if (!expected.equals(actual)) {
           mismatches.add(c.name() + "\n  cli: " + expected + "\n  lsp: " + actual);
@@ -154,12 +203,16 @@ class ParityTest {
         last = uri;
       }
       if (last != null) {
-        String closed = last; // the clearing publish, so that no check is still writing when the pipes close
+        String closed =
+            last; // the clearing publish, so that no check is still writing when the pipes close
         h.client.await(closed, q -> q.getVersion() == null && q.getDiagnostics().isEmpty());
       }
     }
     assertEquals(List.of(), mismatches, String.join("\n", mismatches));
-    assertEquals(1, skipped, "the one 'yield' requirement of the samples is the only verdict left to the CLI");
+    assertEquals(
+        1,
+        skipped,
+        "the one 'yield' requirement of the samples is the only verdict left to the CLI");
     assertEquals(cases.size(), compared, "some cases were not valid UTF-8 and were skipped");
   }
 }

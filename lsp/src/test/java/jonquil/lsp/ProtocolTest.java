@@ -1,7 +1,5 @@
 package jonquil.lsp;
 
-import jonquil.ide.HoverInfo;
-
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertInstanceOf;
@@ -16,6 +14,7 @@ import java.util.Optional;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.TimeUnit;
 import jonquil.Result;
+import jonquil.ide.HoverInfo;
 import jonquil.source.TextRange;
 import org.eclipse.lsp4j.Diagnostic;
 import org.eclipse.lsp4j.DocumentSymbolParams;
@@ -37,8 +36,7 @@ class ProtocolTest {
   static final String BROKEN = "mirror m1 { reflectance 101 % }\n";
   static final String VALID = "material glass = index 1.5\n";
 
-  @TempDir
-  Path dir;
+  @TempDir Path dir;
 
   private String uriOf(String name, String text) throws Exception {
     Files.writeString(dir.resolve(".jonquil-root"), "");
@@ -54,18 +52,27 @@ class ProtocolTest {
   @Test
   void refusesRequestsBeforeInitializeThenAnnouncesItsCapabilities() throws Exception {
     try (LspHarness h = new LspHarness()) {
-      ExecutionException early = org.junit.jupiter.api.Assertions.assertThrows(ExecutionException.class,
-          () -> h.remote.getTextDocumentService()
-              .hover(new HoverParams(new TextDocumentIdentifier("file:///x.jonq"), new Position(0, 0)))
-              .get(10, TimeUnit.SECONDS));
-      assertEquals(ResponseErrorCode.ServerNotInitialized.getValue(), responseError(early).getResponseError().getCode());
+      ExecutionException early =
+          org.junit.jupiter.api.Assertions.assertThrows(
+              ExecutionException.class,
+              () ->
+                  h.remote
+                      .getTextDocumentService()
+                      .hover(
+                          new HoverParams(
+                              new TextDocumentIdentifier("file:///x.jonq"), new Position(0, 0)))
+                      .get(10, TimeUnit.SECONDS));
+      assertEquals(
+          ResponseErrorCode.ServerNotInitialized.getValue(),
+          responseError(early).getResponseError().getCode());
 
       InitializeResult init = h.initialize(dir);
       assertEquals("jonquil", init.getServerInfo().getName());
       assertNotNull(init.getServerInfo().getVersion());
       var caps = init.getCapabilities();
       assertEquals("utf-16", caps.getPositionEncoding());
-      assertEquals(TextDocumentSyncKind.Incremental, caps.getTextDocumentSync().getRight().getChange());
+      assertEquals(
+          TextDocumentSyncKind.Incremental, caps.getTextDocumentSync().getRight().getChange());
       assertTrue(caps.getTextDocumentSync().getRight().getOpenClose());
       assertTrue(caps.getHoverProvider().getLeft());
       assertTrue(caps.getDefinitionProvider().getLeft());
@@ -90,15 +97,19 @@ class ProtocolTest {
       assertEquals(new Range(new Position(0, 24), new Position(0, 29)), d.getRange());
 
       h.changeAll(uri, 2, VALID);
-      PublishDiagnosticsParams fixed = h.client.await(uri, p -> Integer.valueOf(2).equals(p.getVersion()));
+      PublishDiagnosticsParams fixed =
+          h.client.await(uri, p -> Integer.valueOf(2).equals(p.getVersion()));
       assertEquals(List.of(), fixed.getDiagnostics());
 
       h.changeAll(uri, 3, BROKEN);
-      h.client.await(uri, p -> Integer.valueOf(3).equals(p.getVersion()) && !p.getDiagnostics().isEmpty());
+      h.client.await(
+          uri, p -> Integer.valueOf(3).equals(p.getVersion()) && !p.getDiagnostics().isEmpty());
       int before = h.client.publishedFor(uri).size();
       h.close(uri);
-      PublishDiagnosticsParams closed = h.client.await(uri, p -> p.getDiagnostics().isEmpty()
-          && h.client.publishedFor(uri).indexOf(p) >= before);
+      PublishDiagnosticsParams closed =
+          h.client.await(
+              uri,
+              p -> p.getDiagnostics().isEmpty() && h.client.publishedFor(uri).indexOf(p) >= before);
       assertNull(closed.getVersion());
     }
   }
@@ -112,7 +123,8 @@ class ProtocolTest {
       for (int v = 2; v <= 21; v++) {
         h.changeAll(uri, v, v % 2 == 0 ? VALID : BROKEN);
       }
-      PublishDiagnosticsParams last = h.client.await(uri, p -> Integer.valueOf(21).equals(p.getVersion()));
+      PublishDiagnosticsParams last =
+          h.client.await(uri, p -> Integer.valueOf(21).equals(p.getVersion()));
       assertFalse(last.getDiagnostics().isEmpty(), "version 21 is the broken text");
       Thread.sleep(2 * JonquilLanguageServer.DEBOUNCE.toMillis() + 200);
       List<PublishDiagnosticsParams> all = h.client.publishedFor(uri);
@@ -136,9 +148,16 @@ class ProtocolTest {
       assertEquals(new Range(new Position(0, 4), new Position(0, 9)), byCode(p, "J203").getRange());
 
       // Delete the 'x' by its UTF-16 range: only the missing file is left.
-      h.change(uri, 2, new TextDocumentContentChangeEvent(new Range(new Position(0, 9), new Position(0, 11)), ""));
-      PublishDiagnosticsParams after = h.client.await(uri, q -> Integer.valueOf(2).equals(q.getVersion()));
-      assertEquals(List.of("J203"), after.getDiagnostics().stream().map(d -> d.getCode().getLeft()).toList());
+      h.change(
+          uri,
+          2,
+          new TextDocumentContentChangeEvent(
+              new Range(new Position(0, 9), new Position(0, 11)), ""));
+      PublishDiagnosticsParams after =
+          h.client.await(uri, q -> Integer.valueOf(2).equals(q.getVersion()));
+      assertEquals(
+          List.of("J203"),
+          after.getDiagnostics().stream().map(d -> d.getCode().getLeft()).toList());
     }
   }
 
@@ -151,7 +170,8 @@ class ProtocolTest {
       assertEquals("utf-8", init.getCapabilities().getPositionEncoding());
       h.open(uri, 1, text);
       PublishDiagnosticsParams p = h.client.await(uri, q -> q.getDiagnostics().size() == 2);
-      assertEquals(new Range(new Position(0, 13), new Position(0, 14)), byCode(p, "J101").getRange());
+      assertEquals(
+          new Range(new Position(0, 13), new Position(0, 14)), byCode(p, "J101").getRange());
     }
   }
 
@@ -165,10 +185,14 @@ class ProtocolTest {
       h.initialize(dir);
       h.open(uriLf, 1, lf);
       h.open(uriCrlf, 1, crlf);
-      List<Range> a = h.client.await(uriLf, p -> !p.getDiagnostics().isEmpty()).getDiagnostics().stream()
-          .map(Diagnostic::getRange).toList();
-      List<Range> b = h.client.await(uriCrlf, p -> !p.getDiagnostics().isEmpty()).getDiagnostics().stream()
-          .map(Diagnostic::getRange).toList();
+      List<Range> a =
+          h.client.await(uriLf, p -> !p.getDiagnostics().isEmpty()).getDiagnostics().stream()
+              .map(Diagnostic::getRange)
+              .toList();
+      List<Range> b =
+          h.client.await(uriCrlf, p -> !p.getDiagnostics().isEmpty()).getDiagnostics().stream()
+              .map(Diagnostic::getRange)
+              .toList();
       assertEquals(a, b);
       assertEquals(1, a.get(0).getStart().getLine());
     }
@@ -184,9 +208,12 @@ class ProtocolTest {
       h.open(upper, 1, BROKEN);
       h.client.await(upper, p -> !p.getDiagnostics().isEmpty());
       h.changeAll(lower, 2, VALID);
-      PublishDiagnosticsParams fixed = h.client.await(upper, p -> Integer.valueOf(2).equals(p.getVersion()));
+      PublishDiagnosticsParams fixed =
+          h.client.await(upper, p -> Integer.valueOf(2).equals(p.getVersion()));
       assertEquals(List.of(), fixed.getDiagnostics());
-      assertTrue(h.client.publishedFor(lower).isEmpty(), "published under the client's first spelling only");
+      assertTrue(
+          h.client.publishedFor(lower).isEmpty(),
+          "published under the client's first spelling only");
     }
   }
 
@@ -208,24 +235,34 @@ class ProtocolTest {
   @Test
   void aFailingHandlerGivesInternalErrorAndTheServerKeepsAnswering() throws Exception {
     String uri = uriOf("hover.jonq", VALID);
-    EditorAnswers throwing = new Delegating(new NoAnswers()) {
-      @Override
-      public Optional<HoverInfo> hover(Result result, Path file, int offset) {
-        throw new IllegalStateException("boom");
-      }
-    };
+    EditorAnswers throwing =
+        new Delegating(new NoAnswers()) {
+          @Override
+          public Optional<HoverInfo> hover(Result result, Path file, int offset) {
+            throw new IllegalStateException("boom");
+          }
+        };
     try (LspHarness h = new LspHarness(throwing)) {
       h.initialize(dir);
       h.open(uri, 1, VALID);
       h.client.await(uri, p -> Integer.valueOf(1).equals(p.getVersion()));
-      ExecutionException e = org.junit.jupiter.api.Assertions.assertThrows(ExecutionException.class,
-          () -> h.remote.getTextDocumentService()
-              .hover(new HoverParams(new TextDocumentIdentifier(uri), new Position(0, 3)))
-              .get(10, TimeUnit.SECONDS));
-      assertEquals(ResponseErrorCode.InternalError.getValue(), responseError(e).getResponseError().getCode());
+      ExecutionException e =
+          org.junit.jupiter.api.Assertions.assertThrows(
+              ExecutionException.class,
+              () ->
+                  h.remote
+                      .getTextDocumentService()
+                      .hover(new HoverParams(new TextDocumentIdentifier(uri), new Position(0, 3)))
+                      .get(10, TimeUnit.SECONDS));
+      assertEquals(
+          ResponseErrorCode.InternalError.getValue(),
+          responseError(e).getResponseError().getCode());
       assertTrue(responseError(e).getResponseError().getMessage().contains("boom"));
-      var symbols = h.remote.getTextDocumentService()
-          .documentSymbol(new DocumentSymbolParams(new TextDocumentIdentifier(uri))).get(10, TimeUnit.SECONDS);
+      var symbols =
+          h.remote
+              .getTextDocumentService()
+              .documentSymbol(new DocumentSymbolParams(new TextDocumentIdentifier(uri)))
+              .get(10, TimeUnit.SECONDS);
       assertEquals(List.of(), symbols);
     }
   }
@@ -235,20 +272,25 @@ class ProtocolTest {
     String text = "// 😀\nmaterial glass = index 1.5\n";
     String uri = uriOf("h.jonq", text);
     int[] asked = new int[1];
-    EditorAnswers answers = new Delegating(new NoAnswers()) {
-      @Override
-      public Optional<HoverInfo> hover(Result result, Path file, int offset) {
-        asked[0] = offset;
-        return Optional.of(new HoverInfo("**glass**", TextRange.of(offset, offset + 5)));
-      }
-    };
+    EditorAnswers answers =
+        new Delegating(new NoAnswers()) {
+          @Override
+          public Optional<HoverInfo> hover(Result result, Path file, int offset) {
+            asked[0] = offset;
+            return Optional.of(new HoverInfo("**glass**", TextRange.of(offset, offset + 5)));
+          }
+        };
     try (LspHarness h = new LspHarness(answers)) {
       h.initialize(dir);
       h.open(uri, 1, text);
-      var hover = h.remote.getTextDocumentService()
-          .hover(new HoverParams(new TextDocumentIdentifier(uri), new Position(1, 9))).get(10, TimeUnit.SECONDS);
+      var hover =
+          h.remote
+              .getTextDocumentService()
+              .hover(new HoverParams(new TextDocumentIdentifier(uri), new Position(1, 9)))
+              .get(10, TimeUnit.SECONDS);
       assertEquals(text.indexOf("glass"), asked[0]);
-      // This client names no hover contentFormat, so it gets plain text: the Markdown marks are stripped.
+      // This client names no hover contentFormat, so it gets plain text: the Markdown marks are
+      // stripped.
       assertEquals("plaintext", hover.getContents().getRight().getKind());
       assertEquals("glass", hover.getContents().getRight().getValue());
       assertEquals(new Range(new Position(1, 9), new Position(1, 14)), hover.getRange());
@@ -275,7 +317,9 @@ class ProtocolTest {
   }
 
   private static Diagnostic byCode(PublishDiagnosticsParams p, String code) {
-    return p.getDiagnostics().stream().filter(d -> code.equals(d.getCode().getLeft())).findFirst()
+    return p.getDiagnostics().stream()
+        .filter(d -> code.equals(d.getCode().getLeft()))
+        .findFirst()
         .orElseThrow(() -> new AssertionError("no " + code + " in " + p));
   }
 }

@@ -24,13 +24,15 @@ import org.eclipse.lsp4j.TextDocumentIdentifier;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-/** Pull diagnostics for clients that advertise textDocument.diagnostic (full, then unchanged, never pushed); push for the others. */
+/**
+ * Pull diagnostics for clients that advertise textDocument.diagnostic (full, then unchanged, never
+ * pushed); push for the others.
+ */
 class PullDiagnosticsTest {
   static final String BROKEN = ProtocolTest.BROKEN;
   static final String VALID = ProtocolTest.VALID;
 
-  @TempDir
-  Path dir;
+  @TempDir Path dir;
 
   private String write(String name, String text) throws Exception {
     Files.writeString(dir.resolve(".jonquil-root"), "");
@@ -47,7 +49,8 @@ class PullDiagnosticsTest {
     return caps;
   }
 
-  private static DocumentDiagnosticReport pull(LspHarness h, String uri, String previous) throws Exception {
+  private static DocumentDiagnosticReport pull(LspHarness h, String uri, String previous)
+      throws Exception {
     DocumentDiagnosticParams params = new DocumentDiagnosticParams(new TextDocumentIdentifier(uri));
     params.setPreviousResultId(previous);
     return h.remote.getTextDocumentService().diagnostic(params).get(20, TimeUnit.SECONDS);
@@ -58,7 +61,8 @@ class PullDiagnosticsTest {
     String uri = write("pulled.jonq", BROKEN);
     try (LspHarness h = new LspHarness()) {
       InitializeResult init = h.initialize(dir, pullClient());
-      assertNotNull(init.getCapabilities().getDiagnosticProvider(), "the diagnostic provider is advertised");
+      assertNotNull(
+          init.getCapabilities().getDiagnosticProvider(), "the diagnostic provider is advertised");
       assertTrue(init.getCapabilities().getDiagnosticProvider().isInterFileDependencies());
       assertFalse(init.getCapabilities().getDiagnosticProvider().isWorkspaceDiagnostics());
 
@@ -69,7 +73,8 @@ class PullDiagnosticsTest {
       assertNotNull(full.getResultId());
       assertEquals(1, full.getItems().size());
       assertEquals("J405", full.getItems().get(0).getCode().getLeft());
-      assertEquals(new Range(new Position(0, 24), new Position(0, 29)), full.getItems().get(0).getRange());
+      assertEquals(
+          new Range(new Position(0, 24), new Position(0, 29)), full.getItems().get(0).getRange());
 
       DocumentDiagnosticReport again = pull(h, uri, full.getResultId());
       assertTrue(again.isRight(), "the same result id gives unchanged: " + again);

@@ -19,10 +19,15 @@ import org.junit.jupiter.api.Test;
 class UnitsTest {
   @Test
   void uriSpellingsOfOneFileGiveOneKey() {
-    assertEquals(Documents.pathOf("file:///tmp/%5Bx%5D.jonq"), Documents.pathOf("file:///tmp/%5bx%5d.jonq"));
-    assertEquals(Documents.pathOf("file:///c%3A/w/a.jonq"), Documents.pathOf("file:///C:/w/a.jonq"));
-    assertEquals(Documents.pathOf("file:///c:/w/a.jonq"), Documents.pathOf("FILE://localhost/C%3a/w/./a.jonq"));
-    assertEquals(Path.of("/tmp/a b.jonq"), Documents.pathOf("file:///tmp/a%20b.jonq").orElseThrow());
+    assertEquals(
+        Documents.pathOf("file:///tmp/%5Bx%5D.jonq"), Documents.pathOf("file:///tmp/%5bx%5d.jonq"));
+    assertEquals(
+        Documents.pathOf("file:///c%3A/w/a.jonq"), Documents.pathOf("file:///C:/w/a.jonq"));
+    assertEquals(
+        Documents.pathOf("file:///c:/w/a.jonq"),
+        Documents.pathOf("FILE://localhost/C%3a/w/./a.jonq"));
+    assertEquals(
+        Path.of("/tmp/a b.jonq"), Documents.pathOf("file:///tmp/a%20b.jonq").orElseThrow());
     assertEquals(Path.of("/tmp/a+b.jonq"), Documents.pathOf("file:///tmp/a+b.jonq").orElseThrow());
     assertTrue(Documents.pathOf("untitled:Untitled-1").isEmpty());
     assertTrue(Documents.pathOf("file:///tmp/%zz").isEmpty());
@@ -41,7 +46,8 @@ class UnitsTest {
     assertEquals(x, u16.offset(f, new Position(0, 10)));
     assertEquals(x, u8.offset(f, new Position(0, 13)));
     assertEquals(x, u32.offset(f, new Position(0, 9)));
-    // Past the line end clamps before the CRLF; past the last line clamps to the end; inside a pair never splits it.
+    // Past the line end clamps before the CRLF; past the last line clamps to the end; inside a pair
+    // never splits it.
     assertEquals(f.text().indexOf('\r'), u16.offset(f, new Position(0, 99)));
     assertEquals(f.text().length(), u16.offset(f, new Position(99, 0)));
     assertEquals(0, u16.offset(f, new Position(-1, -5)));
@@ -53,7 +59,11 @@ class UnitsTest {
   void incrementalChangesApplyInTheNegotiatedEncoding() {
     Convert u8 = new Convert(Convert.Encoding.UTF_8, p -> null);
     String text = "a😀b\nc";
-    String out = u8.applyChange(text, new TextDocumentContentChangeEvent(new Range(new Position(0, 5), new Position(1, 0)), "X"));
+    String out =
+        u8.applyChange(
+            text,
+            new TextDocumentContentChangeEvent(
+                new Range(new Position(0, 5), new Position(1, 0)), "X"));
     assertEquals("a😀Xc", out);
     assertEquals("whole", u8.applyChange(text, new TextDocumentContentChangeEvent("whole")));
   }
@@ -65,53 +75,72 @@ class UnitsTest {
     CountDownLatch releaseFirst = new CountDownLatch(1);
     CountDownLatch secondDone = new CountDownLatch(1);
     // A long debounce: the first run can start well before it only if the leading edge works.
-    try (CheckScheduler s = new CheckScheduler(superseded -> {
-      if (runs.incrementAndGet() == 1) {
-        firstStarted.countDown();
-        await(releaseFirst);
-        return true;
-      }
-      secondDone.countDown();
-      return true;
-    }, t -> { }, Duration.ofMillis(2000), Duration.ofSeconds(10), () -> { }, true)) {
+    try (CheckScheduler s =
+        new CheckScheduler(
+            superseded -> {
+              if (runs.incrementAndGet() == 1) {
+                firstStarted.countDown();
+                await(releaseFirst);
+                return true;
+              }
+              secondDone.countDown();
+              return true;
+            },
+            t -> {},
+            Duration.ofMillis(2000),
+            Duration.ofSeconds(10),
+            () -> {},
+            true)) {
       long asked = System.nanoTime();
       s.request();
       assertTrue(firstStarted.await(5, TimeUnit.SECONDS));
-      assertTrue(System.nanoTime() - asked < TimeUnit.MILLISECONDS.toNanos(1000),
+      assertTrue(
+          System.nanoTime() - asked < TimeUnit.MILLISECONDS.toNanos(1000),
           "a request after a pause starts its run without waiting for the 2 s debounce");
       for (int i = 0; i < 49; i++) {
         s.request();
       }
       releaseFirst.countDown();
-      assertTrue(secondDone.await(5, TimeUnit.SECONDS), "the requests made during the run get a run");
+      assertTrue(
+          secondDone.await(5, TimeUnit.SECONDS), "the requests made during the run get a run");
       Thread.sleep(500);
       assertEquals(2, runs.get(), "forty-nine requests in quick succession are one trailing run");
     }
   }
 
   @Test
-  void aRunGivesUpWhenSupersededButSteadyRequestsStillGetAFinishedRunWithinTheMaxDelay() throws Exception {
+  void aRunGivesUpWhenSupersededButSteadyRequestsStillGetAFinishedRunWithinTheMaxDelay()
+      throws Exception {
     AtomicInteger gaveUp = new AtomicInteger();
     AtomicInteger finished = new AtomicInteger();
-    try (CheckScheduler s = new CheckScheduler(superseded -> {
-      // A long check that polls like the checker does between stages.
-      for (int i = 0; i < 40; i++) {
-        if (superseded.getAsBoolean()) {
-          gaveUp.incrementAndGet();
-          return false;
-        }
-        sleep(5);
-      }
-      finished.incrementAndGet();
-      return true;
-    }, t -> { }, Duration.ofMillis(20), Duration.ofMillis(400), () -> { }, true)) {
+    try (CheckScheduler s =
+        new CheckScheduler(
+            superseded -> {
+              // A long check that polls like the checker does between stages.
+              for (int i = 0; i < 40; i++) {
+                if (superseded.getAsBoolean()) {
+                  gaveUp.incrementAndGet();
+                  return false;
+                }
+                sleep(5);
+              }
+              finished.incrementAndGet();
+              return true;
+            },
+            t -> {},
+            Duration.ofMillis(20),
+            Duration.ofMillis(400),
+            () -> {},
+            true)) {
       long end = System.nanoTime() + TimeUnit.MILLISECONDS.toNanos(2000);
       while (System.nanoTime() < end) {
         s.request(); // an edit every 10 ms: every run is superseded before it ends
         Thread.sleep(10);
       }
       assertTrue(gaveUp.get() > 0, "stale runs give up");
-      assertTrue(finished.get() >= 1, "yet the 400 ms bound lets runs finish during steady typing: " + finished.get());
+      assertTrue(
+          finished.get() >= 1,
+          "yet the 400 ms bound lets runs finish during steady typing: " + finished.get());
     }
   }
 
@@ -120,12 +149,17 @@ class UnitsTest {
     AtomicInteger runs = new AtomicInteger();
     AtomicInteger failures = new AtomicInteger();
     CountDownLatch second = new CountDownLatch(1);
-    try (CheckScheduler s = new CheckScheduler(() -> {
-      if (runs.incrementAndGet() == 1) {
-        throw new StackOverflowError("deep");
-      }
-      second.countDown();
-    }, t -> failures.incrementAndGet(), Duration.ofMillis(50), Duration.ofSeconds(1))) {
+    try (CheckScheduler s =
+        new CheckScheduler(
+            () -> {
+              if (runs.incrementAndGet() == 1) {
+                throw new StackOverflowError("deep");
+              }
+              second.countDown();
+            },
+            t -> failures.incrementAndGet(),
+            Duration.ofMillis(50),
+            Duration.ofSeconds(1))) {
       s.request();
       long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(5);
       while (failures.get() == 0 && System.nanoTime() < deadline) {
@@ -156,6 +190,8 @@ class UnitsTest {
   @Test
   void projectRootIsTheInnermostFolder() {
     Path file = Path.of("/w/a/b/c.jonq");
-    assertEquals(Path.of("/w/a"), CheckCycle.projectRoot(file, List.of(Path.of("/w"), Path.of("/w/a"), Path.of("/x"))));
+    assertEquals(
+        Path.of("/w/a"),
+        CheckCycle.projectRoot(file, List.of(Path.of("/w"), Path.of("/w/a"), Path.of("/x"))));
   }
 }

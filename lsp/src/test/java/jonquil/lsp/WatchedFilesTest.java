@@ -17,14 +17,16 @@ import org.eclipse.lsp4j.WorkspaceClientCapabilities;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-/** A used file changed on disk re-checks the open documents that use it, with or without the editor watching files for us. */
+/**
+ * A used file changed on disk re-checks the open documents that use it, with or without the editor
+ * watching files for us.
+ */
 class WatchedFilesTest {
   static final String LIB = "material glass = index 1.5\n";
   static final String LIB_RENAMED = "material other_glass = index 1.5\n";
   static final String MAIN = "use \"lib.jonq\"\nwindow w { material glass; thickness 1 mm }\n";
 
-  @TempDir
-  Path dir;
+  @TempDir Path dir;
 
   private String setUp() throws Exception {
     Files.writeString(dir.resolve(".jonquil-root"), "");
@@ -49,7 +51,8 @@ class WatchedFilesTest {
     try (LspHarness h = new LspHarness(new NoAnswers(), java.time.Duration.ofMillis(20))) {
       h.initialize(dir, caps);
       h.open(uri, 1, MAIN);
-      PublishDiagnosticsParams before = h.client.await(uri, p -> Integer.valueOf(1).equals(p.getVersion()));
+      PublishDiagnosticsParams before =
+          h.client.await(uri, p -> Integer.valueOf(1).equals(p.getVersion()));
       assertFalse(names(before, "J212"), before.toString());
 
       String options;
@@ -62,8 +65,13 @@ class WatchedFilesTest {
       assertTrue(options.contains("\"**/*.jonq\""), options);
 
       Files.writeString(dir.resolve("lib.jonq"), LIB_RENAMED); // e.g. a git checkout
-      h.remote.getWorkspaceService().didChangeWatchedFiles(new DidChangeWatchedFilesParams(
-          List.of(new FileEvent(dir.resolve("lib.jonq").toUri().toString(), FileChangeType.Changed))));
+      h.remote
+          .getWorkspaceService()
+          .didChangeWatchedFiles(
+              new DidChangeWatchedFilesParams(
+                  List.of(
+                      new FileEvent(
+                          dir.resolve("lib.jonq").toUri().toString(), FileChangeType.Changed))));
       PublishDiagnosticsParams after = h.client.await(uri, p -> names(p, "J212"));
       assertEquals(1, after.getVersion(), "the buffer did not change, its diagnostics did");
     }
@@ -75,18 +83,22 @@ class WatchedFilesTest {
     try (LspHarness h = new LspHarness(new NoAnswers(), java.time.Duration.ofMillis(20))) {
       h.initialize(dir); // no workspace capabilities at all, as Neovim 0.7 sends
       h.open(uri, 1, MAIN);
-      assertFalse(names(h.client.await(uri, p -> Integer.valueOf(1).equals(p.getVersion())), "J212"));
+      assertFalse(
+          names(h.client.await(uri, p -> Integer.valueOf(1).equals(p.getVersion())), "J212"));
       synchronized (h.client) {
-        assertEquals(List.of(), h.client.registrations, "no registration without dynamicRegistration");
+        assertEquals(
+            List.of(), h.client.registrations, "no registration without dynamicRegistration");
       }
 
       Files.writeString(dir.resolve("lib.jonq"), LIB_RENAMED);
       h.changeAll(uri, 2, MAIN); // any edit re-checks, and the check reads the used file again
-      assertTrue(names(h.client.await(uri, p -> Integer.valueOf(2).equals(p.getVersion())), "J212"));
+      assertTrue(
+          names(h.client.await(uri, p -> Integer.valueOf(2).equals(p.getVersion())), "J212"));
 
       Files.writeString(dir.resolve("lib.jonq"), LIB);
       h.changeAll(uri, 3, MAIN);
-      assertFalse(names(h.client.await(uri, p -> Integer.valueOf(3).equals(p.getVersion())), "J212"));
+      assertFalse(
+          names(h.client.await(uri, p -> Integer.valueOf(3).equals(p.getVersion())), "J212"));
     }
   }
 }

@@ -53,28 +53,32 @@ import org.junit.jupiter.api.io.TempDir;
 
 /**
  * The workspace index: every spec under the workspace folders is known from the start, so
- * workspace/symbol, references and rename reach files that were never opened and that no open
- * file uses; it follows the disk (through the editor's watcher, or a re-scan when there is
- * none), reports its first pass as work-done progress only to a client that takes it, and
- * keeps each folder's names to that folder.
+ * workspace/symbol, references and rename reach files that were never opened and that no open file
+ * uses; it follows the disk (through the editor's watcher, or a re-scan when there is none),
+ * reports its first pass as work-done progress only to a client that takes it, and keeps each
+ * folder's names to that folder.
  */
 class WorkspaceIndexTest {
   static final String MIRROR = " { metal silver; aoi 45 deg }\n";
   static final String LIB = "mirror fold" + MIRROR + "mirror spare" + MIRROR;
-  /** A bench that uses {@code fold} from the library at {@code path}, on line 4 (after the 'use' line). */
+
+  /**
+   * A bench that uses {@code fold} from the library at {@code path}, on line 4 (after the 'use'
+   * line).
+   */
   static String bench(String path, String source) {
     return """
-        use "%s"
-        source %s { wavelength 1064 nm; power 2 W }
-        probe spot
-        train main {
-          %s -> 100 mm -> fold -> 20 mm -> spot
-        }
-        """.formatted(path, source, source);
+    use "%s"
+    source %s { wavelength 1064 nm; power 2 W }
+    probe spot
+    train main {
+      %s -> 100 mm -> fold -> 20 mm -> spot
+    }
+    """
+        .formatted(path, source, source);
   }
 
-  @TempDir
-  Path dir;
+  @TempDir Path dir;
 
   private static Path write(Path p, String text) throws Exception {
     Files.createDirectories(p.getParent());
@@ -92,15 +96,20 @@ class WorkspaceIndexTest {
     for (int i = 0; i < lines.length; i++) {
       int col = lines[i].indexOf(word);
       if (col >= 0) {
-        return new Location(uri(file), new Range(new Position(i, col), new Position(i, col + word.length())));
+        return new Location(
+            uri(file), new Range(new Position(i, col), new Position(i, col + word.length())));
       }
     }
     throw new AssertionError(word + " not in " + file);
   }
 
   private static List<WorkspaceSymbol> symbols(LspHarness h, String query) throws Exception {
-    return new ArrayList<>(h.remote.getWorkspaceService().symbol(new WorkspaceSymbolParams(query))
-        .get(20, TimeUnit.SECONDS).getRight());
+    return new ArrayList<>(
+        h.remote
+            .getWorkspaceService()
+            .symbol(new WorkspaceSymbolParams(query))
+            .get(20, TimeUnit.SECONDS)
+            .getRight());
   }
 
   private static List<String> names(LspHarness h, String query) throws Exception {
@@ -113,15 +122,24 @@ class WorkspaceIndexTest {
 
   private static List<Location> references(LspHarness h, Location from, boolean includeDeclaration)
       throws Exception {
-    List<Location> out = new ArrayList<>(h.remote.getTextDocumentService().references(new ReferenceParams(
-        new TextDocumentIdentifier(from.getUri()), from.getRange().getStart(),
-        new ReferenceContext(includeDeclaration)))
-        .get(20, TimeUnit.SECONDS));
-    out.sort(Comparator.comparing(Location::getUri).thenComparing(l -> l.getRange().getStart().getLine()));
+    List<Location> out =
+        new ArrayList<>(
+            h.remote
+                .getTextDocumentService()
+                .references(
+                    new ReferenceParams(
+                        new TextDocumentIdentifier(from.getUri()),
+                        from.getRange().getStart(),
+                        new ReferenceContext(includeDeclaration)))
+                .get(20, TimeUnit.SECONDS));
+    out.sort(
+        Comparator.comparing(Location::getUri)
+            .thenComparing(l -> l.getRange().getStart().getLine()));
     return out;
   }
 
-  private static ClientCapabilities client(boolean progress, boolean watchers, boolean documentChanges) {
+  private static ClientCapabilities client(
+      boolean progress, boolean watchers, boolean documentChanges) {
     ClientCapabilities caps = new ClientCapabilities();
     WorkspaceClientCapabilities workspace = new WorkspaceClientCapabilities();
     if (watchers) {
@@ -147,20 +165,29 @@ class WorkspaceIndexTest {
     // Left out by design: hidden folders, build output, and files over the size cap.
     write(dir.resolve(".cache/hidden.jonq"), "mirror lonely_hidden" + MIRROR);
     write(dir.resolve("target/classes/built.jonq"), "mirror lonely_built" + MIRROR);
-    write(dir.resolve("huge.jonq"), "mirror lonely_huge" + MIRROR
-        + "// padding\n".repeat((int) (WorkspaceIndex.MAX_FILE_BYTES / 10) + 1));
+    write(
+        dir.resolve("huge.jonq"),
+        "mirror lonely_huge"
+            + MIRROR
+            + "// padding\n".repeat((int) (WorkspaceIndex.MAX_FILE_BYTES / 10) + 1));
     try (LspHarness h = new LspHarness(new IdeAnswers())) {
       h.initialize(dir, new ClientCapabilities());
       h.open(uri(main), 1, bench("lib.jonq", "seed"));
       List<WorkspaceSymbol> found = symbols(h, "lonely");
       assertEquals(List.of("lonely_fold"), found.stream().map(WorkspaceSymbol::getName).toList());
-      assertEquals(at(stray, "mirror lonely_fold" + MIRROR, "lonely_fold"), found.get(0).getLocation().getLeft());
-      assertEquals(List.of("fold", "lonely_fold"), names(h, "fold"), "the used library's 'fold' once, from its check");
+      assertEquals(
+          at(stray, "mirror lonely_fold" + MIRROR, "lonely_fold"),
+          found.get(0).getLocation().getLeft());
+      assertEquals(
+          List.of("fold", "lonely_fold"),
+          names(h, "fold"),
+          "the used library's 'fold' once, from its check");
     }
   }
 
   @Test
-  void referencesAndRenameFromALibraryElementReachUnopenedUsersAnywhereInTheFolder() throws Exception {
+  void referencesAndRenameFromALibraryElementReachUnopenedUsersAnywhereInTheFolder()
+      throws Exception {
     Path lib = write(dir.resolve("parts/lib.jonq"), LIB);
     String openText = bench("parts/lib.jonq", "seed");
     Path open = write(dir.resolve("open.jonq"), openText);
@@ -176,18 +203,38 @@ class WorkspaceIndexTest {
       h.client.await(uri(lib), p -> Integer.valueOf(3).equals(p.getVersion()));
 
       Location declaration = at(lib, LIB, "fold");
-      List<Location> expected = new ArrayList<>(List.of(at(a, aText, "fold"), at(b, bText, "fold"),
-          declaration, at(open, openText, "fold")));
+      List<Location> expected =
+          new ArrayList<>(
+              List.of(
+                  at(a, aText, "fold"),
+                  at(b, bText, "fold"),
+                  declaration,
+                  at(open, openText, "fold")));
       expected.sort(Comparator.comparing(Location::getUri));
-      assertEquals(expected, references(h, declaration), "a and b were never opened, and no open file uses them");
-      assertFalse(references(h, declaration).stream().anyMatch(l -> l.getUri().equals(uri(unrelated))));
-      assertEquals(references(h, declaration), references(h, at(open, openText, "fold")), "the same from a use");
+      assertEquals(
+          expected,
+          references(h, declaration),
+          "a and b were never opened, and no open file uses them");
+      assertFalse(
+          references(h, declaration).stream().anyMatch(l -> l.getUri().equals(uri(unrelated))));
+      assertEquals(
+          references(h, declaration),
+          references(h, at(open, openText, "fold")),
+          "the same from a use");
       List<Location> usesOnly = new ArrayList<>(expected);
       usesOnly.remove(declaration);
-      assertEquals(usesOnly, references(h, declaration, false), "without includeDeclaration, the uses only");
+      assertEquals(
+          usesOnly, references(h, declaration, false), "without includeDeclaration, the uses only");
 
-      WorkspaceEdit edit = h.remote.getTextDocumentService().rename(new RenameParams(
-          new TextDocumentIdentifier(uri(lib)), declaration.getRange().getStart(), "steer")).get(20, TimeUnit.SECONDS);
+      WorkspaceEdit edit =
+          h.remote
+              .getTextDocumentService()
+              .rename(
+                  new RenameParams(
+                      new TextDocumentIdentifier(uri(lib)),
+                      declaration.getRange().getStart(),
+                      "steer"))
+              .get(20, TimeUnit.SECONDS);
       Map<String, Integer> versions = new HashMap<>();
       List<Location> touched = new ArrayList<>();
       for (Either<TextDocumentEdit, ?> change : edit.getDocumentChanges()) {
@@ -212,7 +259,8 @@ class WorkspaceIndexTest {
   @Test
   void openBufferTextOverridesTheDiskForEveryIndexedFile() throws Exception {
     Path lib = write(dir.resolve("lib.jonq"), LIB);
-    String userText = bench("lib.jonq", "lamp").replace("fold", "novel"); // 'novel' is not declared on disk
+    String userText =
+        bench("lib.jonq", "lamp").replace("fold", "novel"); // 'novel' is not declared on disk
     Path user = write(dir.resolve("user.jonq"), userText);
     try (LspHarness h = new LspHarness(new IdeAnswers())) {
       h.initialize(dir, new ClientCapabilities());
@@ -220,14 +268,19 @@ class WorkspaceIndexTest {
       h.open(uri(lib), 1, buffer);
       h.client.await(uri(lib), p -> Integer.valueOf(1).equals(p.getVersion()));
       Location novel = at(lib, buffer, "novel");
-      assertEquals(List.of(novel, at(user, userText, "novel")), references(h, novel),
+      assertEquals(
+          List.of(novel, at(user, userText, "novel")),
+          references(h, novel),
           "the unopened user resolves 'novel' against the library's unsaved buffer");
 
       String renamed = LIB + "mirror novel2" + MIRROR;
       h.changeAll(uri(lib), 2, renamed);
       h.client.await(uri(lib), p -> Integer.valueOf(2).equals(p.getVersion()));
       Location novel2 = at(lib, renamed, "novel2");
-      assertEquals(List.of(novel2), references(h, novel2), "edited in the buffer: the user's 'novel' no longer is it");
+      assertEquals(
+          List.of(novel2),
+          references(h, novel2),
+          "edited in the buffer: the user's 'novel' no longer is it");
     }
   }
 
@@ -239,19 +292,29 @@ class WorkspaceIndexTest {
       h.initialize(dir, client(false, true, false));
       assertEquals(List.of(), names(h, "abc"));
       Path created = write(dir.resolve("new/abc.jonq"), "mirror abc_new" + MIRROR);
-      assertEquals(List.of(), names(h, "abc"), "a watching client reports changes; nothing is re-scanned");
-      h.remote.getWorkspaceService().didChangeWatchedFiles(new DidChangeWatchedFilesParams(
-          List.of(new FileEvent(uri(created), FileChangeType.Created))));
+      assertEquals(
+          List.of(), names(h, "abc"), "a watching client reports changes; nothing is re-scanned");
+      h.remote
+          .getWorkspaceService()
+          .didChangeWatchedFiles(
+              new DidChangeWatchedFilesParams(
+                  List.of(new FileEvent(uri(created), FileChangeType.Created))));
       assertEquals(List.of("abc_new"), names(h, "abc"));
 
       Files.writeString(created, "mirror abc_renamed" + MIRROR);
-      h.remote.getWorkspaceService().didChangeWatchedFiles(new DidChangeWatchedFilesParams(
-          List.of(new FileEvent(uri(created), FileChangeType.Changed))));
+      h.remote
+          .getWorkspaceService()
+          .didChangeWatchedFiles(
+              new DidChangeWatchedFilesParams(
+                  List.of(new FileEvent(uri(created), FileChangeType.Changed))));
       assertEquals(List.of("abc_renamed"), names(h, "abc"));
 
       Files.delete(created);
-      h.remote.getWorkspaceService().didChangeWatchedFiles(new DidChangeWatchedFilesParams(
-          List.of(new FileEvent(uri(created), FileChangeType.Deleted))));
+      h.remote
+          .getWorkspaceService()
+          .didChangeWatchedFiles(
+              new DidChangeWatchedFilesParams(
+                  List.of(new FileEvent(uri(created), FileChangeType.Deleted))));
       assertEquals(List.of(), names(h, "abc"));
     }
   }
@@ -271,7 +334,9 @@ class WorkspaceIndexTest {
       String userText = bench("lib.jonq", "lamp");
       Path user = write(dir.resolve("later/user.jonq"), bench("../lib.jonq", "lamp"));
       assertEquals(List.of("lamp"), names(h, "lamp"), "a new file (e.g. a git checkout)");
-      assertTrue(references(h, declaration).contains(at(user, userText, "fold")), "and its use of the library");
+      assertTrue(
+          references(h, declaration).contains(at(user, userText, "fold")),
+          "and its use of the library");
 
       Files.writeString(user, bench("../lib.jonq", "laser"));
       assertEquals(List.of(), names(h, "lamp"), "a changed file");
@@ -302,15 +367,20 @@ class WorkspaceIndexTest {
         created = List.copyOf(h.client.progressTokens);
       }
       assertEquals(1, created.size(), "one token, created before use");
-      assertTrue(sent.stream().allMatch(p -> created.get(0).equals(Convert.progressToken(p.getToken()))));
+      assertTrue(
+          sent.stream().allMatch(p -> created.get(0).equals(Convert.progressToken(p.getToken()))));
       List<WorkDoneProgressKind> kinds = sent.stream().map(p -> value(p).getKind()).toList();
       assertEquals(WorkDoneProgressKind.begin, kinds.get(0));
       assertEquals(WorkDoneProgressKind.end, kinds.get(kinds.size() - 1));
-      assertTrue(kinds.subList(1, kinds.size() - 1).stream().allMatch(k -> k == WorkDoneProgressKind.report)
-          && kinds.size() >= 3, "reports between begin and end: " + kinds);
+      assertTrue(
+          kinds.subList(1, kinds.size() - 1).stream()
+                  .allMatch(k -> k == WorkDoneProgressKind.report)
+              && kinds.size() >= 3,
+          "reports between begin and end: " + kinds);
       WorkDoneProgressBegin begin = (WorkDoneProgressBegin) value(sent.get(0));
       assertEquals(Boolean.TRUE, begin.getCancellable());
-      assertEquals("indexed 5 files", ((WorkDoneProgressEnd) value(sent.get(sent.size() - 1))).getMessage());
+      assertEquals(
+          "indexed 5 files", ((WorkDoneProgressEnd) value(sent.get(sent.size() - 1))).getMessage());
       assertEquals(5, names(h, "m").size());
     }
     try (LspHarness h = new LspHarness(new IdeAnswers())) {
@@ -327,36 +397,50 @@ class WorkspaceIndexTest {
   void cancellingTheProgressStopsIndexingAndTheServerGoesOn() throws Exception {
     int files = 40;
     for (int i = 0; i < files; i++) {
-      write(dir.resolve("specs/s" + String.format("%02d", i) + ".jonq"), "mirror part_" + i + MIRROR);
+      write(
+          dir.resolve("specs/s" + String.format("%02d", i) + ".jonq"), "mirror part_" + i + MIRROR);
     }
     CountDownLatch cancelSent = new CountDownLatch(1);
-    EditorAnswers answers = new Delegating(new IdeAnswers()) {
-      @Override
-      public Optional<FileIndex> index(Result result, Path file) {
-        try {
-          // The first file waits until the editor has cancelled: indexing is under way when it does.
-          if (!cancelSent.await(20, TimeUnit.SECONDS)) {
-            throw new AssertionError("the test never cancelled");
+    EditorAnswers answers =
+        new Delegating(new IdeAnswers()) {
+          @Override
+          public Optional<FileIndex> index(Result result, Path file) {
+            try {
+              // The first file waits until the editor has cancelled: indexing is under way when it
+              // does.
+              if (!cancelSent.await(20, TimeUnit.SECONDS)) {
+                throw new AssertionError("the test never cancelled");
+              }
+            } catch (InterruptedException e) {
+              Thread.currentThread().interrupt();
+            }
+            return super.index(result, file);
           }
-        } catch (InterruptedException e) {
-          Thread.currentThread().interrupt();
-        }
-        return super.index(result, file);
-      }
-    };
+        };
     try (LspHarness h = new LspHarness(answers)) {
       h.initialize(dir, client(true, false, false));
-      ProgressParams begin = h.client.awaitProgress(p -> value(p).getKind() == WorkDoneProgressKind.begin);
+      ProgressParams begin =
+          h.client.awaitProgress(p -> value(p).getKind() == WorkDoneProgressKind.begin);
       h.remote.cancelProgress(new WorkDoneProgressCancelParams(begin.getToken()));
       // A request answered after the cancel: the server has read the notification before it.
-      assertNull(h.remote.getTextDocumentService().hover(new HoverParams(
-          new TextDocumentIdentifier(uri(dir.resolve("none.jonq"))), new Position(0, 0))).get(20, TimeUnit.SECONDS));
+      assertNull(
+          h.remote
+              .getTextDocumentService()
+              .hover(
+                  new HoverParams(
+                      new TextDocumentIdentifier(uri(dir.resolve("none.jonq"))),
+                      new Position(0, 0)))
+              .get(20, TimeUnit.SECONDS));
       cancelSent.countDown();
 
-      ProgressParams end = h.client.awaitProgress(p -> value(p).getKind() == WorkDoneProgressKind.end);
-      assertTrue(((WorkDoneProgressEnd) value(end)).getMessage().startsWith("stopped after "), end.toString());
+      ProgressParams end =
+          h.client.awaitProgress(p -> value(p).getKind() == WorkDoneProgressKind.end);
+      assertTrue(
+          ((WorkDoneProgressEnd) value(end)).getMessage().startsWith("stopped after "),
+          end.toString());
       List<String> indexed = names(h, "part_");
-      assertTrue(indexed.contains("part_0"), "what was indexed before the cancel stays: " + indexed);
+      assertTrue(
+          indexed.contains("part_0"), "what was indexed before the cancel stays: " + indexed);
       assertFalse(indexed.contains("part_" + (files - 1)), "the rest is not indexed: " + indexed);
       assertTrue(indexed.size() < files);
 
@@ -383,19 +467,36 @@ class WorkspaceIndexTest {
       h.client.await(uri(bLib), p -> Integer.valueOf(1).equals(p.getVersion()));
       Location aFold = at(aLib, LIB, "fold");
       Location bFold = at(bLib, LIB, "fold");
-      assertEquals(List.of(aFold, at(aUser, userText, "fold")), references(h, aFold), "nothing of b's");
-      assertEquals(List.of(bFold, at(bUser, userText, "fold")), references(h, bFold), "nothing of a's");
+      assertEquals(
+          List.of(aFold, at(aUser, userText, "fold")), references(h, aFold), "nothing of b's");
+      assertEquals(
+          List.of(bFold, at(bUser, userText, "fold")), references(h, bFold), "nothing of a's");
       assertEquals(List.of("seed", "seed"), names(h, "seed"), "each folder's user, once");
 
       h.close(uri(bLib));
-      h.remote.getWorkspaceService().didChangeWorkspaceFolders(new DidChangeWorkspaceFoldersParams(
-          new WorkspaceFoldersChangeEvent(List.of(), List.of(new WorkspaceFolder(uri(b), "b")))));
-      assertEquals(List.of(aFold.getUri()), symbols(h, "fold").stream()
-          .map(s -> s.getLocation().getLeft().getUri()).toList(), "b's index is dropped with its folder");
-      h.remote.getWorkspaceService().didChangeWorkspaceFolders(new DidChangeWorkspaceFoldersParams(
-          new WorkspaceFoldersChangeEvent(List.of(new WorkspaceFolder(uri(b), "b")), List.of())));
-      assertEquals(List.of(aFold.getUri(), bFold.getUri()), symbols(h, "fold").stream()
-          .map(s -> s.getLocation().getLeft().getUri()).sorted().toList(), "and built again when it comes back");
+      h.remote
+          .getWorkspaceService()
+          .didChangeWorkspaceFolders(
+              new DidChangeWorkspaceFoldersParams(
+                  new WorkspaceFoldersChangeEvent(
+                      List.of(), List.of(new WorkspaceFolder(uri(b), "b")))));
+      assertEquals(
+          List.of(aFold.getUri()),
+          symbols(h, "fold").stream().map(s -> s.getLocation().getLeft().getUri()).toList(),
+          "b's index is dropped with its folder");
+      h.remote
+          .getWorkspaceService()
+          .didChangeWorkspaceFolders(
+              new DidChangeWorkspaceFoldersParams(
+                  new WorkspaceFoldersChangeEvent(
+                      List.of(new WorkspaceFolder(uri(b), "b")), List.of())));
+      assertEquals(
+          List.of(aFold.getUri(), bFold.getUri()),
+          symbols(h, "fold").stream()
+              .map(s -> s.getLocation().getLeft().getUri())
+              .sorted()
+              .toList(),
+          "and built again when it comes back");
     }
   }
 }

@@ -7,7 +7,8 @@ public record Abcd(double a, double b, double c, double d) {
 
   public Abcd {
     if (!(Double.isFinite(a) && Double.isFinite(b) && Double.isFinite(c) && Double.isFinite(d))) {
-      throw new IllegalArgumentException("ABCD elements must be finite: " + a + ", " + b + ", " + c + ", " + d);
+      throw new IllegalArgumentException(
+          "ABCD elements must be finite: " + a + ", " + b + ", " + c + ", " + d);
     }
   }
 
@@ -19,7 +20,10 @@ public record Abcd(double a, double b, double c, double d) {
     return new Abcd(1, length, 0, 1);
   }
 
-  /** A thin lens of focal length {@code focal} (positive converges); infinite focal length is no lens. */
+  /**
+   * A thin lens of focal length {@code focal} (positive converges); infinite focal length is no
+   * lens.
+   */
   public static Abcd thinLens(double focal) {
     if (focal == 0 || Double.isNaN(focal)) {
       throw new IllegalArgumentException("focal length must be non-zero: " + focal);
@@ -35,8 +39,8 @@ public record Abcd(double a, double b, double c, double d) {
   }
 
   /**
-   * A spherical interface of radius {@code radius} (positive when the centre lies ahead) from
-   * index n1 into n2.
+   * A spherical interface of radius {@code radius} (positive when the centre lies ahead) from index
+   * n1 into n2.
    */
   public static Abcd curvedInterface(double n1, double n2, double radius) {
     requireIndex(n1);
@@ -47,12 +51,21 @@ public record Abcd(double a, double b, double c, double d) {
     return new Abcd(1, 0, (n1 - n2) / (radius * n2), n1 / n2);
   }
 
-  /** This element followed by {@code next}: the product next · this, since the ray meets this first. */
+  /**
+   * This element followed by {@code next}: the product next · this, since the ray meets this first.
+   */
   public Abcd then(Abcd next) {
-    return new Abcd(next.a * a + next.b * c, next.a * b + next.b * d, next.c * a + next.d * c, next.c * b + next.d * d);
+    return new Abcd(
+        next.a * a + next.b * c,
+        next.a * b + next.b * d,
+        next.c * a + next.d * c,
+        next.c * b + next.d * d);
   }
 
-  /** AD − BC; equal to n_in/n_out for any train of paraxial elements in this package's ray convention. */
+  /**
+   * AD − BC; equal to n_in/n_out for any train of paraxial elements in this package's ray
+   * convention.
+   */
   public double determinant() {
     return a * d - b * c;
   }

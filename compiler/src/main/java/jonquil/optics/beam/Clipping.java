@@ -1,9 +1,11 @@
 package jonquil.optics.beam;
 
-/** Power a centred circular aperture passes from a Gaussian beam, so trains can flag apertures that clip. */
+/**
+ * Power a centred circular aperture passes from a Gaussian beam, so trains can flag apertures that
+ * clip.
+ */
 public final class Clipping {
-  private Clipping() {
-  }
+  private Clipping() {}
 
   /**
    * Loss above which clipping is reported: 1 %. This is a common rule of thumb rather than a
@@ -12,16 +14,17 @@ public final class Clipping {
   public static final double SIGNIFICANT_LOSS = 0.01;
 
   /**
-   * Fraction of a TEM00 beam of 1/e² radius {@code beamRadius} passed by a centred circular aperture
-   * of diameter {@code apertureDiameter}: 1 − exp(−2a²/W²) with a = D/2. For a real beam of M² &gt; 1
-   * this treats the profile as Gaussian of the real radius, which is an approximation.
+   * Fraction of a TEM00 beam of 1/e² radius {@code beamRadius} passed by a centred circular
+   * aperture of diameter {@code apertureDiameter}: 1 − exp(−2a²/W²) with a = D/2. For a real beam
+   * of M² &gt; 1 this treats the profile as Gaussian of the real radius, which is an approximation.
    */
   public static double transmittedFraction(double beamRadius, double apertureDiameter) {
     if (!(beamRadius > 0) || !Double.isFinite(beamRadius)) {
       throw new IllegalArgumentException("beam radius must be positive and finite: " + beamRadius);
     }
     if (!(apertureDiameter >= 0)) {
-      throw new IllegalArgumentException("aperture diameter must be non-negative: " + apertureDiameter);
+      throw new IllegalArgumentException(
+          "aperture diameter must be non-negative: " + apertureDiameter);
     }
     double ratio = apertureDiameter / (2 * beamRadius);
     // −expm1 keeps precision for tiny apertures, where 1 − exp(−x) would cancel.
@@ -29,8 +32,8 @@ public final class Clipping {
   }
 
   /**
-   * Aperture diameter that passes {@code fraction} of a beam of 1/e² radius {@code beamRadius}:
-   * the inverse of {@link #transmittedFraction}.
+   * Aperture diameter that passes {@code fraction} of a beam of 1/e² radius {@code beamRadius}: the
+   * inverse of {@link #transmittedFraction}.
    */
   public static double apertureFor(double beamRadius, double fraction) {
     if (!(beamRadius > 0) || !Double.isFinite(beamRadius)) {
@@ -42,7 +45,10 @@ public final class Clipping {
     return 2 * beamRadius * Math.sqrt(-Math.log1p(-fraction) / 2);
   }
 
-  /** True when a transmitted {@code fraction} loses more than {@link #SIGNIFICANT_LOSS} of the power. */
+  /**
+   * True when a transmitted {@code fraction} loses more than {@link #SIGNIFICANT_LOSS} of the
+   * power.
+   */
   public static boolean significant(double fraction) {
     if (!(fraction >= 0 && fraction <= 1)) {
       throw new IllegalArgumentException("fraction must be in [0, 1]: " + fraction);

@@ -8,13 +8,13 @@ import org.apache.commons.math3.complex.Complex;
  * A real laser beam of quality M² at one plane of a train, propagated as Siegman's embedded
  * Gaussian so that the whole train can be followed with ABCD matrices.
  *
- * <p>{@code waistRadius} is the 1/e² intensity radius W0 of the real beam at its waist;
- * {@code waistPosition} is the distance from the current plane to that waist, positive when the
- * waist lies ahead (a converging beam). The waist radius is the same in every medium; only the
- * Rayleigh range and divergence depend on the index. See the package documentation for the
- * q convention.
+ * <p>{@code waistRadius} is the 1/e² intensity radius W0 of the real beam at its waist; {@code
+ * waistPosition} is the distance from the current plane to that waist, positive when the waist lies
+ * ahead (a converging beam). The waist radius is the same in every medium; only the Rayleigh range
+ * and divergence depend on the index. See the package documentation for the q convention.
  */
-public record GaussianBeam(double wavelength, double m2, double waistRadius, double waistPosition, double index) {
+public record GaussianBeam(
+    double wavelength, double m2, double waistRadius, double waistPosition, double index) {
 
   public GaussianBeam {
     if (!(wavelength > 0) || !Double.isFinite(wavelength)) {
@@ -25,7 +25,8 @@ public record GaussianBeam(double wavelength, double m2, double waistRadius, dou
       throw new IllegalArgumentException("M² must be at least 1 and finite: " + m2);
     }
     if (!(waistRadius > 0) || !Double.isFinite(waistRadius)) {
-      throw new IllegalArgumentException("waist radius must be positive and finite: " + waistRadius);
+      throw new IllegalArgumentException(
+          "waist radius must be positive and finite: " + waistRadius);
     }
     if (!Double.isFinite(waistPosition)) {
       throw new IllegalArgumentException("waist position must be finite: " + waistPosition);
@@ -33,24 +34,28 @@ public record GaussianBeam(double wavelength, double m2, double waistRadius, dou
     Abcd.requireIndex(index);
   }
 
-  /** A beam whose waist of radius {@code waistRadius} lies {@code waistAhead} metres ahead (negative: behind). */
-  public static GaussianBeam fromWaist(double wavelength, double m2, double waistRadius, double waistAhead,
-      double index) {
+  /**
+   * A beam whose waist of radius {@code waistRadius} lies {@code waistAhead} metres ahead
+   * (negative: behind).
+   */
+  public static GaussianBeam fromWaist(
+      double wavelength, double m2, double waistRadius, double waistAhead, double index) {
     return new GaussianBeam(wavelength, m2, waistRadius, waistAhead, index);
   }
 
   /**
-   * A beam given by its far-field half angle in the medium, as data sheets often state it:
-   * W0 = M² λ/(π n θ).
+   * A beam given by its far-field half angle in the medium, as data sheets often state it: W0 = M²
+   * λ/(π n θ).
    */
-  public static GaussianBeam fromDivergence(double wavelength, double m2, double halfAngleFarField, double waistAhead,
-      double index) {
+  public static GaussianBeam fromDivergence(
+      double wavelength, double m2, double halfAngleFarField, double waistAhead, double index) {
     if (!(halfAngleFarField > 0) || !Double.isFinite(halfAngleFarField)) {
-      throw new IllegalArgumentException("divergence must be positive and finite: " + halfAngleFarField);
+      throw new IllegalArgumentException(
+          "divergence must be positive and finite: " + halfAngleFarField);
     }
     Abcd.requireIndex(index);
-    return new GaussianBeam(wavelength, m2, m2 * wavelength / (Math.PI * index * halfAngleFarField), waistAhead,
-        index);
+    return new GaussianBeam(
+        wavelength, m2, m2 * wavelength / (Math.PI * index * halfAngleFarField), waistAhead, index);
   }
 
   /**
@@ -111,7 +116,9 @@ public record GaussianBeam(double wavelength, double m2, double waistRadius, dou
     return new Complex(-waistPosition, rayleighRange());
   }
 
-  /** The same beam {@code distance} metres further on, in the current medium (negative goes back). */
+  /**
+   * The same beam {@code distance} metres further on, in the current medium (negative goes back).
+   */
   public GaussianBeam propagate(double distance) {
     return new GaussianBeam(wavelength, m2, waistRadius, waistPosition - distance, index);
   }
@@ -122,31 +129,33 @@ public record GaussianBeam(double wavelength, double m2, double waistRadius, dou
   }
 
   /**
-   * The beam just after a flat interface at normal incidence into index {@code newIndex}.
-   * q scales by n2/n1 (Siegman 1986, ch. 20): the waist keeps its size and its apparent distance
-   * scales with the index.
+   * The beam just after a flat interface at normal incidence into index {@code newIndex}. q scales
+   * by n2/n1 (Siegman 1986, ch. 20): the waist keeps its size and its apparent distance scales with
+   * the index.
    */
   public GaussianBeam intoMedium(double newIndex) {
     Abcd.requireIndex(newIndex);
-    return new GaussianBeam(wavelength, m2, waistRadius, waistPosition * newIndex / index, newIndex);
+    return new GaussianBeam(
+        wavelength, m2, waistRadius, waistPosition * newIndex / index, newIndex);
   }
 
   /**
-   * The beam after a general paraxial element. The output index follows from the determinant,
-   * n_out = n_in / (AD − BC), which is exact for the matrices of {@link Abcd}.
+   * The beam after a general paraxial element. The output index follows from the determinant, n_out
+   * = n_in / (AD − BC), which is exact for the matrices of {@link Abcd}.
    */
   public GaussianBeam apply(Abcd m) {
     double det = m.determinant();
     if (!(det > 0)) {
-      throw new IllegalArgumentException("ABCD determinant must be positive (it is n_in/n_out): " + det);
+      throw new IllegalArgumentException(
+          "ABCD determinant must be positive (it is n_in/n_out): " + det);
     }
     return apply(m, index / det);
   }
 
   /**
-   * The beam after a general paraxial element that ends in a medium of index {@code newIndex};
-   * the determinant must agree with n_in/n_out to 1e-9, since otherwise the element is not a
-   * passive paraxial system in the stated media.
+   * The beam after a general paraxial element that ends in a medium of index {@code newIndex}; the
+   * determinant must agree with n_in/n_out to 1e-9, since otherwise the element is not a passive
+   * paraxial system in the stated media.
    */
   public GaussianBeam apply(Abcd m, double newIndex) {
     Abcd.requireIndex(newIndex);
@@ -158,14 +167,18 @@ public record GaussianBeam(double wavelength, double m2, double waistRadius, dou
     return fromQ(m.transform(q()), wavelength, m2, newIndex);
   }
 
-  /** Distance to the waist when it lies at or ahead of the current plane; empty for a diverging beam. */
+  /**
+   * Distance to the waist when it lies at or ahead of the current plane; empty for a diverging
+   * beam.
+   */
   public OptionalDouble waistAhead() {
     return waistPosition >= 0 ? OptionalDouble.of(waistPosition) : OptionalDouble.empty();
   }
 
   /** The next waist at or ahead of the current plane, if any, with its size and Rayleigh range. */
   public Optional<Focus> nextFocus() {
-    return waistPosition >= 0 ? Optional.of(new Focus(waistPosition, waistRadius, rayleighRange(), index))
+    return waistPosition >= 0
+        ? Optional.of(new Focus(waistPosition, waistRadius, rayleighRange(), index))
         : Optional.empty();
   }
 }

@@ -4,23 +4,27 @@ import java.util.Optional;
 import org.apache.commons.math3.complex.Complex;
 
 /**
- * The refractive index of air after Ciddor (1996), which every relative-to-air index needs to become absolute and
- * which a spec's "air" medium is.
+ * The refractive index of air after Ciddor (1996), which every relative-to-air index needs to
+ * become absolute and which a spec's "air" medium is.
  *
- * <p>Source: P. E. Ciddor, "Refractive index of air: new equations for the visible and near infrared",
- * Applied Optics 35(9), 1566–1573 (1996), doi:10.1364/AO.35.001566. The wavelength is the vacuum wavelength; the
- * result is the absolute (phase) index. Stated validity: 230 nm to 1690 nm, −40 °C to 100 °C, 80 kPa to 120 kPa,
- * 0 to 100 % relative humidity, 0 to 2000 ppm CO₂. The steps follow the paper's appendix: the dispersion of
- * standard air (dry, 15 °C, 101 325 Pa, 450 ppm CO₂) and its CO₂ correction, the dispersion of water vapour at
- * 20 °C and 1333 Pa, the densities of both from the BIPM equation of state with its compressibility Z, and the sum
- * of the two refractivities scaled by density. Saturation vapour pressure and the enhancement factor use the
- * constants given with the paper's procedure (the Davis 1992 / BIPM forms; attribution from memory).
+ * <p>Source: P. E. Ciddor, "Refractive index of air: new equations for the visible and near
+ * infrared", Applied Optics 35(9), 1566–1573 (1996), doi:10.1364/AO.35.001566. The wavelength is
+ * the vacuum wavelength; the result is the absolute (phase) index. Stated validity: 230 nm to 1690
+ * nm, −40 °C to 100 °C, 80 kPa to 120 kPa, 0 to 100 % relative humidity, 0 to 2000 ppm CO₂. The
+ * steps follow the paper's appendix: the dispersion of standard air (dry, 15 °C, 101 325 Pa, 450
+ * ppm CO₂) and its CO₂ correction, the dispersion of water vapour at 20 °C and 1333 Pa, the
+ * densities of both from the BIPM equation of state with its compressibility Z, and the sum of the
+ * two refractivities scaled by density. Saturation vapour pressure and the enhancement factor use
+ * the constants given with the paper's procedure (the Davis 1992 / BIPM forms; attribution from
+ * memory).
  */
-public record CiddorAir(double temperatureKelvin, double pressurePascal, double relativeHumidity, double co2Ppm)
+public record CiddorAir(
+    double temperatureKelvin, double pressurePascal, double relativeHumidity, double co2Ppm)
     implements Dispersion {
 
   /** Ciddor's stated wavelength range, 230 nm to 1690 nm. */
   public static final WavelengthRange RANGE = WavelengthRange.ofMicrometres(0.23, 1.69);
+
   /** ISO standard atmosphere pressure, the reference of every "standard air". */
   public static final double STANDARD_PRESSURE = 101_325;
 
@@ -38,25 +42,34 @@ public record CiddorAir(double temperatureKelvin, double pressurePascal, double 
   public CiddorAir {
     double celsius = temperatureKelvin - 273.15;
     if (!(celsius >= -40 && celsius <= 100)) {
-      throw new IllegalArgumentException("Ciddor's equations hold from -40 °C to 100 °C; got " + temperatureKelvin + " K");
+      throw new IllegalArgumentException(
+          "Ciddor's equations hold from -40 °C to 100 °C; got " + temperatureKelvin + " K");
     }
     if (!(pressurePascal >= 80_000 && pressurePascal <= 120_000)) {
-      throw new IllegalArgumentException("Ciddor's equations hold from 80 kPa to 120 kPa; got " + pressurePascal + " Pa");
+      throw new IllegalArgumentException(
+          "Ciddor's equations hold from 80 kPa to 120 kPa; got " + pressurePascal + " Pa");
     }
     if (!(relativeHumidity >= 0 && relativeHumidity <= 1)) {
-      throw new IllegalArgumentException("relative humidity is a fraction from 0 to 1; got " + relativeHumidity);
+      throw new IllegalArgumentException(
+          "relative humidity is a fraction from 0 to 1; got " + relativeHumidity);
     }
     if (!(co2Ppm >= 0 && co2Ppm <= 2000)) {
       throw new IllegalArgumentException("CO2 content must be 0 to 2000 ppm; got " + co2Ppm);
     }
   }
 
-  /** Ciddor's "standard air": dry, 15 °C, 101 325 Pa, 450 ppm CO₂, for which the first dispersion formula holds as it stands. */
+  /**
+   * Ciddor's "standard air": dry, 15 °C, 101 325 Pa, 450 ppm CO₂, for which the first dispersion
+   * formula holds as it stands.
+   */
   public static CiddorAir standard() {
     return new CiddorAir(288.15, STANDARD_PRESSURE, 0, 450);
   }
 
-  /** Dry air with 450 ppm CO₂ at standard pressure and the given temperature: the reference for relative indices. */
+  /**
+   * Dry air with 450 ppm CO₂ at standard pressure and the given temperature: the reference for
+   * relative indices.
+   */
   public static CiddorAir dryAt(double temperatureKelvin) {
     return new CiddorAir(temperatureKelvin, STANDARD_PRESSURE, 0, 450);
   }
@@ -111,7 +124,13 @@ public record CiddorAir(double temperatureKelvin, double pressurePascal, double 
   private static double compressibility(double tk, double p, double xw) {
     double t = tk - 273.15;
     double pt = p / tk;
-    return 1 - pt * (1.58123e-6 - 2.9331e-8 * t + 1.1043e-10 * t * t + (5.707e-6 - 2.051e-8 * t) * xw
-        + (1.9898e-4 - 2.376e-6 * t) * xw * xw) + pt * pt * (1.83e-11 - 0.765e-8 * xw * xw);
+    return 1
+        - pt
+            * (1.58123e-6
+                - 2.9331e-8 * t
+                + 1.1043e-10 * t * t
+                + (5.707e-6 - 2.051e-8 * t) * xw
+                + (1.9898e-4 - 2.376e-6 * t) * xw * xw)
+        + pt * pt * (1.83e-11 - 0.765e-8 * xw * xw);
   }
 }

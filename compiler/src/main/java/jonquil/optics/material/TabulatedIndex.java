@@ -8,18 +8,26 @@ import org.apache.commons.math3.complex.Complex;
 /**
  * Measured optical constants given as a table, the form in which metal data (n, κ) are published.
  *
- * <p>Wavelengths are in metres and strictly increasing. Between rows {@code n} and {@code k} are interpolated
- * linearly in wavelength; outside the table the nearest row is returned (clamped), and {@link #validRange()} spans
- * exactly the first to the last row so a caller can report the extrapolation.
+ * <p>Wavelengths are in metres and strictly increasing. Between rows {@code n} and {@code k} are
+ * interpolated linearly in wavelength; outside the table the nearest row is returned (clamped), and
+ * {@link #validRange()} spans exactly the first to the last row so a caller can report the
+ * extrapolation.
  */
 public record TabulatedIndex(double[] wavelengths, double[] n, double[] k) implements Dispersion {
   public TabulatedIndex {
     Objects.requireNonNull(wavelengths, "wavelengths");
     Objects.requireNonNull(n, "n");
     Objects.requireNonNull(k, "k");
-    if (wavelengths.length < 2 || n.length != wavelengths.length || k.length != wavelengths.length) {
-      throw new IllegalArgumentException("a table needs at least two rows and equal-length columns; got "
-          + wavelengths.length + ", " + n.length + ", " + k.length);
+    if (wavelengths.length < 2
+        || n.length != wavelengths.length
+        || k.length != wavelengths.length) {
+      throw new IllegalArgumentException(
+          "a table needs at least two rows and equal-length columns; got "
+              + wavelengths.length
+              + ", "
+              + n.length
+              + ", "
+              + k.length);
     }
     wavelengths = wavelengths.clone();
     n = n.clone();
@@ -29,7 +37,8 @@ public record TabulatedIndex(double[] wavelengths, double[] n, double[] k) imple
         throw new IllegalArgumentException("row " + i + ": wavelength must be positive and finite");
       }
       if (i > 0 && !(wavelengths[i] > wavelengths[i - 1])) {
-        throw new IllegalArgumentException("row " + i + ": wavelengths must be strictly increasing");
+        throw new IllegalArgumentException(
+            "row " + i + ": wavelengths must be strictly increasing");
       }
       if (!Double.isFinite(n[i]) || !(k[i] >= 0) || !Double.isFinite(k[i])) {
         throw new IllegalArgumentException("row " + i + ": n must be finite and k finite and >= 0");
@@ -38,8 +47,8 @@ public record TabulatedIndex(double[] wavelengths, double[] n, double[] k) imple
   }
 
   /**
-   * A table written as rows of {@code {wavelength in µm, n, k}}, the layout of the published tables, so the
-   * embedded data can be compared with the paper line by line.
+   * A table written as rows of {@code {wavelength in µm, n, k}}, the layout of the published
+   * tables, so the embedded data can be compared with the paper line by line.
    */
   public static TabulatedIndex ofMicrometreRows(double[][] rows) {
     double[] w = new double[rows.length];
@@ -98,7 +107,9 @@ public record TabulatedIndex(double[] wavelengths, double[] n, double[] k) imple
 
   @Override
   public boolean equals(Object o) {
-    return o instanceof TabulatedIndex t && Arrays.equals(wavelengths, t.wavelengths) && Arrays.equals(n, t.n)
+    return o instanceof TabulatedIndex t
+        && Arrays.equals(wavelengths, t.wavelengths)
+        && Arrays.equals(n, t.n)
         && Arrays.equals(k, t.k);
   }
 
@@ -109,7 +120,12 @@ public record TabulatedIndex(double[] wavelengths, double[] n, double[] k) imple
 
   @Override
   public String toString() {
-    return "TabulatedIndex[" + wavelengths.length + " rows, " + wavelengths[0] + " m to "
-        + wavelengths[wavelengths.length - 1] + " m]";
+    return "TabulatedIndex["
+        + wavelengths.length
+        + " rows, "
+        + wavelengths[0]
+        + " m to "
+        + wavelengths[wavelengths.length - 1]
+        + " m]";
   }
 }

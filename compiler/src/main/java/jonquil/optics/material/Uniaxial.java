@@ -4,11 +4,13 @@ import java.util.Objects;
 import java.util.Optional;
 
 /**
- * The two principal indices of a uniaxial crystal, which wave plates, polarizers and walk-off all need.
+ * The two principal indices of a uniaxial crystal, which wave plates, polarizers and walk-off all
+ * need.
  *
- * <p>The ordinary index applies to light polarized perpendicular to the optic axis, the extraordinary index to light
- * polarized along it. The sign convention of {@link #birefringence} is {@code Δn = nₑ − nₒ}: positive for quartz and
- * magnesium fluoride, negative for calcite and sapphire.
+ * <p>The ordinary index applies to light polarized perpendicular to the optic axis, the
+ * extraordinary index to light polarized along it. The sign convention of {@link #birefringence} is
+ * {@code Δn = nₑ − nₒ}: positive for quartz and magnesium fluoride, negative for calcite and
+ * sapphire.
  */
 public record Uniaxial(Dispersion ordinary, Dispersion extraordinary) {
   public Uniaxial {
@@ -22,8 +24,8 @@ public record Uniaxial(Dispersion ordinary, Dispersion extraordinary) {
   }
 
   /**
-   * The index of the extraordinary wave whose wave vector makes {@code angle} (radians) with the optic axis:
-   * {@code 1/n(θ)² = cos²θ/nₒ² + sin²θ/nₑ²} (real parts; for transparent crystals).
+   * The index of the extraordinary wave whose wave vector makes {@code angle} (radians) with the
+   * optic axis: {@code 1/n(θ)² = cos²θ/nₒ² + sin²θ/nₑ²} (real parts; for transparent crystals).
    */
   public double extraordinaryIndexAt(double wavelength, double angle) {
     double no = ordinary.index(wavelength).getReal();

@@ -1,11 +1,11 @@
 package jonquil.optics.material;
 
 /**
- * The closed wavelength interval over which a dispersion model is backed by its source, so that a consumer can
- * tell interpolation from extrapolation.
+ * The closed wavelength interval over which a dispersion model is backed by its source, so that a
+ * consumer can tell interpolation from extrapolation.
  *
- * <p>Both ends are in metres. {@code max} may be {@link Double#POSITIVE_INFINITY} for models without an upper
- * limit; {@code min} may be 0 for models without a lower one.
+ * <p>Both ends are in metres. {@code max} may be {@link Double#POSITIVE_INFINITY} for models
+ * without an upper limit; {@code min} may be 0 for models without a lower one.
  */
 public record WavelengthRange(double min, double max) {
   /** Every wavelength: for media such as vacuum whose index does not depend on it. */
@@ -13,7 +13,8 @@ public record WavelengthRange(double min, double max) {
 
   public WavelengthRange {
     if (!(min >= 0) || Double.isInfinite(min) || Double.isNaN(max) || !(max > min)) {
-      throw new IllegalArgumentException("wavelength range needs 0 <= min < max; got " + min + " to " + max);
+      throw new IllegalArgumentException(
+          "wavelength range needs 0 <= min < max; got " + min + " to " + max);
     }
   }
 

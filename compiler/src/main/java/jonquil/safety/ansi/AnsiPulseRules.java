@@ -4,21 +4,22 @@ import java.util.function.DoubleUnaryOperator;
 import jonquil.safety.Exposure;
 
 /**
- * Why it exists: the three pulse-train rules of ANSI Z136.1-2014 section 8.2.3, applied once for the eye
- * and the skin so that both use the same arithmetic.
+ * Why it exists: the three pulse-train rules of ANSI Z136.1-2014 section 8.2.3, applied once for
+ * the eye and the skin so that both use the same arithmetic.
  *
  * <ol>
- *   <li>Rule 1 (single pulse): each pulse ≤ the MPE for one pulse of its duration τ.</li>
- *   <li>Rule 2 (average power): the train's exposure over T ≤ the MPE for T, i.e. per pulse ≤ MPE(T)/n,
- *       n = F·T. For a uniform train the full T is the binding group for these tables (MPE(t)/t never
- *       increases with t), so shorter groups are not checked separately.</li>
- *   <li>Rule 3 (multiple-pulse thermal, eye 400–1400 nm only): per pulse ≤ MPE(τ) × C_P, C_P = n^−0.25.
- *       Callers apply it only for τ ≥ t_min; the 2014 edition treats pulses shorter than t_min (pulses within
- *       t_min acting together and a modified C_P, from memory) by provisions that were not confirmed, so
- *       such trains are "not evaluated" rather than guessed.</li>
+ *   <li>Rule 1 (single pulse): each pulse ≤ the MPE for one pulse of its duration τ.
+ *   <li>Rule 2 (average power): the train's exposure over T ≤ the MPE for T, i.e. per pulse ≤
+ *       MPE(T)/n, n = F·T. For a uniform train the full T is the binding group for these tables
+ *       (MPE(t)/t never increases with t), so shorter groups are not checked separately.
+ *   <li>Rule 3 (multiple-pulse thermal, eye 400–1400 nm only): per pulse ≤ MPE(τ) × C_P, C_P =
+ *       n^−0.25. Callers apply it only for τ ≥ t_min; the 2014 edition treats pulses shorter than
+ *       t_min (pulses within t_min acting together and a modified C_P, from memory) by provisions
+ *       that were not confirmed, so such trains are "not evaluated" rather than guessed.
  * </ol>
- * The three-rule structure and the N^−1/4 form are confirmed qualitatively (see {@link Z136}); the exact
- * wording of the 2014 edition is from memory.
+ *
+ * The three-rule structure and the N^−1/4 form are confirmed qualitatively (see {@link Z136}); the
+ * exact wording of the 2014 edition is from memory.
  */
 final class AnsiPulseRules {
   private AnsiPulseRules() {}
@@ -36,8 +37,14 @@ final class AnsiPulseRules {
    * @param exposure exposure duration T, s
    * @param rule3 whether Rule 3 applies (retinal thermal, τ ≥ t_min)
    */
-  static Exposure train(DoubleUnaryOperator mpe, double tau, double rate, double exposure, boolean rule3,
-      double aperture, String table) {
+  static Exposure train(
+      DoubleUnaryOperator mpe,
+      double tau,
+      double rate,
+      double exposure,
+      boolean rule3,
+      double aperture,
+      String table) {
     double n = Math.max(1, rate * exposure);
     double single = mpe.applyAsDouble(tau);
     double average = mpe.applyAsDouble(exposure) / n;
@@ -52,7 +59,8 @@ final class AnsiPulseRules {
       limit = repetitive;
       criterion = RULE3 + ", n = " + fmt(n) + ", C_P = " + fmt(Z136.cP(n));
     }
-    return new Exposure(limit, limit * rate, exposure, aperture, single, average, repetitive, criterion, table);
+    return new Exposure(
+        limit, limit * rate, exposure, aperture, single, average, repetitive, criterion, table);
   }
 
   static String fmt(double v) {

@@ -25,7 +25,8 @@ class AbcdTest {
   @Test
   void compositionIsInBeamOrder() {
     // Saleh & Teich 2007, §1.4 (from memory): a cascade M1 then M2 has matrix M2·M1. Lens then
-    // gap d is F(d)·L(f) = [[1 − d/f, d], [−1/f, 1]]; gap then lens is L(f)·F(d) = [[1, d], [−1/f, 1 − d/f]].
+    // gap d is F(d)·L(f) = [[1 − d/f, d], [−1/f, 1]]; gap then lens is L(f)·F(d) = [[1, d], [−1/f,
+    // 1 − d/f]].
     double f = 0.2;
     double d = 0.05;
     Abcd lensThenGap = Abcd.thinLens(f).then(Abcd.freeSpace(d));

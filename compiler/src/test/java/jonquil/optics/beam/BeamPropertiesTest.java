@@ -25,7 +25,10 @@ class BeamPropertiesTest {
     return b.propagate((rnd.nextDouble() - 0.5) * 10 * b.rayleighRange());
   }
 
-  /** A random element and the index behind it; the matrix is always a valid passive paraxial element. */
+  /**
+   * A random element and the index behind it; the matrix is always a valid passive paraxial
+   * element.
+   */
   static Abcd randomElement(SplittableRandom rnd, double nIn, double[] nOut, double scale) {
     switch (rnd.nextInt(4)) {
       case 0:
@@ -39,13 +42,15 @@ class BeamPropertiesTest {
         return Abcd.flatInterface(nIn, nOut[0]);
       default:
         nOut[0] = 1 + 3 * rnd.nextDouble();
-        return Abcd.curvedInterface(nIn, nOut[0], (rnd.nextBoolean() ? 1 : -1) * logUniform(rnd, 0.1, 10) * scale);
+        return Abcd.curvedInterface(
+            nIn, nOut[0], (rnd.nextBoolean() ? 1 : -1) * logUniform(rnd, 0.1, 10) * scale);
     }
   }
 
   static void assertSameBeam(GaussianBeam expected, GaussianBeam actual, double rel) {
     double scale = expected.rayleighRange() + Math.abs(expected.waistPosition());
-    assertEquals(expected.waistRadius(), actual.waistRadius(), rel * expected.waistRadius(), "waist radius");
+    assertEquals(
+        expected.waistRadius(), actual.waistRadius(), rel * expected.waistRadius(), "waist radius");
     assertEquals(expected.waistPosition(), actual.waistPosition(), rel * scale, "waist position");
     assertEquals(expected.index(), actual.index(), rel * expected.index(), "index");
     assertEquals(expected.m2(), actual.m2());
@@ -73,7 +78,8 @@ class BeamPropertiesTest {
     double d2 = (rnd.nextDouble() - 0.3) * 5 * b.rayleighRange();
     assertSameBeam(b.propagate(d1 + d2), b.propagate(d1).propagate(d2), 1e-12);
     // Through the ABCD law as well, which does not share the shortcut in propagate().
-    assertSameBeam(b.propagate(d1 + d2), b.apply(Abcd.freeSpace(d1)).apply(Abcd.freeSpace(d2)), 1e-9);
+    assertSameBeam(
+        b.propagate(d1 + d2), b.apply(Abcd.freeSpace(d1)).apply(Abcd.freeSpace(d2)), 1e-9);
     assertEquals(b.propagate(d1).radius(), b.radiusAt(d1), 1e-12 * b.radiusAt(d1));
   }
 
@@ -89,7 +95,8 @@ class BeamPropertiesTest {
     int steps = 1 + rnd.nextInt(8);
     for (int i = 0; i < steps; i++) {
       Abcd e = randomElement(rnd, stepwise.index(), nOut, scale);
-      assertEquals(stepwise.index() / nOut[0], e.determinant(), 1e-15 * e.determinant(), "det = n_in/n_out");
+      assertEquals(
+          stepwise.index() / nOut[0], e.determinant(), 1e-15 * e.determinant(), "det = n_in/n_out");
       stepwise = stepwise.apply(e, nOut[0]);
       system = system.then(e);
       detProduct *= e.determinant();
@@ -102,7 +109,9 @@ class BeamPropertiesTest {
     assertTrue(whole.radius() > 0 && Double.isFinite(whole.radius()));
     assertTrue(whole.waistRadius() > 0 && Double.isFinite(whole.waistRadius()));
     // M² λ/(π n) is the beam parameter product: lenses cannot change it, only the medium can.
-    assertEquals(start.beamParameterProduct() * start.index() / whole.index(), whole.beamParameterProduct(),
+    assertEquals(
+        start.beamParameterProduct() * start.index() / whole.index(),
+        whole.beamParameterProduct(),
         1e-6 * whole.beamParameterProduct());
   }
 

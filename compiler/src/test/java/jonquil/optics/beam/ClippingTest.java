@@ -7,7 +7,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
 
-/** Aperture transmission of a Gaussian beam against published values; each check names its source. */
+/**
+ * Aperture transmission of a Gaussian beam against published values; each check names its source.
+ */
 class ClippingTest {
 
   @Test
@@ -46,7 +48,8 @@ class ClippingTest {
     // (Saleh & Teich 2007, §3.1, peak intensity of a Gaussian beam), to first order in (a/W)².
     double w = 1e-3;
     double a = 1e-6;
-    assertEquals(Math.PI * a * a * 2 / (Math.PI * w * w), Clipping.transmittedFraction(w, 2 * a), 1e-11);
+    assertEquals(
+        Math.PI * a * a * 2 / (Math.PI * w * w), Clipping.transmittedFraction(w, 2 * a), 1e-11);
     assertEquals(2 * w, Clipping.apertureFor(w, 1 - Math.exp(-2)), 1e-15);
     assertThrows(IllegalArgumentException.class, () -> Clipping.transmittedFraction(0, 1));
     assertThrows(IllegalArgumentException.class, () -> Clipping.significant(1.2));

@@ -103,15 +103,17 @@ class GaussianBeamTest {
 
   @ParameterizedTest
   @CsvSource({
-      // wavelength, M², W0, distance s from input waist to lens, f
-      "632.8e-9, 1, 0.5e-3, 0.3, 0.1",
-      "632.8e-9, 1, 0.5e-3, 2.0, 0.1",
-      "1064e-9, 1, 2e-3, 0, 0.05",
-      "1064e-9, 1.8, 1e-3, 0.5, 0.2",
-      "10.6e-6, 1.2, 5e-3, 1.5, 0.25",
-      "532e-9, 3, 0.2e-3, 0.05, -0.1",
-      "800e-9, 1, 50e-6, 0.01, 0.02"})
-  void thinLensImageWaistMatchesTheClosedForm(double lambda, double m2, double w0, double s, double f) {
+    // wavelength, M², W0, distance s from input waist to lens, f
+    "632.8e-9, 1, 0.5e-3, 0.3, 0.1",
+    "632.8e-9, 1, 0.5e-3, 2.0, 0.1",
+    "1064e-9, 1, 2e-3, 0, 0.05",
+    "1064e-9, 1.8, 1e-3, 0.5, 0.2",
+    "10.6e-6, 1.2, 5e-3, 1.5, 0.25",
+    "532e-9, 3, 0.2e-3, 0.05, -0.1",
+    "800e-9, 1, 50e-6, 0.01, 0.02"
+  })
+  void thinLensImageWaistMatchesTheClosedForm(
+      double lambda, double m2, double w0, double s, double f) {
     // Self, "Focusing of spherical Gaussian beams", Appl. Opt. 22, 658 (1983):
     //   1/(s + z_R²/(s − f)) + 1/s'' = 1/f, and with the magnification
     //   m = 1/√((1 − s/f)² + (z_R/f)²): W0'' = m W0 and s'' − f = m² (s − f).
@@ -151,8 +153,14 @@ class GaussianBeamTest {
   }
 
   @ParameterizedTest
-  @CsvSource({"1064e-9, 1, 3e-3, 0.05", "1064e-9, 1.4, 4e-3, 0.1", "355e-9, 2, 2e-3, 0.02", "10.6e-6, 1.1, 10e-3, 0.1"})
-  void aCollimatedBeamFocusesToMSquaredLambdaFOverPiW(double lambda, double m2, double w, double f) {
+  @CsvSource({
+    "1064e-9, 1, 3e-3, 0.05",
+    "1064e-9, 1.4, 4e-3, 0.1",
+    "355e-9, 2, 2e-3, 0.02",
+    "10.6e-6, 1.1, 10e-3, 0.1"
+  })
+  void aCollimatedBeamFocusesToMSquaredLambdaFOverPiW(
+      double lambda, double m2, double w, double f) {
     // Siegman 1986, §17.4 (from memory); Saleh & Teich 2007, §3.2: a collimated beam (waist at
     // the lens) focuses at about f to W0'' ≈ M² λ f/(π W) when z_R ≫ f. Exactly,
     // W0'' = W/√(1 + (z_R/f)²), so the approximation's relative error is about ½(f/z_R)².
@@ -163,7 +171,9 @@ class GaussianBeamTest {
     double approx = m2 * lambda * f / (Math.PI * w);
     assertEquals(approx, focus.radius(), ratio * ratio * approx);
     assertEquals(f, focus.distance(), ratio * ratio * f);
-    assertTrue(focus.distance() < f, "the waist of a collimated beam lies slightly before the focal point");
+    assertTrue(
+        focus.distance() < f,
+        "the waist of a collimated beam lies slightly before the focal point");
   }
 
   @Test
@@ -188,8 +198,11 @@ class GaussianBeamTest {
     assertEquals(3.387e-6, focus.radius(), 1e-9);
     assertEquals(0.01, focus.distance(), 1e-6);
     assertEquals(2 * focus.rayleighRange(), focus.depthOfFocus());
-    assertTrue(GaussianBeam.fromWaist(1064e-9, 1, 1e-3, -0.2, 1).waistAhead().isEmpty(), "diverging: no waist ahead");
-    assertTrue(in.throughThinLens(-0.05).nextFocus().isEmpty(), "a negative lens makes a virtual waist");
+    assertTrue(
+        GaussianBeam.fromWaist(1064e-9, 1, 1e-3, -0.2, 1).waistAhead().isEmpty(),
+        "diverging: no waist ahead");
+    assertTrue(
+        in.throughThinLens(-0.05).nextFocus().isEmpty(), "a negative lens makes a virtual waist");
   }
 
   @Test
@@ -202,8 +215,10 @@ class GaussianBeamTest {
     assertEquals(1.5 * air.rayleighRange(), glass.rayleighRange(), 1e-12);
     assertEquals(air.divergence() / 1.5, glass.divergence(), 1e-18);
     assertEquals(air.waistRadius(), glass.waistRadius());
-    assertEquals(0.45, glass.waistPosition(), 1e-15, "the focus moves deeper by n, as in geometric optics");
-    assertEquals(air.radius(), glass.radius(), 1e-15, "the radius is continuous across the interface");
+    assertEquals(
+        0.45, glass.waistPosition(), 1e-15, "the focus moves deeper by n, as in geometric optics");
+    assertEquals(
+        air.radius(), glass.radius(), 1e-15, "the radius is continuous across the interface");
     assertEquals(1.5 * air.curvatureRadius(), glass.curvatureRadius(), 1e-12);
   }
 
@@ -231,12 +246,16 @@ class GaussianBeamTest {
 
   @Test
   void rejectsUnphysicalBeams() {
-    assertThrows(IllegalArgumentException.class, () -> GaussianBeam.fromWaist(1e-6, 0.9, 1e-3, 0, 1));
+    assertThrows(
+        IllegalArgumentException.class, () -> GaussianBeam.fromWaist(1e-6, 0.9, 1e-3, 0, 1));
     assertThrows(IllegalArgumentException.class, () -> GaussianBeam.fromWaist(1e-6, 1, 0, 0, 1));
-    assertThrows(IllegalArgumentException.class, () -> GaussianBeam.fromWaist(-1e-6, 1, 1e-3, 0, 1));
-    assertThrows(IllegalArgumentException.class, () -> GaussianBeam.fromWaist(1e-6, 1, 1e-3, Double.NaN, 1));
+    assertThrows(
+        IllegalArgumentException.class, () -> GaussianBeam.fromWaist(-1e-6, 1, 1e-3, 0, 1));
+    assertThrows(
+        IllegalArgumentException.class, () -> GaussianBeam.fromWaist(1e-6, 1, 1e-3, Double.NaN, 1));
     assertThrows(IllegalArgumentException.class, () -> GaussianBeam.fromWaist(1e-6, 1, 1e-3, 0, 0));
-    assertThrows(IllegalArgumentException.class, () -> GaussianBeam.fromQ(new Complex(1, -1), 1e-6, 1, 1));
+    assertThrows(
+        IllegalArgumentException.class, () -> GaussianBeam.fromQ(new Complex(1, -1), 1e-6, 1, 1));
     GaussianBeam b = GaussianBeam.fromWaist(1e-6, 1, 1e-3, 0, 1);
     assertThrows(IllegalArgumentException.class, () -> b.apply(new Abcd(1, 0, 0, -1)));
     assertThrows(IllegalArgumentException.class, () -> b.apply(Abcd.flatInterface(1, 1.5), 1.0));

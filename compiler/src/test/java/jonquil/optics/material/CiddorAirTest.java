@@ -8,8 +8,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import org.junit.jupiter.api.Test;
 
 /**
- * The index of air against Ciddor (1996), P. E. Ciddor, Applied Optics 35(9), 1566-1573, and values computed from
- * its equations.
+ * The index of air against Ciddor (1996), P. E. Ciddor, Applied Optics 35(9), 1566-1573, and values
+ * computed from its equations.
  */
 class CiddorAirTest {
   private static final double HE_NE = 632.8e-9;
@@ -17,25 +17,29 @@ class CiddorAirTest {
   @Test
   void standardAirIsTheFirstDispersionFormulaOfThePaper() {
     // Ciddor 1996, standard air (dry, 15 °C, 101 325 Pa, 450 ppm CO2):
-    // (n − 1)·1e8 = 5792105/(238.0185 − σ²) + 167917/(57.362 − σ²), σ = 1/0.6328 µm⁻¹; worked by hand:
+    // (n − 1)·1e8 = 5792105/(238.0185 − σ²) + 167917/(57.362 − σ²), σ = 1/0.6328 µm⁻¹; worked by
+    // hand:
     // σ² = 2.497279, 5792105/235.521221 = 24592.71, 167917/54.864721 = 3060.56, sum 27653.27e-8.
     assertEquals(2.76533e-4, CiddorAir.standard().refractivity(HE_NE), 2e-9);
   }
 
   @Test
   void airAt633nmIsAbout27Em4() {
-    // Brief's sanity value: n − 1 ≈ 2.7e-4 at 633 nm (Ciddor 1996); computed from the paper's equations for dry air
+    // Brief's sanity value: n − 1 ≈ 2.7e-4 at 633 nm (Ciddor 1996); computed from the paper's
+    // equations for dry air
     // at 20 °C, 101 325 Pa, 450 ppm: 2.71802e-4.
     double r = CiddorAir.dryAt(293.15).refractivity(HE_NE);
     assertEquals(2.71802e-4, r, 2e-9);
-    // Ideal-gas scaling of standard air from 15 °C to 20 °C gives 2.76533e-4·288.15/293.15 = 2.71816e-4; the
+    // Ideal-gas scaling of standard air from 15 °C to 20 °C gives 2.76533e-4·288.15/293.15 =
+    // 2.71816e-4; the
     // compressibility correction is a few parts in 1e4 of that, no more.
     assertEquals(2.76533e-4 * 288.15 / 293.15, r, 2.76533e-4 * 5e-4);
   }
 
   @Test
   void humidAirMatchesThePublishedCalculatorExample() {
-    // 633 nm, 20 °C, 101.325 kPa, 50 % RH, 450 ppm: n = 1.000271373 (NIST Engineering Metrology Toolbox example
+    // 633 nm, 20 °C, 101.325 kPa, 50 % RH, 450 ppm: n = 1.000271373 (NIST Engineering Metrology
+    // Toolbox example
     // computed with Ciddor's equation; from memory). Water vapour lowers n relative to dry air.
     CiddorAir humid = new CiddorAir(293.15, 101_325, 0.5, 450);
     assertEquals(2.71373e-4, humid.refractivity(633e-9), 2e-9);
@@ -47,8 +51,9 @@ class CiddorAirTest {
     double low = new CiddorAir(293.15, 90_000, 0, 450).refractivity(HE_NE);
     double high = new CiddorAir(293.15, 110_000, 0, 450).refractivity(HE_NE);
     assertEquals(110.0 / 90.0, high / low, 1e-3);
-    assertTrue(new CiddorAir(293.15, 101_325, 0, 1000).refractivity(HE_NE)
-        > CiddorAir.dryAt(293.15).refractivity(HE_NE));
+    assertTrue(
+        new CiddorAir(293.15, 101_325, 0, 1000).refractivity(HE_NE)
+            > CiddorAir.dryAt(293.15).refractivity(HE_NE));
   }
 
   @Test

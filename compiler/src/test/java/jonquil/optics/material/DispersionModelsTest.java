@@ -26,8 +26,12 @@ class DispersionModelsTest {
   void sellmeierTwoTermsWithConstantByHand() {
     // n² = 1 + 0.5 + 1·λ²/(λ² − 0.25 µm²) + 2·λ²/(λ² − 100 µm²) at λ = 1 µm:
     // 1.5 + 4/3 + 2·1/(1 − 100) = 2.8333… − 0.0202020… = 2.8131313…
-    Sellmeier s = Sellmeier.fromMicrometres(0.5, new double[] {1, 2}, new double[] {0.25, 100},
-        WavelengthRange.ofMicrometres(0.6, 5));
+    Sellmeier s =
+        Sellmeier.fromMicrometres(
+            0.5,
+            new double[] {1, 2},
+            new double[] {0.25, 100},
+            WavelengthRange.ofMicrometres(0.6, 5));
     double expected = Math.sqrt(1.5 + 4.0 / 3 - 2.0 / 99);
     assertEquals(expected, s.index(1 * UM).getReal(), 1e-12);
     assertTrue(s.isValidAt(1 * UM));
@@ -38,8 +42,9 @@ class DispersionModelsTest {
   @Test
   void sellmeierResonanceFormSquaresTheWavelengths() {
     // λ₀ = 0.5 µm must enter as C = 0.25 µm², so this equals the 7/3 case above.
-    Sellmeier s = Sellmeier.fromResonancesMicrometres(new double[] {1}, new double[] {0.5},
-        WavelengthRange.ofMicrometres(0.6, 2));
+    Sellmeier s =
+        Sellmeier.fromResonancesMicrometres(
+            new double[] {1}, new double[] {0.5}, WavelengthRange.ofMicrometres(0.6, 2));
     assertEquals(Math.sqrt(7.0 / 3), s.index(1 * UM).getReal(), 1e-12);
   }
 
@@ -73,8 +78,9 @@ class DispersionModelsTest {
 
   @Test
   void tableInterpolatesLinearlyInNAndK() {
-    TabulatedIndex t = TabulatedIndex.ofMicrometreRows(new double[][] {{0.5, 1.0, 2.0}, {1.0, 2.0, 4.0},
-        {2.0, 0.5, 10.0}});
+    TabulatedIndex t =
+        TabulatedIndex.ofMicrometreRows(
+            new double[][] {{0.5, 1.0, 2.0}, {1.0, 2.0, 4.0}, {2.0, 0.5, 10.0}});
     assertEquals(new Complex(1.0, 2.0), t.index(0.5 * UM));
     assertEquals(new Complex(2.0, 4.0), t.index(1.0 * UM));
     Complex quarter = t.index(0.625 * UM);
@@ -87,7 +93,8 @@ class DispersionModelsTest {
 
   @Test
   void tableClampsOutsideAndSaysSo() {
-    TabulatedIndex t = TabulatedIndex.ofMicrometreRows(new double[][] {{0.5, 1.0, 2.0}, {1.0, 2.0, 4.0}});
+    TabulatedIndex t =
+        TabulatedIndex.ofMicrometreRows(new double[][] {{0.5, 1.0, 2.0}, {1.0, 2.0, 4.0}});
     assertEquals(new Complex(1.0, 2.0), t.index(0.1 * UM));
     assertEquals(new Complex(2.0, 4.0), t.index(5 * UM));
     assertEquals(Optional.of(WavelengthRange.ofMicrometres(0.5, 1.0)), t.validRange());
@@ -98,12 +105,17 @@ class DispersionModelsTest {
 
   @Test
   void tableRejectsMalformedData() {
-    assertThrows(IllegalArgumentException.class,
+    assertThrows(
+        IllegalArgumentException.class,
         () -> TabulatedIndex.ofMicrometreRows(new double[][] {{1.0, 1, 0}, {0.5, 1, 0}}));
-    assertThrows(IllegalArgumentException.class,
+    assertThrows(
+        IllegalArgumentException.class,
         () -> TabulatedIndex.ofMicrometreRows(new double[][] {{0.5, 1, -0.1}, {1.0, 1, 0}}));
-    assertThrows(IllegalArgumentException.class, () -> TabulatedIndex.ofMicrometreRows(new double[][] {{0.5, 1, 0}}));
-    assertThrows(IllegalArgumentException.class,
+    assertThrows(
+        IllegalArgumentException.class,
+        () -> TabulatedIndex.ofMicrometreRows(new double[][] {{0.5, 1, 0}}));
+    assertThrows(
+        IllegalArgumentException.class,
         () -> new TabulatedIndex(new double[] {1e-6, 2e-6}, new double[] {1}, new double[] {0, 0}));
   }
 
@@ -120,9 +132,12 @@ class DispersionModelsTest {
 
   @Test
   void uniaxialRangeIsTheOverlap() {
-    Uniaxial u = new Uniaxial(
-        Sellmeier.fromMicrometres(0, new double[] {1}, new double[] {0.01}, WavelengthRange.ofMicrometres(0.2, 3)),
-        Sellmeier.fromMicrometres(0, new double[] {1}, new double[] {0.01}, WavelengthRange.ofMicrometres(0.3, 5)));
+    Uniaxial u =
+        new Uniaxial(
+            Sellmeier.fromMicrometres(
+                0, new double[] {1}, new double[] {0.01}, WavelengthRange.ofMicrometres(0.2, 3)),
+            Sellmeier.fromMicrometres(
+                0, new double[] {1}, new double[] {0.01}, WavelengthRange.ofMicrometres(0.3, 5)));
     assertEquals(Optional.of(WavelengthRange.ofMicrometres(0.3, 3)), u.validRange());
   }
 
@@ -135,21 +150,25 @@ class DispersionModelsTest {
     assertEquals(Math.exp(-1), a.internalTransmittance(0.01), 1e-15);
     // The field amplitude e^{-2πκz/λ} squared gives the same intensity decay over 1 cm.
     double kappa = a.index(1 * UM).getImaginary();
-    assertEquals(a.internalTransmittance(0.01), Math.exp(-4 * Math.PI * kappa * 0.01 / (1 * UM)), 1e-15);
-    assertThrows(IllegalArgumentException.class, () -> new BulkAbsorption(new ConstantIndex(1.5, 0), -1));
+    assertEquals(
+        a.internalTransmittance(0.01), Math.exp(-4 * Math.PI * kappa * 0.01 / (1 * UM)), 1e-15);
+    assertThrows(
+        IllegalArgumentException.class, () -> new BulkAbsorption(new ConstantIndex(1.5, 0), -1));
   }
 
   @Test
   void drudeMetalByHand() {
     // ħωp = 10 eV, f0 = 1, no damping, ħω = 5 eV: ε = 1 − 100/25 = −3, so n = i√3.
-    LorentzDrude free = new LorentzDrude(10, 1, 0, new double[0], new double[0], new double[0], Optional.empty());
+    LorentzDrude free =
+        new LorentzDrude(10, 1, 0, new double[0], new double[0], new double[0], Optional.empty());
     double lambda = LorentzDrude.EV_METRE / 5;
     assertEquals(-3, free.permittivity(lambda).getReal(), 1e-12);
     assertEquals(0, free.index(lambda).getReal(), 1e-12);
     assertEquals(Math.sqrt(3), free.index(lambda).getImaginary(), 1e-12);
 
     // With Γ0 = 1 eV: ε = 1 − 100/(5(5 + i)) = 1 − (25 − 5i)·100/650.
-    LorentzDrude damped = new LorentzDrude(10, 1, 1, new double[0], new double[0], new double[0], Optional.empty());
+    LorentzDrude damped =
+        new LorentzDrude(10, 1, 1, new double[0], new double[0], new double[0], Optional.empty());
     Complex eps = damped.permittivity(lambda);
     assertEquals(1 - 2500.0 / 650, eps.getReal(), 1e-12);
     assertEquals(500.0 / 650, eps.getImaginary(), 1e-12);
@@ -158,8 +177,11 @@ class DispersionModelsTest {
 
   @Test
   void lorentzOscillatorByHand() {
-    // f0 = 0, one oscillator f = 1, ω1 = 4 eV, Γ1 = 0, ħωp = 3 eV; at 2 eV: ε = 1 + 9/(16 − 4) = 1.75.
-    LorentzDrude l = new LorentzDrude(3, 0, 0, new double[] {1}, new double[] {0}, new double[] {4}, Optional.empty());
+    // f0 = 0, one oscillator f = 1, ω1 = 4 eV, Γ1 = 0, ħωp = 3 eV; at 2 eV: ε = 1 + 9/(16 − 4) =
+    // 1.75.
+    LorentzDrude l =
+        new LorentzDrude(
+            3, 0, 0, new double[] {1}, new double[] {0}, new double[] {4}, Optional.empty());
     assertEquals(Math.sqrt(1.75), l.index(LorentzDrude.EV_METRE / 2).getReal(), 1e-12);
   }
 
@@ -173,7 +195,11 @@ class DispersionModelsTest {
     assertThrows(IllegalArgumentException.class, () -> new WavelengthRange(2e-6, 1e-6));
     assertTrue(WavelengthRange.ALL.contains(1e3));
     assertFalse(WavelengthRange.ALL.contains(Double.POSITIVE_INFINITY));
-    assertArrayEquals(new double[] {1e-6, 2e-6},
-        new double[] {WavelengthRange.ofMicrometres(1, 2).min(), WavelengthRange.ofMicrometres(1, 2).max()}, 1e-20);
+    assertArrayEquals(
+        new double[] {1e-6, 2e-6},
+        new double[] {
+          WavelengthRange.ofMicrometres(1, 2).min(), WavelengthRange.ofMicrometres(1, 2).max()
+        },
+        1e-20);
   }
 }

@@ -7,14 +7,14 @@ import static org.junit.jupiter.api.Assertions.fail;
 
 import java.util.ArrayList;
 import java.util.List;
-import jonquil.resolve.CatalogNames;
+import jonquil.resolve.CatalogSpellings;
 import org.apache.commons.math3.complex.Complex;
 import org.junit.jupiter.api.Test;
 
 /**
- * Catalog indices against their sources. Each row names the paper; "computed from" means the value was worked out
- * independently from the coefficients as printed in that paper (rounded to 6 decimals), so a wrong coefficient,
- * term, unit or formula form here fails the row.
+ * Catalog indices against their sources. Each row names the paper; "computed from" means the value
+ * was worked out independently from the coefficients as printed in that paper (rounded to 6
+ * decimals), so a wrong coefficient, term, unit or formula form here fails the row.
  */
 class MaterialCatalogTest {
   private static final double NM = 1e-9;
@@ -25,20 +25,26 @@ class MaterialCatalogTest {
   private static final double TOL = 1.5e-6;
 
   private static CatalogMaterial m(String name) {
-    return MaterialCatalog.lookup(name).orElseThrow(() -> new AssertionError("no catalog entry " + name));
+    return MaterialCatalog.lookup(name)
+        .orElseThrow(() -> new AssertionError("no catalog entry " + name));
   }
 
   private static void rows(Dispersion d, double... wavelengthThenIndex) {
     for (int i = 0; i < wavelengthThenIndex.length; i += 2) {
       double lambda = wavelengthThenIndex[i];
-      assertEquals(wavelengthThenIndex[i + 1], d.index(lambda).getReal(), TOL, "n at " + lambda / NM + " nm");
+      assertEquals(
+          wavelengthThenIndex[i + 1],
+          d.index(lambda).getReal(),
+          TOL,
+          "n at " + lambda / NM + " nm");
       assertEquals(0, d.index(lambda).getImaginary(), 0, "k at " + lambda / NM + " nm");
     }
   }
 
   @Test
   void fusedSilicaMalitson1965() {
-    // Computed from Malitson 1965 (JOSA 55, 1205), three-term Sellmeier; n_d = 1.45846 is the value the paper's
+    // Computed from Malitson 1965 (JOSA 55, 1205), three-term Sellmeier; n_d = 1.45846 is the value
+    // the paper's
     // fit reproduces at the d line (brief: n_d ≈ 1.4585).
     rows(m("fused_silica").dispersion(), F, 1.463127, D, 1.458464, C, 1.456367, YAG, 1.449631);
   }
@@ -51,7 +57,8 @@ class MaterialCatalogTest {
 
   @Test
   void sapphireMalitsonDodge1972() {
-    // Computed from the Malitson & Dodge 1972 Sellmeier coefficients (as printed in Dodge 1986), 20 °C.
+    // Computed from the Malitson & Dodge 1972 Sellmeier coefficients (as printed in Dodge 1986), 20
+    // °C.
     Uniaxial u = m("sapphire").uniaxial().orElseThrow();
     rows(u.ordinary(), F, 1.775508, D, 1.768172, C, 1.764884, YAG, 1.754485);
     rows(u.extraordinary(), F, 1.767284, D, 1.760096, C, 1.756870, YAG, 1.746625);
@@ -95,14 +102,16 @@ class MaterialCatalogTest {
 
   @Test
   void airCiddor1996() {
-    // Ciddor 1996 for the catalog's air (dry, 20 °C, 101 325 Pa, 450 ppm): n − 1 ≈ 2.7e-4 at 633 nm;
+    // Ciddor 1996 for the catalog's air (dry, 20 °C, 101 325 Pa, 450 ppm): n − 1 ≈ 2.7e-4 at 633
+    // nm;
     // computed from the paper's equations: 2.71802e-4 at 632.8 nm.
     assertEquals(1 + 2.71802e-4, m("air").dispersion().index(632.8 * NM).getReal(), 2e-9);
   }
 
   @Test
   void silverJohnsonChristy1972() {
-    // Johnson & Christy 1972 (Phys. Rev. B 6, 4370), table rows at 1.88 eV (659.5 nm) and 1.02 eV (1216 nm).
+    // Johnson & Christy 1972 (Phys. Rev. B 6, 4370), table rows at 1.88 eV (659.5 nm) and 1.02 eV
+    // (1216 nm).
     nk(m("silver"), 659.5 * NM, 0.05, 4.483);
     nk(m("silver"), 1216.0 * NM, 0.09, 8.828);
   }
@@ -154,14 +163,19 @@ class MaterialCatalogTest {
 
   @Test
   void relativeToAirBecomesAbsolute() {
-    // Fused silica at the d line (Malitson 1965, relative to air at 20 °C) in dry 20 °C air (Ciddor 1996):
-    // n_air − 1 = 2.72433e-4; the formula taken at λ/n_air and times n_air gives 1.458867 (computed).
+    // Fused silica at the d line (Malitson 1965, relative to air at 20 °C) in dry 20 °C air (Ciddor
+    // 1996):
+    // n_air − 1 = 2.72433e-4; the formula taken at λ/n_air and times n_air gives 1.458867
+    // (computed).
     CatalogMaterial silica = m("fused_silica");
     assertEquals(IndexBasis.RELATIVE_TO_AIR, silica.basis());
     double nAir = CiddorAir.dryAt(293.15).index(D).getReal();
     assertEquals(1 + 2.72433e-4, nAir, 2e-9);
     assertEquals(1.458867, silica.absoluteIndex(D).getReal(), TOL);
-    assertEquals(silica.dispersion().index(D / nAir).getReal() * nAir, silica.absoluteIndex(D).getReal(), 1e-12);
+    assertEquals(
+        silica.dispersion().index(D / nAir).getReal() * nAir,
+        silica.absoluteIndex(D).getReal(),
+        1e-12);
     assertEquals(1.450025, silica.absoluteIndex(YAG).getReal(), TOL);
     // The shift is about n·(n_air − 1) ≈ 4.0e-4, far larger than the tolerance of the rows above.
     assertTrue(silica.absoluteIndex(D).getReal() - silica.dispersion().index(D).getReal() > 3.5e-4);
@@ -197,7 +211,9 @@ class MaterialCatalogTest {
     for (CatalogMaterial entry : MaterialCatalog.all()) {
       String citation = entry.reference().citation();
       assertFalse(citation.isBlank(), entry.name());
-      assertTrue(citation.matches(".*\\b(1[89]\\d\\d|20\\d\\d)\\b.*"), entry.name() + " citation names a year");
+      assertTrue(
+          citation.matches(".*\\b(1[89]\\d\\d|20\\d\\d)\\b.*"),
+          entry.name() + " citation names a year");
       assertTrue(entry.temperatureKelvin() > 0, entry.name());
       assertTrue(entry.valid().isPresent(), entry.name() + " has a valid range");
       assertTrue(entry.isValidAt(D), entry.name() + " covers the d line");
@@ -206,9 +222,11 @@ class MaterialCatalogTest {
 
   @Test
   void validRangesExcludeWavelengthsOutsideThePapers() {
-    // Malitson 1965: 0.21–3.71 µm; Malitson 1963: 0.23–9.7 µm; Daimon & Masumura 2007: 0.182–1.129 µm;
+    // Malitson 1965: 0.21–3.71 µm; Malitson 1963: 0.23–9.7 µm; Daimon & Masumura 2007: 0.182–1.129
+    // µm;
     // Ghosh 1999: quartz 0.198–2.0531 µm, calcite 0.204–2.172 µm; Dodge 1984: 0.2–7.0 µm;
-    // Malitson & Dodge 1972: 0.2–5.0 µm; Johnson & Christy 1972: 0.1879–1.937 µm; Rakić 1998: 0.1–6 eV;
+    // Malitson & Dodge 1972: 0.2–5.0 µm; Johnson & Christy 1972: 0.1879–1.937 µm; Rakić 1998: 0.1–6
+    // eV;
     // Ciddor 1996: 0.23–1.69 µm.
     outside("fused_silica", 0.20e-6, 3.8e-6);
     outside("calcium_fluoride", 0.22e-6, 9.8e-6);
@@ -229,21 +247,29 @@ class MaterialCatalogTest {
   @Test
   void everyCanonicalNameOfTheLanguageHasAnEntry() {
     List<String> missing = new ArrayList<>();
-    for (CatalogNames.Entry e : CatalogNames.entries()) {
+    for (CatalogSpellings.Entry e : CatalogSpellings.entries()) {
       if (MaterialCatalog.lookup(e.name()).isEmpty()) {
         missing.add(e.name());
       }
     }
     if (!missing.isEmpty()) {
-      fail("CatalogNames entries without catalog data: " + missing);
+      fail("CatalogSpellings entries without catalog data: " + missing);
     }
-    assertEquals(CatalogNames.entries().size(), MaterialCatalog.all().size(), "no entry outside the name table");
-    for (CatalogNames.Entry e : CatalogNames.entries()) {
-      boolean metal = e.materialClass() == CatalogNames.MaterialClass.METAL;
-      boolean birefringent = e.materialClass() == CatalogNames.MaterialClass.BIREFRINGENT_CRYSTAL;
+    assertEquals(
+        CatalogSpellings.entries().size(),
+        MaterialCatalog.all().size(),
+        "no entry outside the name table");
+    for (CatalogSpellings.Entry e : CatalogSpellings.entries()) {
+      boolean metal = e.materialClass() == CatalogSpellings.MaterialClass.METAL;
+      boolean birefringent =
+          e.materialClass() == CatalogSpellings.MaterialClass.BIREFRINGENT_CRYSTAL;
       CatalogMaterial entry = m(e.name());
-      assertEquals(birefringent, entry.isBirefringent(), e.name() + " birefringence matches its class");
-      assertEquals(metal, entry.dispersion().index(D).getImaginary() > 1, e.name() + " metal iff strongly absorbing");
+      assertEquals(
+          birefringent, entry.isBirefringent(), e.name() + " birefringence matches its class");
+      assertEquals(
+          metal,
+          entry.dispersion().index(D).getImaginary() > 1,
+          e.name() + " metal iff strongly absorbing");
     }
   }
 

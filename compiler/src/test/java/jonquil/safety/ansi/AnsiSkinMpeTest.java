@@ -12,17 +12,20 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
 /**
- * Reference cases for the skin MPE after ANSI Z136.1-2014 Table 7, 400–1400 nm, 3.5 mm aperture. All rows
- * are from memory except where the C_A form (confirmed, ICNIRP) is what is being exercised.
+ * Reference cases for the skin MPE after ANSI Z136.1-2014 Table 7, 400–1400 nm, 3.5 mm aperture.
+ * All rows are from memory except where the C_A form (confirmed, ICNIRP) is what is being
+ * exercised.
  */
 class AnsiSkinMpeTest {
 
   @ParameterizedTest(name = "{0} nm cw for {1} s -> {2} W/m2 ({3})")
-  @CsvSource(delimiter = '|', value = {
-      "532 | 1   | 1.1e4 | from memory: Table 7 1.1 C_A t^0.25 J/cm2 at 1 s",
-      "808 | 100 | 3288  | from memory: 0.2 C_A W/cm2, C_A = 1.644 (C_A form confirmed)",
-      "1064 | 100 | 1e4  | from memory: 0.2 C_A W/cm2, C_A = 5",
-  })
+  @CsvSource(
+      delimiter = '|',
+      value = {
+        "532 | 1   | 1.1e4 | from memory: Table 7 1.1 C_A t^0.25 J/cm2 at 1 s",
+        "808 | 100 | 3288  | from memory: 0.2 C_A W/cm2, C_A = 1.644 (C_A form confirmed)",
+        "1064 | 100 | 1e4  | from memory: 0.2 C_A W/cm2, C_A = 5",
+      })
   void continuousWave(double nm, double t, double irradiance, String source) {
     Outcome<Exposure> o = AnsiSkinMpe.at(Emission.continuous(nm * 1e-9, 1), t);
     assertTrue(o.evaluated(), source);
@@ -33,11 +36,13 @@ class AnsiSkinMpeTest {
   }
 
   @ParameterizedTest(name = "{0} nm single {1} s pulse -> {2} J/m2 ({3})")
-  @CsvSource(delimiter = '|', value = {
-      "1064 | 1e-8 | 1000  | from memory: Table 7 1 ns-100 ns row 2 C_A e-2 J/cm2, C_A = 5",
-      "532  | 1e-8 | 200   | from memory: 2e-2 J/cm2",
-      "532  | 1e-6 | 347.9 | from memory: 1.1 t^0.25 J/cm2 at 1 us",
-  })
+  @CsvSource(
+      delimiter = '|',
+      value = {
+        "1064 | 1e-8 | 1000  | from memory: Table 7 1 ns-100 ns row 2 C_A e-2 J/cm2, C_A = 5",
+        "532  | 1e-8 | 200   | from memory: 2e-2 J/cm2",
+        "532  | 1e-6 | 347.9 | from memory: 1.1 t^0.25 J/cm2 at 1 us",
+      })
   void singlePulse(double nm, double tau, double h, String source) {
     Outcome<Exposure> o = AnsiSkinMpe.at(Emission.singlePulse(nm * 1e-9, 1e-3, tau), 10);
     assertTrue(o.evaluated(), source);
@@ -46,7 +51,8 @@ class AnsiSkinMpeTest {
 
   @Test
   void trainUsesRules1And2Only() {
-    // from memory: 1064 nm, 10 ns, 100 Hz, 10 s: Rule 1 1000 J/m2; Rule 2 0.2 x 5 W/cm2 x 10 s / 1000 = 100 J/m2.
+    // from memory: 1064 nm, 10 ns, 100 Hz, 10 s: Rule 1 1000 J/m2; Rule 2 0.2 x 5 W/cm2 x 10 s /
+    // 1000 = 100 J/m2.
     Exposure x = AnsiSkinMpe.at(Emission.pulseTrain(1064e-9, 1e-3, 1e-8, 100), 10).get();
     assertEquals(100, x.radiantExposure(), 1e-6);
     assertEquals(AnsiPulseRules.RULE2, x.limitingCriterion());
@@ -62,7 +68,8 @@ class AnsiSkinMpeTest {
   @ParameterizedTest(name = "{0} nm, pulse {1} s: not evaluated")
   @CsvSource({"250, 0", "10600, 0", "1400, 0", "532, 1e-10"})
   void outsideCoverageIsNotEvaluated(double nm, double tau) {
-    Emission e = tau == 0 ? Emission.continuous(nm * 1e-9, 1) : Emission.singlePulse(nm * 1e-9, 1e-6, tau);
+    Emission e =
+        tau == 0 ? Emission.continuous(nm * 1e-9, 1) : Emission.singlePulse(nm * 1e-9, 1e-6, tau);
     Outcome<Exposure> o = AnsiSkinMpe.at(e, 10);
     assertFalse(o.evaluated());
     assertFalse(o.reason().isBlank());

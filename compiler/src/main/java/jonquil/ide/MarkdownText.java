@@ -6,8 +6,8 @@ import jonquil.units.Dimension;
 import jonquil.units.QuantityFormat;
 
 /** Small Markdown and number helpers, so every hover prints figures the same way. */
-final class Md {
-  private Md() {}
+final class MarkdownText {
+  private MarkdownText() {}
 
   static String q(double si, Dimension dim) {
     return QuantityFormat.format(si, dim);

@@ -14,14 +14,15 @@ import jonquil.resolve.Symbol;
 import jonquil.source.TextRange;
 
 /**
- * Every declared name and every resolved use of one across all files of a result, merged
- * over the roots' models, so navigation and rename see one symbol however many roots use it.
+ * Every declared name and every resolved use of one across all files of a result, merged over the
+ * roots' models, so navigation and rename see one symbol however many roots use it.
  */
-final class Names {
+final class SymbolUses {
   /** Identifies a symbol across models: its declaration site, or its name for catalog entries. */
   record Key(String name, Path file, int start) {
     static Key of(Symbol s) {
-      return s.isCatalog() ? new Key(s.name(), null, -1)
+      return s.isCatalog()
+          ? new Key(s.name(), null, -1)
           : new Key(s.name(), s.file(), s.nameNode().map(n -> n.range().start()).orElse(-1));
     }
   }
@@ -35,25 +36,37 @@ final class Names {
 
   private final List<Occurrence> all;
 
-  private Names(List<Occurrence> all) {
+  private SymbolUses(List<Occurrence> all) {
     this.all = List.copyOf(all);
   }
 
-  static Names of(Result r) {
+  static SymbolUses of(Result r) {
     Map<String, Occurrence> unique = new LinkedHashMap<>();
-    for (ResolvedModel m : Models.ordered(r)) {
-      m.scopes().values().forEach(scope -> scope.symbols().values().forEach(s -> {
-        if (!s.isCatalog() && s.nameNode().isPresent()) {
-          add(unique, new Occurrence(s.file(), s.nameNode().get().range(), s, true));
-        }
-      }));
+    for (ResolvedModel m : OwningModels.ordered(r)) {
+      m.scopes()
+          .values()
+          .forEach(
+              scope ->
+                  scope
+                      .symbols()
+                      .values()
+                      .forEach(
+                          s -> {
+                            if (!s.isCatalog() && s.nameNode().isPresent()) {
+                              add(
+                                  unique,
+                                  new Occurrence(s.file(), s.nameNode().get().range(), s, true));
+                            }
+                          }));
       for (ResolvedRef ref : m.references()) {
         add(unique, new Occurrence(ref.file(), ref.range(), ref.target(), false));
       }
     }
     List<Occurrence> list = new ArrayList<>(unique.values());
-    list.sort(Comparator.comparing((Occurrence o) -> o.file().toString()).thenComparing(Occurrence::range));
-    return new Names(list);
+    list.sort(
+        Comparator.comparing((Occurrence o) -> o.file().toString())
+            .thenComparing(Occurrence::range));
+    return new SymbolUses(list);
   }
 
   private static void add(Map<String, Occurrence> unique, Occurrence o) {

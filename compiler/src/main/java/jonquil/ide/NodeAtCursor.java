@@ -13,8 +13,8 @@ import jonquil.syntax.TrainDecl;
 import jonquil.syntax.UseDecl;
 
 /** Finds the syntax node under a cursor, for the questions the name side table cannot answer. */
-final class Syntax {
-  private Syntax() {}
+final class NodeAtCursor {
+  private NodeAtCursor() {}
 
   static Optional<UseDecl> use(SpecFile f, int offset) {
     return f.uses().stream().filter(u -> u.targetRange().contains(offset)).findFirst();
@@ -63,10 +63,13 @@ final class Syntax {
         r.yield().ifPresent(y -> args.add(y.bound()));
         r.check().condition().ifPresent(c -> addCondition(args, c));
         r.check().extras().forEach(e -> addCondition(args, e.condition()));
-        r.check().band().ifPresent(b -> {
-          args.add(b.low());
-          args.add(b.high());
-        });
+        r.check()
+            .band()
+            .ifPresent(
+                b -> {
+                  args.add(b.low());
+                  args.add(b.high());
+                });
       }
     }
     List<Arg.QuantityArg> out = new ArrayList<>();

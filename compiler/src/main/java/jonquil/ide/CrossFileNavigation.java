@@ -20,17 +20,17 @@ import jonquil.syntax.SpecFile;
 import jonquil.syntax.UseDecl;
 
 /**
- * Navigation that reaches past one check: a result answers for the files it read, and a
- * workspace index ({@link FileIndex}) for the others. A name in the index is matched to a
- * symbol by its declaring file and its name (names are unique within a file), not by offset,
- * so an index entry stays valid while the declaring file is edited elsewhere in it.
+ * Navigation that reaches past one check: a result answers for the files it read, and a workspace
+ * index ({@link FileIndex}) for the others. A name in the index is matched to a symbol by its
+ * declaring file and its name (names are unique within a file), not by offset, so an index entry
+ * stays valid while the declaring file is edited elsewhere in it.
  */
-final class WorkspaceNames {
-  private WorkspaceNames() {}
+final class CrossFileNavigation {
+  private CrossFileNavigation() {}
 
   static Optional<FileIndex> index(Result r, Path file) {
     SourceFile source = r.files().get(file);
-    SpecFile tree = Models.tree(r, file).orElse(null);
+    SpecFile tree = OwningModels.tree(r, file).orElse(null);
     if (source == null || tree == null) {
       return Optional.empty();
     }
@@ -48,7 +48,8 @@ final class WorkspaceNames {
       }
       for (ResolvedRef ref : m.references()) {
         if (ref.file().equals(file) && !ref.target().isCatalog()) {
-          names.add(new FileIndex.NameUse(ref.target().name(), ref.range(), ref.target().file(), false));
+          names.add(
+              new FileIndex.NameUse(ref.target().name(), ref.range(), ref.target().file(), false));
         }
       }
       m.scopes().keySet().stream().filter(p -> !p.equals(file)).sorted().forEach(reads::add);
@@ -65,19 +66,24 @@ final class WorkspaceNames {
         // not a path: the check reported it, and it names no file to watch for
       }
     }
-    return Optional.of(new FileIndex(source, Outline.declared(Outline.of(source, tree)), names, uses, reads));
+    return Optional.of(
+        new FileIndex(source, Outline.declared(Outline.of(source, tree)), names, uses, reads));
   }
 
-  static List<Location> references(Result r, Path file, int offset, boolean includeDeclaration,
+  static List<Location> references(
+      Result r,
+      Path file,
+      int offset,
+      boolean includeDeclaration,
       Collection<FileIndex> elsewhere) {
-    Names names = Names.of(r);
-    Optional<Names.Occurrence> at = names.at(file, offset);
+    SymbolUses names = SymbolUses.of(r);
+    Optional<SymbolUses.Occurrence> at = names.at(file, offset);
     if (at.isEmpty()) {
       return List.of();
     }
     List<Location> declarations = new ArrayList<>();
     List<Location> uses = new ArrayList<>();
-    for (Names.Occurrence o : names.of(at.get().key())) {
+    for (SymbolUses.Occurrence o : names.of(at.get().key())) {
       (o.declaration() ? declarations : uses).add(new Location(o.file(), o.range()));
     }
     Symbol symbol = at.get().symbol();
@@ -88,7 +94,8 @@ final class WorkspaceNames {
         }
       }
     }
-    uses.sort(Comparator.comparing((Location l) -> l.file().toString()).thenComparing(Location::range));
+    uses.sort(
+        Comparator.comparing((Location l) -> l.file().toString()).thenComparing(Location::range));
     List<Location> out = new ArrayList<>();
     if (includeDeclaration) {
       out.addAll(declarations);
@@ -97,12 +104,13 @@ final class WorkspaceNames {
     return out;
   }
 
-  static RenameResult rename(Result r, Path file, int offset, String newName, Collection<FileIndex> elsewhere) {
+  static RenameResult rename(
+      Result r, Path file, int offset, String newName, Collection<FileIndex> elsewhere) {
     RenameResult here = Renamer.rename(r, file, offset, newName);
     if (here.error() != null || here.edits().isEmpty()) {
       return here; // refused, or renamed to itself
     }
-    Symbol symbol = Renamer.renamable(Names.of(r), file, offset).orElseThrow().symbol();
+    Symbol symbol = Renamer.renamable(SymbolUses.of(r), file, offset).orElseThrow().symbol();
     Map<Path, FileIndex> unread = unread(r, elsewhere);
     Map<Path, List<Edit>> edits = new LinkedHashMap<>(here.edits());
     for (FileIndex f : unread.values()) {
@@ -113,14 +121,22 @@ final class WorkspaceNames {
       if (inFile.isEmpty()) {
         continue;
       }
-      // The new name must not already be visible where the old one is written: the file's own names and those it uses.
+      // The new name must not already be visible where the old one is written: the file's own names
+      // and those it uses.
       List<Path> visible = new ArrayList<>(List.of(f.file()));
       visible.addAll(f.uses());
       for (Path p : visible) {
         FileIndex seen = unread.get(p);
-        if (seen != null && seen.names().stream().anyMatch(n -> n.declaration() && n.name().equals(newName))) {
-          return RenameResult.refused("'" + newName + "' is already declared in '" + p.getFileName()
-              + "', where '" + symbol.name() + "' is used; names must be unique");
+        if (seen != null
+            && seen.names().stream().anyMatch(n -> n.declaration() && n.name().equals(newName))) {
+          return RenameResult.refused(
+              "'"
+                  + newName
+                  + "' is already declared in '"
+                  + p.getFileName()
+                  + "', where '"
+                  + symbol.name()
+                  + "' is used; names must be unique");
         }
       }
       inFile.sort(Comparator.comparing(Edit::range));
@@ -142,6 +158,7 @@ final class WorkspaceNames {
 
   private static List<FileIndex.NameUse> uses(FileIndex f, Symbol symbol) {
     return f.names().stream()
-        .filter(n -> n.name().equals(symbol.name()) && n.declaredIn().equals(symbol.file())).toList();
+        .filter(n -> n.name().equals(symbol.name()) && n.declaredIn().equals(symbol.file()))
+        .toList();
   }
 }

@@ -11,19 +11,26 @@ import jonquil.source.SourceFile;
 import jonquil.syntax.SpecFile;
 import jonquil.syntax.SpecParser;
 
-/** Finds the model, solution and syntax tree that answer for a file, since a part library can belong to several roots. */
-final class Models {
-  private Models() {}
+/**
+ * Finds the model, solution and syntax tree that answer for a file, since a part library can belong
+ * to several roots.
+ */
+final class OwningModels {
+  private OwningModels() {}
 
-  /** Models in a stable order (by root path). */
+  /** OwningModels in a stable order (by root path). */
   static List<ResolvedModel> ordered(Result r) {
-    return r.models().values().stream().sorted(Comparator.comparing(m -> m.root().toString())).toList();
+    return r.models().values().stream()
+        .sorted(Comparator.comparing(m -> m.root().toString()))
+        .toList();
   }
 
   /** The models that read this file: its own root first, then the roots that use it. */
   static List<ResolvedModel> reading(Result r, Path file) {
-    return ordered(r).stream().filter(m -> m.scopes().containsKey(file))
-        .sorted(Comparator.comparing(m -> m.root().equals(file) ? 0 : 1)).toList();
+    return ordered(r).stream()
+        .filter(m -> m.scopes().containsKey(file))
+        .sorted(Comparator.comparing(m -> m.root().equals(file) ? 0 : 1))
+        .toList();
   }
 
   static Optional<ResolvedModel> primary(Result r, Path file) {

@@ -6,21 +6,22 @@ import jonquil.units.UnitParse;
 import jonquil.units.UnitParser;
 
 /**
- * How a requirement's value, bound and margin read in messages and reports: quantities
- * with their SI unit and a fitting prefix, hazard classes by name, densities as 'OD x'
- * and fractions in percent. One place, so findings and verdict lines cannot disagree.
+ * How a requirement's value, bound and margin read in messages and reports: quantities with their
+ * SI unit and a fitting prefix, hazard classes by name, densities as 'OD x' and fractions in
+ * percent. One place, so findings and verdict lines cannot disagree.
  */
-public final class Figures {
-  private Figures() {}
+public final class VerdictText {
+  private VerdictText() {}
 
   public static String format(double value, String unit) {
     String u = unit == null ? "" : unit;
     switch (u) {
-      case "class": {
-        int i = (int) Math.round(value);
-        var classes = jonquil.resolve.HazardClass.values();
-        return i >= 0 && i < classes.length ? classes[i].label() : String.valueOf(value);
-      }
+      case "class":
+        {
+          int i = (int) Math.round(value);
+          var classes = jonquil.resolve.HazardClass.values();
+          return i >= 0 && i < classes.length ? classes[i].label() : String.valueOf(value);
+        }
       case "%":
         return QuantityFormat.format(100 * value, Dimension.DIMENSIONLESS) + " %";
       case "OD":
