@@ -7,6 +7,7 @@ import jonquil.diag.Severity;
 import jonquil.source.SourceFile;
 import jonquil.source.TextRange;
 import jonquil.syntax.SpecParser;
+import jonquil.syntax.TokenKind;
 
 /**
  * Rewrites a spec in the one canonical layout, so that diffs show changed facts and never changed
@@ -57,8 +58,8 @@ public final class Formatter {
     if (text.startsWith("\uFEFF")) {
       result.append('\uFEFF'); // a byte-order mark is the file's encoding label, not layout
     }
-    for (Line line : Layout.lines(Lexer.lex(text), options)) {
-      result.append(Lexer.stripTrailingSpace(line.text())).append(newline);
+    for (Line line : Layout.lines(WrittenToken.of(text), options)) {
+      result.append(WrittenToken.stripTrailingSpace(line.text())).append(newline);
     }
     return result.toString();
   }
@@ -70,8 +71,8 @@ public final class Formatter {
 
   /** The tokens that carry what the writer wrote: everything but line breaks and ';'. */
   static List<String> tokens(String text) {
-    return Lexer.lex(text).stream()
-        .filter(l -> l.kind() != LexemeKind.NL && l.kind() != LexemeKind.SEMI)
+    return WrittenToken.of(text).stream()
+        .filter(l -> l.kind() != TokenKind.NEWLINE && l.kind() != TokenKind.SEMICOLON)
         .map(l -> l.kind() + " " + l.text())
         .toList();
   }

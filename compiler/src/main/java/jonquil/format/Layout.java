@@ -2,55 +2,56 @@ package jonquil.format;
 
 import java.util.ArrayList;
 import java.util.List;
+import jonquil.syntax.TokenKind;
 
 /**
- * Turns the lexemes of a well-formed spec into canonical lines: one statement or block parameter
- * per line, blocks indented one level, at most one blank line in a row, and every comment between
- * the same two tokens as before. The grammar is flat (blocks never nest), so a depth of 0 or 1 and
+ * Turns the tokens of a well-formed spec into canonical lines: one statement or block parameter per
+ * line, blocks indented one level, at most one blank line in a row, and every comment between the
+ * same two tokens as before. The grammar is flat (blocks never nest), so a depth of 0 or 1 and
  * whether the block is a train is all the state it needs.
  */
 final class Layout {
-  private final List<Lexeme> lexemes;
+  private final List<WrittenToken> tokens;
   private final FormatOptions options;
   private final List<Line> out = new ArrayList<>();
-  private final List<Lexeme> statement = new ArrayList<>();
+  private final List<WrittenToken> statement = new ArrayList<>();
   private int depth;
   private boolean inTrain;
   private int lineBreaks;
   private final int[] previousSignificant;
   private final int[] nextSignificant;
 
-  private Layout(List<Lexeme> lexemes, FormatOptions options) {
-    this.lexemes = lexemes;
+  private Layout(List<WrittenToken> tokens, FormatOptions options) {
+    this.tokens = tokens;
     this.options = options;
-    this.previousSignificant = previousSignificant(lexemes);
-    this.nextSignificant = nextSignificant(lexemes);
+    this.previousSignificant = previousSignificant(tokens);
+    this.nextSignificant = nextSignificant(tokens);
   }
 
-  static List<Line> lines(List<Lexeme> lexemes, FormatOptions options) {
-    Layout layout = new Layout(lexemes, options);
+  static List<Line> lines(List<WrittenToken> tokens, FormatOptions options) {
+    Layout layout = new Layout(tokens, options);
     layout.run();
     return List.copyOf(layout.out);
   }
 
   private void run() {
-    for (int i = 0; i < lexemes.size(); i++) {
-      Lexeme t = lexemes.get(i);
+    for (int i = 0; i < tokens.size(); i++) {
+      WrittenToken t = tokens.get(i);
       switch (t.kind()) {
-        case NL -> {
+        case NEWLINE -> {
           lineBreaks++;
           if (!(inTrain && continuesPath(i))) {
             flush();
           }
         }
-        case SEMI -> flush(); // ';' is a line break written inline
+        case SEMICOLON -> flush(); // ';' is a line break written inline
         case LBRACE -> {
           add(t);
           inTrain =
               statement.stream()
-                  .filter(Lexeme::significant)
+                  .filter(WrittenToken::significant)
                   .findFirst()
-                  .map(first -> first.kind() == LexemeKind.WORD && first.text().equals("train"))
+                  .map(first -> first.kind() == TokenKind.KEYWORD && first.text().equals("train"))
                   .orElse(false);
           flush();
           out.set(out.size() - 1, withOpensBlock(out.get(out.size() - 1)));
@@ -62,7 +63,7 @@ final class Layout {
           inTrain = false;
           close(t);
         }
-        case LINE_COMMENT, BLOCK_COMMENT -> {
+        case LINE_COMMENT, BLOCK_COMMENT, UNTERMINATED_COMMENT -> {
           if (statement.isEmpty()
               && !t.startsLine()
               && !out.isEmpty()
@@ -73,7 +74,31 @@ final class Layout {
             add(t);
           }
         }
-        default -> add(t);
+        case IDENTIFIER,
+            KEYWORD,
+            NUMBER,
+            STRING,
+            WHITESPACE,
+            ARROW,
+            RANGE,
+            PLUS_MINUS,
+            COMPARISON,
+            EQUALS,
+            LPAREN,
+            RPAREN,
+            COMMA,
+            DOT,
+            SLASH,
+            STAR,
+            MIDDOT,
+            CARET,
+            PERCENT,
+            DEGREE,
+            PLUS,
+            MINUS,
+            UNTERMINATED_STRING,
+            BAD_CHARACTER ->
+            add(t);
       }
     }
     flush();
@@ -99,39 +124,39 @@ final class Layout {
   }
 
   private boolean isArrow(int index) {
-    return index >= 0 && lexemes.get(index).kind() == LexemeKind.ARROW;
+    return index >= 0 && tokens.get(index).kind() == TokenKind.ARROW;
   }
 
   /**
-   * For each lexeme, the index of the nearest significant lexeme before it (-1 if none): one pass,
+   * For each token, the index of the nearest significant token before it (-1 if none): one pass,
    * not one per line break.
    */
-  private static int[] previousSignificant(List<Lexeme> lexemes) {
-    int[] result = new int[lexemes.size()];
+  private static int[] previousSignificant(List<WrittenToken> tokens) {
+    int[] result = new int[tokens.size()];
     int last = -1;
-    for (int i = 0; i < lexemes.size(); i++) {
+    for (int i = 0; i < tokens.size(); i++) {
       result[i] = last;
-      if (lexemes.get(i).significant()) {
+      if (tokens.get(i).significant()) {
         last = i;
       }
     }
     return result;
   }
 
-  /** For each lexeme, the index of the nearest significant lexeme after it (-1 if none). */
-  private static int[] nextSignificant(List<Lexeme> lexemes) {
-    int[] result = new int[lexemes.size()];
+  /** For each token, the index of the nearest significant token after it (-1 if none). */
+  private static int[] nextSignificant(List<WrittenToken> tokens) {
+    int[] result = new int[tokens.size()];
     int next = -1;
-    for (int i = lexemes.size() - 1; i >= 0; i--) {
+    for (int i = tokens.size() - 1; i >= 0; i--) {
       result[i] = next;
-      if (lexemes.get(i).significant()) {
+      if (tokens.get(i).significant()) {
         next = i;
       }
     }
     return result;
   }
 
-  private void add(Lexeme t) {
+  private void add(WrittenToken t) {
     if (statement.isEmpty()) {
       blankLineIfWritten();
     }
@@ -149,8 +174,8 @@ final class Layout {
   /**
    * An empty block closes on its opening line ({@code probe p {}}); any other on a line of its own.
    */
-  private void close(Lexeme brace) {
-    if (!out.isEmpty() && last().opensBlock() && last().last() == LexemeKind.LBRACE) {
+  private void close(WrittenToken brace) {
+    if (!out.isEmpty() && last().opensBlock() && last().last() == TokenKind.LBRACE) {
       Line closed = last().append("", brace);
       out.set(out.size() - 1, new Line(closed.text(), false, closed.last()));
     } else {
@@ -168,10 +193,10 @@ final class Layout {
       return;
     }
     String indent = options.unit().repeat(depth);
-    if (inTrain && depth == 1 && statement.stream().anyMatch(t -> t.kind() == LexemeKind.ARROW)) {
+    if (inTrain && depth == 1 && statement.stream().anyMatch(t -> t.kind() == TokenKind.ARROW)) {
       out.addAll(PathLayout.lines(statement, indent, options));
     } else {
-      Lexeme lastToken = statement.get(statement.size() - 1);
+      WrittenToken lastToken = statement.get(statement.size() - 1);
       out.add(new Line(indent + Spacing.join(statement), false, lastToken.kind()));
     }
     statement.clear();

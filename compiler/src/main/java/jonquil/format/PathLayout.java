@@ -2,6 +2,7 @@ package jonquil.format;
 
 import java.util.ArrayList;
 import java.util.List;
+import jonquil.syntax.TokenKind;
 
 /**
  * Lays out one beam path of a train: on one line when it fits, otherwise broken before an arrow,
@@ -15,13 +16,13 @@ final class PathLayout {
 
   private PathLayout() {}
 
-  static List<Line> lines(List<Lexeme> path, String indent, FormatOptions options) {
+  static List<Line> lines(List<WrittenToken> path, String indent, FormatOptions options) {
     String continuation = indent + " ".repeat(firstStepWidth(path) + 1);
     List<Line> lines = new ArrayList<>();
-    List<Lexeme> line = new ArrayList<>();
+    List<WrittenToken> line = new ArrayList<>();
     String prefix = indent;
     for (int i = 0; i < path.size(); i++) {
-      Lexeme t = path.get(i);
+      WrittenToken t = path.get(i);
       if (!line.isEmpty() && breaksBefore(path, i, prefix, line, options)) {
         lines.add(line(prefix, line));
         line.clear();
@@ -40,36 +41,36 @@ final class PathLayout {
     return lines;
   }
 
-  private static Line line(String prefix, List<Lexeme> tokens) {
+  private static Line line(String prefix, List<WrittenToken> tokens) {
     return new Line(prefix + Spacing.join(tokens), false, tokens.get(tokens.size() - 1).kind());
   }
 
-  private static boolean breaksAfter(Lexeme t) {
-    return t.kind() == LexemeKind.LINE_COMMENT || (t.isComment() && t.startsLine() && t.endsLine());
+  private static boolean breaksAfter(WrittenToken t) {
+    return t.kind() == TokenKind.LINE_COMMENT || (t.isComment() && t.startsLine() && t.endsLine());
   }
 
   private static boolean breaksBefore(
-      List<Lexeme> path, int i, String prefix, List<Lexeme> line, FormatOptions o) {
-    Lexeme t = path.get(i);
+      List<WrittenToken> path, int i, String prefix, List<WrittenToken> line, FormatOptions o) {
+    WrittenToken t = path.get(i);
     if (t.isComment()) {
       return t.startsLine();
     }
-    if (t.kind() != LexemeKind.ARROW) {
+    if (t.kind() != TokenKind.ARROW) {
       return false;
     }
-    List<Lexeme> joined = new ArrayList<>(line);
+    List<WrittenToken> joined = new ArrayList<>(line);
     joined.addAll(nextStep(path, i));
     return columns(prefix + Spacing.join(joined), o) > MAX_COLUMNS;
   }
 
   /** The arrow at {@code arrow} and what follows it up to the next arrow or forced break. */
-  private static List<Lexeme> nextStep(List<Lexeme> path, int arrow) {
-    List<Lexeme> step = new ArrayList<>();
+  private static List<WrittenToken> nextStep(List<WrittenToken> path, int arrow) {
+    List<WrittenToken> step = new ArrayList<>();
     step.add(path.get(arrow));
     for (int j = arrow + 1; j < path.size(); j++) {
-      Lexeme t = path.get(j);
-      if (t.kind() == LexemeKind.ARROW
-          || t.kind() == LexemeKind.LINE_COMMENT
+      WrittenToken t = path.get(j);
+      if (t.kind() == TokenKind.ARROW
+          || t.kind() == TokenKind.LINE_COMMENT
           || (t.isComment() && t.startsLine())) {
         break;
       }
@@ -78,10 +79,10 @@ final class PathLayout {
     return step;
   }
 
-  private static int firstStepWidth(List<Lexeme> path) {
-    List<Lexeme> step = new ArrayList<>();
-    for (Lexeme t : path) {
-      if (t.kind() == LexemeKind.ARROW) {
+  private static int firstStepWidth(List<WrittenToken> path) {
+    List<WrittenToken> step = new ArrayList<>();
+    for (WrittenToken t : path) {
+      if (t.kind() == TokenKind.ARROW) {
         break;
       }
       if (!t.isComment()) {

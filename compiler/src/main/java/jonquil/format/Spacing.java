@@ -1,6 +1,9 @@
 package jonquil.format;
 
 import java.util.List;
+import jonquil.syntax.Token;
+import jonquil.syntax.TokenKind;
+import jonquil.syntax.Tokens;
 
 /**
  * Whether one space or none goes between two tokens on a line. One space is the rule; the
@@ -11,7 +14,7 @@ final class Spacing {
   private Spacing() {}
 
   /** The tokens joined with the spacing rules, as they appear on one line. */
-  static String join(List<Lexeme> line) {
+  static String join(List<WrittenToken> line) {
     StringBuilder text = new StringBuilder();
     for (int i = 0; i < line.size(); i++) {
       if (i > 0 && spaced(line, i)) {
@@ -23,40 +26,42 @@ final class Spacing {
   }
 
   /** True when a space goes before {@code line.get(i)}, which follows {@code line.get(i - 1)}. */
-  static boolean spaced(List<Lexeme> line, int i) {
-    Lexeme prev = line.get(i - 1);
-    Lexeme next = line.get(i);
+  static boolean spaced(List<WrittenToken> line, int i) {
+    WrittenToken prev = line.get(i - 1);
+    WrittenToken next = line.get(i);
     return !glued(line, i, prev, next)
-        || !Lexer.lex(prev.text() + next.text()).stream()
-            .map(Lexeme::text)
+        || !Tokens.scan(prev.text() + next.text()).stream()
+            .filter(t -> t.kind() != TokenKind.WHITESPACE)
+            .map(Token::text)
             .toList()
             .equals(List.of(prev.text(), next.text()));
   }
 
-  private static boolean glued(List<Lexeme> line, int i, Lexeme prev, Lexeme next) {
-    LexemeKind p = prev.kind();
-    LexemeKind n = next.kind();
+  private static boolean glued(
+      List<WrittenToken> line, int i, WrittenToken prev, WrittenToken next) {
+    TokenKind p = prev.kind();
+    TokenKind n = next.kind();
     if (p.isComment() || n.isComment()) {
       return false;
     }
-    if (n == LexemeKind.COMMA || p == LexemeKind.DOT || n == LexemeKind.DOT) {
+    if (n == TokenKind.COMMA || p == TokenKind.DOT || n == TokenKind.DOT) {
       return true; // 'waist 1 mm, m2 1.1' and 'pbs.through'
     }
-    if (p == LexemeKind.SIGN && n == LexemeKind.NUMBER) {
+    if (p.isSign() && n == TokenKind.NUMBER) {
       return true; // a sign is part of its number: '-50 mm'
     }
     if (p.isUnitOperator()
-        || n == LexemeKind.STAR
-        || n == LexemeKind.MIDDOT
-        || n == LexemeKind.CARET) {
+        || n == TokenKind.STAR
+        || n == TokenKind.MIDDOT
+        || n == TokenKind.CARET) {
       return true; // a compound unit is one word: 'kW/cm2', 'J/cm^2'
     }
-    if (n == LexemeKind.SLASH) {
+    if (n == TokenKind.SLASH) {
       // After a value a '/' starts the unit ('0.2 /cm'); after a unit factor it continues it.
-      return !(p == LexemeKind.NUMBER && !isExponent(line, i - 1));
+      return !(p == TokenKind.NUMBER && !isExponent(line, i - 1));
     }
-    if ((n == LexemeKind.PERCENT || n == LexemeKind.DEGREE)
-        && p == LexemeKind.NUMBER
+    if ((n == TokenKind.PERCENT || n == TokenKind.DEGREE)
+        && p == TokenKind.NUMBER
         && !isExponent(line, i - 1)) {
       return !next.spaceBefore(); // both '95 %' and '45°' are common: keep the writer's choice
     }
@@ -66,11 +71,11 @@ final class Spacing {
   /**
    * True when the number at {@code at} is the power of a unit factor ({@code cm^2}, {@code m^-1}).
    */
-  private static boolean isExponent(List<Lexeme> line, int at) {
+  private static boolean isExponent(List<WrittenToken> line, int at) {
     int before = at - 1;
-    if (before >= 0 && line.get(before).kind() == LexemeKind.SIGN) {
+    if (before >= 0 && line.get(before).kind().isSign()) {
       before--;
     }
-    return before >= 0 && line.get(before).kind() == LexemeKind.CARET;
+    return before >= 0 && line.get(before).kind() == TokenKind.CARET;
   }
 }

@@ -13,6 +13,8 @@ import jonquil.resolve.ElementKind;
 import jonquil.resolve.Measure;
 import jonquil.resolve.ParamSpec;
 import jonquil.source.SourceFile;
+import jonquil.syntax.Token;
+import jonquil.syntax.TokenKind;
 
 /**
  * Chooses what may be written at the cursor from the text before it and the names of the last
@@ -107,7 +109,7 @@ final class Completions {
    * shape's words.
    */
   private static List<CompletionItemInfo> inParameter(
-      CursorContext c, Vocabulary v, ElementKind kind, List<Lexeme> line) {
+      CursorContext c, Vocabulary v, ElementKind kind, List<Token> line) {
     if (line.isEmpty()) {
       return parameters(kind, Set.of());
     }
@@ -116,7 +118,7 @@ final class Completions {
       return units(
           spec.map(s -> ShapeSlots.unitsAfter(s.shape(), line)).orElse(UnitChoices.COMMON));
     }
-    String prev = c.previous().map(Lexeme::text).orElse("");
+    String prev = c.previous().map(Token::text).orElse("");
     if (MATERIAL_WORDS.contains(prev)) {
       return v.materials(prev.equals("metal"));
     }
@@ -153,7 +155,7 @@ final class Completions {
     if (c.statement().isEmpty() || c.after("->")) {
       return elements(v);
     }
-    if (c.beforePrevious().map(l -> l.type() == Lexeme.Type.NUMBER).orElse(false)) {
+    if (c.beforePrevious().map(l -> l.kind() == TokenKind.NUMBER).orElse(false)) {
       return List.of(keyword("in", "the medium of this distance: 2.8 mm in water"));
     }
     return List.of();
@@ -206,7 +208,7 @@ final class Completions {
 
   /** The measure the requirement line starts with, in its longest spelling. */
   private static Optional<Measure> measure(CursorContext c) {
-    List<Lexeme> s = c.statement();
+    List<Token> s = c.statement();
     int start = !s.isEmpty() && s.get(0).is("yield") ? -1 : 0;
     if (start < 0) {
       return Optional.empty();

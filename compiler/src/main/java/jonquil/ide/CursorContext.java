@@ -3,6 +3,9 @@ package jonquil.ide;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import jonquil.syntax.Token;
+import jonquil.syntax.TokenKind;
+import jonquil.syntax.Tokens;
 
 /**
  * Where the cursor stands, read from the text before it alone: which block it is in, the statement
@@ -12,7 +15,7 @@ import java.util.Optional;
 record CursorContext(
     Block block,
     String header,
-    List<Lexeme> statement,
+    List<Token> statement,
     String word,
     Optional<String> dotted,
     boolean inert) {
@@ -29,15 +32,17 @@ record CursorContext(
   }
 
   static CursorContext read(String text, int offset) {
-    List<Lexeme> lexemes = Scan.lex(text.substring(0, offset));
-    if (!lexemes.isEmpty() && insideLiteral(lexemes.get(lexemes.size() - 1), offset)) {
+    List<Token> tokens = Tokens.scan(text.substring(0, offset));
+    if (insideLiteral(tokens)) {
       return new CursorContext(Block.TOP, "", List.of(), "", Optional.empty(), true);
     }
-    List<Lexeme> code = new ArrayList<>();
-    lexemes.stream().filter(l -> l.type() != Lexeme.Type.COMMENT).forEach(code::add);
+    List<Token> code = new ArrayList<>();
+    tokens.stream()
+        .filter(l -> !l.kind().isComment() && l.kind() != TokenKind.WHITESPACE)
+        .forEach(code::add);
     String word = "";
     if (!code.isEmpty()
-        && code.get(code.size() - 1).type() == Lexeme.Type.WORD
+        && code.get(code.size() - 1).kind().isWord()
         && code.get(code.size() - 1).end() == offset) {
       word = code.remove(code.size() - 1).text();
     }
@@ -46,12 +51,12 @@ record CursorContext(
     if (n >= 2
         && code.get(n - 1).is(".")
         && code.get(n - 1).end() == offset - word.length()
-        && code.get(n - 2).type() == Lexeme.Type.WORD) {
+        && code.get(n - 2).kind().isWord()) {
       dotted = Optional.of(code.get(n - 2).text());
       code = new ArrayList<>(code.subList(0, n - 2));
     }
     int open = innermostOpenBrace(code);
-    List<Lexeme> header = open < 0 ? List.of() : code.subList(statementStart(code, open), open);
+    List<Token> header = open < 0 ? List.of() : code.subList(statementStart(code, open), open);
     Block block = Block.TOP;
     String head = header.isEmpty() ? "" : header.get(0).text();
     if (open >= 0) {
@@ -60,25 +65,57 @@ record CursorContext(
               ? Block.TRAIN
               : head.equals("require") ? Block.REQUIRE : Block.DECLARATION;
     }
-    List<Lexeme> statement = code.subList(statementStart(code, code.size()), code.size());
+    List<Token> statement = code.subList(statementStart(code, code.size()), code.size());
     return new CursorContext(block, head, statement, word, dotted, false);
   }
 
   /** The cursor is inside a comment or an unterminated string, where nothing is offered. */
-  private static boolean insideLiteral(Lexeme last, int offset) {
-    if (last.end() != offset) {
+  private static boolean insideLiteral(List<Token> tokens) {
+    if (tokens.isEmpty()) {
       return false;
     }
-    if (last.type() == Lexeme.Type.COMMENT) {
-      return last.text().startsWith("//")
-          || !last.text().endsWith("*/")
-          || last.text().length() < 4;
+    Token last = tokens.get(tokens.size() - 1);
+    if (last.kind() == TokenKind.BAD_CHARACTER
+        && last.is("\\")
+        && tokens.size() >= 2
+        && tokens.get(tokens.size() - 2).kind() == TokenKind.UNTERMINATED_STRING) {
+      return true; // an escape begun at the cursor: the lexer leaves the '\\' outside the string
     }
-    return last.type() == Lexeme.Type.STRING
-        && (last.text().length() < 2 || !last.text().endsWith("\""));
+    return switch (last.kind()) {
+      case LINE_COMMENT, UNTERMINATED_COMMENT, UNTERMINATED_STRING -> true;
+      case IDENTIFIER,
+          KEYWORD,
+          NUMBER,
+          STRING,
+          BLOCK_COMMENT,
+          NEWLINE,
+          WHITESPACE,
+          ARROW,
+          RANGE,
+          PLUS_MINUS,
+          COMPARISON,
+          EQUALS,
+          LBRACE,
+          RBRACE,
+          LPAREN,
+          RPAREN,
+          COMMA,
+          SEMICOLON,
+          DOT,
+          SLASH,
+          STAR,
+          MIDDOT,
+          CARET,
+          PERCENT,
+          DEGREE,
+          PLUS,
+          MINUS,
+          BAD_CHARACTER ->
+          false;
+    };
   }
 
-  private static int innermostOpenBrace(List<Lexeme> code) {
+  private static int innermostOpenBrace(List<Token> code) {
     List<Integer> stack = new ArrayList<>();
     for (int i = 0; i < code.size(); i++) {
       if (code.get(i).is("{")) {
@@ -93,13 +130,13 @@ record CursorContext(
   /**
    * A statement starts after a line break, ';', '{' or '}', unless it continues a path with '->'.
    */
-  private static int statementStart(List<Lexeme> code, int end) {
+  private static int statementStart(List<Token> code, int end) {
     int i = end;
     while (i > 0) {
-      Lexeme l = code.get(i - 1);
-      boolean separator = l.type() == Lexeme.Type.NEWLINE || l.is(";") || l.is("{") || l.is("}");
+      Token l = code.get(i - 1);
+      boolean separator = l.kind() == TokenKind.NEWLINE || l.is(";") || l.is("{") || l.is("}");
       if (separator
-          && !(l.type() == Lexeme.Type.NEWLINE && i < code.size() && code.get(i).is("->"))) {
+          && !(l.kind() == TokenKind.NEWLINE && i < code.size() && code.get(i).is("->"))) {
         return i;
       }
       i--;
@@ -108,21 +145,21 @@ record CursorContext(
   }
 
   /** The last token of the statement before the word being typed, or empty at its start. */
-  Optional<Lexeme> previous() {
+  Optional<Token> previous() {
     return statement.isEmpty()
         ? Optional.empty()
         : Optional.of(statement.get(statement.size() - 1));
   }
 
   /** The token before {@link #previous()}. */
-  Optional<Lexeme> beforePrevious() {
+  Optional<Token> beforePrevious() {
     return statement.size() < 2
         ? Optional.empty()
         : Optional.of(statement.get(statement.size() - 2));
   }
 
   boolean afterNumber() {
-    return previous().map(l -> l.type() == Lexeme.Type.NUMBER).orElse(false);
+    return previous().map(l -> l.kind() == TokenKind.NUMBER).orElse(false);
   }
 
   boolean after(String word) {
@@ -131,6 +168,6 @@ record CursorContext(
 
   /** How many numbers the statement holds, the one just written included. */
   int numbers() {
-    return (int) statement.stream().filter(l -> l.type() == Lexeme.Type.NUMBER).count();
+    return (int) statement.stream().filter(l -> l.kind() == TokenKind.NUMBER).count();
   }
 }

@@ -7,10 +7,10 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
-import java.util.Set;
 import jonquil.Result;
 import jonquil.diag.Edit;
 import jonquil.resolve.CatalogSpellings;
+import jonquil.syntax.Tokens;
 
 /**
  * Renames a declared name at its declaration and every use, refusing names the language would
@@ -18,33 +18,6 @@ import jonquil.resolve.CatalogSpellings;
  */
 final class Renamer {
   private Renamer() {}
-
-  /** The grammar's reserved words (JonquilLexer.g4): they can never be names. */
-  static final Set<String> RESERVED =
-      Set.of(
-          "use",
-          "train",
-          "require",
-          "yield",
-          "at",
-          "in",
-          "for",
-          "over",
-          "from",
-          "to",
-          "is",
-          "then",
-          "everywhere",
-          "linear",
-          "circular",
-          "elliptical",
-          "unpolarized",
-          "partial",
-          "right",
-          "left",
-          "OD");
-
-  private static final String IDENTIFIER = "[\\p{L}_][\\p{L}\\p{N}_]*";
 
   static Optional<SymbolUses.Occurrence> renamable(SymbolUses names, Path file, int offset) {
     return names.at(file, offset).filter(o -> !o.symbol().isCatalog());
@@ -57,15 +30,15 @@ final class Renamer {
       return RenameResult.refused("nothing that can be renamed is at this position");
     }
     String old = at.get().symbol().name();
-    if (newName == null || !newName.matches(IDENTIFIER)) {
+    if (Tokens.isKeyword(newName)) {
+      return RenameResult.refused("'" + newName + "' is a reserved word and cannot be a name");
+    }
+    if (!Tokens.isIdentifier(newName)) {
       return RenameResult.refused(
           "'"
               + newName
               + "' is not a name: a name starts with a letter or '_' and"
               + " continues with letters, digits or '_'");
-    }
-    if (RESERVED.contains(newName)) {
-      return RenameResult.refused("'" + newName + "' is a reserved word and cannot be a name");
     }
     if (newName.equals(old)) {
       return new RenameResult(Map.of(), null);

@@ -16,6 +16,8 @@ import jonquil.syntax.RequireDecl;
 import jonquil.syntax.Requirement;
 import jonquil.syntax.SpecFile;
 import jonquil.syntax.SpecParser;
+import jonquil.syntax.Token;
+import jonquil.syntax.Tokens;
 import jonquil.syntax.TrainDecl;
 
 /**
@@ -147,7 +149,7 @@ final class SemanticTokens {
                 .filter(o -> o.range().equals(n.range()))
                 .isPresent()
             || CatalogSpellings.lookup(n.text()).isPresent();
-    add(n.range(), isName && !Renamer.RESERVED.contains(n.text()) ? "variable" : "keyword", false);
+    add(n.range(), isName && !Tokens.isKeyword(n.text()) ? "variable" : "keyword", false);
     ref.port().ifPresent(p -> add(p.range(), "property", false));
   }
 
@@ -156,26 +158,39 @@ final class SemanticTokens {
    * claimed them.
    */
   private void lexical() {
-    for (Lexeme l : Scan.lex(text)) {
-      String type = null;
-      switch (l.type()) {
-        case WORD:
-          type = Renamer.RESERVED.contains(l.text()) ? "keyword" : null;
-          break;
-        case OPERATOR:
-          type = "operator";
-          break;
-        case NUMBER:
-          type = "number";
-          break;
-        case STRING:
-          type = "string";
-          break;
-        default:
-          break;
-      }
+    for (Token l : Tokens.scan(text)) {
+      String type =
+          switch (l.kind()) {
+            case KEYWORD -> "keyword";
+            case ARROW, RANGE, PLUS_MINUS, COMPARISON, EQUALS -> "operator";
+            case NUMBER -> "number";
+            case STRING, UNTERMINATED_STRING -> "string";
+            case IDENTIFIER,
+                LINE_COMMENT,
+                BLOCK_COMMENT,
+                UNTERMINATED_COMMENT,
+                NEWLINE,
+                WHITESPACE,
+                LBRACE,
+                RBRACE,
+                LPAREN,
+                RPAREN,
+                COMMA,
+                SEMICOLON,
+                DOT,
+                SLASH,
+                STAR,
+                MIDDOT,
+                CARET,
+                PERCENT,
+                DEGREE,
+                PLUS,
+                MINUS,
+                BAD_CHARACTER ->
+                null;
+          };
       if (type != null) {
-        add(new TextRange(l.start(), l.end()), type, false);
+        add(l.range(), type, false);
       }
     }
   }

@@ -7,6 +7,8 @@ import java.util.Set;
 import jonquil.resolve.Category;
 import jonquil.resolve.Measure;
 import jonquil.resolve.Shape;
+import jonquil.syntax.Token;
+import jonquil.syntax.TokenKind;
 import jonquil.units.Dimension;
 
 /**
@@ -78,7 +80,7 @@ final class ShapeSlots {
    * the number when the shape has that word ('at 1064', 'waist 1'), else the slot counted by
    * position, else every common unit.
    */
-  static List<String> unitsAfter(Shape shape, List<Lexeme> line) {
+  static List<String> unitsAfter(Shape shape, List<Token> line) {
     List<Shape> flat = flatten(shape);
     int numberAt = line.size() - 1;
     String wordBefore = numberAt >= 1 ? line.get(numberAt - 1).text() : "";
@@ -92,7 +94,7 @@ final class ShapeSlots {
       }
     }
     List<Shape> slots = flat.stream().filter(ShapeSlots::numeric).toList();
-    int index = (int) line.stream().filter(l -> l.type() == Lexeme.Type.NUMBER).count() - 1;
+    int index = (int) line.stream().filter(l -> l.kind() == TokenKind.NUMBER).count() - 1;
     return index >= 0 && index < slots.size()
         ? UnitChoices.forShape(slots.get(index))
         : UnitChoices.COMMON;

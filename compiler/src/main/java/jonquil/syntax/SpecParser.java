@@ -11,7 +11,6 @@ import jonquil.grammar.internal.JonquilParser;
 import jonquil.source.SourceFile;
 import jonquil.source.TextRange;
 import org.antlr.v4.runtime.BailErrorStrategy;
-import org.antlr.v4.runtime.CharStreams;
 import org.antlr.v4.runtime.CommonToken;
 import org.antlr.v4.runtime.CommonTokenStream;
 import org.antlr.v4.runtime.ListTokenSource;
@@ -74,10 +73,8 @@ public final class SpecParser {
       return new ParseResult(source, SpecFile.empty(source.path()), reporter.diagnostics());
     }
     OffsetMap offsets = new OffsetMap(source.text());
-    JonquilLexer lexer =
-        new JonquilLexer(CharStreams.fromString(source.text(), source.path().toString()));
-    lexer.removeErrorListeners();
-    CommonTokenStream lexed = new CommonTokenStream(lexer);
+    CommonTokenStream lexed =
+        new CommonTokenStream(Tokens.lexer(source.text(), source.path().toString()));
     lexed.fill();
     List<TextRange> comments = new ArrayList<>();
     List<Token> repaired = scanTokens(source, lexed.getTokens(), offsets, reporter, comments);

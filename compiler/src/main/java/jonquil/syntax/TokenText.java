@@ -5,6 +5,7 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Set;
 import jonquil.grammar.internal.JonquilLexer;
+import jonquil.grammar.internal.JonquilParser;
 import org.antlr.v4.runtime.Token;
 import org.antlr.v4.runtime.misc.IntervalSet;
 
@@ -12,37 +13,31 @@ import org.antlr.v4.runtime.misc.IntervalSet;
 final class TokenText {
   private TokenText() {}
 
-  private static final Set<Integer> WORDS =
-      Set.of(
-          JonquilLexer.IDENT,
-          JonquilLexer.AT,
-          JonquilLexer.IN,
-          JonquilLexer.FOR,
-          JonquilLexer.OVER,
-          JonquilLexer.FROM,
-          JonquilLexer.TO,
-          JonquilLexer.IS,
-          JonquilLexer.THEN,
-          JonquilLexer.EVERYWHERE,
-          JonquilLexer.LINEAR,
-          JonquilLexer.CIRCULAR,
-          JonquilLexer.ELLIPTICAL,
-          JonquilLexer.UNPOLARIZED,
-          JonquilLexer.PARTIAL,
-          JonquilLexer.RIGHT,
-          JonquilLexer.LEFT);
-  private static final Set<Integer> NUMBER_START =
-      Set.of(JonquilLexer.NUMBER, JonquilLexer.MINUS, JonquilLexer.PLUS, JonquilLexer.OD);
-  private static final Set<Integer> UNIT_PARTS =
-      Set.of(
-          JonquilLexer.SLASH,
-          JonquilLexer.STAR,
-          JonquilLexer.MIDDOT,
-          JonquilLexer.CARET,
-          JonquilLexer.PERCENT,
-          JonquilLexer.DEGREE);
-  private static final Set<Integer> COMPARATORS =
-      Set.of(JonquilLexer.LE, JonquilLexer.GE, JonquilLexer.LT, JonquilLexer.GT, JonquilLexer.EQEQ);
+  /**
+   * Token types that can stand where a name is read (the grammar's {@code word} rule): an
+   * identifier or one of the reserved words that double as names.
+   */
+  private static final IntervalSet WORDS = firstOf(JonquilParser.RULE_word);
+
+  /** Token types that can start a quantity: a number, its sign, or 'OD'. */
+  private static final IntervalSet NUMBER_START = firstOf(JonquilParser.RULE_quantity);
+
+  private static IntervalSet firstOf(int rule) {
+    return JonquilParser._ATN.nextTokens(JonquilParser._ATN.ruleToStartState[rule]);
+  }
+
+  private static boolean isComparator(int type) {
+    return type > 0 && Tokens.kindOf(type) == TokenKind.COMPARISON;
+  }
+
+  /** Operators, '%' and '°': what can only be part of a unit. */
+  private static boolean isUnitPart(int type) {
+    if (type <= 0) {
+      return false;
+    }
+    TokenKind kind = Tokens.kindOf(type);
+    return kind.isUnitOperator() || kind == TokenKind.PERCENT || kind == TokenKind.DEGREE;
+  }
 
   /** How a token that was found is named in a message: {@code 'm1'}, "end of line". */
   static String found(Token t) {
@@ -62,7 +57,7 @@ final class TokenText {
     if (NUMBER_START.contains(type)) {
       return "a number";
     }
-    if (COMPARATORS.contains(type)) {
+    if (isComparator(type)) {
       return "a comparison such as '>='";
     }
     return switch (type) {
@@ -84,7 +79,7 @@ final class TokenText {
     Set<String> parts = new LinkedHashSet<>();
     boolean unitOnly = true;
     for (int type : set.toList()) {
-      if (UNIT_PARTS.contains(type)) {
+      if (isUnitPart(type)) {
         continue; // units are always optional after a number; naming them only adds noise
       }
       unitOnly = false;

@@ -50,7 +50,9 @@ final class FormatAssertions {
     List<String> lines = List.of(text.split("\r\n|\r|\n", -1));
     for (String line : lines) {
       assertEquals(
-          Lexer.stripTrailingSpace(line), line, name + ": trailing blanks in '" + line + "'");
+          WrittenToken.stripTrailingSpace(line),
+          line,
+          name + ": trailing blanks in '" + line + "'");
     }
     for (int i = 1; i < lines.size(); i++) {
       assertFalse(

@@ -68,7 +68,7 @@ final class FormatCorpus {
   static List<String> comments(String text) {
     SourceFile file = source(text);
     return SpecParser.parse(file).ast().comments().stream()
-        .map(r -> Lexer.stripTrailingSpace(file.slice(r)))
+        .map(r -> WrittenToken.stripTrailingSpace(file.slice(r)))
         .toList();
   }
 

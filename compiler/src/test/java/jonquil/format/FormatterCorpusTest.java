@@ -39,7 +39,10 @@ class FormatterCorpusTest {
   void theFormattersLexerFindsTheSameCommentsAsTheParser(Path file) {
     String text = FormatCorpus.source(file).text();
     List<String> lexed =
-        Lexer.lex(text).stream().filter(Lexeme::isComment).map(Lexeme::text).toList();
+        WrittenToken.of(text).stream()
+            .filter(WrittenToken::isComment)
+            .map(WrittenToken::text)
+            .toList();
     assertEquals(FormatCorpus.comments(text), lexed);
   }
 }

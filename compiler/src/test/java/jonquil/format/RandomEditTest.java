@@ -5,6 +5,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.SplittableRandom;
+import jonquil.syntax.TokenKind;
+import jonquil.syntax.Tokens;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -45,26 +47,26 @@ class RandomEditTest {
   }
 
   private static String edit(String text, SplittableRandom random) {
-    List<Lexeme> lexemes = Lexer.lex(text);
-    if (lexemes.isEmpty()) {
+    List<WrittenToken> tokens = WrittenToken.of(text);
+    if (tokens.isEmpty()) {
       return text + "probe p";
     }
-    Lexeme at = lexemes.get(random.nextInt(lexemes.size()));
-    int pos = at.start();
+    WrittenToken at = tokens.get(random.nextInt(tokens.size()));
+    int pos = at.token().start();
     switch (random.nextInt(9)) {
       case 0:
         return insert(text, pos, random.nextBoolean() ? "   " : "\t ");
       case 1:
         {
           int start = pos;
-          while (start > 0 && Lexer.isSpace(text.charAt(start - 1))) {
+          while (start > 0 && Tokens.isBlank(text.charAt(start - 1))) {
             start--;
           }
           return text.substring(0, start)
               + text.substring(pos); // may join tokens; then it rarely parses
         }
       case 2:
-        return at.kind() == LexemeKind.NL ? insert(text, pos, "\n\n") : insert(text, pos, " ");
+        return at.kind() == TokenKind.NEWLINE ? insert(text, pos, "\n\n") : insert(text, pos, " ");
       case 3:
         {
           String comment = COMMENTS[random.nextInt(COMMENTS.length)];
@@ -73,20 +75,20 @@ class RandomEditTest {
               : insert(text, pos, comment + " ");
         }
       case 4:
-        return at.kind() == LexemeKind.NL
-            ? text.substring(0, pos) + " ; " + text.substring(pos + at.text().length())
+        return at.kind() == TokenKind.NEWLINE
+            ? text.substring(0, pos) + " ; " + text.substring(pos + at.token().text().length())
             : text;
       case 5:
         return text.replace("\r\n", "\n").replace("\n", "\r\n");
       case 6:
-        return at.kind() == LexemeKind.ARROW
+        return at.kind() == TokenKind.ARROW
             ? insert(text, pos, "-> 12.5 mm -> 0.25 mm in saline ".repeat(1 + random.nextInt(4)))
             : text;
       case 7:
-        return at.kind() == LexemeKind.ARROW ? insert(text, pos, "\n      ") : text;
+        return at.kind() == TokenKind.ARROW ? insert(text, pos, "\n      ") : text;
       default:
-        return at.kind() == LexemeKind.NL
-            ? text.substring(0, pos) + " " + text.substring(pos + at.text().length())
+        return at.kind() == TokenKind.NEWLINE
+            ? text.substring(0, pos) + " " + text.substring(pos + at.token().text().length())
             : text;
     }
   }
