@@ -87,6 +87,16 @@ class CompletionTest {
   }
 
   @Test
+  void aHalfTypedNameIsOneWordAsTheLexerReadsIt() {
+    // The lexer reads 'sp²' and 'spä' as single names, so the elements are offered for them.
+    for (String typed : List.of("sp²", "spä", "s𝑥")) {
+      List<CompletionItemInfo> items =
+          at(BENCH.replace("-> 50 mm -> spot", "-> 50 mm -> " + typed + "$0"));
+      assertTrue(labels(items, "element").contains("spot"), typed);
+    }
+  }
+
+  @Test
   void afterADotThePortsOfThatElement() {
     assertEquals(
         List.of("through", "reflected"), labels(at(BENCH.replace("pbs.reflected", "pbs.$0"))));
@@ -155,6 +165,8 @@ class CompletionTest {
   void nothingInsideCommentsOrStrings() {
     assertEquals(List.of(), at(BENCH.replace("@", "// a note about $0")));
     assertEquals(List.of(), at(BENCH.replace("@", "use \"parts/$0")));
+    assertEquals(List.of(), at(BENCH.replace("@", "use \"parts\\$0")));
+    assertEquals(List.of(), at(BENCH.replace("@", "/* a note\n about $0")));
   }
 
   @Test

@@ -61,6 +61,20 @@ class RenameTest {
   }
 
   @Test
+  void acceptsEveryNameTheParserReads() {
+    Specs.Checked c = Specs.check(Specs.BENCH);
+    Result r = c.result();
+    int w1 = Specs.offsetOf(r, Specs.MAIN, "w1", 0);
+    for (String name : List.of("spiegel_ä", "w²", "𝑥_1", "xⅫ")) {
+      RenameResult rename = Ide.rename(r, Specs.MAIN, w1, name);
+      assertNull(rename.error(), name);
+      String renamed = apply(r.files().get(Specs.MAIN).text(), rename.edits().get(Specs.MAIN));
+      assertEquals(
+          r.diagnostics().size(), Specs.check(renamed).result().diagnostics().size(), name);
+    }
+  }
+
+  @Test
   void theSameNameGivesNoEdits() {
     Specs.Checked c = Specs.check(Specs.BENCH);
     RenameResult rename =
@@ -73,7 +87,7 @@ class RenameTest {
   void refusesWhatCannotBeAName() {
     Specs.Checked c = Specs.check(Specs.BENCH);
     int qwp = Specs.offsetOf(c.result(), Specs.MAIN, "qwp", 0);
-    for (String bad : List.of("2qwp", "q-wp", "", "q w")) {
+    for (String bad : List.of("2qwp", "q-wp", "", "q w", "٣qwp", "q😀", "Ⅻ", "x\n")) {
       RenameResult rename = Ide.rename(c.result(), Specs.MAIN, qwp, bad);
       assertNotNull(rename.error(), bad);
       assertTrue(rename.error().contains("is not a name"), rename.error());

@@ -1,6 +1,7 @@
 package jonquil.ide;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
@@ -55,6 +56,15 @@ class SemanticTokensTest {
       org.junit.jupiter.api.Assertions.fail("wrote " + golden + "; review it and run again");
     }
     assertEquals(Files.readString(golden, StandardCharsets.UTF_8), actual);
+  }
+
+  @Test
+  void tokensAreReadAsTheLexerReadsThem() {
+    // A superscript continues a name; a non-ASCII digit is a stray character, never a number.
+    String spec = "probe w²\nlens l { focal ٣ mm }\n";
+    String rendered = render(spec, Ide.semanticTokens(Specs.check(spec).result(), Specs.MAIN));
+    assertTrue(rendered.contains("w²  variable *\n"), rendered);
+    assertFalse(rendered.contains("٣"), rendered);
   }
 
   @Test
