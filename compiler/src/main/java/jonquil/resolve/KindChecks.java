@@ -27,37 +27,43 @@ final class KindChecks {
       Map<String, List<Value.Group>> params,
       Map<String, Property> given) {
     String who = kind.word() + " '" + symbol.name() + "'";
-    switch (kind) {
-      case SOURCE -> pulses(sink, who, decl, params, given);
-      case MATERIAL -> {
-        needs(sink, who, decl, given, Param.K, Param.INDEX);
-        needs(sink, who, decl, given, Param.ORDINARY, Param.EXTRAORDINARY);
-        needs(sink, who, decl, given, Param.EXTRAORDINARY, Param.ORDINARY);
-      }
-      case SPLITTER -> {
-        if (!given.containsKey(Param.POLARIZING.word())) {
-          needs(sink, who, decl, given, Param.REFLECT_S, Param.REFLECT_P);
-          needs(sink, who, decl, given, Param.REFLECT_P, Param.REFLECT_S);
-        }
-      }
-      // The tables and KindRules say all there is to check of these.
-      case COATING,
-          INTERFACE,
-          POLARIZER,
-          WAVEPLATE,
-          ROTATOR,
-          DEPOLARIZER,
-          MIRROR,
-          WINDOW,
-          PLATE,
-          LENS,
-          APERTURE,
-          FILTER,
-          RHOMB,
-          PROBE,
-          DETECTOR,
-          DUMP -> {}
-    }
+    // A switch expression, so that a new kind does not compile until it is listed here.
+    Runnable rules =
+        switch (kind) {
+          case SOURCE -> () -> pulses(sink, who, decl, params, given);
+          case MATERIAL ->
+              () -> {
+                needs(sink, who, decl, given, Param.K, Param.INDEX);
+                needs(sink, who, decl, given, Param.ORDINARY, Param.EXTRAORDINARY);
+                needs(sink, who, decl, given, Param.EXTRAORDINARY, Param.ORDINARY);
+              };
+          case SPLITTER ->
+              () -> {
+                if (!given.containsKey(Param.POLARIZING.word())) {
+                  needs(sink, who, decl, given, Param.REFLECT_S, Param.REFLECT_P);
+                  needs(sink, who, decl, given, Param.REFLECT_P, Param.REFLECT_S);
+                }
+              };
+          // The tables and KindRules say all there is to check of these.
+          case COATING,
+              INTERFACE,
+              POLARIZER,
+              WAVEPLATE,
+              ROTATOR,
+              DEPOLARIZER,
+              MIRROR,
+              WINDOW,
+              PLATE,
+              LENS,
+              APERTURE,
+              FILTER,
+              RHOMB,
+              PROBE,
+              DETECTOR,
+              DUMP ->
+              () -> {};
+        };
+    rules.run();
   }
 
   private static void needs(
