@@ -144,25 +144,13 @@ final class KindTables {
                 seq(lit("m2"), new Shape.Count("m2", Bounds.atLeast(1), false))),
             "Gaussian beam: waist radius (1/e²), waist position from the exit face, half-angle"
                 + " divergence, M²"));
+    // A material gives exactly one model of its index.
+    List<Param> indexModels =
+        List.of(
+            Param.CATALOG, Param.INDEX, Param.SELLMEIER, Param.CAUCHY, Param.TABLE, Param.ORDINARY);
     put(
         ElementKind.MATERIAL,
-        rules(
-            List.of(
-                List.of(
-                    Param.CATALOG,
-                    Param.INDEX,
-                    Param.SELLMEIER,
-                    Param.CAUCHY,
-                    Param.TABLE,
-                    Param.ORDINARY)),
-            List.of(
-                List.of(
-                    Param.CATALOG,
-                    Param.INDEX,
-                    Param.SELLMEIER,
-                    Param.CAUCHY,
-                    Param.TABLE,
-                    Param.ORDINARY))),
+        rules(List.of(indexModels), List.of(indexModels)),
         optional(
             Param.CATALOG, ref("name", Category.MATERIAL), "a material from the built-in catalog"),
         optional(
