@@ -1,6 +1,7 @@
 package jonquil.analysis;
 
 import java.util.OptionalDouble;
+import jonquil.resolve.Param;
 import jonquil.resolve.ResolvedElement;
 import jonquil.resolve.Value;
 import jonquil.safety.DamageScaling;
@@ -20,12 +21,14 @@ final class DamageModel {
    * The smallest margin over the part's thresholds that apply to this beam; empty when none does.
    */
   static OptionalDouble margin(ResolvedElement part, PortValue incident, double wavelength) {
-    if (part.all("damage").isEmpty() || incident.exposure().isEmpty() || incident.power() <= 0) {
+    if (part.all(Param.DAMAGE).isEmpty()
+        || incident.exposure().isEmpty()
+        || incident.power() <= 0) {
       return OptionalDouble.empty();
     }
     Exposure x = incident.exposure().get();
     double worst = Double.POSITIVE_INFINITY;
-    for (Value.Group threshold : part.all("damage")) {
+    for (Value.Group threshold : part.all(Param.DAMAGE)) {
       if (!(threshold.slot("threshold").orElse(null) instanceof Value.Num t)) {
         continue;
       }

@@ -8,6 +8,7 @@ import jonquil.optics.Coherency;
 import jonquil.optics.Fresnel;
 import jonquil.optics.Jones;
 import jonquil.optics.beam.Clipping;
+import jonquil.resolve.Param;
 import jonquil.resolve.ResolvedElement;
 import jonquil.resolve.Symbol;
 import jonquil.resolve.Value;
@@ -39,77 +40,66 @@ final class ElementOptics {
   }
 
   Response respond(ResolvedElement e, Beam in) {
-    double plane = e.number("plane", "angle").orElse(0);
-    switch (e.kind()) {
-      case POLARIZER:
-        {
-          double axis = e.number("axis", "angle").orElse(0);
-          double t = e.number("transmission", "t").orElse(1);
-          double er = e.number("extinction", "ratio").orElse(IDEAL_EXTINCTION);
-          return through(in, "out", Jones.polarizer(axis, t, er));
-        }
-      case WAVEPLATE:
-        return coatedPlate(e, in, waveplate(e, in.wavelength()));
-      case ROTATOR:
-        {
-          double t = e.number("transmission", "t").orElse(1);
-          return through(
-              in,
-              "out",
-              Jones.rotator(e.number("rotation", "angle").orElse(0)).scaled(Math.sqrt(t)));
-        }
-      case DEPOLARIZER:
-        {
-          double f = e.number("depolarization", "d").orElse(1);
-          double t = e.number("transmission", "t").orElse(1);
-          return Response.balance(
-              in,
-              Map.of("out", in.with(in.light().depolarized(f).scaled(t))),
-              List.of()); // no Jones matrix
-        }
-      case SPLITTER:
-        return splitter(e, in, plane);
-      case MIRROR:
-        return mirror(e, in, plane);
-      case WINDOW:
-      case PLATE:
-        return window(e, in, plane);
-      case INTERFACE:
-        return interfaceSurface(e, in, plane);
-      case LENS:
-        return lens(e, in);
-      case FILTER:
-        {
-          OptionalDouble od = e.number("od", "od");
-          double t =
-              od.isPresent()
-                  ? Math.pow(10, -od.getAsDouble())
-                  : e.number("transmission", "t").orElse(1);
-          return Response.balance(in, Map.of("out", in.with(in.light().scaled(t))), List.of())
-              .withJones(scalar("out", t));
-        }
-      case RHOMB:
-        return rhomb(e, in);
-      case APERTURE:
-        {
-          double d = e.number("diameter", "diameter").orElse(Double.POSITIVE_INFINITY);
-          if (in.mode().isEmpty()) {
-            return Response.balance(in, Map.of("out", in), List.of())
-                .withJones(scalar("out", 1)); // no beam size
-          }
-          double f = Clipping.transmittedFraction(in.mode().get().radius(), d);
-          return Response.balance(in, Map.of("out", in.with(in.light().scaled(f))), List.of())
-              .clipping(1 - f)
-              .withJones(scalar("out", f));
-        }
-      case PROBE:
-        return Response.balance(in, Map.of("out", in), List.of()).withJones(scalar("out", 1));
-      case DETECTOR:
-      case DUMP:
-        return Response.absorbedAll(in);
-      default:
-        return Response.balance(in, Map.of("out", in), List.of());
+    double plane = e.number(Param.PLANE, "angle").orElse(0);
+    return switch (e.kind()) {
+      case POLARIZER -> {
+        double axis = e.number(Param.AXIS, "angle").orElse(0);
+        double t = e.number(Param.TRANSMISSION, "t").orElse(1);
+        double er = e.number(Param.EXTINCTION, "ratio").orElse(IDEAL_EXTINCTION);
+        yield through(in, "out", Jones.polarizer(axis, t, er));
+      }
+      case WAVEPLATE -> coatedPlate(e, in, waveplate(e, in.wavelength()));
+      case ROTATOR -> {
+        double t = e.number(Param.TRANSMISSION, "t").orElse(1);
+        yield through(
+            in,
+            "out",
+            Jones.rotator(e.number(Param.ROTATION, "angle").orElse(0)).scaled(Math.sqrt(t)));
+      }
+      case DEPOLARIZER -> {
+        double f = e.number(Param.DEPOLARIZATION, "d").orElse(1);
+        double t = e.number(Param.TRANSMISSION, "t").orElse(1);
+        yield Response.balance(
+            in,
+            Map.of("out", in.with(in.light().depolarized(f).scaled(t))),
+            List.of()); // no Jones matrix
+      }
+      case SPLITTER -> splitter(e, in, plane);
+      case MIRROR -> mirror(e, in, plane);
+      case WINDOW, PLATE -> window(e, in, plane);
+      case INTERFACE -> interfaceSurface(e, in, plane);
+      case LENS -> lens(e, in);
+      case FILTER -> {
+        OptionalDouble od = e.number(Param.OD, "od");
+        double t =
+            od.isPresent()
+                ? Math.pow(10, -od.getAsDouble())
+                : e.number(Param.TRANSMISSION, "t").orElse(1);
+        yield Response.balance(in, Map.of("out", in.with(in.light().scaled(t))), List.of())
+            .withJones(scalar("out", t));
+      }
+      case RHOMB -> rhomb(e, in);
+      case APERTURE -> aperture(e, in);
+      case PROBE -> Response.balance(in, Map.of("out", in), List.of()).withJones(scalar("out", 1));
+      case DETECTOR, DUMP -> Response.absorbedAll(in);
+      // The train resolver keeps these out of beam paths (J507, J509), and a spec with errors
+      // is not analysed, so light never reaches them here.
+      case SOURCE, MATERIAL, COATING ->
+          throw new IllegalArgumentException(
+              e.kind().word() + " '" + e.symbol().name() + "' cannot stand in a beam path");
+    };
+  }
+
+  private static Response aperture(ResolvedElement e, Beam in) {
+    double d = e.number(Param.DIAMETER, "diameter").orElse(Double.POSITIVE_INFINITY);
+    if (in.mode().isEmpty()) {
+      return Response.balance(in, Map.of("out", in), List.of())
+          .withJones(scalar("out", 1)); // no beam size
     }
+    double f = Clipping.transmittedFraction(in.mode().get().radius(), d);
+    return Response.balance(in, Map.of("out", in.with(in.light().scaled(f))), List.of())
+        .clipping(1 - f)
+        .withJones(scalar("out", f));
   }
 
   private static Response through(Beam in, String port, Jones j) {
@@ -129,18 +119,17 @@ final class ElementOptics {
    * scaled as 1/λ.
    */
   Jones waveplate(ResolvedElement e, double wavelength) {
-    Value.Group r = e.param("retardance").orElseThrow();
+    Value.Group r = e.param(Param.RETARDANCE).orElseThrow();
     double design = r.number("retardance").orElse(0);
     OptionalDouble designWavelength = r.number("wavelength");
     double waves = design / (2 * Math.PI);
-    Optional<String> order = e.param("order").flatMap(g -> g.word("order"));
+    Optional<String> order = e.word(Param.ORDER, "order");
     if (order.isPresent() && order.get().equals("multi")) {
-      waves += e.number("order", "m").orElse(0);
+      waves += e.number(Param.ORDER, "m").orElse(0);
     }
     double retardance = design;
-    Optional<Symbol> material =
-        e.param("material").flatMap(g -> g.slot("material")).map(v -> ((Value.Ref) v).symbol());
-    OptionalDouble thickness = e.number("thickness", "thickness");
+    Optional<Symbol> material = e.ref(Param.MATERIAL, "material");
+    OptionalDouble thickness = e.number(Param.THICKNESS, "thickness");
     if (material.isPresent()) {
       OptionalDouble dn = materials.birefringence(material.get(), wavelength);
       if (dn.isPresent() && dn.getAsDouble() != 0) {
@@ -155,13 +144,13 @@ final class ElementOptics {
                   / Math.abs(materials.birefringence(material.get(), l0).orElse(dn.getAsDouble()));
         }
         retardance = 2 * Math.PI * Math.abs(dn.getAsDouble()) * d / wavelength;
-        return Jones.retarder(retardance, e.number("fast_axis", "angle").orElse(0));
+        return Jones.retarder(retardance, e.number(Param.FAST_AXIS, "angle").orElse(0));
       }
     }
     if (designWavelength.isPresent()) {
       retardance = 2 * Math.PI * waves * designWavelength.getAsDouble() / wavelength;
     }
-    return Jones.retarder(retardance, e.number("fast_axis", "angle").orElse(0));
+    return Jones.retarder(retardance, e.number(Param.FAST_AXIS, "angle").orElse(0));
   }
 
   /**
@@ -169,14 +158,13 @@ final class ElementOptics {
    * part of the light back as a ghost, summed incoherently like a window's.
    */
   private Response coatedPlate(ResolvedElement e, Beam in, Jones j) {
-    if (e.param("coating").isEmpty()) {
+    if (e.param(Param.COATING).isEmpty()) {
       return through(in, "out", j);
     }
     Complex outside = materials.index(in.medium(), in.wavelength());
     Complex inside =
-        e.param("material")
-            .flatMap(g -> g.slot("material"))
-            .map(v -> real(materials.index(((Value.Ref) v).symbol(), in.wavelength())))
+        e.ref(Param.MATERIAL, "material")
+            .map(m -> real(materials.index(m, in.wavelength())))
             .orElse(new Complex(1.5, 0));
     SurfaceModel.Powers face = surfaces.surface(e, real(outside), inside, 0, in.wavelength());
     double[] pair = plate(face.rs(), face.ts(), face.rs(), face.ts(), 1);
@@ -188,23 +176,23 @@ final class ElementOptics {
   }
 
   private Response splitter(ResolvedElement e, Beam in, double plane) {
-    double aoi = e.number("aoi", "angle").orElse(Math.PI / 4);
+    double aoi = e.number(Param.AOI, "angle").orElse(Math.PI / 4);
     double tp;
     double ts;
     double rs;
     double rp;
-    if (e.has("polarizing")) {
-      tp = e.number("transmit_p", "t").orElse(DEFAULT_PBS_TP);
-      double er = e.number("extinction", "ratio").orElse(DEFAULT_PBS_EXTINCTION);
-      ts = e.number("transmit_s", "t").orElse(tp / er);
-      rs = e.number("reflect_s", "r").orElse(Math.min(DEFAULT_PBS_RS, 1 - ts));
-      rp = e.number("reflect_p", "r").orElse(1 - tp);
+    if (e.has(Param.POLARIZING)) {
+      tp = e.number(Param.TRANSMIT_P, "t").orElse(DEFAULT_PBS_TP);
+      double er = e.number(Param.EXTINCTION, "ratio").orElse(DEFAULT_PBS_EXTINCTION);
+      ts = e.number(Param.TRANSMIT_S, "t").orElse(tp / er);
+      rs = e.number(Param.REFLECT_S, "r").orElse(Math.min(DEFAULT_PBS_RS, 1 - ts));
+      rp = e.number(Param.REFLECT_P, "r").orElse(1 - tp);
     } else {
-      double ratio = e.number("ratio", "reflected").orElse(0.5);
-      rs = e.number("reflect_s", "r").orElse(ratio);
-      rp = e.number("reflect_p", "r").orElse(ratio);
-      ts = e.number("transmit_s", "t").orElse(1 - rs);
-      tp = e.number("transmit_p", "t").orElse(1 - rp);
+      double ratio = e.number(Param.RATIO, "reflected").orElse(0.5);
+      rs = e.number(Param.REFLECT_S, "r").orElse(ratio);
+      rp = e.number(Param.REFLECT_P, "r").orElse(ratio);
+      ts = e.number(Param.TRANSMIT_S, "t").orElse(1 - rs);
+      tp = e.number(Param.TRANSMIT_P, "t").orElse(1 - rp);
     }
     Jones pass = Jones.transmission(Complex.ONE, Complex.ONE, plane, clamp(tp), clamp(ts));
     Coherency through = in.light().transform(pass);
@@ -218,11 +206,10 @@ final class ElementOptics {
   }
 
   private Response mirror(ResolvedElement e, Beam in, double plane) {
-    double aoi = e.number("aoi", "angle").orElse(0);
+    double aoi = e.number(Param.AOI, "angle").orElse(0);
     Jones j;
-    Optional<Value.Group> metal = e.param("metal");
-    OptionalDouble r = e.number("reflectance", "r");
-    Optional<Value.Group> coating = e.param("coating");
+    OptionalDouble r = e.number(Param.REFLECTANCE, "r");
+    Optional<Value.Group> coating = e.param(Param.COATING);
     if (r.isEmpty() && coating.isPresent() && coating.get().word("type").isPresent()) {
       r = coating.get().number("reflectance");
     }
@@ -232,9 +219,8 @@ final class ElementOptics {
       j = Jones.reflection(new Complex(amp, 0), new Complex(-amp, 0), plane);
     } else {
       Complex substrate =
-          metal
-              .flatMap(g -> g.slot("metal"))
-              .map(v -> materials.index(((Value.Ref) v).symbol(), in.wavelength()))
+          e.ref(Param.METAL, "metal")
+              .map(m -> materials.index(m, in.wavelength()))
               .orElse(new Complex(1.5, 0));
       Fresnel.Coefficients c;
       if (coating.isPresent()
@@ -263,15 +249,10 @@ final class ElementOptics {
    * incoherently (the usual model for a plate much thicker than the coherence length).
    */
   private Response window(ResolvedElement e, Beam in, double plane) {
-    double aoi = e.number("aoi", "angle").orElse(0);
+    double aoi = e.number(Param.AOI, "angle").orElse(0);
     double wl = in.wavelength();
-    Symbol glass =
-        ((Value.Ref) e.param("material").orElseThrow().slot("material").orElseThrow()).symbol();
-    Medium after =
-        e.param("then")
-            .flatMap(g -> g.slot("medium"))
-            .map(v -> Medium.of(((Value.Ref) v).symbol()))
-            .orElse(in.medium());
+    Symbol glass = e.ref(Param.MATERIAL, "material").orElseThrow();
+    Medium after = e.ref(Param.THEN, "medium").map(Medium::of).orElse(in.medium());
     // Surfaces use the real indices; the glass's (weak) absorption acts in the bulk through τ.
     Complex n1 = real(materials.index(in.medium(), wl));
     Complex ng = real(materials.index(glass, wl));
@@ -280,7 +261,7 @@ final class ElementOptics {
     double sinInside = n1.getReal() * Math.sin(aoi) / ng.getReal();
     double inside = Math.asin(Math.max(-1, Math.min(1, sinInside)));
     SurfaceModel.Powers back = surfaces.surface(e, ng, n3, inside, wl);
-    double thickness = e.number("thickness", "thickness").orElse(0);
+    double thickness = e.number(Param.THICKNESS, "thickness").orElse(0);
     double tau =
         Math.exp(-materials.absorption(Medium.of(glass), wl) * thickness / Math.cos(inside));
     double[] tS = plate(front.rs(), front.ts(), back.rs(), back.ts(), tau);
@@ -318,11 +299,10 @@ final class ElementOptics {
   }
 
   private Response interfaceSurface(ResolvedElement e, Beam in, double plane) {
-    double aoi = e.number("aoi", "angle").orElse(0);
+    double aoi = e.number(Param.AOI, "angle").orElse(0);
     double wl = in.wavelength();
-    Symbol from =
-        ((Value.Ref) e.param("from").orElseThrow().slot("material").orElseThrow()).symbol();
-    Symbol to = ((Value.Ref) e.param("to").orElseThrow().slot("material").orElseThrow()).symbol();
+    Symbol from = e.ref(Param.FROM, "material").orElseThrow();
+    Symbol to = e.ref(Param.TO, "material").orElseThrow();
     Complex n1 = materials.index(from, wl);
     Complex n2 = materials.index(to, wl);
     Fresnel.Coefficients c = Fresnel.at(n1, n2, aoi);
@@ -330,7 +310,7 @@ final class ElementOptics {
     Jones pass = Jones.transmission(Complex.ONE, Complex.ONE, plane, powers.tp(), powers.ts());
     Coherency through = in.light().transform(pass);
     Jones reflect =
-        e.param("coating").isPresent()
+        e.param(Param.COATING).isPresent()
             ? Jones.reflection(
                 new Complex(Math.sqrt(powers.rp()), 0),
                 new Complex(-Math.sqrt(powers.rs()), 0),
@@ -347,7 +327,7 @@ final class ElementOptics {
                 aoi,
                 n1,
                 n2,
-                e.param("coating").isPresent(),
+                e.param(Param.COATING).isPresent(),
                 powers.rs(),
                 powers.rp(),
                 powers.ts(),
@@ -356,9 +336,9 @@ final class ElementOptics {
 
   /** A thin lens: two surfaces at normal incidence; their reflections head back as ghosts. */
   private Response lens(ResolvedElement e, Beam in) {
-    double focal = e.number("focal", "focal").orElse(Double.POSITIVE_INFINITY);
+    double focal = e.number(Param.FOCAL, "focal").orElse(Double.POSITIVE_INFINITY);
     double clip = 1;
-    OptionalDouble clear = e.number("clear_aperture", "diameter");
+    OptionalDouble clear = e.number(Param.CLEAR_APERTURE, "diameter");
     if (clear.isPresent() && in.mode().isPresent()) {
       clip = Clipping.transmittedFraction(in.mode().get().radius(), clear.getAsDouble());
     }
@@ -374,9 +354,8 @@ final class ElementOptics {
   }
 
   private Response lensSurfaces(ResolvedElement e, Beam in) {
-    Optional<Symbol> glass =
-        e.param("material").flatMap(g -> g.slot("material")).map(v -> ((Value.Ref) v).symbol());
-    if (glass.isEmpty() && e.param("coating").isEmpty()) {
+    Optional<Symbol> glass = e.ref(Param.MATERIAL, "material");
+    if (glass.isEmpty() && e.param(Param.COATING).isEmpty()) {
       return Response.balance(
           in, Map.of("out", in), List.of()); // an ideal lens: nothing known about its surfaces
     }
@@ -398,12 +377,11 @@ final class ElementOptics {
    */
   private Response rhomb(ResolvedElement e, Beam in) {
     double wl = in.wavelength();
-    Symbol glass =
-        ((Value.Ref) e.param("material").orElseThrow().slot("material").orElseThrow()).symbol();
+    Symbol glass = e.ref(Param.MATERIAL, "material").orElseThrow();
     Complex n = real(materials.index(glass, wl));
     Complex outside = real(materials.index(in.medium(), wl));
-    double aoi = e.number("aoi", "angle").orElse(0);
-    int reflections = (int) e.number("reflections", "n").orElse(2);
+    double aoi = e.number(Param.AOI, "angle").orElse(0);
+    int reflections = (int) e.number(Param.REFLECTIONS, "n").orElse(2);
     Fresnel.Coefficients tir = Fresnel.at(n, outside, aoi);
     Complex rp = tir.rp().pow(reflections);
     Complex rs = tir.rs().pow(reflections);
@@ -411,7 +389,7 @@ final class ElementOptics {
       rs = rs.negate(); // an odd count leaves the frame mirrored; undo the s flip to keep the
       // entry frame
     }
-    Jones j = Jones.reflection(rp, rs, e.number("axis", "angle").orElse(0));
+    Jones j = Jones.reflection(rp, rs, e.number(Param.AXIS, "angle").orElse(0));
     SurfaceModel.Powers face = SurfaceModel.Powers.of(Fresnel.at(outside, n, 0));
     double[] pair = plate(face.rs(), face.ts(), face.rs(), face.ts(), 1);
     Beam out = in.with(in.light().transform(j).scaled(pair[0]));

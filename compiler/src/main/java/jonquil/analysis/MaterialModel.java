@@ -10,6 +10,7 @@ import jonquil.optics.material.TabulatedIndex;
 import jonquil.optics.material.Uniaxial;
 import jonquil.optics.material.WavelengthRange;
 import jonquil.resolve.ElementKind;
+import jonquil.resolve.Param;
 import jonquil.resolve.ResolvedElement;
 import jonquil.resolve.ResolvedModel;
 import jonquil.resolve.Symbol;
@@ -55,7 +56,7 @@ final class MaterialModel {
       return AIR_FALLBACK;
     }
     ResolvedElement m = e.get();
-    m.param("valid")
+    m.param(Param.VALID)
         .ifPresent(
             v -> {
               double low =
@@ -75,19 +76,19 @@ final class MaterialModel {
                     new OutOfRange(material, wavelength, new WavelengthRange(low, high)));
               }
             });
-    Optional<Value.Group> catalog = m.param("catalog");
+    Optional<Value.Group> catalog = m.param(Param.CATALOG);
     if (catalog.isPresent() && catalog.get().slot("name").orElse(null) instanceof Value.Ref ref) {
       return index(ref.symbol(), wavelength);
     }
-    OptionalDouble n = m.number("index", "n");
+    OptionalDouble n = m.number(Param.INDEX, "n");
     if (n.isPresent()) {
-      return new Complex(n.getAsDouble(), m.number("k", "k").orElse(0));
+      return new Complex(n.getAsDouble(), m.number(Param.K, "k").orElse(0));
     }
-    OptionalDouble no = m.number("ordinary", "n_o");
+    OptionalDouble no = m.number(Param.ORDINARY, "n_o");
     if (no.isPresent()) {
       return new Complex(no.getAsDouble(), 0);
     }
-    Optional<Value.Group> cauchy = m.param("cauchy");
+    Optional<Value.Group> cauchy = m.param(Param.CAUCHY);
     if (cauchy.isPresent()) {
       double a = cauchy.get().number("a").orElse(1.5);
       double b = cauchy.get().number("b").orElse(0);
@@ -95,7 +96,7 @@ final class MaterialModel {
       double l2 = wavelength * wavelength;
       return new Complex(a + b / l2 + c / (l2 * l2), 0);
     }
-    Optional<Value.Group> sellmeier = m.param("sellmeier");
+    Optional<Value.Group> sellmeier = m.param(Param.SELLMEIER);
     if (sellmeier.isPresent()) {
       double l2 = wavelength * wavelength;
       double n2 = 1;
@@ -104,7 +105,7 @@ final class MaterialModel {
       }
       return new Complex(Math.sqrt(Math.max(n2, 0)), 0);
     }
-    Optional<Value.Group> table = m.param("table");
+    Optional<Value.Group> table = m.param(Param.TABLE);
     if (table.isPresent() && table.get().slot("rows").orElse(null) instanceof Value.Table t) {
       return tabulated(material, t, wavelength);
     }
@@ -124,12 +125,12 @@ final class MaterialModel {
     }
     Optional<ResolvedElement> e = model.element(material);
     if (e.isPresent()) {
-      OptionalDouble no = e.get().number("ordinary", "n_o");
-      OptionalDouble ne = e.get().number("extraordinary", "n_e");
+      OptionalDouble no = e.get().number(Param.ORDINARY, "n_o");
+      OptionalDouble ne = e.get().number(Param.EXTRAORDINARY, "n_e");
       if (no.isPresent() && ne.isPresent()) {
         return OptionalDouble.of(ne.getAsDouble() - no.getAsDouble());
       }
-      Optional<Value.Group> catalog = e.get().param("catalog");
+      Optional<Value.Group> catalog = e.get().param(Param.CATALOG);
       if (catalog.isPresent() && catalog.get().slot("name").orElse(null) instanceof Value.Ref ref) {
         return birefringence(ref.symbol(), wavelength);
       }
@@ -148,7 +149,7 @@ final class MaterialModel {
     Symbol s = medium.material().get();
     Optional<ResolvedElement> e = s.isCatalog() ? Optional.empty() : model.element(s);
     OptionalDouble declared =
-        e.map(m -> m.number("absorption", "alpha")).orElse(OptionalDouble.empty());
+        e.map(m -> m.number(Param.ABSORPTION, "alpha")).orElse(OptionalDouble.empty());
     if (declared.isPresent()) {
       return declared.getAsDouble();
     }

@@ -10,6 +10,7 @@ import java.util.OptionalDouble;
 import jonquil.optics.Coherency;
 import jonquil.resolve.Category;
 import jonquil.resolve.ElementKind;
+import jonquil.resolve.Param;
 import jonquil.resolve.ResolvedElement;
 import jonquil.resolve.ResolvedModel;
 import jonquil.resolve.ResolvedTrain;
@@ -66,7 +67,8 @@ final class Propagator {
           continue;
         }
         double wl =
-            wavelengthOverride.orElse(source.get().number("wavelength", "wavelength").orElse(1e-6));
+            wavelengthOverride.orElse(
+                source.get().number(Param.WAVELENGTH, "wavelength").orElse(1e-6));
         pulses.put(start.symbol(), Pulses.of(source.get()));
         List<Beam> beams =
             SourceBeams.of(

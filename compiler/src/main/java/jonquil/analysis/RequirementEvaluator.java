@@ -9,6 +9,7 @@ import jonquil.resolve.Measure;
 import jonquil.resolve.ResolvedModel;
 import jonquil.resolve.ResolvedRequirement;
 import jonquil.resolve.ResolvedRequirement.Criterion;
+import jonquil.resolve.StateForm;
 import jonquil.resolve.Value;
 
 /**
@@ -122,79 +123,74 @@ final class RequirementEvaluator {
       ResolvedRequirement r, Criterion c, TrainSolution s, ResolvedModel model) {
     Measure m = c.measure();
     Optional<PortValue> at = r.at().flatMap(t -> s.port(Propagator.key(t.symbol(), t.port())));
-    switch (m) {
-      case POWER:
-        {
-          if (at.isEmpty()) {
-            return unreached(r);
-          }
-          double p = at.get().power();
-          return c.relativeToSource()
+    return switch (m) {
+      case POWER -> {
+        if (at.isEmpty()) {
+          yield unreached(r);
+        }
+        double p = at.get().power();
+        yield c.relativeToSource()
+            ? compare(c, s.sourcePower() == 0 ? 0 : p / s.sourcePower(), "", "of the source power")
+            : compare(c, p, "W", "");
+      }
+      case TRANSMISSION -> {
+        Optional<PortValue> a = r.from().flatMap(t -> s.port(Propagator.key(t.symbol(), t.port())));
+        Optional<PortValue> b = r.to().flatMap(t -> s.port(Propagator.key(t.symbol(), t.port())));
+        if (a.isEmpty() || b.isEmpty()) {
+          yield unreached(r);
+        }
+        yield compare(c, a.get().power() == 0 ? 0 : b.get().power() / a.get().power(), "", "");
+      }
+      case STRAY -> compare(c, s.strayPower(), "W", "");
+      case BACK_REFLECTION ->
+          c.relativeToSource()
               ? compare(
-                  c, s.sourcePower() == 0 ? 0 : p / s.sourcePower(), "", "of the source power")
-              : compare(c, p, "W", "");
-        }
-      case TRANSMISSION:
-        {
-          Optional<PortValue> a =
-              r.from().flatMap(t -> s.port(Propagator.key(t.symbol(), t.port())));
-          Optional<PortValue> b = r.to().flatMap(t -> s.port(Propagator.key(t.symbol(), t.port())));
-          if (a.isEmpty() || b.isEmpty()) {
-            return unreached(r);
-          }
-          return compare(c, a.get().power() == 0 ? 0 : b.get().power() / a.get().power(), "", "");
-        }
-      case STRAY:
-        return compare(c, s.strayPower(), "W", "");
-      case BACK_REFLECTION:
-        return c.relativeToSource()
-            ? compare(
-                c,
-                s.sourcePower() == 0 ? 0 : s.backReflected() / s.sourcePower(),
-                "",
-                "of the source power")
-            : compare(c, s.backReflected(), "W", "");
-      case DOP:
-        return at.isEmpty() ? unreached(r) : compare(c, at.get().light().dop(), "", "");
-      case EXTINCTION:
-        return at.isEmpty() ? unreached(r) : compare(c, at.get().light().extinctionRatio(), "", "");
-      case AZIMUTH:
-        return at.isEmpty() ? unreached(r) : compare(c, at.get().light().azimuth(), "rad", "");
-      case ELLIPTICITY:
-        return at.isEmpty()
-            ? unreached(r)
-            : compare(c, at.get().light().ellipticityAngle(), "rad", "");
-      case POLARIZATION:
-      case HANDEDNESS:
-        return at.isEmpty() ? unreached(r) : state(c, at.get().light());
-      case IRRADIANCE:
-      case PEAK_IRRADIANCE:
-      case FLUENCE:
-      case PEAK_FIELD:
-      case PEAK_POWER:
-      case PULSE_ENERGY:
-      case BEAM_RADIUS:
-        return exposure(r, c, s);
-      case DAMAGE_MARGIN:
-        return damage(r, c, s, model);
-      case HAZARD_CLASS:
-      case NOHD:
-      case EXPOSURE:
-      case EYEWEAR_OD:
-        return SafetyVerdicts.evaluate(r, c, s, model);
-      default:
-        return Verdict.notEvaluated(
-            "'"
-                + m.word()
-                + "' needs the beam and exposure analysis, which this version does not run");
-    }
+                  c,
+                  s.sourcePower() == 0 ? 0 : s.backReflected() / s.sourcePower(),
+                  "",
+                  "of the source power")
+              : compare(c, s.backReflected(), "W", "");
+      case DOP -> at.isEmpty() ? unreached(r) : compare(c, at.get().light().dop(), "", "");
+      case EXTINCTION ->
+          at.isEmpty() ? unreached(r) : compare(c, at.get().light().extinctionRatio(), "", "");
+      case AZIMUTH ->
+          at.isEmpty() ? unreached(r) : compare(c, at.get().light().azimuth(), "rad", "");
+      case ELLIPTICITY ->
+          at.isEmpty() ? unreached(r) : compare(c, at.get().light().ellipticityAngle(), "rad", "");
+      case POLARIZATION, HANDEDNESS -> at.isEmpty() ? unreached(r) : state(c, at.get().light());
+      case IRRADIANCE -> exposure(r, c, s, e -> OptionalDouble.of(e.averageIrradiance()), "W/m2");
+      case PEAK_IRRADIANCE -> exposure(r, c, s, RequirementEvaluator::peakIrradiance, "W/m2");
+      case FLUENCE -> exposure(r, c, s, Exposure::peakFluence, "J/m2");
+      case PEAK_FIELD -> exposure(r, c, s, e -> OptionalDouble.of(e.peakField()), "V/m");
+      case PEAK_POWER -> exposure(r, c, s, Exposure::peakPower, "W");
+      case PULSE_ENERGY -> exposure(r, c, s, Exposure::pulseEnergy, "J");
+      case BEAM_RADIUS -> exposure(r, c, s, e -> OptionalDouble.of(e.beamRadius()), "m");
+      case DAMAGE_MARGIN -> damage(r, c, s, model);
+      case HAZARD_CLASS, NOHD, EXPOSURE, EYEWEAR_OD -> SafetyVerdicts.evaluate(r, c, s, model);
+    };
+  }
+
+  /**
+   * The Gaussian peak irradiance; for a pulsed beam, of the peak power (the pulse's peak, not the
+   * average's).
+   */
+  private static OptionalDouble peakIrradiance(Exposure e) {
+    return OptionalDouble.of(
+        e.peakPower().isPresent()
+            ? 2 * e.peakPower().getAsDouble() / (Math.PI * e.beamRadius() * e.beamRadius())
+            : e.peakIrradiance());
   }
 
   /**
    * A quantity of the exposure, at a place (the light arriving there) or everywhere (the largest
    * value over every element's input, which is where parts take the beam).
    */
-  private static Verdict exposure(ResolvedRequirement r, Criterion c, TrainSolution s) {
+  private static Verdict exposure(
+      ResolvedRequirement r,
+      Criterion c,
+      TrainSolution s,
+      Function<Exposure, OptionalDouble> quantity,
+      String unit) {
     java.util.List<PortValue> places = new java.util.ArrayList<>();
     if (r.everywhere()) {
       places.addAll(s.incident().values());
@@ -215,17 +211,13 @@ final class RequirementEvaluator {
         return Verdict.notEvaluated(
             "the beam size is unknown: give the source a 'beam' line (waist or divergence)");
       }
-      OptionalDouble value = quantity(c.measure(), e.get());
+      OptionalDouble value = quantity.apply(e.get());
       if (value.isEmpty()) {
         return Verdict.notEvaluated(
             "'" + c.measure().word() + "' applies to pulsed sources; this one is continuous");
       }
       Verdict v =
-          compare(
-              c,
-              value.getAsDouble(),
-              unit(c.measure()),
-              r.everywhere() ? "at '" + p.element() + "'" : "");
+          compare(c, value.getAsDouble(), unit, r.everywhere() ? "at '" + p.element() + "'" : "");
       if (worst == null || v.margin() < worst.margin()) {
         worst = v;
       }
@@ -272,81 +264,41 @@ final class RequirementEvaluator {
     return worst;
   }
 
-  private static OptionalDouble quantity(Measure m, Exposure e) {
-    switch (m) {
-      case IRRADIANCE:
-        return OptionalDouble.of(e.averageIrradiance());
-      case PEAK_IRRADIANCE:
-        return OptionalDouble.of(
-            e.peakPower().isPresent()
-                ? 2 * e.peakPower().getAsDouble() / (Math.PI * e.beamRadius() * e.beamRadius())
-                : e.peakIrradiance());
-      case FLUENCE:
-        return e.peakFluence();
-      case PEAK_FIELD:
-        return OptionalDouble.of(e.peakField());
-      case PEAK_POWER:
-        return e.peakPower();
-      case PULSE_ENERGY:
-        return e.pulseEnergy();
-      default:
-        return OptionalDouble.of(e.beamRadius());
-    }
-  }
-
-  private static String unit(Measure m) {
-    switch (m) {
-      case IRRADIANCE:
-      case PEAK_IRRADIANCE:
-        return "W/m2";
-      case FLUENCE:
-        return "J/m2";
-      case PEAK_FIELD:
-        return "V/m";
-      case PEAK_POWER:
-        return "W";
-      case PULSE_ENERGY:
-        return "J";
-      default:
-        return "m";
-    }
-  }
-
   private static Verdict unreached(ResolvedRequirement r) {
     return Verdict.notEvaluated("no beam reaches the place this requirement names");
   }
 
   static Verdict compare(Criterion c, double value, String unit, String note) {
-    double margin;
-    boolean pass;
-    double bound = c.low();
-    switch (c.relation()) {
-      case AT_MOST:
-        margin = c.low() - value;
-        pass = value <= c.low();
-        break;
-      case BELOW:
-        margin = c.low() - value;
-        pass = value < c.low();
-        break;
-      case AT_LEAST:
-        margin = value - c.low();
-        pass = value >= c.low();
-        break;
-      case ABOVE:
-        margin = value - c.low();
-        pass = value > c.low();
-        break;
-      case WITHIN:
-        margin = Math.min(value - c.low(), c.high() - value);
-        pass = value >= c.low() && value <= c.high();
-        bound = value < c.low() ? c.low() : c.high();
-        break;
-      default: // EQUAL: within a relative 1e-9, since computed values carry rounding
-        margin = -Math.abs(value - c.low());
-        pass = Math.abs(value - c.low()) <= 1e-9 * Math.max(1, Math.abs(c.low()));
-        break;
-    }
+    double low = c.low();
+    return switch (c.relation()) {
+      case AT_MOST -> verdict(value <= low, value, low, low - value, unit, note);
+      case BELOW -> verdict(value < low, value, low, low - value, unit, note);
+      case AT_LEAST -> verdict(value >= low, value, low, value - low, unit, note);
+      case ABOVE -> verdict(value > low, value, low, value - low, unit, note);
+      case WITHIN ->
+          verdict(
+              value >= low && value <= c.high(),
+              value,
+              value < low ? low : c.high(),
+              Math.min(value - low, c.high() - value),
+              unit,
+              note);
+      // Within a relative 1e-9, since computed values carry rounding.
+      case EQUAL ->
+          verdict(
+              Math.abs(value - low) <= 1e-9 * Math.max(1, Math.abs(low)),
+              value,
+              low,
+              -Math.abs(value - low),
+              unit,
+              note);
+      // A stated state is judged by state(), never by a number.
+      case IS -> throw new IllegalArgumentException("'is' bounds a state, not a number");
+    };
+  }
+
+  private static Verdict verdict(
+      boolean pass, double value, double bound, double margin, String unit, String note) {
     return new Verdict(true, pass, value, bound, margin, unit, note);
   }
 
@@ -370,7 +322,7 @@ final class RequirementEvaluator {
           "rad",
           "ellipticity angle; " + light.handedness().describe());
     }
-    String form = g.word("form").orElse("unpolarized");
+    StateForm form = StateForm.of(g);
     if (g.word("form_mix").isPresent()) {
       double dop = g.number("dop").orElse(1);
       double margin = UNPOLARIZED_DOP - Math.abs(light.dop() - dop);
@@ -381,60 +333,56 @@ final class RequirementEvaluator {
     return pureState(g, form, light);
   }
 
-  private static Verdict pureState(Value.Group g, String form, Coherency light) {
+  private static Verdict pureState(Value.Group g, StateForm form, Coherency light) {
     double chi = light.ellipticityAngle();
-    switch (form) {
-      case "linear":
-        {
-          Value.Num az = (Value.Num) g.slot("azimuth").orElseThrow();
-          double tol = az.tolerance().orElse(DEFAULT_STATE_TOLERANCE);
-          double off = Math.abs(wrapHalfTurn(light.azimuth() - az.si()));
-          double margin = Math.min(tol - off, tol - Math.abs(chi));
-          return new Verdict(
-              true,
-              margin >= 0,
-              light.azimuth(),
-              az.si(),
-              margin,
-              "rad",
-              "azimuth against the table frame");
-        }
-      case "circular":
-        {
-          Handedness wanted =
-              g.word("handedness").orElse("right").equals("left")
-                  ? Handedness.LEFT
-                  : Handedness.RIGHT;
-          double signed = wanted == Handedness.RIGHT ? chi : -chi;
-          double margin = signed - (Math.PI / 4 - DEFAULT_STATE_TOLERANCE);
-          return new Verdict(
-              true,
-              margin >= 0,
-              chi,
-              wanted == Handedness.RIGHT ? Math.PI / 4 : -Math.PI / 4,
-              margin,
-              "rad",
-              "ellipticity angle; " + light.handedness().describe());
-        }
-      case "elliptical":
-        {
-          Value.Num az = (Value.Num) g.slot("azimuth").orElseThrow();
-          double tol = az.tolerance().orElse(DEFAULT_STATE_TOLERANCE);
-          double wantedChi =
-              Math.atan(g.number("axis_ratio").orElse(0))
-                  * (g.word("handedness").orElse("right").equals("left") ? -1 : 1);
-          double margin =
-              Math.min(
-                  tol - Math.abs(wrapHalfTurn(light.azimuth() - az.si())),
-                  tol - Math.abs(chi - wantedChi));
-          return new Verdict(true, margin >= 0, light.azimuth(), az.si(), margin, "rad", "");
-        }
-      default:
-        {
-          double margin = UNPOLARIZED_DOP - light.dop();
-          return new Verdict(true, margin >= 0, light.dop(), UNPOLARIZED_DOP, margin, "", "");
-        }
-    }
+    return switch (form) {
+      case LINEAR -> {
+        Value.Num az = (Value.Num) g.slot("azimuth").orElseThrow();
+        double tol = az.tolerance().orElse(DEFAULT_STATE_TOLERANCE);
+        double off = Math.abs(wrapHalfTurn(light.azimuth() - az.si()));
+        double margin = Math.min(tol - off, tol - Math.abs(chi));
+        yield new Verdict(
+            true,
+            margin >= 0,
+            light.azimuth(),
+            az.si(),
+            margin,
+            "rad",
+            "azimuth against the table frame");
+      }
+      case CIRCULAR -> {
+        Handedness wanted =
+            g.word("handedness").orElse("right").equals("left")
+                ? Handedness.LEFT
+                : Handedness.RIGHT;
+        double signed = wanted == Handedness.RIGHT ? chi : -chi;
+        double margin = signed - (Math.PI / 4 - DEFAULT_STATE_TOLERANCE);
+        yield new Verdict(
+            true,
+            margin >= 0,
+            chi,
+            wanted == Handedness.RIGHT ? Math.PI / 4 : -Math.PI / 4,
+            margin,
+            "rad",
+            "ellipticity angle; " + light.handedness().describe());
+      }
+      case ELLIPTICAL -> {
+        Value.Num az = (Value.Num) g.slot("azimuth").orElseThrow();
+        double tol = az.tolerance().orElse(DEFAULT_STATE_TOLERANCE);
+        double wantedChi =
+            Math.atan(g.number("axis_ratio").orElse(0))
+                * (g.word("handedness").orElse("right").equals("left") ? -1 : 1);
+        double margin =
+            Math.min(
+                tol - Math.abs(wrapHalfTurn(light.azimuth() - az.si())),
+                tol - Math.abs(chi - wantedChi));
+        yield new Verdict(true, margin >= 0, light.azimuth(), az.si(), margin, "rad", "");
+      }
+      case UNPOLARIZED -> {
+        double margin = UNPOLARIZED_DOP - light.dop();
+        yield new Verdict(true, margin >= 0, light.dop(), UNPOLARIZED_DOP, margin, "", "");
+      }
+    };
   }
 
   /** An azimuth difference folded into (−90°, 90°]: linear polarization repeats every half turn. */

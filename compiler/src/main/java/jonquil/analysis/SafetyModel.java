@@ -2,6 +2,7 @@ package jonquil.analysis;
 
 import java.util.Optional;
 import jonquil.optics.beam.Clipping;
+import jonquil.resolve.Param;
 import jonquil.resolve.ResolvedElement;
 import jonquil.safety.Classifier;
 import jonquil.safety.Emission;
@@ -39,11 +40,11 @@ final class SafetyModel {
 
   static double wavelength(ResolvedElement source) {
     return source
-        .number("wavelength", "wavelength")
+        .number(Param.WAVELENGTH, "wavelength")
         .orElse(
-            source.all("line").isEmpty()
+            source.all(Param.LINE).isEmpty()
                 ? 0
-                : source.all("line").get(0).number("wavelength").orElse(0));
+                : source.all(Param.LINE).get(0).number("wavelength").orElse(0));
   }
 
   static Outcome<HazardClass> hazardClass(ResolvedElement source, PortValue exit) {

@@ -3,6 +3,7 @@ package jonquil.analysis;
 import java.util.Optional;
 import jonquil.resolve.ElementKind;
 import jonquil.resolve.Measure;
+import jonquil.resolve.Param;
 import jonquil.resolve.ResolvedElement;
 import jonquil.resolve.ResolvedModel;
 import jonquil.resolve.ResolvedRequirement;
@@ -43,7 +44,7 @@ final class SafetyVerdicts {
     double exposureTime =
         element
             .get()
-            .number("exposure_time", "time")
+            .number(Param.EXPOSURE_TIME, "time")
             .orElse(SafetyModel.defaultExposureTime(wavelength));
     switch (m) {
       case HAZARD_CLASS:

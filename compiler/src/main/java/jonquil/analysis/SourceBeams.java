@@ -7,7 +7,9 @@ import java.util.OptionalDouble;
 import jonquil.optics.Coherency;
 import jonquil.optics.Handedness;
 import jonquil.optics.beam.GaussianBeam;
+import jonquil.resolve.Param;
 import jonquil.resolve.ResolvedElement;
+import jonquil.resolve.StateForm;
 import jonquil.resolve.Value;
 
 /**
@@ -21,18 +23,20 @@ final class SourceBeams {
   static List<Beam> of(
       ResolvedElement source, OptionalDouble wavelengthOverride, double ambientIndex) {
     List<double[]> lines = new ArrayList<>();
-    if (!source.all("line").isEmpty()) {
-      for (Value.Group g : source.all("line")) {
+    if (!source.all(Param.LINE).isEmpty()) {
+      for (Value.Group g : source.all(Param.LINE)) {
         lines.add(new double[] {g.number("wavelength").orElse(0), g.number("power").orElse(0)});
       }
     } else {
       lines.add(
-          new double[] {source.number("wavelength", "wavelength").orElse(0), averagePower(source)});
+          new double[] {
+            source.number(Param.WAVELENGTH, "wavelength").orElse(0), averagePower(source)
+          });
     }
     List<Beam> beams = new ArrayList<>();
     for (int i = 0; i < lines.size(); i++) {
       double wavelength = wavelengthOverride.orElse(lines.get(i)[0]);
-      Coherency light = state(source.param("polarization"), lines.get(i)[1]);
+      Coherency light = state(source.param(Param.POLARIZATION), lines.get(i)[1]);
       beams.add(
           new Beam(
               source.symbol(),
@@ -51,7 +55,7 @@ final class SourceBeams {
    * half-angle divergence; M² defaults to 1 and the waist to the exit face.
    */
   static Optional<GaussianBeam> mode(ResolvedElement source, double wavelength, double index) {
-    Optional<Value.Group> beam = source.param("beam");
+    Optional<Value.Group> beam = source.param(Param.BEAM);
     if (beam.isEmpty()) {
       return Optional.empty();
     }
@@ -75,12 +79,12 @@ final class SourceBeams {
    * zero.
    */
   static double averagePower(ResolvedElement source) {
-    OptionalDouble power = source.number("power", "power");
+    OptionalDouble power = source.number(Param.POWER, "power");
     if (power.isPresent()) {
       return power.getAsDouble();
     }
-    OptionalDouble energy = source.number("pulse_energy", "energy");
-    OptionalDouble rate = source.number("repetition_rate", "rate");
+    OptionalDouble energy = source.number(Param.PULSE_ENERGY, "energy");
+    OptionalDouble rate = source.number(Param.REPETITION_RATE, "rate");
     return energy.isPresent() && rate.isPresent() ? energy.getAsDouble() * rate.getAsDouble() : 0;
   }
 
@@ -101,24 +105,19 @@ final class SourceBeams {
   }
 
   private static Coherency pure(Value.Group g, double power) {
-    String form = g.word("form").orElse("unpolarized");
     Handedness hand =
         g.word("handedness")
             .map(h -> h.equals("left") ? Handedness.LEFT : Handedness.RIGHT)
             .orElse(Handedness.RIGHT);
-    switch (form) {
-      case "linear":
-        return Coherency.linear(g.number("azimuth").orElse(0), power);
-      case "circular":
-        return Coherency.circular(hand, power);
-      case "elliptical":
-        {
-          double chi =
-              Math.atan(g.number("axis_ratio").orElse(0)) * (hand == Handedness.LEFT ? -1 : 1);
-          return Coherency.elliptical(g.number("azimuth").orElse(0), chi, power);
-        }
-      default:
-        return Coherency.unpolarized(power);
-    }
+    return switch (StateForm.of(g)) {
+      case LINEAR -> Coherency.linear(g.number("azimuth").orElse(0), power);
+      case CIRCULAR -> Coherency.circular(hand, power);
+      case ELLIPTICAL -> {
+        double chi =
+            Math.atan(g.number("axis_ratio").orElse(0)) * (hand == Handedness.LEFT ? -1 : 1);
+        yield Coherency.elliptical(g.number("azimuth").orElse(0), chi, power);
+      }
+      case UNPOLARIZED -> Coherency.unpolarized(power);
+    };
   }
 }

@@ -6,6 +6,7 @@ import java.util.Optional;
 import jonquil.optics.Fresnel;
 import jonquil.optics.ThinFilm;
 import jonquil.resolve.ElementKind;
+import jonquil.resolve.Param;
 import jonquil.resolve.ResolvedElement;
 import jonquil.resolve.ResolvedModel;
 import jonquil.resolve.Symbol;
@@ -41,7 +42,7 @@ final class SurfaceModel {
    * The surface from medium n1 into n2 at an angle of incidence, with the element's coating if any.
    */
   Powers surface(ResolvedElement e, Complex n1, Complex n2, double aoi, double wavelength) {
-    Optional<Value.Group> coating = e.param("coating");
+    Optional<Value.Group> coating = e.param(Param.COATING);
     if (coating.isPresent()) {
       Optional<String> type = coating.get().word("type");
       if (type.isPresent()) {
@@ -62,7 +63,7 @@ final class SurfaceModel {
     if (c.isEmpty() || c.get().kind() != ElementKind.COATING) {
       return out;
     }
-    for (Value.Group layer : c.get().all("layer")) {
+    for (Value.Group layer : c.get().all(Param.LAYER)) {
       if (!(layer.slot("material").orElse(null) instanceof Value.Ref ref)) {
         continue;
       }

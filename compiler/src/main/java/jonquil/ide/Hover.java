@@ -6,6 +6,7 @@ import java.util.Optional;
 import jonquil.Result;
 import jonquil.resolve.Category;
 import jonquil.resolve.ElementKind;
+import jonquil.resolve.Param;
 import jonquil.resolve.ResolvedModel;
 import jonquil.resolve.Symbol;
 import jonquil.source.SourceFile;
@@ -107,18 +108,18 @@ final class Hover {
   private static void lines(StringBuilder md, jonquil.resolve.ResolvedElement source) {
     List<String> lines = new java.util.ArrayList<>();
     source
-        .number("wavelength", "wavelength")
+        .number(Param.WAVELENGTH, "wavelength")
         .ifPresent(
             wl ->
                 lines.add(
                     MarkdownText.q(wl, jonquil.units.Dimension.LENGTH)
-                        + source.number("power", "power").stream()
+                        + source.number(Param.POWER, "power").stream()
                             .mapToObj(
                                 p -> " at " + MarkdownText.q(p, jonquil.units.Dimension.POWER))
                             .findFirst()
                             .orElse("")));
     source
-        .all("line")
+        .all(Param.LINE)
         .forEach(
             g ->
                 lines.add(

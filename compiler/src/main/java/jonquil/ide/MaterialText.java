@@ -8,6 +8,7 @@ import jonquil.optics.material.CatalogMaterial;
 import jonquil.optics.material.MaterialCatalog;
 import jonquil.resolve.CatalogSpellings;
 import jonquil.resolve.ElementKind;
+import jonquil.resolve.Param;
 import jonquil.resolve.ResolvedElement;
 import jonquil.resolve.ResolvedModel;
 import jonquil.resolve.Symbol;
@@ -81,8 +82,8 @@ final class MaterialText {
       if (e.kind() != ElementKind.SOURCE) {
         continue;
       }
-      e.number("wavelength", "wavelength").ifPresent(out::add);
-      e.all("line").forEach(g -> g.number("wavelength").ifPresent(out::add));
+      e.number(Param.WAVELENGTH, "wavelength").ifPresent(out::add);
+      e.all(Param.LINE).forEach(g -> g.number("wavelength").ifPresent(out::add));
     }
     return List.copyOf(out);
   }
@@ -103,7 +104,7 @@ final class MaterialText {
   }
 
   private static Optional<Symbol> catalogRef(ResolvedElement m) {
-    Optional<Value> name = m.param("catalog").flatMap(g -> g.slot("name"));
+    Optional<Value> name = m.param(Param.CATALOG).flatMap(g -> g.slot("name"));
     return name.filter(v -> v instanceof Value.Ref).map(v -> ((Value.Ref) v).symbol());
   }
 

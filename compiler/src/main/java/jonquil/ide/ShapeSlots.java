@@ -18,30 +18,18 @@ import jonquil.units.Dimension;
 final class ShapeSlots {
   private ShapeSlots() {}
 
-  /** The shape flattened in writing order; alternatives are laid end to end. */
+  /** The shape flattened in writing order; alternatives end to end, a span as its two ends. */
   static List<Shape> flatten(Shape shape) {
     List<Shape> out = new ArrayList<>();
-    walk(shape, out);
-    return out;
-  }
-
-  private static void walk(Shape shape, List<Shape> out) {
-    if (shape instanceof Shape.Seq s) {
-      s.parts().forEach(p -> walk(p, out));
-    } else if (shape instanceof Shape.Opt o) {
-      walk(o.part(), out);
-    } else if (shape instanceof Shape.OneOf o) {
-      o.alternatives().forEach(a -> walk(a, out));
-    } else if (shape instanceof Shape.Keyed k) {
-      k.clauses().forEach(c -> walk(c, out));
-    } else if (shape instanceof Shape.ListOf l) {
-      walk(l.item(), out);
-    } else if (shape instanceof Shape.Span s) {
-      out.add(s.low());
-      out.add(s.high());
-    } else {
-      out.add(shape);
+    for (Shape leaf : Shape.leaves(shape)) {
+      if (leaf instanceof Shape.Span s) {
+        out.add(s.low());
+        out.add(s.high());
+      } else {
+        out.add(leaf);
+      }
     }
+    return out;
   }
 
   /** Fixed words the shape accepts anywhere ('ar', 'linear', 'at', 'waist'). */
@@ -105,33 +93,11 @@ final class ShapeSlots {
         || (s instanceof Shape.Word w && w.choices().contains(word));
   }
 
-  /** Units for a requirement's bound. */
+  /** Units for a requirement's bound: those of its dimension, else the words its form takes. */
   static List<String> unitsFor(Measure.Bound bound) {
     if (bound == null) {
       return UnitChoices.COMMON;
     }
-    switch (bound) {
-      case POWER:
-      case POWER_OR_RELATIVE:
-        return UnitChoices.forDimensions(List.of(Dimension.POWER));
-      case RATIO:
-        return List.of("%", "ppm");
-      case RATIO_OR_DB:
-        return List.of("dB", "%");
-      case IRRADIANCE:
-        return UnitChoices.forDimensions(List.of(Dimension.IRRADIANCE));
-      case FLUENCE:
-        return UnitChoices.forDimensions(List.of(Dimension.FLUENCE));
-      case FIELD:
-        return UnitChoices.forDimensions(List.of(Dimension.ELECTRIC_FIELD));
-      case ENERGY:
-        return UnitChoices.forDimensions(List.of(Dimension.ENERGY));
-      case LENGTH:
-        return UnitChoices.forDimensions(List.of(Dimension.LENGTH));
-      case ANGLE:
-        return UnitChoices.forDimensions(List.of(Dimension.ANGLE));
-      default:
-        return List.of();
-    }
+    return bound.dimension().map(d -> UnitChoices.forDimensions(List.of(d))).orElse(bound.units());
   }
 }

@@ -99,7 +99,7 @@ final class DeclarationChecker {
       checkRules(symbol, kind, decl, firstSeen);
       KindChecks.check(sink, symbol, kind, decl, params, firstSeen);
     }
-    if (kind == ElementKind.MATERIAL && params.containsKey("table")) {
+    if (kind == ElementKind.MATERIAL && params.containsKey(Param.TABLE.word())) {
       readTable(params);
     }
     return new ResolvedElement(symbol, kind, params);
@@ -107,7 +107,7 @@ final class DeclarationChecker {
 
   /** Replaces the table's file name with its rows, read from the data file the loader found. */
   private void readTable(Map<String, List<Value.Group>> params) {
-    Value.Group g = params.get("table").get(0);
+    Value.Group g = params.get(Param.TABLE.word()).get(0);
     if (!(g.slot("file").orElse(null) instanceof Value.Text name)) {
       return;
     }

@@ -6,8 +6,9 @@ import java.util.Optional;
 
 /**
  * Every kind of declaration the language knows, with the word that introduces it, its role, its
- * output ports and its parameter table (see {@link KindTables}). To add a kind: add a constant
- * here, its table in KindTables, and a test case.
+ * output ports and its parameter table (see {@link KindTables}). To add a kind, follow "How to add
+ * an element kind" in DEVELOPERS.md: a constant here, its table, its KindChecks case, its optical
+ * response in analysis.ElementOptics and its README row.
  */
 public enum ElementKind {
   SOURCE("source", Category.SOURCE, List.of("out")),

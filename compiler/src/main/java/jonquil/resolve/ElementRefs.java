@@ -9,13 +9,23 @@ import jonquil.syntax.Arg;
  * with a did-you-mean when unknown, recorded as a reference, and its port checked against the
  * kind's ports. One place, so a path and a requirement word a slip alike.
  */
-final class ElementRefs {
-  private final Sink sink;
-  private final Scope scope;
-
-  ElementRefs(Sink sink, Scope scope) {
-    this.sink = sink;
-    this.scope = scope;
+record ElementRefs(Sink sink, Scope scope) {
+  /**
+   * The symbol, when it names something that can stand in a beam path; otherwise reported with
+   * {@code code} as "'name' is a material" followed by {@code why}, and empty.
+   */
+  Optional<Symbol> placeable(Arg.RefArg ref, jonquil.diag.DiagnosticCode code, String why) {
+    Optional<Symbol> found = lookup(ref);
+    if (found.isEmpty()) {
+      return Optional.empty();
+    }
+    Symbol s = found.get();
+    if (!s.category().placeable() || s.kind().isEmpty()) {
+      sink.report(
+          code, ref.name().range(), "'" + ref.name().text() + "' is " + s.kindPhrase() + why);
+      return Optional.empty();
+    }
+    return found;
   }
 
   /**

@@ -27,21 +27,43 @@ final class KindChecks {
       Map<String, List<Value.Group>> params,
       Map<String, Property> given) {
     String who = kind.word() + " '" + symbol.name() + "'";
-    switch (kind) {
-      case SOURCE -> pulses(sink, who, decl, params, given);
-      case MATERIAL -> {
-        needs(sink, who, decl, given, "k", "index");
-        needs(sink, who, decl, given, "ordinary", "extraordinary");
-        needs(sink, who, decl, given, "extraordinary", "ordinary");
-      }
-      case SPLITTER -> {
-        if (!given.containsKey("polarizing")) {
-          needs(sink, who, decl, given, "reflect_s", "reflect_p");
-          needs(sink, who, decl, given, "reflect_p", "reflect_s");
-        }
-      }
-      default -> {}
-    }
+    // A switch expression, so that a new kind does not compile until it is listed here.
+    Runnable rules =
+        switch (kind) {
+          case SOURCE -> () -> pulses(sink, who, decl, params, given);
+          case MATERIAL ->
+              () -> {
+                needs(sink, who, decl, given, Param.K, Param.INDEX);
+                needs(sink, who, decl, given, Param.ORDINARY, Param.EXTRAORDINARY);
+                needs(sink, who, decl, given, Param.EXTRAORDINARY, Param.ORDINARY);
+              };
+          case SPLITTER ->
+              () -> {
+                if (!given.containsKey(Param.POLARIZING.word())) {
+                  needs(sink, who, decl, given, Param.REFLECT_S, Param.REFLECT_P);
+                  needs(sink, who, decl, given, Param.REFLECT_P, Param.REFLECT_S);
+                }
+              };
+          // The tables and KindRules say all there is to check of these.
+          case COATING,
+              INTERFACE,
+              POLARIZER,
+              WAVEPLATE,
+              ROTATOR,
+              DEPOLARIZER,
+              MIRROR,
+              WINDOW,
+              PLATE,
+              LENS,
+              APERTURE,
+              FILTER,
+              RHOMB,
+              PROBE,
+              DETECTOR,
+              DUMP ->
+              () -> {};
+        };
+    rules.run();
   }
 
   private static void needs(
@@ -49,13 +71,13 @@ final class KindChecks {
       String who,
       Declaration decl,
       Map<String, Property> given,
-      String has,
-      String needs) {
-    if (given.containsKey(has) && !given.containsKey(needs)) {
+      Param has,
+      Param needs) {
+    if (given.containsKey(has.word()) && !given.containsKey(needs.word())) {
       sink.report(
           DiagnosticCode.MISSING_PARAMETER,
-          given.get(has).key().range(),
-          "'" + has + "' in " + who + " needs '" + needs + "' as well");
+          given.get(has.word()).key().range(),
+          "'" + has.word() + "' in " + who + " needs '" + needs.word() + "' as well");
     }
   }
 
@@ -66,38 +88,38 @@ final class KindChecks {
       Map<String, List<Value.Group>> params,
       Map<String, Property> given) {
     boolean pulsed =
-        given.containsKey("pulse_energy")
-            || given.containsKey("pulse_duration")
-            || given.containsKey("repetition_rate");
+        given.containsKey(Param.PULSE_ENERGY.word())
+            || given.containsKey(Param.PULSE_DURATION.word())
+            || given.containsKey(Param.REPETITION_RATE.word());
     if (!pulsed) {
       return;
     }
-    if (!given.containsKey("pulse_duration")) {
+    if (!given.containsKey(Param.PULSE_DURATION.word())) {
       sink.report(
           DiagnosticCode.MISSING_PARAMETER,
           decl.name().range(),
           "pulsed " + who + " needs 'pulse_duration'");
     }
-    if (given.containsKey("power")
-        && !given.containsKey("pulse_energy")
-        && !given.containsKey("repetition_rate")) {
+    if (given.containsKey(Param.POWER.word())
+        && !given.containsKey(Param.PULSE_ENERGY.word())
+        && !given.containsKey(Param.REPETITION_RATE.word())) {
       sink.report(
           DiagnosticCode.MISSING_PARAMETER,
-          given.get("power").key().range(),
+          given.get(Param.POWER.word()).key().range(),
           "pulsed "
               + who
               + " gives an average 'power'; add 'repetition_rate' (or 'pulse_energy') to know the"
               + " pulses");
     }
-    OptionalDouble p = number(params, "power", "power");
-    OptionalDouble e = number(params, "pulse_energy", "energy");
-    OptionalDouble f = number(params, "repetition_rate", "rate");
+    OptionalDouble p = number(params, Param.POWER, "power");
+    OptionalDouble e = number(params, Param.PULSE_ENERGY, "energy");
+    OptionalDouble f = number(params, Param.REPETITION_RATE, "rate");
     if (p.isPresent() && e.isPresent() && f.isPresent()) {
       double product = e.getAsDouble() * f.getAsDouble();
       if (Math.abs(product - p.getAsDouble()) > PULSE_CONSISTENCY * p.getAsDouble()) {
         sink.report(
             DiagnosticCode.CONFLICTING_PARAMETERS,
-            given.get("power").range(),
+            given.get(Param.POWER.word()).range(),
             "'power' "
                 + QuantityFormat.format(p.getAsDouble(), Dimension.POWER)
                 + " disagrees with pulse_energy × repetition_rate = "
@@ -108,8 +130,9 @@ final class KindChecks {
   }
 
   private static OptionalDouble number(
-      Map<String, List<Value.Group>> params, String param, String slot) {
-    List<Value.Group> v = params.get(param);
+      Map<String, List<Value.Group>> params, Param param, String slot) {
+    List<Value.Group> v = params.get(param.word());
+    param.checkSlot(slot);
     return v == null || v.isEmpty() ? OptionalDouble.empty() : v.get(0).number(slot);
   }
 }

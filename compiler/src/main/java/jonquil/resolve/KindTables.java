@@ -46,14 +46,16 @@ final class KindTables {
   static final Shape PURE_STATE =
       oneOf(
           "a polarization state such as 'linear 0 deg' or 'circular right'",
-          seq(word("form", "linear"), q("azimuth", Dimension.ANGLE, Bounds.ANY, "0 deg")),
-          seq(word("form", "circular"), word("handedness", "right", "left")),
           seq(
-              word("form", "elliptical"),
+              word("form", StateForm.LINEAR.word()),
+              q("azimuth", Dimension.ANGLE, Bounds.ANY, "0 deg")),
+          seq(word("form", StateForm.CIRCULAR.word()), word("handedness", "right", "left")),
+          seq(
+              word("form", StateForm.ELLIPTICAL.word()),
               q("azimuth", Dimension.ANGLE, Bounds.ANY, "30 deg"),
               new Shape.Count("axis_ratio", Bounds.closed(0, 1), false),
               opt(word("handedness", "right", "left"))),
-          seq(word("form", "unpolarized")));
+          seq(word("form", StateForm.UNPOLARIZED.word())));
 
   static final Shape STATE =
       oneOf(
@@ -84,18 +86,19 @@ final class KindTables {
 
   private static final ParamSpec PLANE =
       optional(
-          "plane",
+          Param.PLANE,
           q("angle", Dimension.ANGLE, Bounds.ANY, "90 deg"),
           "orientation of the plane of incidence about the beam axis, from the lab x axis");
   private static final ParamSpec AOI_PARAM =
-      optional("aoi", q("angle", Dimension.ANGLE, AOI, "45 deg"), "angle of incidence");
+      optional(Param.AOI, q("angle", Dimension.ANGLE, AOI, "45 deg"), "angle of incidence");
   private static final ParamSpec DAMAGE_PARAM =
       repeatable(
-          "damage",
+          Param.DAMAGE,
           DAMAGE,
           "laser-induced damage threshold: cw irradiance or linear power density, or pulsed fluence"
               + " for a pulse duration");
-  private static final ParamSpec COATING_PARAM = optional("coating", COATING, "surface coating");
+  private static final ParamSpec COATING_PARAM =
+      optional(Param.COATING, COATING, "surface coating");
 
   private static final Map<ElementKind, List<ParamSpec>> PARAMS = new EnumMap<>(ElementKind.class);
   private static final Map<ElementKind, KindRules> RULES = new EnumMap<>(ElementKind.class);
@@ -104,32 +107,34 @@ final class KindTables {
     put(
         ElementKind.SOURCE,
         rules(
-            List.of(List.of("wavelength", "line"), List.of("power", "pulse_energy", "line")),
-            List.of(List.of("wavelength", "line"), List.of("power", "line"))),
-        optional("wavelength", WAVELENGTH_Q, "emission wavelength"),
+            List.of(
+                List.of(Param.WAVELENGTH, Param.LINE),
+                List.of(Param.POWER, Param.PULSE_ENERGY, Param.LINE)),
+            List.of(List.of(Param.WAVELENGTH, Param.LINE), List.of(Param.POWER, Param.LINE))),
+        optional(Param.WAVELENGTH, WAVELENGTH_Q, "emission wavelength"),
         repeatable(
-            "line",
+            Param.LINE,
             seq(WAVELENGTH_Q, q("power", Dimension.POWER, Bounds.POSITIVE, "1 W")),
             "one laser line of several: wavelength and power (lines add incoherently)"),
         optional(
-            "power",
+            Param.POWER,
             q("power", Dimension.POWER, Bounds.POSITIVE, "2 W"),
             "optical power (average power when pulsed)"),
         optional(
-            "pulse_energy",
+            Param.PULSE_ENERGY,
             q("energy", Dimension.ENERGY, Bounds.POSITIVE, "10 mJ"),
             "energy per pulse"),
         optional(
-            "pulse_duration",
+            Param.PULSE_DURATION,
             q("duration", Dimension.TIME, Bounds.POSITIVE, "8 ns"),
             "pulse duration (FWHM)"),
         optional(
-            "repetition_rate",
+            Param.REPETITION_RATE,
             q("rate", Dimension.FREQUENCY, Bounds.POSITIVE, "1 kHz"),
             "pulse repetition rate"),
-        optional("polarization", STATE, "polarization state at the exit"),
+        optional(Param.POLARIZATION, STATE, "polarization state at the exit"),
         optional(
-            "beam",
+            Param.BEAM,
             keyed(
                 seq(lit("waist"), q("waist", Dimension.LENGTH, Bounds.POSITIVE, "1 mm")),
                 seq(lit("waist_at"), q("waist_at", Dimension.LENGTH, Bounds.ANY, "0 mm")),
@@ -139,60 +144,65 @@ final class KindTables {
                 seq(lit("m2"), new Shape.Count("m2", Bounds.atLeast(1), false))),
             "Gaussian beam: waist radius (1/e²), waist position from the exit face, half-angle"
                 + " divergence, M²"));
+    // A material gives exactly one model of its index.
+    List<Param> indexModels =
+        List.of(
+            Param.CATALOG, Param.INDEX, Param.SELLMEIER, Param.CAUCHY, Param.TABLE, Param.ORDINARY);
     put(
         ElementKind.MATERIAL,
-        rules(
-            List.of(List.of("catalog", "index", "sellmeier", "cauchy", "table", "ordinary")),
-            List.of(List.of("catalog", "index", "sellmeier", "cauchy", "table", "ordinary"))),
-        optional("catalog", ref("name", Category.MATERIAL), "a material from the built-in catalog"),
+        rules(List.of(indexModels), List.of(indexModels)),
         optional(
-            "index", new Shape.Count("n", Bounds.POSITIVE, false), "constant refractive index n"),
+            Param.CATALOG, ref("name", Category.MATERIAL), "a material from the built-in catalog"),
         optional(
-            "k",
+            Param.INDEX,
+            new Shape.Count("n", Bounds.POSITIVE, false),
+            "constant refractive index n"),
+        optional(
+            Param.K,
             new Shape.Count("k", Bounds.NON_NEGATIVE, false),
             "constant extinction coefficient k"),
         optional(
-            "sellmeier",
+            Param.SELLMEIER,
             new Shape.ListOf(
                 seq(
                     new Shape.Count("b", Bounds.ANY, false),
                     q("c", Dimension.AREA, Bounds.ANY, "0.0060 um2"))),
             "Sellmeier terms B, C: n² = 1 + Σ B λ²/(λ² − C)"),
         optional(
-            "cauchy",
+            Param.CAUCHY,
             seq(
                 new Shape.Count("a", Bounds.POSITIVE, false),
                 opt(new Shape.Comma(), q("b", Dimension.AREA, Bounds.ANY, "0.004 um2")),
                 opt(new Shape.Comma(), q("c", Dimension.LENGTH4, Bounds.ANY, "0.0001 um4"))),
             "Cauchy terms: n = A + B/λ² + C/λ⁴"),
-        optional("table", new Shape.Text("file"), "a file of wavelength, n, k rows"),
+        optional(Param.TABLE, new Shape.Text("file"), "a file of wavelength, n, k rows"),
         optional(
-            "ordinary",
+            Param.ORDINARY,
             new Shape.Count("n_o", Bounds.POSITIVE, false),
             "ordinary index of a uniaxial crystal"),
         optional(
-            "extraordinary",
+            Param.EXTRAORDINARY,
             new Shape.Count("n_e", Bounds.POSITIVE, false),
             "extraordinary index of a uniaxial crystal"),
         optional(
-            "absorption",
+            Param.ABSORPTION,
             q("alpha", Dimension.INVERSE_LENGTH, Bounds.NON_NEGATIVE, "0.01 /cm"),
             "bulk absorption coefficient (power)"),
         optional(
-            "temperature",
+            Param.TEMPERATURE,
             q("temperature", Dimension.TEMPERATURE, Bounds.POSITIVE, "20 degC"),
             "temperature the data refer to"),
         optional(
-            "valid",
+            Param.VALID,
             new Shape.Span(
                 q("from", Dimension.LENGTH, WAVELENGTH, "400 nm"),
                 q("to", Dimension.LENGTH, WAVELENGTH, "2 um")),
             "wavelength range where the data hold"));
     put(
         ElementKind.COATING,
-        rules(List.of(List.of("layer")), List.of()),
+        rules(List.of(List.of(Param.LAYER)), List.of()),
         repeatable(
-            "layer",
+            Param.LAYER,
             seq(
                 ref("material", Category.MATERIAL),
                 oneOf(
@@ -204,8 +214,8 @@ final class KindTables {
     put(
         ElementKind.INTERFACE,
         KindRules.NONE,
-        required("from", ref("material", Category.MATERIAL), "medium on the incidence side"),
-        required("to", ref("material", Category.MATERIAL), "medium on the far side"),
+        required(Param.FROM, ref("material", Category.MATERIAL), "medium on the incidence side"),
+        required(Param.TO, ref("material", Category.MATERIAL), "medium on the far side"),
         AOI_PARAM,
         PLANE,
         COATING_PARAM,
@@ -213,30 +223,31 @@ final class KindTables {
     put(
         ElementKind.POLARIZER,
         KindRules.NONE,
-        required("axis", ANGLE, "transmission axis"),
-        optional("extinction", EXTINCTION, "extinction ratio (principal to crossed transmission)"),
-        optional("transmission", ratio("t"), "principal transmittance"),
+        required(Param.AXIS, ANGLE, "transmission axis"),
+        optional(
+            Param.EXTINCTION, EXTINCTION, "extinction ratio (principal to crossed transmission)"),
+        optional(Param.TRANSMISSION, ratio("t"), "principal transmittance"),
         DAMAGE_PARAM);
     put(
         ElementKind.WAVEPLATE,
         KindRules.NONE,
         required(
-            "retardance",
+            Param.RETARDANCE,
             seq(
                 q("retardance", Dimension.ANGLE, Bounds.NON_NEGATIVE, "0.5 wave"),
                 opt(lit("at"), WAVELENGTH_Q)),
             "retardance at the design wavelength"),
-        required("fast_axis", ANGLE, "fast axis"),
+        required(Param.FAST_AXIS, ANGLE, "fast axis"),
         optional(
-            "order",
+            Param.ORDER,
             oneOf(
                 "'zero' or 'multi 5'",
                 word("order", "zero"),
                 seq(word("order", "multi"), new Shape.Count("m", Bounds.atLeast(1), true))),
             "zero- or multi-order"),
-        optional("material", ref("material", Category.MATERIAL), "birefringent material"),
+        optional(Param.MATERIAL, ref("material", Category.MATERIAL), "birefringent material"),
         optional(
-            "thickness",
+            Param.THICKNESS,
             q("thickness", Dimension.LENGTH, Bounds.POSITIVE, "1 mm"),
             "plate thickness"),
         COATING_PARAM,
@@ -245,27 +256,28 @@ final class KindTables {
         ElementKind.ROTATOR,
         KindRules.NONE,
         required(
-            "rotation",
+            Param.ROTATION,
             ANGLE,
             "rotation of the polarization, counter-clockwise seen against the beam"),
         optional(
-            "type",
+            Param.TYPE,
             word("type", "reciprocal", "faraday"),
             "reciprocal (optical activity) or Faraday (non-reciprocal)"),
-        optional("transmission", ratio("t"), "transmittance"),
+        optional(Param.TRANSMISSION, ratio("t"), "transmittance"),
         DAMAGE_PARAM);
     put(
         ElementKind.SPLITTER,
         rules(
-            List.of(List.of("polarizing", "ratio", "reflect_s")),
-            List.of(List.of("polarizing", "ratio"))),
-        optional("polarizing", Shape.empty(), "a polarizing splitter: p through, s reflected"),
-        optional("ratio", ratio("reflected"), "fraction reflected by a non-polarizing splitter"),
-        optional("extinction", EXTINCTION, "extinction ratio of the through port"),
-        optional("transmit_p", ratio("t"), "transmittance for p"),
-        optional("transmit_s", ratio("t"), "transmittance for s"),
-        optional("reflect_s", ratio("r"), "reflectance for s"),
-        optional("reflect_p", ratio("r"), "reflectance for p"),
+            List.of(List.of(Param.POLARIZING, Param.RATIO, Param.REFLECT_S)),
+            List.of(List.of(Param.POLARIZING, Param.RATIO))),
+        optional(Param.POLARIZING, Shape.empty(), "a polarizing splitter: p through, s reflected"),
+        optional(
+            Param.RATIO, ratio("reflected"), "fraction reflected by a non-polarizing splitter"),
+        optional(Param.EXTINCTION, EXTINCTION, "extinction ratio of the through port"),
+        optional(Param.TRANSMIT_P, ratio("t"), "transmittance for p"),
+        optional(Param.TRANSMIT_S, ratio("t"), "transmittance for s"),
+        optional(Param.REFLECT_S, ratio("r"), "reflectance for s"),
+        optional(Param.REFLECT_P, ratio("r"), "reflectance for p"),
         AOI_PARAM,
         PLANE,
         COATING_PARAM,
@@ -274,38 +286,38 @@ final class KindTables {
         ElementKind.DEPOLARIZER,
         KindRules.NONE,
         optional(
-            "depolarization",
+            Param.DEPOLARIZATION,
             ratio("d"),
             "fraction of the light that leaves unpolarized (default 100 %)"),
-        optional("transmission", ratio("t"), "transmittance"),
+        optional(Param.TRANSMISSION, ratio("t"), "transmittance"),
         DAMAGE_PARAM);
     put(
         ElementKind.MIRROR,
         rules(
-            List.of(List.of("metal", "reflectance", "coating")),
-            List.of(List.of("metal", "reflectance"))),
+            List.of(List.of(Param.METAL, Param.REFLECTANCE, Param.COATING)),
+            List.of(List.of(Param.METAL, Param.REFLECTANCE))),
         optional(
-            "metal",
+            Param.METAL,
             ref("metal", Category.MATERIAL),
             "bare metal, from the catalog or a declared material"),
-        optional("reflectance", ratio("r"), "specified reflectance"),
+        optional(Param.REFLECTANCE, ratio("r"), "specified reflectance"),
         COATING_PARAM,
         AOI_PARAM,
         PLANE,
         DAMAGE_PARAM);
     List<ParamSpec> window =
         List.of(
-            required("material", ref("material", Category.MATERIAL), "bulk material"),
+            required(Param.MATERIAL, ref("material", Category.MATERIAL), "bulk material"),
             required(
-                "thickness",
+                Param.THICKNESS,
                 q("thickness", Dimension.LENGTH, Bounds.POSITIVE, "3 mm"),
                 "thickness"),
             optional(
-                "then",
+                Param.THEN,
                 ref("medium", Category.MATERIAL),
                 "medium behind the exit face (default: the medium before)"),
             optional(
-                "wedge",
+                Param.WEDGE,
                 q("wedge", Dimension.ANGLE, Bounds.NON_NEGATIVE, "0.5 deg"),
                 "wedge angle"),
             AOI_PARAM,
@@ -318,16 +330,16 @@ final class KindTables {
         ElementKind.LENS,
         KindRules.NONE,
         required(
-            "focal",
+            Param.FOCAL,
             q("focal", Dimension.LENGTH, Bounds.NON_ZERO, "100 mm"),
             "focal length (negative: diverging)"),
         optional(
-            "clear_aperture",
+            Param.CLEAR_APERTURE,
             q("diameter", Dimension.LENGTH, Bounds.POSITIVE, "25 mm"),
             "clear aperture diameter"),
-        optional("material", ref("material", Category.MATERIAL), "lens material"),
+        optional(Param.MATERIAL, ref("material", Category.MATERIAL), "lens material"),
         optional(
-            "thickness",
+            Param.THICKNESS,
             q("thickness", Dimension.LENGTH, Bounds.POSITIVE, "4 mm"),
             "centre thickness"),
         COATING_PARAM,
@@ -336,17 +348,19 @@ final class KindTables {
         ElementKind.APERTURE,
         KindRules.NONE,
         required(
-            "diameter",
+            Param.DIAMETER,
             q("diameter", Dimension.LENGTH, Bounds.POSITIVE, "5 mm"),
             "diameter of the circular opening"),
         DAMAGE_PARAM);
     put(
         ElementKind.FILTER,
-        rules(List.of(List.of("od", "transmission")), List.of(List.of("od", "transmission"))),
-        optional("od", new Shape.Density("od"), "optical density, 'OD 3' or '3'"),
-        optional("transmission", ratio("t"), "transmittance"),
+        rules(
+            List.of(List.of(Param.OD, Param.TRANSMISSION)),
+            List.of(List.of(Param.OD, Param.TRANSMISSION))),
+        optional(Param.OD, new Shape.Density("od"), "optical density, 'OD 3' or '3'"),
+        optional(Param.TRANSMISSION, ratio("t"), "transmittance"),
         optional(
-            "band",
+            Param.BAND,
             new Shape.Span(
                 q("from", Dimension.LENGTH, WAVELENGTH, "400 nm"),
                 q("to", Dimension.LENGTH, WAVELENGTH, "700 nm")),
@@ -355,37 +369,37 @@ final class KindTables {
     put(
         ElementKind.RHOMB,
         KindRules.NONE,
-        required("material", ref("material", Category.MATERIAL), "prism material"),
+        required(Param.MATERIAL, ref("material", Category.MATERIAL), "prism material"),
         required(
-            "aoi",
+            Param.AOI,
             q("angle", Dimension.ANGLE, AOI, "54.6 deg"),
             "internal angle of incidence at each reflection"),
         optional(
-            "reflections",
+            Param.REFLECTIONS,
             new Shape.Count("n", Bounds.atLeast(1), true),
             "number of total internal reflections (default 2)"),
-        optional("axis", ANGLE, "orientation of the plane of incidence about the beam"),
+        optional(Param.AXIS, ANGLE, "orientation of the plane of incidence about the beam"),
         DAMAGE_PARAM);
     put(
         ElementKind.PROBE,
         KindRules.NONE,
         optional(
-            "aperture",
+            Param.APERTURE,
             q("diameter", Dimension.LENGTH, Bounds.POSITIVE, "7 mm"),
             "measurement aperture diameter"),
         optional(
-            "exposure_time",
+            Param.EXPOSURE_TIME,
             q("time", Dimension.TIME, Bounds.POSITIVE, "0.25 s"),
             "exposure duration to assess"));
     put(
         ElementKind.DETECTOR,
         KindRules.NONE,
         optional(
-            "aperture",
+            Param.APERTURE,
             q("diameter", Dimension.LENGTH, Bounds.POSITIVE, "10 mm"),
             "active area diameter"),
         optional(
-            "responsivity",
+            Param.RESPONSIVITY,
             q("r", Dimension.RESPONSIVITY, Bounds.POSITIVE, "0.6 A/W"),
             "responsivity"),
         DAMAGE_PARAM);
@@ -393,14 +407,18 @@ final class KindTables {
         ElementKind.DUMP,
         KindRules.NONE,
         optional(
-            "rating",
+            Param.RATING,
             q("power", Dimension.POWER, Bounds.POSITIVE, "10 W"),
             "maximum power the dump takes"),
         DAMAGE_PARAM);
   }
 
-  private static KindRules rules(List<List<String>> atLeastOne, List<List<String>> exclusive) {
-    return new KindRules(atLeastOne, exclusive);
+  private static KindRules rules(List<List<Param>> atLeastOne, List<List<Param>> exclusive) {
+    return new KindRules(words(atLeastOne), words(exclusive));
+  }
+
+  private static List<List<String>> words(List<List<Param>> groups) {
+    return groups.stream().map(g -> g.stream().map(Param::word).toList()).toList();
   }
 
   private static void put(ElementKind kind, KindRules rules, ParamSpec... params) {

@@ -3,6 +3,7 @@ package jonquil.resolve;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
+import jonquil.units.Dimension;
 
 /** The quantities a requirement can bound, with the words that name them and where they apply. */
 public enum Measure {
@@ -31,26 +32,62 @@ public enum Measure {
   AZIMUTH(Bound.ANGLE, Where.AT, "azimuth"),
   ELLIPTICITY(Bound.ANGLE, Where.AT, "ellipticity"),
   HANDEDNESS(Bound.HANDEDNESS, Where.AT, "handedness"),
-  EXTINCTION(Bound.RATIO_OR_DB, Where.AT, "extinction"),
+  EXTINCTION(Bound.RATIO_OR_DB, Where.AT, "'>= 1000' or '>= 30 dB'", List.of("extinction")),
   DOP(Bound.RATIO, Where.AT, "dop", "degree of polarization");
 
-  /** How the bound is written. */
+  /**
+   * How the bound is written: the dimension of its number (none for plain numbers, ratios, classes
+   * and states), an example of a whole bound for messages, an example value, and the unit words an
+   * editor offers when the bound has no dimension.
+   */
   public enum Bound {
-    POWER,
-    POWER_OR_RELATIVE,
-    RATIO,
-    RATIO_OR_DB,
-    IRRADIANCE,
-    FLUENCE,
-    FIELD,
-    ENERGY,
-    LENGTH,
-    ANGLE,
-    PLAIN,
-    HAZARD_CLASS,
-    DENSITY,
-    STATE,
-    HANDEDNESS
+    POWER(Dimension.POWER, "'< 5 mW'", "5 mW"),
+    POWER_OR_RELATIVE(Dimension.POWER, "'>= 400 mW' or '>= -3 dB'", "400 mW"),
+    RATIO(null, "'<= 50 %'", "50 %", "%", "ppm"),
+    RATIO_OR_DB(null, "'>= 90 %' or '>= -0.5 dB'", "90 %", "dB", "%"),
+    IRRADIANCE(Dimension.IRRADIANCE, "'<= 1 kW/cm2'", "1 kW/cm2"),
+    FLUENCE(Dimension.FLUENCE, "'<= 2 J/cm2'", "2 J/cm2"),
+    FIELD(Dimension.ELECTRIC_FIELD, "'<= 1 MV/m'", "1 MV/m"),
+    ENERGY(Dimension.ENERGY, "'<= 1 mJ'", "1 mJ"),
+    LENGTH(Dimension.LENGTH, "'<= 2 m'", "2 m"),
+    ANGLE(Dimension.ANGLE, "'<= 2 deg'", "2 deg"),
+    PLAIN(null, "'>= 2'", "2"),
+    HAZARD_CLASS(null, "'<= 3R'", "3R"),
+    DENSITY(null, "'<= OD 4'", "OD 4"),
+    STATE(null, "'is linear 90 deg ± 2 deg'", "linear 90 deg"),
+    HANDEDNESS(null, "'is right'", "right");
+
+    private final Dimension dimension;
+    private final String example;
+    private final String value;
+    private final List<String> units;
+
+    Bound(Dimension dimension, String example, String value, String... units) {
+      this.dimension = dimension;
+      this.example = example;
+      this.value = value;
+      this.units = List.of(units);
+    }
+
+    /** The dimension of the bound's number; empty when it is not a physical quantity. */
+    public Optional<Dimension> dimension() {
+      return Optional.ofNullable(dimension);
+    }
+
+    /** A whole bound as written after the measure, quoted: "'<= 1 kW/cm2'". */
+    public String example() {
+      return example;
+    }
+
+    /** An example of the bound's value alone, for messages about the value: "1 kW/cm2". */
+    public String value() {
+      return value;
+    }
+
+    /** Unit words an editor offers for a bound without a dimension ('%', 'dB'). */
+    public List<String> units() {
+      return units;
+    }
   }
 
   /** Which places the measure takes. */
@@ -65,11 +102,23 @@ public enum Measure {
   private final Bound bound;
   private final Where where;
   private final List<String> spellings;
+  private final String example;
 
   Measure(Bound bound, Where where, String... spellings) {
+    this(bound, where, bound.example(), List.of(spellings));
+  }
+
+  /** A measure whose bound reads differently from the rest of its bound form. */
+  Measure(Bound bound, Where where, String example, List<String> spellings) {
     this.bound = bound;
     this.where = where;
-    this.spellings = List.of(spellings);
+    this.example = example;
+    this.spellings = List.copyOf(spellings);
+  }
+
+  /** An example of a whole bound on this measure, for messages. */
+  public String example() {
+    return example;
   }
 
   public Bound bound() {

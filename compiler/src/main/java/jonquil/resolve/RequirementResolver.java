@@ -59,7 +59,7 @@ final class RequirementResolver {
           DiagnosticCode.MISSING_CONDITION,
           check.measure().range(),
           "this requirement has no bound: add one such as "
-              + measure.map(RequirementResolver::example).orElse("'>= 400 mW'"));
+              + measure.map(Measure::example).orElse("'>= 400 mW'"));
     }
     if (measure.isPresent() && check.condition().isPresent()) {
       criterion(measure.get(), check.condition().get()).ifPresent(criteria::add);
@@ -183,23 +183,16 @@ final class RequirementResolver {
   }
 
   private Optional<ResolvedRequirement.Target> target(Arg.RefArg ref) {
-    String name = ref.name().text();
-    Optional<Symbol> found = refs.lookup(ref);
+    Optional<Symbol> found =
+        refs.placeable(
+            ref,
+            DiagnosticCode.WRONG_KIND,
+            "; a requirement is measured at a source, element, probe or beam stop");
     if (found.isEmpty()) {
       return Optional.empty();
     }
     Symbol s = found.get();
-    if (!s.category().placeable() || s.kind().isEmpty()) {
-      sink.report(
-          DiagnosticCode.WRONG_KIND,
-          ref.name().range(),
-          "'"
-              + name
-              + "' is "
-              + s.kindPhrase()
-              + "; a requirement is measured at a source, element, probe or beam stop");
-      return Optional.empty();
-    }
+    String name = ref.name().text();
     Optional<String> port = refs.port(ref, s.kind().get());
     if (ref.port().isPresent() && port.isEmpty()) {
       return Optional.empty();
@@ -222,7 +215,7 @@ final class RequirementResolver {
       sink.report(
           DiagnosticCode.BAD_POLARIZATION_STATE,
           condition.range(),
-          "'" + m.word() + "' is stated with 'is', e.g. " + example(m));
+          "'" + m.word() + "' is stated with 'is', e.g. " + m.example());
       return Optional.empty();
     }
     if (condition instanceof Requirement.Compare c) {
@@ -282,7 +275,7 @@ final class RequirementResolver {
           "'is' states a polarization; bound '"
               + m.word()
               + "' with a comparison such as "
-              + example(m));
+              + m.example());
       return Optional.empty();
     }
     int before = sink.diagnostics.size();
@@ -321,64 +314,39 @@ final class RequirementResolver {
               + "', found "
               + ValueChecker.describeArg(arg)
               + "; e.g. "
-              + example(m));
+              + m.example());
       return Optional.empty();
     }
     String what = m.word();
-    switch (m.bound()) {
-      case POWER -> {
-        return values
-            .quantity(q, List.of(Dimension.POWER), Bounds.NON_NEGATIVE, "5 mW", what)
-            .map(v -> new Bound(v.si(), false));
-      }
+    return switch (m.bound()) {
+      case POWER, IRRADIANCE, FLUENCE, FIELD, ENERGY, LENGTH ->
+          si(q, m.bound(), Bounds.NON_NEGATIVE, what);
+      case ANGLE -> si(q, m.bound(), Bounds.ANY, what);
       case POWER_OR_RELATIVE, RATIO_OR_DB -> {
         if (q.unit().isPresent() && q.unit().get().text().equals("dB")) {
-          return values.powerRatio(q, Bounds.POSITIVE, what).map(v -> new Bound(v.si(), true));
+          yield values.powerRatio(q, Bounds.POSITIVE, what).map(v -> new Bound(v.si(), true));
         }
         if (m.bound() == Measure.Bound.POWER_OR_RELATIVE) {
-          return values
-              .quantity(q, List.of(Dimension.POWER), Bounds.NON_NEGATIVE, "400 mW", what)
-              .map(v -> new Bound(v.si(), false));
+          yield si(q, m.bound(), Bounds.NON_NEGATIVE, what);
         }
-        return (m == Measure.EXTINCTION
+        yield (m == Measure.EXTINCTION
                 ? values.powerRatio(q, Bounds.atLeast(1), what)
                 : values.ratio(q, Bounds.closed(0, 1), what))
             .map(v -> new Bound(v.si(), false));
       }
-      case RATIO -> {
-        return values
-            .ratio(q, m == Measure.EXPOSURE ? Bounds.NON_NEGATIVE : Bounds.closed(0, 1), what)
-            .map(v -> new Bound(v.si(), false));
-      }
-      case IRRADIANCE -> {
-        return si(q, Dimension.IRRADIANCE, "1 kW/cm2", what);
-      }
-      case FLUENCE -> {
-        return si(q, Dimension.FLUENCE, "2 J/cm2", what);
-      }
-      case FIELD -> {
-        return si(q, Dimension.ELECTRIC_FIELD, "1 MV/m", what);
-      }
-      case ENERGY -> {
-        return si(q, Dimension.ENERGY, "1 mJ", what);
-      }
-      case LENGTH -> {
-        return si(q, Dimension.LENGTH, "2 m", what);
-      }
-      case ANGLE -> {
-        return values
-            .quantity(q, List.of(Dimension.ANGLE), Bounds.ANY, "2 deg", what)
-            .map(v -> new Bound(v.si(), false));
-      }
+      case RATIO ->
+          values
+              .ratio(q, m == Measure.EXPOSURE ? Bounds.NON_NEGATIVE : Bounds.closed(0, 1), what)
+              .map(v -> new Bound(v.si(), false));
       case PLAIN -> {
         if (q.unit().isPresent()) {
           sink.report(
               DiagnosticCode.UNEXPECTED_UNIT,
               q.unit().get().range(),
               "'" + what + "' is a plain number; remove the unit '" + q.unit().get().text() + "'");
-          return Optional.empty();
+          yield Optional.empty();
         }
-        return Optional.of(new Bound(q.number().value(), false));
+        yield Optional.of(new Bound(q.number().value(), false));
       }
       case DENSITY -> {
         if (q.unit().isPresent() && !q.unit().get().text().equals("OD")) {
@@ -386,34 +354,37 @@ final class RequirementResolver {
               DiagnosticCode.WRONG_DIMENSION,
               q.unit().get().range(),
               "'" + what + "' is an optical density, written 'OD 4' or '4'");
-          return Optional.empty();
+          yield Optional.empty();
         }
-        return Optional.of(new Bound(q.number().value(), false));
+        yield Optional.of(new Bound(q.number().value(), false));
       }
-      case HAZARD_CLASS -> {
-        String label = q.number().text() + q.unit().map(u -> u.text()).orElse("");
-        Optional<HazardClass> c = HazardClass.byLabel(label);
-        if (c.isEmpty()) {
-          sink.report(
-              DiagnosticCode.UNKNOWN_HAZARD_CLASS,
-              q.range(),
-              "'"
-                  + ValueChecker.written(q)
-                  + "' is not a laser hazard class; the classes are "
-                  + String.join(", ", HazardClass.labels()));
-          return Optional.empty();
-        }
-        return Optional.of(new Bound(c.get().ordinal(), false));
-      }
-      default -> {
-        return Optional.empty();
-      }
-    }
+      case HAZARD_CLASS -> hazardClass(q);
+      // criterion() sends every 'is' to state() and reports these forms written otherwise.
+      case STATE, HANDEDNESS ->
+          throw new IllegalStateException("'" + what + "' is bounded with 'is', not a number");
+    };
   }
 
-  private Optional<Bound> si(Arg.QuantityArg q, Dimension dim, String example, String what) {
+  private Optional<Bound> hazardClass(Arg.QuantityArg q) {
+    String label = q.number().text() + q.unit().map(u -> u.text()).orElse("");
+    Optional<HazardClass> c = HazardClass.byLabel(label);
+    if (c.isEmpty()) {
+      sink.report(
+          DiagnosticCode.UNKNOWN_HAZARD_CLASS,
+          q.range(),
+          "'"
+              + ValueChecker.written(q)
+              + "' is not a laser hazard class; the classes are "
+              + String.join(", ", HazardClass.labels()));
+      return Optional.empty();
+    }
+    return Optional.of(new Bound(c.get().ordinal(), false));
+  }
+
+  /** A physical quantity of the bound form's dimension, its example value in messages. */
+  private Optional<Bound> si(Arg.QuantityArg q, Measure.Bound form, Bounds range, String what) {
     return values
-        .quantity(q, List.of(dim), Bounds.NON_NEGATIVE, example, what)
+        .quantity(q, List.of(form.dimension().orElseThrow()), range, form.value(), what)
         .map(v -> new Bound(v.si(), false));
   }
 
@@ -481,27 +452,6 @@ final class RequirementResolver {
       case GE -> ResolvedRequirement.Relation.AT_LEAST;
       case GT -> ResolvedRequirement.Relation.ABOVE;
       case EQ -> ResolvedRequirement.Relation.EQUAL;
-    };
-  }
-
-  static String example(Measure m) {
-    return switch (m.bound()) {
-      case POWER -> "'< 5 mW'";
-      case POWER_OR_RELATIVE -> "'>= 400 mW' or '>= -3 dB'";
-      case RATIO -> "'<= 50 %'";
-      case RATIO_OR_DB ->
-          m == Measure.EXTINCTION ? "'>= 1000' or '>= 30 dB'" : "'>= 90 %' or '>= -0.5 dB'";
-      case IRRADIANCE -> "'<= 1 kW/cm2'";
-      case FLUENCE -> "'<= 2 J/cm2'";
-      case FIELD -> "'<= 1 MV/m'";
-      case ENERGY -> "'<= 1 mJ'";
-      case LENGTH -> "'<= 2 m'";
-      case ANGLE -> "'<= 2 deg'";
-      case PLAIN -> "'>= 2'";
-      case HAZARD_CLASS -> "'<= 3R'";
-      case DENSITY -> "'<= OD 4'";
-      case STATE -> "'is linear 90 deg ± 2 deg'";
-      case HANDEDNESS -> "'is right'";
     };
   }
 }

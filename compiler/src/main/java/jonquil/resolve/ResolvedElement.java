@@ -7,6 +7,7 @@ import java.util.OptionalDouble;
 
 /**
  * A declaration with its parameters checked: parameter name to its values (several if repeatable).
+ * Code reads them through {@link Param}, so a parameter that no table names cannot be asked for.
  */
 public record ResolvedElement(
     Symbol symbol, ElementKind kind, Map<String, List<Value.Group>> params) {
@@ -14,21 +15,37 @@ public record ResolvedElement(
     params = Map.copyOf(params);
   }
 
-  public Optional<Value.Group> param(String name) {
-    List<Value.Group> values = params.get(name);
+  public Optional<Value.Group> param(Param p) {
+    List<Value.Group> values = params.get(p.word());
     return values == null || values.isEmpty() ? Optional.empty() : Optional.of(values.get(0));
   }
 
-  public List<Value.Group> all(String name) {
-    return params.getOrDefault(name, List.of());
+  public List<Value.Group> all(Param p) {
+    return params.getOrDefault(p.word(), List.of());
   }
 
-  public boolean has(String name) {
-    return params.containsKey(name);
+  public boolean has(Param p) {
+    return params.containsKey(p.word());
   }
 
-  /** The SI number in one slot of a parameter, e.g. number("thickness", "thickness"). */
-  public OptionalDouble number(String param, String slot) {
-    return param(param).map(g -> g.number(slot)).orElse(OptionalDouble.empty());
+  /**
+   * The SI number in one slot of a parameter, e.g. number(Param.THICKNESS, "thickness"); a slot
+   * that the parameter's shape never fills is a programming error and throws.
+   */
+  public OptionalDouble number(Param p, String slot) {
+    p.checkSlot(slot);
+    return param(p).map(g -> g.number(slot)).orElse(OptionalDouble.empty());
+  }
+
+  /** The word in one slot of a parameter ('multi' in 'order multi 5'). */
+  public Optional<String> word(Param p, String slot) {
+    p.checkSlot(slot);
+    return param(p).flatMap(g -> g.word(slot));
+  }
+
+  /** The declaration or catalog entry named in one slot of a parameter. */
+  public Optional<Symbol> ref(Param p, String slot) {
+    p.checkSlot(slot);
+    return param(p).flatMap(g -> g.slot(slot)).map(v -> ((Value.Ref) v).symbol());
   }
 }

@@ -64,6 +64,29 @@ public sealed interface Shape {
   /** One or more items separated by commas. */
   record ListOf(Shape item) implements Shape {}
 
+  /** The leaves of a shape in writing order; alternatives are laid end to end. */
+  static List<Shape> leaves(Shape shape) {
+    List<Shape> out = new java.util.ArrayList<>();
+    addLeaves(shape, out);
+    return out;
+  }
+
+  private static void addLeaves(Shape shape, List<Shape> out) {
+    if (shape instanceof Seq s) {
+      s.parts().forEach(p -> addLeaves(p, out));
+    } else if (shape instanceof Opt o) {
+      addLeaves(o.part(), out);
+    } else if (shape instanceof OneOf o) {
+      o.alternatives().forEach(a -> addLeaves(a, out));
+    } else if (shape instanceof Keyed k) {
+      k.clauses().forEach(c -> addLeaves(c, out));
+    } else if (shape instanceof ListOf l) {
+      addLeaves(l.item(), out);
+    } else {
+      out.add(shape);
+    }
+  }
+
   // Small factories keep the schema tables short and readable.
   static Quantity q(String slot, Dimension dim, Bounds bounds, String example) {
     return new Quantity(slot, List.of(dim), bounds, example);

@@ -229,26 +229,13 @@ final class TrainResolver {
 
   private Optional<Symbol> placeable(Arg.RefArg ref) {
     String name = ref.name().text();
-    Optional<Symbol> found = refs.lookup(ref);
-    if (found.isEmpty()) {
-      return Optional.empty();
-    }
-    Symbol s = found.get();
-    if (!s.category().placeable() || s.kind().isEmpty()) {
-      sink.report(
-          DiagnosticCode.NOT_PLACEABLE,
-          ref.name().range(),
-          "'"
-              + name
-              + "' is "
-              + s.kindPhrase()
-              + ", which cannot stand in a beam path"
-              + (s.category() == Category.MATERIAL
-                  ? "; to run a distance in it, write '10 mm in " + name + "'"
-                  : ""));
-      return Optional.empty();
-    }
-    return found;
+    return refs.placeable(
+        ref,
+        DiagnosticCode.NOT_PLACEABLE,
+        ", which cannot stand in a beam path"
+            + (scope.lookup(name).map(Symbol::category).orElse(null) == Category.MATERIAL
+                ? "; to run a distance in it, write '10 mm in " + name + "'"
+                : ""));
   }
 
   /**

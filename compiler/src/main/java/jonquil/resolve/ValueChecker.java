@@ -125,7 +125,8 @@ final class ValueChecker {
     return "a range";
   }
 
-  private static String slotOf(Shape leaf) {
+  /** The slot a leaf fills in its value group; null for words and commas that fill none. */
+  static String slotOf(Shape leaf) {
     if (leaf instanceof Shape.Quantity q) {
       return q.slot();
     } else if (leaf instanceof Shape.Ratio r) {
@@ -331,15 +332,7 @@ final class ValueChecker {
     if (unit.isPresent()) {
       Unit u = unit.get();
       if (!u.dimension().isDimensionless() || u.scale() != Scale.LINEAR) {
-        sink.report(
-            DiagnosticCode.WRONG_DIMENSION,
-            a.unit().get().range(),
-            "'"
-                + what
-                + "' is a fraction, written like '95 %'; '"
-                + a.unit().get().text()
-                + "' does not fit");
-        return Optional.empty();
+        return misfit(a, what, "a fraction, written like '95 %'");
       }
       si = u.toSi(si);
     } else if (!bounds.contains(si) && bounds.contains(si / 100)) {
@@ -366,6 +359,15 @@ final class ValueChecker {
         new Value.Num(si, Dimension.DIMENSIONLESS, OptionalDouble.empty(), a.range()));
   }
 
+  /** Reports a unit that does not fit the form of value {@code what} takes. */
+  private Optional<Value.Num> misfit(Arg.QuantityArg a, String what, String form) {
+    sink.report(
+        DiagnosticCode.WRONG_DIMENSION,
+        a.unit().get().range(),
+        "'" + what + "' is " + form + "; '" + a.unit().get().text() + "' does not fit");
+    return Optional.empty();
+  }
+
   /** A power ratio: plain (1000) or in dB (30 dB). */
   Optional<Value.Num> powerRatio(Arg.QuantityArg a, Bounds bounds, String what) {
     Optional<Unit> unit = unitOf(a);
@@ -376,15 +378,8 @@ final class ValueChecker {
     if (unit.isPresent()) {
       Unit u = unit.get();
       if (u.scale() != Scale.DECIBEL) {
-        sink.report(
-            DiagnosticCode.WRONG_DIMENSION,
-            a.unit().get().range(),
-            "'"
-                + what
-                + "' is a ratio, written as a plain number ('1000') or in decibels ('30 dB'); '"
-                + a.unit().get().text()
-                + "' does not fit");
-        return Optional.empty();
+        return misfit(
+            a, what, "a ratio, written as a plain number ('1000') or in decibels ('30 dB')");
       }
       si = u.toSi(si);
     }
