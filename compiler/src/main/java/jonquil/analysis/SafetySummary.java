@@ -10,6 +10,7 @@ import jonquil.resolve.Category;
 import jonquil.resolve.ElementKind;
 import jonquil.resolve.ResolvedElement;
 import jonquil.resolve.ResolvedModel;
+import jonquil.safety.HazardClass;
 import jonquil.safety.Outcome;
 
 /**
@@ -22,7 +23,7 @@ public final class SafetySummary {
   public record SourceSafety(
       String source,
       double wavelength,
-      Outcome<jonquil.safety.HazardClass> hazardClass,
+      Outcome<HazardClass> hazardClass,
       Outcome<jonquil.safety.Exposure> mpe,
       Outcome<jonquil.safety.Exposure> skinMpe,
       Outcome<jonquil.safety.Exposure> ansiMpe,

@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.Set;
 import jonquil.diag.DiagnosticCode;
+import jonquil.safety.HazardClass;
 import jonquil.source.TextRange;
 import jonquil.syntax.Arg;
 import jonquil.syntax.Requirement;
@@ -392,7 +393,7 @@ final class RequirementResolver {
       }
       case HAZARD_CLASS -> {
         String label = q.number().text() + q.unit().map(u -> u.text()).orElse("");
-        Optional<HazardClass> c = HazardClass.byLabel(label);
+        Optional<HazardClass> c = HazardClass.parse(label);
         if (c.isEmpty()) {
           sink.report(
               DiagnosticCode.UNKNOWN_HAZARD_CLASS,
@@ -403,7 +404,7 @@ final class RequirementResolver {
                   + String.join(", ", HazardClass.labels()));
           return Optional.empty();
         }
-        return Optional.of(new Bound(c.get().ordinal(), false));
+        return Optional.of(new Bound(c.get().rank(), false));
       }
       default -> {
         return Optional.empty();
