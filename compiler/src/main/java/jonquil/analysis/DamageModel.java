@@ -23,7 +23,7 @@ final class DamageModel {
     if (part.all("damage").isEmpty() || incident.exposure().isEmpty() || incident.power() <= 0) {
       return OptionalDouble.empty();
     }
-    Exposure x = incident.exposure().get();
+    BeamExposure x = incident.exposure().get();
     double worst = Double.POSITIVE_INFINITY;
     for (Value.Group threshold : part.all("damage")) {
       if (!(threshold.slot("threshold").orElse(null) instanceof Value.Num t)) {

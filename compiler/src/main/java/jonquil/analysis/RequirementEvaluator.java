@@ -210,7 +210,7 @@ final class RequirementEvaluator {
     }
     Verdict worst = null;
     for (PortValue p : places) {
-      Optional<Exposure> e = p.exposure();
+      Optional<BeamExposure> e = p.exposure();
       if (e.isEmpty()) {
         return Verdict.notEvaluated(
             "the beam size is unknown: give the source a 'beam' line (waist or divergence)");
@@ -272,7 +272,7 @@ final class RequirementEvaluator {
     return worst;
   }
 
-  private static OptionalDouble quantity(Measure m, Exposure e) {
+  private static OptionalDouble quantity(Measure m, BeamExposure e) {
     switch (m) {
       case IRRADIANCE:
         return OptionalDouble.of(e.averageIrradiance());

@@ -1,6 +1,7 @@
 package jonquil.safety;
 
 import java.util.function.DoubleBinaryOperator;
+import jonquil.optics.beam.Clipping;
 
 /**
  * Why it exists: an estimate of the laser product class under IEC 60825-1:2014 (Ed. 3) for a
@@ -67,13 +68,11 @@ public final class Classifier {
     }
     double lambda = e.wavelength();
     double f1 =
-        GaussianBeam.fractionThrough(
-            COND1_APERTURE,
-            GaussianBeam.diameterAt(beamDiameterAtAperture, divergence, COND1_DISTANCE));
+        Clipping.transmittedFraction(
+            radiusAt(beamDiameterAtAperture, divergence, COND1_DISTANCE), COND1_APERTURE);
     double f3 =
-        GaussianBeam.fractionThrough(
-            COND3_APERTURE,
-            GaussianBeam.diameterAt(beamDiameterAtAperture, divergence, COND3_DISTANCE));
+        Clipping.transmittedFraction(
+            radiusAt(beamDiameterAtAperture, divergence, COND3_DISTANCE), COND3_APERTURE);
     boolean visible = Ed3.visible(lambda);
 
     DoubleBinaryOperator class1 = Ed3::class1Ael;
@@ -174,5 +173,14 @@ public final class Classifier {
 
   private static Outcome<Classification> result(HazardClass c, double f1, double f3, String basis) {
     return Outcome.of(new Classification(c, f1, f3, basis), TABLES);
+  }
+
+  /**
+   * The 1/e² radius at distance z from the exit of the beam the classification assumes: a round
+   * Gaussian beam with its waist at the exit, diameter d(z) = √(d₀² + (φ z)²) for the full-angle
+   * 1/e² divergence φ (far-field approximation).
+   */
+  private static double radiusAt(double exitDiameter, double divergence, double z) {
+    return Math.hypot(exitDiameter, divergence * z) / 2;
   }
 }
