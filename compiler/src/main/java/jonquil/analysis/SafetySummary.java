@@ -24,9 +24,9 @@ public final class SafetySummary {
       String source,
       double wavelength,
       Outcome<HazardClass> hazardClass,
-      Outcome<jonquil.safety.Exposure> mpe,
-      Outcome<jonquil.safety.Exposure> skinMpe,
-      Outcome<jonquil.safety.Exposure> ansiMpe,
+      Outcome<jonquil.safety.MaximumPermissibleExposure> mpe,
+      Outcome<jonquil.safety.MaximumPermissibleExposure> skinMpe,
+      Outcome<jonquil.safety.MaximumPermissibleExposure> ansiMpe,
       Outcome<Double> nohd,
       Outcome<jonquil.safety.OpticalDensity> eyewear,
       double exposureTime) {}

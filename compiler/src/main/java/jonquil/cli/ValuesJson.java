@@ -120,7 +120,7 @@ final class ValuesJson {
     return j;
   }
 
-  private static JsonElement mpe(jonquil.safety.Exposure m) {
+  private static JsonElement mpe(jonquil.safety.MaximumPermissibleExposure m) {
     JsonObject o = new JsonObject();
     o.add("irradiance_W_m2", number(m.irradiance()));
     o.add("radiant_exposure_J_m2", number(m.radiantExposure()));

@@ -12,7 +12,7 @@ import jonquil.optics.beam.Clipping;
  * aperture at 2000 mm; condition 3 (naked eye) = 7 mm aperture at 100 mm, both from the exit, which
  * is taken as the reference point and the beam waist. The accessible emission is the power (energy)
  * through the aperture: P · (1 − exp(−D²/(2w²))), w the 1/e² radius at that distance ({@link
- * GaussianBeam}).
+ * jonquil.optics.beam.Clipping}).
  *
  * <p>Decision: Class 1 (2) when both conditions are within the Class 1 (2) AEL; 1M (2M) when only
  * condition 3 is, and condition 1 stays within the Class 3B AEL (cw only); 3R, 3B, 4 decided on
@@ -55,11 +55,11 @@ public final class Classifier {
     if (!(beamDiameterAtAperture > 0) || !(divergence >= 0) || !Double.isFinite(divergence)) {
       throw new IllegalArgumentException("beam diameter must be > 0 m and divergence >= 0 rad");
     }
-    String refusal = OcularMpe.coverage(e.wavelength(), TABLES);
+    String refusal = OcularMpe.coverage(e.wavelength());
     if (refusal != null) {
       return Outcome.notEvaluated(refusal, TABLES);
     }
-    if (e.pulsed() && e.pulseDuration() < Ed3.T_MIN_EYE) {
+    if (e.pulsed() && e.pulseDuration() < TableScope.T_MIN_EYE) {
       return Outcome.notEvaluated("pulses shorter than 10 ps: not implemented", TABLES);
     }
     if (e.pulsed() && e.pulseDuration() * e.repetitionRate() >= 1) {
@@ -146,7 +146,7 @@ public final class Classifier {
     if (q * rate * timeBase > ael.applyAsDouble(lambda, timeBase)) {
       return false; // rule 2
     }
-    double ti = Ed3.ti(lambda);
+    double ti = CorrectionFactors.pulseGroupTime(lambda);
     if (1 / rate < ti) {
       return q * rate * ti <= ael.applyAsDouble(lambda, ti); // rule 3, pulses within T_i added
     }

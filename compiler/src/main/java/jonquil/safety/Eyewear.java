@@ -32,7 +32,7 @@ public final class Eyewear {
     if (!(beamDiameter > 0)) {
       throw new IllegalArgumentException("beam diameter must be > 0 m");
     }
-    Outcome<Exposure> mpe = OcularMpe.at(e, exposureDuration);
+    Outcome<MaximumPermissibleExposure> mpe = OcularMpe.at(e, exposureDuration);
     String standard = FORMULA + "; MPE: " + mpe.standard();
     if (!mpe.evaluated()) {
       return Outcome.notEvaluated(mpe.reason(), standard);
