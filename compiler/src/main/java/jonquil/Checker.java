@@ -22,6 +22,7 @@ import jonquil.resolve.Resolver;
 import jonquil.source.SourceFile;
 import jonquil.source.TextRange;
 import jonquil.syntax.ParseResult;
+import jonquil.syntax.SpecFile;
 
 /**
  * The façade: checks spec files in a workspace and returns one immutable {@link Result}. Each file
@@ -125,9 +126,15 @@ public final class Checker {
       }
     }
     Map<Path, SourceFile> sources = new LinkedHashMap<>();
-    parsed.forEach((p, r) -> sources.put(p, r.source()));
+    Map<Path, SpecFile> trees = new LinkedHashMap<>();
+    parsed.forEach(
+        (p, r) -> {
+          sources.put(p, r.source());
+          trees.put(p, r.ast());
+        });
     dataSources.forEach(sources::putIfAbsent);
-    return Optional.of(new Result(sources, capped(diagnostics), requirements, models, solutions));
+    return Optional.of(
+        new Result(sources, trees, capped(diagnostics), requirements, models, solutions));
   }
 
   private static List<Diagnostic> capped(Set<Diagnostic> all) {

@@ -10,32 +10,36 @@ import jonquil.diag.Diagnostic;
 import jonquil.diag.Severity;
 import jonquil.resolve.ResolvedModel;
 import jonquil.source.SourceFile;
+import jonquil.syntax.SpecFile;
 
 /**
- * Everything one check produced: the texts it read, its diagnostics (sorted), and the verdict on
- * every requirement, plus the resolved model and the solved trains of each checked root. CLI
- * formats, reports and the language server all read this one value, so they cannot disagree.
+ * Everything one check produced: the texts it read, the syntax tree of each spec file among them,
+ * its diagnostics (sorted), and the verdict on every requirement, plus the resolved model (with its
+ * name tables) and the solved trains of each checked root. CLI formats, reports and the language
+ * server all read this one value, so they cannot disagree, and editor answers never parse again.
  */
 public record Result(
     Map<Path, SourceFile> files,
+    Map<Path, SpecFile> trees,
     List<Diagnostic> diagnostics,
     List<RequirementOutcome> requirements,
     Map<Path, ResolvedModel> models,
     Map<Path, TrainSolution> solutions) {
   public Result {
     files = Map.copyOf(files);
+    trees = Map.copyOf(trees);
     diagnostics = diagnostics.stream().sorted(Diagnostic.ORDER).toList();
     requirements = List.copyOf(requirements);
     models = Map.copyOf(models);
     solutions = Map.copyOf(solutions);
   }
 
-  /** A result without resolved models, e.g. when nothing could be read. */
+  /** A result without trees or resolved models, e.g. when nothing could be read. */
   public Result(
       Map<Path, SourceFile> files,
       List<Diagnostic> diagnostics,
       List<RequirementOutcome> requirements) {
-    this(files, diagnostics, requirements, Map.of(), Map.of());
+    this(files, Map.of(), diagnostics, requirements, Map.of(), Map.of());
   }
 
   public long count(Severity severity) {

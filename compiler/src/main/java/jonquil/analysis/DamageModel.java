@@ -26,7 +26,7 @@ final class DamageModel {
         || incident.power() <= 0) {
       return OptionalDouble.empty();
     }
-    Exposure x = incident.exposure().get();
+    BeamExposure x = incident.exposure().get();
     double worst = Double.POSITIVE_INFINITY;
     for (Value.Group threshold : part.all(Param.DAMAGE)) {
       if (!(threshold.slot("threshold").orElse(null) instanceof Value.Num t)) {

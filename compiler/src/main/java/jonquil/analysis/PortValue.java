@@ -26,8 +26,8 @@ public record PortValue(
   }
 
   /** The exposure this light gives, when its beam size is known. */
-  public Optional<Exposure> exposure() {
-    return mode.map(m -> Exposure.of(power(), m.radius(), pulses, index));
+  public Optional<BeamExposure> exposure() {
+    return mode.map(m -> BeamExposure.of(power(), m.radius(), pulses, index));
   }
 
   /** "element.port", or the element alone for its only port. */

@@ -160,10 +160,10 @@ final class RequirementEvaluator {
       case POLARIZATION, HANDEDNESS -> at.isEmpty() ? unreached(r) : state(c, at.get().light());
       case IRRADIANCE -> exposure(r, c, s, e -> OptionalDouble.of(e.averageIrradiance()), "W/m2");
       case PEAK_IRRADIANCE -> exposure(r, c, s, RequirementEvaluator::peakIrradiance, "W/m2");
-      case FLUENCE -> exposure(r, c, s, Exposure::peakFluence, "J/m2");
+      case FLUENCE -> exposure(r, c, s, BeamExposure::peakFluence, "J/m2");
       case PEAK_FIELD -> exposure(r, c, s, e -> OptionalDouble.of(e.peakField()), "V/m");
-      case PEAK_POWER -> exposure(r, c, s, Exposure::peakPower, "W");
-      case PULSE_ENERGY -> exposure(r, c, s, Exposure::pulseEnergy, "J");
+      case PEAK_POWER -> exposure(r, c, s, BeamExposure::peakPower, "W");
+      case PULSE_ENERGY -> exposure(r, c, s, BeamExposure::pulseEnergy, "J");
       case BEAM_RADIUS -> exposure(r, c, s, e -> OptionalDouble.of(e.beamRadius()), "m");
       case DAMAGE_MARGIN -> damage(r, c, s, model);
       case HAZARD_CLASS, NOHD, EXPOSURE, EYEWEAR_OD -> SafetyVerdicts.evaluate(r, c, s, model);
@@ -174,10 +174,10 @@ final class RequirementEvaluator {
    * The Gaussian peak irradiance; for a pulsed beam, of the peak power (the pulse's peak, not the
    * average's).
    */
-  private static OptionalDouble peakIrradiance(Exposure e) {
+  private static OptionalDouble peakIrradiance(BeamExposure e) {
     return OptionalDouble.of(
         e.peakPower().isPresent()
-            ? 2 * e.peakPower().getAsDouble() / (Math.PI * e.beamRadius() * e.beamRadius())
+            ? jonquil.optics.beam.Irradiance.peak(e.peakPower().getAsDouble(), e.beamRadius())
             : e.peakIrradiance());
   }
 
@@ -189,7 +189,7 @@ final class RequirementEvaluator {
       ResolvedRequirement r,
       Criterion c,
       TrainSolution s,
-      Function<Exposure, OptionalDouble> quantity,
+      Function<BeamExposure, OptionalDouble> quantity,
       String unit) {
     java.util.List<PortValue> places = new java.util.ArrayList<>();
     if (r.everywhere()) {
@@ -206,7 +206,7 @@ final class RequirementEvaluator {
     }
     Verdict worst = null;
     for (PortValue p : places) {
-      Optional<Exposure> e = p.exposure();
+      Optional<BeamExposure> e = p.exposure();
       if (e.isEmpty()) {
         return Verdict.notEvaluated(
             "the beam size is unknown: give the source a 'beam' line (waist or divergence)");

@@ -3,6 +3,7 @@ package jonquil.analysis;
 import java.util.Optional;
 import jonquil.optics.beam.Clipping;
 import jonquil.resolve.Param;
+import jonquil.optics.beam.Irradiance;
 import jonquil.resolve.ResolvedElement;
 import jonquil.safety.Classifier;
 import jonquil.safety.Emission;
@@ -86,13 +87,14 @@ final class SafetyModel {
     if (!mpe.evaluated()) {
       return Outcome.notEvaluated(mpe.reason(), mpe.standard());
     }
+    double radius = at.mode().get().radius();
     double aperture = OcularMpe.LIMITING_APERTURE;
-    double area = Math.PI * aperture * aperture / 4;
-    double through = Clipping.transmittedFraction(at.mode().get().radius(), aperture);
     double fraction =
         e.pulsed()
-            ? e.pulseEnergy() * through / area / mpe.get().radiantExposure()
-            : e.averagePower() * through / area / mpe.get().irradiance();
+            ? Irradiance.meanOverAperture(e.pulseEnergy(), radius, aperture)
+                / mpe.get().radiantExposure()
+            : Irradiance.meanOverAperture(e.averagePower(), radius, aperture)
+                / mpe.get().irradiance();
     return Outcome.of(fraction, mpe.standard());
   }
 

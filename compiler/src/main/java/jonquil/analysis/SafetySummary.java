@@ -10,6 +10,7 @@ import jonquil.resolve.Category;
 import jonquil.resolve.ElementKind;
 import jonquil.resolve.ResolvedElement;
 import jonquil.resolve.ResolvedModel;
+import jonquil.safety.HazardClass;
 import jonquil.safety.Outcome;
 
 /**
@@ -22,10 +23,10 @@ public final class SafetySummary {
   public record SourceSafety(
       String source,
       double wavelength,
-      Outcome<jonquil.safety.HazardClass> hazardClass,
-      Outcome<jonquil.safety.Exposure> mpe,
-      Outcome<jonquil.safety.Exposure> skinMpe,
-      Outcome<jonquil.safety.Exposure> ansiMpe,
+      Outcome<HazardClass> hazardClass,
+      Outcome<jonquil.safety.MaximumPermissibleExposure> mpe,
+      Outcome<jonquil.safety.MaximumPermissibleExposure> skinMpe,
+      Outcome<jonquil.safety.MaximumPermissibleExposure> ansiMpe,
       Outcome<Double> nohd,
       Outcome<jonquil.safety.OpticalDensity> eyewear,
       double exposureTime) {}

@@ -8,6 +8,7 @@ import jonquil.resolve.ResolvedElement;
 import jonquil.resolve.ResolvedModel;
 import jonquil.resolve.ResolvedRequirement;
 import jonquil.resolve.ResolvedRequirement.Criterion;
+import jonquil.safety.HazardClass;
 import jonquil.safety.Outcome;
 
 /**
@@ -49,13 +50,13 @@ final class SafetyVerdicts {
     switch (m) {
       case HAZARD_CLASS:
         {
-          Outcome<jonquil.safety.HazardClass> o = SafetyModel.hazardClass(element.get(), at);
+          Outcome<HazardClass> o = SafetyModel.hazardClass(element.get(), at);
           if (!o.evaluated()) {
             return RequirementEvaluator.Verdict.notEvaluated(
                 o.reason() + " (" + o.standard() + ")");
           }
           RequirementEvaluator.Verdict v =
-              RequirementEvaluator.compare(c, specClass(o.get()).ordinal(), "class", "");
+              RequirementEvaluator.compare(c, o.get().rank(), "class", "");
           return withNote(v, brief(o.standard()) + "; " + o.caution());
         }
       case NOHD:
@@ -96,16 +97,6 @@ final class SafetyVerdicts {
       RequirementEvaluator.Verdict v, String note) {
     return new RequirementEvaluator.Verdict(
         v.evaluated(), v.pass(), v.value(), v.bound(), v.margin(), v.unit(), note);
-  }
-
-  /**
-   * The spec's hazard class for the safety package's one, matched by label ("3R"), so the two enums
-   * (one per layer; safety knows no specs) can never drift apart silently.
-   */
-  static jonquil.resolve.HazardClass specClass(jonquil.safety.HazardClass c) {
-    String label = c.name().replace("CLASS_", "");
-    return jonquil.resolve.HazardClass.byLabel(label)
-        .orElseThrow(() -> new IllegalStateException("no spec hazard class for " + label));
   }
 
   /**

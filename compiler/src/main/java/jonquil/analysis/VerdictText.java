@@ -1,5 +1,6 @@
 package jonquil.analysis;
 
+import jonquil.safety.HazardClass;
 import jonquil.units.Dimension;
 import jonquil.units.QuantityFormat;
 import jonquil.units.UnitParse;
@@ -18,9 +19,7 @@ public final class VerdictText {
     switch (u) {
       case "class":
         {
-          int i = (int) Math.round(value);
-          var classes = jonquil.resolve.HazardClass.values();
-          return i >= 0 && i < classes.length ? classes[i].label() : String.valueOf(value);
+          return HazardClass.ofRank(value).map(HazardClass::label).orElse(String.valueOf(value));
         }
       case "%":
         return QuantityFormat.format(100 * value, Dimension.DIMENSIONLESS) + " %";

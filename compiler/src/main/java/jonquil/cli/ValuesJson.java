@@ -101,9 +101,7 @@ final class ValuesJson {
     j.addProperty("source", s.source());
     j.add("wavelength_m", number(s.wavelength()));
     j.add("exposure_time_s", number(s.exposureTime()));
-    j.add(
-        "hazard_class",
-        outcome(s.hazardClass(), c -> new JsonPrimitive(c.name().replace("CLASS_", ""))));
+    j.add("hazard_class", outcome(s.hazardClass(), c -> new JsonPrimitive(c.label())));
     j.add("mpe", outcome(s.mpe(), ValuesJson::mpe));
     j.add("mpe_ansi_z136_1", outcome(s.ansiMpe(), ValuesJson::mpe));
     j.add("skin_mpe", outcome(s.skinMpe(), ValuesJson::mpe));
@@ -122,7 +120,7 @@ final class ValuesJson {
     return j;
   }
 
-  private static JsonElement mpe(jonquil.safety.Exposure m) {
+  private static JsonElement mpe(jonquil.safety.MaximumPermissibleExposure m) {
     JsonObject o = new JsonObject();
     o.add("irradiance_W_m2", number(m.irradiance()));
     o.add("radiant_exposure_J_m2", number(m.radiantExposure()));

@@ -4,13 +4,13 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import java.util.Optional;
 import jonquil.Result;
 import jonquil.source.SourceFile;
 import jonquil.source.TextRange;
 import jonquil.syntax.Declaration;
 import jonquil.syntax.RequireDecl;
 import jonquil.syntax.SpecFile;
-import jonquil.syntax.SpecParser;
 import jonquil.syntax.TrainDecl;
 
 /**
@@ -22,11 +22,12 @@ final class Folding {
 
   static List<FoldingRangeInfo> of(Result r, Path file) {
     SourceFile source = r.files().get(file);
-    if (source == null) {
+    Optional<SpecFile> tree = OwningModels.tree(r, file);
+    if (source == null || tree.isEmpty()) {
       return List.of();
     }
     String text = source.text();
-    SpecFile f = SpecParser.parse(source).ast();
+    SpecFile f = tree.get();
     List<FoldingRangeInfo> out = new ArrayList<>();
     for (Declaration d : f.declarations()) {
       if (!d.properties().isEmpty()

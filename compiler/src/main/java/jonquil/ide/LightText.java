@@ -4,7 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
-import jonquil.analysis.Exposure;
+import jonquil.analysis.BeamExposure;
 import jonquil.analysis.PortValue;
 import jonquil.analysis.SafetySummary;
 import jonquil.analysis.TrainSolution;
@@ -53,7 +53,7 @@ final class LightText {
     md.append(
         "| | power | beam radius | irradiance avg / peak | peak field |\n|---|---|---|---|---|\n");
     for (Row row : rows) {
-      Optional<Exposure> e = row.value().exposure();
+      Optional<BeamExposure> e = row.value().exposure();
       md.append("| ")
           .append(row.label())
           .append(" | ")
@@ -79,7 +79,7 @@ final class LightText {
     for (Row row : rows) {
       row.value()
           .exposure()
-          .filter(Exposure::pulsed)
+          .filter(BeamExposure::pulsed)
           .ifPresent(
               x ->
                   md.append("\nPulses at ")

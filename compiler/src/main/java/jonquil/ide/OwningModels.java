@@ -7,9 +7,7 @@ import java.util.Optional;
 import jonquil.Result;
 import jonquil.analysis.TrainSolution;
 import jonquil.resolve.ResolvedModel;
-import jonquil.source.SourceFile;
 import jonquil.syntax.SpecFile;
-import jonquil.syntax.SpecParser;
 
 /**
  * Finds the model, solution and syntax tree that answer for a file, since a part library can belong
@@ -41,13 +39,9 @@ final class OwningModels {
     return Optional.ofNullable(r.solutions().get(m.root()));
   }
 
-  /** The syntax tree of a spec file; parsing again is cheap and keeps Result free of trees. */
+  /** The syntax tree the check built for a spec file; none for a data file or an unread one. */
   static Optional<SpecFile> tree(Result r, Path file) {
-    SourceFile source = r.files().get(file);
-    if (source == null || !isSpec(r, file)) {
-      return Optional.empty();
-    }
-    return Optional.of(SpecParser.parse(source).ast());
+    return Optional.ofNullable(r.trees().get(file));
   }
 
   /** Spec files (not the n,k data files that a result also carries). */

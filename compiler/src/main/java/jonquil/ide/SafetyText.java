@@ -32,7 +32,7 @@ final class SafetyText {
     } else {
       SafetySummary.SourceSafety s = found.get();
       md.append("- hazard class: ")
-          .append(figure(s.hazardClass(), c -> c.name().substring("CLASS_".length())))
+          .append(figure(s.hazardClass(), c -> c.label()))
           .append("\n- ocular MPE: ")
           .append(
               figure(

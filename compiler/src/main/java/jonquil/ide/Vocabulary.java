@@ -11,9 +11,8 @@ import jonquil.resolve.CatalogSpellings;
 import jonquil.resolve.Category;
 import jonquil.resolve.ElementKind;
 import jonquil.resolve.Symbol;
-import jonquil.source.SourceFile;
 import jonquil.syntax.Declaration;
-import jonquil.syntax.SpecParser;
+import jonquil.syntax.SpecFile;
 
 /**
  * The names a file may use, from the last check's scope (which includes used files), or from the
@@ -39,9 +38,9 @@ final class Vocabulary {
                     .filter(s -> !s.isCatalog())
                     .sorted(java.util.Comparator.comparing(Symbol::name))
                     .forEach(s -> out.put(s.name(), new Named(s.name(), s.kind(), s.category()))));
-    SourceFile source = r.files().get(file);
-    if (out.isEmpty() && source != null) {
-      for (Declaration d : SpecParser.parse(source).ast().declarations()) {
+    Optional<SpecFile> tree = OwningModels.tree(r, file);
+    if (out.isEmpty() && tree.isPresent()) {
+      for (Declaration d : tree.get().declarations()) {
         Optional<ElementKind> kind = ElementKind.byWord(d.kind().text());
         out.putIfAbsent(
             d.name().text(),

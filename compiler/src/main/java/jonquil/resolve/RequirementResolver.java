@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.Set;
 import jonquil.diag.DiagnosticCode;
+import jonquil.safety.HazardClass;
 import jonquil.source.TextRange;
 import jonquil.syntax.Arg;
 import jonquil.syntax.Requirement;
@@ -367,7 +368,7 @@ final class RequirementResolver {
 
   private Optional<Bound> hazardClass(Arg.QuantityArg q) {
     String label = q.number().text() + q.unit().map(u -> u.text()).orElse("");
-    Optional<HazardClass> c = HazardClass.byLabel(label);
+    Optional<HazardClass> c = HazardClass.parse(label);
     if (c.isEmpty()) {
       sink.report(
           DiagnosticCode.UNKNOWN_HAZARD_CLASS,
@@ -378,7 +379,7 @@ final class RequirementResolver {
               + String.join(", ", HazardClass.labels()));
       return Optional.empty();
     }
-    return Optional.of(new Bound(c.get().ordinal(), false));
+    return Optional.of(new Bound(c.get().rank(), false));
   }
 
   /** A physical quantity of the bound form's dimension, its example value in messages. */

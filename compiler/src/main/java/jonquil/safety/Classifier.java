@@ -1,6 +1,7 @@
 package jonquil.safety;
 
 import java.util.function.DoubleBinaryOperator;
+import jonquil.optics.beam.Clipping;
 
 /**
  * Why it exists: an estimate of the laser product class under IEC 60825-1:2014 (Ed. 3) for a
@@ -11,7 +12,7 @@ import java.util.function.DoubleBinaryOperator;
  * aperture at 2000 mm; condition 3 (naked eye) = 7 mm aperture at 100 mm, both from the exit, which
  * is taken as the reference point and the beam waist. The accessible emission is the power (energy)
  * through the aperture: P · (1 − exp(−D²/(2w²))), w the 1/e² radius at that distance ({@link
- * GaussianBeam}).
+ * jonquil.optics.beam.Clipping}).
  *
  * <p>Decision: Class 1 (2) when both conditions are within the Class 1 (2) AEL; 1M (2M) when only
  * condition 3 is, and condition 1 stays within the Class 3B AEL (cw only); 3R, 3B, 4 decided on
@@ -54,11 +55,11 @@ public final class Classifier {
     if (!(beamDiameterAtAperture > 0) || !(divergence >= 0) || !Double.isFinite(divergence)) {
       throw new IllegalArgumentException("beam diameter must be > 0 m and divergence >= 0 rad");
     }
-    String refusal = OcularMpe.coverage(e.wavelength(), TABLES);
+    String refusal = OcularMpe.coverage(e.wavelength());
     if (refusal != null) {
       return Outcome.notEvaluated(refusal, TABLES);
     }
-    if (e.pulsed() && e.pulseDuration() < Ed3.T_MIN_EYE) {
+    if (e.pulsed() && e.pulseDuration() < TableScope.T_MIN_EYE) {
       return Outcome.notEvaluated("pulses shorter than 10 ps: not implemented", TABLES);
     }
     if (e.pulsed() && e.pulseDuration() * e.repetitionRate() >= 1) {
@@ -67,13 +68,11 @@ public final class Classifier {
     }
     double lambda = e.wavelength();
     double f1 =
-        GaussianBeam.fractionThrough(
-            COND1_APERTURE,
-            GaussianBeam.diameterAt(beamDiameterAtAperture, divergence, COND1_DISTANCE));
+        Clipping.transmittedFraction(
+            radiusAt(beamDiameterAtAperture, divergence, COND1_DISTANCE), COND1_APERTURE);
     double f3 =
-        GaussianBeam.fractionThrough(
-            COND3_APERTURE,
-            GaussianBeam.diameterAt(beamDiameterAtAperture, divergence, COND3_DISTANCE));
+        Clipping.transmittedFraction(
+            radiusAt(beamDiameterAtAperture, divergence, COND3_DISTANCE), COND3_APERTURE);
     boolean visible = Ed3.visible(lambda);
 
     DoubleBinaryOperator class1 = Ed3::class1Ael;
@@ -147,7 +146,7 @@ public final class Classifier {
     if (q * rate * timeBase > ael.applyAsDouble(lambda, timeBase)) {
       return false; // rule 2
     }
-    double ti = Ed3.ti(lambda);
+    double ti = CorrectionFactors.pulseGroupTime(lambda);
     if (1 / rate < ti) {
       return q * rate * ti <= ael.applyAsDouble(lambda, ti); // rule 3, pulses within T_i added
     }
@@ -174,5 +173,14 @@ public final class Classifier {
 
   private static Outcome<Classification> result(HazardClass c, double f1, double f3, String basis) {
     return Outcome.of(new Classification(c, f1, f3, basis), TABLES);
+  }
+
+  /**
+   * The 1/e² radius at distance z from the exit of the beam the classification assumes: a round
+   * Gaussian beam with its waist at the exit, diameter d(z) = √(d₀² + (φ z)²) for the full-angle
+   * 1/e² divergence φ (far-field approximation).
+   */
+  private static double radiusAt(double exitDiameter, double divergence, double z) {
+    return Math.hypot(exitDiameter, divergence * z) / 2;
   }
 }

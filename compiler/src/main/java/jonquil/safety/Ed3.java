@@ -1,5 +1,10 @@
 package jonquil.safety;
 
+import static jonquil.safety.CorrectionFactors.cA;
+import static jonquil.safety.CorrectionFactors.cB;
+import static jonquil.safety.CorrectionFactors.cC;
+import static jonquil.safety.CorrectionFactors.nm;
+
 /**
  * Why it exists: the one place that holds the formulas and constants taken from IEC 60825-1:2014
  * (Edition 3), so that every number can be audited against its source in a single file.
@@ -31,86 +36,23 @@ final class Ed3 {
   static final String FACTORS_TABLE =
       EDITION + ", Table 9 (correction factors; ICNIRP C_A/C_B/C_C)";
 
-  /** Lowest wavelength evaluated, m (retinal hazard region starts at 400 nm). */
-  static final double LAMBDA_MIN = 400e-9;
-
   /**
    * Upper end of the evaluated ocular range, m. From 1250 nm to 1400 nm Ed. 3 adds a corneal/lens
    * dual limit to the retinal one (confirmed: "Comparison of corneal injury thresholds with laser
    * safety limits", a paper comparing ANSI Z136.1-2014, ICNIRP 2013 and IEC 60825-1:2014 for
-   * 1250–1400 nm); that dual limit is not implemented, so 1250–1400 nm is "not evaluated".
+   * 1250–1400 nm); that dual limit is not implemented, so 1250–1400 nm is "not evaluated". The rest
+   * of the scope both standards share is in {@link TableScope}.
    */
   static final double LAMBDA_MAX_EYE = 1250e-9;
 
-  /** Upper end of the evaluated skin range, m (skin row 400–1400 nm). */
-  static final double LAMBDA_MAX_SKIN = 1400e-9;
-
-  /** Longest exposure the tables cover, s. */
-  static final double T_MAX = 3e4;
-
   /**
-   * Shortest pulse evaluated for the eye, s. Ed. 3 has a row below 10 ps, from memory; not
-   * implemented, so shorter pulses are "not evaluated".
-   */
-  static final double T_MIN_EYE = 1e-11;
-
-  /**
-   * Shortest pulse evaluated for the skin, s (Table A.5 row 1 ns–100 ns; below: not implemented).
-   */
-  static final double T_MIN_SKIN = 1e-9;
-
-  /**
-   * Limiting aperture for the eye, 400–1400 nm: 7 mm (Table A.3 of Ed. 3, from memory; 7 mm pupil
-   * confirmed by the sources above).
-   */
-  static final double APERTURE_EYE = 7e-3;
-
-  /** Limiting aperture for the skin: 3.5 mm (Table A.3 of Ed. 3, from memory). */
-  static final double APERTURE_SKIN = 3.5e-3;
-
-  static double nm(double lambda) {
-    return lambda / 1e-9;
-  }
-
-  /**
-   * C3 (ICNIRP C_B): 1 for 400–450 nm, 10^(0.02(λ−450)) for 450–700 nm. Confirmed (ICNIRP/§11-5).
-   */
-  static double c3(double lambda) {
-    double n = nm(lambda);
-    return n < 450 ? 1.0 : Math.pow(10, 0.02 * (n - 450));
-  }
-
-  /**
-   * C4 (ICNIRP C_A): 1 below 700 nm, 10^(0.002(λ−700)) for 700–1050 nm, 5 for 1050–1400 nm.
-   * Confirmed.
-   */
-  static double c4(double lambda) {
-    double n = nm(lambda);
-    if (n < 700) {
-      return 1.0;
-    }
-    return n < 1050 ? Math.pow(10, 0.002 * (n - 700)) : 5.0;
-  }
-
-  /**
-   * C7 (ICNIRP C_C): 1 for 700–1150 nm, 10^(0.018(λ−1150)) for 1150–1200 nm (confirmed,
-   * ICNIRP/§11-5); 8 for 1200–1250 nm. Ed. 3 gives 8 + 10^(0.04(λ−1250)) there (from memory), which
-   * is ≥ 8, so the confirmed ICNIRP value 8 used here is the more restrictive.
+   * C7 (ICNIRP C_C): {@link CorrectionFactors#cC} below 1200 nm (confirmed, ICNIRP/§11-5); 8 for
+   * 1200–1250 nm. Ed. 3 gives 8 + 10^(0.04(λ−1250)) there (from memory), which is ≥ 8, so the
+   * confirmed ICNIRP value 8 used here is the more restrictive. C3 and C4 are ICNIRP's C_B and C_A
+   * ({@link CorrectionFactors}); T_i is {@link CorrectionFactors#pulseGroupTime} (clause 4.3 f).
    */
   static double c7(double lambda) {
-    double n = nm(lambda);
-    if (n < 1150) {
-      return 1.0;
-    }
-    return n < 1200 ? Math.pow(10, 0.018 * (n - 1150)) : 8.0;
-  }
-
-  /**
-   * T_i, the thermal confinement time inside which pulses are added (Ed. 3, clause 4.3 f): 5 µs for
-   * 400–1050 nm, 13 µs for 1050–1400 nm. From memory (Ed. 2 had 18 µs and 50 µs).
-   */
-  static double ti(double lambda) {
-    return nm(lambda) < 1050 ? 5e-6 : 1.3e-5;
+    return nm(lambda) < 1200 ? cC(lambda) : 8.0;
   }
 
   /**
@@ -129,25 +71,13 @@ final class Ed3 {
    * </ul>
    */
   static double retinalThermal(double lambda, double t) {
-    double n = nm(lambda);
-    if (n < 1050) {
-      double c4 = c4(lambda);
-      if (t < 5e-6) {
-        return 2e-3 * c4;
-      }
-      if (t < 10) {
-        return 18 * Math.pow(t, 0.75) * c4;
-      }
-      return 10 * c4 * c7(lambda) * t;
-    }
+    double c4 = cA(lambda);
     double c7 = c7(lambda);
-    if (t < 1.3e-5) {
-      return 2e-2 * c7;
-    }
-    if (t < 10) {
-      return 90 * Math.pow(t, 0.75) * c7;
-    }
-    return 10 * c4(lambda) * c7 * t;
+    LimitRows rows =
+        nm(lambda) < 1050
+            ? new LimitRows(5e-6, 2e-3 * c4, 10, 18 * c4, 0.75, 10 * c4 * c7)
+            : new LimitRows(1.3e-5, 2e-2 * c7, 10, 90 * c7, 0.75, 10 * c4 * c7);
+    return rows.at(t);
   }
 
   /**
@@ -156,20 +86,15 @@ final class Ed3 {
    * J/cm² and C_B×10⁻⁴ W/cm²; C3 confirmed). NaN where it does not apply.
    */
   static double retinalPhotochemical(double lambda, double t) {
-    double n = nm(lambda);
-    if (n >= 600 || t < 10) {
-      return Double.NaN;
-    }
-    return t < 100 ? 100 * c3(lambda) : c3(lambda) * t;
+    double c3 = cB(lambda);
+    return LimitRows.photochemical(lambda, t, 100 * c3, c3);
   }
 
   /**
    * Ocular MPE (radiant exposure over t, J/m²): the lower of the thermal and photochemical limits.
    */
   static double ocularMpe(double lambda, double t) {
-    double thermal = retinalThermal(lambda, t);
-    double photo = retinalPhotochemical(lambda, t);
-    return Double.isNaN(photo) ? thermal : Math.min(thermal, photo);
+    return LimitRows.lowerOf(retinalThermal(lambda, t), retinalPhotochemical(lambda, t));
   }
 
   /**
@@ -178,14 +103,8 @@ final class Ed3 {
    * ns–10 s: 1.1×10⁴ C4 t^0.25 J/m²; 10 s–3×10⁴ s: 2000 C4 W/m².
    */
   static double skinMpe(double lambda, double t) {
-    double c4 = c4(lambda);
-    if (t < 1e-7) {
-      return 200 * c4;
-    }
-    if (t < 10) {
-      return 1.1e4 * c4 * Math.pow(t, 0.25);
-    }
-    return 2000 * c4 * t;
+    double c4 = cA(lambda);
+    return new LimitRows(1e-7, 200 * c4, 10, 1.1e4 * c4, 0.25, 2000 * c4).at(t);
   }
 
   /**
@@ -202,32 +121,15 @@ final class Ed3 {
    * </ul>
    */
   static double class1Ael(double lambda, double t) {
-    double n = nm(lambda);
-    double thermal;
-    if (n < 1050) {
-      double c4 = c4(lambda);
-      if (t < 5e-6) {
-        thermal = 7.7e-8 * c4;
-      } else if (t < 10) {
-        thermal = 7e-4 * Math.pow(t, 0.75) * c4;
-      } else {
-        thermal = 3.9e-4 * c4 * c7(lambda) * t;
-      }
-    } else {
-      double c7 = c7(lambda);
-      if (t < 1.3e-5) {
-        thermal = 7.7e-7 * c7;
-      } else if (t < 10) {
-        thermal = 3.5e-3 * Math.pow(t, 0.75) * c7;
-      } else {
-        thermal = 3.9e-4 * c4(lambda) * c7 * t;
-      }
-    }
-    if (n < 600 && t >= 10) {
-      double photo = t < 100 ? 3.9e-3 * c3(lambda) : 3.9e-5 * c3(lambda) * t;
-      return Math.min(thermal, photo);
-    }
-    return thermal;
+    double c4 = cA(lambda);
+    double c7 = c7(lambda);
+    LimitRows rows =
+        nm(lambda) < 1050
+            ? new LimitRows(5e-6, 7.7e-8 * c4, 10, 7e-4 * c4, 0.75, 3.9e-4 * c4 * c7)
+            : new LimitRows(1.3e-5, 7.7e-7 * c7, 10, 3.5e-3 * c7, 0.75, 3.9e-4 * c4 * c7);
+    double c3 = cB(lambda);
+    return LimitRows.lowerOf(
+        rows.at(t), LimitRows.photochemical(lambda, t, 3.9e-3 * c3, 3.9e-5 * c3));
   }
 
   /**

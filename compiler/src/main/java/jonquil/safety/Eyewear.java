@@ -1,5 +1,7 @@
 package jonquil.safety;
 
+import jonquil.optics.beam.Irradiance;
+
 /**
  * Why it exists: the optical density protective eyewear needs, OD = log10(H/MPE), where H is the
  * anticipated exposure (ANSI Z136.1-2014, eyewear OD formula; EN 207 uses the same ratio — clause
@@ -30,15 +32,15 @@ public final class Eyewear {
     if (!(beamDiameter > 0)) {
       throw new IllegalArgumentException("beam diameter must be > 0 m");
     }
-    Outcome<Exposure> mpe = OcularMpe.at(e, exposureDuration);
+    Outcome<MaximumPermissibleExposure> mpe = OcularMpe.at(e, exposureDuration);
     String standard = FORMULA + "; MPE: " + mpe.standard();
     if (!mpe.evaluated()) {
       return Outcome.notEvaluated(mpe.reason(), standard);
     }
     double q = e.pulsed() ? e.pulseEnergy() : e.averagePower();
     double limit = e.pulsed() ? mpe.get().radiantExposure() : mpe.get().irradiance();
-    double ap = GaussianBeam.averagedOver(q, beamDiameter, OcularMpe.LIMITING_APERTURE);
-    double peak = GaussianBeam.peak(q, beamDiameter);
+    double ap = Irradiance.meanOverAperture(q, beamDiameter / 2, OcularMpe.LIMITING_APERTURE);
+    double peak = Irradiance.peak(q, beamDiameter / 2);
     return Outcome.of(
         new OpticalDensity(od(ap, limit), od(peak, limit), ap, peak, limit), standard);
   }

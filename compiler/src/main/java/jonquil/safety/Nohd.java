@@ -48,7 +48,7 @@ public final class Nohd {
    */
   public static Outcome<Double> of(
       Emission e, double exitDiameter1e2, double divergence1e2, double exposureDuration) {
-    Outcome<Exposure> mpe = OcularMpe.at(e, exposureDuration);
+    Outcome<MaximumPermissibleExposure> mpe = OcularMpe.at(e, exposureDuration);
     String standard = FORMULA + "; MPE: " + mpe.standard();
     if (!mpe.evaluated()) {
       return Outcome.notEvaluated(mpe.reason(), standard);

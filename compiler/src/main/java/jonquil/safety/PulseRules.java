@@ -1,10 +1,8 @@
 package jonquil.safety;
 
-import java.util.function.DoubleUnaryOperator;
-
 /**
- * Why it exists: the repetitive-pulse rules of IEC 60825-1:2014 (Ed. 3), clause 4.3 f) and Annex A
- * (A.3), applied once for the eye and the skin so that both use the same arithmetic.
+ * Why it exists: IEC 60825-1:2014 (Ed. 3)'s names for the pulse-train rules of clause 4.3 f) and
+ * Annex A (A.3), and its repetitive-pulse rule, which {@link PulseTrain} applies for the eye.
  *
  * <p>Rules (Ed. 3, from memory; the three-rule structure is confirmed by published safety
  * guidance):
@@ -25,49 +23,19 @@ final class PulseRules {
       "C5 = 1 for a point source (IEC 60825-1:2014 Ed. 3, clause 4.3 f, from memory);"
           + " Ed. 2 (2007) and the N^-0.25 rule would be more restrictive";
 
-  /**
-   * Per-pulse limit (J/m²) for a train, and the limiting criterion.
-   *
-   * @param mpe radiant exposure MPE over a duration, J/m²
-   * @param tau pulse duration, s
-   * @param rate repetition rate, Hz (> 0)
-   * @param exposure exposure duration, s
-   * @param ti thermal confinement time for the repetitive rule, s; NaN when rule 3 does not apply
-   */
-  static Exposure train(
-      DoubleUnaryOperator mpe,
-      double tau,
-      double rate,
-      double exposure,
-      double ti,
-      double aperture,
-      String table) {
-    double n = Math.max(1, rate * exposure);
-    double single = mpe.applyAsDouble(tau);
-    double average = mpe.applyAsDouble(exposure) / n;
-    double repetitive = Double.NaN;
-    String repetitiveName = "";
-    if (!Double.isNaN(ti)) {
+  static final PulseTrain.RuleNames NAMES =
+      new PulseTrain.RuleNames("single pulse", "average power over the exposure duration");
+
+  /** Rule 3 for the thermal confinement time T_i (s): pulses within T_i add up, else C5 = 1. */
+  static PulseTrain.RepetitiveRule repetitive(double ti) {
+    return (mpe, single, pulses, rate) -> {
       if (1 / rate < ti) {
         double perGroup = rate * ti;
-        repetitive = mpe.applyAsDouble(ti) / perGroup;
-        repetitiveName = "repetitive pulse (pulses within T_i = " + ti + " s added)";
-      } else {
-        repetitive = single; // C5 = 1
-        repetitiveName = "repetitive pulse (" + C5_NOTE + ")";
+        return new PulseTrain.Limit(
+            mpe.applyAsDouble(ti) / perGroup,
+            "repetitive pulse (pulses within T_i = " + ti + " s added)");
       }
-    }
-    double limit = single;
-    String criterion = "single pulse";
-    if (average < limit) {
-      limit = average;
-      criterion = "average power over the exposure duration";
-    }
-    if (!Double.isNaN(repetitive) && repetitive < limit) {
-      limit = repetitive;
-      criterion = repetitiveName;
-    }
-    return new Exposure(
-        limit, limit * rate, exposure, aperture, single, average, repetitive, criterion, table);
+      return new PulseTrain.Limit(single, "repetitive pulse (" + C5_NOTE + ")");
+    };
   }
 }

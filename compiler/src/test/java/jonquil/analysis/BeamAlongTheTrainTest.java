@@ -32,22 +32,23 @@ class BeamAlongTheTrainTest {
     // |E0| = √(2 I Z0 / n), impedance of free space Z0 = 376.730313668 Ω (CODATA 2018).
     double z0 = 376.730313668;
     double irradiance = 1e4; // 1 W/cm²
-    assertEquals(Math.sqrt(2 * irradiance * z0), Exposure.peakField(irradiance, 1.0), 1e-6);
-    assertEquals(Math.sqrt(2 * irradiance * z0 / 1.5), Exposure.peakField(irradiance, 1.5), 1e-6);
+    assertEquals(Math.sqrt(2 * irradiance * z0), BeamExposure.peakField(irradiance, 1.0), 1e-6);
+    assertEquals(
+        Math.sqrt(2 * irradiance * z0 / 1.5), BeamExposure.peakField(irradiance, 1.5), 1e-6);
   }
 
   @Test
   void aGaussianPeakIsTwiceTheAverageIrradiance() {
     // I(0) = 2P/(πw²) for a Gaussian beam of 1/e² radius w (Siegman, Lasers, 1986, §17.1). [section
     // numbers from memory]
-    Exposure e = Exposure.of(1.0, 1e-3, java.util.Optional.empty(), 1);
+    BeamExposure e = BeamExposure.of(1.0, 1e-3, java.util.Optional.empty(), 1);
     assertEquals(2 / (Math.PI * 1e-6), e.peakIrradiance(), 1e-6);
     assertEquals(e.peakIrradiance() / 2, e.averageIrradiance(), 1e-9);
   }
 
   @Test
   void pulsedExposureGivesEnergyPeakPowerAndFluence() {
-    Exposure e = Exposure.of(10.0, 1e-3, java.util.Optional.of(new Pulses(10e3, 10e-9)), 1);
+    BeamExposure e = BeamExposure.of(10.0, 1e-3, java.util.Optional.of(new Pulses(10e3, 10e-9)), 1);
     assertEquals(1e-3, e.pulseEnergy().getAsDouble(), 1e-15);
     assertEquals(1e5, e.peakPower().getAsDouble(), 1e-6);
     assertEquals(2e-3 / (Math.PI * 1e-6), e.peakFluence().getAsDouble(), 1e-9);

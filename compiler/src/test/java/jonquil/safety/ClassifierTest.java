@@ -74,8 +74,10 @@ class ClassifierTest {
 
   @Test
   void aperturesAreGaussianFractions() {
-    // 1 - exp(-D^2/(2 w^2)) with w = d/2: a beam as wide as the aperture passes 1 - e^-2 = 86.5 %.
-    assertEquals(1 - Math.exp(-2), GaussianBeam.fractionThrough(7e-3, 7e-3), 1e-12);
+    // 1 - exp(-D^2/(2 w^2)) with w = d/2: a beam as wide as the aperture passes 1 - e^-2 = 86.5 %
+    // (Siegman 1986, §17.1). A collimated beam 7 mm wide through condition 3's 7 mm aperture:
+    Classification c = Classifier.assess(Emission.continuous(532e-9, 1e-4), 7e-3, 0).get();
+    assertEquals(1 - Math.exp(-2), c.fractionCondition3(), 1e-12);
   }
 
   @ParameterizedTest(name = "532 nm, 10 ns, 1 kHz, {0} J per pulse -> {1}")

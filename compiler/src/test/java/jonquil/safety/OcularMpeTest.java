@@ -35,7 +35,7 @@ class OcularMpeTest {
             + " ICNIRP C_C)",
       })
   void continuousWave(double nm, double t, double irradiance, String source) {
-    Outcome<Exposure> o = OcularMpe.at(Emission.continuous(nm * 1e-9, 1e-3), t);
+    Outcome<MaximumPermissibleExposure> o = OcularMpe.at(Emission.continuous(nm * 1e-9, 1e-3), t);
     assertTrue(o.evaluated(), source);
     assertEquals(irradiance, o.get().irradiance(), irradiance * 0.01, source);
     assertEquals(irradiance * t, o.get().radiantExposure(), irradiance * t * 0.01, source);
@@ -54,7 +54,8 @@ class OcularMpeTest {
         "905 | 1e-7 | 5.14e-3 | from memory: 2e-3 C4 J/m2, C4 = 10^(0.002*205) = 2.57",
       })
   void singlePulse(double nm, double tau, double h, String source) {
-    Outcome<Exposure> o = OcularMpe.at(Emission.singlePulse(nm * 1e-9, 1e-6, tau), 0.25);
+    Outcome<MaximumPermissibleExposure> o =
+        OcularMpe.at(Emission.singlePulse(nm * 1e-9, 1e-6, tau), 0.25);
     assertTrue(o.evaluated(), source);
     assertEquals(h, o.get().radiantExposure(), h * 0.01, source);
     assertEquals("single pulse", o.get().limitingCriterion());
@@ -76,7 +77,8 @@ class OcularMpeTest {
   void lowRateTrainIsLimitedBySinglePulse() {
     // 532 nm, 10 ns, 1 kHz, 0.25 s: single 2e-3; average 6.364/250 = 0.0255; repetitive (C5 = 1) =
     // single.
-    Exposure x = OcularMpe.at(Emission.pulseTrain(532e-9, 1e-6, 1e-8, 1e3), 0.25).get();
+    MaximumPermissibleExposure x =
+        OcularMpe.at(Emission.pulseTrain(532e-9, 1e-6, 1e-8, 1e3), 0.25).get();
     assertEquals(2e-3, x.radiantExposure(), 1e-6);
     assertEquals(18 * Math.pow(0.25, 0.75) / 250, x.averagePower(), 1e-6);
     assertEquals("single pulse", x.limitingCriterion());
@@ -88,7 +90,8 @@ class OcularMpeTest {
     // 532 nm, 10 ns, 10 MHz, 0.25 s: average 6.364/2.5e6 = 2.55e-6 J/m2 per pulse; pulses within
     // T_i = 5 us
     // grouped: 18 (5e-6)^0.75 / 50 = 3.8e-5; single 2e-3.
-    Exposure x = OcularMpe.at(Emission.pulseTrain(532e-9, 1e-9, 1e-8, 1e7), 0.25).get();
+    MaximumPermissibleExposure x =
+        OcularMpe.at(Emission.pulseTrain(532e-9, 1e-9, 1e-8, 1e7), 0.25).get();
     assertEquals(18 * Math.pow(0.25, 0.75) / 2.5e6, x.radiantExposure(), 1e-9);
     assertEquals(18 * Math.pow(5e-6, 0.75) / 50, x.repetitivePulse(), 1e-8);
     assertTrue(x.limitingCriterion().startsWith("average power"));
@@ -100,7 +103,8 @@ class OcularMpeTest {
   void nearInfraredTrainGroupsPulsesWithinTi() {
     // 1064 nm, 10 ns, 100 kHz, 10 s: T_i = 13 us (from memory) > 10 us spacing -> 1.3 pulses per
     // group.
-    Exposure x = OcularMpe.at(Emission.pulseTrain(1064e-9, 1e-6, 1e-8, 1e5), 10).get();
+    MaximumPermissibleExposure x =
+        OcularMpe.at(Emission.pulseTrain(1064e-9, 1e-6, 1e-8, 1e5), 10).get();
     assertEquals(90 * Math.pow(1.3e-5, 0.75) / 1.3, x.repetitivePulse(), 1e-6);
     assertEquals(500.0 / 1e6, x.radiantExposure(), 1e-9);
   }
@@ -121,7 +125,7 @@ class OcularMpeTest {
         tau == 0
             ? Emission.continuous(nm * 1e-9, 1)
             : Emission.pulseTrain(nm * 1e-9, 1e-6, tau, 1e3);
-    Outcome<Exposure> o = OcularMpe.at(e, t);
+    Outcome<MaximumPermissibleExposure> o = OcularMpe.at(e, t);
     assertFalse(o.evaluated(), why);
     assertFalse(o.reason().isBlank());
     assertEquals(Outcome.CAUTION, o.caution());

@@ -24,7 +24,7 @@ class SkinMpeTest {
   void table(double nm, double t, double h, String source) {
     Emission e =
         t < 1e-6 ? Emission.singlePulse(nm * 1e-9, 1e-3, t) : Emission.continuous(nm * 1e-9, 1);
-    Outcome<Exposure> o = SkinMpe.at(e, t);
+    Outcome<MaximumPermissibleExposure> o = SkinMpe.at(e, t);
     assertTrue(o.evaluated(), source);
     assertEquals(h, o.get().radiantExposure(), h * 0.01, source);
     assertEquals(3.5e-3, o.get().apertureDiameter(), 1e-12);
@@ -39,7 +39,8 @@ class SkinMpeTest {
   @Test
   void trainUsesAveragePower() {
     // 1064 nm, 10 ns, 1 kHz, 10 s: single 1000 J/m2; average 2000*5*10 / 1e4 = 10 J/m2 per pulse.
-    Exposure x = SkinMpe.at(Emission.pulseTrain(1064e-9, 1e-3, 1e-8, 1e3), 10).get();
+    MaximumPermissibleExposure x =
+        SkinMpe.at(Emission.pulseTrain(1064e-9, 1e-3, 1e-8, 1e3), 10).get();
     assertEquals(10, x.radiantExposure(), 1e-6);
     assertTrue(Double.isNaN(x.repetitivePulse()));
   }

@@ -16,6 +16,7 @@ import jonquil.ide.CodeActionInfo;
 import jonquil.ide.CompletionItemInfo;
 import jonquil.ide.DocumentLinkInfo;
 import jonquil.ide.FoldingRangeInfo;
+import jonquil.ide.FoundSymbol;
 import jonquil.ide.HoverInfo;
 import jonquil.ide.SemanticToken;
 import jonquil.ide.SymbolInfo;
@@ -486,8 +487,7 @@ final class Convert {
     }
   }
 
-  WorkspaceSymbol workspaceSymbol(
-      EditorAnswers.FileSymbol found, Function<Path, SourceFile> sources) {
+  WorkspaceSymbol workspaceSymbol(FoundSymbol found, Function<Path, SourceFile> sources) {
     SourceFile source = orEmpty(found.file(), sources.apply(found.file()));
     SymbolInfo s = found.symbol();
     TextRange at = s.selectionRange() != null ? s.selectionRange() : s.range();

@@ -10,6 +10,7 @@ import jonquil.ide.CompletionItemInfo;
 import jonquil.ide.DocumentLinkInfo;
 import jonquil.ide.FileIndex;
 import jonquil.ide.FoldingRangeInfo;
+import jonquil.ide.FoundSymbol;
 import jonquil.ide.HoverInfo;
 import jonquil.ide.InlayHint;
 import jonquil.ide.Location;
@@ -24,9 +25,6 @@ import jonquil.source.TextRange;
  */
 public interface EditorAnswers {
 
-  /** A symbol together with the file that declares it, as a workspace-wide search returns it. */
-  record FileSymbol(Path file, SymbolInfo symbol) {}
-
   Optional<HoverInfo> hover(Result result, Path file, int offset);
 
   List<Location> definition(Result result, Path file, int offset);
@@ -39,7 +37,7 @@ public interface EditorAnswers {
 
   List<SymbolInfo> documentSymbols(Result result, Path file);
 
-  List<FileSymbol> workspaceSymbols(Result result, String query);
+  List<FoundSymbol> workspaceSymbols(Result result, String query);
 
   /** What may be written at the offset; {@code result} must have read the text the editor shows. */
   List<CompletionItemInfo> completions(Result result, Path file, int offset);
@@ -68,7 +66,7 @@ public interface EditorAnswers {
   }
 
   /** Declarations of indexed files matching the query, capped. */
-  default List<FileSymbol> workspaceSymbols(Collection<FileIndex> indexed, String query) {
+  default List<FoundSymbol> workspaceSymbols(Collection<FileIndex> indexed, String query) {
     return List.of();
   }
 

@@ -55,12 +55,12 @@ final class IdeAnswers implements EditorAnswers {
   }
 
   @Override
-  public List<FileSymbol> workspaceSymbols(Result result, String query) {
+  public List<FoundSymbol> workspaceSymbols(Result result, String query) {
     List<SymbolInfo> symbols = Ide.workspaceSymbols(result, query);
     List<Location> places = Ide.workspaceSymbolLocations(result, query);
-    List<FileSymbol> out = new ArrayList<>();
+    List<FoundSymbol> out = new ArrayList<>();
     for (int i = 0; i < symbols.size() && i < places.size(); i++) {
-      out.add(new FileSymbol(places.get(i).file(), symbols.get(i)));
+      out.add(new FoundSymbol(places.get(i).file(), symbols.get(i)));
     }
     return out;
   }
@@ -71,12 +71,8 @@ final class IdeAnswers implements EditorAnswers {
   }
 
   @Override
-  public List<FileSymbol> workspaceSymbols(Collection<FileIndex> indexed, String query) {
-    List<FileSymbol> out = new ArrayList<>();
-    for (FoundSymbol s : Ide.workspaceSymbols(indexed, query)) {
-      out.add(new FileSymbol(s.file(), s.symbol()));
-    }
-    return out;
+  public List<FoundSymbol> workspaceSymbols(Collection<FileIndex> indexed, String query) {
+    return Ide.workspaceSymbols(indexed, query);
   }
 
   @Override

@@ -8,6 +8,7 @@ import jonquil.ide.CodeActionInfo;
 import jonquil.ide.CompletionItemInfo;
 import jonquil.ide.DocumentLinkInfo;
 import jonquil.ide.FoldingRangeInfo;
+import jonquil.ide.FoundSymbol;
 import jonquil.ide.HoverInfo;
 import jonquil.ide.InlayHint;
 import jonquil.ide.Location;
@@ -56,7 +57,7 @@ class Delegating implements EditorAnswers {
   }
 
   @Override
-  public List<FileSymbol> workspaceSymbols(Result result, String query) {
+  public List<FoundSymbol> workspaceSymbols(Result result, String query) {
     return to.workspaceSymbols(result, query);
   }
 
@@ -96,7 +97,7 @@ class Delegating implements EditorAnswers {
   }
 
   @Override
-  public List<FileSymbol> workspaceSymbols(
+  public List<FoundSymbol> workspaceSymbols(
       java.util.Collection<jonquil.ide.FileIndex> indexed, String query) {
     return to.workspaceSymbols(indexed, query);
   }

@@ -9,6 +9,7 @@ import jonquil.ide.CodeActionInfo;
 import jonquil.ide.CompletionItemInfo;
 import jonquil.ide.DocumentLinkInfo;
 import jonquil.ide.FoldingRangeInfo;
+import jonquil.ide.FoundSymbol;
 import jonquil.ide.HoverInfo;
 import jonquil.ide.InlayHint;
 import jonquil.ide.Location;
@@ -53,7 +54,7 @@ public final class NoAnswers implements EditorAnswers {
   }
 
   @Override
-  public List<FileSymbol> workspaceSymbols(Result result, String query) {
+  public List<FoundSymbol> workspaceSymbols(Result result, String query) {
     return List.of();
   }
 

@@ -13,6 +13,7 @@ import java.util.concurrent.ExecutionException;
 import java.util.concurrent.TimeUnit;
 import jonquil.Result;
 import jonquil.diag.Edit;
+import jonquil.ide.FoundSymbol;
 import jonquil.ide.RenameResult;
 import jonquil.ide.SymbolInfo;
 import jonquil.source.TextRange;
@@ -91,9 +92,9 @@ class RelayTest {
           }
 
           @Override
-          public List<FileSymbol> workspaceSymbols(Result result, String query) {
+          public List<FoundSymbol> workspaceSymbols(Result result, String query) {
             return List.of(
-                new FileSymbol(
+                new FoundSymbol(
                     lib,
                     new SymbolInfo(
                         "m1", "mirror", TextRange.of(0, 30), TextRange.of(7, 9), List.of())));

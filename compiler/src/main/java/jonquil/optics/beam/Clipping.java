@@ -26,9 +26,9 @@ public final class Clipping {
       throw new IllegalArgumentException(
           "aperture diameter must be non-negative: " + apertureDiameter);
     }
-    double ratio = apertureDiameter / (2 * beamRadius);
-    // −expm1 keeps precision for tiny apertures, where 1 − exp(−x) would cancel.
-    return -Math.expm1(-2 * ratio * ratio);
+    // 2a²/W² with a = D/2 is D²/(2W²); −expm1 keeps precision for tiny apertures, where 1 − exp(−x)
+    // would cancel.
+    return -Math.expm1(-apertureDiameter * apertureDiameter / (2 * beamRadius * beamRadius));
   }
 
   /**

@@ -1,11 +1,10 @@
 package jonquil.safety.ansi;
 
-import java.util.function.DoubleUnaryOperator;
-import jonquil.safety.Exposure;
+import jonquil.safety.PulseTrain;
 
 /**
- * Why it exists: the three pulse-train rules of ANSI Z136.1-2014 section 8.2.3, applied once for
- * the eye and the skin so that both use the same arithmetic.
+ * Why it exists: ANSI Z136.1-2014's names for the three pulse-train rules of section 8.2.3, and its
+ * Rule 3, which {@link PulseTrain} applies for the eye.
  *
  * <ol>
  *   <li>Rule 1 (single pulse): each pulse ≤ the MPE for one pulse of its duration τ.
@@ -28,40 +27,14 @@ final class AnsiPulseRules {
   static final String RULE2 = "Rule 2 (average power over the exposure duration)";
   static final String RULE3 = "Rule 3 (multiple-pulse thermal, C_P = n^-0.25)";
 
-  /**
-   * Per-pulse limit (J/m²) for a train, and the rule that limited it.
-   *
-   * @param mpe radiant-exposure MPE over a duration, J/m²
-   * @param tau pulse duration, s
-   * @param rate repetition rate, Hz (&gt; 0)
-   * @param exposure exposure duration T, s
-   * @param rule3 whether Rule 3 applies (retinal thermal, τ ≥ t_min)
-   */
-  static Exposure train(
-      DoubleUnaryOperator mpe,
-      double tau,
-      double rate,
-      double exposure,
-      boolean rule3,
-      double aperture,
-      String table) {
-    double n = Math.max(1, rate * exposure);
-    double single = mpe.applyAsDouble(tau);
-    double average = mpe.applyAsDouble(exposure) / n;
-    double repetitive = rule3 ? single * Z136.cP(n) : Double.NaN;
-    double limit = single;
-    String criterion = RULE1;
-    if (average < limit) {
-      limit = average;
-      criterion = RULE2;
-    }
-    if (rule3 && repetitive < limit) {
-      limit = repetitive;
-      criterion = RULE3 + ", n = " + fmt(n) + ", C_P = " + fmt(Z136.cP(n));
-    }
-    return new Exposure(
-        limit, limit * rate, exposure, aperture, single, average, repetitive, criterion, table);
-  }
+  static final PulseTrain.RuleNames NAMES = new PulseTrain.RuleNames(RULE1, RULE2);
+
+  /** Rule 3: per pulse ≤ MPE(τ) × C_P, C_P = n^−0.25, named with its n and C_P. */
+  static final PulseTrain.RepetitiveRule MULTIPLE_PULSE =
+      (mpe, single, pulses, rate) ->
+          new PulseTrain.Limit(
+              single * Z136.cP(pulses),
+              RULE3 + ", n = " + fmt(pulses) + ", C_P = " + fmt(Z136.cP(pulses)));
 
   static String fmt(double v) {
     return String.format(java.util.Locale.ROOT, "%.4g", v);

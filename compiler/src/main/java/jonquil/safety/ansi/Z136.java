@@ -1,5 +1,14 @@
 package jonquil.safety.ansi;
 
+import static jonquil.safety.CorrectionFactors.cA;
+import static jonquil.safety.CorrectionFactors.cB;
+import static jonquil.safety.CorrectionFactors.cC;
+import static jonquil.safety.CorrectionFactors.nm;
+
+import jonquil.safety.CorrectionFactors;
+import jonquil.safety.LimitRows;
+import jonquil.safety.TableScope;
+
 /**
  * Why it exists: the one place that holds the formulas and constants taken from ANSI Z136.1-2014,
  * so that every number can be audited against its table in a single file.
@@ -48,82 +57,16 @@ final class Z136 {
   /** 1 J/cm² = 10⁴ J/m² (and 1 W/cm² = 10⁴ W/m²). */
   static final double PER_CM2 = 1e4;
 
-  /** Eye evaluated from 400 nm, the start of the retinal-hazard rows of Table 5a. */
-  static final double LAMBDA_MIN = 400e-9;
-
   /**
    * Eye evaluated below 1200 nm only: C_C is confirmed (ICNIRP form) up to 1200 nm; for 1200–1400
    * nm the 2014 edition's C_C and its added corneal/lens limit (1250–1400 nm; ANSI Z136.1-2014 is
    * one of the standards compared in "Comparison of corneal injury thresholds with laser safety
-   * limits") were not confirmed, so that band is "not evaluated".
+   * limits") were not confirmed, so that band is "not evaluated". The rest of the scope both
+   * standards share (400 nm, 3×10⁴ s, 10 ps, 1 ns, the 7 mm and 3.5 mm apertures of Table 8) is in
+   * {@link TableScope}; the Table 6 factors C_A, C_B, C_C and t_min are in {@link
+   * CorrectionFactors}.
    */
   static final double LAMBDA_MAX_EYE = 1200e-9;
-
-  /** Skin row 400–1400 nm of Table 7 (from memory). */
-  static final double LAMBDA_MAX_SKIN = 1400e-9;
-
-  /** Longest exposure in Table 5a and Table 7, s (3×10⁴ s; from memory, same as IEC Ed. 3). */
-  static final double T_MAX = 3e4;
-
-  /**
-   * Shortest pulse evaluated for the eye, s; the 100 fs–10 ps row of Table 5a is not implemented.
-   */
-  static final double T_MIN_EYE = 1e-11;
-
-  /** Shortest pulse evaluated for the skin, s; Table 7 rows below 1 ns are not implemented. */
-  static final double T_MIN_SKIN = 1e-9;
-
-  /**
-   * Limiting aperture for the eye, 400–1400 nm: 7 mm (Table 8, from memory; 7 mm pupil confirmed).
-   */
-  static final double APERTURE_EYE = 7e-3;
-
-  /** Limiting aperture for the skin, 400–1400 nm: 3.5 mm (Table 8, from memory). */
-  static final double APERTURE_SKIN = 3.5e-3;
-
-  static double nm(double lambda) {
-    return lambda / 1e-9;
-  }
-
-  /**
-   * C_A, Table 6: 1 for 400–700 nm, 10^(0.002(λ−700)) for 700–1050 nm, 5 for 1050–1400 nm.
-   * Confirmed (ICNIRP form).
-   */
-  static double cA(double lambda) {
-    double n = nm(lambda);
-    if (n < 700) {
-      return 1.0;
-    }
-    return n < 1050 ? Math.pow(10, 0.002 * (n - 700)) : 5.0;
-  }
-
-  /** C_B, Table 6: 1 for 400–450 nm, 10^(0.02(λ−450)) for 450–600 nm. Confirmed (ICNIRP form). */
-  static double cB(double lambda) {
-    double n = nm(lambda);
-    return n < 450 ? 1.0 : Math.pow(10, 0.02 * (n - 450));
-  }
-
-  /**
-   * C_C, Table 6: 1 for 1050–1150 nm, 10^(0.018(λ−1150)) for 1150–1200 nm. Confirmed (ICNIRP form).
-   * Not defined here at or above 1200 nm (not confirmed; callers refuse that band).
-   */
-  static double cC(double lambda) {
-    double n = nm(lambda);
-    if (n >= 1200) {
-      throw new IllegalArgumentException("C_C is not implemented at or above 1200 nm");
-    }
-    return n < 1150 ? 1.0 : Math.pow(10, 0.018 * (n - 1150));
-  }
-
-  /**
-   * t_min, Table 6: the duration below which the single-pulse MPE is constant and inside which
-   * pulses act together: 5 µs for 400–1050 nm, 13 µs for 1050–1400 nm (from memory: the 2007
-   * edition had 18 µs and 50 µs; the 2014 values match the row breakpoints of Table 5a below, which
-   * join within 3 %).
-   */
-  static double tMin(double lambda) {
-    return nm(lambda) < 1050 ? 5e-6 : 1.3e-5;
-  }
 
   /**
    * Retinal thermal MPE as radiant exposure over t, J/m², Table 5a, point source, 400 nm ≤ λ &lt;
@@ -142,24 +85,15 @@ final class Z136 {
    * At the 10 s breakpoint the constant-irradiance row is used, which is the lower of the two.
    */
   static double retinalThermal(double lambda, double t) {
+    LimitRows rows;
     if (nm(lambda) < 1050) {
-      double cA = cA(lambda);
-      if (t < 5e-6) {
-        return 2.0e-7 * cA * PER_CM2;
-      }
-      if (t < 10) {
-        return 1.8e-3 * cA * Math.pow(t, 0.75) * PER_CM2;
-      }
-      return 1.0e-3 * cA * t * PER_CM2;
+      double cA = cA(lambda) * PER_CM2;
+      rows = new LimitRows(5e-6, 2.0e-7 * cA, 10, 1.8e-3 * cA, 0.75, 1.0e-3 * cA);
+    } else {
+      double cC = cC(lambda) * PER_CM2;
+      rows = new LimitRows(1.3e-5, 2.0e-6 * cC, 10, 9.0e-3 * cC, 0.75, 5.0e-3 * cC);
     }
-    double cC = cC(lambda);
-    if (t < 1.3e-5) {
-      return 2.0e-6 * cC * PER_CM2;
-    }
-    if (t < 10) {
-      return 9.0e-3 * cC * Math.pow(t, 0.75) * PER_CM2;
-    }
-    return 5.0e-3 * cC * t * PER_CM2;
+    return rows.at(t);
   }
 
   /**
@@ -168,20 +102,15 @@ final class Z136 {
    * confirmed). NaN where it does not apply.
    */
   static double retinalPhotochemical(double lambda, double t) {
-    if (nm(lambda) >= 600 || t < 10) {
-      return Double.NaN;
-    }
-    double cB = cB(lambda);
-    return t < 100 ? 1e-2 * cB * PER_CM2 : 1e-4 * cB * t * PER_CM2;
+    double cB = cB(lambda) * PER_CM2;
+    return LimitRows.photochemical(lambda, t, 1e-2 * cB, 1e-4 * cB);
   }
 
   /**
    * Ocular MPE (radiant exposure over t, J/m²): the lower of the thermal and photochemical limits.
    */
   static double ocular(double lambda, double t) {
-    double thermal = retinalThermal(lambda, t);
-    double photo = retinalPhotochemical(lambda, t);
-    return Double.isNaN(photo) ? thermal : Math.min(thermal, photo);
+    return LimitRows.lowerOf(retinalThermal(lambda, t), retinalPhotochemical(lambda, t));
   }
 
   /**
@@ -191,14 +120,8 @@ final class Z136 {
    * memory), which is not implemented because the exposed area is not an input.
    */
   static double skin(double lambda, double t) {
-    double cA = cA(lambda);
-    if (t < 1e-7) {
-      return 2e-2 * cA * PER_CM2;
-    }
-    if (t < 10) {
-      return 1.1 * cA * Math.pow(t, 0.25) * PER_CM2;
-    }
-    return 0.2 * cA * t * PER_CM2;
+    double cA = cA(lambda) * PER_CM2;
+    return new LimitRows(1e-7, 2e-2 * cA, 10, 1.1 * cA, 0.25, 0.2 * cA).at(t);
   }
 
   /**

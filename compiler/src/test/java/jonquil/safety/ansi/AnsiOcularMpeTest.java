@@ -5,7 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import jonquil.safety.Emission;
-import jonquil.safety.Exposure;
+import jonquil.safety.MaximumPermissibleExposure;
 import jonquil.safety.Outcome;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -42,7 +42,8 @@ class AnsiOcularMpeTest {
             + " confirmed, ICNIRP)",
       })
   void continuousWave(double nm, double t, double irradiance, String source) {
-    Outcome<Exposure> o = AnsiOcularMpe.at(Emission.continuous(nm * 1e-9, 1e-3), t);
+    Outcome<MaximumPermissibleExposure> o =
+        AnsiOcularMpe.at(Emission.continuous(nm * 1e-9, 1e-3), t);
     assertTrue(o.evaluated(), source);
     assertEquals(irradiance, o.get().irradiance(), irradiance * 0.002, source);
     assertEquals(irradiance * t, o.get().radiantExposure(), irradiance * t * 0.002, source);
@@ -66,7 +67,8 @@ class AnsiOcularMpeTest {
         "1064 | 1e-3 | 0.5060  | from memory: 9.0 C_C t^0.75 mJ/cm2 at 1 ms",
       })
   void singlePulse(double nm, double tau, double h, String source) {
-    Outcome<Exposure> o = AnsiOcularMpe.at(Emission.singlePulse(nm * 1e-9, 1e-6, tau), 0.25);
+    Outcome<MaximumPermissibleExposure> o =
+        AnsiOcularMpe.at(Emission.singlePulse(nm * 1e-9, 1e-6, tau), 0.25);
     assertTrue(o.evaluated(), source);
     assertEquals(h, o.get().radiantExposure(), h * 0.002, source);
     assertEquals(AnsiPulseRules.RULE1, o.get().limitingCriterion());
@@ -79,7 +81,8 @@ class AnsiOcularMpeTest {
     // 532 nm, 100 us pulses, 100 Hz, 0.25 s -> n = 25. Rule 1: 1.8e-3 (1e-4)^0.75 J/cm2 = 0.018
     // J/m2;
     // Rule 2: 6.364 J/m2 / 25 = 0.2546; Rule 3: 0.018 x 25^-0.25 = 8.05e-3 J/m2.
-    Exposure x = AnsiOcularMpe.at(Emission.pulseTrain(532e-9, 1e-6, 1e-4, 100), 0.25).get();
+    MaximumPermissibleExposure x =
+        AnsiOcularMpe.at(Emission.pulseTrain(532e-9, 1e-6, 1e-4, 100), 0.25).get();
     assertEquals(0.018, x.singlePulse(), 1e-6);
     assertEquals(18 * Math.pow(0.25, 0.75) / 25, x.averagePower(), 1e-6);
     assertEquals(0.018 * Math.pow(25, -0.25), x.repetitivePulse(), 1e-7);
@@ -93,7 +96,8 @@ class AnsiOcularMpeTest {
     // from memory: 1064 nm, 100 us, 1 kHz, 10 s -> n = 1e4, C_P = 0.1. Rule 1: 9e-3 (1e-4)^0.75
     // J/cm2 = 0.09 J/m2;
     // Rule 2: 5 mW/cm2 x 10 s / 1e4 = 0.05 J/m2; Rule 3: 0.009 J/m2.
-    Exposure x = AnsiOcularMpe.at(Emission.pulseTrain(1064e-9, 1e-6, 1e-4, 1e3), 10).get();
+    MaximumPermissibleExposure x =
+        AnsiOcularMpe.at(Emission.pulseTrain(1064e-9, 1e-6, 1e-4, 1e3), 10).get();
     assertEquals(0.09, x.singlePulse(), 1e-6);
     assertEquals(0.05, x.averagePower(), 1e-6);
     assertEquals(0.009, x.radiantExposure(), 1e-7);
@@ -105,7 +109,8 @@ class AnsiOcularMpeTest {
     // from memory: 420 nm, 1 ms, 500 Hz, 1000 s -> n = 5e5. Rule 2: photochemical C_B x 1e-4 W/cm2
     // = 1 W/m2 x
     // 1000 s / 5e5 = 2e-3 J/m2; Rule 3: 1.8e-3 (1e-3)^0.75 J/cm2 x (5e5)^-0.25 = 3.81e-3 J/m2.
-    Exposure x = AnsiOcularMpe.at(Emission.pulseTrain(420e-9, 1e-6, 1e-3, 500), 1000).get();
+    MaximumPermissibleExposure x =
+        AnsiOcularMpe.at(Emission.pulseTrain(420e-9, 1e-6, 1e-3, 500), 1000).get();
     assertEquals(2e-3, x.radiantExposure(), 1e-9);
     assertEquals(18 * Math.pow(1e-3, 0.75) * Math.pow(5e5, -0.25), x.repetitivePulse(), 1e-7);
     assertEquals(AnsiPulseRules.RULE2, x.limitingCriterion());
@@ -153,7 +158,7 @@ class AnsiOcularMpeTest {
             : rate == 0
                 ? Emission.singlePulse(nm * 1e-9, 1e-6, tau)
                 : Emission.pulseTrain(nm * 1e-9, 1e-6, tau, rate);
-    Outcome<Exposure> o = AnsiOcularMpe.at(e, t);
+    Outcome<MaximumPermissibleExposure> o = AnsiOcularMpe.at(e, t);
     assertFalse(o.evaluated(), why);
     assertFalse(o.reason().isBlank());
     assertTrue(o.standard().startsWith("ANSI Z136.1-2014"), o.standard());

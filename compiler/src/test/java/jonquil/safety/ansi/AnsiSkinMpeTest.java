@@ -5,7 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import jonquil.safety.Emission;
-import jonquil.safety.Exposure;
+import jonquil.safety.MaximumPermissibleExposure;
 import jonquil.safety.Outcome;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -27,7 +27,7 @@ class AnsiSkinMpeTest {
         "1064 | 100 | 1e4  | from memory: 0.2 C_A W/cm2, C_A = 5",
       })
   void continuousWave(double nm, double t, double irradiance, String source) {
-    Outcome<Exposure> o = AnsiSkinMpe.at(Emission.continuous(nm * 1e-9, 1), t);
+    Outcome<MaximumPermissibleExposure> o = AnsiSkinMpe.at(Emission.continuous(nm * 1e-9, 1), t);
     assertTrue(o.evaluated(), source);
     assertEquals(irradiance, o.get().irradiance(), irradiance * 0.002, source);
     assertEquals(3.5e-3, o.get().apertureDiameter(), 1e-12);
@@ -44,7 +44,8 @@ class AnsiSkinMpeTest {
         "532  | 1e-6 | 347.9 | from memory: 1.1 t^0.25 J/cm2 at 1 us",
       })
   void singlePulse(double nm, double tau, double h, String source) {
-    Outcome<Exposure> o = AnsiSkinMpe.at(Emission.singlePulse(nm * 1e-9, 1e-3, tau), 10);
+    Outcome<MaximumPermissibleExposure> o =
+        AnsiSkinMpe.at(Emission.singlePulse(nm * 1e-9, 1e-3, tau), 10);
     assertTrue(o.evaluated(), source);
     assertEquals(h, o.get().radiantExposure(), h * 0.002, source);
   }
@@ -53,7 +54,8 @@ class AnsiSkinMpeTest {
   void trainUsesRules1And2Only() {
     // from memory: 1064 nm, 10 ns, 100 Hz, 10 s: Rule 1 1000 J/m2; Rule 2 0.2 x 5 W/cm2 x 10 s /
     // 1000 = 100 J/m2.
-    Exposure x = AnsiSkinMpe.at(Emission.pulseTrain(1064e-9, 1e-3, 1e-8, 100), 10).get();
+    MaximumPermissibleExposure x =
+        AnsiSkinMpe.at(Emission.pulseTrain(1064e-9, 1e-3, 1e-8, 100), 10).get();
     assertEquals(100, x.radiantExposure(), 1e-6);
     assertEquals(AnsiPulseRules.RULE2, x.limitingCriterion());
     assertTrue(Double.isNaN(x.repetitivePulse()), "Rule 3 is retinal only");
@@ -70,7 +72,7 @@ class AnsiSkinMpeTest {
   void outsideCoverageIsNotEvaluated(double nm, double tau) {
     Emission e =
         tau == 0 ? Emission.continuous(nm * 1e-9, 1) : Emission.singlePulse(nm * 1e-9, 1e-6, tau);
-    Outcome<Exposure> o = AnsiSkinMpe.at(e, 10);
+    Outcome<MaximumPermissibleExposure> o = AnsiSkinMpe.at(e, 10);
     assertFalse(o.evaluated());
     assertFalse(o.reason().isBlank());
     assertEquals(Outcome.CAUTION, o.caution());

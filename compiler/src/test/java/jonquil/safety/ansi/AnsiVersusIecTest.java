@@ -4,7 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import jonquil.safety.Emission;
-import jonquil.safety.Exposure;
+import jonquil.safety.MaximumPermissibleExposure;
 import jonquil.safety.OcularMpe;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -25,8 +25,8 @@ class AnsiVersusIecTest {
     // single-pulse MPE 0.018 J/m2.
     // ANSI Z136.1-2014 section 8.2.3 Rule 3 (from memory): C_P = 25^-0.25 = 0.447 -> 8.05e-3 J/m2.
     Emission train = Emission.pulseTrain(532e-9, 1e-6, 1e-4, 100);
-    Exposure iec = OcularMpe.at(train, 0.25).get();
-    Exposure ansi = AnsiOcularMpe.at(train, 0.25).get();
+    MaximumPermissibleExposure iec = OcularMpe.at(train, 0.25).get();
+    MaximumPermissibleExposure ansi = AnsiOcularMpe.at(train, 0.25).get();
     assertEquals(0.018, iec.radiantExposure(), 1e-6);
     assertEquals("single pulse", iec.limitingCriterion());
     assertEquals(iec.singlePulse(), ansi.singlePulse(), 1e-9, "same single-pulse row in both");

@@ -1,7 +1,7 @@
 package jonquil.safety;
 
 /**
- * Why it exists: one maximum permissible exposure, stated both as radiant exposure and as
+ * Why it exists: one maximum permissible exposure (MPE), stated both as radiant exposure and as
  * irradiance, with the aperture it is averaged over and the criterion that limited it.
  *
  * @param radiantExposure MPE as radiant exposure, J/m²: per pulse for pulsed emission, over the
@@ -19,7 +19,7 @@ package jonquil.safety;
  * @param limitingCriterion which criterion gave the value
  * @param table standard, edition and table it came from
  */
-public record Exposure(
+public record MaximumPermissibleExposure(
     double radiantExposure,
     double irradiance,
     double exposureDuration,

@@ -1,6 +1,7 @@
 package jonquil.analysis;
 
 import java.util.OptionalDouble;
+import jonquil.optics.beam.Irradiance;
 
 /**
  * What a beam delivers at one plane, from its power, its 1/e² radius w and its pulses: average
@@ -8,7 +9,7 @@ import java.util.OptionalDouble;
  * E/τ and peak fluence 2E/(πw²); the peak electric field amplitude follows from I = ½ n ε₀ c |E₀|²
  * in the local medium.
  */
-public record Exposure(
+public record BeamExposure(
     double power,
     double beamRadius,
     double averageIrradiance,
@@ -25,11 +26,10 @@ public record Exposure(
   /** Speed of light in vacuum, m/s (exact by definition of the metre, SI 2019). */
   public static final double C = 299_792_458.0;
 
-  public static Exposure of(
+  public static BeamExposure of(
       double power, double radius, java.util.Optional<Pulses> pulses, double index) {
-    double area = Math.PI * radius * radius;
-    double average = power / area;
-    double peak = 2 * power / area;
+    double average = Irradiance.mean(power, radius);
+    double peak = Irradiance.peak(power, radius);
     OptionalDouble energy = OptionalDouble.empty();
     OptionalDouble peakPower = OptionalDouble.empty();
     OptionalDouble fluence = OptionalDouble.empty();
@@ -39,10 +39,10 @@ public record Exposure(
       double pp = e / pulses.get().duration();
       energy = OptionalDouble.of(e);
       peakPower = OptionalDouble.of(pp);
-      fluence = OptionalDouble.of(2 * e / area);
-      fieldIrradiance = 2 * pp / area;
+      fluence = OptionalDouble.of(Irradiance.peak(e, radius));
+      fieldIrradiance = Irradiance.peak(pp, radius);
     }
-    return new Exposure(
+    return new BeamExposure(
         power,
         radius,
         average,

@@ -1,0 +1,144 @@
+package jonquil.safety;
+
+import java.util.function.DoubleBinaryOperator;
+
+/**
+ * The flow every MPE follows, whatever the standard and the tissue, written once: refuse what the
+ * tables do not cover, then continuous wave, a single pulse or a pulse train by {@link PulseTrain};
+ * each calculator plugs in its standard's table, coverage and repetitive-pulse rule, and every
+ * answer carries the caution.
+ */
+public abstract class MpeCalculator {
+  private final String table;
+  private final String trainTable;
+  private final double aperture;
+  private final PulseTrain.RuleNames rules;
+  private final String rulesCited;
+  private final DoubleBinaryOperator mpe;
+  private final double shortestPulse;
+  private final String shortestPulseText;
+
+  /**
+   * @param table standard, edition and tables the figure comes from
+   * @param trainTable the same for a pulse train, with its pulse rules
+   * @param aperture limiting aperture the exposure is averaged over, m
+   * @param rules the standard's names for the single-pulse and average-power rules
+   * @param rulesCited what a pulse train the pulse rules cannot judge is refused under
+   * @param mpe the radiant-exposure MPE (J/m²) at a wavelength (m) over a duration (s), inside the
+   *     covered range
+   * @param shortestPulse the shortest pulse (and exposure) the rows cover, s
+   * @param shortestPulseText the same as the refusals word it
+   */
+  protected MpeCalculator(
+      String table,
+      String trainTable,
+      double aperture,
+      PulseTrain.RuleNames rules,
+      String rulesCited,
+      DoubleBinaryOperator mpe,
+      double shortestPulse,
+      String shortestPulseText) {
+    this.table = table;
+    this.trainTable = trainTable;
+    this.aperture = aperture;
+    this.rules = rules;
+    this.rulesCited = rulesCited;
+    this.mpe = mpe;
+    this.shortestPulse = shortestPulse;
+    this.shortestPulseText = shortestPulseText;
+  }
+
+  /** Why the wavelength is outside the implemented rows, or null when it is inside. */
+  protected abstract String wavelengthRefusal(double lambda);
+
+  /**
+   * Why an exposure duration (cw or a train) is outside (0, 3×10⁴ s] or below the shortest pulse,
+   * or null when it is inside.
+   */
+  protected String durationRefusal(double t) {
+    if (!(t > 0) || !Double.isFinite(t)) {
+      return "exposure duration must be > 0 s";
+    }
+    if (t > TableScope.T_MAX) {
+      return "exposure duration " + t + " s exceeds 3e4 s, the end of the tables";
+    }
+    if (t < shortestPulse) {
+      return "exposure duration " + t + " s is below " + shortestPulseText + "; not implemented";
+    }
+    return null;
+  }
+
+  /**
+   * Why a pulse of duration tau (alone, or in a train) is outside the rows, or null: shorter than
+   * the shortest pulse, or longer than the tables.
+   */
+  protected abstract String pulseRefusal(double tau, boolean single);
+
+  /** The standard's repetitive-pulse rule at this wavelength; null where it applies none. */
+  protected PulseTrain.RepetitiveRule repetitiveRule(double lambda) {
+    return null;
+  }
+
+  /** Why a train its pulse rules could otherwise judge is still refused, or null. */
+  protected String trainRefusal(Emission e) {
+    return null;
+  }
+
+  /**
+   * The MPE for an emission and an exposure duration (s). Continuous wave: MPE(T). Single pulse:
+   * MPE(τ), T ignored. Pulse train: the standard's per-pulse limit (see {@link PulseTrain}).
+   */
+  public final Outcome<MaximumPermissibleExposure> evaluate(Emission e, double exposureDuration) {
+    String refusal = wavelengthRefusal(e.wavelength());
+    if (refusal == null && !e.singlePulseOnly()) {
+      refusal = durationRefusal(exposureDuration);
+    }
+    if (refusal == null && e.pulsed()) {
+      refusal = pulseRefusal(e.pulseDuration(), e.singlePulseOnly());
+    }
+    if (refusal != null) {
+      return Outcome.notEvaluated(refusal, table);
+    }
+    if (!e.pulsed()) {
+      return once(e.wavelength(), exposureDuration, "continuous wave", false);
+    }
+    if (e.singlePulseOnly()) {
+      return once(e.wavelength(), e.pulseDuration(), rules.singlePulse(), true);
+    }
+    String trainRefusal = e.trainProblem(exposureDuration);
+    if (trainRefusal == null) {
+      trainRefusal = trainRefusal(e);
+    }
+    if (trainRefusal != null) {
+      return Outcome.notEvaluated(trainRefusal, rulesCited);
+    }
+    double lambda = e.wavelength();
+    return Outcome.of(
+        PulseTrain.limit(
+            t -> mpe.applyAsDouble(lambda, t),
+            e.pulseDuration(),
+            e.repetitionRate(),
+            exposureDuration,
+            rules,
+            repetitiveRule(lambda),
+            aperture,
+            trainTable),
+        trainTable);
+  }
+
+  /** One exposure of duration t: continuous wave over t, or a single pulse t long. */
+  private Outcome<MaximumPermissibleExposure> once(
+      double lambda, double t, String criterion, boolean singlePulse) {
+    double h = mpe.applyAsDouble(lambda, t);
+    double single = singlePulse ? h : Double.NaN;
+    return Outcome.of(
+        new MaximumPermissibleExposure(
+            h, h / t, t, aperture, single, Double.NaN, Double.NaN, criterion, table),
+        table);
+  }
+
+  /** A wavelength in nanometres to one decimal, as the refusals quote it. */
+  protected static String nanometres(double lambda) {
+    return String.format(java.util.Locale.ROOT, "%.1f", CorrectionFactors.nm(lambda));
+  }
+}

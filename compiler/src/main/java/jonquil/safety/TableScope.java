@@ -1,0 +1,38 @@
+package jonquil.safety;
+
+/**
+ * The part of the MPE tables that both implemented standards share, IEC 60825-1:2014 (Ed. 3) and
+ * ANSI Z136.1-2014, written once: where the implemented rows start and end, and the limiting
+ * apertures the exposures are averaged over. Each standard's own end of the ocular wavelength range
+ * stays with its table.
+ */
+public final class TableScope {
+  private TableScope() {}
+
+  /** Lowest wavelength evaluated, m: the retinal hazard region and both tables' rows start here. */
+  public static final double LAMBDA_MIN = 400e-9;
+
+  /** Upper end of the evaluated skin range, m (skin rows 400–1400 nm of both tables). */
+  public static final double LAMBDA_MAX_SKIN = 1400e-9;
+
+  /** Longest exposure the tables cover, s (3×10⁴ s in both; from memory for ANSI). */
+  public static final double T_MAX = 3e4;
+
+  /**
+   * Shortest pulse evaluated for the eye, s. Both tables have rows below 10 ps (IEC from memory;
+   * ANSI 100 fs–10 ps); they are not implemented, so shorter pulses are "not evaluated".
+   */
+  public static final double T_MIN_EYE = 1e-11;
+
+  /** Shortest pulse evaluated for the skin, s (rows from 1 ns; below: not implemented). */
+  public static final double T_MIN_SKIN = 1e-9;
+
+  /**
+   * Limiting aperture for the eye, 400–1400 nm: 7 mm (IEC Table A.3, ANSI Table 8; both from
+   * memory; the 7 mm pupil is confirmed by the sources cited in Ed3).
+   */
+  public static final double APERTURE_EYE = 7e-3;
+
+  /** Limiting aperture for the skin, 400–1400 nm: 3.5 mm (IEC Table A.3, ANSI Table 8; memory). */
+  public static final double APERTURE_SKIN = 3.5e-3;
+}
