@@ -35,7 +35,7 @@ class SemanticTokensTest {
     for (SemanticToken t : tokens) {
       out.append(text, t.start(), t.start() + t.length())
           .append("  ")
-          .append(t.type())
+          .append(t.type().word())
           .append(t.declaration() ? " *" : "")
           .append('\n');
     }
@@ -46,7 +46,7 @@ class SemanticTokensTest {
   void theFixtureIsClassifiedExactly() throws IOException {
     Specs.Checked c =
         Specs.check(java.util.Map.of("main.jonq", FIXTURE, "parts.jonq", "probe spare\n"));
-    List<SemanticToken> tokens = Ide.semanticTokens(c.result(), Specs.MAIN);
+    List<SemanticToken> tokens = EditorFeatures.standard().semanticTokens(c.result(), Specs.MAIN);
     Path golden = Path.of("src/test/resources/ide/tokens/fixture.txt");
     String actual = render(FIXTURE, tokens);
     if (!Files.exists(golden) || Boolean.getBoolean("golden.update")) {
@@ -62,7 +62,7 @@ class SemanticTokensTest {
     for (String spec :
         List.of(FIXTURE, Specs.BENCH, "lens { focal 3 mm\n/* open", "train { a -> -> 3 }")) {
       Result r = Specs.check(spec).result();
-      List<SemanticToken> tokens = Ide.semanticTokens(r, Specs.MAIN);
+      List<SemanticToken> tokens = EditorFeatures.standard().semanticTokens(r, Specs.MAIN);
       for (int i = 1; i < tokens.size(); i++) {
         SemanticToken a = tokens.get(i - 1);
         assertTrue(
@@ -86,6 +86,6 @@ class SemanticTokensTest {
         /* x  comment
         y */  comment
         """,
-        render(spec, Ide.semanticTokens(r, Specs.MAIN)));
+        render(spec, EditorFeatures.standard().semanticTokens(r, Specs.MAIN)));
   }
 }

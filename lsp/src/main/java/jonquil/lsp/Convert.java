@@ -16,6 +16,7 @@ import jonquil.ide.CodeActionInfo;
 import jonquil.ide.CompletionItemInfo;
 import jonquil.ide.DocumentLinkInfo;
 import jonquil.ide.FoldingRangeInfo;
+import jonquil.ide.FoundSymbol;
 import jonquil.ide.HoverInfo;
 import jonquil.ide.SemanticToken;
 import jonquil.ide.SymbolInfo;
@@ -433,27 +434,15 @@ final class Convert {
     return hover;
   }
 
-  static SymbolKind symbolKind(String kind) {
-    switch (kind == null ? "" : kind) {
-      case "train":
-        return SymbolKind.Namespace;
-      case "path":
-      case "branch":
-        return SymbolKind.Array;
-      case "require":
-      case "requirements":
-      case "requirement":
-        return SymbolKind.Property;
-      case "material":
-      case "coating":
-        return SymbolKind.Constant;
-      case "source":
-        return SymbolKind.Event;
-      case "file":
-        return SymbolKind.File;
-      default:
-        return SymbolKind.Object;
-    }
+  static SymbolKind symbolKind(SymbolInfo.Kind kind) {
+    return switch (kind) {
+      case TRAIN -> SymbolKind.Namespace;
+      case PATH -> SymbolKind.Array;
+      case REQUIRE, REQUIREMENT -> SymbolKind.Property;
+      case MATERIAL -> SymbolKind.Constant;
+      case SOURCE -> SymbolKind.Event;
+      case USE, ELEMENT, PARAMETER -> SymbolKind.Object;
+    };
   }
 
   DocumentSymbol documentSymbol(SymbolInfo symbol, SourceFile source) {
@@ -461,7 +450,7 @@ final class Convert {
     Range name =
         range(source, symbol.selectionRange() != null ? symbol.selectionRange() : symbol.range());
     DocumentSymbol out =
-        new DocumentSymbol(symbol.name(), symbolKind(symbol.kind()), whole, name, symbol.kind());
+        new DocumentSymbol(symbol.name(), symbolKind(symbol.kind()), whole, name, symbol.detail());
     List<DocumentSymbol> children = new ArrayList<>();
     for (SymbolInfo child : symbol.children() == null ? List.<SymbolInfo>of() : symbol.children()) {
       children.add(documentSymbol(child, source));
@@ -486,8 +475,7 @@ final class Convert {
     }
   }
 
-  WorkspaceSymbol workspaceSymbol(
-      EditorAnswers.FileSymbol found, Function<Path, SourceFile> sources) {
+  WorkspaceSymbol workspaceSymbol(FoundSymbol found, Function<Path, SourceFile> sources) {
     SourceFile source = orEmpty(found.file(), sources.apply(found.file()));
     SymbolInfo s = found.symbol();
     TextRange at = s.selectionRange() != null ? s.selectionRange() : s.range();
@@ -540,27 +528,17 @@ final class Convert {
   /**
    * The compiler's completion kinds as LSP kinds; all are in the range every client knows (1-18).
    */
-  static CompletionItemKind completionKind(String kind) {
-    switch (kind == null ? "" : kind) {
-      case "keyword":
-        return CompletionItemKind.Keyword;
-      case "kind":
-        return CompletionItemKind.Class;
-      case "parameter":
-        return CompletionItemKind.Property;
-      case "element":
-        return CompletionItemKind.Variable;
-      case "port":
-        return CompletionItemKind.Field;
-      case "material":
-        return CompletionItemKind.Value;
-      case "unit":
-        return CompletionItemKind.Unit;
-      case "measure":
-        return CompletionItemKind.Function;
-      default:
-        return CompletionItemKind.Text;
-    }
+  static CompletionItemKind completionKind(CompletionItemInfo.Kind kind) {
+    return switch (kind) {
+      case KEYWORD -> CompletionItemKind.Keyword;
+      case KIND -> CompletionItemKind.Class;
+      case PARAMETER -> CompletionItemKind.Property;
+      case ELEMENT -> CompletionItemKind.Variable;
+      case PORT -> CompletionItemKind.Field;
+      case MATERIAL -> CompletionItemKind.Value;
+      case UNIT -> CompletionItemKind.Unit;
+      case MEASURE -> CompletionItemKind.Function;
+    };
   }
 
   /**
@@ -640,8 +618,8 @@ final class Convert {
     int lastLine = 0;
     int lastColumn = 0;
     for (SemanticToken t : tokens) {
-      int type = tokenTypes.indexOf(t.type());
-      if (type < 0 && UNIT_TOKEN.equals(t.type())) {
+      int type = tokenTypes.indexOf(tokenType(t.type()));
+      if (type < 0 && t.type() == SemanticToken.Type.UNIT) {
         type = tokenTypes.indexOf("type");
       }
       if (type < 0) {
@@ -671,6 +649,21 @@ final class Convert {
       }
     }
     return data;
+  }
+
+  /** The legend's name of a token type. */
+  static String tokenType(SemanticToken.Type type) {
+    return switch (type) {
+      case KEYWORD -> "keyword";
+      case TYPE -> "type";
+      case VARIABLE -> "variable";
+      case PROPERTY -> "property";
+      case NUMBER -> "number";
+      case UNIT -> UNIT_TOKEN;
+      case STRING -> "string";
+      case COMMENT -> "comment";
+      case OPERATOR -> "operator";
+    };
   }
 
   static SemanticTokens semanticTokens(String resultId, List<Integer> data) {

@@ -27,6 +27,7 @@ import jonquil.Checker;
 import jonquil.Result;
 import jonquil.Workspace;
 import jonquil.cli.ToolVersion;
+import jonquil.ide.EditorFeatures;
 import jonquil.source.SourceFile;
 import org.eclipse.lsp4j.ClientCapabilities;
 import org.eclipse.lsp4j.CodeActionKind;
@@ -83,7 +84,7 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     EXITED
   }
 
-  final EditorAnswers answers;
+  final EditorFeatures answers;
   final Documents documents = new Documents();
   final Snapshots snapshots = new Snapshots();
   final WorkspaceIndex index;
@@ -124,15 +125,15 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
   }
 
   public JonquilLanguageServer() {
-    this(new IdeAnswers());
+    this(EditorFeatures.standard());
   }
 
-  public JonquilLanguageServer(EditorAnswers answers) {
+  public JonquilLanguageServer(EditorFeatures answers) {
     this(answers, DEBOUNCE, true, null);
   }
 
   /** A server that writes a debug line per check and per request to {@code debug} (null: none). */
-  public JonquilLanguageServer(EditorAnswers answers, PrintStream debug) {
+  public JonquilLanguageServer(EditorFeatures answers, PrintStream debug) {
     this(answers, DEBOUNCE, true, debug);
   }
 
@@ -140,7 +141,7 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
    * A server whose checks wait {@code debounce} after the last edit (tests and benchmarks shorten
    * it).
    */
-  JonquilLanguageServer(EditorAnswers answers, Duration debounce) {
+  JonquilLanguageServer(EditorFeatures answers, Duration debounce) {
     this(answers, debounce, true, null);
   }
 
@@ -148,12 +149,12 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
    * As above; with {@code checkAfterPause} false even an edit after a pause waits for the debounce
    * (for tests).
    */
-  JonquilLanguageServer(EditorAnswers answers, Duration debounce, boolean checkAfterPause) {
+  JonquilLanguageServer(EditorFeatures answers, Duration debounce, boolean checkAfterPause) {
     this(answers, debounce, checkAfterPause, null);
   }
 
   private JonquilLanguageServer(
-      EditorAnswers answers, Duration debounce, boolean checkAfterPause, PrintStream debug) {
+      EditorFeatures answers, Duration debounce, boolean checkAfterPause, PrintStream debug) {
     this.answers = answers;
     this.debug = debug;
     this.cycle =

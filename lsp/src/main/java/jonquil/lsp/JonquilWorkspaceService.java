@@ -9,6 +9,7 @@ import java.util.Set;
 import java.util.concurrent.CompletableFuture;
 import jonquil.Result;
 import jonquil.ide.FileIndex;
+import jonquil.ide.FoundSymbol;
 import org.eclipse.lsp4j.DidChangeConfigurationParams;
 import org.eclipse.lsp4j.DidChangeWatchedFilesParams;
 import org.eclipse.lsp4j.DidChangeWorkspaceFoldersParams;
@@ -46,7 +47,7 @@ final class JonquilWorkspaceService implements WorkspaceService {
         (snapshot, none) -> {
           // The checks of the open documents answer for the files they read; the workspace index
           // for all others.
-          Set<EditorAnswers.FileSymbol> found = new LinkedHashSet<>();
+          Set<FoundSymbol> found = new LinkedHashSet<>();
           Set<Path> checked = new HashSet<>();
           for (Result r : snapshot.results()) {
             found.addAll(server.answers.workspaceSymbols(r, query));
@@ -58,7 +59,7 @@ final class JonquilWorkspaceService implements WorkspaceService {
           found.addAll(server.answers.workspaceSymbols(unchecked, query));
           List<WorkspaceSymbol> out = new ArrayList<>();
           Convert convert = server.convert();
-          for (EditorAnswers.FileSymbol s : found) {
+          for (FoundSymbol s : found) {
             if (out.size() == MAX_SYMBOLS) {
               break;
             }

@@ -37,6 +37,7 @@ import jonquil.CheckOptions;
 import jonquil.Checker;
 import jonquil.Result;
 import jonquil.Workspace;
+import jonquil.ide.EditorFeatures;
 import jonquil.ide.FileIndex;
 import jonquil.source.SourceFile;
 import org.eclipse.lsp4j.MessageType;
@@ -132,7 +133,7 @@ final class WorkspaceIndex implements AutoCloseable {
     boolean capped;
   }
 
-  private final EditorAnswers answers;
+  private final EditorFeatures answers;
   private final Documents documents;
   private final Supplier<LanguageClient> client;
   private final BiConsumer<MessageType, String> log;
@@ -173,7 +174,7 @@ final class WorkspaceIndex implements AutoCloseable {
   private boolean fullLogged;
 
   WorkspaceIndex(
-      EditorAnswers answers,
+      EditorFeatures answers,
       Documents documents,
       Supplier<LanguageClient> client,
       BiConsumer<MessageType, String> log) {

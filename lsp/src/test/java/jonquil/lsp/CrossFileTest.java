@@ -11,6 +11,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.TimeUnit;
+import jonquil.ide.EditorFeatures;
 import org.eclipse.lsp4j.ClientCapabilities;
 import org.eclipse.lsp4j.DocumentSymbol;
 import org.eclipse.lsp4j.DocumentSymbolCapabilities;
@@ -78,7 +79,7 @@ class CrossFileTest {
   }
 
   private LspHarness openMain(ClientCapabilities caps, int version) throws Exception {
-    LspHarness h = new LspHarness(new IdeAnswers());
+    LspHarness h = new LspHarness(EditorFeatures.standard());
     h.initialize(dir, caps);
     h.open(mainUri, version, MAIN);
     h.client.await(mainUri, p -> Integer.valueOf(version).equals(p.getVersion()));

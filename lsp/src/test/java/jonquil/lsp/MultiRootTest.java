@@ -9,6 +9,7 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
+import jonquil.ide.EditorFeatures;
 import org.eclipse.lsp4j.ClientCapabilities;
 import org.eclipse.lsp4j.DefinitionParams;
 import org.eclipse.lsp4j.DidChangeWorkspaceFoldersParams;
@@ -127,7 +128,7 @@ class MultiRootTest {
     String inner = uri(write(c.resolve("inner.jonq"), innerText));
     Position onFold1 = new Position(4, 22);
 
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       InitializeResult init = h.initialize(List.of(a, b), new ClientCapabilities());
       WorkspaceFoldersOptions advertised =
           init.getCapabilities().getWorkspace().getWorkspaceFolders();

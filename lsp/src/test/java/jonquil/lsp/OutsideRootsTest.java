@@ -15,6 +15,7 @@ import java.util.TreeSet;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.TimeUnit;
+import jonquil.ide.EditorFeatures;
 import org.eclipse.lsp4j.ClientCapabilities;
 import org.eclipse.lsp4j.CodeAction;
 import org.eclipse.lsp4j.CodeActionCapabilities;
@@ -121,7 +122,7 @@ class OutsideRootsTest {
 
   private LspHarness openBench() throws Exception {
     write();
-    LspHarness h = new LspHarness(new IdeAnswers());
+    LspHarness h = new LspHarness(EditorFeatures.standard());
     h.initialize(List.of(folder), fixingClient());
     h.open(benchUri, 1, BENCH);
     return h;
@@ -295,7 +296,7 @@ class OutsideRootsTest {
     Files.writeString(main, text);
     String mainUri = main.toUri().toString();
     String libUri = folder.resolve("lib.jonq").toUri().toString();
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       h.initialize(List.of(folder), fixingClient());
       h.open(mainUri, 1, text);
       h.client.await(mainUri, p -> Integer.valueOf(1).equals(p.getVersion()));
