@@ -19,6 +19,7 @@ import jonquil.ide.FoldingRangeInfo;
 import jonquil.ide.FoundSymbol;
 import jonquil.ide.HoverInfo;
 import jonquil.ide.SemanticToken;
+import jonquil.ide.SemanticTokenDelta;
 import jonquil.ide.SymbolInfo;
 import jonquil.source.LineIndex;
 import jonquil.source.SourceFile;
@@ -676,22 +677,12 @@ final class Convert {
    */
   static SemanticTokensDelta semanticTokensDelta(
       String resultId, List<Integer> before, List<Integer> after) {
-    int prefix = 0;
-    int most = Math.min(before.size(), after.size());
-    while (prefix < most && before.get(prefix).equals(after.get(prefix))) {
-      prefix++;
-    }
-    int suffix = 0;
-    while (suffix < most - prefix
-        && before.get(before.size() - 1 - suffix).equals(after.get(after.size() - 1 - suffix))) {
-      suffix++;
-    }
     List<SemanticTokensEdit> edits = new ArrayList<>();
-    int deleted = before.size() - prefix - suffix;
-    List<Integer> inserted = after.subList(prefix, after.size() - suffix);
-    if (deleted > 0 || !inserted.isEmpty()) {
-      edits.add(new SemanticTokensEdit(prefix, deleted, new ArrayList<>(inserted)));
-    }
+    SemanticTokenDelta.between(before, after)
+        .ifPresent(
+            d ->
+                edits.add(
+                    new SemanticTokensEdit(d.start(), d.deleteCount(), new ArrayList<>(d.data()))));
     return new SemanticTokensDelta(edits, resultId);
   }
 

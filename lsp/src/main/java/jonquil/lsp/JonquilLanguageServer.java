@@ -28,6 +28,7 @@ import jonquil.Result;
 import jonquil.Workspace;
 import jonquil.cli.ToolVersion;
 import jonquil.ide.EditorFeatures;
+import jonquil.source.ProjectRoot;
 import jonquil.source.SourceFile;
 import org.eclipse.lsp4j.ClientCapabilities;
 import org.eclipse.lsp4j.CodeActionKind;
@@ -522,7 +523,7 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     Map<Path, String> buffers = new HashMap<>();
     documents.snapshot().forEach((p, open) -> buffers.put(p, open.text()));
     buffers.put(doc.path(), doc.text());
-    Path root = CheckCycle.projectRoot(doc.path(), folders.paths());
+    Path root = ProjectRoot.owning(doc.path(), folders.paths());
     return Checker.check(
         Workspace.withOverlay(root, buffers), List.of(doc.path()), CheckOptions.EDITOR);
   }

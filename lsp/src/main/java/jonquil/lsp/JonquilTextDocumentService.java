@@ -12,6 +12,7 @@ import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.atomic.AtomicLong;
 import java.util.concurrent.atomic.AtomicReference;
+import jonquil.format.FormatHunks;
 import jonquil.format.Formatter;
 import jonquil.ide.CodeActionInfo;
 import jonquil.ide.CompletionItemInfo;

@@ -39,6 +39,7 @@ import jonquil.Result;
 import jonquil.Workspace;
 import jonquil.ide.EditorFeatures;
 import jonquil.ide.FileIndex;
+import jonquil.ide.IndexRebuild;
 import jonquil.source.SourceFile;
 import org.eclipse.lsp4j.MessageType;
 import org.eclipse.lsp4j.services.LanguageClient;
@@ -470,58 +471,29 @@ final class WorkspaceIndex implements AutoCloseable {
   }
 
   /**
-   * Re-indexes the changed files, then, for those whose names, 'use' lines or read files changed
-   * (or that came or went), every indexed file that reads or uses one of them, however indirectly.
-   * Editing the body of a library that many files use re-reads the library alone.
+   * Re-indexes the changed files, then the files whose entries depend on what changed in them (see
+   * {@link IndexRebuild}).
    */
   private void refresh(Set<Path> changed) {
-    Map<Path, Signature> before = new HashMap<>();
-    changed.forEach(p -> before.put(p, signature(p)));
-    reindex(changed);
-    Set<Path> moved = new LinkedHashSet<>();
+    Map<Path, FileIndex> before = new HashMap<>();
+    Map<Path, FileIndex> all = entries();
     for (Path p : changed) {
-      Signature now = signature(p);
-      if (now == null || !now.equals(before.get(p))) {
-        moved.add(p);
+      if (all.containsKey(p)) {
+        before.put(p, all.get(p));
       }
     }
-    Set<Path> affected = new LinkedHashSet<>(moved);
-    for (boolean grew = true; grew; ) {
-      grew = false;
-      for (Map<Path, FileIndex> files : byFolder.values()) {
-        for (FileIndex f : files.values()) {
-          if (!affected.contains(f.file())
-              && (anyIn(f.reads(), affected) || anyIn(f.uses(), affected))) {
-            affected.add(f.file());
-            grew = true;
-          }
-        }
-      }
-    }
-    affected.removeAll(changed);
+    reindex(changed);
+    Set<Path> affected = IndexRebuild.dependents(changed, before, entries());
     if (!affected.isEmpty()) {
       reindex(affected);
     }
   }
 
-  /**
-   * What other files' entries depend on: the names a file declares, the files it uses and the files
-   * it reads.
-   */
-  private record Signature(Set<String> declared, List<Path> uses, List<Path> reads) {}
-
-  private Signature signature(Path file) {
-    for (Map<Path, FileIndex> m : byFolder.values()) {
-      FileIndex f = m.get(file);
-      if (f != null) {
-        Set<String> declared = new HashSet<>();
-        f.names().stream()
-            .filter(FileIndex.NameUse::declaration)
-            .forEach(n -> declared.add(n.name()));
-        return new Signature(declared, f.uses(), f.reads());
-      }
-    }
-    return null;
+  /** Every entry, folder by folder. */
+  private Map<Path, FileIndex> entries() {
+    Map<Path, FileIndex> out = new LinkedHashMap<>();
+    byFolder.values().forEach(out::putAll);
+    return out;
   }
 
   /**
@@ -741,15 +713,6 @@ final class WorkspaceIndex implements AutoCloseable {
 
   private static long size(Path file) {
     return stamp(file).map(Stamp::size).orElse(Long.MAX_VALUE);
-  }
-
-  private static boolean anyIn(List<Path> paths, Set<Path> set) {
-    for (Path p : paths) {
-      if (set.contains(p)) {
-        return true;
-      }
-    }
-    return false;
   }
 
   // ---- progress: only for a client that takes it, and only under a token it accepted ----

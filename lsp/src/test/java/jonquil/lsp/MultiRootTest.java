@@ -10,6 +10,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
 import jonquil.ide.EditorFeatures;
+import jonquil.source.ProjectRoot;
 import org.eclipse.lsp4j.ClientCapabilities;
 import org.eclipse.lsp4j.DefinitionParams;
 import org.eclipse.lsp4j.DidChangeWorkspaceFoldersParams;
@@ -111,7 +112,7 @@ class MultiRootTest {
 
   @Test
   void sameNamedSymbolsInTwoFoldersStaySeparateAndFolderChangesReRoot() throws Exception {
-    Files.writeString(base.resolve(CheckCycle.ROOT_MARKER), "");
+    Files.writeString(base.resolve(ProjectRoot.MARKER), "");
     write(base.resolve("shared.jonq"), "mirror wide" + MIRROR);
     Path a = base.resolve("a");
     Path b = base.resolve("b");

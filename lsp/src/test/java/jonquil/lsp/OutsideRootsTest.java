@@ -16,6 +16,7 @@ import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.TimeUnit;
 import jonquil.ide.EditorFeatures;
+import jonquil.source.ProjectRoot;
 import org.eclipse.lsp4j.ClientCapabilities;
 import org.eclipse.lsp4j.CodeAction;
 import org.eclipse.lsp4j.CodeActionCapabilities;
@@ -98,7 +99,7 @@ class OutsideRootsTest {
     folder = Files.createDirectories(dir.resolve("ws")).toAbsolutePath().normalize();
     Files.writeString(folder.resolve("inside.jonq"), "probe p\n");
     Path outside = Files.createDirectories(dir.resolve("outside")).toAbsolutePath().normalize();
-    Files.writeString(outside.resolve(CheckCycle.ROOT_MARKER), "");
+    Files.writeString(outside.resolve(ProjectRoot.MARKER), "");
     Path bench = Files.createDirectories(outside.resolve("benches")).resolve("bench.jonq");
     Path parts = Files.createDirectories(outside.resolve("parts")).resolve("parts.jonq");
     Files.writeString(bench, BENCH);
