@@ -31,25 +31,14 @@ import jonquil.ide.EditorFeatures;
 import jonquil.source.ProjectRoot;
 import jonquil.source.SourceFile;
 import org.eclipse.lsp4j.ClientCapabilities;
-import org.eclipse.lsp4j.CodeActionKind;
-import org.eclipse.lsp4j.CodeActionOptions;
-import org.eclipse.lsp4j.CompletionOptions;
-import org.eclipse.lsp4j.DocumentLinkOptions;
 import org.eclipse.lsp4j.InitializeParams;
 import org.eclipse.lsp4j.InitializeResult;
 import org.eclipse.lsp4j.InitializedParams;
 import org.eclipse.lsp4j.MessageParams;
 import org.eclipse.lsp4j.MessageType;
 import org.eclipse.lsp4j.Position;
-import org.eclipse.lsp4j.Registration;
 import org.eclipse.lsp4j.RegistrationParams;
-import org.eclipse.lsp4j.RenameOptions;
-import org.eclipse.lsp4j.SemanticTokensServerFull;
-import org.eclipse.lsp4j.SemanticTokensWithRegistrationOptions;
-import org.eclipse.lsp4j.ServerCapabilities;
 import org.eclipse.lsp4j.ServerInfo;
-import org.eclipse.lsp4j.TextDocumentSyncKind;
-import org.eclipse.lsp4j.TextDocumentSyncOptions;
 import org.eclipse.lsp4j.WorkDoneProgressCancelParams;
 import org.eclipse.lsp4j.WorkspaceFolder;
 import org.eclipse.lsp4j.jsonrpc.ResponseErrorException;
@@ -71,12 +60,6 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
 
   /** How long a request waits for the check of the version it was asked about. */
   static final Duration FRESH_WAIT = Duration.ofSeconds(5);
-
-  /** The files whose change on disk can change a check: specs, and the n,k tables they name. */
-  static final List<String> WATCHED_GLOBS =
-      List.of("**/*.jonq", "**/*.txt", "**/*.csv", "**/*.tsv");
-
-  static final String WATCHERS_ID = "jonquil-watched-files";
 
   private enum State {
     NEW,
@@ -106,6 +89,7 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
   private final AtomicReference<State> state = new AtomicReference<>(State.NEW);
   private volatile LanguageClient client;
   private volatile Convert convert = new Convert(Convert.Encoding.UTF_16, documents::uriOf);
+  private volatile SemanticTokenEncoding tokenEncoding = new SemanticTokenEncoding(false);
   private volatile ClientCapabilities capabilities = new ClientCapabilities();
   private volatile Folders folders = new Folders(List.of(), 0);
 
@@ -218,63 +202,18 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
       ClientCapabilities caps =
           params.getCapabilities() != null ? params.getCapabilities() : new ClientCapabilities();
       capabilities = caps;
-      convert =
-          new Convert(
-              Convert.Encoding.negotiate(caps),
-              documents::uriOf,
-              ClientSupport.semanticTokenType(caps, Convert.UNIT_TOKEN));
+      convert = new Convert(Convert.Encoding.negotiate(caps), documents::uriOf);
+      tokenEncoding =
+          new SemanticTokenEncoding(
+              ClientSupport.semanticTokenType(caps, SemanticTokenEncoding.UNIT_TOKEN));
       folders = new Folders(foldersOf(params), folders.generation() + 1);
       return CompletableFuture.completedFuture(
           new InitializeResult(
-              capabilities(caps), new ServerInfo("jonquil", ToolVersion.current())));
+              ServerFeatures.of(caps, convert.encoding(), tokenEncoding),
+              new ServerInfo("jonquil", ToolVersion.current())));
     } catch (RuntimeException e) {
       return CompletableFuture.failedFuture(asResponseError("initialize", e));
     }
-  }
-
-  private ServerCapabilities capabilities(ClientCapabilities caps) {
-    ServerCapabilities out = new ServerCapabilities();
-    out.setPositionEncoding(convert.encoding().wire());
-    TextDocumentSyncOptions sync = new TextDocumentSyncOptions();
-    sync.setOpenClose(true);
-    sync.setChange(TextDocumentSyncKind.Incremental);
-    out.setTextDocumentSync(sync);
-    out.setHoverProvider(true);
-    out.setDefinitionProvider(true);
-    out.setReferencesProvider(true);
-    if (ClientSupport.prepareRename(caps)) {
-      out.setRenameProvider(new RenameOptions(true));
-    } else {
-      out.setRenameProvider(true);
-    }
-    out.setDocumentSymbolProvider(true);
-    out.setWorkspaceSymbolProvider(true);
-    // Sent whatever the client said: one without workspace folders never sends the notification.
-    out.setWorkspace(Convert.workspaceFolders());
-    out.setDocumentFormattingProvider(true);
-    out.setDocumentRangeFormattingProvider(true);
-    CompletionOptions completion = new CompletionOptions(true, List.of("."));
-    out.setCompletionProvider(completion);
-    out.setSemanticTokensProvider(
-        new SemanticTokensWithRegistrationOptions(
-            convert.semanticTokensLegend(), new SemanticTokensServerFull(true), false));
-    // Advertised to every client: one without the capability simply never asks, and one that
-    // cannot resolve tooltips gets them inline.
-    out.setInlayHintProvider(Convert.inlayHintProvider());
-    out.setFoldingRangeProvider(true);
-    out.setDocumentLinkProvider(new DocumentLinkOptions(false));
-    if (ClientSupport.pullDiagnostics(caps)) {
-      // A document's diagnostics depend on the files it uses; no workspace-wide pull.
-      out.setDiagnosticProvider(Convert.diagnosticProvider());
-    }
-    if (ClientSupport.codeActionLiterals(caps)) {
-      out.setCodeActionProvider(new CodeActionOptions(List.of(CodeActionKind.QuickFix)));
-    } else {
-      // A client without literal code actions would need commands; it gets none, so it is told
-      // nothing is offered.
-      out.setCodeActionProvider(false);
-    }
-    return out;
   }
 
   @SuppressWarnings("deprecation")
@@ -308,13 +247,7 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     index.start(folders.paths(), ClientSupport.workDoneProgress(capabilities), watching);
     if (watching) {
       // Never wait for the reply here: this runs on the reader thread, which must read it.
-      c.registerCapability(
-              new RegistrationParams(
-                  List.of(
-                      new Registration(
-                          WATCHERS_ID,
-                          "workspace/didChangeWatchedFiles",
-                          Convert.fileWatchers(WATCHED_GLOBS)))))
+      c.registerCapability(new RegistrationParams(List.of(ServerFeatures.fileWatching())))
           .whenComplete(
               (ok, error) -> {
                 if (error != null) {
@@ -383,6 +316,10 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     return convert;
   }
 
+  SemanticTokenEncoding tokenEncoding() {
+    return tokenEncoding;
+  }
+
   ClientCapabilities clientCapabilities() {
     return capabilities;
   }
@@ -413,7 +350,7 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
   public void cancelProgress(WorkDoneProgressCancelParams params) {
     onNotification(
         "window/workDoneProgress/cancel",
-        () -> index.cancelProgress(Convert.progressToken(params.getToken())));
+        () -> index.cancelProgress(IndexProgress.progressToken(params.getToken())));
   }
 
   /**
@@ -744,146 +681,6 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
       } catch (RuntimeException e) {
         // the client is gone; stderr has it
       }
-    }
-  }
-
-  /** Null-safe reads of optional client capabilities (clients omit what they do not support). */
-  static final class ClientSupport {
-    private ClientSupport() {}
-
-    static boolean prepareRename(ClientCapabilities c) {
-      return c != null
-          && c.getTextDocument() != null
-          && c.getTextDocument().getRename() != null
-          && Boolean.TRUE.equals(c.getTextDocument().getRename().getPrepareSupport());
-    }
-
-    static boolean markdownHover(ClientCapabilities c) {
-      return c != null
-          && c.getTextDocument() != null
-          && c.getTextDocument().getHover() != null
-          && c.getTextDocument().getHover().getContentFormat() != null
-          && c.getTextDocument().getHover().getContentFormat().contains("markdown");
-    }
-
-    /**
-     * The client pulls document diagnostics (textDocument/diagnostic), so they are not pushed to
-     * it.
-     */
-    static boolean pullDiagnostics(ClientCapabilities c) {
-      return c != null
-          && c.getTextDocument() != null
-          && c.getTextDocument().getDiagnostic() != null;
-    }
-
-    static boolean definitionLinks(ClientCapabilities c) {
-      return c != null
-          && c.getTextDocument() != null
-          && c.getTextDocument().getDefinition() != null
-          && Boolean.TRUE.equals(c.getTextDocument().getDefinition().getLinkSupport());
-    }
-
-    static boolean hierarchicalSymbols(ClientCapabilities c) {
-      return c != null
-          && c.getTextDocument() != null
-          && c.getTextDocument().getDocumentSymbol() != null
-          && Boolean.TRUE.equals(
-              c.getTextDocument().getDocumentSymbol().getHierarchicalDocumentSymbolSupport());
-    }
-
-    static boolean workDoneProgress(ClientCapabilities c) {
-      return c != null
-          && c.getWindow() != null
-          && Boolean.TRUE.equals(c.getWindow().getWorkDoneProgress());
-    }
-
-    static boolean watchedFilesRegistration(ClientCapabilities c) {
-      return c != null
-          && c.getWorkspace() != null
-          && c.getWorkspace().getDidChangeWatchedFiles() != null
-          && Boolean.TRUE.equals(
-              c.getWorkspace().getDidChangeWatchedFiles().getDynamicRegistration());
-    }
-
-    /** The client resolves completion items lazily and takes their documentation that way. */
-    static boolean lazyCompletionDocumentation(ClientCapabilities c) {
-      return c != null
-          && c.getTextDocument() != null
-          && c.getTextDocument().getCompletion() != null
-          && c.getTextDocument().getCompletion().getCompletionItem() != null
-          && c.getTextDocument().getCompletion().getCompletionItem().getResolveSupport() != null
-          && c.getTextDocument()
-                  .getCompletion()
-                  .getCompletionItem()
-                  .getResolveSupport()
-                  .getProperties()
-              != null
-          && c.getTextDocument()
-              .getCompletion()
-              .getCompletionItem()
-              .getResolveSupport()
-              .getProperties()
-              .contains("documentation");
-    }
-
-    /** The client resolves inlay hints lazily and takes their tooltips that way. */
-    static boolean lazyInlayHintTooltips(ClientCapabilities c) {
-      return c != null
-          && c.getTextDocument() != null
-          && c.getTextDocument().getInlayHint() != null
-          && c.getTextDocument().getInlayHint().getResolveSupport() != null
-          && c.getTextDocument().getInlayHint().getResolveSupport().getProperties() != null
-          && c.getTextDocument()
-              .getInlayHint()
-              .getResolveSupport()
-              .getProperties()
-              .contains("tooltip");
-    }
-
-    /** The client names this token type among those it knows. */
-    static boolean semanticTokenType(ClientCapabilities c, String type) {
-      return c != null
-          && c.getTextDocument() != null
-          && c.getTextDocument().getSemanticTokens() != null
-          && c.getTextDocument().getSemanticTokens().getTokenTypes() != null
-          && c.getTextDocument().getSemanticTokens().getTokenTypes().contains(type);
-    }
-
-    static boolean lineFoldingOnly(ClientCapabilities c) {
-      return c != null
-          && c.getTextDocument() != null
-          && c.getTextDocument().getFoldingRange() != null
-          && Boolean.TRUE.equals(c.getTextDocument().getFoldingRange().getLineFoldingOnly());
-    }
-
-    /** The most folding ranges the client wants, or null when it sets no limit. */
-    static Integer foldingRangeLimit(ClientCapabilities c) {
-      return c == null
-              || c.getTextDocument() == null
-              || c.getTextDocument().getFoldingRange() == null
-          ? null
-          : c.getTextDocument().getFoldingRange().getRangeLimit();
-    }
-
-    static boolean codeActionLiterals(ClientCapabilities c) {
-      return c != null
-          && c.getTextDocument() != null
-          && c.getTextDocument().getCodeAction() != null
-          && c.getTextDocument().getCodeAction().getCodeActionLiteralSupport() != null;
-    }
-
-    static boolean preferredCodeActions(ClientCapabilities c) {
-      return c != null
-          && c.getTextDocument() != null
-          && c.getTextDocument().getCodeAction() != null
-          && Boolean.TRUE.equals(c.getTextDocument().getCodeAction().getIsPreferredSupport());
-    }
-
-    static boolean documentChanges(ClientCapabilities c) {
-      return c != null
-          && c.getWorkspace() != null
-          && c.getWorkspace().getWorkspaceEdit() != null
-          && Boolean.TRUE.equals(c.getWorkspace().getWorkspaceEdit().getDocumentChanges());
     }
   }
 }

@@ -184,8 +184,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
 
   @Override
   public CompletableFuture<Hover> hover(HoverParams params) {
-    boolean markdown =
-        JonquilLanguageServer.ClientSupport.markdownHover(server.clientCapabilities());
+    boolean markdown = ClientSupport.markdownHover(server.clientCapabilities());
     return server.atPosition(
         "textDocument/hover",
         params.getTextDocument().getUri(),
@@ -195,15 +194,14 @@ final class JonquilTextDocumentService implements TextDocumentService {
             server
                 .answers
                 .hover(at.result(), at.path(), at.offset())
-                .map(info -> at.convert().hover(info, at.source(), markdown))
+                .map(info -> ProtocolAnswers.hover(at.convert(), info, at.source(), markdown))
                 .orElse(null));
   }
 
   @Override
   public CompletableFuture<Either<List<? extends Location>, List<? extends LocationLink>>>
       definition(DefinitionParams params) {
-    boolean links =
-        JonquilLanguageServer.ClientSupport.definitionLinks(server.clientCapabilities());
+    boolean links = ClientSupport.definitionLinks(server.clientCapabilities());
     return server.atPosition(
         "textDocument/definition",
         params.getTextDocument().getUri(),
@@ -323,8 +321,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
 
   @Override
   public CompletableFuture<WorkspaceEdit> rename(RenameParams params) {
-    boolean documentChanges =
-        JonquilLanguageServer.ClientSupport.documentChanges(server.clientCapabilities());
+    boolean documentChanges = ClientSupport.documentChanges(server.clientCapabilities());
     return server.atPosition(
         "textDocument/rename",
         params.getTextDocument().getUri(),
@@ -367,8 +364,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
   @Override
   public CompletableFuture<List<Either<SymbolInformation, DocumentSymbol>>> documentSymbol(
       DocumentSymbolParams params) {
-    boolean hierarchical =
-        JonquilLanguageServer.ClientSupport.hierarchicalSymbols(server.clientCapabilities());
+    boolean hierarchical = ClientSupport.hierarchicalSymbols(server.clientCapabilities());
     return server.atPosition(
         "textDocument/documentSymbol",
         params.getTextDocument().getUri(),
@@ -379,10 +375,10 @@ final class JonquilTextDocumentService implements TextDocumentService {
           List<Either<SymbolInformation, DocumentSymbol>> out = new ArrayList<>();
           for (SymbolInfo s : server.answers.documentSymbols(at.result(), at.path())) {
             if (hierarchical) {
-              out.add(Either.forRight(at.convert().documentSymbol(s, source)));
+              out.add(Either.forRight(ProtocolAnswers.documentSymbol(at.convert(), s, source)));
             } else {
               List<SymbolInformation> flat = new ArrayList<>();
-              at.convert().flatten(s, source, null, flat);
+              ProtocolAnswers.flatten(at.convert(), s, source, null, flat);
               flat.forEach(f -> out.add(Either.forLeft(f)));
             }
           }
@@ -395,9 +391,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
   @Override
   public CompletableFuture<Either<List<CompletionItem>, CompletionList>> completion(
       CompletionParams params) {
-    boolean lazy =
-        JonquilLanguageServer.ClientSupport.lazyCompletionDocumentation(
-            server.clientCapabilities());
+    boolean lazy = ClientSupport.lazyCompletionDocumentation(server.clientCapabilities());
     return server.atBuffer(
         "textDocument/completion",
         params.getTextDocument().getUri(),
@@ -413,8 +407,8 @@ final class JonquilTextDocumentService implements TextDocumentService {
           List<CompletionItem> items = new ArrayList<>();
           for (int i = 0; i < infos.size(); i++) {
             items.add(
-                Convert.completionItem(
-                    infos.get(i), lazy ? new Convert.CompletionKey(id, i) : null));
+                ProtocolAnswers.completionItem(
+                    infos.get(i), lazy ? new ResolveKeys.CompletionKey(id, i) : null));
           }
           return Either.forRight(new CompletionList(false, items));
         });
@@ -426,7 +420,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
         "completionItem/resolve",
         null,
         (snapshot, none) -> {
-          Optional<Convert.CompletionKey> key = Convert.completionKey(unresolved);
+          Optional<ResolveKeys.CompletionKey> key = ResolveKeys.completionKey(unresolved);
           CompletionAnswer last = lastCompletion.get();
           if (key.isEmpty()
               || last == null
@@ -437,7 +431,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
           }
           CompletionItemInfo info = last.items().get(key.get().index());
           return info.label().equals(unresolved.getLabel())
-              ? Convert.withDocumentation(unresolved, info.documentation())
+              ? ProtocolAnswers.withDocumentation(unresolved, info.documentation())
               : unresolved;
         });
   }
@@ -451,10 +445,10 @@ final class JonquilTextDocumentService implements TextDocumentService {
         "textDocument/semanticTokens/full",
         params.getTextDocument().getUri(),
         null,
-        Convert.semanticTokens(null, List.of()),
+        SemanticTokenEncoding.full(null, List.of()),
         at -> {
           SentTokens sent = tokens(at);
-          return Convert.semanticTokens(sent.resultId(), sent.data());
+          return SemanticTokenEncoding.full(sent.resultId(), sent.data());
         });
   }
 
@@ -466,23 +460,24 @@ final class JonquilTextDocumentService implements TextDocumentService {
         "textDocument/semanticTokens/full/delta",
         params.getTextDocument().getUri(),
         null,
-        Either.forLeft(Convert.semanticTokens(null, List.of())),
+        Either.forLeft(SemanticTokenEncoding.full(null, List.of())),
         at -> {
           SentTokens before = sentTokens.get(at.path());
           SentTokens now = tokens(at);
           if (before == null || previous == null || !previous.equals(before.resultId())) {
-            return Either.forLeft(Convert.semanticTokens(now.resultId(), now.data()));
+            return Either.forLeft(SemanticTokenEncoding.full(now.resultId(), now.data()));
           }
           return Either.forRight(
-              Convert.semanticTokensDelta(now.resultId(), before.data(), now.data()));
+              SemanticTokenEncoding.delta(now.resultId(), before.data(), now.data()));
         });
   }
 
   /** Computes, encodes and remembers the document's tokens under a new result id. */
   private SentTokens tokens(JonquilLanguageServer.At at) {
     List<Integer> data =
-        at.convert()
-            .semanticTokenData(at.source(), server.answers.semanticTokens(at.result(), at.path()));
+        server
+            .tokenEncoding()
+            .data(at.convert(), at.source(), server.answers.semanticTokens(at.result(), at.path()));
     SentTokens sent = new SentTokens(Long.toString(ids.incrementAndGet()), List.copyOf(data));
     if (server.documents.get(at.path()).isPresent()) {
       sentTokens.put(
@@ -494,8 +489,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
 
   @Override
   public CompletableFuture<List<InlayHint>> inlayHint(InlayHintParams params) {
-    boolean lazy =
-        JonquilLanguageServer.ClientSupport.lazyInlayHintTooltips(server.clientCapabilities());
+    boolean lazy = ClientSupport.lazyInlayHintTooltips(server.clientCapabilities());
     Range range = params.getRange();
     String uri = params.getTextDocument().getUri();
     return server.atPosition(
@@ -516,11 +510,11 @@ final class JonquilTextDocumentService implements TextDocumentService {
               server.answers.inlayHints(
                   at.result(), at.path(), Math.min(start, end), Math.max(start, end))) {
             out.add(
-                at.convert()
-                    .inlayHint(
-                        at.source(),
-                        h,
-                        lazy ? new Convert.HintKey(uri, version, textHash, h.offset()) : null));
+                ProtocolAnswers.inlayHint(
+                    at.convert(),
+                    at.source(),
+                    h,
+                    lazy ? new ResolveKeys.HintKey(uri, version, textHash, h.offset()) : null));
           }
           return out;
         });
@@ -533,15 +527,15 @@ final class JonquilTextDocumentService implements TextDocumentService {
    */
   @Override
   public CompletableFuture<InlayHint> resolveInlayHint(InlayHint unresolved) {
-    Optional<Convert.HintKey> key = Convert.hintKey(unresolved);
+    Optional<ResolveKeys.HintKey> key = ResolveKeys.hintKey(unresolved);
     return server.answer(
         "inlayHint/resolve",
-        key.map(Convert.HintKey::uri).orElse(null),
+        key.map(ResolveKeys.HintKey::uri).orElse(null),
         (snapshot, path) -> {
           if (key.isEmpty() || path == null) {
             return unresolved;
           }
-          Convert.HintKey k = key.get();
+          ResolveKeys.HintKey k = key.get();
           Integer open = server.documents.get(path).map(Documents.Doc::version).orElse(null);
           if (!Objects.equals(open, k.version())
               || !Objects.equals(snapshot.versions().get(path), k.version())) {
@@ -552,11 +546,11 @@ final class JonquilTextDocumentService implements TextDocumentService {
               || result.get().files().get(path).text().hashCode() != k.textHash()) {
             return unresolved;
           }
-          String label = Convert.hintLabel(unresolved);
+          String label = ProtocolAnswers.hintLabel(unresolved);
           for (jonquil.ide.InlayHint h :
               server.answers.inlayHints(result.get(), path, k.offset(), k.offset())) {
             if (h.offset() == k.offset() && h.label().equals(label)) {
-              return Convert.withTooltip(unresolved, h.tooltip());
+              return ProtocolAnswers.withTooltip(unresolved, h.tooltip());
             }
           }
           return unresolved;
@@ -565,10 +559,8 @@ final class JonquilTextDocumentService implements TextDocumentService {
 
   @Override
   public CompletableFuture<List<FoldingRange>> foldingRange(FoldingRangeRequestParams params) {
-    boolean linesOnly =
-        JonquilLanguageServer.ClientSupport.lineFoldingOnly(server.clientCapabilities());
-    Integer limit =
-        JonquilLanguageServer.ClientSupport.foldingRangeLimit(server.clientCapabilities());
+    boolean linesOnly = ClientSupport.lineFoldingOnly(server.clientCapabilities());
+    Integer limit = ClientSupport.foldingRangeLimit(server.clientCapabilities());
     return server.atPosition(
         "textDocument/foldingRange",
         params.getTextDocument().getUri(),
@@ -577,7 +569,8 @@ final class JonquilTextDocumentService implements TextDocumentService {
         at -> {
           List<FoldingRange> out = new ArrayList<>();
           for (FoldingRangeInfo f : server.answers.foldingRanges(at.result(), at.path())) {
-            FoldingRange range = at.convert().foldingRange(at.source(), f, linesOnly);
+            FoldingRange range =
+                ProtocolAnswers.foldingRange(at.convert(), at.source(), f, linesOnly);
             if (range != null && (limit == null || out.size() < limit)) {
               out.add(range);
             }
@@ -596,7 +589,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
         at -> {
           List<DocumentLink> out = new ArrayList<>();
           for (DocumentLinkInfo link : server.answers.documentLinks(at.result(), at.path())) {
-            out.add(at.convert().documentLink(at.source(), link));
+            out.add(ProtocolAnswers.documentLink(at.convert(), at.source(), link));
           }
           return out;
         });
@@ -605,9 +598,9 @@ final class JonquilTextDocumentService implements TextDocumentService {
   @Override
   public CompletableFuture<List<Either<Command, CodeAction>>> codeAction(CodeActionParams params) {
     var caps = server.clientCapabilities();
-    boolean literals = JonquilLanguageServer.ClientSupport.codeActionLiterals(caps);
-    boolean preferred = JonquilLanguageServer.ClientSupport.preferredCodeActions(caps);
-    boolean documentChanges = JonquilLanguageServer.ClientSupport.documentChanges(caps);
+    boolean literals = ClientSupport.codeActionLiterals(caps);
+    boolean preferred = ClientSupport.preferredCodeActions(caps);
+    boolean documentChanges = ClientSupport.documentChanges(caps);
     Range range = params.getRange();
     List<String> only = params.getContext() == null ? null : params.getContext().getOnly();
     return server.atPosition(
@@ -627,17 +620,17 @@ final class JonquilTextDocumentService implements TextDocumentService {
                   at.result(),
                   at.path(),
                   new TextRange(Math.min(start, end), Math.max(start, end)))) {
-            if (Convert.kindRequested(a.kind(), only)
+            if (ProtocolAnswers.kindRequested(a.kind(), only)
                 && a.edits().keySet().stream().allMatch(this::editable)) {
               out.add(
                   Either.forRight(
-                      at.convert()
-                          .codeAction(
-                              a,
-                              at.result().files()::get,
-                              file -> at.versions().get(file),
-                              documentChanges,
-                              preferred)));
+                      ProtocolAnswers.codeAction(
+                          at.convert(),
+                          a,
+                          at.result().files()::get,
+                          file -> at.versions().get(file),
+                          documentChanges,
+                          preferred)));
             }
           }
           return out;

@@ -64,7 +64,8 @@ final class JonquilWorkspaceService implements WorkspaceService {
               break;
             }
             out.add(
-                convert.workspaceSymbol(
+                ProtocolAnswers.workspaceSymbol(
+                    convert,
                     s,
                     file ->
                         snapshot

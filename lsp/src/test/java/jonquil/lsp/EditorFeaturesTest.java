@@ -158,7 +158,8 @@ class EditorFeaturesTest {
       assertTrue(caps.getCompletionProvider().getResolveProvider());
       assertEquals(List.of("."), caps.getCompletionProvider().getTriggerCharacters());
       assertEquals(
-          Convert.TOKEN_TYPES, caps.getSemanticTokensProvider().getLegend().getTokenTypes());
+          SemanticTokenEncoding.TOKEN_TYPES,
+          caps.getSemanticTokensProvider().getLegend().getTokenTypes());
       assertEquals(
           List.of("declaration"), caps.getSemanticTokensProvider().getLegend().getTokenModifiers());
       assertTrue(caps.getSemanticTokensProvider().getFull().getRight().getDelta());

@@ -67,7 +67,7 @@ final class LspHarness implements AutoCloseable {
     @Override
     public synchronized CompletableFuture<Void> createProgress(
         WorkDoneProgressCreateParams params) {
-      progressTokens.add(Convert.progressToken(params.getToken()));
+      progressTokens.add(IndexProgress.progressToken(params.getToken()));
       return CompletableFuture.completedFuture(null);
     }
 

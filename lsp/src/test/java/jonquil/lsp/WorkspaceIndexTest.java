@@ -170,7 +170,7 @@ class WorkspaceIndexTest {
         dir.resolve("huge.jonq"),
         "mirror lonely_huge"
             + MIRROR
-            + "// padding\n".repeat((int) (WorkspaceIndex.MAX_FILE_BYTES / 10) + 1));
+            + "// padding\n".repeat((int) (SpecFolderWalk.MAX_FILE_BYTES / 10) + 1));
     try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       h.initialize(dir, new ClientCapabilities());
       h.open(uri(main), 1, bench("lib.jonq", "seed"));
@@ -369,7 +369,8 @@ class WorkspaceIndexTest {
       }
       assertEquals(1, created.size(), "one token, created before use");
       assertTrue(
-          sent.stream().allMatch(p -> created.get(0).equals(Convert.progressToken(p.getToken()))));
+          sent.stream()
+              .allMatch(p -> created.get(0).equals(IndexProgress.progressToken(p.getToken()))));
       List<WorkDoneProgressKind> kinds = sent.stream().map(p -> value(p).getKind()).toList();
       assertEquals(WorkDoneProgressKind.begin, kinds.get(0));
       assertEquals(WorkDoneProgressKind.end, kinds.get(kinds.size() - 1));
