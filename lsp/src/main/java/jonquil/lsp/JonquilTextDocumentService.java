@@ -156,7 +156,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
   @Override
   public CompletableFuture<DocumentDiagnosticReport> diagnostic(DocumentDiagnosticParams params) {
     String previous = params.getPreviousResultId();
-    return server.answer(
+    return server.requests.answer(
         "textDocument/diagnostic",
         params.getTextDocument().getUri(),
         (snapshot, path) -> {
@@ -185,7 +185,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
   @Override
   public CompletableFuture<Hover> hover(HoverParams params) {
     boolean markdown = ClientSupport.markdownHover(server.clientCapabilities());
-    return server.atPosition(
+    return server.requests.atPosition(
         "textDocument/hover",
         params.getTextDocument().getUri(),
         params.getPosition(),
@@ -202,7 +202,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
   public CompletableFuture<Either<List<? extends Location>, List<? extends LocationLink>>>
       definition(DefinitionParams params) {
     boolean links = ClientSupport.definitionLinks(server.clientCapabilities());
-    return server.atPosition(
+    return server.requests.atPosition(
         "textDocument/definition",
         params.getTextDocument().getUri(),
         params.getPosition(),
@@ -230,7 +230,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
    * The occurrence of a name that holds the cursor, as the editor answers list it among the name's
    * references; null when the cursor is on no name (e.g. inside a 'use' path).
    */
-  private TextRange nameUnderCursor(JonquilLanguageServer.At at) {
+  private TextRange nameUnderCursor(RequestPipeline.At at) {
     for (jonquil.ide.Location l :
         server.answers.references(at.result(), at.path(), at.offset(), true)) {
       if (l.file().equals(at.path())
@@ -275,7 +275,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
   public CompletableFuture<List<? extends Location>> references(ReferenceParams params) {
     boolean withDeclaration =
         params.getContext() != null && params.getContext().isIncludeDeclaration();
-    return server.atPosition(
+    return server.requests.atPosition(
         "textDocument/references",
         params.getTextDocument().getUri(),
         server.index::fresh,
@@ -296,7 +296,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
   @Override
   public CompletableFuture<Either3<Range, PrepareRenameResult, PrepareRenameDefaultBehavior>>
       prepareRename(PrepareRenameParams params) {
-    return server.atPosition(
+    return server.requests.atPosition(
         "textDocument/prepareRename",
         params.getTextDocument().getUri(),
         params.getPosition(),
@@ -322,7 +322,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
   @Override
   public CompletableFuture<WorkspaceEdit> rename(RenameParams params) {
     boolean documentChanges = ClientSupport.documentChanges(server.clientCapabilities());
-    return server.atPosition(
+    return server.requests.atPosition(
         "textDocument/rename",
         params.getTextDocument().getUri(),
         server.index::fresh,
@@ -356,7 +356,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
 
   /** The text a location's offsets refer to: the check's copy, else the workspace index's. */
   private static SourceFile sourceOf(
-      JonquilLanguageServer.At at, WorkspaceIndex.Snapshot index, Path file) {
+      RequestPipeline.At at, WorkspaceIndex.Snapshot index, Path file) {
     SourceFile checked = at.result().files().get(file);
     return checked != null ? checked : index.source(file);
   }
@@ -365,7 +365,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
   public CompletableFuture<List<Either<SymbolInformation, DocumentSymbol>>> documentSymbol(
       DocumentSymbolParams params) {
     boolean hierarchical = ClientSupport.hierarchicalSymbols(server.clientCapabilities());
-    return server.atPosition(
+    return server.requests.atPosition(
         "textDocument/documentSymbol",
         params.getTextDocument().getUri(),
         null,
@@ -392,7 +392,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
   public CompletableFuture<Either<List<CompletionItem>, CompletionList>> completion(
       CompletionParams params) {
     boolean lazy = ClientSupport.lazyCompletionDocumentation(server.clientCapabilities());
-    return server.atBuffer(
+    return server.requests.atBuffer(
         "textDocument/completion",
         params.getTextDocument().getUri(),
         params.getPosition(),
@@ -416,7 +416,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
 
   @Override
   public CompletableFuture<CompletionItem> resolveCompletionItem(CompletionItem unresolved) {
-    return server.answer(
+    return server.requests.answer(
         "completionItem/resolve",
         null,
         (snapshot, none) -> {
@@ -441,7 +441,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
 
   @Override
   public CompletableFuture<SemanticTokens> semanticTokensFull(SemanticTokensParams params) {
-    return server.atPosition(
+    return server.requests.atPosition(
         "textDocument/semanticTokens/full",
         params.getTextDocument().getUri(),
         null,
@@ -456,7 +456,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
   public CompletableFuture<Either<SemanticTokens, SemanticTokensDelta>> semanticTokensFullDelta(
       SemanticTokensDeltaParams params) {
     String previous = params.getPreviousResultId();
-    return server.atPosition(
+    return server.requests.atPosition(
         "textDocument/semanticTokens/full/delta",
         params.getTextDocument().getUri(),
         null,
@@ -473,7 +473,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
   }
 
   /** Computes, encodes and remembers the document's tokens under a new result id. */
-  private SentTokens tokens(JonquilLanguageServer.At at) {
+  private SentTokens tokens(RequestPipeline.At at) {
     List<Integer> data =
         server
             .tokenEncoding()
@@ -492,7 +492,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
     boolean lazy = ClientSupport.lazyInlayHintTooltips(server.clientCapabilities());
     Range range = params.getRange();
     String uri = params.getTextDocument().getUri();
-    return server.atPosition(
+    return server.requests.atPosition(
         "textDocument/inlayHint",
         uri,
         null,
@@ -528,7 +528,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
   @Override
   public CompletableFuture<InlayHint> resolveInlayHint(InlayHint unresolved) {
     Optional<ResolveKeys.HintKey> key = ResolveKeys.hintKey(unresolved);
-    return server.answer(
+    return server.requests.answer(
         "inlayHint/resolve",
         key.map(ResolveKeys.HintKey::uri).orElse(null),
         (snapshot, path) -> {
@@ -561,7 +561,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
   public CompletableFuture<List<FoldingRange>> foldingRange(FoldingRangeRequestParams params) {
     boolean linesOnly = ClientSupport.lineFoldingOnly(server.clientCapabilities());
     Integer limit = ClientSupport.foldingRangeLimit(server.clientCapabilities());
-    return server.atPosition(
+    return server.requests.atPosition(
         "textDocument/foldingRange",
         params.getTextDocument().getUri(),
         null,
@@ -581,7 +581,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
 
   @Override
   public CompletableFuture<List<DocumentLink>> documentLink(DocumentLinkParams params) {
-    return server.atPosition(
+    return server.requests.atPosition(
         "textDocument/documentLink",
         params.getTextDocument().getUri(),
         null,
@@ -603,7 +603,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
     boolean documentChanges = ClientSupport.documentChanges(caps);
     Range range = params.getRange();
     List<String> only = params.getContext() == null ? null : params.getContext().getOnly();
-    return server.atPosition(
+    return server.requests.atPosition(
         "textDocument/codeAction",
         params.getTextDocument().getUri(),
         null,
@@ -643,7 +643,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
   public CompletableFuture<List<? extends TextEdit>> formatting(DocumentFormattingParams params) {
     Optional<Documents.Doc> doc = server.documents.get(params.getTextDocument().getUri());
     FormattingOptions options = params.getOptions();
-    return server.answer(
+    return server.requests.answer(
         "textDocument/formatting",
         null,
         (snapshot, none) -> {
@@ -663,7 +663,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
     Optional<Documents.Doc> doc = server.documents.get(params.getTextDocument().getUri());
     FormattingOptions options = params.getOptions();
     int[] lines = Convert.lines(params.getRange());
-    return server.answer(
+    return server.requests.answer(
         "textDocument/rangeFormatting",
         null,
         (snapshot, none) -> {

@@ -40,7 +40,7 @@ final class JonquilWorkspaceService implements WorkspaceService {
           Either<List<? extends SymbolInformation>, List<? extends WorkspaceSymbol>>>
       symbol(WorkspaceSymbolParams params) {
     String query = params.getQuery() == null ? "" : params.getQuery();
-    return server.answer(
+    return server.requests.answer(
         "workspace/symbol",
         null,
         server.index::fresh,
