@@ -17,9 +17,9 @@ import jonquil.testing.Repo;
 import org.junit.jupiter.api.Test;
 
 /**
- * Rules about the shape of the main code that a reader relies on and no compiler checks: one
- * class per name across every module (so a name always means one thing), no class named like a
- * package, and lines a reviewer can read side by side.
+ * Rules about the shape of the main code that a reader relies on and no compiler checks: one class
+ * per name across every module (so a name always means one thing), no class named like a package,
+ * and lines a reviewer can read side by side.
  */
 class CodeShapeTest {
   /** The longest line the project's style allows (the formatter keeps code within 100). */

@@ -1,9 +1,8 @@
 package jonquil.analysis;
 
 import java.util.Optional;
-import jonquil.optics.beam.Clipping;
-import jonquil.resolve.Param;
 import jonquil.optics.beam.Irradiance;
+import jonquil.resolve.Param;
 import jonquil.resolve.ResolvedElement;
 import jonquil.safety.Classifier;
 import jonquil.safety.Emission;

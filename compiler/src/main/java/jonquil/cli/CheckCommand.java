@@ -13,6 +13,7 @@ import jonquil.Result;
 import jonquil.Workspace;
 import jonquil.diag.Diagnostic;
 import jonquil.diag.DiagnosticCode;
+import jonquil.source.ProjectRoot;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;

@@ -64,7 +64,7 @@ final class Completions {
     if (c.statement().isEmpty()) {
       List<CompletionItemInfo> out = new ArrayList<>();
       for (ElementKind k : ElementKind.values()) {
-        out.add(new CompletionItemInfo(k.word(), "kind", kindDetail(k), ""));
+        out.add(new CompletionItemInfo(k.word(), CompletionItemInfo.Kind.KIND, kindDetail(k), ""));
       }
       out.add(keyword("use", "bring in the declarations of a part library: use \"parts.jonq\""));
       out.add(keyword("train", "the beam paths of the bench: train main { ... }"));
@@ -137,7 +137,7 @@ final class Completions {
                     out.add(
                         new CompletionItemInfo(
                             n.name(),
-                            "element",
+                            CompletionItemInfo.Kind.ELEMENT,
                             n.kind().map(ElementKind::word).orElse(category.phrase()),
                             "")));
       }
@@ -169,7 +169,7 @@ final class Completions {
         out.add(
             new CompletionItemInfo(
                 s,
-                "measure",
+                CompletionItemInfo.Kind.MEASURE,
                 "requirement on " + m.word(),
                 "bound written as "
                     + m.bound().name().toLowerCase(java.util.Locale.ROOT).replace('_', ' ')
@@ -222,10 +222,12 @@ final class Completions {
     List<CompletionItemInfo> out = new ArrayList<>();
     for (Vocabulary.Named n : v.placeable()) {
       ElementKind k = n.kind().get();
-      out.add(new CompletionItemInfo(n.name(), "element", k.word(), ""));
+      out.add(new CompletionItemInfo(n.name(), CompletionItemInfo.Kind.ELEMENT, k.word(), ""));
       if (k.ports().size() > 1) {
         for (String p : k.ports()) {
-          out.add(new CompletionItemInfo(n.name() + "." + p, "port", k.word() + " port", ""));
+          out.add(
+              new CompletionItemInfo(
+                  n.name() + "." + p, CompletionItemInfo.Kind.PORT, k.word() + " port", ""));
         }
       }
     }
@@ -241,7 +243,10 @@ final class Completions {
                     .map(
                         p ->
                             new CompletionItemInfo(
-                                p, "port", "port of " + k.word() + " '" + element + "'", ""))
+                                p,
+                                CompletionItemInfo.Kind.PORT,
+                                "port of " + k.word() + " '" + element + "'",
+                                ""))
                     .toList())
         .orElse(List.of());
   }
@@ -253,7 +258,10 @@ final class Completions {
         String how = p.required() ? "required" : p.repeatable() ? "repeatable" : "optional";
         out.add(
             new CompletionItemInfo(
-                p.name(), "parameter", how + " parameter of " + kind.word(), p.doc()));
+                p.name(),
+                CompletionItemInfo.Kind.PARAMETER,
+                how + " parameter of " + kind.word(),
+                p.doc()));
       }
     }
     return out;
@@ -261,12 +269,15 @@ final class Completions {
 
   private static List<CompletionItemInfo> units(List<String> units) {
     return units.stream()
-        .map(u -> new CompletionItemInfo(u, "unit", UnitChoices.describe(u), ""))
+        .map(
+            u ->
+                new CompletionItemInfo(
+                    u, CompletionItemInfo.Kind.UNIT, UnitChoices.describe(u), ""))
         .toList();
   }
 
   private static CompletionItemInfo keyword(String word, String doc) {
-    return new CompletionItemInfo(word, "keyword", "keyword", doc);
+    return new CompletionItemInfo(word, CompletionItemInfo.Kind.KEYWORD, "keyword", doc);
   }
 
   private static String kindDetail(ElementKind k) {

@@ -61,7 +61,7 @@ final class CrossFileNavigation {
         continue;
       }
       try {
-        uses.add(Ide.useTarget(file, u.target()));
+        uses.add(UseTarget.of(file, u.target()));
       } catch (InvalidPathException e) {
         // not a path: the check reported it, and it names no file to watch for
       }

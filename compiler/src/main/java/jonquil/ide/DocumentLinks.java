@@ -47,7 +47,7 @@ final class DocumentLinks {
       Result r, Path file, String written, TextRange quoted, List<DocumentLinkInfo> out) {
     Path target;
     try {
-      target = Ide.useTarget(file, written);
+      target = UseTarget.of(file, written);
     } catch (RuntimeException e) {
       return; // a path the platform cannot represent links nowhere
     }

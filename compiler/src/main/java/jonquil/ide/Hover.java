@@ -32,7 +32,7 @@ final class Hover {
     SourceFile text = r.files().get(file);
     var use = NodeAtCursor.use(f, offset);
     if (use.isPresent()) {
-      Path target = Ide.useTarget(file, use.get().target());
+      Path target = UseTarget.of(file, use.get().target());
       return Optional.of(
           new HoverInfo(
               "**use** "

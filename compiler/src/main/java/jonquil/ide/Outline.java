@@ -31,7 +31,14 @@ final class Outline {
   static List<SymbolInfo> of(SourceFile text, SpecFile f) {
     List<SymbolInfo> out = new ArrayList<>();
     for (UseDecl u : f.uses()) {
-      out.add(node("use \"" + u.target() + "\"", "use", u.range(), u.targetRange(), List.of()));
+      out.add(
+          node(
+              "use \"" + u.target() + "\"",
+              SymbolInfo.Kind.USE,
+              "use",
+              u.range(),
+              u.targetRange(),
+              List.of()));
     }
     for (Declaration d : f.declarations()) {
       out.add(declaration(text, d));
@@ -41,11 +48,18 @@ final class Outline {
       for (TrainDecl.BeamPath p : t.paths()) {
         TextRange first = p.steps().isEmpty() ? p.range() : p.steps().get(0).range();
         paths.add(
-            node(MarkdownText.oneLine(text.slice(p.range())), "path", p.range(), first, List.of()));
+            node(
+                MarkdownText.oneLine(text.slice(p.range())),
+                SymbolInfo.Kind.PATH,
+                "path",
+                p.range(),
+                first,
+                List.of()));
       }
       out.add(
           node(
               t.name().map(n -> n.text()).orElse("train"),
+              SymbolInfo.Kind.TRAIN,
               "train",
               t.range(),
               t.name().map(n -> n.range()).orElse(t.range()),
@@ -57,12 +71,20 @@ final class Outline {
         lines.add(
             node(
                 MarkdownText.oneLine(q.text()),
+                SymbolInfo.Kind.REQUIREMENT,
                 "requirement",
                 q.range(),
                 q.check().measure().range(),
                 List.of()));
       }
-      out.add(node("require", "require", block.range(), keyword(block.range(), "require"), lines));
+      out.add(
+          node(
+              "require",
+              SymbolInfo.Kind.REQUIRE,
+              "require",
+              block.range(),
+              keyword(block.range(), "require"),
+              lines));
     }
     out.sort(Comparator.comparing(SymbolInfo::range));
     return out;
@@ -74,40 +96,42 @@ final class Outline {
       children.add(
           node(
               MarkdownText.oneLine(text.slice(p.range())),
+              SymbolInfo.Kind.PARAMETER,
               "parameter",
               p.range(),
               p.key().range(),
               List.of()));
     }
-    return node(d.name().text(), d.kind().text(), d.range(), d.name().range(), children);
+    String word = d.kind().text();
+    return node(
+        d.name().text(),
+        SymbolInfo.Kind.ofDeclaration(word),
+        word,
+        d.range(),
+        d.name().range(),
+        children);
   }
 
   /** A node whose selection is clamped inside its range, as editors require. */
   private static SymbolInfo node(
-      String name, String kind, TextRange range, TextRange selection, List<SymbolInfo> kids) {
+      String name,
+      SymbolInfo.Kind kind,
+      String word,
+      TextRange range,
+      TextRange selection,
+      List<SymbolInfo> kids) {
     TextRange full = TextRange.span(range, selection);
-    return new SymbolInfo(name.isBlank() ? kind : name, kind, full, selection, kids);
+    return new SymbolInfo(name.isBlank() ? word : name, kind, word, full, selection, kids);
   }
 
   private static TextRange keyword(TextRange range, String word) {
     return new TextRange(range.start(), Math.min(range.end(), range.start() + word.length()));
   }
 
-  static List<SymbolInfo> search(Result r, String query) {
-    return matches(r, query).stream().map(Match::symbol).toList();
-  }
-
-  static List<Location> searchLocations(Result r, String query) {
-    return matches(r, query).stream()
-        .map(m -> new Location(m.file(), m.symbol().selectionRange()))
-        .toList();
-  }
-
-  private record Match(Path file, SymbolInfo symbol) {}
-
-  private static List<Match> matches(Result r, String query) {
+  /** The declarations of the files {@code r} read whose name contains the query, capped. */
+  static List<FoundSymbol> search(Result r, String query) {
     String q = query == null ? "" : query.toLowerCase(Locale.ROOT);
-    List<Match> out = new ArrayList<>();
+    List<FoundSymbol> out = new ArrayList<>();
     List<Path> files =
         r.files().keySet().stream()
             .filter(p -> OwningModels.isSpec(r, p))
@@ -116,7 +140,7 @@ final class Outline {
     for (Path file : files) {
       for (SymbolInfo s : declared(of(r, file))) {
         if (matches(s, q)) {
-          out.add(new Match(file, s));
+          out.add(new FoundSymbol(file, s));
           if (out.size() == WORKSPACE_CAP) {
             return out;
           }
@@ -162,11 +186,13 @@ final class Outline {
     List<SymbolInfo> out = new ArrayList<>();
     for (SymbolInfo s : outline) {
       boolean declared =
-          !s.kind().equals("use")
-              && !s.kind().equals("require")
-              && !(s.kind().equals("train") && s.selectionRange().equals(s.range()));
+          switch (s.kind()) {
+            case USE, REQUIRE -> false;
+            case TRAIN -> !s.selectionRange().equals(s.range());
+            case ELEMENT, SOURCE, MATERIAL, PATH, REQUIREMENT, PARAMETER -> true;
+          };
       if (declared) {
-        out.add(new SymbolInfo(s.name(), s.kind(), s.range(), s.selectionRange(), List.of()));
+        out.add(s.withoutChildren());
       }
     }
     return out;

@@ -1,5 +1,15 @@
 package jonquil.ide;
 
+import static jonquil.ide.SemanticToken.Type.COMMENT;
+import static jonquil.ide.SemanticToken.Type.KEYWORD;
+import static jonquil.ide.SemanticToken.Type.NUMBER;
+import static jonquil.ide.SemanticToken.Type.OPERATOR;
+import static jonquil.ide.SemanticToken.Type.PROPERTY;
+import static jonquil.ide.SemanticToken.Type.STRING;
+import static jonquil.ide.SemanticToken.Type.TYPE;
+import static jonquil.ide.SemanticToken.Type.UNIT;
+import static jonquil.ide.SemanticToken.Type.VARIABLE;
+
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Comparator;
@@ -52,17 +62,17 @@ final class SemanticTokens {
 
   private void tree(SpecFile f) {
     for (Declaration d : f.declarations()) {
-      add(d.kind().range(), "type", false);
-      add(d.name().range(), "variable", true);
+      add(d.kind().range(), TYPE, false);
+      add(d.name().range(), VARIABLE, true);
       d.shorthand().ifPresent(args -> args.forEach(this::arg));
       for (Property p : d.properties()) {
-        add(p.key().range(), "property", false);
+        add(p.key().range(), PROPERTY, false);
         p.args().forEach(this::arg);
       }
     }
-    f.uses().forEach(u -> add(u.targetRange(), "string", false));
+    f.uses().forEach(u -> add(u.targetRange(), STRING, false));
     for (TrainDecl t : f.trains()) {
-      t.name().ifPresent(n -> add(n.range(), "variable", true));
+      t.name().ifPresent(n -> add(n.range(), VARIABLE, true));
       for (TrainDecl.BeamPath path : t.paths()) {
         for (TrainDecl.Step step : path.steps()) {
           if (step instanceof TrainDecl.Place place) {
@@ -82,7 +92,7 @@ final class SemanticTokens {
   private void requirement(Requirement q) {
     q.yield().ifPresent(y -> arg(y.bound()));
     Requirement.Check c = q.check();
-    c.measure().words().forEach(w -> add(w.range(), "property", false));
+    c.measure().words().forEach(w -> add(w.range(), PROPERTY, false));
     for (Requirement.Place p : c.places()) {
       if (p instanceof Requirement.At at) {
         ref(at.target(), true);
@@ -93,13 +103,13 @@ final class SemanticTokens {
     }
     c.condition().ifPresent(this::condition);
     for (Requirement.Extra e : c.extras()) {
-      e.measure().ifPresent(m -> m.words().forEach(w -> add(w.range(), "property", false)));
+      e.measure().ifPresent(m -> m.words().forEach(w -> add(w.range(), PROPERTY, false)));
       condition(e.condition());
     }
     c.band()
         .ifPresent(
             b -> {
-              add(b.quantity().range(), "property", false);
+              add(b.quantity().range(), PROPERTY, false);
               arg(b.low());
               arg(b.high());
             });
@@ -118,18 +128,18 @@ final class SemanticTokens {
 
   private void arg(Arg a) {
     if (a instanceof Arg.QuantityArg q) {
-      add(q.number().range(), "number", false);
-      q.unit().ifPresent(u -> add(u.range(), "unit", false));
+      add(q.number().range(), NUMBER, false);
+      q.unit().ifPresent(u -> add(u.range(), UNIT, false));
       q.tolerance()
           .ifPresent(
               t -> {
-                add(t.number().range(), "number", false);
-                t.unit().ifPresent(u -> add(u.range(), "unit", false));
+                add(t.number().range(), NUMBER, false);
+                t.unit().ifPresent(u -> add(u.range(), UNIT, false));
               });
     } else if (a instanceof Arg.RefArg ref) {
       ref(ref, false);
     } else if (a instanceof Arg.StringArg s) {
-      add(s.range(), "string", false);
+      add(s.range(), STRING, false);
     } else if (a instanceof Arg.RangeArg range) {
       arg(range.low());
       arg(range.high());
@@ -149,8 +159,8 @@ final class SemanticTokens {
                 .filter(o -> o.range().equals(n.range()))
                 .isPresent()
             || CatalogSpellings.lookup(n.text()).isPresent();
-    add(n.range(), isName && !Tokens.isKeyword(n.text()) ? "variable" : "keyword", false);
-    ref.port().ifPresent(p -> add(p.range(), "property", false));
+    add(n.range(), isName && !Tokens.isKeyword(n.text()) ? VARIABLE : KEYWORD, false);
+    ref.port().ifPresent(p -> add(p.range(), PROPERTY, false));
   }
 
   /**
@@ -159,12 +169,12 @@ final class SemanticTokens {
    */
   private void lexical() {
     for (Token l : Tokens.scan(text)) {
-      String type =
+      SemanticToken.Type type =
           switch (l.kind()) {
-            case KEYWORD -> "keyword";
-            case ARROW, RANGE, PLUS_MINUS, COMPARISON, EQUALS -> "operator";
-            case NUMBER -> "number";
-            case STRING, UNTERMINATED_STRING -> "string";
+            case KEYWORD -> KEYWORD;
+            case ARROW, RANGE, PLUS_MINUS, COMPARISON, EQUALS -> OPERATOR;
+            case NUMBER -> NUMBER;
+            case STRING, UNTERMINATED_STRING -> STRING;
             case IDENTIFIER,
                 LINE_COMMENT,
                 BLOCK_COMMENT,
@@ -200,14 +210,14 @@ final class SemanticTokens {
     for (int i = range.start(); i < range.end(); i++) {
       char c = text.charAt(i);
       if (c == '\n' || c == '\r') {
-        add(new TextRange(start, i), "comment", false);
+        add(new TextRange(start, i), COMMENT, false);
         start = i + 1;
       }
     }
-    add(new TextRange(start, range.end()), "comment", false);
+    add(new TextRange(start, range.end()), COMMENT, false);
   }
 
-  private void add(TextRange range, String type, boolean declaration) {
+  private void add(TextRange range, SemanticToken.Type type, boolean declaration) {
     if (range.length() > 0 && range.end() <= text.length()) {
       out.add(new SemanticToken(range.start(), range.length(), type, declaration));
     }

@@ -9,7 +9,6 @@ import jonquil.resolve.Measure;
 import jonquil.resolve.Shape;
 import jonquil.syntax.Token;
 import jonquil.syntax.TokenKind;
-import jonquil.units.Dimension;
 
 /**
  * Reads a parameter's {@link Shape} as a flat sequence of words and value slots, which is enough to

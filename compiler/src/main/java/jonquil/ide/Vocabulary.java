@@ -69,7 +69,10 @@ final class Vocabulary {
     List<CompletionItemInfo> out = new ArrayList<>();
     of(Category.MATERIAL)
         .forEach(
-            n -> out.add(new CompletionItemInfo(n.name(), "material", "declared material", "")));
+            n ->
+                out.add(
+                    new CompletionItemInfo(
+                        n.name(), CompletionItemInfo.Kind.MATERIAL, "declared material", "")));
     for (String spelling : CatalogSpellings.spellings()) {
       CatalogSpellings.Entry e = CatalogSpellings.lookup(spelling).orElseThrow();
       if (metalOnly && e.materialClass() != CatalogSpellings.MaterialClass.METAL) {
@@ -82,7 +85,7 @@ final class Vocabulary {
       out.add(
           new CompletionItemInfo(
               spelling,
-              "material",
+              CompletionItemInfo.Kind.MATERIAL,
               detail,
               spelling.equals(e.name()) ? "" : "another spelling of '" + e.name() + "'"));
     }

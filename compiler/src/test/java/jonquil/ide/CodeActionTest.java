@@ -64,7 +64,7 @@ class CodeActionTest {
     List<Diagnostic> found = of(r, code);
     assertEquals(1, found.size(), spec + "\n" + r.diagnostics());
     List<CodeActionInfo> actions =
-        Ide.codeActions(r, Specs.MAIN, found.get(0).range()).stream()
+        EditorFeatures.standard().codeActions(r, Specs.MAIN, found.get(0).range()).stream()
             .filter(a -> a.diagnostic().equals(found.get(0)))
             .toList();
     assertEquals(1, actions.size(), actions.toString());
@@ -87,7 +87,9 @@ class CodeActionTest {
         r.diagnostics().stream().filter(d -> d.severity() != jonquil.diag.Severity.NOTE).toList());
     assertEquals(
         List.of(),
-        Ide.codeActions(r, Specs.MAIN, new TextRange(0, CLEAN.length())).stream()
+        EditorFeatures.standard()
+            .codeActions(r, Specs.MAIN, new TextRange(0, CLEAN.length()))
+            .stream()
             .filter(a -> a.diagnostic().severity() != jonquil.diag.Severity.NOTE)
             .toList());
   }
@@ -143,7 +145,7 @@ class CodeActionTest {
     assertEquals(List.of(), d.fixes());
     assertEquals(
         List.of(),
-        Ide.codeActions(r, Specs.MAIN, d.range()).stream()
+        EditorFeatures.standard().codeActions(r, Specs.MAIN, d.range()).stream()
             .filter(a -> a.diagnostic().equals(d))
             .toList());
   }
@@ -197,13 +199,17 @@ class CodeActionTest {
     Result r = Specs.check(spec).result();
     int focl = spec.indexOf("focl");
     List<CodeActionInfo> actions =
-        Ide.codeActions(r, Specs.MAIN, new TextRange(focl + 1, focl + 1));
+        EditorFeatures.standard().codeActions(r, Specs.MAIN, new TextRange(focl + 1, focl + 1));
     assertEquals(
         List.of("change 'focl' to 'focal'"), actions.stream().map(CodeActionInfo::title).toList());
     Map<Path, List<Edit>> edits = actions.get(0).edits();
     assertEquals(
         List.of(new Edit(Specs.MAIN, new TextRange(focl, focl + 4), "focal")),
         edits.get(Specs.MAIN));
-    assertEquals(2, Ide.codeActions(r, Specs.MAIN, new TextRange(0, spec.length())).size());
+    assertEquals(
+        2,
+        EditorFeatures.standard()
+            .codeActions(r, Specs.MAIN, new TextRange(0, spec.length()))
+            .size());
   }
 }

@@ -36,7 +36,7 @@ class CompletionTest {
 
   private static List<CompletionItemInfo> at(String spec) {
     Specs.Checked c = Specs.check(spec.replace("@\n", ""));
-    return Ide.completions(c.result(), c.file(), c.offset());
+    return EditorFeatures.standard().completions(c.result(), c.file(), c.offset());
   }
 
   private static List<String> labels(List<CompletionItemInfo> items) {
@@ -45,7 +45,7 @@ class CompletionTest {
 
   private static List<String> labels(List<CompletionItemInfo> items, String kind) {
     return items.stream()
-        .filter(i -> i.kind().equals(kind))
+        .filter(i -> i.kind().word().equals(kind))
         .map(CompletionItemInfo::label)
         .toList();
   }
@@ -72,7 +72,7 @@ class CompletionTest {
     assertEquals(
         new CompletionItemInfo(
             "focal",
-            "parameter",
+            CompletionItemInfo.Kind.PARAMETER,
             "required parameter of lens",
             "focal length (negative: diverging)"),
         focal);
@@ -174,11 +174,15 @@ class CompletionTest {
     String broken = "source s { wavelength 10\nlens l { focal 3 mm \ntrain { s -> 4 mm -> ";
     Specs.Checked c = Specs.check(broken);
     for (int i = -2; i <= broken.length() + 2; i++) {
-      Ide.completions(c.result(), Specs.MAIN, i);
+      EditorFeatures.standard().completions(c.result(), Specs.MAIN, i);
     }
     assertEquals(
         List.of("nm", "um", "mm", "cm", "m"),
-        labels(Ide.completions(c.result(), Specs.MAIN, broken.indexOf("10") + 2)));
-    assertTrue(labels(Ide.completions(c.result(), Specs.MAIN, broken.length())).contains("l"));
+        labels(
+            EditorFeatures.standard()
+                .completions(c.result(), Specs.MAIN, broken.indexOf("10") + 2)));
+    assertTrue(
+        labels(EditorFeatures.standard().completions(c.result(), Specs.MAIN, broken.length()))
+            .contains("l"));
   }
 }

@@ -51,7 +51,9 @@ class FileIndexTest {
   }
 
   private static FileIndex indexed(Path file, Map<Path, String> files) {
-    return Ide.index(check(List.of(file), files, CheckOptions.NAMES), file).orElseThrow();
+    return EditorFeatures.standard()
+        .index(check(List.of(file), files, CheckOptions.NAMES), file)
+        .orElseThrow();
   }
 
   @Test
@@ -95,7 +97,7 @@ class FileIndexTest {
         List.of(indexed(OTHER, FILES), indexed(LIB, FILES), indexed(MAIN, FILES));
     int onFold = MAIN_TEXT.indexOf("fold") + 1;
 
-    List<Location> refs = Ide.references(main, MAIN, onFold, true, index);
+    List<Location> refs = EditorFeatures.standard().references(main, MAIN, onFold, true, index);
     int libFold = LIB_TEXT.indexOf("fold");
     int otherFold = OTHER_TEXT.indexOf("fold");
     int mainFold = MAIN_TEXT.indexOf("fold");
@@ -110,13 +112,14 @@ class FileIndexTest {
                     .thenComparing(l -> l.file().toString()))
             .toList(),
         refs);
-    assertEquals(refs.subList(1, 3), Ide.references(main, MAIN, onFold, false, index));
     assertEquals(
-        Ide.references(main, MAIN, onFold, true),
-        Ide.references(main, MAIN, onFold, true, List.of()),
+        refs.subList(1, 3), EditorFeatures.standard().references(main, MAIN, onFold, false, index));
+    assertEquals(
+        EditorFeatures.standard().references(main, MAIN, onFold, true),
+        EditorFeatures.standard().references(main, MAIN, onFold, true, List.of()),
         "with an empty index, the answer is the result's");
 
-    RenameResult rename = Ide.rename(main, MAIN, onFold, "steer", index);
+    RenameResult rename = EditorFeatures.standard().rename(main, MAIN, onFold, "steer", index);
     assertNull(rename.error());
     assertEquals(
         List.of(new Edit(OTHER, jonquil.source.TextRange.of(otherFold, otherFold + 4), "steer")),
@@ -129,20 +132,23 @@ class FileIndexTest {
   void renameIsRefusedWhenTheNewNameIsDeclaredInAnIndexedFileThatUsesTheOldOne() {
     Result main = check(List.of(MAIN), Map.of(LIB, LIB_TEXT, MAIN, MAIN_TEXT), CheckOptions.EDITOR);
     List<FileIndex> index = List.of(indexed(OTHER, FILES));
-    RenameResult rename = Ide.rename(main, MAIN, MAIN_TEXT.indexOf("fold") + 1, "lamp", index);
+    RenameResult rename =
+        EditorFeatures.standard().rename(main, MAIN, MAIN_TEXT.indexOf("fold") + 1, "lamp", index);
     assertEquals(
         "'lamp' is already declared in 'other.jonq', where 'fold' is used; names must be unique",
         rename.error());
     assertTrue(rename.edits().isEmpty());
     assertNull(
-        Ide.rename(main, MAIN, MAIN_TEXT.indexOf("fold") + 1, "lamp", List.of()).error(),
+        EditorFeatures.standard()
+            .rename(main, MAIN, MAIN_TEXT.indexOf("fold") + 1, "lamp", List.of())
+            .error(),
         "the open document's check alone sees no clash");
   }
 
   @Test
   void workspaceSymbolsOverTheIndexMatchIgnoringCaseInPathOrder() {
     List<FileIndex> index = List.of(indexed(OTHER, FILES), indexed(LIB, FILES));
-    List<FoundSymbol> found = Ide.workspaceSymbols(index, "A");
+    List<FoundSymbol> found = EditorFeatures.standard().workspaceSymbols(index, "A");
     assertEquals(List.of("lamp", "spare"), found.stream().map(s -> s.symbol().name()).toList());
     assertEquals(List.of(OTHER, LIB), found.stream().map(FoundSymbol::file).toList());
   }

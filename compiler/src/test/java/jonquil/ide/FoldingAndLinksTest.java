@@ -58,7 +58,7 @@ class FoldingAndLinksTest {
         region: train main { ... }
         region: require { ... }
         """,
-        render(spec, Ide.foldingRanges(r, Specs.MAIN)));
+        render(spec, EditorFeatures.standard().foldingRanges(r, Specs.MAIN)));
   }
 
   @Test
@@ -83,7 +83,7 @@ class FoldingAndLinksTest {
                 "data/glass.nk",
                 "500 nm 1.5 0\n600 nm 1.49 0\n"));
     Result r = c.result();
-    List<DocumentLinkInfo> links = Ide.documentLinks(r, Specs.MAIN);
+    List<DocumentLinkInfo> links = EditorFeatures.standard().documentLinks(r, Specs.MAIN);
     assertEquals(
         List.of("parts/optics.jonq", "data/glass.nk"),
         links.stream().map(l -> main.substring(l.range().start(), l.range().end())).toList());

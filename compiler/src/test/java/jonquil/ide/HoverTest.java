@@ -30,7 +30,8 @@ class HoverTest {
   private static String hover(Map<String, String> files) {
     Specs.Checked c = Specs.check(files);
     HoverInfo h =
-        Ide.hover(c.result(), c.file(), c.offset())
+        EditorFeatures.standard()
+            .hover(c.result(), c.file(), c.offset())
             .orElseThrow(() -> new AssertionError("no hover"));
     assertTrue(h.range().contains(c.offset()), "the hover range covers the cursor");
     String under = c.result().files().get(c.file()).slice(h.range());

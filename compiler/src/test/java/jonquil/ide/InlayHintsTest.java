@@ -31,7 +31,8 @@ class InlayHintsTest {
   void afterEveryElementStepThePowerLeavingIt() {
     Result r = Specs.check(Specs.BENCH).result();
     String text = r.files().get(Specs.MAIN).text();
-    String actual = render(text, Ide.inlayHints(r, Specs.MAIN, 0, text.length()));
+    String actual =
+        render(text, EditorFeatures.standard().inlayHints(r, Specs.MAIN, 0, text.length()));
     String rx = " (as seen by the receiver, looking back towards the source)";
     assertEquals(
         """
@@ -54,15 +55,17 @@ class InlayHintsTest {
     Result r = Specs.check(Specs.BENCH).result();
     int branch = Specs.offsetOf(r, Specs.MAIN, "w1.reflected", 0);
     List<InlayHint> hints =
-        Ide.inlayHints(r, Specs.MAIN, branch, branch + "w1.reflected -> 30 mm -> d1".length());
+        EditorFeatures.standard()
+            .inlayHints(r, Specs.MAIN, branch, branch + "w1.reflected -> 30 mm -> d1".length());
     assertEquals(2, hints.size());
     assertTrue(hints.stream().allMatch(h -> h.offset() >= branch));
-    assertEquals(List.of(), Ide.inlayHints(r, Specs.MAIN, 0, 10));
+    assertEquals(List.of(), EditorFeatures.standard().inlayHints(r, Specs.MAIN, 0, 10));
   }
 
   @Test
   void noHintsWithoutAnAnalysis() {
     Result r = Specs.check(Specs.BENCH.replace("power         2 W", "power         2 kg")).result();
-    assertEquals(List.of(), Ide.inlayHints(r, Specs.MAIN, 0, Integer.MAX_VALUE));
+    assertEquals(
+        List.of(), EditorFeatures.standard().inlayHints(r, Specs.MAIN, 0, Integer.MAX_VALUE));
   }
 }

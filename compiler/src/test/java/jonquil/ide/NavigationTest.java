@@ -52,7 +52,7 @@ class NavigationTest {
   @Test
   void aUseOfAPartGoesToItsDeclarationInTheUsedFile() {
     Specs.Checked c = Specs.check(twoFiles("main", "fold ->"));
-    List<Location> def = Ide.definition(c.result(), c.file(), c.offset() + 2);
+    List<Location> def = EditorFeatures.standard().definition(c.result(), c.file(), c.offset() + 2);
     assertEquals(1, def.size());
     assertEquals(PARTS, def.get(0).file());
     assertEquals("fold", c.result().files().get(PARTS).slice(def.get(0).range()));
@@ -63,13 +63,13 @@ class NavigationTest {
     Specs.Checked c = Specs.check(twoFiles("main", "parts/optics"));
     assertEquals(
         List.of(new Location(PARTS, TextRange.EMPTY)),
-        Ide.definition(c.result(), c.file(), c.offset()));
+        EditorFeatures.standard().definition(c.result(), c.file(), c.offset()));
   }
 
   @Test
   void aDeclarationIsItsOwnDefinition() {
     Specs.Checked c = Specs.check(twoFiles("parts", "fold"));
-    List<Location> def = Ide.definition(c.result(), c.file(), c.offset());
+    List<Location> def = EditorFeatures.standard().definition(c.result(), c.file(), c.offset());
     assertEquals(List.of(new Location(PARTS, new TextRange(c.offset(), c.offset() + 4))), def);
   }
 
@@ -78,11 +78,17 @@ class NavigationTest {
     Specs.Checked c = Specs.check(Specs.BENCH);
     Result r = c.result();
     assertEquals(
-        List.of(), Ide.definition(r, Specs.MAIN, Specs.offsetOf(r, Specs.MAIN, "train", 0) + 1));
+        List.of(),
+        EditorFeatures.standard()
+            .definition(r, Specs.MAIN, Specs.offsetOf(r, Specs.MAIN, "train", 0) + 1));
     assertEquals(
-        List.of(), Ide.definition(r, Specs.MAIN, Specs.offsetOf(r, Specs.MAIN, "1064", 0) + 1));
+        List.of(),
+        EditorFeatures.standard()
+            .definition(r, Specs.MAIN, Specs.offsetOf(r, Specs.MAIN, "1064", 0) + 1));
     assertEquals(
-        List.of(), Ide.definition(r, Specs.MAIN, Specs.offsetOf(r, Specs.MAIN, "silver", 0) + 1));
+        List.of(),
+        EditorFeatures.standard()
+            .definition(r, Specs.MAIN, Specs.offsetOf(r, Specs.MAIN, "silver", 0) + 1));
   }
 
   @Test
@@ -90,9 +96,13 @@ class NavigationTest {
     Specs.Checked c = Specs.check(twoFiles("main", "fold ->"));
     Result r = c.result();
     List<String> with =
-        Ide.references(r, c.file(), c.offset(), true).stream().map(l -> at(r, l)).toList();
+        EditorFeatures.standard().references(r, c.file(), c.offset(), true).stream()
+            .map(l -> at(r, l))
+            .toList();
     List<String> without =
-        Ide.references(r, c.file(), c.offset(), false).stream().map(l -> at(r, l)).toList();
+        EditorFeatures.standard().references(r, c.file(), c.offset(), false).stream()
+            .map(l -> at(r, l))
+            .toList();
     int pathUse = Specs.offsetOf(r, Specs.MAIN, "fold", 0);
     int requireUse = Specs.offsetOf(r, Specs.MAIN, "fold", 1);
     assertEquals(
@@ -106,15 +116,19 @@ class NavigationTest {
     Specs.Checked fromUse = Specs.check(twoFiles("main", "fold ->"));
     Specs.Checked fromDecl = Specs.check(twoFiles("parts", "fold"));
     assertEquals(
-        Ide.references(fromUse.result(), fromUse.file(), fromUse.offset(), true),
-        Ide.references(fromDecl.result(), fromDecl.file(), fromDecl.offset(), true));
+        EditorFeatures.standard()
+            .references(fromUse.result(), fromUse.file(), fromUse.offset(), true),
+        EditorFeatures.standard()
+            .references(fromDecl.result(), fromDecl.file(), fromDecl.offset(), true));
   }
 
   @Test
   void anUnusedDeclarationHasOnlyItself() {
     Specs.Checked c = Specs.check(twoFiles("parts", "spare"));
-    assertEquals(List.of(), Ide.references(c.result(), c.file(), c.offset(), false));
-    assertEquals(1, Ide.references(c.result(), c.file(), c.offset(), true).size());
+    assertEquals(
+        List.of(), EditorFeatures.standard().references(c.result(), c.file(), c.offset(), false));
+    assertEquals(
+        1, EditorFeatures.standard().references(c.result(), c.file(), c.offset(), true).size());
   }
 
   @Test
@@ -122,7 +136,8 @@ class NavigationTest {
     Specs.Checked c = Specs.check(Specs.BENCH);
     Result r = c.result();
     List<Location> refs =
-        Ide.references(r, Specs.MAIN, Specs.offsetOf(r, Specs.MAIN, "silver", 0), true);
+        EditorFeatures.standard()
+            .references(r, Specs.MAIN, Specs.offsetOf(r, Specs.MAIN, "silver", 0), true);
     assertEquals(1, refs.size());
     assertTrue(
         refs.stream().allMatch(l -> r.files().get(l.file()).slice(l.range()).equals("silver")));

@@ -32,7 +32,7 @@ class RenameTest {
   void renamingAPartEditsBothFiles() {
     Specs.Checked c = Specs.check(NavigationTest.twoFiles("main", "fold ->"));
     Result r = c.result();
-    RenameResult rename = Ide.rename(r, c.file(), c.offset(), "steer");
+    RenameResult rename = EditorFeatures.standard().rename(r, c.file(), c.offset(), "steer");
     assertNull(rename.error());
     assertEquals(2, rename.edits().size());
     Path parts = NavigationTest.PARTS;
@@ -50,7 +50,8 @@ class RenameTest {
     Specs.Checked c = Specs.check(Specs.BENCH);
     Result r = c.result();
     RenameResult rename =
-        Ide.rename(r, Specs.MAIN, Specs.offsetOf(r, Specs.MAIN, "w1", 0), "entry_window");
+        EditorFeatures.standard()
+            .rename(r, Specs.MAIN, Specs.offsetOf(r, Specs.MAIN, "w1", 0), "entry_window");
     String renamed = apply(r.files().get(Specs.MAIN).text(), rename.edits().get(Specs.MAIN));
     assertTrue(renamed.contains("entry_window.reflected -> 30 mm"));
     Result again = Specs.check(renamed).result();
@@ -66,7 +67,7 @@ class RenameTest {
     Result r = c.result();
     int w1 = Specs.offsetOf(r, Specs.MAIN, "w1", 0);
     for (String name : List.of("spiegel_ä", "w²", "𝑥_1", "xⅫ")) {
-      RenameResult rename = Ide.rename(r, Specs.MAIN, w1, name);
+      RenameResult rename = EditorFeatures.standard().rename(r, Specs.MAIN, w1, name);
       assertNull(rename.error(), name);
       String renamed = apply(r.files().get(Specs.MAIN).text(), rename.edits().get(Specs.MAIN));
       assertEquals(
@@ -78,7 +79,9 @@ class RenameTest {
   void theSameNameGivesNoEdits() {
     Specs.Checked c = Specs.check(Specs.BENCH);
     RenameResult rename =
-        Ide.rename(c.result(), Specs.MAIN, Specs.offsetOf(c.result(), Specs.MAIN, "qwp", 0), "qwp");
+        EditorFeatures.standard()
+            .rename(
+                c.result(), Specs.MAIN, Specs.offsetOf(c.result(), Specs.MAIN, "qwp", 0), "qwp");
     assertNull(rename.error());
     assertEquals(Map.of(), rename.edits());
   }
@@ -88,7 +91,7 @@ class RenameTest {
     Specs.Checked c = Specs.check(Specs.BENCH);
     int qwp = Specs.offsetOf(c.result(), Specs.MAIN, "qwp", 0);
     for (String bad : List.of("2qwp", "q-wp", "", "q w", "٣qwp", "q😀", "Ⅻ", "x\n")) {
-      RenameResult rename = Ide.rename(c.result(), Specs.MAIN, qwp, bad);
+      RenameResult rename = EditorFeatures.standard().rename(c.result(), Specs.MAIN, qwp, bad);
       assertNotNull(rename.error(), bad);
       assertTrue(rename.error().contains("is not a name"), rename.error());
       assertEquals(Map.of(), rename.edits());
@@ -99,8 +102,9 @@ class RenameTest {
   void refusesReservedWords() {
     Specs.Checked c = Specs.check(Specs.BENCH);
     RenameResult rename =
-        Ide.rename(
-            c.result(), Specs.MAIN, Specs.offsetOf(c.result(), Specs.MAIN, "qwp", 0), "linear");
+        EditorFeatures.standard()
+            .rename(
+                c.result(), Specs.MAIN, Specs.offsetOf(c.result(), Specs.MAIN, "qwp", 0), "linear");
     assertEquals("'linear' is a reserved word and cannot be a name", rename.error());
   }
 
@@ -109,13 +113,13 @@ class RenameTest {
     Specs.Checked c = Specs.check(NavigationTest.twoFiles("main", "fold ->"));
     assertEquals(
         "'spare' is already declared; names must be unique",
-        Ide.rename(c.result(), c.file(), c.offset(), "spare").error());
+        EditorFeatures.standard().rename(c.result(), c.file(), c.offset(), "spare").error());
     assertEquals(
         "'seed' is already declared; names must be unique",
-        Ide.rename(c.result(), c.file(), c.offset(), "seed").error());
+        EditorFeatures.standard().rename(c.result(), c.file(), c.offset(), "seed").error());
     assertEquals(
         "'water' is the name of a catalog material",
-        Ide.rename(c.result(), c.file(), c.offset(), "water").error());
+        EditorFeatures.standard().rename(c.result(), c.file(), c.offset(), "water").error());
   }
 
   @Test
@@ -123,12 +127,17 @@ class RenameTest {
     Specs.Checked c = Specs.check(Specs.BENCH);
     Result r = c.result();
     int m1 = Specs.offsetOf(r, Specs.MAIN, "m1", 1);
-    assertEquals(Optional.of(new TextRange(m1, m1 + 2)), Ide.prepareRename(r, Specs.MAIN, m1 + 1));
+    assertEquals(
+        Optional.of(new TextRange(m1, m1 + 2)),
+        EditorFeatures.standard().prepareRename(r, Specs.MAIN, m1 + 1));
     for (String notAName :
         List.of("train", "require", "1064", "5 kW", "silver", "through", "wavelength")) {
       int at = Specs.offsetOf(r, Specs.MAIN, notAName, 0);
-      assertEquals(Optional.empty(), Ide.prepareRename(r, Specs.MAIN, at + 1), notAName);
-      assertNotNull(Ide.rename(r, Specs.MAIN, at + 1, "x").error(), notAName);
+      assertEquals(
+          Optional.empty(),
+          EditorFeatures.standard().prepareRename(r, Specs.MAIN, at + 1),
+          notAName);
+      assertNotNull(EditorFeatures.standard().rename(r, Specs.MAIN, at + 1, "x").error(), notAName);
     }
   }
 }

@@ -36,7 +36,7 @@ class SemanticTokensTest {
     for (SemanticToken t : tokens) {
       out.append(text, t.start(), t.start() + t.length())
           .append("  ")
-          .append(t.type())
+          .append(t.type().word())
           .append(t.declaration() ? " *" : "")
           .append('\n');
     }
@@ -47,7 +47,7 @@ class SemanticTokensTest {
   void theFixtureIsClassifiedExactly() throws IOException {
     Specs.Checked c =
         Specs.check(java.util.Map.of("main.jonq", FIXTURE, "parts.jonq", "probe spare\n"));
-    List<SemanticToken> tokens = Ide.semanticTokens(c.result(), Specs.MAIN);
+    List<SemanticToken> tokens = EditorFeatures.standard().semanticTokens(c.result(), Specs.MAIN);
     Path golden = Path.of("src/test/resources/ide/tokens/fixture.txt");
     String actual = render(FIXTURE, tokens);
     if (!Files.exists(golden) || Boolean.getBoolean("golden.update")) {
@@ -62,7 +62,9 @@ class SemanticTokensTest {
   void tokensAreReadAsTheLexerReadsThem() {
     // A superscript continues a name; a non-ASCII digit is a stray character, never a number.
     String spec = "probe w²\nlens l { focal ٣ mm }\n";
-    String rendered = render(spec, Ide.semanticTokens(Specs.check(spec).result(), Specs.MAIN));
+    String rendered =
+        render(
+            spec, EditorFeatures.standard().semanticTokens(Specs.check(spec).result(), Specs.MAIN));
     assertTrue(rendered.contains("w²  variable *\n"), rendered);
     assertFalse(rendered.contains("٣"), rendered);
   }
@@ -72,7 +74,7 @@ class SemanticTokensTest {
     for (String spec :
         List.of(FIXTURE, Specs.BENCH, "lens { focal 3 mm\n/* open", "train { a -> -> 3 }")) {
       Result r = Specs.check(spec).result();
-      List<SemanticToken> tokens = Ide.semanticTokens(r, Specs.MAIN);
+      List<SemanticToken> tokens = EditorFeatures.standard().semanticTokens(r, Specs.MAIN);
       for (int i = 1; i < tokens.size(); i++) {
         SemanticToken a = tokens.get(i - 1);
         assertTrue(
@@ -96,6 +98,6 @@ class SemanticTokensTest {
         /* x  comment
         y */  comment
         """,
-        render(spec, Ide.semanticTokens(r, Specs.MAIN)));
+        render(spec, EditorFeatures.standard().semanticTokens(r, Specs.MAIN)));
   }
 }

@@ -12,7 +12,7 @@ import org.junit.jupiter.api.Test;
 class SymbolsTest {
   private static void render(List<SymbolInfo> nodes, String indent, StringBuilder out) {
     for (SymbolInfo s : nodes) {
-      out.append(indent).append(s.kind()).append(' ').append(s.name()).append('\n');
+      out.append(indent).append(s.detail()).append(' ').append(s.name()).append('\n');
       render(s.children(), indent + "  ", out);
     }
   }
@@ -28,7 +28,7 @@ class SymbolsTest {
   void theOutlineIsHierarchical() {
     Result r = Specs.check(Specs.BENCH).result();
     StringBuilder out = new StringBuilder();
-    render(Ide.documentSymbols(r, Specs.MAIN), "", out);
+    render(EditorFeatures.standard().documentSymbols(r, Specs.MAIN), "", out);
     assertEquals(
         """
         source seed
@@ -66,7 +66,7 @@ class SymbolsTest {
     Specs.Checked c = Specs.check(NavigationTest.twoFiles("main", "fold"));
     for (var file : c.result().files().keySet()) {
       List<SymbolInfo> all = new ArrayList<>();
-      everyNode(Ide.documentSymbols(c.result(), file), all);
+      everyNode(EditorFeatures.standard().documentSymbols(c.result(), file), all);
       assertTrue(!all.isEmpty(), file.toString());
       for (SymbolInfo s : all) {
         assertTrue(s.range().contains(s.selectionRange()), s.name());
@@ -74,7 +74,9 @@ class SymbolsTest {
       }
     }
     List<SymbolInfo> bench = new ArrayList<>();
-    everyNode(Ide.documentSymbols(Specs.check(Specs.BENCH).result(), Specs.MAIN), bench);
+    everyNode(
+        EditorFeatures.standard().documentSymbols(Specs.check(Specs.BENCH).result(), Specs.MAIN),
+        bench);
     for (SymbolInfo s : bench) {
       assertTrue(s.range().contains(s.selectionRange()), s.name());
     }
@@ -84,7 +86,7 @@ class SymbolsTest {
   void theSelectionOfADeclarationIsItsName() {
     Result r = Specs.check(Specs.BENCH).result();
     SymbolInfo m1 =
-        Ide.documentSymbols(r, Specs.MAIN).stream()
+        EditorFeatures.standard().documentSymbols(r, Specs.MAIN).stream()
             .filter(s -> s.name().equals("m1"))
             .findFirst()
             .orElseThrow();
@@ -96,15 +98,22 @@ class SymbolsTest {
   void workspaceSearchIsACaseInsensitiveSubstringMatchOverAllFiles() {
     Result r = Specs.check(NavigationTest.twoFiles("main", "fold")).result();
     assertEquals(
-        List.of("fold"), Ide.workspaceSymbols(r, "OL").stream().map(SymbolInfo::name).toList());
+        List.of("fold"),
+        EditorFeatures.standard().workspaceSymbols(r, "OL").stream()
+            .map(f -> f.symbol().name())
+            .toList());
     assertEquals(
         List.of(NavigationTest.PARTS),
-        Ide.workspaceSymbolLocations(r, "OL").stream().map(Location::file).toList());
+        EditorFeatures.standard().workspaceSymbols(r, "OL").stream()
+            .map(FoundSymbol::file)
+            .toList());
     List<String> all =
-        Ide.workspaceSymbols(r, "").stream().map(s -> s.kind() + " " + s.name()).toList();
+        EditorFeatures.standard().workspaceSymbols(r, "").stream()
+            .map(f -> f.symbol().detail() + " " + f.symbol().name())
+            .toList();
     assertEquals(
         List.of("source seed", "dump d1", "train main", "mirror fold", "mirror spare"), all);
-    assertEquals(List.of(), Ide.workspaceSymbols(r, "nothing_like_this"));
+    assertEquals(List.of(), EditorFeatures.standard().workspaceSymbols(r, "nothing_like_this"));
   }
 
   @Test
@@ -114,6 +123,6 @@ class SymbolsTest {
       spec.append("probe p").append(i).append('\n');
     }
     Result r = Specs.check(spec.toString()).result();
-    assertEquals(200, Ide.workspaceSymbols(r, "p").size());
+    assertEquals(200, EditorFeatures.standard().workspaceSymbols(r, "p").size());
   }
 }

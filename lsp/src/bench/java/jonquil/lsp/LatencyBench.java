@@ -14,6 +14,7 @@ import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.TimeUnit;
+import jonquil.ide.EditorFeatures;
 import org.eclipse.lsp4j.ClientCapabilities;
 import org.eclipse.lsp4j.DiagnosticSeverity;
 import org.eclipse.lsp4j.DidChangeTextDocumentParams;
@@ -232,7 +233,8 @@ public final class LatencyBench {
                 t.setDaemon(true);
                 return t;
               });
-      this.server = new JonquilLanguageServer(new IdeAnswers(), Duration.ofMillis(debounceMs));
+      this.server =
+          new JonquilLanguageServer(EditorFeatures.standard(), Duration.ofMillis(debounceMs));
       Launcher<LanguageClient> serverSide =
           LSPLauncher.createServerLauncher(
               server,

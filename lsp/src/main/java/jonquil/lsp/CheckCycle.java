@@ -1,6 +1,5 @@
 package jonquil.lsp;
 
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -15,6 +14,7 @@ import java.util.function.Supplier;
 import jonquil.Checker;
 import jonquil.Result;
 import jonquil.Workspace;
+import jonquil.source.ProjectRoot;
 import jonquil.source.SourceFile;
 import org.eclipse.lsp4j.Diagnostic;
 import org.eclipse.lsp4j.PublishDiagnosticsParams;
@@ -26,8 +26,6 @@ import org.eclipse.lsp4j.services.LanguageClient;
  */
 final class CheckCycle implements CheckScheduler.Task {
   /** Marks a project root where there is no version control, as the command line does. */
-  static final String ROOT_MARKER = ".jonquil-root";
-
   private record Published(String uri, Integer version, List<Diagnostic> diagnostics) {}
 
   private final Documents documents;
@@ -78,7 +76,7 @@ final class CheckCycle implements CheckScheduler.Task {
               buffers.put(doc.path(), doc.text());
               versions.put(doc.path(), doc.version());
               byRoot
-                  .computeIfAbsent(projectRoot(doc.path(), roots), k -> new ArrayList<>())
+                  .computeIfAbsent(ProjectRoot.owning(doc.path(), roots), k -> new ArrayList<>())
                   .add(doc.path());
             });
     List<Result> results = new ArrayList<>();
@@ -192,29 +190,5 @@ final class CheckCycle implements CheckScheduler.Task {
       }
     }
     return out;
-  }
-
-  /**
-   * The root 'use' paths are anchored to: the innermost workspace folder holding the file, else the
-   * nearest ancestor with {@code .git} or the root marker, else the file's folder.
-   */
-  static Path projectRoot(Path file, List<Path> folders) {
-    Path best = null;
-    for (Path folder : folders) {
-      if (file.startsWith(folder)
-          && (best == null || folder.getNameCount() > best.getNameCount())) {
-        best = folder;
-      }
-    }
-    if (best != null) {
-      return best;
-    }
-    Path dir = file.getParent();
-    for (Path d = dir; d != null; d = d.getParent()) {
-      if (Files.exists(d.resolve(".git")) || Files.exists(d.resolve(ROOT_MARKER))) {
-        return d;
-      }
-    }
-    return dir != null ? dir : file;
   }
 }

@@ -4,50 +4,21 @@ import java.io.PrintStream;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
-import java.util.Map;
-import java.util.Optional;
 import java.util.Set;
-import java.util.concurrent.CancellationException;
 import java.util.concurrent.CompletableFuture;
-import java.util.concurrent.CompletionException;
-import java.util.concurrent.ExecutionException;
-import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Executors;
-import java.util.concurrent.Future;
-import java.util.concurrent.RejectedExecutionException;
-import java.util.concurrent.atomic.AtomicInteger;
 import java.util.concurrent.atomic.AtomicReference;
-import java.util.function.Function;
-import java.util.function.Supplier;
-import jonquil.CheckOptions;
-import jonquil.Checker;
-import jonquil.Result;
-import jonquil.Workspace;
 import jonquil.cli.ToolVersion;
-import jonquil.source.SourceFile;
+import jonquil.ide.EditorFeatures;
 import org.eclipse.lsp4j.ClientCapabilities;
-import org.eclipse.lsp4j.CodeActionKind;
-import org.eclipse.lsp4j.CodeActionOptions;
-import org.eclipse.lsp4j.CompletionOptions;
-import org.eclipse.lsp4j.DocumentLinkOptions;
 import org.eclipse.lsp4j.InitializeParams;
 import org.eclipse.lsp4j.InitializeResult;
 import org.eclipse.lsp4j.InitializedParams;
 import org.eclipse.lsp4j.MessageParams;
 import org.eclipse.lsp4j.MessageType;
-import org.eclipse.lsp4j.Position;
-import org.eclipse.lsp4j.Registration;
 import org.eclipse.lsp4j.RegistrationParams;
-import org.eclipse.lsp4j.RenameOptions;
-import org.eclipse.lsp4j.SemanticTokensServerFull;
-import org.eclipse.lsp4j.SemanticTokensWithRegistrationOptions;
-import org.eclipse.lsp4j.ServerCapabilities;
 import org.eclipse.lsp4j.ServerInfo;
-import org.eclipse.lsp4j.TextDocumentSyncKind;
-import org.eclipse.lsp4j.TextDocumentSyncOptions;
 import org.eclipse.lsp4j.WorkDoneProgressCancelParams;
 import org.eclipse.lsp4j.WorkspaceFolder;
 import org.eclipse.lsp4j.jsonrpc.ResponseErrorException;
@@ -70,12 +41,6 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
   /** How long a request waits for the check of the version it was asked about. */
   static final Duration FRESH_WAIT = Duration.ofSeconds(5);
 
-  /** The files whose change on disk can change a check: specs, and the n,k tables they name. */
-  static final List<String> WATCHED_GLOBS =
-      List.of("**/*.jonq", "**/*.txt", "**/*.csv", "**/*.tsv");
-
-  static final String WATCHERS_ID = "jonquil-watched-files";
-
   private enum State {
     NEW,
     RUNNING,
@@ -83,20 +48,13 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     EXITED
   }
 
-  final EditorAnswers answers;
+  final EditorFeatures answers;
   final Documents documents = new Documents();
   final Snapshots snapshots = new Snapshots();
   final WorkspaceIndex index;
   private final CheckCycle cycle;
   private final CheckScheduler scheduler;
-  private final ExecutorService requests;
-
-  /**
-   * Completes replies, which makes LSP4J write them: a thread that is never interrupted, so a
-   * cancel (which interrupts the request worker) can never land mid-write. On a channel-backed
-   * stream that interrupt would close the channel, and the connection with it.
-   */
-  private final ExecutorService replies;
+  final RequestPipeline requests;
 
   private final JonquilTextDocumentService textDocuments;
   private final JonquilWorkspaceService workspace;
@@ -104,6 +62,7 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
   private final AtomicReference<State> state = new AtomicReference<>(State.NEW);
   private volatile LanguageClient client;
   private volatile Convert convert = new Convert(Convert.Encoding.UTF_16, documents::uriOf);
+  private volatile SemanticTokenEncoding tokenEncoding = new SemanticTokenEncoding(false);
   private volatile ClientCapabilities capabilities = new ClientCapabilities();
   private volatile Folders folders = new Folders(List.of(), 0);
 
@@ -124,15 +83,15 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
   }
 
   public JonquilLanguageServer() {
-    this(new IdeAnswers());
+    this(EditorFeatures.standard());
   }
 
-  public JonquilLanguageServer(EditorAnswers answers) {
+  public JonquilLanguageServer(EditorFeatures answers) {
     this(answers, DEBOUNCE, true, null);
   }
 
   /** A server that writes a debug line per check and per request to {@code debug} (null: none). */
-  public JonquilLanguageServer(EditorAnswers answers, PrintStream debug) {
+  public JonquilLanguageServer(EditorFeatures answers, PrintStream debug) {
     this(answers, DEBOUNCE, true, debug);
   }
 
@@ -140,7 +99,7 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
    * A server whose checks wait {@code debounce} after the last edit (tests and benchmarks shorten
    * it).
    */
-  JonquilLanguageServer(EditorAnswers answers, Duration debounce) {
+  JonquilLanguageServer(EditorFeatures answers, Duration debounce) {
     this(answers, debounce, true, null);
   }
 
@@ -148,12 +107,12 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
    * As above; with {@code checkAfterPause} false even an edit after a pause waits for the debounce
    * (for tests).
    */
-  JonquilLanguageServer(EditorAnswers answers, Duration debounce, boolean checkAfterPause) {
+  JonquilLanguageServer(EditorFeatures answers, Duration debounce, boolean checkAfterPause) {
     this(answers, debounce, checkAfterPause, null);
   }
 
   private JonquilLanguageServer(
-      EditorAnswers answers, Duration debounce, boolean checkAfterPause, PrintStream debug) {
+      EditorFeatures answers, Duration debounce, boolean checkAfterPause, PrintStream debug) {
     this.answers = answers;
     this.debug = debug;
     this.cycle =
@@ -172,29 +131,8 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
             MAX_DELAY.compareTo(debounce) > 0 ? MAX_DELAY : debounce,
             debug == null ? WarmUp::run : this::timedWarmUp,
             checkAfterPause);
-    AtomicInteger n = new AtomicInteger();
-    ThreadGroup group = new ThreadGroup("jonquil-requests");
-    this.requests =
-        Executors.newFixedThreadPool(
-            2,
-            r -> {
-              Thread t =
-                  new Thread(
-                      group,
-                      r,
-                      "jonquil-request-" + n.incrementAndGet(),
-                      CheckScheduler.STACK_BYTES);
-              t.setDaemon(true);
-              return t;
-            });
-    this.replies =
-        Executors.newSingleThreadExecutor(
-            r -> {
-              Thread t = new Thread(group, r, "jonquil-replies");
-              t.setDaemon(true);
-              return t;
-            });
     this.index = new WorkspaceIndex(answers, documents, () -> client, this::log);
+    this.requests = new RequestPipeline(this);
     this.textDocuments = new JonquilTextDocumentService(this);
     this.workspace = new JonquilWorkspaceService(this);
   }
@@ -216,63 +154,18 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
       ClientCapabilities caps =
           params.getCapabilities() != null ? params.getCapabilities() : new ClientCapabilities();
       capabilities = caps;
-      convert =
-          new Convert(
-              Convert.Encoding.negotiate(caps),
-              documents::uriOf,
-              ClientSupport.semanticTokenType(caps, Convert.UNIT_TOKEN));
+      convert = new Convert(Convert.Encoding.negotiate(caps), documents::uriOf);
+      tokenEncoding =
+          new SemanticTokenEncoding(
+              ClientSupport.semanticTokenType(caps, SemanticTokenEncoding.UNIT_TOKEN));
       folders = new Folders(foldersOf(params), folders.generation() + 1);
       return CompletableFuture.completedFuture(
           new InitializeResult(
-              capabilities(caps), new ServerInfo("jonquil", ToolVersion.current())));
+              ServerFeatures.of(caps, convert.encoding(), tokenEncoding),
+              new ServerInfo("jonquil", ToolVersion.current())));
     } catch (RuntimeException e) {
-      return CompletableFuture.failedFuture(asResponseError("initialize", e));
+      return CompletableFuture.failedFuture(requests.asResponseError("initialize", e));
     }
-  }
-
-  private ServerCapabilities capabilities(ClientCapabilities caps) {
-    ServerCapabilities out = new ServerCapabilities();
-    out.setPositionEncoding(convert.encoding().wire());
-    TextDocumentSyncOptions sync = new TextDocumentSyncOptions();
-    sync.setOpenClose(true);
-    sync.setChange(TextDocumentSyncKind.Incremental);
-    out.setTextDocumentSync(sync);
-    out.setHoverProvider(true);
-    out.setDefinitionProvider(true);
-    out.setReferencesProvider(true);
-    if (ClientSupport.prepareRename(caps)) {
-      out.setRenameProvider(new RenameOptions(true));
-    } else {
-      out.setRenameProvider(true);
-    }
-    out.setDocumentSymbolProvider(true);
-    out.setWorkspaceSymbolProvider(true);
-    // Sent whatever the client said: one without workspace folders never sends the notification.
-    out.setWorkspace(Convert.workspaceFolders());
-    out.setDocumentFormattingProvider(true);
-    out.setDocumentRangeFormattingProvider(true);
-    CompletionOptions completion = new CompletionOptions(true, List.of("."));
-    out.setCompletionProvider(completion);
-    out.setSemanticTokensProvider(
-        new SemanticTokensWithRegistrationOptions(
-            convert.semanticTokensLegend(), new SemanticTokensServerFull(true), false));
-    // Advertised to every client: one without the capability simply never asks, and one that
-    // cannot resolve tooltips gets them inline.
-    out.setInlayHintProvider(Convert.inlayHintProvider());
-    out.setFoldingRangeProvider(true);
-    out.setDocumentLinkProvider(new DocumentLinkOptions(false));
-    if (ClientSupport.pullDiagnostics(caps)) {
-      // A document's diagnostics depend on the files it uses; no workspace-wide pull.
-      out.setDiagnosticProvider(Convert.diagnosticProvider());
-    }
-    if (ClientSupport.codeActionLiterals(caps)) {
-      out.setCodeActionProvider(new CodeActionOptions(List.of(CodeActionKind.QuickFix)));
-    } else {
-      // A client without literal code actions would need commands; it gets none, so it is told
-      // nothing is offered.
-      out.setCodeActionProvider(false);
-    }
-    return out;
   }
 
   @SuppressWarnings("deprecation")
@@ -306,13 +199,7 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     index.start(folders.paths(), ClientSupport.workDoneProgress(capabilities), watching);
     if (watching) {
       // Never wait for the reply here: this runs on the reader thread, which must read it.
-      c.registerCapability(
-              new RegistrationParams(
-                  List.of(
-                      new Registration(
-                          WATCHERS_ID,
-                          "workspace/didChangeWatchedFiles",
-                          Convert.fileWatchers(WATCHED_GLOBS)))))
+      c.registerCapability(new RegistrationParams(List.of(ServerFeatures.fileWatching())))
           .whenComplete(
               (ok, error) -> {
                 if (error != null) {
@@ -330,7 +217,7 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
   @Override
   public CompletableFuture<Object> shutdown() {
     if (state.get() == State.NEW) {
-      return CompletableFuture.failedFuture(notInitialized());
+      return CompletableFuture.failedFuture(RequestPipeline.notInitialized());
     }
     state.set(State.SHUT_DOWN);
     return CompletableFuture.completedFuture(null);
@@ -341,6 +228,26 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     State was = state.getAndSet(State.EXITED);
     close();
     exitCode.complete(was == State.SHUT_DOWN ? 0 : 1);
+  }
+
+  /** True before initialize: requests are refused with -32002. */
+  boolean notYetInitialized() {
+    return state.get() == State.NEW;
+  }
+
+  /** True between initialize and shutdown: requests are answered. */
+  boolean running() {
+    return state.get() == State.RUNNING;
+  }
+
+  /** The workspace folders with their generation, as a request waits for a check under them. */
+  Folders folderState() {
+    return folders;
+  }
+
+  /** Whether `--verbose` debug lines are on. */
+  boolean debugging() {
+    return debug != null;
   }
 
   /**
@@ -361,8 +268,7 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
   public void close() {
     scheduler.close();
     index.close();
-    requests.shutdownNow();
-    replies.shutdown();
+    requests.close();
   }
 
   @Override
@@ -379,6 +285,10 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
 
   Convert convert() {
     return convert;
+  }
+
+  SemanticTokenEncoding tokenEncoding() {
+    return tokenEncoding;
   }
 
   ClientCapabilities clientCapabilities() {
@@ -411,7 +321,7 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
   public void cancelProgress(WorkDoneProgressCancelParams params) {
     onNotification(
         "window/workDoneProgress/cancel",
-        () -> index.cancelProgress(Convert.progressToken(params.getToken())));
+        () -> index.cancelProgress(IndexProgress.progressToken(params.getToken())));
   }
 
   /**
@@ -428,243 +338,6 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
       log(MessageType.Error, "failed to handle " + method + ": " + describe(e));
       e.printStackTrace(System.err);
     }
-  }
-
-  /**
-   * A request about a position in a document, answered on the request pool from a snapshot that saw
-   * the document; {@code versions} are the document versions that result read (for versioned
-   * edits).
-   */
-  record At(
-      Result result,
-      Path path,
-      SourceFile source,
-      int offset,
-      Convert convert,
-      Map<Path, Integer> versions) {}
-
-  <T> CompletableFuture<T> atPosition(
-      String method, String uri, Position position, T none, Function<At, T> body) {
-    return atPosition(method, uri, null, position, none, body);
-  }
-
-  /** As above, answered once {@code before} is done too (e.g. a fresh workspace index). */
-  <T> CompletableFuture<T> atPosition(
-      String method,
-      String uri,
-      Supplier<? extends CompletableFuture<?>> before,
-      Position position,
-      T none,
-      Function<At, T> body) {
-    return answer(
-        method,
-        uri,
-        before,
-        (snapshot, path) -> {
-          Optional<Result> result = snapshot.resultFor(path);
-          if (result.isEmpty()) {
-            return none;
-          }
-          SourceFile source = result.get().files().get(path);
-          Convert conv = convert;
-          int offset = position == null ? 0 : conv.offset(source, position);
-          return body.apply(new At(result.get(), path, source, offset, conv, snapshot.versions()));
-        });
-  }
-
-  /**
-   * Like {@link #atPosition}, but answered at once from the document's text as the request found
-   * it: from the latest check when that read the same text, else from a check of the buffer run
-   * here, on the request pool. For answers that read the text around the cursor (completion), where
-   * waiting for the debounced check would lag the typing.
-   */
-  <T> CompletableFuture<T> atBuffer(
-      String method, String uri, Position position, T none, Function<At, T> body) {
-    // Read on the reader thread, so the text is the one every earlier didChange made.
-    Optional<Documents.Doc> doc = uri == null ? Optional.empty() : documents.get(uri);
-    return answer(
-        method,
-        null,
-        (snapshot, ignored) -> {
-          if (doc.isEmpty()) {
-            return none;
-          }
-          Documents.Doc d = doc.get();
-          Path path = d.path();
-          Map<Path, Integer> versions = snapshot.versions();
-          Result result =
-              snapshot
-                  .resultFor(path)
-                  .filter(r -> d.text().equals(r.files().get(path).text()))
-                  .orElse(null);
-          if (result == null) {
-            result = checkBuffer(d);
-            Map<Path, Integer> seen = new HashMap<>(versions);
-            seen.put(path, d.version());
-            versions = seen;
-          }
-          SourceFile source = result.files().get(path);
-          if (source == null) {
-            return none;
-          }
-          Convert conv = convert;
-          int offset = position == null ? 0 : conv.offset(source, position);
-          return body.apply(new At(result, path, source, offset, conv, versions));
-        });
-  }
-
-  /**
-   * A check of one document's text as given, the other open buffers overlaid, rooted as the check
-   * cycle roots it.
-   */
-  private Result checkBuffer(Documents.Doc doc) {
-    Map<Path, String> buffers = new HashMap<>();
-    documents.snapshot().forEach((p, open) -> buffers.put(p, open.text()));
-    buffers.put(doc.path(), doc.text());
-    Path root = CheckCycle.projectRoot(doc.path(), folders.paths());
-    return Checker.check(
-        Workspace.withOverlay(root, buffers), List.of(doc.path()), CheckOptions.EDITOR);
-  }
-
-  /**
-   * The functional shape of a request body: the snapshot to answer from and the document's path
-   * (null when none).
-   */
-  interface Body<T> {
-    T apply(Snapshots.Snapshot snapshot, Path path);
-  }
-
-  /**
-   * Answers a request off the reader thread: refuses it before initialize (-32002) and after
-   * shutdown, waits (without blocking) for a check that saw the document's current version, and
-   * turns any exception into an internal-error response plus a log line.
-   */
-  <T> CompletableFuture<T> answer(String method, String uri, Body<T> body) {
-    return answer(method, uri, null, body);
-  }
-
-  /**
-   * As above, also waiting (without blocking) for {@code before}, when given, e.g. a fresh
-   * workspace index.
-   */
-  <T> CompletableFuture<T> answer(
-      String method, String uri, Supplier<? extends CompletableFuture<?>> before, Body<T> body) {
-    try {
-      State s = state.get();
-      if (s == State.NEW) {
-        return CompletableFuture.failedFuture(notInitialized());
-      }
-      if (s != State.RUNNING) {
-        return CompletableFuture.failedFuture(
-            new ResponseErrorException(
-                new ResponseError(
-                    ResponseErrorCode.InvalidRequest, "the server is shutting down", null)));
-      }
-      Path path = uri == null ? null : Documents.pathOf(uri).orElse(null);
-      Integer version =
-          path == null ? null : documents.get(path).map(Documents.Doc::version).orElse(null);
-      CompletableFuture<Snapshots.Snapshot> checked =
-          snapshots.fresh(path, version, folders.generation(), FRESH_WAIT);
-      CompletableFuture<Snapshots.Snapshot> fresh =
-          before == null
-              ? checked
-              : checked.thenCombine(before.get(), (snapshot, ignored) -> snapshot);
-      CompletableFuture<T> reply = new CompletableFuture<>();
-      if (debug != null) {
-        long start = System.nanoTime();
-        reply.whenComplete(
-            (value, error) ->
-                debug(
-                    "request "
-                        + method
-                        + ": "
-                        + (error == null ? "answered" : "failed (" + describe(error) + ")")
-                        + " in "
-                        + millisSince(start)
-                        + " ms"));
-      }
-      AtomicReference<Future<?>> running = new AtomicReference<>();
-      fresh.whenComplete(
-          (snapshot, waitError) -> {
-            if (reply.isDone()) {
-              return; // cancelled while waiting for a fresh check
-            }
-            if (waitError != null) {
-              reply.completeExceptionally(asResponseError(method, waitError));
-              return;
-            }
-            try {
-              running.set(
-                  requests.submit(
-                      () -> {
-                        if (reply.isDone()) {
-                          return;
-                        }
-                        try {
-                          T value = body.apply(snapshot, path);
-                          replies.execute(() -> reply.complete(value));
-                        } catch (Throwable error) {
-                          if (!reply
-                              .isDone()) { // after a cancel, the interrupt's own failure is no
-                            // error to report
-                            Throwable response = asResponseError(method, error);
-                            replies.execute(() -> reply.completeExceptionally(response));
-                          }
-                        }
-                      }));
-            } catch (RejectedExecutionException e) {
-              reply.completeExceptionally(
-                  new ResponseErrorException(
-                      new ResponseError(
-                          ResponseErrorCode.InvalidRequest, "the server is shutting down", null)));
-            }
-            if (reply.isCancelled()) {
-              cancel(running.get());
-            }
-          });
-      reply.whenComplete(
-          (value, error) -> {
-            if (reply.isCancelled()) {
-              // $/cancelRequest: LSP4J answers -32800 at once; interrupting frees the worker for
-              // the next request.
-              fresh.cancel(false);
-              checked.cancel(false);
-              cancel(running.get());
-            }
-          });
-      return reply;
-    } catch (RuntimeException | StackOverflowError e) {
-      return CompletableFuture.failedFuture(asResponseError(method, e));
-    }
-  }
-
-  private static void cancel(Future<?> task) {
-    if (task != null) {
-      task.cancel(true);
-    }
-  }
-
-  private static ResponseErrorException notInitialized() {
-    return new ResponseErrorException(
-        new ResponseError(
-            ResponseErrorCode.ServerNotInitialized, "the server is not initialized yet", null));
-  }
-
-  /** A response error for a failed handler; anything unexpected becomes -32603 and is logged. */
-  Throwable asResponseError(String method, Throwable error) {
-    Throwable cause = error;
-    while ((cause instanceof CompletionException || cause instanceof ExecutionException)
-        && cause.getCause() != null) {
-      cause = cause.getCause();
-    }
-    if (cause instanceof ResponseErrorException || cause instanceof CancellationException) {
-      return cause;
-    }
-    String message = "internal error in " + method + ": " + describe(cause);
-    log(MessageType.Error, message);
-    cause.printStackTrace(System.err);
-    return new ResponseErrorException(
-        new ResponseError(ResponseErrorCode.InternalError, message, null));
   }
 
   private void checkFailed(Throwable error) {
@@ -714,7 +387,7 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     debug("warm-up: " + millisSince(start) + " ms");
   }
 
-  private static long millisSince(long startNanos) {
+  static long millisSince(long startNanos) {
     return (System.nanoTime() - startNanos) / 1_000_000;
   }
 
@@ -742,146 +415,6 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
       } catch (RuntimeException e) {
         // the client is gone; stderr has it
       }
-    }
-  }
-
-  /** Null-safe reads of optional client capabilities (clients omit what they do not support). */
-  static final class ClientSupport {
-    private ClientSupport() {}
-
-    static boolean prepareRename(ClientCapabilities c) {
-      return c != null
-          && c.getTextDocument() != null
-          && c.getTextDocument().getRename() != null
-          && Boolean.TRUE.equals(c.getTextDocument().getRename().getPrepareSupport());
-    }
-
-    static boolean markdownHover(ClientCapabilities c) {
-      return c != null
-          && c.getTextDocument() != null
-          && c.getTextDocument().getHover() != null
-          && c.getTextDocument().getHover().getContentFormat() != null
-          && c.getTextDocument().getHover().getContentFormat().contains("markdown");
-    }
-
-    /**
-     * The client pulls document diagnostics (textDocument/diagnostic), so they are not pushed to
-     * it.
-     */
-    static boolean pullDiagnostics(ClientCapabilities c) {
-      return c != null
-          && c.getTextDocument() != null
-          && c.getTextDocument().getDiagnostic() != null;
-    }
-
-    static boolean definitionLinks(ClientCapabilities c) {
-      return c != null
-          && c.getTextDocument() != null
-          && c.getTextDocument().getDefinition() != null
-          && Boolean.TRUE.equals(c.getTextDocument().getDefinition().getLinkSupport());
-    }
-
-    static boolean hierarchicalSymbols(ClientCapabilities c) {
-      return c != null
-          && c.getTextDocument() != null
-          && c.getTextDocument().getDocumentSymbol() != null
-          && Boolean.TRUE.equals(
-              c.getTextDocument().getDocumentSymbol().getHierarchicalDocumentSymbolSupport());
-    }
-
-    static boolean workDoneProgress(ClientCapabilities c) {
-      return c != null
-          && c.getWindow() != null
-          && Boolean.TRUE.equals(c.getWindow().getWorkDoneProgress());
-    }
-
-    static boolean watchedFilesRegistration(ClientCapabilities c) {
-      return c != null
-          && c.getWorkspace() != null
-          && c.getWorkspace().getDidChangeWatchedFiles() != null
-          && Boolean.TRUE.equals(
-              c.getWorkspace().getDidChangeWatchedFiles().getDynamicRegistration());
-    }
-
-    /** The client resolves completion items lazily and takes their documentation that way. */
-    static boolean lazyCompletionDocumentation(ClientCapabilities c) {
-      return c != null
-          && c.getTextDocument() != null
-          && c.getTextDocument().getCompletion() != null
-          && c.getTextDocument().getCompletion().getCompletionItem() != null
-          && c.getTextDocument().getCompletion().getCompletionItem().getResolveSupport() != null
-          && c.getTextDocument()
-                  .getCompletion()
-                  .getCompletionItem()
-                  .getResolveSupport()
-                  .getProperties()
-              != null
-          && c.getTextDocument()
-              .getCompletion()
-              .getCompletionItem()
-              .getResolveSupport()
-              .getProperties()
-              .contains("documentation");
-    }
-
-    /** The client resolves inlay hints lazily and takes their tooltips that way. */
-    static boolean lazyInlayHintTooltips(ClientCapabilities c) {
-      return c != null
-          && c.getTextDocument() != null
-          && c.getTextDocument().getInlayHint() != null
-          && c.getTextDocument().getInlayHint().getResolveSupport() != null
-          && c.getTextDocument().getInlayHint().getResolveSupport().getProperties() != null
-          && c.getTextDocument()
-              .getInlayHint()
-              .getResolveSupport()
-              .getProperties()
-              .contains("tooltip");
-    }
-
-    /** The client names this token type among those it knows. */
-    static boolean semanticTokenType(ClientCapabilities c, String type) {
-      return c != null
-          && c.getTextDocument() != null
-          && c.getTextDocument().getSemanticTokens() != null
-          && c.getTextDocument().getSemanticTokens().getTokenTypes() != null
-          && c.getTextDocument().getSemanticTokens().getTokenTypes().contains(type);
-    }
-
-    static boolean lineFoldingOnly(ClientCapabilities c) {
-      return c != null
-          && c.getTextDocument() != null
-          && c.getTextDocument().getFoldingRange() != null
-          && Boolean.TRUE.equals(c.getTextDocument().getFoldingRange().getLineFoldingOnly());
-    }
-
-    /** The most folding ranges the client wants, or null when it sets no limit. */
-    static Integer foldingRangeLimit(ClientCapabilities c) {
-      return c == null
-              || c.getTextDocument() == null
-              || c.getTextDocument().getFoldingRange() == null
-          ? null
-          : c.getTextDocument().getFoldingRange().getRangeLimit();
-    }
-
-    static boolean codeActionLiterals(ClientCapabilities c) {
-      return c != null
-          && c.getTextDocument() != null
-          && c.getTextDocument().getCodeAction() != null
-          && c.getTextDocument().getCodeAction().getCodeActionLiteralSupport() != null;
-    }
-
-    static boolean preferredCodeActions(ClientCapabilities c) {
-      return c != null
-          && c.getTextDocument() != null
-          && c.getTextDocument().getCodeAction() != null
-          && Boolean.TRUE.equals(c.getTextDocument().getCodeAction().getIsPreferredSupport());
-    }
-
-    static boolean documentChanges(ClientCapabilities c) {
-      return c != null
-          && c.getWorkspace() != null
-          && c.getWorkspace().getWorkspaceEdit() != null
-          && Boolean.TRUE.equals(c.getWorkspace().getWorkspaceEdit().getDocumentChanges());
     }
   }
 }

@@ -12,6 +12,7 @@ import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.atomic.AtomicLong;
 import java.util.concurrent.atomic.AtomicReference;
+import jonquil.format.FormatHunks;
 import jonquil.format.Formatter;
 import jonquil.ide.CodeActionInfo;
 import jonquil.ide.CompletionItemInfo;
@@ -155,7 +156,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
   @Override
   public CompletableFuture<DocumentDiagnosticReport> diagnostic(DocumentDiagnosticParams params) {
     String previous = params.getPreviousResultId();
-    return server.answer(
+    return server.requests.answer(
         "textDocument/diagnostic",
         params.getTextDocument().getUri(),
         (snapshot, path) -> {
@@ -183,9 +184,8 @@ final class JonquilTextDocumentService implements TextDocumentService {
 
   @Override
   public CompletableFuture<Hover> hover(HoverParams params) {
-    boolean markdown =
-        JonquilLanguageServer.ClientSupport.markdownHover(server.clientCapabilities());
-    return server.atPosition(
+    boolean markdown = ClientSupport.markdownHover(server.clientCapabilities());
+    return server.requests.atPosition(
         "textDocument/hover",
         params.getTextDocument().getUri(),
         params.getPosition(),
@@ -194,16 +194,15 @@ final class JonquilTextDocumentService implements TextDocumentService {
             server
                 .answers
                 .hover(at.result(), at.path(), at.offset())
-                .map(info -> at.convert().hover(info, at.source(), markdown))
+                .map(info -> ProtocolAnswers.hover(at.convert(), info, at.source(), markdown))
                 .orElse(null));
   }
 
   @Override
   public CompletableFuture<Either<List<? extends Location>, List<? extends LocationLink>>>
       definition(DefinitionParams params) {
-    boolean links =
-        JonquilLanguageServer.ClientSupport.definitionLinks(server.clientCapabilities());
-    return server.atPosition(
+    boolean links = ClientSupport.definitionLinks(server.clientCapabilities());
+    return server.requests.atPosition(
         "textDocument/definition",
         params.getTextDocument().getUri(),
         params.getPosition(),
@@ -231,7 +230,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
    * The occurrence of a name that holds the cursor, as the editor answers list it among the name's
    * references; null when the cursor is on no name (e.g. inside a 'use' path).
    */
-  private TextRange nameUnderCursor(JonquilLanguageServer.At at) {
+  private TextRange nameUnderCursor(RequestPipeline.At at) {
     for (jonquil.ide.Location l :
         server.answers.references(at.result(), at.path(), at.offset(), true)) {
       if (l.file().equals(at.path())
@@ -276,7 +275,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
   public CompletableFuture<List<? extends Location>> references(ReferenceParams params) {
     boolean withDeclaration =
         params.getContext() != null && params.getContext().isIncludeDeclaration();
-    return server.atPosition(
+    return server.requests.atPosition(
         "textDocument/references",
         params.getTextDocument().getUri(),
         server.index::fresh,
@@ -297,7 +296,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
   @Override
   public CompletableFuture<Either3<Range, PrepareRenameResult, PrepareRenameDefaultBehavior>>
       prepareRename(PrepareRenameParams params) {
-    return server.atPosition(
+    return server.requests.atPosition(
         "textDocument/prepareRename",
         params.getTextDocument().getUri(),
         params.getPosition(),
@@ -322,9 +321,8 @@ final class JonquilTextDocumentService implements TextDocumentService {
 
   @Override
   public CompletableFuture<WorkspaceEdit> rename(RenameParams params) {
-    boolean documentChanges =
-        JonquilLanguageServer.ClientSupport.documentChanges(server.clientCapabilities());
-    return server.atPosition(
+    boolean documentChanges = ClientSupport.documentChanges(server.clientCapabilities());
+    return server.requests.atPosition(
         "textDocument/rename",
         params.getTextDocument().getUri(),
         server.index::fresh,
@@ -358,7 +356,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
 
   /** The text a location's offsets refer to: the check's copy, else the workspace index's. */
   private static SourceFile sourceOf(
-      JonquilLanguageServer.At at, WorkspaceIndex.Snapshot index, Path file) {
+      RequestPipeline.At at, WorkspaceIndex.Snapshot index, Path file) {
     SourceFile checked = at.result().files().get(file);
     return checked != null ? checked : index.source(file);
   }
@@ -366,9 +364,8 @@ final class JonquilTextDocumentService implements TextDocumentService {
   @Override
   public CompletableFuture<List<Either<SymbolInformation, DocumentSymbol>>> documentSymbol(
       DocumentSymbolParams params) {
-    boolean hierarchical =
-        JonquilLanguageServer.ClientSupport.hierarchicalSymbols(server.clientCapabilities());
-    return server.atPosition(
+    boolean hierarchical = ClientSupport.hierarchicalSymbols(server.clientCapabilities());
+    return server.requests.atPosition(
         "textDocument/documentSymbol",
         params.getTextDocument().getUri(),
         null,
@@ -378,10 +375,10 @@ final class JonquilTextDocumentService implements TextDocumentService {
           List<Either<SymbolInformation, DocumentSymbol>> out = new ArrayList<>();
           for (SymbolInfo s : server.answers.documentSymbols(at.result(), at.path())) {
             if (hierarchical) {
-              out.add(Either.forRight(at.convert().documentSymbol(s, source)));
+              out.add(Either.forRight(ProtocolAnswers.documentSymbol(at.convert(), s, source)));
             } else {
               List<SymbolInformation> flat = new ArrayList<>();
-              at.convert().flatten(s, source, null, flat);
+              ProtocolAnswers.flatten(at.convert(), s, source, null, flat);
               flat.forEach(f -> out.add(Either.forLeft(f)));
             }
           }
@@ -394,10 +391,8 @@ final class JonquilTextDocumentService implements TextDocumentService {
   @Override
   public CompletableFuture<Either<List<CompletionItem>, CompletionList>> completion(
       CompletionParams params) {
-    boolean lazy =
-        JonquilLanguageServer.ClientSupport.lazyCompletionDocumentation(
-            server.clientCapabilities());
-    return server.atBuffer(
+    boolean lazy = ClientSupport.lazyCompletionDocumentation(server.clientCapabilities());
+    return server.requests.atBuffer(
         "textDocument/completion",
         params.getTextDocument().getUri(),
         params.getPosition(),
@@ -412,8 +407,8 @@ final class JonquilTextDocumentService implements TextDocumentService {
           List<CompletionItem> items = new ArrayList<>();
           for (int i = 0; i < infos.size(); i++) {
             items.add(
-                Convert.completionItem(
-                    infos.get(i), lazy ? new Convert.CompletionKey(id, i) : null));
+                ProtocolAnswers.completionItem(
+                    infos.get(i), lazy ? new ResolveKeys.CompletionKey(id, i) : null));
           }
           return Either.forRight(new CompletionList(false, items));
         });
@@ -421,11 +416,11 @@ final class JonquilTextDocumentService implements TextDocumentService {
 
   @Override
   public CompletableFuture<CompletionItem> resolveCompletionItem(CompletionItem unresolved) {
-    return server.answer(
+    return server.requests.answer(
         "completionItem/resolve",
         null,
         (snapshot, none) -> {
-          Optional<Convert.CompletionKey> key = Convert.completionKey(unresolved);
+          Optional<ResolveKeys.CompletionKey> key = ResolveKeys.completionKey(unresolved);
           CompletionAnswer last = lastCompletion.get();
           if (key.isEmpty()
               || last == null
@@ -436,7 +431,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
           }
           CompletionItemInfo info = last.items().get(key.get().index());
           return info.label().equals(unresolved.getLabel())
-              ? Convert.withDocumentation(unresolved, info.documentation())
+              ? ProtocolAnswers.withDocumentation(unresolved, info.documentation())
               : unresolved;
         });
   }
@@ -446,14 +441,14 @@ final class JonquilTextDocumentService implements TextDocumentService {
 
   @Override
   public CompletableFuture<SemanticTokens> semanticTokensFull(SemanticTokensParams params) {
-    return server.atPosition(
+    return server.requests.atPosition(
         "textDocument/semanticTokens/full",
         params.getTextDocument().getUri(),
         null,
-        Convert.semanticTokens(null, List.of()),
+        SemanticTokenEncoding.full(null, List.of()),
         at -> {
           SentTokens sent = tokens(at);
-          return Convert.semanticTokens(sent.resultId(), sent.data());
+          return SemanticTokenEncoding.full(sent.resultId(), sent.data());
         });
   }
 
@@ -461,27 +456,28 @@ final class JonquilTextDocumentService implements TextDocumentService {
   public CompletableFuture<Either<SemanticTokens, SemanticTokensDelta>> semanticTokensFullDelta(
       SemanticTokensDeltaParams params) {
     String previous = params.getPreviousResultId();
-    return server.atPosition(
+    return server.requests.atPosition(
         "textDocument/semanticTokens/full/delta",
         params.getTextDocument().getUri(),
         null,
-        Either.forLeft(Convert.semanticTokens(null, List.of())),
+        Either.forLeft(SemanticTokenEncoding.full(null, List.of())),
         at -> {
           SentTokens before = sentTokens.get(at.path());
           SentTokens now = tokens(at);
           if (before == null || previous == null || !previous.equals(before.resultId())) {
-            return Either.forLeft(Convert.semanticTokens(now.resultId(), now.data()));
+            return Either.forLeft(SemanticTokenEncoding.full(now.resultId(), now.data()));
           }
           return Either.forRight(
-              Convert.semanticTokensDelta(now.resultId(), before.data(), now.data()));
+              SemanticTokenEncoding.delta(now.resultId(), before.data(), now.data()));
         });
   }
 
   /** Computes, encodes and remembers the document's tokens under a new result id. */
-  private SentTokens tokens(JonquilLanguageServer.At at) {
+  private SentTokens tokens(RequestPipeline.At at) {
     List<Integer> data =
-        at.convert()
-            .semanticTokenData(at.source(), server.answers.semanticTokens(at.result(), at.path()));
+        server
+            .tokenEncoding()
+            .data(at.convert(), at.source(), server.answers.semanticTokens(at.result(), at.path()));
     SentTokens sent = new SentTokens(Long.toString(ids.incrementAndGet()), List.copyOf(data));
     if (server.documents.get(at.path()).isPresent()) {
       sentTokens.put(
@@ -493,11 +489,10 @@ final class JonquilTextDocumentService implements TextDocumentService {
 
   @Override
   public CompletableFuture<List<InlayHint>> inlayHint(InlayHintParams params) {
-    boolean lazy =
-        JonquilLanguageServer.ClientSupport.lazyInlayHintTooltips(server.clientCapabilities());
+    boolean lazy = ClientSupport.lazyInlayHintTooltips(server.clientCapabilities());
     Range range = params.getRange();
     String uri = params.getTextDocument().getUri();
-    return server.atPosition(
+    return server.requests.atPosition(
         "textDocument/inlayHint",
         uri,
         null,
@@ -515,11 +510,11 @@ final class JonquilTextDocumentService implements TextDocumentService {
               server.answers.inlayHints(
                   at.result(), at.path(), Math.min(start, end), Math.max(start, end))) {
             out.add(
-                at.convert()
-                    .inlayHint(
-                        at.source(),
-                        h,
-                        lazy ? new Convert.HintKey(uri, version, textHash, h.offset()) : null));
+                ProtocolAnswers.inlayHint(
+                    at.convert(),
+                    at.source(),
+                    h,
+                    lazy ? new ResolveKeys.HintKey(uri, version, textHash, h.offset()) : null));
           }
           return out;
         });
@@ -532,15 +527,15 @@ final class JonquilTextDocumentService implements TextDocumentService {
    */
   @Override
   public CompletableFuture<InlayHint> resolveInlayHint(InlayHint unresolved) {
-    Optional<Convert.HintKey> key = Convert.hintKey(unresolved);
-    return server.answer(
+    Optional<ResolveKeys.HintKey> key = ResolveKeys.hintKey(unresolved);
+    return server.requests.answer(
         "inlayHint/resolve",
-        key.map(Convert.HintKey::uri).orElse(null),
+        key.map(ResolveKeys.HintKey::uri).orElse(null),
         (snapshot, path) -> {
           if (key.isEmpty() || path == null) {
             return unresolved;
           }
-          Convert.HintKey k = key.get();
+          ResolveKeys.HintKey k = key.get();
           Integer open = server.documents.get(path).map(Documents.Doc::version).orElse(null);
           if (!Objects.equals(open, k.version())
               || !Objects.equals(snapshot.versions().get(path), k.version())) {
@@ -551,11 +546,11 @@ final class JonquilTextDocumentService implements TextDocumentService {
               || result.get().files().get(path).text().hashCode() != k.textHash()) {
             return unresolved;
           }
-          String label = Convert.hintLabel(unresolved);
+          String label = ProtocolAnswers.hintLabel(unresolved);
           for (jonquil.ide.InlayHint h :
               server.answers.inlayHints(result.get(), path, k.offset(), k.offset())) {
             if (h.offset() == k.offset() && h.label().equals(label)) {
-              return Convert.withTooltip(unresolved, h.tooltip());
+              return ProtocolAnswers.withTooltip(unresolved, h.tooltip());
             }
           }
           return unresolved;
@@ -564,11 +559,9 @@ final class JonquilTextDocumentService implements TextDocumentService {
 
   @Override
   public CompletableFuture<List<FoldingRange>> foldingRange(FoldingRangeRequestParams params) {
-    boolean linesOnly =
-        JonquilLanguageServer.ClientSupport.lineFoldingOnly(server.clientCapabilities());
-    Integer limit =
-        JonquilLanguageServer.ClientSupport.foldingRangeLimit(server.clientCapabilities());
-    return server.atPosition(
+    boolean linesOnly = ClientSupport.lineFoldingOnly(server.clientCapabilities());
+    Integer limit = ClientSupport.foldingRangeLimit(server.clientCapabilities());
+    return server.requests.atPosition(
         "textDocument/foldingRange",
         params.getTextDocument().getUri(),
         null,
@@ -576,7 +569,8 @@ final class JonquilTextDocumentService implements TextDocumentService {
         at -> {
           List<FoldingRange> out = new ArrayList<>();
           for (FoldingRangeInfo f : server.answers.foldingRanges(at.result(), at.path())) {
-            FoldingRange range = at.convert().foldingRange(at.source(), f, linesOnly);
+            FoldingRange range =
+                ProtocolAnswers.foldingRange(at.convert(), at.source(), f, linesOnly);
             if (range != null && (limit == null || out.size() < limit)) {
               out.add(range);
             }
@@ -587,7 +581,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
 
   @Override
   public CompletableFuture<List<DocumentLink>> documentLink(DocumentLinkParams params) {
-    return server.atPosition(
+    return server.requests.atPosition(
         "textDocument/documentLink",
         params.getTextDocument().getUri(),
         null,
@@ -595,7 +589,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
         at -> {
           List<DocumentLink> out = new ArrayList<>();
           for (DocumentLinkInfo link : server.answers.documentLinks(at.result(), at.path())) {
-            out.add(at.convert().documentLink(at.source(), link));
+            out.add(ProtocolAnswers.documentLink(at.convert(), at.source(), link));
           }
           return out;
         });
@@ -604,12 +598,12 @@ final class JonquilTextDocumentService implements TextDocumentService {
   @Override
   public CompletableFuture<List<Either<Command, CodeAction>>> codeAction(CodeActionParams params) {
     var caps = server.clientCapabilities();
-    boolean literals = JonquilLanguageServer.ClientSupport.codeActionLiterals(caps);
-    boolean preferred = JonquilLanguageServer.ClientSupport.preferredCodeActions(caps);
-    boolean documentChanges = JonquilLanguageServer.ClientSupport.documentChanges(caps);
+    boolean literals = ClientSupport.codeActionLiterals(caps);
+    boolean preferred = ClientSupport.preferredCodeActions(caps);
+    boolean documentChanges = ClientSupport.documentChanges(caps);
     Range range = params.getRange();
     List<String> only = params.getContext() == null ? null : params.getContext().getOnly();
-    return server.atPosition(
+    return server.requests.atPosition(
         "textDocument/codeAction",
         params.getTextDocument().getUri(),
         null,
@@ -626,17 +620,17 @@ final class JonquilTextDocumentService implements TextDocumentService {
                   at.result(),
                   at.path(),
                   new TextRange(Math.min(start, end), Math.max(start, end)))) {
-            if (Convert.kindRequested(a.kind(), only)
+            if (ProtocolAnswers.kindRequested(a.kind(), only)
                 && a.edits().keySet().stream().allMatch(this::editable)) {
               out.add(
                   Either.forRight(
-                      at.convert()
-                          .codeAction(
-                              a,
-                              at.result().files()::get,
-                              file -> at.versions().get(file),
-                              documentChanges,
-                              preferred)));
+                      ProtocolAnswers.codeAction(
+                          at.convert(),
+                          a,
+                          at.result().files()::get,
+                          file -> at.versions().get(file),
+                          documentChanges,
+                          preferred)));
             }
           }
           return out;
@@ -649,7 +643,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
   public CompletableFuture<List<? extends TextEdit>> formatting(DocumentFormattingParams params) {
     Optional<Documents.Doc> doc = server.documents.get(params.getTextDocument().getUri());
     FormattingOptions options = params.getOptions();
-    return server.answer(
+    return server.requests.answer(
         "textDocument/formatting",
         null,
         (snapshot, none) -> {
@@ -669,7 +663,7 @@ final class JonquilTextDocumentService implements TextDocumentService {
     Optional<Documents.Doc> doc = server.documents.get(params.getTextDocument().getUri());
     FormattingOptions options = params.getOptions();
     int[] lines = Convert.lines(params.getRange());
-    return server.answer(
+    return server.requests.answer(
         "textDocument/rangeFormatting",
         null,
         (snapshot, none) -> {

@@ -40,7 +40,7 @@ final class JonquilWorkspaceService implements WorkspaceService {
           Either<List<? extends SymbolInformation>, List<? extends WorkspaceSymbol>>>
       symbol(WorkspaceSymbolParams params) {
     String query = params.getQuery() == null ? "" : params.getQuery();
-    return server.answer(
+    return server.requests.answer(
         "workspace/symbol",
         null,
         server.index::fresh,
@@ -64,7 +64,8 @@ final class JonquilWorkspaceService implements WorkspaceService {
               break;
             }
             out.add(
-                convert.workspaceSymbol(
+                ProtocolAnswers.workspaceSymbol(
+                    convert,
                     s,
                     file ->
                         snapshot

@@ -8,6 +8,7 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicInteger;
+import jonquil.ide.EditorFeatures;
 import org.eclipse.lsp4j.jsonrpc.Launcher;
 import org.eclipse.lsp4j.launch.LSPLauncher;
 import org.eclipse.lsp4j.services.LanguageClient;
@@ -38,15 +39,15 @@ public final class LspCommand implements java.util.concurrent.Callable<Integer> 
   private final InputStream in;
   private final OutputStream out;
   private final PrintStream err;
-  private final EditorAnswers answers;
+  private final EditorFeatures answers;
 
   /** The server on the process's own stdin and stdout. */
   public LspCommand() {
-    this(null, null, new IdeAnswers());
+    this(null, null, EditorFeatures.standard());
   }
 
   /** The server on the given streams (null: the process's own), answering with {@code answers}. */
-  public LspCommand(InputStream in, OutputStream out, EditorAnswers answers) {
+  public LspCommand(InputStream in, OutputStream out, EditorFeatures answers) {
     this(in, out, null, answers);
   }
 
@@ -54,7 +55,7 @@ public final class LspCommand implements java.util.concurrent.Callable<Integer> 
    * As above, with {@code --verbose} writing its debug lines to {@code err} (null: the process's
    * stderr).
    */
-  public LspCommand(InputStream in, OutputStream out, PrintStream err, EditorAnswers answers) {
+  public LspCommand(InputStream in, OutputStream out, PrintStream err, EditorFeatures answers) {
     this.in = in;
     this.out = out;
     this.err = err;

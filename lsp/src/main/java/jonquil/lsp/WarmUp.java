@@ -12,7 +12,7 @@ import jonquil.Result;
 import jonquil.Workspace;
 import jonquil.format.FormatOptions;
 import jonquil.format.Formatter;
-import jonquil.ide.Ide;
+import jonquil.ide.EditorFeatures;
 
 /**
  * Checks a small built-in spec once at start-up, because the first check in a fresh JVM is 15-20
@@ -40,8 +40,8 @@ final class WarmUp {
     Result result =
         Checker.check(
             Workspace.withOverlay(root, Map.of(file, text)), List.of(file), CheckOptions.EDITOR);
-    Ide.hover(result, file, text.indexOf("warm_lens"));
-    Ide.documentSymbols(result, file);
+    EditorFeatures.standard().hover(result, file, text.indexOf("warm_lens"));
+    EditorFeatures.standard().documentSymbols(result, file);
     if (result.files().containsKey(file)) {
       Formatter.format(result.files().get(file), FormatOptions.DEFAULT);
     }

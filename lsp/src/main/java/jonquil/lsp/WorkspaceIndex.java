@@ -1,17 +1,10 @@
 package jonquil.lsp;
 
-import java.io.IOException;
-import java.nio.file.FileVisitOption;
-import java.nio.file.FileVisitResult;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.SimpleFileVisitor;
-import java.nio.file.attribute.BasicFileAttributes;
-import java.nio.file.attribute.FileTime;
 import java.time.Duration;
 import java.util.ArrayList;
 import java.util.Collection;
-import java.util.EnumSet;
 import java.util.HashMap;
 import java.util.HashSet;
 import java.util.LinkedHashMap;
@@ -20,15 +13,12 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
-import java.util.TreeMap;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.ConcurrentLinkedQueue;
-import java.util.concurrent.ExecutionException;
 import java.util.concurrent.Executors;
 import java.util.concurrent.RejectedExecutionException;
 import java.util.concurrent.ScheduledExecutorService;
 import java.util.concurrent.TimeUnit;
-import java.util.concurrent.TimeoutException;
 import java.util.concurrent.atomic.AtomicBoolean;
 import java.util.concurrent.atomic.AtomicLong;
 import java.util.function.BiConsumer;
@@ -37,7 +27,9 @@ import jonquil.CheckOptions;
 import jonquil.Checker;
 import jonquil.Result;
 import jonquil.Workspace;
+import jonquil.ide.EditorFeatures;
 import jonquil.ide.FileIndex;
+import jonquil.ide.IndexRebuild;
 import jonquil.source.SourceFile;
 import org.eclipse.lsp4j.MessageType;
 import org.eclipse.lsp4j.services.LanguageClient;
@@ -51,23 +43,6 @@ import org.eclipse.lsp4j.services.LanguageClient;
  * Snapshot}.
  */
 final class WorkspaceIndex implements AutoCloseable {
-  /**
-   * Spec files indexed across all folders; a workspace with more is not a spec project, and the
-   * rest is left out.
-   */
-  static final int MAX_FILES = 5_000;
-
-  /**
-   * Larger files are left out (precedent: editors cap at about 1 MiB; specs are hand-written and
-   * far smaller).
-   */
-  static final long MAX_FILE_BYTES = 1L << 20;
-
-  /**
-   * The index keeps every file's text (positions are converted from it), so the first pass caps the
-   * total too.
-   */
-  static final long MAX_TOTAL_BYTES = 64L << 20;
 
   /**
    * Files checked together, so that a library they share is parsed once; progress is reported per
@@ -77,8 +52,6 @@ final class WorkspaceIndex implements AutoCloseable {
 
   /** Quiet time after an edit of an open buffer before the index reads the buffers again. */
   static final Duration BUFFER_DEBOUNCE = Duration.ofMillis(300);
-
-  static final String PROGRESS_TITLE = "Indexing Jonquil specs";
 
   /**
    * The index as answers read it: each folder's entries by file, and the buffer versions the
@@ -117,28 +90,14 @@ final class WorkspaceIndex implements AutoCloseable {
     }
   }
 
-  /** What says a file on disk changed since it was indexed. */
-  private record Stamp(FileTime modified, long size, Object key) {
-    static Stamp of(BasicFileAttributes a) {
-      return new Stamp(a.lastModifiedTime(), a.size(), a.fileKey());
-    }
-  }
-
-  /** What a walk may still take, and what it left out. */
-  private static final class Budget {
-    int files;
-    long bytes;
-    int tooLarge;
-    boolean capped;
-  }
-
-  private final EditorAnswers answers;
+  private final EditorFeatures answers;
   private final Documents documents;
   private final Supplier<LanguageClient> client;
   private final BiConsumer<MessageType, String> log;
   private final ScheduledExecutorService worker;
+  private final SpecFolderWalk walk;
+  private final IndexProgress progress;
   private final AtomicLong generation = new AtomicLong();
-  private final AtomicLong tokens = new AtomicLong();
   private final ConcurrentLinkedQueue<Path> diskChanges = new ConcurrentLinkedQueue<>();
   private final AtomicBoolean bufferSyncQueued = new AtomicBoolean();
   private final Object syncLock = new Object();
@@ -149,17 +108,14 @@ final class WorkspaceIndex implements AutoCloseable {
   private CompletableFuture<Snapshot> queuedSync;
 
   private volatile boolean started;
-  private volatile boolean progress;
   private volatile boolean watched;
   private volatile List<Path> wanted = List.of();
   private volatile Snapshot latest = Snapshot.EMPTY;
-  private volatile String progressToken;
-  private volatile boolean cancelRequested;
 
   // Touched by the worker thread only.
   private Map<Path, Map<Path, FileIndex>> byFolder = new LinkedHashMap<>();
   private List<Path> indexedFolders = List.of();
-  private final Map<Path, Stamp> stamps = new HashMap<>();
+  private final Map<Path, SpecFolderWalk.Stamp> stamps = new HashMap<>();
 
   /**
    * The open buffers the entries read (text and version), so that a changed or closed buffer is
@@ -173,7 +129,7 @@ final class WorkspaceIndex implements AutoCloseable {
   private boolean fullLogged;
 
   WorkspaceIndex(
-      EditorAnswers answers,
+      EditorFeatures answers,
       Documents documents,
       Supplier<LanguageClient> client,
       BiConsumer<MessageType, String> log) {
@@ -181,6 +137,8 @@ final class WorkspaceIndex implements AutoCloseable {
     this.documents = documents;
     this.client = client;
     this.log = log;
+    this.walk = new SpecFolderWalk(log);
+    this.progress = new IndexProgress(client, log);
     ThreadGroup group = new ThreadGroup("jonquil-index");
     this.worker =
         Executors.newSingleThreadScheduledExecutor(
@@ -198,7 +156,7 @@ final class WorkspaceIndex implements AutoCloseable {
    * progress; {@code watched}: the client reports file changes, so requests need not re-scan.
    */
   void start(List<Path> folders, boolean progress, boolean watched) {
-    this.progress = progress;
+    this.progress.enable(progress);
     this.watched = watched;
     this.started = true;
     setFolders(folders);
@@ -254,9 +212,7 @@ final class WorkspaceIndex implements AutoCloseable {
 
   /** window/workDoneProgress/cancel: stops the pass that reports under this token. */
   void cancelProgress(String token) {
-    if (token != null && token.equals(progressToken)) {
-      cancelRequested = true;
-    }
+    progress.cancel(token);
   }
 
   Snapshot latest() {
@@ -345,10 +301,11 @@ final class WorkspaceIndex implements AutoCloseable {
     List<Path> folders = wanted;
     Map<Path, Map<Path, FileIndex>> next = new LinkedHashMap<>();
     List<Path> added = new ArrayList<>();
-    Budget budget = new Budget();
+    SpecFolderWalk.Budget budget = new SpecFolderWalk.Budget();
     for (Path f : folders) {
       Map<Path, FileIndex> kept = byFolder.get(f);
-      if (kept != null && nested(f, folders).equals(nested(f, indexedFolders))) {
+      if (kept != null
+          && SpecFolderWalk.nested(f, folders).equals(SpecFolderWalk.nested(f, indexedFolders))) {
         next.put(f, kept);
         budget.files += kept.size();
         kept.values().forEach(e -> budget.bytes += e.source().text().length());
@@ -367,11 +324,11 @@ final class WorkspaceIndex implements AutoCloseable {
     Map<Path, List<Path>> found = new LinkedHashMap<>();
     int total = 0;
     for (Path f : added) {
-      List<Path> files = new ArrayList<>(walk(f, folders, budget).keySet());
+      List<Path> files = new ArrayList<>(walk.walk(f, folders, budget).keySet());
       found.put(f, files);
       total += files.size();
     }
-    String token = total > 0 ? beginProgress(total) : null;
+    String token = total > 0 ? progress.begin(total) : null;
     int done = 0;
     boolean cancelled = false;
     boolean superseded = false;
@@ -386,18 +343,18 @@ final class WorkspaceIndex implements AutoCloseable {
           List<Path> batch = files.subList(i, Math.min(files.size(), i + BATCH));
           int n = cancelled ? 0 : index(e.getKey(), batch, token);
           done += n;
-          cancelled |= n < batch.size() || cancelled(token);
+          cancelled |= n < batch.size() || progress.cancelled(token);
           if (cancelled) {
             notReached.addAll(batch.subList(n, batch.size()));
             continue;
           }
           publish();
-          reportProgress(token, done, total);
+          progress.report(token, done, total);
         }
       }
     } finally {
       publish();
-      endProgress(
+      progress.end(
           token,
           superseded
               ? "the workspace folders changed; indexing them again"
@@ -450,9 +407,9 @@ final class WorkspaceIndex implements AutoCloseable {
    */
   private Set<Path> changedOnDisk(Set<Path> open) {
     Set<Path> out = new LinkedHashSet<>();
-    Budget budget = new Budget();
+    SpecFolderWalk.Budget budget = new SpecFolderWalk.Budget();
     for (Path folder : indexedFolders) {
-      Map<Path, Stamp> now = walk(folder, indexedFolders, budget);
+      Map<Path, SpecFolderWalk.Stamp> now = walk.walk(folder, indexedFolders, budget);
       now.forEach(
           (p, stamp) -> {
             if (!notReached.contains(p) && !stamp.equals(stamps.get(p))) {
@@ -469,58 +426,29 @@ final class WorkspaceIndex implements AutoCloseable {
   }
 
   /**
-   * Re-indexes the changed files, then, for those whose names, 'use' lines or read files changed
-   * (or that came or went), every indexed file that reads or uses one of them, however indirectly.
-   * Editing the body of a library that many files use re-reads the library alone.
+   * Re-indexes the changed files, then the files whose entries depend on what changed in them (see
+   * {@link IndexRebuild}).
    */
   private void refresh(Set<Path> changed) {
-    Map<Path, Signature> before = new HashMap<>();
-    changed.forEach(p -> before.put(p, signature(p)));
-    reindex(changed);
-    Set<Path> moved = new LinkedHashSet<>();
+    Map<Path, FileIndex> before = new HashMap<>();
+    Map<Path, FileIndex> all = entries();
     for (Path p : changed) {
-      Signature now = signature(p);
-      if (now == null || !now.equals(before.get(p))) {
-        moved.add(p);
+      if (all.containsKey(p)) {
+        before.put(p, all.get(p));
       }
     }
-    Set<Path> affected = new LinkedHashSet<>(moved);
-    for (boolean grew = true; grew; ) {
-      grew = false;
-      for (Map<Path, FileIndex> files : byFolder.values()) {
-        for (FileIndex f : files.values()) {
-          if (!affected.contains(f.file())
-              && (anyIn(f.reads(), affected) || anyIn(f.uses(), affected))) {
-            affected.add(f.file());
-            grew = true;
-          }
-        }
-      }
-    }
-    affected.removeAll(changed);
+    reindex(changed);
+    Set<Path> affected = IndexRebuild.dependents(changed, before, entries());
     if (!affected.isEmpty()) {
       reindex(affected);
     }
   }
 
-  /**
-   * What other files' entries depend on: the names a file declares, the files it uses and the files
-   * it reads.
-   */
-  private record Signature(Set<String> declared, List<Path> uses, List<Path> reads) {}
-
-  private Signature signature(Path file) {
-    for (Map<Path, FileIndex> m : byFolder.values()) {
-      FileIndex f = m.get(file);
-      if (f != null) {
-        Set<String> declared = new HashSet<>();
-        f.names().stream()
-            .filter(FileIndex.NameUse::declaration)
-            .forEach(n -> declared.add(n.name()));
-        return new Signature(declared, f.uses(), f.reads());
-      }
-    }
-    return null;
+  /** Every entry, folder by folder. */
+  private Map<Path, FileIndex> entries() {
+    Map<Path, FileIndex> out = new LinkedHashMap<>();
+    byFolder.values().forEach(out::putAll);
+    return out;
   }
 
   /**
@@ -533,13 +461,16 @@ final class WorkspaceIndex implements AutoCloseable {
     Map<Path, List<Path>> toIndex = new LinkedHashMap<>();
     for (Path p : files) {
       Path folder = owner(p);
-      boolean readable = open.contains(p) || (Files.isRegularFile(p) && size(p) <= MAX_FILE_BYTES);
-      if (folder == null || !eligible(folder, p) || !readable) {
+      boolean readable =
+          open.contains(p)
+              || (Files.isRegularFile(p)
+                  && SpecFolderWalk.size(p) <= SpecFolderWalk.MAX_FILE_BYTES);
+      if (folder == null || !SpecFolderWalk.eligible(folder, p) || !readable) {
         forget(p);
         continue;
       }
       if (!indexed(p)) {
-        if (count >= MAX_FILES) {
+        if (count >= SpecFolderWalk.MAX_FILES) {
           logFull();
           continue;
         }
@@ -565,9 +496,9 @@ final class WorkspaceIndex implements AutoCloseable {
     Map<Path, Documents.Doc> open = documents.snapshot();
     Map<Path, String> buffers = new HashMap<>();
     open.forEach((p, doc) -> buffers.put(p, doc.text()));
-    Map<Path, Stamp> before = new HashMap<>();
+    Map<Path, SpecFolderWalk.Stamp> before = new HashMap<>();
     for (Path f : files) {
-      stamp(f)
+      SpecFolderWalk.stamp(f)
           .ifPresent(
               s ->
                   before.put(
@@ -596,7 +527,7 @@ final class WorkspaceIndex implements AutoCloseable {
       }
       notReached.remove(f);
       stored++;
-      if (cancelled(token)) {
+      if (progress.cancelled(token)) {
         break; // the file in hand is kept; the rest waits for the next change of folders
       }
     }
@@ -639,173 +570,8 @@ final class WorkspaceIndex implements AutoCloseable {
     return best;
   }
 
-  /**
-   * The folders strictly inside {@code folder}: their files are indexed under them, not under it.
-   */
-  private static Set<Path> nested(Path folder, List<Path> all) {
-    Set<Path> out = new HashSet<>();
-    for (Path f : all) {
-      if (!f.equals(folder) && f.startsWith(folder)) {
-        out.add(f);
-      }
-    }
-    return out;
-  }
-
-  /** A spec file below {@code folder} in no hidden directory and no build output. */
-  private static boolean eligible(Path folder, Path file) {
-    if (!file.getFileName().toString().endsWith(".jonq")) {
-      return false;
-    }
-    Path relative = folder.relativize(file);
-    for (int i = 0; i < relative.getNameCount() - 1; i++) {
-      if (skippedDirectory(relative.getName(i).toString())) {
-        return false;
-      }
-    }
-    return true;
-  }
-
-  /**
-   * Hidden directories (.git, editor state) and Maven's build output hold no specs of the project.
-   */
-  private static boolean skippedDirectory(String name) {
-    return name.startsWith(".") || name.equals("target");
-  }
-
-  /**
-   * The spec files below {@code folder} with their stamps, by path, within the budget; nested
-   * folders are theirs.
-   */
-  private Map<Path, Stamp> walk(Path folder, List<Path> folders, Budget budget) {
-    Map<Path, Stamp> out = new TreeMap<>();
-    try {
-      Files.walkFileTree(
-          folder,
-          EnumSet.noneOf(FileVisitOption.class),
-          Integer.MAX_VALUE,
-          new SimpleFileVisitor<>() {
-            @Override
-            public FileVisitResult preVisitDirectory(Path dir, BasicFileAttributes attrs) {
-              if (!dir.equals(folder)
-                  && (skippedDirectory(dir.getFileName().toString()) || folders.contains(dir))) {
-                return FileVisitResult.SKIP_SUBTREE;
-              }
-              return FileVisitResult.CONTINUE;
-            }
-
-            @Override
-            public FileVisitResult visitFile(Path file, BasicFileAttributes attrs) {
-              if (!attrs.isRegularFile() || !file.getFileName().toString().endsWith(".jonq")) {
-                return FileVisitResult.CONTINUE;
-              }
-              if (attrs.size() > MAX_FILE_BYTES) {
-                budget.tooLarge++;
-                return FileVisitResult.CONTINUE;
-              }
-              if (budget.files >= MAX_FILES || budget.bytes + attrs.size() > MAX_TOTAL_BYTES) {
-                budget.capped = true;
-                return FileVisitResult.TERMINATE;
-              }
-              budget.files++;
-              budget.bytes += attrs.size();
-              out.put(file, Stamp.of(attrs));
-              return FileVisitResult.CONTINUE;
-            }
-
-            @Override
-            public FileVisitResult visitFileFailed(Path file, IOException e) {
-              return FileVisitResult.CONTINUE; // unreadable or gone: not indexed
-            }
-          });
-    } catch (IOException | RuntimeException e) {
-      log.accept(
-          MessageType.Warning,
-          "could not list the spec files under '"
-              + folder
-              + "' ("
-              + JonquilLanguageServer.describe(e)
-              + ")");
-    }
-    return out;
-  }
-
-  private static Optional<Stamp> stamp(Path file) {
-    try {
-      return Optional.of(Stamp.of(Files.readAttributes(file, BasicFileAttributes.class)));
-    } catch (IOException | RuntimeException e) {
-      return Optional.empty();
-    }
-  }
-
-  private static long size(Path file) {
-    return stamp(file).map(Stamp::size).orElse(Long.MAX_VALUE);
-  }
-
-  private static boolean anyIn(List<Path> paths, Set<Path> set) {
-    for (Path p : paths) {
-      if (set.contains(p)) {
-        return true;
-      }
-    }
-    return false;
-  }
-
-  // ---- progress: only for a client that takes it, and only under a token it accepted ----
-
-  private String beginProgress(int total) {
-    LanguageClient c = client.get();
-    if (!progress || c == null) {
-      return null;
-    }
-    String token = "jonquil-index-" + tokens.incrementAndGet();
-    cancelRequested = false;
-    progressToken = token; // set before asking, so a cancel that overtakes the reply still counts
-    try {
-      // Waiting here is safe: this is the index worker, and the reader thread delivers the reply.
-      c.createProgress(Convert.progressCreate(token))
-          .get(JonquilLanguageServer.FRESH_WAIT.toMillis(), TimeUnit.MILLISECONDS);
-    } catch (InterruptedException e) {
-      Thread.currentThread().interrupt();
-      progressToken = null;
-      return null;
-    } catch (ExecutionException | TimeoutException | RuntimeException e) {
-      progressToken = null;
-      log.accept(
-          MessageType.Log,
-          "the editor did not accept a progress token ("
-              + JonquilLanguageServer.describe(e)
-              + "); indexing without progress");
-      return null;
-    }
-    c.notifyProgress(Convert.progressBegin(token, PROGRESS_TITLE, total + " spec files"));
-    return token;
-  }
-
-  private boolean cancelled(String token) {
-    return token != null && cancelRequested && token.equals(progressToken);
-  }
-
-  private void reportProgress(String token, int done, int total) {
-    LanguageClient c = client.get();
-    if (token != null && c != null) {
-      c.notifyProgress(
-          Convert.progressReport(
-              token, done + "/" + total + " files", done * 100 / Math.max(1, total)));
-    }
-  }
-
-  private void endProgress(String token, String message) {
-    LanguageClient c = client.get();
-    if (token != null && c != null) {
-      c.notifyProgress(Convert.progressEnd(token, message));
-    }
-    if (token != null && token.equals(progressToken)) {
-      progressToken = null;
-    }
-  }
-
-  private void logPass(int done, int total, int folders, Budget budget, boolean cancelled) {
+  private void logPass(
+      int done, int total, int folders, SpecFolderWalk.Budget budget, boolean cancelled) {
     StringBuilder m =
         new StringBuilder(
             "workspace index: "
@@ -821,14 +587,18 @@ final class WorkspaceIndex implements AutoCloseable {
     if (budget.capped) {
       m.append(
           "; stopped at the cap of "
-              + MAX_FILES
+              + SpecFolderWalk.MAX_FILES
               + " files or "
-              + (MAX_TOTAL_BYTES >> 20)
+              + (SpecFolderWalk.MAX_TOTAL_BYTES >> 20)
               + " MiB of text");
     }
     if (budget.tooLarge > 0) {
       m.append(
-          "; " + budget.tooLarge + " file(s) over " + (MAX_FILE_BYTES >> 20) + " MiB left out");
+          "; "
+              + budget.tooLarge
+              + " file(s) over "
+              + (SpecFolderWalk.MAX_FILE_BYTES >> 20)
+              + " MiB left out");
     }
     log.accept(
         budget.capped || budget.tooLarge > 0 ? MessageType.Warning : MessageType.Log, m.toString());
@@ -839,7 +609,9 @@ final class WorkspaceIndex implements AutoCloseable {
       fullLogged = true;
       log.accept(
           MessageType.Warning,
-          "workspace index: " + MAX_FILES + " files reached; new files are left out");
+          "workspace index: "
+              + SpecFolderWalk.MAX_FILES
+              + " files reached; new files are left out");
     }
   }
 }

@@ -12,6 +12,7 @@ import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicInteger;
 import jonquil.Result;
+import jonquil.ide.EditorFeatures;
 import jonquil.ide.HoverInfo;
 import org.eclipse.lsp4j.Hover;
 import org.eclipse.lsp4j.HoverParams;
@@ -36,8 +37,8 @@ class CancellationTest {
     CountDownLatch never = new CountDownLatch(1);
     CountDownLatch started = new CountDownLatch(2);
     AtomicInteger interrupted = new AtomicInteger();
-    EditorAnswers slow =
-        new Delegating(new NoAnswers()) {
+    EditorFeatures slow =
+        new StandIn() {
           @Override
           public Optional<HoverInfo> hover(Result result, Path f, int offset) {
             if (offset == 0) {
@@ -99,7 +100,7 @@ class CancellationTest {
     Path file = dir.resolve("writer.jonq");
     Files.writeString(file, text);
     String uri = file.toUri().toString();
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       h.initialize(dir);
       h.open(uri, 1, text);
       var service = h.remote.getTextDocumentService();

@@ -11,6 +11,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.TimeUnit;
+import jonquil.ide.EditorFeatures;
 import org.eclipse.lsp4j.ClientCapabilities;
 import org.eclipse.lsp4j.DocumentSymbol;
 import org.eclipse.lsp4j.DocumentSymbolCapabilities;
@@ -38,7 +39,7 @@ import org.junit.jupiter.api.io.TempDir;
 
 /**
  * References, rename, document and workspace symbols through the real editor answers ({@link
- * IdeAnswers}), across an open file and the unopened library it uses.
+ * EditorFeatures}), across an open file and the unopened library it uses.
  */
 class CrossFileTest {
   static final String LIB =
@@ -78,7 +79,7 @@ class CrossFileTest {
   }
 
   private LspHarness openMain(ClientCapabilities caps, int version) throws Exception {
-    LspHarness h = new LspHarness(new IdeAnswers());
+    LspHarness h = new LspHarness(EditorFeatures.standard());
     h.initialize(dir, caps);
     h.open(mainUri, version, MAIN);
     h.client.await(mainUri, p -> Integer.valueOf(version).equals(p.getVersion()));

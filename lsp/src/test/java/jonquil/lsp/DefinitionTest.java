@@ -8,6 +8,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
+import jonquil.ide.EditorFeatures;
 import org.eclipse.lsp4j.ClientCapabilities;
 import org.eclipse.lsp4j.DefinitionCapabilities;
 import org.eclipse.lsp4j.DefinitionParams;
@@ -78,7 +79,7 @@ class DefinitionTest {
   @Test
   void aClientWithLinkSupportGetsLinksWithTheNameUnderTheCursor() throws Exception {
     write();
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       h.initialize(dir, linkClient(true));
       h.open(mainUri, 1, MAIN);
       h.client.await(mainUri, p -> Integer.valueOf(1).equals(p.getVersion()));
@@ -105,7 +106,7 @@ class DefinitionTest {
   void aClientWithoutLinkSupportGetsLocations() throws Exception {
     write();
     for (ClientCapabilities caps : List.of(new ClientCapabilities(), linkClient(false))) {
-      try (LspHarness h = new LspHarness(new IdeAnswers())) {
+      try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
         h.initialize(dir, caps);
         h.open(mainUri, 1, MAIN);
         h.client.await(mainUri, p -> Integer.valueOf(1).equals(p.getVersion()));

@@ -12,6 +12,7 @@ import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
+import jonquil.ide.EditorFeatures;
 import org.eclipse.lsp4j.ClientCapabilities;
 import org.eclipse.lsp4j.CodeAction;
 import org.eclipse.lsp4j.CodeActionCapabilities;
@@ -152,12 +153,13 @@ class EditorFeaturesTest {
 
   @Test
   void announcesTheNewProviders() throws Exception {
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       ServerCapabilities caps = h.initialize(dir, modernClient(false)).getCapabilities();
       assertTrue(caps.getCompletionProvider().getResolveProvider());
       assertEquals(List.of("."), caps.getCompletionProvider().getTriggerCharacters());
       assertEquals(
-          Convert.TOKEN_TYPES, caps.getSemanticTokensProvider().getLegend().getTokenTypes());
+          SemanticTokenEncoding.TOKEN_TYPES,
+          caps.getSemanticTokensProvider().getLegend().getTokenTypes());
       assertEquals(
           List.of("declaration"), caps.getSemanticTokensProvider().getLegend().getTokenModifiers());
       assertTrue(caps.getSemanticTokensProvider().getFull().getRight().getDelta());
@@ -168,13 +170,13 @@ class EditorFeaturesTest {
           List.of(CodeActionKind.QuickFix),
           caps.getCodeActionProvider().getRight().getCodeActionKinds());
     }
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       ServerCapabilities caps = h.initialize(dir).getCapabilities();
       assertFalse(
           caps.getCodeActionProvider().getLeft(),
           "no code actions for a client without literal ones");
     }
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       ClientCapabilities client = new ClientCapabilities();
       org.eclipse.lsp4j.SemanticTokensCapabilities tokens =
           new org.eclipse.lsp4j.SemanticTokensCapabilities(false);
@@ -197,7 +199,7 @@ class EditorFeaturesTest {
   void completionAtTheCursorAndResolveAddsTheDocumentation() throws Exception {
     String text = BENCH.replace("-> 50 mm -> spot", "-> 50 mm -> ");
     String uri = write("bench.jonq", text);
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       h.initialize(dir, modernClient(false));
       h.open(uri, 1, text);
       List<CompletionItem> items =
@@ -230,7 +232,7 @@ class EditorFeaturesTest {
   void aClientThatDoesNotResolveGetsTheDocumentationAtOnce() throws Exception {
     String text = BENCH.replace("focal 100 mm }", "focal 100 mm\n  \n}");
     String uri = write("eager.jonq", text);
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       h.initialize(dir);
       h.open(uri, 1, text);
       CompletionItem focal =
@@ -249,7 +251,7 @@ class EditorFeaturesTest {
     String uri = write("stale.jonq", BENCH);
     // The debounce never ends within the test and nothing runs early: no check runs, so no snapshot
     // saw this text.
-    try (LspHarness h = new LspHarness(new IdeAnswers(), Duration.ofMinutes(5), false)) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard(), Duration.ofMinutes(5), false)) {
       h.initialize(dir, modernClient(false));
       h.open(uri, 1, text);
       int cursor = text.indexOf("-> 50 mm -> ") + "-> 50 mm -> ".length();
@@ -306,7 +308,7 @@ class EditorFeaturesTest {
   void semanticTokensDecodeToTheFixturesTokensInUtf16() throws Exception {
     String text = "// é😀\nmirror m1 { reflectance 99 % }\n/* 😀 */ probe p\n";
     String uri = write("tokens.jonq", text);
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       List<String> legend =
           h.initialize(dir)
               .getCapabilities()
@@ -371,7 +373,7 @@ class EditorFeaturesTest {
   void inlayHintsOnlyInsideTheRequestedRange() throws Exception {
     String text = InlayHintResolveTest.BENCH;
     String uri = write("hints.jonq", text);
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       h.initialize(dir);
       h.open(uri, 1, text);
       TextDocumentIdentifier doc = new TextDocumentIdentifier(uri);
@@ -447,7 +449,7 @@ class EditorFeaturesTest {
   @Test
   void foldingRangesForALineFoldingClientAreWholeLinesAndKeepTheClosingBrace() throws Exception {
     String uri = write("folds.jonq", FOLDS);
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       h.initialize(dir, modernClient(false));
       h.open(uri, 1, FOLDS);
       assertEquals(
@@ -458,7 +460,7 @@ class EditorFeaturesTest {
               range(9, 10, FoldingRangeKind.Region, null, null)),
           fold(h, uri));
     }
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       h.initialize(dir);
       h.open(uri, 1, FOLDS);
       assertEquals(
@@ -476,7 +478,7 @@ class EditorFeaturesTest {
     String main = "use \"parts.jonq\"\nuse \"missing.jonq\"\nprobe p\n";
     String partsUri = write("parts.jonq", "probe spare\n");
     String uri = write("main.jonq", main);
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       h.initialize(dir);
       h.open(uri, 1, main);
       List<DocumentLink> links =
@@ -519,7 +521,7 @@ class EditorFeaturesTest {
   void applyingTheQuickFixForAMisspelledElementRemovesItsDiagnostic() throws Exception {
     String text = CLEAN.replace("-> m1 ->", "-> m11 ->");
     String uri = write("typo.jonq", text);
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       h.initialize(dir, modernClient(false));
       h.open(uri, 1, text);
       Diagnostic d =
@@ -552,7 +554,7 @@ class EditorFeaturesTest {
   void addingADumpForAnUnfollowedPortIsAVersionedEditThatRemovesTheWarning() throws Exception {
     String text = CLEAN.replace("  pbs.reflected -> 30 mm -> d1\n", "");
     String uri = write("stray.jonq", text);
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       h.initialize(dir, modernClient(true));
       h.open(uri, 7, text);
       Diagnostic d =

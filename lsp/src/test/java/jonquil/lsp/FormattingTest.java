@@ -7,7 +7,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.SplittableRandom;
 import java.util.concurrent.TimeUnit;
 import jonquil.format.FormatOptions;
 import jonquil.format.Formatter;
@@ -142,39 +141,5 @@ class FormattingTest {
               .orElseThrow(),
           all);
     }
-  }
-
-  @Test
-  void hunksRebuildTheNewTextFromTheOld() {
-    SplittableRandom random = new SplittableRandom(20240611);
-    String[] pool = {"a\n", "b\n", "c\n", "\n", "  d\n", "e\r\n", "f"};
-    for (int round = 0; round < 2000; round++) {
-      String before = randomText(random, pool);
-      String after = randomText(random, pool);
-      StringBuilder rebuilt = new StringBuilder(before);
-      List<FormatHunks.Hunk> hunks = FormatHunks.hunks(before, after);
-      for (int i = hunks.size() - 1; i >= 0; i--) {
-        FormatHunks.Hunk hk = hunks.get(i);
-        rebuilt.replace(hk.start(), hk.end(), hk.newText());
-      }
-      assertEquals(after, rebuilt.toString(), "from " + before + " to " + after);
-      int changedLines =
-          hunks.stream()
-              .mapToInt(
-                  hk -> hk.endLine() - hk.firstLine() + FormatHunks.splitLines(hk.newText()).size())
-              .sum();
-      int bound = FormatHunks.splitLines(before).size() + FormatHunks.splitLines(after).size();
-      assertTrue(changedLines <= bound);
-    }
-  }
-
-  private static String randomText(SplittableRandom random, String[] pool) {
-    StringBuilder s = new StringBuilder();
-    int n = random.nextInt(12);
-    for (int i = 0; i < n; i++) {
-      String piece = pool[random.nextInt(pool.length)];
-      s.append(piece.endsWith("\n") || i == n - 1 ? piece : piece + "\n");
-    }
-    return s.toString();
   }
 }

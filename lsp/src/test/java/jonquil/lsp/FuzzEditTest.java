@@ -20,8 +20,8 @@ import jonquil.Result;
 import jonquil.Workspace;
 import jonquil.format.FormatOptions;
 import jonquil.format.Formatter;
+import jonquil.ide.EditorFeatures;
 import jonquil.ide.HoverInfo;
-import jonquil.ide.Ide;
 import org.eclipse.lsp4j.DidChangeTextDocumentParams;
 import org.eclipse.lsp4j.DocumentFormattingParams;
 import org.eclipse.lsp4j.FormattingOptions;
@@ -96,7 +96,7 @@ class FuzzEditTest {
     String original = Files.readString(file);
     String uri = file.toUri().toString();
     SplittableRandom random = new SplittableRandom(SEED);
-    try (LspHarness h = new LspHarness(new IdeAnswers(), Duration.ofMillis(10))) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard(), Duration.ofMillis(10))) {
       h.initialize(
           samples,
           HoverFormatTest.hoverClient("markdown")); // hover compared as the compiler's Markdown
@@ -162,7 +162,8 @@ class FuzzEditTest {
       for (int i = 0; i < 50; i++) {
         int offset = random.nextInt(text.length() + 1);
         Optional<HoverInfo> direct =
-            Ide.hover(expected, file, ClientText.offset(text, ClientText.position(text, offset)));
+            EditorFeatures.standard()
+                .hover(expected, file, ClientText.offset(text, ClientText.position(text, offset)));
         Hover viaServer = hover(h, uri, text, offset);
         assertEquals(
             direct.map(HoverInfo::markdown).orElse(null),

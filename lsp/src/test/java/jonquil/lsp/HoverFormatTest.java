@@ -9,6 +9,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
+import jonquil.ide.EditorFeatures;
 import org.eclipse.lsp4j.ClientCapabilities;
 import org.eclipse.lsp4j.Hover;
 import org.eclipse.lsp4j.HoverCapabilities;
@@ -43,7 +44,7 @@ class HoverFormatTest {
     Path file = dir.resolve("bench.jonq").toAbsolutePath().normalize();
     Files.writeString(file, EditorFeaturesTest.CLEAN);
     String uri = file.toUri().toString();
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       h.initialize(dir, caps);
       h.open(uri, 1, EditorFeaturesTest.CLEAN);
       h.client.await(uri, p -> Integer.valueOf(1).equals(p.getVersion()));

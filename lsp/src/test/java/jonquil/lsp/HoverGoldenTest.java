@@ -7,6 +7,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
+import jonquil.ide.EditorFeatures;
 import org.eclipse.lsp4j.Hover;
 import org.eclipse.lsp4j.HoverParams;
 import org.eclipse.lsp4j.MarkupKind;
@@ -44,7 +45,7 @@ class HoverGoldenTest {
   @Test
   void hoverAtEachKindOfNodeEqualsItsGoldenMarkdown() throws Exception {
     Files.writeString(dir.resolve(".jonquil-root"), "");
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       h.initialize(dir, HoverFormatTest.hoverClient(MarkupKind.MARKDOWN));
       int version = 0;
       for (Case c : CASES) {

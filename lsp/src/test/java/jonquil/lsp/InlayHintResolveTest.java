@@ -11,6 +11,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
+import jonquil.ide.EditorFeatures;
 import org.eclipse.lsp4j.ClientCapabilities;
 import org.eclipse.lsp4j.InlayHint;
 import org.eclipse.lsp4j.InlayHintCapabilities;
@@ -89,7 +90,7 @@ class InlayHintResolveTest {
    * no data.
    */
   private List<InlayHint> inlineHints(String uri, String text) throws Exception {
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       ServerCapabilities caps = h.initialize(dir, new ClientCapabilities()).getCapabilities();
       assertTrue(
           caps.getInlayHintProvider().getRight().getResolveProvider(),
@@ -115,7 +116,7 @@ class InlayHintResolveTest {
         inline.get(0).getTooltip().getLeft().startsWith("10 mW leaving 'seed.out'"),
         inline.get(0).toString());
 
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       ServerCapabilities caps = h.initialize(dir, resolvingClient("tooltip")).getCapabilities();
       assertTrue(caps.getInlayHintProvider().getRight().getResolveProvider());
       h.open(uri, 1, BENCH);
@@ -145,7 +146,7 @@ class InlayHintResolveTest {
   @Test
   void aClientResolvingOtherPropertiesOnlyGetsTooltipsInline() throws Exception {
     String uri = write(BENCH);
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       h.initialize(dir, resolvingClient("label.location", "textEdits"));
       h.open(uri, 1, BENCH);
       for (InlayHint hint : hints(h, uri)) {
@@ -158,7 +159,7 @@ class InlayHintResolveTest {
   @Test
   void aHintWhoseDocumentChangedOrClosedResolvesToItselfWithoutError() throws Exception {
     String uri = write(BENCH);
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       h.initialize(dir, resolvingClient("tooltip"));
       h.open(uri, 1, BENCH);
       InlayHint first = hints(h, uri).get(0);

@@ -53,7 +53,7 @@ class LspCommandTest {
     ByteArrayOutputStream out = new ByteArrayOutputStream();
     LspCommand command =
         new LspCommand(
-            new ByteArrayInputStream(in.getBytes(StandardCharsets.UTF_8)), out, new NoAnswers());
+            new ByteArrayInputStream(in.getBytes(StandardCharsets.UTF_8)), out, new StandIn());
     int code =
         CompletableFuture.supplyAsync(
                 () -> {
@@ -79,7 +79,7 @@ class LspCommandTest {
         new LspCommand(
             new ByteArrayInputStream(in.getBytes(StandardCharsets.UTF_8)),
             new ByteArrayOutputStream(),
-            new NoAnswers());
+            new StandIn());
     long start = System.nanoTime();
     int code =
         CompletableFuture.supplyAsync(
@@ -146,7 +146,7 @@ class LspCommandTest {
     ByteArrayOutputStream out = new ByteArrayOutputStream();
     ByteArrayOutputStream errBytes = new ByteArrayOutputStream();
     PrintStream err = new PrintStream(errBytes, true, StandardCharsets.UTF_8);
-    LspCommand command = new LspCommand(in, out, err, new NoAnswers());
+    LspCommand command = new LspCommand(in, out, err, new StandIn());
     new CommandLine(command).parseArgs(args);
     CompletableFuture<Integer> code =
         CompletableFuture.supplyAsync(

@@ -14,6 +14,7 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.TimeUnit;
 import java.util.function.Predicate;
+import jonquil.ide.EditorFeatures;
 import org.eclipse.lsp4j.ClientCapabilities;
 import org.eclipse.lsp4j.DidChangeTextDocumentParams;
 import org.eclipse.lsp4j.DidCloseTextDocumentParams;
@@ -66,7 +67,7 @@ final class LspHarness implements AutoCloseable {
     @Override
     public synchronized CompletableFuture<Void> createProgress(
         WorkDoneProgressCreateParams params) {
-      progressTokens.add(Convert.progressToken(params.getToken()));
+      progressTokens.add(IndexProgress.progressToken(params.getToken()));
       return CompletableFuture.completedFuture(null);
     }
 
@@ -181,11 +182,11 @@ final class LspHarness implements AutoCloseable {
    */
   final java.util.concurrent.Future<Void> serverListening;
 
-  LspHarness(EditorAnswers answers) throws IOException {
+  LspHarness(EditorFeatures answers) throws IOException {
     this(answers, JonquilLanguageServer.DEBOUNCE);
   }
 
-  LspHarness(EditorAnswers answers, Duration debounce) throws IOException {
+  LspHarness(EditorFeatures answers, Duration debounce) throws IOException {
     this(answers, debounce, true);
   }
 
@@ -193,7 +194,8 @@ final class LspHarness implements AutoCloseable {
    * With {@code checkAfterPause} false, no check runs before {@code debounce} has passed since the
    * last edit.
    */
-  LspHarness(EditorAnswers answers, Duration debounce, boolean checkAfterPause) throws IOException {
+  LspHarness(EditorFeatures answers, Duration debounce, boolean checkAfterPause)
+      throws IOException {
     Pipe toServer = Pipe.open();
     Pipe toClient = Pipe.open();
     InputStream serverIn = Channels.newInputStream(toServer.source());
@@ -234,7 +236,7 @@ final class LspHarness implements AutoCloseable {
   }
 
   LspHarness() throws IOException {
-    this(new NoAnswers());
+    this(new StandIn());
   }
 
   /** Initializes with UTF-16 positions (or the given encodings offered) and a root folder. */

@@ -39,7 +39,7 @@ class MemorySoakTest {
                 "material demo_crown = index 1.5\nmaterial saline = water\n");
     Files.writeString(dir.resolve(".jonquil-root"), "");
     String main = dir.resolve("main.jonq").toUri().toString();
-    try (LspHarness h = new LspHarness(new NoAnswers(), Duration.ofMillis(5))) {
+    try (LspHarness h = new LspHarness(new StandIn(), Duration.ofMillis(5))) {
       h.initialize(dir);
       h.open(main, 1, sample);
       int[] version = {1};

@@ -9,6 +9,8 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
+import jonquil.ide.EditorFeatures;
+import jonquil.source.ProjectRoot;
 import org.eclipse.lsp4j.ClientCapabilities;
 import org.eclipse.lsp4j.DefinitionParams;
 import org.eclipse.lsp4j.DidChangeWorkspaceFoldersParams;
@@ -110,7 +112,7 @@ class MultiRootTest {
 
   @Test
   void sameNamedSymbolsInTwoFoldersStaySeparateAndFolderChangesReRoot() throws Exception {
-    Files.writeString(base.resolve(CheckCycle.ROOT_MARKER), "");
+    Files.writeString(base.resolve(ProjectRoot.MARKER), "");
     write(base.resolve("shared.jonq"), "mirror wide" + MIRROR);
     Path a = base.resolve("a");
     Path b = base.resolve("b");
@@ -127,7 +129,7 @@ class MultiRootTest {
     String inner = uri(write(c.resolve("inner.jonq"), innerText));
     Position onFold1 = new Position(4, 22);
 
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       InitializeResult init = h.initialize(List.of(a, b), new ClientCapabilities());
       WorkspaceFoldersOptions advertised =
           init.getCapabilities().getWorkspace().getWorkspaceFolders();

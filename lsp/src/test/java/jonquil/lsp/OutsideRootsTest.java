@@ -15,6 +15,8 @@ import java.util.TreeSet;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.TimeUnit;
+import jonquil.ide.EditorFeatures;
+import jonquil.source.ProjectRoot;
 import org.eclipse.lsp4j.ClientCapabilities;
 import org.eclipse.lsp4j.CodeAction;
 import org.eclipse.lsp4j.CodeActionCapabilities;
@@ -97,7 +99,7 @@ class OutsideRootsTest {
     folder = Files.createDirectories(dir.resolve("ws")).toAbsolutePath().normalize();
     Files.writeString(folder.resolve("inside.jonq"), "probe p\n");
     Path outside = Files.createDirectories(dir.resolve("outside")).toAbsolutePath().normalize();
-    Files.writeString(outside.resolve(CheckCycle.ROOT_MARKER), "");
+    Files.writeString(outside.resolve(ProjectRoot.MARKER), "");
     Path bench = Files.createDirectories(outside.resolve("benches")).resolve("bench.jonq");
     Path parts = Files.createDirectories(outside.resolve("parts")).resolve("parts.jonq");
     Files.writeString(bench, BENCH);
@@ -121,7 +123,7 @@ class OutsideRootsTest {
 
   private LspHarness openBench() throws Exception {
     write();
-    LspHarness h = new LspHarness(new IdeAnswers());
+    LspHarness h = new LspHarness(EditorFeatures.standard());
     h.initialize(List.of(folder), fixingClient());
     h.open(benchUri, 1, BENCH);
     return h;
@@ -295,7 +297,7 @@ class OutsideRootsTest {
     Files.writeString(main, text);
     String mainUri = main.toUri().toString();
     String libUri = folder.resolve("lib.jonq").toUri().toString();
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       h.initialize(List.of(folder), fixingClient());
       h.open(mainUri, 1, text);
       h.client.await(mainUri, p -> Integer.valueOf(1).equals(p.getVersion()));

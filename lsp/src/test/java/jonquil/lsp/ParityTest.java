@@ -21,6 +21,7 @@ import jonquil.Workspace;
 import jonquil.analysis.RequirementOutcome;
 import jonquil.analysis.RequirementStatus;
 import jonquil.diag.DiagnosticCode;
+import jonquil.ide.EditorFeatures;
 import jonquil.source.LineIndex;
 import org.eclipse.lsp4j.ClientCapabilities;
 import org.eclipse.lsp4j.Diagnostic;
@@ -141,7 +142,7 @@ class ParityTest {
     int compared = 0;
     int skipped = 0;
     String last = null;
-    try (LspHarness h = new LspHarness(new IdeAnswers(), Duration.ofMillis(10))) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard(), Duration.ofMillis(10))) {
       h.initialize(List.copyOf(folders), new ClientCapabilities());
       for (Case c : cases) {
         Path main = c.main().toAbsolutePath().normalize();

@@ -14,6 +14,7 @@ import java.util.Optional;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.TimeUnit;
 import jonquil.Result;
+import jonquil.ide.EditorFeatures;
 import jonquil.ide.HoverInfo;
 import jonquil.source.TextRange;
 import org.eclipse.lsp4j.Diagnostic;
@@ -235,8 +236,8 @@ class ProtocolTest {
   @Test
   void aFailingHandlerGivesInternalErrorAndTheServerKeepsAnswering() throws Exception {
     String uri = uriOf("hover.jonq", VALID);
-    EditorAnswers throwing =
-        new Delegating(new NoAnswers()) {
+    EditorFeatures throwing =
+        new StandIn() {
           @Override
           public Optional<HoverInfo> hover(Result result, Path file, int offset) {
             throw new IllegalStateException("boom");
@@ -272,8 +273,8 @@ class ProtocolTest {
     String text = "// 😀\nmaterial glass = index 1.5\n";
     String uri = uriOf("h.jonq", text);
     int[] asked = new int[1];
-    EditorAnswers answers =
-        new Delegating(new NoAnswers()) {
+    EditorFeatures answers =
+        new StandIn() {
           @Override
           public Optional<HoverInfo> hover(Result result, Path file, int offset) {
             asked[0] = offset;

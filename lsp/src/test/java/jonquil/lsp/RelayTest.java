@@ -13,6 +13,7 @@ import java.util.concurrent.ExecutionException;
 import java.util.concurrent.TimeUnit;
 import jonquil.Result;
 import jonquil.diag.Edit;
+import jonquil.ide.EditorFeatures;
 import jonquil.ide.FoundSymbol;
 import jonquil.ide.RenameResult;
 import jonquil.ide.SymbolInfo;
@@ -51,8 +52,8 @@ class RelayTest {
     Files.writeString(main, MAIN);
     String uri = main.toUri().toString();
     int probe = MAIN.indexOf("p\n", MAIN.indexOf("probe"));
-    EditorAnswers answers =
-        new Delegating(new NoAnswers()) {
+    EditorFeatures answers =
+        new StandIn() {
           @Override
           public List<jonquil.ide.Location> definition(Result result, Path file, int offset) {
             return List.of(new jonquil.ide.Location(lib, TextRange.of(7, 9)));
@@ -82,13 +83,19 @@ class RelayTest {
             SymbolInfo child =
                 new SymbolInfo(
                     "p",
+                    SymbolInfo.Kind.ELEMENT,
                     "probe",
                     TextRange.of(probe - 6, probe + 1),
                     TextRange.of(probe, probe + 1),
                     List.of());
             return List.of(
                 new SymbolInfo(
-                    "main", "train", TextRange.of(0, MAIN.length()), null, List.of(child)));
+                    "main",
+                    SymbolInfo.Kind.TRAIN,
+                    "train",
+                    TextRange.of(0, MAIN.length()),
+                    null,
+                    List.of(child)));
           }
 
           @Override
@@ -97,7 +104,12 @@ class RelayTest {
                 new FoundSymbol(
                     lib,
                     new SymbolInfo(
-                        "m1", "mirror", TextRange.of(0, 30), TextRange.of(7, 9), List.of())));
+                        "m1",
+                        SymbolInfo.Kind.ELEMENT,
+                        "mirror",
+                        TextRange.of(0, 30),
+                        TextRange.of(7, 9),
+                        List.of())));
           }
         };
     try (LspHarness h = new LspHarness(answers)) {

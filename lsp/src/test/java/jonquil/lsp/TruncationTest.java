@@ -24,6 +24,7 @@ import java.util.stream.Stream;
 import jonquil.CheckOptions;
 import jonquil.Checker;
 import jonquil.Result;
+import jonquil.ide.EditorFeatures;
 import org.eclipse.lsp4j.ClientCapabilities;
 import org.eclipse.lsp4j.CompletionParams;
 import org.eclipse.lsp4j.DocumentSymbol;
@@ -191,7 +192,7 @@ class TruncationTest {
     List<String> problems = new ArrayList<>();
     int states = 0;
     int notUtf8 = 0;
-    try (LspHarness h = new LspHarness(new IdeAnswers(), Duration.ofMillis(10))) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard(), Duration.ofMillis(10))) {
       h.initialize(List.copyOf(folders), client());
       var service = h.remote.getTextDocumentService();
       for (Path file : examples) {

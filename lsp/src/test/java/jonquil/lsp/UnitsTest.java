@@ -9,6 +9,7 @@ import java.util.List;
 import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicInteger;
+import jonquil.source.ProjectRoot;
 import jonquil.source.SourceFile;
 import org.eclipse.lsp4j.Position;
 import org.eclipse.lsp4j.Range;
@@ -192,6 +193,6 @@ class UnitsTest {
     Path file = Path.of("/w/a/b/c.jonq");
     assertEquals(
         Path.of("/w/a"),
-        CheckCycle.projectRoot(file, List.of(Path.of("/w"), Path.of("/w/a"), Path.of("/x"))));
+        ProjectRoot.owning(file, List.of(Path.of("/w"), Path.of("/w/a"), Path.of("/x"))));
   }
 }

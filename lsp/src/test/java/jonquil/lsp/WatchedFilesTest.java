@@ -48,7 +48,7 @@ class WatchedFilesTest {
     WorkspaceClientCapabilities workspace = new WorkspaceClientCapabilities();
     workspace.setDidChangeWatchedFiles(new DidChangeWatchedFilesCapabilities(true));
     caps.setWorkspace(workspace);
-    try (LspHarness h = new LspHarness(new NoAnswers(), java.time.Duration.ofMillis(20))) {
+    try (LspHarness h = new LspHarness(new StandIn(), java.time.Duration.ofMillis(20))) {
       h.initialize(dir, caps);
       h.open(uri, 1, MAIN);
       PublishDiagnosticsParams before =
@@ -80,7 +80,7 @@ class WatchedFilesTest {
   @Test
   void withoutRegistrationEveryCheckReadsUsedFilesFromDiskAgain() throws Exception {
     String uri = setUp();
-    try (LspHarness h = new LspHarness(new NoAnswers(), java.time.Duration.ofMillis(20))) {
+    try (LspHarness h = new LspHarness(new StandIn(), java.time.Duration.ofMillis(20))) {
       h.initialize(dir); // no workspace capabilities at all, as Neovim 0.7 sends
       h.open(uri, 1, MAIN);
       assertFalse(

@@ -16,6 +16,7 @@ import java.util.Optional;
 import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
 import jonquil.Result;
+import jonquil.ide.EditorFeatures;
 import jonquil.ide.FileIndex;
 import org.eclipse.lsp4j.ClientCapabilities;
 import org.eclipse.lsp4j.DidChangeWatchedFilesCapabilities;
@@ -169,8 +170,8 @@ class WorkspaceIndexTest {
         dir.resolve("huge.jonq"),
         "mirror lonely_huge"
             + MIRROR
-            + "// padding\n".repeat((int) (WorkspaceIndex.MAX_FILE_BYTES / 10) + 1));
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+            + "// padding\n".repeat((int) (SpecFolderWalk.MAX_FILE_BYTES / 10) + 1));
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       h.initialize(dir, new ClientCapabilities());
       h.open(uri(main), 1, bench("lib.jonq", "seed"));
       List<WorkspaceSymbol> found = symbols(h, "lonely");
@@ -196,7 +197,7 @@ class WorkspaceIndexTest {
     Path a = write(dir.resolve("benches/a.jonq"), aText);
     Path b = write(dir.resolve("benches/old/b.jonq"), bText);
     Path unrelated = write(dir.resolve("benches/c.jonq"), "mirror fold" + MIRROR); // its own 'fold'
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       h.initialize(dir, client(false, false, true));
       h.open(uri(lib), 3, LIB);
       h.open(uri(open), 5, openText);
@@ -262,7 +263,7 @@ class WorkspaceIndexTest {
     String userText =
         bench("lib.jonq", "lamp").replace("fold", "novel"); // 'novel' is not declared on disk
     Path user = write(dir.resolve("user.jonq"), userText);
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       h.initialize(dir, new ClientCapabilities());
       String buffer = LIB + "mirror novel" + MIRROR;
       h.open(uri(lib), 1, buffer);
@@ -288,7 +289,7 @@ class WorkspaceIndexTest {
   void aWatchedFileEventIsIndexed() throws Exception {
     write(dir.resolve("main.jonq"), bench("lib.jonq", "seed"));
     write(dir.resolve("lib.jonq"), LIB);
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       h.initialize(dir, client(false, true, false));
       assertEquals(List.of(), names(h, "abc"));
       Path created = write(dir.resolve("new/abc.jonq"), "mirror abc_new" + MIRROR);
@@ -324,7 +325,7 @@ class WorkspaceIndexTest {
     Path lib = write(dir.resolve("lib.jonq"), LIB);
     String mainText = bench("lib.jonq", "seed");
     write(dir.resolve("main.jonq"), mainText);
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       h.initialize(dir); // no capabilities at all, as Neovim 0.7 sends
       h.open(uri(lib), 1, LIB);
       h.client.await(uri(lib), p -> Integer.valueOf(1).equals(p.getVersion()));
@@ -357,7 +358,7 @@ class WorkspaceIndexTest {
     for (int i = 0; i < 5; i++) {
       write(dir.resolve("specs/s" + i + ".jonq"), "mirror m" + i + MIRROR);
     }
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       h.initialize(dir, client(true, false, false));
       h.client.awaitProgress(p -> value(p).getKind() == WorkDoneProgressKind.end);
       List<ProgressParams> sent;
@@ -368,7 +369,8 @@ class WorkspaceIndexTest {
       }
       assertEquals(1, created.size(), "one token, created before use");
       assertTrue(
-          sent.stream().allMatch(p -> created.get(0).equals(Convert.progressToken(p.getToken()))));
+          sent.stream()
+              .allMatch(p -> created.get(0).equals(IndexProgress.progressToken(p.getToken()))));
       List<WorkDoneProgressKind> kinds = sent.stream().map(p -> value(p).getKind()).toList();
       assertEquals(WorkDoneProgressKind.begin, kinds.get(0));
       assertEquals(WorkDoneProgressKind.end, kinds.get(kinds.size() - 1));
@@ -383,7 +385,7 @@ class WorkspaceIndexTest {
           "indexed 5 files", ((WorkDoneProgressEnd) value(sent.get(sent.size() - 1))).getMessage());
       assertEquals(5, names(h, "m").size());
     }
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       h.initialize(dir, client(false, false, false));
       assertEquals(5, names(h, "m").size(), "indexed all the same");
       synchronized (h.client) {
@@ -401,8 +403,8 @@ class WorkspaceIndexTest {
           dir.resolve("specs/s" + String.format("%02d", i) + ".jonq"), "mirror part_" + i + MIRROR);
     }
     CountDownLatch cancelSent = new CountDownLatch(1);
-    EditorAnswers answers =
-        new Delegating(new IdeAnswers()) {
+    EditorFeatures answers =
+        new StandIn(EditorFeatures.standard()) {
           @Override
           public Optional<FileIndex> index(Result result, Path file) {
             try {
@@ -460,7 +462,7 @@ class WorkspaceIndexTest {
     String userText = bench("lib.jonq", "seed");
     Path aUser = write(a.resolve("user.jonq"), userText);
     Path bUser = write(b.resolve("user.jonq"), userText);
-    try (LspHarness h = new LspHarness(new IdeAnswers())) {
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
       h.initialize(List.of(a, b), new ClientCapabilities());
       h.open(uri(aLib), 1, LIB);
       h.open(uri(bLib), 1, LIB);

@@ -1,4 +1,4 @@
-package jonquil.cli;
+package jonquil.source;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assumptions.assumeFalse;
@@ -6,9 +6,11 @@ import static org.junit.jupiter.api.Assumptions.assumeFalse;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
+/** The one root rule of the command line and the language server. */
 class ProjectRootTest {
   @TempDir Path dir;
 
@@ -38,5 +40,16 @@ class ProjectRootTest {
     }
     assumeFalse(markerAbove, "the temporary directory lies inside a project");
     assertEquals(dir, ProjectRoot.discover(isolated, dir));
+  }
+
+  @Test
+  void anEditorsFileBelongsToItsInnermostFolderElseToTheMarkerAboveIt() throws IOException {
+    Files.createDirectories(dir.resolve("a/b/specs"));
+    Files.writeString(dir.resolve("a/" + ProjectRoot.MARKER), "");
+    Path file = dir.resolve("a/b/specs/x.jonq");
+    assertEquals(
+        dir.resolve("a/b"),
+        ProjectRoot.owning(file, List.of(dir, dir.resolve("a/b"), Path.of("/x"))));
+    assertEquals(dir.resolve("a"), ProjectRoot.owning(file, List.of(Path.of("/elsewhere"))));
   }
 }

@@ -1,4 +1,4 @@
-package jonquil.lsp;
+package jonquil.format;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -8,11 +8,11 @@ import jonquil.diag.Edit;
 import jonquil.source.TextRange;
 
 /**
- * Cuts the formatter's whole-file rewrite into line hunks, because the protocol's range formatting
- * must change only what the selection touches while the compiler formats whole files. Text in, text
- * edits out: no knowledge of the language.
+ * Cuts the formatter's whole-file rewrite into line hunks, because an editor's range formatting
+ * must change only what the selection touches while the formatter formats whole files. Text in,
+ * text edits out: no knowledge of the language.
  */
-final class FormatHunks {
+public final class FormatHunks {
   /** Past this many changed lines the diff stops looking for a finer cut and makes one hunk. */
   static final int MAX_CHANGES = 2000;
 
@@ -20,12 +20,13 @@ final class FormatHunks {
    * Old lines {@code [firstLine, endLine)} at UTF-16 offsets {@code [start, end)} become {@code
    * newText}.
    */
-  record Hunk(int firstLine, int endLine, int start, int end, String newText) {}
+  public record Hunk(int firstLine, int endLine, int start, int end, String newText) {}
 
   private FormatHunks() {}
 
   /** The edits of the hunks that touch old lines {@code firstLine..lastLine} (inclusive). */
-  static List<Edit> within(Path file, String before, String after, int firstLine, int lastLine) {
+  public static List<Edit> within(
+      Path file, String before, String after, int firstLine, int lastLine) {
     List<Edit> out = new ArrayList<>();
     for (Hunk h : hunks(before, after)) {
       boolean touches =
@@ -41,7 +42,7 @@ final class FormatHunks {
   }
 
   /** The line hunks that turn {@code before} into {@code after}, in order and not overlapping. */
-  static List<Hunk> hunks(String before, String after) {
+  public static List<Hunk> hunks(String before, String after) {
     List<String> a = splitLines(before);
     List<String> b = splitLines(after);
     int[] starts = new int[a.size() + 1];
@@ -153,7 +154,7 @@ final class FormatHunks {
   }
 
   /** Lines with their terminators (LF, CRLF or CR), so that joining them gives the text back. */
-  static List<String> splitLines(String text) {
+  public static List<String> splitLines(String text) {
     List<String> out = new ArrayList<>();
     int start = 0;
     for (int i = 0; i < text.length(); i++) {
