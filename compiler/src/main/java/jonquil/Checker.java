@@ -86,7 +86,12 @@ public final class Checker {
         }
         found.addAll(loader.diagnostics());
         ResolvedModel model =
-            Resolver.resolve(root, loader.closure(), loader.edges(), loader.dataFiles());
+            Resolver.resolve(
+                root,
+                loader.closure(),
+                loader.edges(),
+                loader.dataFiles(),
+                loader.dataFileProblems());
         loader
             .dataFiles()
             .forEach((p, text) -> dataSources.putIfAbsent(p, new SourceFile(p, text)));

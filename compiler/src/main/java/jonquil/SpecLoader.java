@@ -14,6 +14,7 @@ import jonquil.diag.Diagnostic;
 import jonquil.diag.DiagnosticCode;
 import jonquil.resolve.UseEdge;
 import jonquil.source.SourceFile;
+import jonquil.source.TextRange;
 import jonquil.syntax.ParseResult;
 import jonquil.syntax.SpecFile;
 import jonquil.syntax.SpecParser;
@@ -33,6 +34,10 @@ final class SpecLoader {
   private final Map<Path, SpecFile> closure = new LinkedHashMap<>();
   private final Map<Path, List<UseEdge>> edges = new LinkedHashMap<>();
   private final Map<Path, String> dataFiles = new LinkedHashMap<>();
+  private final Map<Path, String> dataFileProblems = new LinkedHashMap<>();
+
+  /** Why the last file that {@link #parse} could not read was refused, in plain words, or null. */
+  private String lastProblem;
 
   SpecLoader(Workspace workspace, Map<Path, ParseResult> parsed) {
     this.workspace = workspace;
@@ -67,6 +72,14 @@ final class SpecLoader {
     return dataFiles;
   }
 
+  /**
+   * Data files named by the specs that are there but cannot be read, with the reason in plain words
+   * ("not valid UTF-8"), so the resolver does not call them missing.
+   */
+  Map<Path, String> dataFileProblems() {
+    return dataFileProblems;
+  }
+
   private void readDataFiles(Path file, SpecFile ast) {
     for (jonquil.syntax.Declaration d : ast.declarations()) {
       for (jonquil.syntax.Property p : d.properties()) {
@@ -82,10 +95,17 @@ final class SpecLoader {
           if (!target.startsWith(workspace.root()) || !workspace.reader().exists(target)) {
             continue; // the resolver reports it: it knows which table a material needs
           }
+          if (!workspace.contains(target)) {
+            dataFileProblems.put(target, "it leads out of the project through a link");
+            continue;
+          }
           try {
-            dataFiles.put(target, workspace.reader().read(target));
+            dataFiles.put(target, workspace.reader().read(target, FileText.TABLE_LIMIT));
           } catch (IOException | RuntimeException e) {
-            // unreadable: reported as not found by the resolver
+            String problem = problem(e);
+            if (problem != null) {
+              dataFileProblems.put(target, problem);
+            }
           }
         }
       }
@@ -187,6 +207,19 @@ final class SpecLoader {
               + "'; keep used files inside the project");
       return null;
     }
+    if (!workspace.contains(target)) {
+      // Say nothing of where the link leads: the target's name or text is none of this project's.
+      report(
+          file,
+          DiagnosticCode.USE_ESCAPES_ROOT,
+          use,
+          "'"
+              + written
+              + "' leads outside the project root '"
+              + workspace.root().getFileName()
+              + "' through a link; keep used files inside the project");
+      return null;
+    }
     if (!workspace.reader().exists(target)) {
       String resolved = workspace.root().relativize(target).toString().replace('\\', '/');
       java.util.List<String> nearby =
@@ -213,7 +246,13 @@ final class SpecLoader {
     ParseResult child = parse(target);
     if (child == null) {
       report(
-          file, DiagnosticCode.USE_UNREADABLE, use, "file '" + use.target() + "' cannot be read");
+          file,
+          DiagnosticCode.USE_UNREADABLE,
+          use,
+          "file '"
+              + use.target()
+              + "' cannot be read"
+              + (lastProblem == null ? "" : ": " + lastProblem));
     }
     return child;
   }
@@ -223,15 +262,54 @@ final class SpecLoader {
     if (cached != null) {
       return cached;
     }
+    lastProblem = null;
     String text;
     try {
-      text = workspace.reader().read(file);
+      text = workspace.reader().read(file, FileText.SPEC_LIMIT);
+    } catch (FileText.Refused e) {
+      if (e.tooLarge()) {
+        // The parser's J109, without reading what would be refused anyway.
+        ParseResult tooLarge = tooLarge(file);
+        parsed.put(file, tooLarge);
+        return tooLarge;
+      }
+      lastProblem = e.getMessage();
+      return null;
     } catch (IOException | RuntimeException e) {
+      lastProblem = problem(e);
       return null;
     }
     ParseResult result = SpecParser.parse(new SourceFile(file, text), workspace.memo());
     parsed.put(file, result);
     return result;
+  }
+
+  private static ParseResult tooLarge(Path file) {
+    return new ParseResult(
+        new SourceFile(file, ""),
+        SpecFile.empty(file),
+        List.of(
+            Diagnostic.of(
+                DiagnosticCode.FILE_TOO_LARGE,
+                file,
+                TextRange.EMPTY,
+                "file is larger than "
+                    + FileText.SPEC_LIMIT / (1024 * 1024)
+                    + " MiB; a spec this size is not supported")));
+  }
+
+  /** A read failure in plain words, or null when the file is simply not there. */
+  private static String problem(Exception e) {
+    if (e instanceof FileText.Refused) {
+      return e.getMessage();
+    }
+    if (e instanceof java.nio.file.NoSuchFileException) {
+      return null;
+    }
+    if (e instanceof java.nio.file.AccessDeniedException) {
+      return "permission denied";
+    }
+    return "input/output error";
   }
 
   private String cycle(Deque<Path> stack, Path target) {

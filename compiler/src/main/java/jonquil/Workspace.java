@@ -1,8 +1,8 @@
 package jonquil;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
+import java.nio.file.LinkOption;
 import java.nio.file.Path;
 import java.util.Map;
 import jonquil.syntax.ParseMemo;
@@ -14,13 +14,17 @@ import jonquil.syntax.ParseMemo;
  */
 public record Workspace(Path root, Reader reader, ParseMemo memo) {
 
-  /** Reads the text of one file; throws when it does not exist or cannot be read. */
+  /**
+   * Reads the text of one file, of at most {@code limit} bytes; throws when it does not exist or
+   * cannot be read ({@link FileText.Refused} says why in plain words).
+   */
   @FunctionalInterface
   public interface Reader {
-    String read(Path file) throws IOException;
+    String read(Path file, long limit) throws IOException;
 
+    /** True when something is there to read, or to refuse with a reason (a FIFO, a directory). */
     default boolean exists(Path file) {
-      return Files.isRegularFile(file);
+      return Files.exists(file);
     }
 
     /** The spec files in a folder, for "did you mean" on a mistyped 'use' path. */
@@ -49,8 +53,28 @@ public record Workspace(Path root, Reader reader, ParseMemo memo) {
     return new Workspace(root, reader, memo);
   }
 
+  /**
+   * True when {@code file} lies inside the root with every link on its way followed, so a link
+   * cannot lead a 'use' or 'table' out of the project. A path that names nothing on disk (an
+   * unsaved buffer, a missing file) is judged by its text: it leads nowhere.
+   */
+  public boolean contains(Path file) {
+    Path path = file.toAbsolutePath().normalize();
+    if (!path.startsWith(root)) {
+      return false;
+    }
+    if (!Files.exists(path, LinkOption.NOFOLLOW_LINKS)) {
+      return true;
+    }
+    try {
+      return path.toRealPath().startsWith(root.toRealPath());
+    } catch (IOException | SecurityException e) {
+      return true; // a dangling link: reading it fails, and the failure names no target
+    }
+  }
+
   public static Workspace onDisk(Path root) {
-    return new Workspace(root, file -> Files.readString(file, StandardCharsets.UTF_8));
+    return new Workspace(root, FileText::read);
   }
 
   /** The disk, with open buffers taking precedence over what is saved. */
@@ -60,14 +84,14 @@ public record Workspace(Path root, Reader reader, ParseMemo memo) {
         root,
         new Reader() {
           @Override
-          public String read(Path file) throws IOException {
+          public String read(Path file, long limit) throws IOException {
             String open = copy.get(file.toAbsolutePath().normalize());
-            return open != null ? open : Files.readString(file, StandardCharsets.UTF_8);
+            return open != null ? open : FileText.read(file, limit);
           }
 
           @Override
           public boolean exists(Path file) {
-            return copy.containsKey(file.toAbsolutePath().normalize()) || Files.isRegularFile(file);
+            return copy.containsKey(file.toAbsolutePath().normalize()) || Files.exists(file);
           }
         });
   }

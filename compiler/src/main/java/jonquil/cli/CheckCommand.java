@@ -3,6 +3,7 @@ package jonquil.cli;
 import java.io.PrintStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
+import java.nio.file.InvalidPathException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -131,7 +132,11 @@ final class CheckCommand implements Callable<Integer> {
 
   private Path projectRoot() {
     if (root == null) {
-      return ProjectRoot.discover(cwd.resolve(paths.get(0)), cwd);
+      try {
+        return ProjectRoot.discover(cwd.resolve(paths.get(0)), cwd);
+      } catch (InvalidPathException e) {
+        return cwd; // the argument is reported as a problem of its own
+      }
     }
     Path dir = cwd.resolve(root).toAbsolutePath().normalize();
     if (!Files.isDirectory(dir)) {
@@ -148,7 +153,7 @@ final class CheckCommand implements Callable<Integer> {
     List<Diagnostic> kept = new ArrayList<>();
     for (Diagnostic d : result.diagnostics()) {
       if (d.code() == DiagnosticCode.UNREADABLE_FILE) {
-        problems.add("jonquil: " + d.message());
+        problems.add("jonquil: " + PathText.oneLine(d.message()));
       } else {
         kept.add(d);
       }

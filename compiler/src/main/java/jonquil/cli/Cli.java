@@ -1,9 +1,12 @@
 package jonquil.cli;
 
+import java.io.OutputStreamWriter;
 import java.io.PrintStream;
 import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.Arrays;
+import java.util.List;
 import java.util.Locale;
 import picocli.CommandLine;
 import picocli.CommandLine.ParameterException;
@@ -21,6 +24,19 @@ public final class Cli {
    */
   public static int run(
       String[] args, PrintStream out, PrintStream err, Path cwd, Object... extraSubcommands) {
+    // Reports are UTF-8 whatever the platform's default: under LANG=C it would print '?' for 'µ'.
+    PrintStream utf8Out = new PrintStream(out, true, StandardCharsets.UTF_8);
+    PrintStream utf8Err = new PrintStream(err, true, StandardCharsets.UTF_8);
+    try {
+      return run(args, utf8Out, utf8Err, cwd, List.of(extraSubcommands));
+    } finally {
+      utf8Out.flush();
+      utf8Err.flush();
+    }
+  }
+
+  private static int run(
+      String[] args, PrintStream out, PrintStream err, Path cwd, List<Object> extraSubcommands) {
     CommandLine cli = new CommandLine(new JonquilCommand());
     cli.addSubcommand(new CommandLine(new CheckCommand(out, err, cwd)));
     cli.addSubcommand(new CommandLine(new FormatCommand(out, err, cwd)));
@@ -28,8 +44,8 @@ public final class Cli {
       cli.addSubcommand(extra);
     }
     // Set after adding subcommands: picocli hands the writers down only to those it already has.
-    cli.setOut(new PrintWriter(out, true));
-    cli.setErr(new PrintWriter(err, true));
+    cli.setOut(new PrintWriter(new OutputStreamWriter(out, StandardCharsets.UTF_8), true));
+    cli.setErr(new PrintWriter(new OutputStreamWriter(err, StandardCharsets.UTF_8), true));
     cli.setParameterExceptionHandler(Cli::usageError);
     cli.setExecutionExceptionHandler(
         (e, commandLine, parseResult) -> {

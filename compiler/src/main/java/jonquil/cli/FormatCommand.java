@@ -2,14 +2,14 @@ package jonquil.cli;
 
 import java.io.IOException;
 import java.io.PrintStream;
-import java.nio.charset.CharacterCodingException;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
+import java.nio.file.AccessDeniedException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.Callable;
+import jonquil.FileText;
 import jonquil.diag.Diagnostic;
 import jonquil.diag.Severity;
 import jonquil.format.FormatOptions;
@@ -108,9 +108,9 @@ final class FormatCommand implements Callable<Integer> {
     String shown = PathText.relative(cwd, file);
     String text;
     try {
-      text = Files.readString(file, StandardCharsets.UTF_8);
-    } catch (CharacterCodingException e) {
-      problems.add(Inputs.cannotRead(shown, "not valid UTF-8"));
+      text = FileText.read(file, FileText.SPEC_LIMIT);
+    } catch (FileText.Refused e) {
+      problems.add(Inputs.cannotRead(shown, e.getMessage()));
       return false;
     } catch (IOException e) {
       problems.add(Inputs.cannotRead(shown, "input/output error"));
@@ -132,13 +132,15 @@ final class FormatCommand implements Callable<Integer> {
       return false;
     }
     if (check) {
-      out.println(shown);
+      out.println(PathText.oneLine(shown));
       return true;
     }
     try {
-      Files.writeString(file, result, StandardCharsets.UTF_8);
+      AtomicFile.replace(file, result.getBytes(StandardCharsets.UTF_8));
+    } catch (AccessDeniedException e) {
+      problems.add("jonquil: cannot write '" + PathText.oneLine(shown) + "': permission denied");
     } catch (IOException e) {
-      problems.add("jonquil: cannot write '" + shown + "': input/output error");
+      problems.add("jonquil: cannot write '" + PathText.oneLine(shown) + "': input/output error");
     }
     return false;
   }
@@ -148,7 +150,7 @@ final class FormatCommand implements Callable<Integer> {
       if (d.severity() == Severity.ERROR) {
         int at = d.range().start();
         err.println(
-            shown
+            PathText.oneLine(shown)
                 + ":"
                 + source.humanLine(at)
                 + ":"

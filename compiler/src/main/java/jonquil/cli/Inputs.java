@@ -3,6 +3,7 @@ package jonquil.cli;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
+import java.nio.file.InvalidPathException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashSet;
@@ -30,7 +31,13 @@ record Inputs(List<Path> files, List<String> problems) {
     Set<Path> files = new LinkedHashSet<>();
     List<String> problems = new ArrayList<>();
     for (String argument : arguments) {
-      Path path = cwd.resolve(argument).toAbsolutePath().normalize();
+      Path path;
+      try {
+        path = cwd.resolve(argument).toAbsolutePath().normalize();
+      } catch (InvalidPathException e) {
+        problems.add(cannotRead(argument, "not a valid file path"));
+        continue;
+      }
       if (!Files.exists(path)) {
         problems.add(cannotRead(argument, "no such file"));
       } else if (Files.isDirectory(path)) {
@@ -42,9 +49,13 @@ record Inputs(List<Path> files, List<String> problems) {
           continue;
         }
         if (found.isEmpty()) {
-          problems.add("jonquil: no " + EXTENSION + " files in '" + argument + "'");
+          problems.add(
+              "jonquil: no " + EXTENSION + " files in '" + PathText.oneLine(argument) + "'");
         }
         files.addAll(found);
+      } else if (!Files.isRegularFile(path)) {
+        // A FIFO would block the read until some writer came; a device may never end.
+        problems.add(cannotRead(argument, "not a regular file"));
       } else if (!Files.isReadable(path)) {
         problems.add(cannotRead(argument, "permission denied"));
       } else {
@@ -55,7 +66,7 @@ record Inputs(List<Path> files, List<String> problems) {
   }
 
   static String cannotRead(String shownPath, String reason) {
-    return "jonquil: cannot read '" + shownPath + "': " + reason;
+    return "jonquil: cannot read '" + PathText.oneLine(shownPath) + "': " + reason;
   }
 
   private static List<Path> specsBelow(Path dir) throws IOException {

@@ -18,6 +18,33 @@ final class PathText {
     return slashes(from.relativize(abs));
   }
 
+  /**
+   * A path for one line of text output: a line break or other control character in a file name
+   * would split the 'path:line:col' line, so it is written as a backslash escape (backslash and
+   * 'n'; backslash, 'u' and four hex digits), and a backslash is doubled so that no name reads as
+   * another's escape.
+   */
+  static String oneLine(String path) {
+    StringBuilder out = new StringBuilder(path.length());
+    for (int i = 0; i < path.length(); i++) {
+      char c = path.charAt(i);
+      switch (c) {
+        case '\\' -> out.append("\\\\");
+        case '\n' -> out.append("\\n");
+        case '\r' -> out.append("\\r");
+        case '\t' -> out.append("\\t");
+        default -> {
+          if (Character.isISOControl(c) || c == '\u2028' || c == '\u2029' || c == '\u0085') {
+            out.append(String.format("\\u%04x", (int) c));
+          } else {
+            out.append(c);
+          }
+        }
+      }
+    }
+    return out.toString();
+  }
+
   static String slashes(Path path) {
     return path.toString().replace(path.getFileSystem().getSeparator(), "/");
   }

@@ -94,7 +94,7 @@ final class TextReport {
 
   private static String location(CheckRun run, java.nio.file.Path file, int offset) {
     Position p = Position.of(run.result().files(), file, offset);
-    return PathText.relative(run.cwd(), file) + ":" + p.line() + ":" + p.column();
+    return PathText.oneLine(PathText.relative(run.cwd(), file)) + ":" + p.line() + ":" + p.column();
   }
 
   /** A line break inside a message would split one finding into two for every log parser. */

@@ -21,16 +21,19 @@ final class DeclarationChecker {
   private final jonquil.syntax.SpecFile file;
 
   private final Map<java.nio.file.Path, String> dataFiles;
+  private final Map<java.nio.file.Path, String> dataFileProblems;
 
   DeclarationChecker(
       Sink sink,
       Scope scope,
       jonquil.syntax.SpecFile file,
-      Map<java.nio.file.Path, String> dataFiles) {
+      Map<java.nio.file.Path, String> dataFiles,
+      Map<java.nio.file.Path, String> dataFileProblems) {
     this.sink = sink;
     this.values = new ValueChecker(sink, scope);
     this.file = file;
     this.dataFiles = dataFiles;
+    this.dataFileProblems = dataFileProblems;
   }
 
   ResolvedElement check(Symbol symbol, ElementKind kind, Declaration decl) {
@@ -118,13 +121,16 @@ final class DeclarationChecker {
       target = null;
     }
     String text = target == null ? null : dataFiles.get(target);
+    String problem = target == null ? null : dataFileProblems.get(target);
     if (text == null) {
       sink.report(
           DiagnosticCode.DATA_FILE_NOT_FOUND,
           name.range(),
           "table file '"
               + name.text()
-              + "' not found in the project (paths are relative to this file)");
+              + (problem != null
+                  ? "' cannot be read: " + problem
+                  : "' not found in the project (paths are relative to this file)"));
       params.remove("table");
       return;
     }

@@ -49,6 +49,16 @@ public final class Resolver {
       Map<Path, SpecFile> files,
       Map<Path, List<UseEdge>> uses,
       Map<Path, String> dataFiles) {
+    return resolve(root, files, uses, dataFiles, Map.of());
+  }
+
+  /** As above, with why each data file that is there could not be read ("not valid UTF-8"). */
+  public static ResolvedModel resolve(
+      Path root,
+      Map<Path, SpecFile> files,
+      Map<Path, List<UseEdge>> uses,
+      Map<Path, String> dataFiles,
+      Map<Path, String> dataFileProblems) {
     Map<Path, Sink> sinks = new LinkedHashMap<>();
     files.keySet().forEach(p -> sinks.put(p, new Sink(p)));
     Map<Path, Map<String, Symbol>> own = new LinkedHashMap<>();
@@ -63,7 +73,8 @@ public final class Resolver {
     files.forEach(
         (path, file) -> {
           DeclarationChecker checker =
-              new DeclarationChecker(sinks.get(path), scopes.get(path), file, dataFiles);
+              new DeclarationChecker(
+                  sinks.get(path), scopes.get(path), file, dataFiles, dataFileProblems);
           for (Declaration decl : file.declarations()) {
             Symbol symbol = own.get(path).get(decl.name().text());
             if (symbol == null

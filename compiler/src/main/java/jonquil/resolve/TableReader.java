@@ -58,7 +58,9 @@ public final class TableReader {
               double wl = u.toSi(Double.parseDouble(f[0]));
               double n = Double.parseDouble(f[2]);
               double k = f.length == 4 ? Double.parseDouble(f[3]) : 0;
-              if (!(wl > 0) || !(n > 0) || !(k >= 0)) {
+              if (!Double.isFinite(n) || !Double.isFinite(k)) {
+                problem = "n and k must be finite numbers";
+              } else if (!(wl > 0) || !(n > 0) || !(k >= 0)) {
                 problem = "the wavelength and n must be positive and k zero or more";
               } else if (!KindTables.WAVELENGTH.contains(wl)) {
                 problem =

@@ -254,6 +254,14 @@ final class ValueChecker {
       si = u.toSi(a.number().value());
       dim = u.dimension();
     }
+    if (!Double.isFinite(si)) {
+      // Finite as written but not in SI ('1e308 kW'); bounds open to infinity would let it pass.
+      sink.report(
+          DiagnosticCode.OUT_OF_RANGE,
+          a.range(),
+          "'" + what + "' of '" + written(a) + "' is too large to compute with");
+      return Optional.empty();
+    }
     if (!bounds.contains(si)) {
       if (bounds.equals(KindTables.WAVELENGTH)) {
         sink.report(
@@ -317,6 +325,13 @@ final class ValueChecker {
           DiagnosticCode.OUT_OF_RANGE,
           t.range(),
           "a tolerance is a ± half-width and cannot be negative");
+      return OptionalDouble.empty();
+    }
+    if (!Double.isFinite(halfWidth)) {
+      sink.report(
+          DiagnosticCode.OUT_OF_RANGE,
+          t.range(),
+          "the tolerance of '" + what + "' is too large to compute with");
       return OptionalDouble.empty();
     }
     return OptionalDouble.of(halfWidth);
