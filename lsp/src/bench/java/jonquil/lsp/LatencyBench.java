@@ -168,6 +168,7 @@ public final class LatencyBench {
       // parsed).
       List<Double> check = new ArrayList<>();
       List<Double> memoCheck = new ArrayList<>();
+      List<Double> bareParse = new ArrayList<>();
       jonquil.syntax.ParseMemo memo = new jonquil.syntax.ParseMemo();
       for (int i = 0; i < warmup + reps; i++) {
         big.flip();
@@ -178,11 +179,18 @@ public final class LatencyBench {
         long t1 = System.nanoTime();
         jonquil.Checker.check(w.withMemo(memo), List.of(big.file), jonquil.CheckOptions.EDITOR);
         long t2 = System.nanoTime();
+        jonquil.syntax.SpecParser.parse(new jonquil.source.SourceFile(big.file, big.text));
+        long t3 = System.nanoTime();
         if (i >= warmup) {
           check.add((t1 - t0) / 1e6);
           memoCheck.add((t2 - t1) / 1e6);
+          bareParse.add((t3 - t2) / 1e6);
         }
       }
+      // The floor every other figure is divided by: a bare parse of the same text, measured in
+      // this run, so a loaded or slower machine moves the figures and the floor together.
+      floorMs = median(bareParse);
+      report("floor: bare parse of the same spec", bareParse);
       List<Double> hover = big.hovers(warmup, reps);
       report("didChange after a pause -> publishDiagnostics", paused);
       report("last of 5 keystrokes 60 ms apart -> publish", burst);
@@ -394,16 +402,27 @@ public final class LatencyBench {
     }
   }
 
+  /** The bare-parse median of this run; 0 until measured, and then no ratio is printed. */
+  private static double floorMs;
+
+  private static double median(List<Double> millis) {
+    double[] sorted = millis.stream().mapToDouble(Double::doubleValue).sorted().toArray();
+    return sorted[(sorted.length - 1) / 2];
+  }
+
   private static void report(String what, List<Double> millis) {
     double[] sorted = millis.stream().mapToDouble(Double::doubleValue).sorted().toArray();
     double median = sorted[(sorted.length - 1) / 2];
     double p95 = sorted[(int) Math.ceil(0.95 * sorted.length) - 1];
+    String ratio =
+        floorMs > 0 ? String.format(Locale.ROOT, "   median/floor %5.2f", median / floorMs) : "";
     System.out.printf(
         Locale.ROOT,
-        "%-48s median %7.1f ms   p95 %7.1f ms   max %7.1f ms%n",
+        "%-48s median %7.1f ms   p95 %7.1f ms   max %7.1f ms%s%n",
         what,
         median,
         p95,
-        sorted[sorted.length - 1]);
+        sorted[sorted.length - 1],
+        ratio);
   }
 }
