@@ -67,7 +67,14 @@ class DocsTest {
     String guide = Files.readString(Repo.root().resolve("DEVELOPERS.md"));
     List<String> missing = new ArrayList<>();
     for (DiagnosticCode c : DiagnosticCode.values()) {
-      if (!guide.contains("| " + c.id() + " | `" + c.ruleName() + "` |")) {
+      if (!guide.contains(
+          "| "
+              + c.id()
+              + " | `"
+              + c.ruleName()
+              + "` | "
+              + c.severity().name().toLowerCase(java.util.Locale.ROOT)
+              + " |\n")) {
         missing.add(c.id());
       }
     }

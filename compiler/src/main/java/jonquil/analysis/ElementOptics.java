@@ -39,7 +39,7 @@ final class ElementOptics {
     this.surfaces = surfaces;
   }
 
-  Response respond(ResolvedElement e, Beam in) {
+  Response respond(ResolvedElement e, TracedBeam in) {
     double plane = e.number(Param.PLANE, "angle").orElse(0);
     return switch (e.kind()) {
       case POLARIZER -> {
@@ -90,7 +90,7 @@ final class ElementOptics {
     };
   }
 
-  private static Response aperture(ResolvedElement e, Beam in) {
+  private static Response aperture(ResolvedElement e, TracedBeam in) {
     double d = e.number(Param.DIAMETER, "diameter").orElse(Double.POSITIVE_INFINITY);
     if (in.mode().isEmpty()) {
       return Response.balance(in, Map.of("out", in), List.of())
@@ -102,7 +102,7 @@ final class ElementOptics {
         .withJones(scalar("out", f));
   }
 
-  private static Response through(Beam in, String port, Jones j) {
+  private static Response through(TracedBeam in, String port, Jones j) {
     return Response.balance(in, Map.of(port, in.with(in.light().transform(j))), List.of())
         .withJones(Map.of(port, j));
   }
@@ -157,7 +157,7 @@ final class ElementOptics {
    * A plate acting by its Jones matrix, whose two coated faces (when a coating is given) reflect
    * part of the light back as a ghost, summed incoherently like a window's.
    */
-  private Response coatedPlate(ResolvedElement e, Beam in, Jones j) {
+  private Response coatedPlate(ResolvedElement e, TracedBeam in, Jones j) {
     if (e.param(Param.COATING).isEmpty()) {
       return through(in, "out", j);
     }
@@ -168,14 +168,14 @@ final class ElementOptics {
             .orElse(new Complex(1.5, 0));
     SurfaceModel.Powers face = surfaces.surface(e, real(outside), inside, 0, in.wavelength());
     double[] pair = plate(face.rs(), face.ts(), face.rs(), face.ts(), 1);
-    Beam out = in.with(in.light().transform(j).scaled(pair[0]));
-    Beam back = in.with(in.light().scaled(pair[1]), in.frame().reflect(0, 0));
+    TracedBeam out = in.with(in.light().transform(j).scaled(pair[0]));
+    TracedBeam back = in.with(in.light().scaled(pair[1]), in.frame().reflect(0, 0));
     return Response.balance(
             in, Map.of("out", out), List.of(new Ghost("face reflections", back, true)))
         .withJones(Map.of("out", j.scaled(Math.sqrt(pair[0]))));
   }
 
-  private Response splitter(ResolvedElement e, Beam in, double plane) {
+  private Response splitter(ResolvedElement e, TracedBeam in, double plane) {
     double aoi = e.number(Param.AOI, "angle").orElse(Math.PI / 4);
     double tp;
     double ts;
@@ -199,13 +199,13 @@ final class ElementOptics {
     Jones reflect =
         Jones.reflection(
             new Complex(Math.sqrt(clamp(rp)), 0), new Complex(-Math.sqrt(clamp(rs)), 0), plane);
-    Beam reflected = in.with(in.light().transform(reflect), in.frame().reflect(aoi, plane));
+    TracedBeam reflected = in.with(in.light().transform(reflect), in.frame().reflect(aoi, plane));
     return Response.balance(
             in, Map.of("through", in.with(through), "reflected", reflected), List.of())
         .withJones(Map.of("through", pass, "reflected", reflect));
   }
 
-  private Response mirror(ResolvedElement e, Beam in, double plane) {
+  private Response mirror(ResolvedElement e, TracedBeam in, double plane) {
     double aoi = e.number(Param.AOI, "angle").orElse(0);
     Jones j;
     OptionalDouble r = e.number(Param.REFLECTANCE, "r");
@@ -248,7 +248,7 @@ final class ElementOptics {
    * A plate: two surfaces and the bulk, with the multiple reflections between them summed
    * incoherently (the usual model for a plate much thicker than the coherence length).
    */
-  private Response window(ResolvedElement e, Beam in, double plane) {
+  private Response window(ResolvedElement e, TracedBeam in, double plane) {
     double aoi = e.number(Param.AOI, "angle").orElse(0);
     double wl = in.wavelength();
     Symbol glass = e.ref(Param.MATERIAL, "material").orElseThrow();
@@ -271,9 +271,9 @@ final class ElementOptics {
     Jones reflect =
         Jones.reflection(
             new Complex(Math.sqrt(tP[1]), 0), new Complex(-Math.sqrt(tS[1]), 0), plane);
-    Beam reflected = in.with(in.light().transform(reflect), in.frame().reflect(aoi, plane));
+    TracedBeam reflected = in.with(in.light().transform(reflect), in.frame().reflect(aoi, plane));
     // The mode crosses the plate as two flat interfaces with the glass between (tilt neglected).
-    Beam out =
+    TracedBeam out =
         in.with(through)
             .in(after)
             .withMode(
@@ -298,7 +298,7 @@ final class ElementOptics {
     return new double[] {t, r};
   }
 
-  private Response interfaceSurface(ResolvedElement e, Beam in, double plane) {
+  private Response interfaceSurface(ResolvedElement e, TracedBeam in, double plane) {
     double aoi = e.number(Param.AOI, "angle").orElse(0);
     double wl = in.wavelength();
     Symbol from = e.ref(Param.FROM, "material").orElseThrow();
@@ -316,8 +316,8 @@ final class ElementOptics {
                 new Complex(-Math.sqrt(powers.rs()), 0),
                 plane)
             : Jones.reflection(c.rp(), c.rs(), plane);
-    Beam reflected = in.with(in.light().transform(reflect), in.frame().reflect(aoi, plane));
-    Beam out =
+    TracedBeam reflected = in.with(in.light().transform(reflect), in.frame().reflect(aoi, plane));
+    TracedBeam out =
         in.with(through).in(Medium.of(to)).withMode(in.mode().map(g -> g.intoMedium(n2.getReal())));
     return Response.balance(in, Map.of("through", out, "reflected", reflected), List.of())
         .withJones(Map.of("through", pass, "reflected", reflect))
@@ -335,17 +335,17 @@ final class ElementOptics {
   }
 
   /** A thin lens: two surfaces at normal incidence; their reflections head back as ghosts. */
-  private Response lens(ResolvedElement e, Beam in) {
+  private Response lens(ResolvedElement e, TracedBeam in) {
     double focal = e.number(Param.FOCAL, "focal").orElse(Double.POSITIVE_INFINITY);
     double clip = 1;
     OptionalDouble clear = e.number(Param.CLEAR_APERTURE, "diameter");
     if (clear.isPresent() && in.mode().isPresent()) {
       clip = Clipping.transmittedFraction(in.mode().get().radius(), clear.getAsDouble());
     }
-    Beam focused =
+    TracedBeam focused =
         in.withMode(in.mode().map(g -> g.throughThinLens(focal))).with(in.light().scaled(clip));
     Response r = lensSurfaces(e, focused);
-    Map<String, Beam> ports = r.ports();
+    Map<String, TracedBeam> ports = r.ports();
     double kept =
         in.power() > 0 && ports.containsKey("out") ? ports.get("out").power() / in.power() : 1;
     return Response.balance(in, ports, r.ghosts())
@@ -353,7 +353,7 @@ final class ElementOptics {
         .withJones(scalar("out", kept));
   }
 
-  private Response lensSurfaces(ResolvedElement e, Beam in) {
+  private Response lensSurfaces(ResolvedElement e, TracedBeam in) {
     Optional<Symbol> glass = e.ref(Param.MATERIAL, "material");
     if (glass.isEmpty() && e.param(Param.COATING).isEmpty()) {
       return Response.balance(
@@ -364,8 +364,8 @@ final class ElementOptics {
     Complex n = glass.map(g -> real(materials.index(g, wl))).orElse(new Complex(1.5, 0));
     SurfaceModel.Powers s1 = surfaces.surface(e, outside, n, 0, wl);
     double[] pair = plate(s1.rs(), s1.ts(), s1.rs(), s1.ts(), 1);
-    Beam out = in.with(in.light().scaled(pair[0]));
-    Beam back = in.with(in.light().scaled(pair[1]), in.frame().reflect(0, 0));
+    TracedBeam out = in.with(in.light().scaled(pair[0]));
+    TracedBeam back = in.with(in.light().scaled(pair[1]), in.frame().reflect(0, 0));
     return Response.balance(
         in, Map.of("out", out), List.of(new Ghost("surface reflections", back, true)));
   }
@@ -375,7 +375,7 @@ final class ElementOptics {
    * and s; with an even number of reflections the beam leaves parallel to its entry, in the same
    * frame. The uncoated faces lose their Fresnel reflections as ghosts.
    */
-  private Response rhomb(ResolvedElement e, Beam in) {
+  private Response rhomb(ResolvedElement e, TracedBeam in) {
     double wl = in.wavelength();
     Symbol glass = e.ref(Param.MATERIAL, "material").orElseThrow();
     Complex n = real(materials.index(glass, wl));
@@ -392,8 +392,8 @@ final class ElementOptics {
     Jones j = Jones.reflection(rp, rs, e.number(Param.AXIS, "angle").orElse(0));
     SurfaceModel.Powers face = SurfaceModel.Powers.of(Fresnel.at(outside, n, 0));
     double[] pair = plate(face.rs(), face.ts(), face.rs(), face.ts(), 1);
-    Beam out = in.with(in.light().transform(j).scaled(pair[0]));
-    Beam back = in.with(in.light().scaled(pair[1]), in.frame().reflect(0, 0));
+    TracedBeam out = in.with(in.light().transform(j).scaled(pair[0]));
+    TracedBeam back = in.with(in.light().scaled(pair[1]), in.frame().reflect(0, 0));
     return Response.balance(
             in, Map.of("out", out), List.of(new Ghost("face reflections", back, true)))
         .withJones(Map.of("out", j.scaled(Math.sqrt(pair[0]))));

@@ -3,4 +3,4 @@ package jonquil.analysis;
 /**
  * Light that leaves an element other than through a port: surface reflections, often heading back.
  */
-public record Ghost(String label, Beam beam, boolean backward) {}
+public record Ghost(String label, TracedBeam beam, boolean backward) {}

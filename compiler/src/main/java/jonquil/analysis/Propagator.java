@@ -70,10 +70,10 @@ final class Propagator {
             wavelengthOverride.orElse(
                 source.get().number(Param.WAVELENGTH, "wavelength").orElse(1e-6));
         pulses.put(start.symbol(), Pulses.of(source.get()));
-        List<Beam> beams =
+        List<TracedBeam> beams =
             SourceBeams.of(
                 source.get(), wavelengthOverride, materials.index(Medium.AMBIENT, wl).getReal());
-        double emitted = beams.stream().mapToDouble(Beam::power).sum();
+        double emitted = beams.stream().mapToDouble(TracedBeam::power).sum();
         sourcePower += emitted;
         record(start.symbol().name(), "out", start, beams);
         portAlias(start.symbol().name(), "out");
@@ -97,8 +97,8 @@ final class Propagator {
         surfaces);
   }
 
-  private void walk(ResolvedTrain.BeamPath path, int from, List<Beam> arriving) {
-    List<Beam> beams = arriving;
+  private void walk(ResolvedTrain.BeamPath path, int from, List<TracedBeam> arriving) {
+    List<TracedBeam> beams = arriving;
     ResolvedTrain.Element last = null;
     for (int i = from; i < path.steps().size(); i++) {
       ResolvedTrain.Step step = path.steps().get(i);
@@ -120,7 +120,7 @@ final class Propagator {
     if (last == null || beams.isEmpty()) {
       return;
     }
-    double leaving = beams.stream().mapToDouble(Beam::power).sum();
+    double leaving = beams.stream().mapToDouble(TracedBeam::power).sum();
     if (last.symbol().category() == Category.PROBE) {
       observed += leaving;
     } else {
@@ -136,10 +136,10 @@ final class Propagator {
     }
   }
 
-  private List<Beam> across(ResolvedTrain.Gap gap, List<Beam> beams) {
-    List<Beam> out = new ArrayList<>();
-    for (Beam b : beams) {
-      Beam in = gap.medium().map(m -> b.in(Medium.of(m))).orElse(b);
+  private List<TracedBeam> across(ResolvedTrain.Gap gap, List<TracedBeam> beams) {
+    List<TracedBeam> out = new ArrayList<>();
+    for (TracedBeam b : beams) {
+      TracedBeam in = gap.medium().map(m -> b.in(Medium.of(m))).orElse(b);
       double n = materials.index(in.medium(), in.wavelength()).getReal();
       // A medium change at the start of a gap is a flat interface for the beam's mode.
       in =
@@ -155,17 +155,18 @@ final class Propagator {
   }
 
   /** One element acting on every arriving line; continues with the beams at the exit port. */
-  private List<Beam> pass(ResolvedElement element, ResolvedTrain.Element placed, List<Beam> beams) {
+  private List<TracedBeam> pass(
+      ResolvedElement element, ResolvedTrain.Element placed, List<TracedBeam> beams) {
     String name = placed.symbol().name();
     double[] totals = budgetTotals.computeIfAbsent(name, k -> new double[3]);
     Map<String, Double> byPort = budgetPorts.computeIfAbsent(name, k -> new LinkedHashMap<>());
-    Map<String, List<Beam>> atPorts = new LinkedHashMap<>();
+    Map<String, List<TracedBeam>> atPorts = new LinkedHashMap<>();
     for (String port : element.kind().ports()) {
       atPorts.put(port, new ArrayList<>());
     }
     incident.put(name, value(name, "", placed, beams));
     double clippedMost = 0;
-    for (Beam b : beams) {
+    for (TracedBeam b : beams) {
       totals[0] += b.power();
       Response r = optics.respond(element, b);
       // The hover shows one matrix per port: the one for the first line that arrives.
@@ -203,12 +204,13 @@ final class Propagator {
       record(name, "", placed, beams);
       return List.of();
     }
-    for (Map.Entry<String, List<Beam>> e : atPorts.entrySet()) {
-      byPort.merge(e.getKey(), e.getValue().stream().mapToDouble(Beam::power).sum(), Double::sum);
+    for (Map.Entry<String, List<TracedBeam>> e : atPorts.entrySet()) {
+      byPort.merge(
+          e.getKey(), e.getValue().stream().mapToDouble(TracedBeam::power).sum(), Double::sum);
       record(name, e.getKey(), placed, e.getValue());
     }
     portAlias(name, placed.exitPort());
-    for (Map.Entry<String, List<Beam>> e : atPorts.entrySet()) {
+    for (Map.Entry<String, List<TracedBeam>> e : atPorts.entrySet()) {
       if (e.getKey().equals(placed.exitPort())) {
         continue;
       }
@@ -217,7 +219,7 @@ final class Propagator {
       if (branch != null) {
         walk(branch, 0, e.getValue());
       } else {
-        double p = e.getValue().stream().mapToDouble(Beam::power).sum();
+        double p = e.getValue().stream().mapToDouble(TracedBeam::power).sum();
         Vec3 arriving = beams.isEmpty() ? Vec3.Z : beams.get(0).frame().k();
         boolean backward =
             e.getValue().stream().anyMatch(b -> b.frame().k().dot(arriving) < -0.999);
@@ -234,7 +236,8 @@ final class Propagator {
     return atPorts.getOrDefault(placed.exitPort(), List.of());
   }
 
-  private void record(String element, String port, ResolvedTrain.Element placed, List<Beam> beams) {
+  private void record(
+      String element, String port, ResolvedTrain.Element placed, List<TracedBeam> beams) {
     String key = port.isEmpty() ? element : element + "." + port;
     PortValue v = value(element, port, placed, beams);
     Coherency total = portLight.merge(key, v.light(), Coherency::plus);
@@ -258,11 +261,11 @@ final class Propagator {
    * strongest line (exposure is judged on one beam size; lines usually share it).
    */
   private PortValue value(
-      String element, String port, ResolvedTrain.Element placed, List<Beam> beams) {
+      String element, String port, ResolvedTrain.Element placed, List<TracedBeam> beams) {
     Coherency sum = Coherency.ZERO;
     boolean vertical = false;
-    Beam strongest = null;
-    for (Beam b : beams) {
+    TracedBeam strongest = null;
+    for (TracedBeam b : beams) {
       sum = sum.plus(b.light().inFrameRotatedBy(b.frame().tableAngle()));
       vertical |= b.frame().vertical();
       if (strongest == null || b.power() > strongest.power()) {

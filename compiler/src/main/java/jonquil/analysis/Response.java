@@ -11,7 +11,7 @@ import jonquil.optics.Jones;
  * stops the light) and an interface's surface figures.
  */
 record Response(
-    Map<String, Beam> ports,
+    Map<String, TracedBeam> ports,
     double absorbed,
     List<Ghost> ghosts,
     double clipped,
@@ -23,7 +23,7 @@ record Response(
     jones = Map.copyOf(jones);
   }
 
-  Response(Map<String, Beam> ports, double absorbed, List<Ghost> ghosts) {
+  Response(Map<String, TracedBeam> ports, double absorbed, List<Ghost> ghosts) {
     this(ports, absorbed, ghosts, 0, Map.of(), Optional.empty());
   }
 
@@ -42,14 +42,14 @@ record Response(
     return new Response(ports, absorbed, ghosts, clipped, jones, Optional.of(figures));
   }
 
-  static Response absorbedAll(Beam in) {
+  static Response absorbedAll(TracedBeam in) {
     return new Response(Map.of(), in.power(), List.of());
   }
 
   /** Builds a response and books as absorbed whatever the ports and ghosts do not carry. */
-  static Response balance(Beam in, Map<String, Beam> ports, List<Ghost> ghosts) {
+  static Response balance(TracedBeam in, Map<String, TracedBeam> ports, List<Ghost> ghosts) {
     double out =
-        ports.values().stream().mapToDouble(Beam::power).sum()
+        ports.values().stream().mapToDouble(TracedBeam::power).sum()
             + ghosts.stream().mapToDouble(g -> g.beam().power()).sum();
     return new Response(ports, Math.max(0, in.power() - out), ghosts);
   }

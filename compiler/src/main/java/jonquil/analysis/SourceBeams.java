@@ -20,7 +20,7 @@ import jonquil.resolve.Value;
 final class SourceBeams {
   private SourceBeams() {}
 
-  static List<Beam> of(
+  static List<TracedBeam> of(
       ResolvedElement source, OptionalDouble wavelengthOverride, double ambientIndex) {
     List<double[]> lines = new ArrayList<>();
     if (!source.all(Param.LINE).isEmpty()) {
@@ -33,12 +33,12 @@ final class SourceBeams {
             source.number(Param.WAVELENGTH, "wavelength").orElse(0), averagePower(source)
           });
     }
-    List<Beam> beams = new ArrayList<>();
+    List<TracedBeam> beams = new ArrayList<>();
     for (int i = 0; i < lines.size(); i++) {
       double wavelength = wavelengthOverride.orElse(lines.get(i)[0]);
       Coherency light = state(source.param(Param.POLARIZATION), lines.get(i)[1]);
       beams.add(
-          new Beam(
+          new TracedBeam(
               source.symbol(),
               i,
               wavelength,

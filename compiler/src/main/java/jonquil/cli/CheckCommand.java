@@ -102,7 +102,7 @@ final class CheckCommand implements Callable<Integer> {
     } catch (ParameterException e) {
       throw e;
     } catch (RuntimeException | StackOverflowError e) {
-      Cli.reportInternalError(e, debug, err);
+      Commands.reportInternalError(e, debug, err);
       return ExitCode.TROUBLE.code();
     }
   }

@@ -83,7 +83,8 @@ class SafetyVerdictTest {
     TrainSolution s =
         Bench.solve(
             """
-            source src { wavelength 1064 nm; pulse_energy 1 mJ; pulse_duration 40 ns; repetition_rate 1 kHz; beam waist 1 mm }
+            source src { wavelength 1064 nm; pulse_energy 1 mJ; pulse_duration 40 ns; repetition_rate 1 kHz;
+              beam waist 1 mm }
             mirror m { reflectance 99 %; damage 10 J/cm2 for 10 ns at 1064 nm }
             dump d
             train t { src -> 10 mm -> m -> 10 mm -> d }
@@ -91,7 +92,8 @@ class SafetyVerdictTest {
     Result r =
         Bench.check(
             """
-            source src { wavelength 1064 nm; pulse_energy 1 mJ; pulse_duration 40 ns; repetition_rate 1 kHz; beam waist 1 mm }
+            source src { wavelength 1064 nm; pulse_energy 1 mJ; pulse_duration 40 ns; repetition_rate 1 kHz;
+              beam waist 1 mm }
             mirror m { reflectance 99 %; damage 10 J/cm2 for 10 ns at 1064 nm }
             dump d
             train t { src -> 10 mm -> m -> 10 mm -> d }

@@ -14,7 +14,7 @@ import java.util.concurrent.TimeUnit;
  */
 record CliProcess(int exitCode, byte[] out, byte[] err) {
   public static void main(String[] args) {
-    System.exit(Cli.run(args, System.out, System.err, Path.of("").toAbsolutePath()));
+    System.exit(Commands.run(args, System.out, System.err, Path.of("").toAbsolutePath()));
   }
 
   /** Runs {@code java [jvmOptions] CliProcess args} in {@code cwd} with {@code env} added. */

@@ -15,7 +15,7 @@ record CliRun(int exitCode, String out, String err) {
     ByteArrayOutputStream out = new ByteArrayOutputStream();
     ByteArrayOutputStream err = new ByteArrayOutputStream();
     int code =
-        Cli.run(
+        Commands.run(
             args,
             new PrintStream(out, true, StandardCharsets.UTF_8),
             new PrintStream(err, true, StandardCharsets.UTF_8),

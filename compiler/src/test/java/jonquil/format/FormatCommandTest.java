@@ -10,7 +10,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.attribute.FileTime;
-import jonquil.cli.Cli;
+import jonquil.cli.Commands;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -30,7 +30,7 @@ class FormatCommandTest {
     all[0] = "fmt";
     System.arraycopy(args, 0, all, 1, args.length);
     int code =
-        Cli.run(
+        Commands.run(
             all,
             new PrintStream(out, true, StandardCharsets.UTF_8),
             new PrintStream(err, true, StandardCharsets.UTF_8),

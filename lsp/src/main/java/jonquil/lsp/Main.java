@@ -1,7 +1,7 @@
 package jonquil.lsp;
 
 import java.nio.file.Path;
-import jonquil.cli.Cli;
+import jonquil.cli.Commands;
 
 /**
  * Entry point of lsp/target/jonquil.jar (`check` and `lsp`), assembled here because lsp sits on top
@@ -12,6 +12,6 @@ public final class Main {
 
   public static void main(String[] args) {
     System.exit(
-        Cli.run(args, System.out, System.err, Path.of("").toAbsolutePath(), new LspCommand()));
+        Commands.run(args, System.out, System.err, Path.of("").toAbsolutePath(), new LspCommand()));
   }
 }

@@ -15,8 +15,8 @@ import picocli.CommandLine.ParameterException;
  * The command line as a function from arguments and streams to an exit code. It never touches
  * System.out or System.exit, so the language server and tests can run it in-process.
  */
-public final class Cli {
-  private Cli() {}
+public final class Commands {
+  private Commands() {}
 
   /**
    * Runs one command line. {@code cwd} anchors relative paths; {@code extraSubcommands} (picocli
@@ -46,7 +46,7 @@ public final class Cli {
     // Set after adding subcommands: picocli hands the writers down only to those it already has.
     cli.setOut(new PrintWriter(new OutputStreamWriter(out, StandardCharsets.UTF_8), true));
     cli.setErr(new PrintWriter(new OutputStreamWriter(err, StandardCharsets.UTF_8), true));
-    cli.setParameterExceptionHandler(Cli::usageError);
+    cli.setParameterExceptionHandler(Commands::usageError);
     cli.setExecutionExceptionHandler(
         (e, commandLine, parseResult) -> {
           reportInternalError(e, Arrays.asList(args).contains("--debug"), err);
