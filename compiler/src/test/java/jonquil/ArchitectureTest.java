@@ -130,4 +130,69 @@ class ArchitectureTest {
         .accessField(System.class, "out")
         .check(classes);
   }
+
+  @Test
+  void theFormatterKnowsOnlySyntax() {
+    noClasses()
+        .that()
+        .resideInAPackage("jonquil.format..")
+        .should()
+        .dependOnClassesThat()
+        .resideInAnyPackage(
+            "jonquil.resolve..",
+            "jonquil.analysis..",
+            "jonquil.optics..",
+            "jonquil.safety..",
+            "jonquil.ide..",
+            "jonquil.cli..")
+        .check(classes);
+  }
+
+  @Test
+  void nothingBelowTheEditorFeaturesKnowsThem() {
+    noClasses()
+        .that()
+        .resideOutsideOfPackages("jonquil.ide..")
+        .should()
+        .dependOnClassesThat()
+        .resideInAnyPackage("jonquil.ide..")
+        .check(classes);
+  }
+
+  /**
+   * The editor features read what the checker computed: they compute no physics (no Fresnel, thin
+   * films, beam transfer, irradiance or safety limits; a source's Gaussian beam is read as a value)
+   * and never parse again what the checker parsed.
+   */
+  @Test
+  void theEditorFeaturesComputeNoPhysicsAndParseNothing() {
+    noClasses()
+        .that()
+        .resideInAPackage("jonquil.ide..")
+        .should()
+        .dependOnClassesThat()
+        .resideInAnyPackage("jonquil.cli..", "jonquil.format..")
+        .orShould()
+        .dependOnClassesThat()
+        .haveFullyQualifiedName("jonquil.optics.beam.Abcd")
+        .orShould()
+        .dependOnClassesThat()
+        .haveFullyQualifiedName("jonquil.optics.beam.Clipping")
+        .orShould()
+        .dependOnClassesThat()
+        .haveFullyQualifiedName("jonquil.optics.beam.Irradiance")
+        .orShould()
+        .dependOnClassesThat()
+        .haveFullyQualifiedName("jonquil.optics.Fresnel")
+        .orShould()
+        .dependOnClassesThat()
+        .haveFullyQualifiedName("jonquil.optics.ThinFilm")
+        .orShould()
+        .dependOnClassesThat()
+        .haveFullyQualifiedName("jonquil.syntax.SpecParser")
+        .orShould()
+        .dependOnClassesThat()
+        .haveFullyQualifiedName("jonquil.safety.MpeCalculator")
+        .check(classes);
+  }
 }

@@ -25,7 +25,6 @@ import jonquil.syntax.Property;
 import jonquil.syntax.RequireDecl;
 import jonquil.syntax.Requirement;
 import jonquil.syntax.SpecFile;
-import jonquil.syntax.SpecParser;
 import jonquil.syntax.Token;
 import jonquil.syntax.Tokens;
 import jonquil.syntax.TrainDecl;
@@ -49,11 +48,11 @@ final class SemanticTokens {
 
   static List<SemanticToken> of(Result r, Path file) {
     SourceFile source = r.files().get(file);
-    if (source == null) {
+    SpecFile tree = OwningModels.tree(r, file).orElse(null);
+    if (source == null || tree == null) {
       return List.of();
     }
     SemanticTokens t = new SemanticTokens(source.text(), SymbolUses.of(r), file);
-    SpecFile tree = SpecParser.parse(source).ast();
     tree.comments().forEach(t::comment);
     t.tree(tree);
     t.lexical();
