@@ -26,12 +26,12 @@ public record Result(
     Map<Path, ResolvedModel> models,
     Map<Path, TrainSolution> solutions) {
   public Result {
-    files = Map.copyOf(files);
-    trees = Map.copyOf(trees);
+    files = byPath(files);
+    trees = byPath(trees);
     diagnostics = diagnostics.stream().sorted(Diagnostic.ORDER).toList();
     requirements = List.copyOf(requirements);
-    models = Map.copyOf(models);
-    solutions = Map.copyOf(solutions);
+    models = byPath(models);
+    solutions = byPath(solutions);
   }
 
   /** A result without trees or resolved models, e.g. when nothing could be read. */
@@ -58,5 +58,13 @@ public record Result(
     return count(Severity.ERROR) > 0
         || count(RequirementStatus.FAIL) > 0
         || (strict && count(Severity.WARNING) > 0);
+  }
+
+  /**
+   * Per-file maps iterate in path order, so outputs list files the same way on every run
+   * (Map.copyOf's order changes from one JVM to the next).
+   */
+  private static <V> Map<Path, V> byPath(Map<Path, V> m) {
+    return java.util.Collections.unmodifiableMap(new java.util.TreeMap<>(m));
   }
 }

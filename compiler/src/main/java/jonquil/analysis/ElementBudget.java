@@ -6,6 +6,6 @@ import java.util.Map;
 public record ElementBudget(
     String element, double in, Map<String, Double> out, double absorbed, double ghosts) {
   public ElementBudget {
-    out = Map.copyOf(out);
+    out = jonquil.source.InOrder.copyOf(out);
   }
 }

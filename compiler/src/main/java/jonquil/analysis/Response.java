@@ -18,9 +18,9 @@ record Response(
     Map<String, Jones> jones,
     Optional<SurfaceAtAngle> surface) {
   Response {
-    ports = Map.copyOf(ports);
+    ports = jonquil.source.InOrder.copyOf(ports);
     ghosts = List.copyOf(ghosts);
-    jones = Map.copyOf(jones);
+    jones = jonquil.source.InOrder.copyOf(jones);
   }
 
   Response(Map<String, TracedBeam> ports, double absorbed, List<Ghost> ghosts) {

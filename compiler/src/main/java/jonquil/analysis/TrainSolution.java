@@ -21,11 +21,15 @@ public record TrainSolution(
     Map<String, PortJones> jones,
     Map<String, SurfaceAtAngle> surfaces) {
 
+  /**
+   * Maps keep the order the propagation filled them in (the order light travels the paths), so
+   * every output lists them the same way on every run.
+   */
   public TrainSolution {
-    jones = Map.copyOf(jones);
-    surfaces = Map.copyOf(surfaces);
-    ports = Map.copyOf(ports);
-    incident = Map.copyOf(incident);
+    jones = jonquil.source.InOrder.copyOf(jones);
+    surfaces = jonquil.source.InOrder.copyOf(surfaces);
+    ports = jonquil.source.InOrder.copyOf(ports);
+    incident = jonquil.source.InOrder.copyOf(incident);
     budgets = List.copyOf(budgets);
     stray = List.copyOf(stray);
     clips = List.copyOf(clips);

@@ -12,7 +12,7 @@ import java.util.OptionalDouble;
 public record ResolvedElement(
     Symbol symbol, ElementKind kind, Map<String, List<Value.Group>> params) {
   public ResolvedElement {
-    params = Map.copyOf(params);
+    params = jonquil.source.InOrder.copyOf(params);
   }
 
   public Optional<Value.Group> param(Param p) {

@@ -21,8 +21,8 @@ public record ResolvedModel(
     List<Diagnostic> diagnostics) {
 
   public ResolvedModel {
-    scopes = Map.copyOf(scopes);
-    elements = Map.copyOf(elements);
+    scopes = jonquil.source.InOrder.copyOf(scopes);
+    elements = jonquil.source.InOrder.copyOf(elements);
     trains = List.copyOf(trains);
     requirements = List.copyOf(requirements);
     references = List.copyOf(references);

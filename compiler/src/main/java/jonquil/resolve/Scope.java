@@ -8,7 +8,7 @@ import java.util.Optional;
 /** The names visible in one file: its own declarations and those of the files it uses. */
 public record Scope(Map<String, Symbol> symbols) {
   public Scope {
-    symbols = Map.copyOf(symbols);
+    symbols = jonquil.source.InOrder.copyOf(symbols);
   }
 
   public Optional<Symbol> lookup(String name) {

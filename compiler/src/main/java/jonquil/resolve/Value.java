@@ -39,7 +39,7 @@ public sealed interface Value {
   /** Named parts of one parameter's value: slot name to value, plus repeated items in order. */
   record Group(Map<String, Value> slots, List<Group> items, TextRange range) implements Value {
     public Group {
-      slots = Map.copyOf(slots);
+      slots = jonquil.source.InOrder.copyOf(slots);
       items = List.copyOf(items);
     }
 
