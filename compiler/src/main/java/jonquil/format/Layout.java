@@ -37,15 +37,15 @@ final class Layout {
   private void run() {
     for (int i = 0; i < tokens.size(); i++) {
       WrittenToken t = tokens.get(i);
-      switch (t.kind()) {
-        case NEWLINE -> {
+      switch (t.kind().role()) {
+        case LINE_BREAK -> {
           lineBreaks++;
           if (!(inTrain && continuesPath(i))) {
             flush();
           }
         }
-        case SEMICOLON -> flush(); // ';' is a line break written inline
-        case LBRACE -> {
+        case STATEMENT_END -> flush(); // ';' is a line break written inline
+        case BLOCK_OPEN -> {
           add(t);
           inTrain =
               statement.stream()
@@ -57,13 +57,13 @@ final class Layout {
           out.set(out.size() - 1, withOpensBlock(out.get(out.size() - 1)));
           depth = 1;
         }
-        case RBRACE -> {
+        case BLOCK_CLOSE -> {
           flush();
           depth = 0;
           inTrain = false;
           close(t);
         }
-        case LINE_COMMENT, BLOCK_COMMENT, UNTERMINATED_COMMENT -> {
+        case COMMENT -> {
           if (statement.isEmpty()
               && !t.startsLine()
               && !out.isEmpty()
@@ -74,31 +74,8 @@ final class Layout {
             add(t);
           }
         }
-        case IDENTIFIER,
-            KEYWORD,
-            NUMBER,
-            STRING,
-            WHITESPACE,
-            ARROW,
-            RANGE,
-            PLUS_MINUS,
-            COMPARISON,
-            EQUALS,
-            LPAREN,
-            RPAREN,
-            COMMA,
-            DOT,
-            SLASH,
-            STAR,
-            MIDDOT,
-            CARET,
-            PERCENT,
-            DEGREE,
-            PLUS,
-            MINUS,
-            UNTERMINATED_STRING,
-            BAD_CHARACTER ->
-            add(t);
+        case NAME, KEYWORD, NUMBER, STRING, OPERATOR, UNIT_OPERATOR, SIGN, PUNCTUATION -> add(t);
+        case BLANK, BAD -> add(t);
       }
     }
     flush();

@@ -81,37 +81,10 @@ record CursorContext(
         && tokens.get(tokens.size() - 2).kind() == TokenKind.UNTERMINATED_STRING) {
       return true; // an escape begun at the cursor: the lexer leaves the '\\' outside the string
     }
-    return switch (last.kind()) {
-      case LINE_COMMENT, UNTERMINATED_COMMENT, UNTERMINATED_STRING -> true;
-      case IDENTIFIER,
-          KEYWORD,
-          NUMBER,
-          STRING,
-          BLOCK_COMMENT,
-          NEWLINE,
-          WHITESPACE,
-          ARROW,
-          RANGE,
-          PLUS_MINUS,
-          COMPARISON,
-          EQUALS,
-          LBRACE,
-          RBRACE,
-          LPAREN,
-          RPAREN,
-          COMMA,
-          SEMICOLON,
-          DOT,
-          SLASH,
-          STAR,
-          MIDDOT,
-          CARET,
-          PERCENT,
-          DEGREE,
-          PLUS,
-          MINUS,
-          BAD_CHARACTER ->
-          false;
+    // A token that runs on to its line's end or the text's end takes in what is typed after it.
+    return switch (last.kind().ending()) {
+      case LINE_END, UNTERMINATED -> true;
+      case CLOSED -> false;
     };
   }
 

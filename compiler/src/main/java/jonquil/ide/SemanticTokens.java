@@ -169,34 +169,14 @@ final class SemanticTokens {
   private void lexical() {
     for (Token l : Tokens.scan(text)) {
       SemanticToken.Type type =
-          switch (l.kind()) {
+          switch (l.kind().role()) {
             case KEYWORD -> KEYWORD;
-            case ARROW, RANGE, PLUS_MINUS, COMPARISON, EQUALS -> OPERATOR;
+            case OPERATOR -> OPERATOR;
             case NUMBER -> NUMBER;
-            case STRING, UNTERMINATED_STRING -> STRING;
-            case IDENTIFIER,
-                LINE_COMMENT,
-                BLOCK_COMMENT,
-                UNTERMINATED_COMMENT,
-                NEWLINE,
-                WHITESPACE,
-                LBRACE,
-                RBRACE,
-                LPAREN,
-                RPAREN,
-                COMMA,
-                SEMICOLON,
-                DOT,
-                SLASH,
-                STAR,
-                MIDDOT,
-                CARET,
-                PERCENT,
-                DEGREE,
-                PLUS,
-                MINUS,
-                BAD_CHARACTER ->
-                null;
+            case STRING -> STRING;
+            case NAME, COMMENT -> null; // the tree's names and comments were added first
+            case BLANK, LINE_BREAK, STATEMENT_END, BLOCK_OPEN, BLOCK_CLOSE -> null;
+            case UNIT_OPERATOR, SIGN, PUNCTUATION, BAD -> null;
           };
       if (type != null) {
         add(l.range(), type, false);
