@@ -196,28 +196,12 @@ final class SpecLoader {
     }
     Path target = file.getParent().resolve(relative).normalize();
     if (!target.startsWith(workspace.root())) {
-      report(
-          file,
-          DiagnosticCode.USE_ESCAPES_ROOT,
-          use,
-          "'"
-              + written
-              + "' leads outside the project root '"
-              + workspace.root().getFileName()
-              + "'; keep used files inside the project");
+      report(file, DiagnosticCode.USE_ESCAPES_ROOT, use, outsideRoot(written, ""));
       return null;
     }
     if (!workspace.contains(target)) {
       // Say nothing of where the link leads: the target's name or text is none of this project's.
-      report(
-          file,
-          DiagnosticCode.USE_ESCAPES_ROOT,
-          use,
-          "'"
-              + written
-              + "' leads outside the project root '"
-              + workspace.root().getFileName()
-              + "' through a link; keep used files inside the project");
+      report(file, DiagnosticCode.USE_ESCAPES_ROOT, use, outsideRoot(written, " through a link"));
       return null;
     }
     if (!workspace.reader().exists(target)) {
@@ -329,5 +313,18 @@ final class SpecLoader {
 
   private void report(Path file, DiagnosticCode code, UseDecl use, String message) {
     diagnostics.add(Diagnostic.of(code, file, use.targetRange(), message));
+  }
+
+  /**
+   * Why a used path that leaves the project root is refused; {@code how} it leaves, if not plainly.
+   */
+  private String outsideRoot(String written, String how) {
+    return "'"
+        + written
+        + "' leads outside the project root '"
+        + workspace.root().getFileName()
+        + "'"
+        + how
+        + "; keep used files inside the project";
   }
 }

@@ -167,12 +167,7 @@ final class ElementOptics {
             .map(m -> real(materials.index(m, in.wavelength())))
             .orElse(new Complex(1.5, 0));
     SurfaceModel.Powers face = surfaces.surface(e, real(outside), inside, 0, in.wavelength());
-    double[] pair = plate(face.rs(), face.ts(), face.rs(), face.ts(), 1);
-    TracedBeam out = in.with(in.light().transform(j).scaled(pair[0]));
-    TracedBeam back = in.with(in.light().scaled(pair[1]), in.frame().reflect(0, 0));
-    return Response.balance(
-            in, Map.of("out", out), List.of(new Ghost("face reflections", back, true)))
-        .withJones(Map.of("out", j.scaled(Math.sqrt(pair[0]))));
+    return betweenFaces(in, j, face);
   }
 
   private Response splitter(ResolvedElement e, TracedBeam in, double plane) {
@@ -288,6 +283,19 @@ final class ElementOptics {
   }
 
   /**
+   * Through two like faces with {@code j} between them; what the faces reflect heads back as a
+   * ghost.
+   */
+  private static Response betweenFaces(TracedBeam in, Jones j, SurfaceModel.Powers face) {
+    double[] pair = plate(face.rs(), face.ts(), face.rs(), face.ts(), 1);
+    TracedBeam out = in.with(in.light().transform(j).scaled(pair[0]));
+    TracedBeam back = in.with(in.light().scaled(pair[1]), in.frame().reflect(0, 0));
+    return Response.balance(
+            in, Map.of("out", out), List.of(new Ghost("face reflections", back, true)))
+        .withJones(Map.of("out", j.scaled(Math.sqrt(pair[0]))));
+  }
+
+  /**
    * Incoherent plate: {transmittance, reflectance} from the two surfaces and the internal
    * transmittance τ.
    */
@@ -322,7 +330,7 @@ final class ElementOptics {
     return Response.balance(in, Map.of("through", out, "reflected", reflected), List.of())
         .withJones(Map.of("through", pass, "reflected", reflect))
         .withSurface(
-            SurfaceAtAngle.of(
+            new SurfaceAtAngle(
                 wl,
                 aoi,
                 n1,
@@ -391,12 +399,7 @@ final class ElementOptics {
     }
     Jones j = Jones.reflection(rp, rs, e.number(Param.AXIS, "angle").orElse(0));
     SurfaceModel.Powers face = SurfaceModel.Powers.of(Fresnel.at(outside, n, 0));
-    double[] pair = plate(face.rs(), face.ts(), face.rs(), face.ts(), 1);
-    TracedBeam out = in.with(in.light().transform(j).scaled(pair[0]));
-    TracedBeam back = in.with(in.light().scaled(pair[1]), in.frame().reflect(0, 0));
-    return Response.balance(
-            in, Map.of("out", out), List.of(new Ghost("face reflections", back, true)))
-        .withJones(Map.of("out", j.scaled(Math.sqrt(pair[0]))));
+    return betweenFaces(in, j, face);
   }
 
   /** The real part alone: interfaces of weakly absorbing glass are treated as lossless. */

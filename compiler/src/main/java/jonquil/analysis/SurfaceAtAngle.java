@@ -17,30 +17,19 @@ public record SurfaceAtAngle(
     double rs,
     double rp,
     double ts,
-    double tp,
-    OptionalDouble brewster,
-    OptionalDouble critical) {
+    double tp) {
 
-  /**
-   * The bare-index angles: Brewster tan θB = n2/n1; critical sin θc = n2/n1 when n2 < n1 (real
-   * parts).
-   */
-  static SurfaceAtAngle of(
-      double wavelength,
-      double aoi,
-      Complex n1,
-      Complex n2,
-      boolean coated,
-      double rs,
-      double rp,
-      double ts,
-      double tp) {
+  /** Brewster's angle of the bare indices, tan θB = n2/n1 (real parts). */
+  public OptionalDouble brewster() {
     double a = n1.getReal();
     double b = n2.getReal();
-    OptionalDouble brewster =
-        a > 0 && b > 0 ? OptionalDouble.of(Math.atan2(b, a)) : OptionalDouble.empty();
-    OptionalDouble critical =
-        a > 0 && b > 0 && b < a ? OptionalDouble.of(Math.asin(b / a)) : OptionalDouble.empty();
-    return new SurfaceAtAngle(wavelength, aoi, n1, n2, coated, rs, rp, ts, tp, brewster, critical);
+    return a > 0 && b > 0 ? OptionalDouble.of(Math.atan2(b, a)) : OptionalDouble.empty();
+  }
+
+  /** The critical angle of the bare indices, sin θc = n2/n1 when n2 &lt; n1 (real parts). */
+  public OptionalDouble critical() {
+    double a = n1.getReal();
+    double b = n2.getReal();
+    return a > 0 && b > 0 && b < a ? OptionalDouble.of(Math.asin(b / a)) : OptionalDouble.empty();
   }
 }

@@ -16,10 +16,10 @@ import jonquil.diag.Diagnostic;
 import jonquil.diag.DiagnosticCode;
 import jonquil.source.ProjectRoot;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.ParameterException;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code jonquil check}: the CI gate and the one command people run by hand. */
@@ -77,17 +77,9 @@ final class CheckCommand implements Callable<Integer> {
   @Option(names = "--debug", description = "Print the stack trace of an internal error.")
   boolean debug;
 
-  @Option(
-      names = {"-h", "--help"},
-      usageHelp = true,
-      description = "Show this help and exit.")
-  boolean help;
+  @Mixin HelpOption help;
 
-  @Parameters(
-      paramLabel = "PATH",
-      arity = "1..*",
-      description = "A .jonq file, or a directory: every .jonq file below it, in sorted order.")
-  List<String> paths = new ArrayList<>();
+  @Mixin SpecPaths specPaths;
 
   CheckCommand(PrintStream out, PrintStream err, Path cwd) {
     this.out = out;
@@ -109,7 +101,7 @@ final class CheckCommand implements Callable<Integer> {
 
   private ExitCode check() {
     Path projectRoot = projectRoot();
-    Inputs inputs = Inputs.collect(paths, cwd);
+    Inputs inputs = Inputs.collect(specPaths.paths, cwd);
     List<String> problems = new ArrayList<>(inputs.problems());
     Result result = new Result(Map.of(), List.of(), List.of());
     if (!inputs.files().isEmpty()) {
@@ -133,7 +125,7 @@ final class CheckCommand implements Callable<Integer> {
   private Path projectRoot() {
     if (root == null) {
       try {
-        return ProjectRoot.discover(cwd.resolve(paths.get(0)), cwd);
+        return ProjectRoot.discover(cwd.resolve(specPaths.paths.get(0)), cwd);
       } catch (InvalidPathException e) {
         return cwd; // the argument is reported as a problem of its own
       }

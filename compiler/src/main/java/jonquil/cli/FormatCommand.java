@@ -17,10 +17,10 @@ import jonquil.format.Formatter;
 import jonquil.source.SourceFile;
 import jonquil.syntax.SpecParser;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.ParameterException;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /**
@@ -63,17 +63,9 @@ final class FormatCommand implements Callable<Integer> {
       description = "Print the formatted text instead of rewriting the files.")
   boolean stdout;
 
-  @Option(
-      names = {"-h", "--help"},
-      usageHelp = true,
-      description = "Show this help and exit.")
-  boolean help;
+  @Mixin HelpOption help;
 
-  @Parameters(
-      paramLabel = "PATH",
-      arity = "1..*",
-      description = "A .jonq file, or a directory: every .jonq file below it, in sorted order.")
-  List<String> paths = new ArrayList<>();
+  @Mixin SpecPaths specPaths;
 
   FormatCommand(PrintStream out, PrintStream err, Path cwd) {
     this.out = out;
@@ -87,7 +79,7 @@ final class FormatCommand implements Callable<Integer> {
       throw new ParameterException(
           spec.commandLine(), "--check and --stdout cannot be used together");
     }
-    Inputs inputs = Inputs.collect(paths, cwd);
+    Inputs inputs = Inputs.collect(specPaths.paths, cwd);
     List<String> problems = new ArrayList<>(inputs.problems());
     boolean findings = false;
     for (Path file : inputs.files()) {

@@ -36,32 +36,27 @@ public final class Jones {
     this.dIm = dIm;
   }
 
-  /** The matrix [[a, b], [c, d]] from real and imaginary parts; rejects NaN and infinities. */
-  public static Jones of(
-      double aRe,
-      double aIm,
-      double bRe,
-      double bIm,
-      double cRe,
-      double cIm,
-      double dRe,
-      double dIm) {
-    if (!(Double.isFinite(aRe)
-        && Double.isFinite(aIm)
-        && Double.isFinite(bRe)
-        && Double.isFinite(bIm)
-        && Double.isFinite(cRe)
-        && Double.isFinite(cIm)
-        && Double.isFinite(dRe)
-        && Double.isFinite(dIm))) {
-      throw new IllegalArgumentException("Jones matrix entries must be finite");
+  /** The matrix [[a, b], [c, d]]; rejects NaN and infinities. */
+  public static Jones of(Complex a, Complex b, Complex c, Complex d) {
+    for (Complex entry : new Complex[] {a, b, c, d}) {
+      if (!Double.isFinite(entry.getReal()) || !Double.isFinite(entry.getImaginary())) {
+        throw new IllegalArgumentException("Jones matrix entries must be finite");
+      }
     }
-    return new Jones(aRe, aIm, bRe, bIm, cRe, cIm, dRe, dIm);
+    return new Jones(
+        a.getReal(),
+        a.getImaginary(),
+        b.getReal(),
+        b.getImaginary(),
+        c.getReal(),
+        c.getImaginary(),
+        d.getReal(),
+        d.getImaginary());
   }
 
   /** diag(p, s): independent complex factors on x' and y'. */
   public static Jones diagonal(double pRe, double pIm, double sRe, double sIm) {
-    return of(pRe, pIm, 0, 0, 0, 0, sRe, sIm);
+    return of(new Complex(pRe, pIm), Complex.ZERO, Complex.ZERO, new Complex(sRe, sIm));
   }
 
   /** R(θ) = [[cos θ, −sin θ], [sin θ, cos θ]]. */

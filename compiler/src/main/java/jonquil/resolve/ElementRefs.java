@@ -62,15 +62,15 @@ record ElementRefs(Sink sink, Scope scope) {
     String name = ref.name().text();
     String port = ref.port().get().text();
     List<String> ports = kind.ports();
+    String element = kind.word() + " '" + name + "'";
     if (ports.size() <= 1) {
       sink.report(
           jonquil.diag.DiagnosticCode.PORT_ON_ELEMENT_WITHOUT_PORTS,
           ref.port().get().range(),
-          kind.word()
-              + " '"
-              + name
-              + "' "
-              + (ports.isEmpty() ? "stops the beam and has no output port" : "has a single output")
+          element
+              + (ports.isEmpty()
+                  ? " stops the beam and has no output port"
+                  : " has a single output")
               + "; write '"
               + name
               + "' without a port");
@@ -81,10 +81,8 @@ record ElementRefs(Sink sink, Scope scope) {
       sink.report(
           jonquil.diag.DiagnosticCode.UNKNOWN_PORT,
           ref.port().get().range(),
-          kind.word()
-              + " '"
-              + name
-              + "' has no port '"
+          element
+              + " has no port '"
               + port
               + "'"
               + close

@@ -123,36 +123,27 @@ final class RequirementResolver {
         check.places().stream().anyMatch(p -> p instanceof Requirement.Everywhere);
     boolean hasBetween = check.places().stream().anyMatch(p -> p instanceof Requirement.Between);
     TextRange where = check.measure().range();
-    switch (m.where()) {
-      case AT -> {
-        if (!hasAt) {
-          sink.report(
-              DiagnosticCode.MISSING_PLACE,
-              where,
-              "'" + m.word() + "' is measured at a place: add 'at' and a name");
-        }
-        unexpected(check, hasEverywhere, hasBetween, m);
-      }
-      case AT_OR_EVERYWHERE -> {
-        if (!hasAt && !hasEverywhere) {
-          sink.report(
-              DiagnosticCode.MISSING_PLACE,
-              where,
-              "'" + m.word() + "' needs a place: add 'at' and a name, or 'everywhere'");
-        }
-        unexpected(check, false, hasBetween, m);
-      }
-      case BETWEEN -> {
-        if (!hasBetween) {
-          sink.report(
-              DiagnosticCode.MISSING_PLACE,
-              where,
-              "'" + m.word() + "' is measured between two places: add 'from' a name 'to' a name");
-        }
-        unexpected(check, hasEverywhere || hasAt, false, m);
-      }
-      case NONE -> unexpected(check, hasAt, hasBetween, m);
-      case OPTIONAL_AT -> unexpected(check, hasEverywhere, hasBetween, m);
+    String missingPlace = // what to add, or null when the places given suffice
+        switch (m.where()) {
+          case AT -> hasAt ? null : "is measured at a place: add 'at' and a name";
+          case AT_OR_EVERYWHERE ->
+              hasAt || hasEverywhere ? null : "needs a place: add 'at' and a name, or 'everywhere'";
+          case BETWEEN ->
+              hasBetween ? null : "is measured between two places: add 'from' a name 'to' a name";
+          case NONE, OPTIONAL_AT -> null;
+        };
+    if (missingPlace != null) {
+      sink.report(DiagnosticCode.MISSING_PLACE, where, "'" + m.word() + "' " + missingPlace);
+    }
+    boolean foreignPlace =
+        switch (m.where()) {
+          case AT, OPTIONAL_AT -> hasEverywhere || hasBetween;
+          case AT_OR_EVERYWHERE -> hasBetween;
+          case BETWEEN -> hasEverywhere || hasAt;
+          case NONE -> hasAt || hasBetween;
+        };
+    if (foreignPlace) {
+      unexpected(check, m);
     }
     if (check.places().stream().filter(p -> p instanceof Requirement.At).count() > 1) {
       sink.report(
@@ -162,10 +153,7 @@ final class RequirementResolver {
     }
   }
 
-  private void unexpected(Requirement.Check check, boolean flagA, boolean flagB, Measure m) {
-    if (!flagA && !flagB) {
-      return;
-    }
+  private void unexpected(Requirement.Check check, Measure m) {
     for (Requirement.Place p : check.places()) {
       boolean bad =
           switch (m.where()) {

@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
+import java.util.function.Predicate;
 import jonquil.diag.DiagnosticCode;
 import jonquil.diag.Edit;
 import jonquil.diag.Fix;
@@ -151,8 +152,7 @@ final class ValueChecker {
 
   private Optional<Value> value(Shape leaf, Arg arg, String what) {
     if (leaf instanceof Shape.Quantity q) {
-      return quantity((Arg.QuantityArg) arg, q.dimensions(), q.bounds(), q.example(), what)
-          .map(v -> v);
+      return quantity((Arg.QuantityArg) arg, q, what).map(v -> v);
     } else if (leaf instanceof Shape.Ratio r) {
       return ratio((Arg.QuantityArg) arg, r.bounds(), what).map(v -> v);
     } else if (leaf instanceof Shape.PowerRatio r) {
@@ -176,20 +176,8 @@ final class ValueChecker {
   }
 
   private Optional<Value> span(Arg.RangeArg arg, Shape.Span s, String what) {
-    Optional<Value.Num> low =
-        quantity(
-            (Arg.QuantityArg) arg.low(),
-            s.low().dimensions(),
-            s.low().bounds(),
-            s.low().example(),
-            what);
-    Optional<Value.Num> high =
-        quantity(
-            (Arg.QuantityArg) arg.high(),
-            s.high().dimensions(),
-            s.high().bounds(),
-            s.high().example(),
-            what);
+    Optional<Value.Num> low = quantity((Arg.QuantityArg) arg.low(), s.low(), what);
+    Optional<Value.Num> high = quantity((Arg.QuantityArg) arg.high(), s.high(), what);
     if (low.isEmpty() || high.isEmpty()) {
       return Optional.empty();
     }
@@ -202,6 +190,10 @@ final class ValueChecker {
     }
     return Optional.of(
         new Value.Group(Map.of("low", low.get(), "high", high.get()), List.of(), arg.range()));
+  }
+
+  private Optional<Value.Num> quantity(Arg.QuantityArg a, Shape.Quantity q, String what) {
+    return quantity(a, q.dimensions(), q.bounds(), q.example(), what);
   }
 
   /** A dimensioned quantity, converted to SI and checked against its bounds. */
@@ -256,11 +248,7 @@ final class ValueChecker {
     }
     if (!Double.isFinite(si)) {
       // Finite as written but not in SI ('1e308 kW'); bounds open to infinity would let it pass.
-      sink.report(
-          DiagnosticCode.OUT_OF_RANGE,
-          a.range(),
-          "'" + what + "' of '" + written(a) + "' is too large to compute with");
-      return Optional.empty();
+      return outOfRange(a, "'" + what + "' of '" + written(a) + "' is too large to compute with");
     }
     if (!bounds.contains(si)) {
       if (bounds.equals(KindTables.WAVELENGTH)) {
@@ -339,18 +327,17 @@ final class ValueChecker {
 
   /** A fraction: '95 %', '200 ppm' or a plain number from 0 to 1. */
   Optional<Value.Num> ratio(Arg.QuantityArg a, Bounds bounds, String what) {
-    Optional<Unit> unit = unitOf(a);
-    if (unit == null) {
+    OptionalDouble plain =
+        plainSi(
+            a,
+            u -> u.dimension().isDimensionless() && u.scale() == Scale.LINEAR,
+            what,
+            "a fraction, written like '95 %'");
+    if (plain.isEmpty()) {
       return Optional.empty();
     }
-    double si = a.number().value();
-    if (unit.isPresent()) {
-      Unit u = unit.get();
-      if (!u.dimension().isDimensionless() || u.scale() != Scale.LINEAR) {
-        return misfit(a, what, "a fraction, written like '95 %'");
-      }
-      si = u.toSi(si);
-    } else if (!bounds.contains(si) && bounds.contains(si / 100)) {
+    double si = plain.getAsDouble();
+    if (a.unit().isEmpty() && !bounds.contains(si) && bounds.contains(si / 100)) {
       TextRange at = new TextRange(a.number().range().end(), a.number().range().end());
       sink.report(
           DiagnosticCode.OUT_OF_RANGE,
@@ -364,55 +351,43 @@ final class ValueChecker {
           Double.isFinite(bounds.max())
               ? "between " + percent(bounds.min()) + " and " + percent(bounds.max())
               : "zero or more";
-      sink.report(
-          DiagnosticCode.OUT_OF_RANGE,
-          a.range(),
-          "'" + what + "' must be " + allowed + "; got '" + written(a) + "'");
-      return Optional.empty();
+      return outOfRange(a, "'" + what + "' must be " + allowed + "; got '" + written(a) + "'");
     }
-    return Optional.of(
-        new Value.Num(si, Dimension.DIMENSIONLESS, OptionalDouble.empty(), a.range()));
+    return plainNumber(a, si);
   }
 
-  /** Reports a unit that does not fit the form of value {@code what} takes. */
-  private Optional<Value.Num> misfit(Arg.QuantityArg a, String what, String form) {
-    sink.report(
-        DiagnosticCode.WRONG_DIMENSION,
-        a.unit().get().range(),
-        "'" + what + "' is " + form + "; '" + a.unit().get().text() + "' does not fit");
-    return Optional.empty();
+  /**
+   * The number of {@code a} in SI: as written without a unit, converted with a unit that {@code
+   * fits}; empty (reported) when its unit is unknown or does not fit the form {@code what} takes.
+   */
+  private OptionalDouble plainSi(
+      Arg.QuantityArg a, Predicate<Unit> fits, String what, String form) {
+    Optional<Unit> unit = unitOf(a);
+    if (unit == null) {
+      return OptionalDouble.empty();
+    }
+    if (unit.isEmpty()) {
+      return OptionalDouble.of(a.number().value());
+    }
+    if (!fits.test(unit.get())) {
+      sink.report(
+          DiagnosticCode.WRONG_DIMENSION,
+          a.unit().get().range(),
+          "'" + what + "' is " + form + "; '" + a.unit().get().text() + "' does not fit");
+      return OptionalDouble.empty();
+    }
+    return OptionalDouble.of(unit.get().toSi(a.number().value()));
   }
 
   /** A power ratio: plain (1000) or in dB (30 dB). */
   Optional<Value.Num> powerRatio(Arg.QuantityArg a, Bounds bounds, String what) {
-    Optional<Unit> unit = unitOf(a);
-    if (unit == null) {
-      return Optional.empty();
-    }
-    double si = a.number().value();
-    if (unit.isPresent()) {
-      Unit u = unit.get();
-      if (u.scale() != Scale.DECIBEL) {
-        return misfit(
-            a, what, "a ratio, written as a plain number ('1000') or in decibels ('30 dB')");
-      }
-      si = u.toSi(si);
-    }
-    if (!bounds.contains(si)) {
-      sink.report(
-          DiagnosticCode.OUT_OF_RANGE,
-          a.range(),
-          "'"
-              + what
-              + "' must be "
-              + describe(bounds, Dimension.DIMENSIONLESS)
-              + "; got '"
-              + written(a)
-              + "'");
-      return Optional.empty();
-    }
-    return Optional.of(
-        new Value.Num(si, Dimension.DIMENSIONLESS, OptionalDouble.empty(), a.range()));
+    OptionalDouble si =
+        plainSi(
+            a,
+            u -> u.scale() == Scale.DECIBEL,
+            what,
+            "a ratio, written as a plain number ('1000') or in decibels ('30 dB')");
+    return si.isEmpty() ? Optional.empty() : plainNumberWithin(a, si.getAsDouble(), bounds, what);
   }
 
   private Optional<Value.Num> count(Arg.QuantityArg a, Shape.Count c, String what) {
@@ -425,27 +400,9 @@ final class ValueChecker {
     }
     double v = a.number().value();
     if (c.integer() && v != Math.rint(v)) {
-      sink.report(
-          DiagnosticCode.OUT_OF_RANGE,
-          a.range(),
-          "'" + what + "' must be a whole number; got '" + written(a) + "'");
-      return Optional.empty();
+      return outOfRange(a, "'" + what + "' must be a whole number; got '" + written(a) + "'");
     }
-    if (!c.bounds().contains(v)) {
-      sink.report(
-          DiagnosticCode.OUT_OF_RANGE,
-          a.range(),
-          "'"
-              + what
-              + "' must be "
-              + describe(c.bounds(), Dimension.DIMENSIONLESS)
-              + "; got '"
-              + written(a)
-              + "'");
-      return Optional.empty();
-    }
-    return Optional.of(
-        new Value.Num(v, Dimension.DIMENSIONLESS, OptionalDouble.empty(), a.range()));
+    return plainNumberWithin(a, v, c.bounds(), what);
   }
 
   private Optional<Value.Num> density(Arg.QuantityArg a, String what) {
@@ -461,15 +418,37 @@ final class ValueChecker {
       return Optional.empty();
     }
     if (a.number().value() < 0) {
-      sink.report(
-          DiagnosticCode.OUT_OF_RANGE,
-          a.range(),
-          "an optical density cannot be negative; got '" + written(a) + "'");
-      return Optional.empty();
+      return outOfRange(a, "an optical density cannot be negative; got '" + written(a) + "'");
     }
+    return plainNumber(a, a.number().value());
+  }
+
+  /** A plain number checked against its bounds. */
+  private Optional<Value.Num> plainNumberWithin(
+      Arg.QuantityArg a, double v, Bounds bounds, String what) {
+    if (!bounds.contains(v)) {
+      return outOfRange(
+          a,
+          "'"
+              + what
+              + "' must be "
+              + describe(bounds, Dimension.DIMENSIONLESS)
+              + "; got '"
+              + written(a)
+              + "'");
+    }
+    return plainNumber(a, v);
+  }
+
+  private static Optional<Value.Num> plainNumber(Arg.QuantityArg a, double v) {
     return Optional.of(
-        new Value.Num(
-            a.number().value(), Dimension.DIMENSIONLESS, OptionalDouble.empty(), a.range()));
+        new Value.Num(v, Dimension.DIMENSIONLESS, OptionalDouble.empty(), a.range()));
+  }
+
+  /** Reports {@code a} as out of range; there is no value. */
+  private <T> Optional<T> outOfRange(Arg.QuantityArg a, String message) {
+    sink.report(DiagnosticCode.OUT_OF_RANGE, a.range(), message);
+    return Optional.empty();
   }
 
   /** Resolves a name to a declaration or catalog entry of an allowed category. */

@@ -11,41 +11,33 @@ import java.util.function.DoubleBinaryOperator;
 public abstract class MpeCalculator {
   private final String table;
   private final String trainTable;
-  private final double aperture;
+  private final TableScope.Tissue tissue;
   private final PulseTrain.RuleNames rules;
   private final String rulesCited;
   private final DoubleBinaryOperator mpe;
-  private final double shortestPulse;
-  private final String shortestPulseText;
 
   /**
    * @param table standard, edition and tables the figure comes from
    * @param trainTable the same for a pulse train, with its pulse rules
-   * @param aperture limiting aperture the exposure is averaged over, m
+   * @param tissue what the MPE protects: its limiting aperture and the shortest pulse covered
    * @param rules the standard's names for the single-pulse and average-power rules
    * @param rulesCited what a pulse train the pulse rules cannot judge is refused under
    * @param mpe the radiant-exposure MPE (J/m²) at a wavelength (m) over a duration (s), inside the
    *     covered range
-   * @param shortestPulse the shortest pulse (and exposure) the rows cover, s
-   * @param shortestPulseText the same as the refusals word it
    */
   protected MpeCalculator(
       String table,
       String trainTable,
-      double aperture,
+      TableScope.Tissue tissue,
       PulseTrain.RuleNames rules,
       String rulesCited,
-      DoubleBinaryOperator mpe,
-      double shortestPulse,
-      String shortestPulseText) {
+      DoubleBinaryOperator mpe) {
     this.table = table;
     this.trainTable = trainTable;
-    this.aperture = aperture;
+    this.tissue = tissue;
     this.rules = rules;
     this.rulesCited = rulesCited;
     this.mpe = mpe;
-    this.shortestPulse = shortestPulse;
-    this.shortestPulseText = shortestPulseText;
   }
 
   /** Why the wavelength is outside the implemented rows, or null when it is inside. */
@@ -62,8 +54,12 @@ public abstract class MpeCalculator {
     if (t > TableScope.T_MAX) {
       return "exposure duration " + t + " s exceeds 3e4 s, the end of the tables";
     }
-    if (t < shortestPulse) {
-      return "exposure duration " + t + " s is below " + shortestPulseText + "; not implemented";
+    if (t < tissue.shortestPulse()) {
+      return "exposure duration "
+          + t
+          + " s is below "
+          + tissue.shortestPulseText()
+          + "; not implemented";
     }
     return null;
   }
@@ -72,7 +68,28 @@ public abstract class MpeCalculator {
    * Why a pulse of duration tau (alone, or in a train) is outside the rows, or null: shorter than
    * the shortest pulse, or longer than the tables.
    */
-  protected abstract String pulseRefusal(double tau, boolean single);
+  private String pulseRefusal(double tau, boolean single) {
+    if (tau < tissue.shortestPulse()) {
+      return "pulse duration "
+          + tau
+          + " s is below "
+          + tissue.shortestPulseText()
+          + ": "
+          + rowsBelowShortestPulse();
+    }
+    return longPulseRefusal(tau, single);
+  }
+
+  /** What a refusal of a pulse shorter than the rows says of the rows below them. */
+  protected abstract String rowsBelowShortestPulse();
+
+  /**
+   * Why a pulse longer than the rows is refused, or null. Here a single one; a train of them is
+   * left to the train checks.
+   */
+  protected String longPulseRefusal(double tau, boolean single) {
+    return single && tau > TableScope.T_MAX ? "pulse longer than 3e4 s" : null;
+  }
 
   /** The standard's repetitive-pulse rule at this wavelength; null where it applies none. */
   protected PulseTrain.RepetitiveRule repetitiveRule(double lambda) {
@@ -121,7 +138,7 @@ public abstract class MpeCalculator {
             exposureDuration,
             rules,
             repetitiveRule(lambda),
-            aperture,
+            tissue.aperture(),
             trainTable),
         trainTable);
   }
@@ -133,12 +150,15 @@ public abstract class MpeCalculator {
     double single = singlePulse ? h : Double.NaN;
     return Outcome.of(
         new MaximumPermissibleExposure(
-            h, h / t, t, aperture, single, Double.NaN, Double.NaN, criterion, table),
+            h, h / t, t, tissue.aperture(), single, Double.NaN, Double.NaN, criterion, table),
         table);
   }
 
-  /** A wavelength in nanometres to one decimal, as the refusals quote it. */
-  protected static String nanometres(double lambda) {
-    return String.format(java.util.Locale.ROOT, "%.1f", CorrectionFactors.nm(lambda));
+  /** A refusal of a wavelength, quoted in nanometres to one decimal, and {@code why}. */
+  protected static String wavelengthRefused(double lambda, String why) {
+    return "wavelength "
+        + String.format(java.util.Locale.ROOT, "%.1f", CorrectionFactors.nm(lambda))
+        + " nm "
+        + why;
   }
 }

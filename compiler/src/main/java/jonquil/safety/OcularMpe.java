@@ -7,18 +7,12 @@ package jonquil.safety;
  */
 public final class OcularMpe extends MpeCalculator {
   private static final String TABLE = Ed3.MPE_EYE_TABLE + ", " + Ed3.FACTORS_TABLE;
+  private static final String TRAIN_TABLE =
+      TABLE + "; repetitive pulses: clause 4.3 f) / A.3, " + PulseRules.C5_NOTE;
   private static final OcularMpe IEC = new OcularMpe();
 
   private OcularMpe() {
-    super(
-        TABLE,
-        TABLE + "; repetitive pulses: clause 4.3 f) / A.3, " + PulseRules.C5_NOTE,
-        TableScope.APERTURE_EYE,
-        PulseRules.NAMES,
-        TABLE,
-        Ed3::ocularMpe,
-        TableScope.T_MIN_EYE,
-        "10 ps");
+    super(TABLE, TRAIN_TABLE, TableScope.Tissue.EYE, PulseRules.NAMES, TABLE, Ed3::ocularMpe);
   }
 
   /** Limiting aperture for the eye, 400–1400 nm, m. */
@@ -39,14 +33,8 @@ public final class OcularMpe extends MpeCalculator {
   }
 
   @Override
-  protected String pulseRefusal(double tau, boolean single) {
-    if (tau < TableScope.T_MIN_EYE) {
-      return "pulse duration "
-          + tau
-          + " s is below 10 ps: the sub-10-ps rows of Table A.1"
-          + " are not implemented";
-    }
-    return single && tau > TableScope.T_MAX ? "pulse longer than 3e4 s" : null;
+  protected String rowsBelowShortestPulse() {
+    return "the sub-10-ps rows of Table A.1 are not implemented";
   }
 
   @Override
@@ -58,21 +46,20 @@ public final class OcularMpe extends MpeCalculator {
   static String coverage(double lambda) {
     double n = CorrectionFactors.nm(lambda);
     if (n < 400) {
-      return "wavelength "
-          + nanometres(lambda)
-          + " nm is below 400 nm: ultraviolet MPEs (photochemical/corneal) are not implemented";
+      return wavelengthRefused(
+          lambda, "is below 400 nm: ultraviolet MPEs (photochemical/corneal) are not implemented");
     }
     if (n >= 1400) {
-      return "wavelength "
-          + nanometres(lambda)
-          + " nm is outside the retinal hazard region 400–1400 nm: corneal/infrared MPEs"
-          + " are not implemented";
+      return wavelengthRefused(
+          lambda,
+          "is outside the retinal hazard region 400–1400 nm: corneal/infrared MPEs"
+              + " are not implemented");
     }
     if (lambda >= Ed3.LAMBDA_MAX_EYE) {
-      return "wavelength "
-          + nanometres(lambda)
-          + " nm is in 1250–1400 nm, where Ed. 3 adds a corneal/lens dual limit and C7"
-          + " rises steeply; not implemented";
+      return wavelengthRefused(
+          lambda,
+          "is in 1250–1400 nm, where Ed. 3 adds a corneal/lens dual limit and C7"
+              + " rises steeply; not implemented");
     }
     return null;
   }

@@ -10,15 +10,7 @@ public final class SkinMpe extends MpeCalculator {
 
   /** No repetitive-pulse rule: C5 is a retinal-thermal rule (Ed. 3, from memory). */
   private SkinMpe() {
-    super(
-        TABLE,
-        TABLE,
-        TableScope.APERTURE_SKIN,
-        PulseRules.NAMES,
-        TABLE,
-        Ed3::skinMpe,
-        TableScope.T_MIN_SKIN,
-        "1 ns");
+    super(TABLE, TABLE, TableScope.Tissue.SKIN, PulseRules.NAMES, TABLE, Ed3::skinMpe);
   }
 
   /**
@@ -34,10 +26,8 @@ public final class SkinMpe extends MpeCalculator {
   protected String wavelengthRefusal(double lambda) {
     double n = CorrectionFactors.nm(lambda);
     if (n < 400 || n >= 1400) {
-      return "wavelength "
-          + nanometres(lambda)
-          + " nm is outside 400–1400 nm: skin MPEs for"
-          + " other wavelengths are not implemented";
+      return wavelengthRefused(
+          lambda, "is outside 400–1400 nm: skin MPEs for other wavelengths are not implemented");
     }
     return null;
   }
@@ -51,10 +41,7 @@ public final class SkinMpe extends MpeCalculator {
   }
 
   @Override
-  protected String pulseRefusal(double tau, boolean single) {
-    if (tau < TableScope.T_MIN_SKIN) {
-      return "pulse duration " + tau + " s is below 1 ns: not implemented";
-    }
-    return single && tau > TableScope.T_MAX ? "pulse longer than 3e4 s" : null;
+  protected String rowsBelowShortestPulse() {
+    return "not implemented";
   }
 }

@@ -35,4 +35,10 @@ public final class TableScope {
 
   /** Limiting aperture for the skin, 400–1400 nm: 3.5 mm (IEC Table A.3, ANSI Table 8; memory). */
   public static final double APERTURE_SKIN = 3.5e-3;
+
+  /** What an MPE protects: its limiting aperture and the shortest pulse its rows cover (s). */
+  public record Tissue(double aperture, double shortestPulse, String shortestPulseText) {
+    public static final Tissue EYE = new Tissue(APERTURE_EYE, T_MIN_EYE, "10 ps");
+    public static final Tissue SKIN = new Tissue(APERTURE_SKIN, T_MIN_SKIN, "1 ns");
+  }
 }

@@ -17,16 +17,7 @@ import org.antlr.v4.runtime.tree.TerminalNode;
  * recovery left incomplete (their errors are already reported). The grammar has no recursive rules,
  * so this walk is shallow whatever the input.
  */
-final class AstBuilder {
-  private final SourceFile source;
-  private final OffsetMap offsets;
-  private final List<TextRange> comments;
-
-  AstBuilder(SourceFile source, OffsetMap offsets, List<TextRange> comments) {
-    this.source = source;
-    this.offsets = offsets;
-    this.comments = comments;
-  }
+record AstBuilder(SourceFile source, OffsetMap offsets, List<TextRange> comments) {
 
   SpecFile build(FileContext file) {
     List<Object> statements = new ArrayList<>();

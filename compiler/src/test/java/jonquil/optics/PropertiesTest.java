@@ -114,14 +114,10 @@ class PropertiesTest {
     double[] e = {rnd.nextGaussian(), rnd.nextGaussian(), rnd.nextGaussian(), rnd.nextGaussian()};
     Jones j =
         Jones.of(
-            rnd.nextGaussian(),
-            rnd.nextGaussian(),
-            rnd.nextGaussian(),
-            rnd.nextGaussian(),
-            rnd.nextGaussian(),
-            rnd.nextGaussian(),
-            rnd.nextGaussian(),
-            rnd.nextGaussian());
+            new Complex(rnd.nextGaussian(), rnd.nextGaussian()),
+            new Complex(rnd.nextGaussian(), rnd.nextGaussian()),
+            new Complex(rnd.nextGaussian(), rnd.nextGaussian()),
+            new Complex(rnd.nextGaussian(), rnd.nextGaussian()));
     Complex ex = new Complex(e[0], e[1]);
     Complex ey = new Complex(e[2], e[3]);
     Complex ox = j.a().multiply(ex).add(j.b().multiply(ey));

@@ -8,11 +8,13 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicInteger;
+import jonquil.cli.HelpOption;
 import jonquil.ide.EditorFeatures;
 import org.eclipse.lsp4j.jsonrpc.Launcher;
 import org.eclipse.lsp4j.launch.LSPLauncher;
 import org.eclipse.lsp4j.services.LanguageClient;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /**
@@ -23,11 +25,7 @@ import picocli.CommandLine.Option;
     name = "lsp",
     description = "Run the Jonquil language server over standard input and output.")
 public final class LspCommand implements java.util.concurrent.Callable<Integer> {
-  @Option(
-      names = {"-h", "--help"},
-      usageHelp = true,
-      description = "Show this help and exit.")
-  boolean help;
+  @Mixin HelpOption help;
 
   @Option(
       names = "--verbose",

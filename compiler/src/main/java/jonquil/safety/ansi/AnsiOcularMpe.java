@@ -3,10 +3,10 @@ package jonquil.safety.ansi;
 import jonquil.safety.CorrectionFactors;
 import jonquil.safety.Emission;
 import jonquil.safety.MaximumPermissibleExposure;
-import jonquil.safety.MpeCalculator;
 import jonquil.safety.Outcome;
 import jonquil.safety.PulseTrain;
 import jonquil.safety.TableScope;
+import jonquil.safety.TableScope.Tissue;
 
 /**
  * Why it exists: the ocular MPE for intrabeam (point-source) viewing after ANSI Z136.1-2014 Table
@@ -27,21 +27,14 @@ import jonquil.safety.TableScope;
  *       than t_min are not evaluated.
  * </ul>
  */
-public final class AnsiOcularMpe extends MpeCalculator {
+public final class AnsiOcularMpe extends Z136Mpe {
   private static final String TABLE =
       Z136.OCULAR_TABLE + "; " + Z136.FACTORS_TABLE + "; " + Z136.APERTURE_TABLE;
+  private static final String TRAIN_TABLE = TABLE + "; " + Z136.PULSE_RULES;
   private static final AnsiOcularMpe ANSI = new AnsiOcularMpe();
 
   private AnsiOcularMpe() {
-    super(
-        TABLE,
-        TABLE + "; " + Z136.PULSE_RULES,
-        TableScope.APERTURE_EYE,
-        AnsiPulseRules.NAMES,
-        Z136.PULSE_RULES,
-        Z136::ocular,
-        TableScope.T_MIN_EYE,
-        "10 ps");
+    super(TABLE, TRAIN_TABLE, Tissue.EYE, Z136::ocular, "Table 5a");
   }
 
   /**
@@ -58,34 +51,27 @@ public final class AnsiOcularMpe extends MpeCalculator {
   protected String wavelengthRefusal(double lambda) {
     double n = CorrectionFactors.nm(lambda);
     if (lambda < TableScope.LAMBDA_MIN) {
-      return "wavelength "
-          + nanometres(lambda)
-          + " nm is below 400 nm: ultraviolet MPEs of Table 5a are not implemented";
+      return wavelengthRefused(
+          lambda, "is below 400 nm: ultraviolet MPEs of Table 5a are not implemented");
     }
     if (n >= 1400) {
-      return "wavelength "
-          + nanometres(lambda)
-          + " nm is outside the retinal hazard region 400–1400 nm: infrared (corneal)"
-          + " MPEs of Table 5a are not implemented";
+      return wavelengthRefused(
+          lambda,
+          "is outside the retinal hazard region 400–1400 nm: infrared (corneal)"
+              + " MPEs of Table 5a are not implemented");
     }
     if (lambda >= Z136.LAMBDA_MAX_EYE) {
-      return "wavelength "
-          + nanometres(lambda)
-          + " nm is in 1200–1400 nm, where the 2014 C_C and the added corneal/lens"
-          + " limit were not confirmed; not implemented";
+      return wavelengthRefused(
+          lambda,
+          "is in 1200–1400 nm, where the 2014 C_C and the added corneal/lens"
+              + " limit were not confirmed; not implemented");
     }
     return null;
   }
 
   @Override
-  protected String pulseRefusal(double tau, boolean single) {
-    if (tau < TableScope.T_MIN_EYE) {
-      return "pulse duration "
-          + tau
-          + " s is below 10 ps: the 100 fs–10 ps row of"
-          + " Table 5a is not implemented";
-    }
-    return tau > TableScope.T_MAX ? "pulse longer than 3e4 s, the end of Table 5a" : null;
+  protected String rowsBelowShortestPulse() {
+    return "the 100 fs–10 ps row of Table 5a is not implemented";
   }
 
   @Override

@@ -2,16 +2,16 @@ package jonquil.safety.ansi;
 
 import jonquil.safety.Emission;
 import jonquil.safety.MaximumPermissibleExposure;
-import jonquil.safety.MpeCalculator;
 import jonquil.safety.Outcome;
 import jonquil.safety.TableScope;
+import jonquil.safety.TableScope.Tissue;
 
 /**
  * Why it exists: the skin MPE after ANSI Z136.1-2014 Table 7 (with the Table 6 factor C_A),
  * 400–1400 nm, 1 ns to 3×10⁴ s, averaged over the 3.5 mm limiting aperture, beside {@link
  * jonquil.safety.SkinMpe}.
  */
-public final class AnsiSkinMpe extends MpeCalculator {
+public final class AnsiSkinMpe extends Z136Mpe {
   private static final String TABLE =
       Z136.SKIN_TABLE
           + "; "
@@ -19,19 +19,13 @@ public final class AnsiSkinMpe extends MpeCalculator {
           + "; "
           + Z136.APERTURE_TABLE
           + "; skin area <= 100 cm2 assumed";
+  private static final String TRAIN_TABLE =
+      TABLE + "; " + Z136.PULSE_RULES + " (Rules 1 and 2 only)";
   private static final AnsiSkinMpe ANSI = new AnsiSkinMpe();
 
   /** Rules 1 and 2 only: Rule 3 (C_P) is a retinal-thermal rule (from memory). */
   private AnsiSkinMpe() {
-    super(
-        TABLE,
-        TABLE + "; " + Z136.PULSE_RULES + " (Rules 1 and 2 only)",
-        TableScope.APERTURE_SKIN,
-        AnsiPulseRules.NAMES,
-        Z136.PULSE_RULES,
-        Z136::skin,
-        TableScope.T_MIN_SKIN,
-        "1 ns");
+    super(TABLE, TRAIN_TABLE, Tissue.SKIN, Z136::skin, "Table 7");
   }
 
   /**
@@ -47,22 +41,14 @@ public final class AnsiSkinMpe extends MpeCalculator {
   @Override
   protected String wavelengthRefusal(double lambda) {
     if (lambda < TableScope.LAMBDA_MIN || lambda >= TableScope.LAMBDA_MAX_SKIN) {
-      return "wavelength "
-          + nanometres(lambda)
-          + " nm is outside 400–1400 nm: other rows"
-          + " of Table 7 are not implemented";
+      return wavelengthRefused(
+          lambda, "is outside 400–1400 nm: other rows of Table 7 are not implemented");
     }
     return null;
   }
 
   @Override
-  protected String pulseRefusal(double tau, boolean single) {
-    if (tau < TableScope.T_MIN_SKIN) {
-      return "pulse duration "
-          + tau
-          + " s is below 1 ns: the sub-ns rows of Table 7 are"
-          + " not implemented";
-    }
-    return tau > TableScope.T_MAX ? "pulse longer than 3e4 s, the end of Table 7" : null;
+  protected String rowsBelowShortestPulse() {
+    return "the sub-ns rows of Table 7 are not implemented";
   }
 }
