@@ -1,138 +1,108 @@
 package jonquil.lsp;
 
+import java.util.List;
+import java.util.Optional;
 import org.eclipse.lsp4j.ClientCapabilities;
+import org.eclipse.lsp4j.CodeActionCapabilities;
+import org.eclipse.lsp4j.CompletionCapabilities;
+import org.eclipse.lsp4j.CompletionItemCapabilities;
+import org.eclipse.lsp4j.CompletionItemResolveSupportCapabilities;
+import org.eclipse.lsp4j.DefinitionCapabilities;
+import org.eclipse.lsp4j.DidChangeWatchedFilesCapabilities;
+import org.eclipse.lsp4j.DocumentSymbolCapabilities;
+import org.eclipse.lsp4j.FoldingRangeCapabilities;
+import org.eclipse.lsp4j.HoverCapabilities;
+import org.eclipse.lsp4j.InlayHintCapabilities;
+import org.eclipse.lsp4j.InlayHintResolveSupportCapabilities;
+import org.eclipse.lsp4j.RenameCapabilities;
+import org.eclipse.lsp4j.SemanticTokensCapabilities;
+import org.eclipse.lsp4j.TextDocumentClientCapabilities;
+import org.eclipse.lsp4j.WindowClientCapabilities;
+import org.eclipse.lsp4j.WorkspaceClientCapabilities;
+import org.eclipse.lsp4j.WorkspaceEditCapabilities;
 
-/** Null-safe reads of optional client capabilities (clients omit what they do not support). */
-final class ClientSupport {
-  private ClientSupport() {}
+/** What the client said it supports, read once from its capabilities at initialize. */
+record ClientSupport(
+    boolean prepareRename,
+    boolean definitionLinks,
+    boolean hierarchicalSymbols,
+    boolean lineFoldingOnly,
+    boolean preferredCodeActions,
+    boolean workDoneProgress,
+    boolean watchedFilesRegistration,
+    boolean documentChanges,
+    // pulls document diagnostics (textDocument/diagnostic), so they are not pushed to it
+    boolean pullDiagnostics,
+    boolean codeActionLiterals,
+    // the most folding ranges it wants, or null when it sets no limit
+    Integer foldingRangeLimit,
+    boolean markdownHover,
+    // resolves completion items, documentation included; inlay hints, tooltips included
+    boolean lazyCompletionDocumentation,
+    boolean lazyInlayHintTooltips,
+    List<String> semanticTokenTypes) {
 
-  static boolean prepareRename(ClientCapabilities c) {
-    return c != null
-        && c.getTextDocument() != null
-        && c.getTextDocument().getRename() != null
-        && Boolean.TRUE.equals(c.getTextDocument().getRename().getPrepareSupport());
+  ClientSupport {
+    semanticTokenTypes = List.copyOf(semanticTokenTypes);
   }
 
-  static boolean markdownHover(ClientCapabilities c) {
-    return c != null
-        && c.getTextDocument() != null
-        && c.getTextDocument().getHover() != null
-        && c.getTextDocument().getHover().getContentFormat() != null
-        && c.getTextDocument().getHover().getContentFormat().contains("markdown");
-  }
-
-  /**
-   * The client pulls document diagnostics (textDocument/diagnostic), so they are not pushed to it.
-   */
-  static boolean pullDiagnostics(ClientCapabilities c) {
-    return c != null && c.getTextDocument() != null && c.getTextDocument().getDiagnostic() != null;
-  }
-
-  static boolean definitionLinks(ClientCapabilities c) {
-    return c != null
-        && c.getTextDocument() != null
-        && c.getTextDocument().getDefinition() != null
-        && Boolean.TRUE.equals(c.getTextDocument().getDefinition().getLinkSupport());
-  }
-
-  static boolean hierarchicalSymbols(ClientCapabilities c) {
-    return c != null
-        && c.getTextDocument() != null
-        && c.getTextDocument().getDocumentSymbol() != null
-        && Boolean.TRUE.equals(
-            c.getTextDocument().getDocumentSymbol().getHierarchicalDocumentSymbolSupport());
-  }
-
-  static boolean workDoneProgress(ClientCapabilities c) {
-    return c != null
-        && c.getWindow() != null
-        && Boolean.TRUE.equals(c.getWindow().getWorkDoneProgress());
-  }
-
-  static boolean watchedFilesRegistration(ClientCapabilities c) {
-    return c != null
-        && c.getWorkspace() != null
-        && c.getWorkspace().getDidChangeWatchedFiles() != null
-        && Boolean.TRUE.equals(
-            c.getWorkspace().getDidChangeWatchedFiles().getDynamicRegistration());
-  }
-
-  /** The client resolves completion items lazily and takes their documentation that way. */
-  static boolean lazyCompletionDocumentation(ClientCapabilities c) {
-    return c != null
-        && c.getTextDocument() != null
-        && c.getTextDocument().getCompletion() != null
-        && c.getTextDocument().getCompletion().getCompletionItem() != null
-        && c.getTextDocument().getCompletion().getCompletionItem().getResolveSupport() != null
-        && c.getTextDocument()
-                .getCompletion()
-                .getCompletionItem()
-                .getResolveSupport()
-                .getProperties()
-            != null
-        && c.getTextDocument()
-            .getCompletion()
-            .getCompletionItem()
-            .getResolveSupport()
-            .getProperties()
-            .contains("documentation");
-  }
-
-  /** The client resolves inlay hints lazily and takes their tooltips that way. */
-  static boolean lazyInlayHintTooltips(ClientCapabilities c) {
-    return c != null
-        && c.getTextDocument() != null
-        && c.getTextDocument().getInlayHint() != null
-        && c.getTextDocument().getInlayHint().getResolveSupport() != null
-        && c.getTextDocument().getInlayHint().getResolveSupport().getProperties() != null
-        && c.getTextDocument()
-            .getInlayHint()
-            .getResolveSupport()
-            .getProperties()
-            .contains("tooltip");
+  /** Reads {@code c}, which may be null or omit any part: what a client omits, it lacks. */
+  static ClientSupport of(ClientCapabilities c) {
+    Optional<ClientCapabilities> all = Optional.ofNullable(c);
+    Optional<TextDocumentClientCapabilities> text = all.map(ClientCapabilities::getTextDocument);
+    Optional<WorkspaceClientCapabilities> workspace = all.map(ClientCapabilities::getWorkspace);
+    var rename = text.map(TextDocumentClientCapabilities::getRename);
+    var definition = text.map(TextDocumentClientCapabilities::getDefinition);
+    var symbols = text.map(TextDocumentClientCapabilities::getDocumentSymbol);
+    var folding = text.map(TextDocumentClientCapabilities::getFoldingRange);
+    var codeAction = text.map(TextDocumentClientCapabilities::getCodeAction);
+    var window = all.map(ClientCapabilities::getWindow);
+    var watching = workspace.map(WorkspaceClientCapabilities::getDidChangeWatchedFiles);
+    var edits = workspace.map(WorkspaceClientCapabilities::getWorkspaceEdit);
+    var completionResolve =
+        text.map(TextDocumentClientCapabilities::getCompletion)
+            .map(CompletionCapabilities::getCompletionItem)
+            .map(CompletionItemCapabilities::getResolveSupport)
+            .map(CompletionItemResolveSupportCapabilities::getProperties);
+    var hintResolve =
+        text.map(TextDocumentClientCapabilities::getInlayHint)
+            .map(InlayHintCapabilities::getResolveSupport)
+            .map(InlayHintResolveSupportCapabilities::getProperties);
+    return new ClientSupport(
+        yes(rename.map(RenameCapabilities::getPrepareSupport)),
+        yes(definition.map(DefinitionCapabilities::getLinkSupport)),
+        yes(symbols.map(DocumentSymbolCapabilities::getHierarchicalDocumentSymbolSupport)),
+        yes(folding.map(FoldingRangeCapabilities::getLineFoldingOnly)),
+        yes(codeAction.map(CodeActionCapabilities::getIsPreferredSupport)),
+        yes(window.map(WindowClientCapabilities::getWorkDoneProgress)),
+        yes(watching.map(DidChangeWatchedFilesCapabilities::getDynamicRegistration)),
+        yes(edits.map(WorkspaceEditCapabilities::getDocumentChanges)),
+        text.map(TextDocumentClientCapabilities::getDiagnostic).isPresent(),
+        codeAction.map(CodeActionCapabilities::getCodeActionLiteralSupport).isPresent(),
+        folding.map(FoldingRangeCapabilities::getRangeLimit).orElse(null),
+        listed(
+                text.map(TextDocumentClientCapabilities::getHover)
+                    .map(HoverCapabilities::getContentFormat))
+            .contains("markdown"),
+        listed(completionResolve).contains("documentation"),
+        listed(hintResolve).contains("tooltip"),
+        listed(
+            text.map(TextDocumentClientCapabilities::getSemanticTokens)
+                .map(SemanticTokensCapabilities::getTokenTypes)));
   }
 
   /** The client names this token type among those it knows. */
-  static boolean semanticTokenType(ClientCapabilities c, String type) {
-    return c != null
-        && c.getTextDocument() != null
-        && c.getTextDocument().getSemanticTokens() != null
-        && c.getTextDocument().getSemanticTokens().getTokenTypes() != null
-        && c.getTextDocument().getSemanticTokens().getTokenTypes().contains(type);
+  boolean semanticTokenType(String type) {
+    return semanticTokenTypes.contains(type);
   }
 
-  static boolean lineFoldingOnly(ClientCapabilities c) {
-    return c != null
-        && c.getTextDocument() != null
-        && c.getTextDocument().getFoldingRange() != null
-        && Boolean.TRUE.equals(c.getTextDocument().getFoldingRange().getLineFoldingOnly());
+  /** True only when the client says true. */
+  private static boolean yes(Optional<Boolean> flag) {
+    return flag.orElse(false);
   }
 
-  /** The most folding ranges the client wants, or null when it sets no limit. */
-  static Integer foldingRangeLimit(ClientCapabilities c) {
-    return c == null || c.getTextDocument() == null || c.getTextDocument().getFoldingRange() == null
-        ? null
-        : c.getTextDocument().getFoldingRange().getRangeLimit();
-  }
-
-  static boolean codeActionLiterals(ClientCapabilities c) {
-    return c != null
-        && c.getTextDocument() != null
-        && c.getTextDocument().getCodeAction() != null
-        && c.getTextDocument().getCodeAction().getCodeActionLiteralSupport() != null;
-  }
-
-  static boolean preferredCodeActions(ClientCapabilities c) {
-    return c != null
-        && c.getTextDocument() != null
-        && c.getTextDocument().getCodeAction() != null
-        && Boolean.TRUE.equals(c.getTextDocument().getCodeAction().getIsPreferredSupport());
-  }
-
-  static boolean documentChanges(ClientCapabilities c) {
-    return c != null
-        && c.getWorkspace() != null
-        && c.getWorkspace().getWorkspaceEdit() != null
-        && Boolean.TRUE.equals(c.getWorkspace().getWorkspaceEdit().getDocumentChanges());
+  /** A list the client sent, empty when it sent none. */
+  private static List<String> listed(Optional<List<String>> values) {
+    return values.orElse(List.of());
   }
 }

@@ -63,7 +63,7 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
   private volatile LanguageClient client;
   private volatile Convert convert = new Convert(Convert.Encoding.UTF_16, documents::uriOf);
   private volatile SemanticTokenEncoding tokenEncoding = new SemanticTokenEncoding(false);
-  private volatile ClientCapabilities capabilities = new ClientCapabilities();
+  private volatile ClientSupport support = ClientSupport.of(null);
   private volatile Folders folders = new Folders(List.of(), 0);
 
   /**
@@ -122,7 +122,7 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
             () -> folders,
             () -> convert,
             () -> client,
-            () -> ClientSupport.pullDiagnostics(capabilities));
+            () -> support.pullDiagnostics());
     this.scheduler =
         new CheckScheduler(
             debug == null ? cycle : this::timedCheck,
@@ -153,15 +153,14 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
       }
       ClientCapabilities caps =
           params.getCapabilities() != null ? params.getCapabilities() : new ClientCapabilities();
-      capabilities = caps;
+      support = ClientSupport.of(caps);
       convert = new Convert(Convert.Encoding.negotiate(caps), documents::uriOf);
       tokenEncoding =
-          new SemanticTokenEncoding(
-              ClientSupport.semanticTokenType(caps, SemanticTokenEncoding.UNIT_TOKEN));
+          new SemanticTokenEncoding(support.semanticTokenType(SemanticTokenEncoding.UNIT_TOKEN));
       folders = new Folders(foldersOf(params), folders.generation() + 1);
       return CompletableFuture.completedFuture(
           new InitializeResult(
-              ServerFeatures.of(caps, convert.encoding(), tokenEncoding),
+              ServerFeatures.of(support, convert.encoding(), tokenEncoding),
               new ServerInfo("jonquil", ToolVersion.current())));
     } catch (RuntimeException e) {
       return CompletableFuture.failedFuture(requests.asResponseError("initialize", e));
@@ -195,8 +194,8 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
         MessageType.Log,
         "jonquil language server ready (positions in " + convert.encoding().wire() + ")");
     LanguageClient c = client;
-    boolean watching = c != null && ClientSupport.watchedFilesRegistration(capabilities);
-    index.start(folders.paths(), ClientSupport.workDoneProgress(capabilities), watching);
+    boolean watching = c != null && support.watchedFilesRegistration();
+    index.start(folders.paths(), support.workDoneProgress(), watching);
     if (watching) {
       // Never wait for the reply here: this runs on the reader thread, which must read it.
       c.registerCapability(new RegistrationParams(List.of(ServerFeatures.fileWatching())))
@@ -291,8 +290,9 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     return tokenEncoding;
   }
 
-  ClientCapabilities clientCapabilities() {
-    return capabilities;
+  /** What the client said it supports (nothing before initialize). */
+  ClientSupport clientSupport() {
+    return support;
   }
 
   /**

@@ -53,7 +53,7 @@ final class JonquilWorkspaceService implements WorkspaceService {
             found.addAll(server.answers.workspaceSymbols(r, query));
             checked.addAll(r.files().keySet());
           }
-          WorkspaceIndex.Snapshot index = server.index.latest();
+          IndexSnapshot index = server.index.latest();
           List<FileIndex> unchecked =
               index.files().stream().filter(f -> !checked.contains(f.file())).toList();
           found.addAll(server.answers.workspaceSymbols(unchecked, query));

@@ -15,6 +15,7 @@ import java.util.concurrent.Future;
 import java.util.concurrent.RejectedExecutionException;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.concurrent.atomic.AtomicReference;
+import java.util.function.BiFunction;
 import java.util.function.Function;
 import java.util.function.Supplier;
 import jonquil.CheckOptions;
@@ -25,6 +26,7 @@ import jonquil.source.ProjectRoot;
 import jonquil.source.SourceFile;
 import org.eclipse.lsp4j.MessageType;
 import org.eclipse.lsp4j.Position;
+import org.eclipse.lsp4j.TextDocumentPositionParams;
 import org.eclipse.lsp4j.jsonrpc.ResponseErrorException;
 import org.eclipse.lsp4j.jsonrpc.messages.ResponseError;
 import org.eclipse.lsp4j.jsonrpc.messages.ResponseErrorCode;
@@ -89,15 +91,61 @@ final class RequestPipeline {
       SourceFile source,
       int offset,
       Convert convert,
-      Map<Path, Integer> versions) {}
+      Map<Path, Integer> versions) {
+    /** The check's copy of a file, or null when the check did not read it. */
+    SourceFile checked(Path file) {
+      return result.files().get(file);
+    }
 
-  <T> CompletableFuture<T> atPosition(
-      String method, String uri, Position position, T none, Function<At, T> body) {
-    return atPosition(method, uri, null, position, none, body);
+    /** The text a location's offsets refer to: the check's copy, else the workspace index's. */
+    SourceFile sourceOf(Path file, IndexSnapshot index) {
+      SourceFile checked = checked(file);
+      return checked != null ? checked : index.source(file);
+    }
   }
 
-  /** As above, answered once {@code before} is done too (e.g. a fresh workspace index). */
+  /** A request about a whole document, answered with an empty list when no check saw it. */
+  <T> CompletableFuture<List<T>> wholeDocument(
+      String method, String uri, Function<At, List<T>> body) {
+    return wholeDocument(method, uri, List.of(), body);
+  }
+
+  /** A request about a whole document, answered with {@code none} when no check saw it. */
+  <T> CompletableFuture<T> wholeDocument(String method, String uri, T none, Function<At, T> body) {
+    return atPosition(method, uri, null, null, none, body);
+  }
+
+  /**
+   * A request about the position {@code params} name, answered with {@code none} when no check saw
+   * it.
+   */
   <T> CompletableFuture<T> atPosition(
+      String method, TextDocumentPositionParams params, T none, Function<At, T> body) {
+    return atPosition(
+        method, params.getTextDocument().getUri(), null, params.getPosition(), none, body);
+  }
+
+  /**
+   * As {@link #atPosition(String, TextDocumentPositionParams, Object, Function)}, once the
+   * workspace index has caught up (see {@link WorkspaceIndex#fresh}); {@code body} also gets the
+   * index.
+   */
+  <T> CompletableFuture<T> withIndex(
+      String method,
+      TextDocumentPositionParams params,
+      T none,
+      BiFunction<At, IndexSnapshot, T> body) {
+    return atPosition(
+        method,
+        params.getTextDocument().getUri(),
+        server.index::fresh,
+        params.getPosition(),
+        none,
+        at -> body.apply(at, server.index.latest()));
+  }
+
+  /** Answered once {@code before} is done too (e.g. a fresh workspace index). */
+  private <T> CompletableFuture<T> atPosition(
       String method,
       String uri,
       Supplier<? extends CompletableFuture<?>> before,
@@ -127,9 +175,10 @@ final class RequestPipeline {
    * waiting for the debounced check would lag the typing.
    */
   <T> CompletableFuture<T> atBuffer(
-      String method, String uri, Position position, T none, Function<At, T> body) {
+      String method, TextDocumentPositionParams params, T none, Function<At, T> body) {
+    Position position = params.getPosition();
     // Read on the reader thread, so the text is the one every earlier didChange made.
-    Optional<Documents.Doc> doc = uri == null ? Optional.empty() : server.documents.get(uri);
+    Optional<Documents.Doc> doc = server.documents.get(params.getTextDocument().getUri());
     return answer(
         method,
         null,

@@ -2,7 +2,6 @@ package jonquil.lsp;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.eclipse.lsp4j.ClientCapabilities;
 import org.eclipse.lsp4j.CodeActionKind;
 import org.eclipse.lsp4j.CodeActionOptions;
 import org.eclipse.lsp4j.CompletionOptions;
@@ -40,7 +39,7 @@ final class ServerFeatures {
    * encoding}, semantic tokens with {@code tokens}' legend.
    */
   static ServerCapabilities of(
-      ClientCapabilities caps, Convert.Encoding encoding, SemanticTokenEncoding tokens) {
+      ClientSupport caps, Convert.Encoding encoding, SemanticTokenEncoding tokens) {
     ServerCapabilities out = new ServerCapabilities();
     out.setPositionEncoding(encoding.wire());
     TextDocumentSyncOptions sync = new TextDocumentSyncOptions();
@@ -50,7 +49,7 @@ final class ServerFeatures {
     out.setHoverProvider(true);
     out.setDefinitionProvider(true);
     out.setReferencesProvider(true);
-    if (ClientSupport.prepareRename(caps)) {
+    if (caps.prepareRename()) {
       out.setRenameProvider(new RenameOptions(true));
     } else {
       out.setRenameProvider(true);
@@ -71,11 +70,11 @@ final class ServerFeatures {
     out.setInlayHintProvider(inlayHintProvider());
     out.setFoldingRangeProvider(true);
     out.setDocumentLinkProvider(new DocumentLinkOptions(false));
-    if (ClientSupport.pullDiagnostics(caps)) {
+    if (caps.pullDiagnostics()) {
       // A document's diagnostics depend on the files it uses; no workspace-wide pull.
       out.setDiagnosticProvider(diagnosticProvider());
     }
-    if (ClientSupport.codeActionLiterals(caps)) {
+    if (caps.codeActionLiterals()) {
       out.setCodeActionProvider(new CodeActionOptions(List.of(CodeActionKind.QuickFix)));
     } else {
       // A client without literal code actions would need commands; it gets none, so it is told
