@@ -47,12 +47,23 @@ public final class Analyzer {
     List<Diagnostic> diagnostics = new ArrayList<>();
     List<RequirementOutcome> outcomes = new ArrayList<>();
     for (ResolvedRequirement r : model.requirements()) {
+      boolean deferred = r.yield().isPresent() && !yields;
       RequirementEvaluator.Verdict v =
-          r.yield().isPresent() && !yields
+          deferred
               ? RequirementEvaluator.Verdict.notEvaluated(
                   "yields are computed by 'jonquil check', not while typing")
               : RequirementEvaluator.evaluate(r, model, solve);
       outcomes.add(outcome(r, v));
+      if (!v.evaluated() && !deferred) {
+        // Fail closed: what cannot be evaluated is not met. A yield left to the CI gate while
+        // typing is no finding about the spec, so the editor shows no error for it.
+        diagnostics.add(
+            Diagnostic.of(
+                DiagnosticCode.REQUIREMENT_NOT_EVALUATED,
+                r.file(),
+                r.syntax().range(),
+                "requirement not evaluated, so not met: " + v.text()));
+      }
       if (v.evaluated()) {
         diagnostics.add(
             v.pass()
@@ -146,7 +157,7 @@ public final class Analyzer {
     return lead
         + ": "
         + what
-        + " is "
+        + (v.valueIsFloor() ? " is at least " : " is ")
         + VerdictText.format(v.value(), v.unit())
         + (v.text().isEmpty() ? "" : " (" + v.text() + ")")
         + ", bound "

@@ -32,7 +32,20 @@ final class RequirementEvaluator {
       double bound,
       double margin,
       String unit,
-      String text) {
+      String text,
+      boolean valueIsFloor) {
+    /** A value that was computed (not only bounded from below). */
+    Verdict(
+        boolean evaluated,
+        boolean pass,
+        double value,
+        double bound,
+        double margin,
+        String unit,
+        String text) {
+      this(evaluated, pass, value, bound, margin, unit, text, false);
+    }
+
     static Verdict notEvaluated(String reason) {
       return new Verdict(false, false, Double.NaN, Double.NaN, Double.NaN, "", reason);
     }
@@ -295,6 +308,32 @@ final class RequirementEvaluator {
       // A stated state is judged by state(), never by a number.
       case IS -> throw new IllegalArgumentException("'is' bounds a state, not a number");
     };
+  }
+
+  /**
+   * A value that was not computed but is known to be at least {@code floor}: a bound that floor
+   * already breaks fails, one it already meets passes, and otherwise the value stays unknown.
+   */
+  static Verdict knownAtLeast(
+      Criterion c, double floor, String unit, String note, String unknownReason) {
+    double low = c.low();
+    Boolean known =
+        switch (c.relation()) {
+          case AT_MOST -> floor > low ? false : null;
+          case BELOW -> floor >= low ? false : null;
+          case EQUAL -> floor > low ? false : null;
+          case WITHIN -> floor > c.high() ? false : null;
+          case AT_LEAST -> floor >= low ? true : null;
+          case ABOVE -> floor > low ? true : null;
+          case IS -> null;
+        };
+    if (known == null) {
+      return Verdict.notEvaluated(unknownReason);
+    }
+    double edge = c.relation() == ResolvedRequirement.Relation.WITHIN ? c.high() : low;
+    // The true margin is no larger than this when failing, no smaller when passing.
+    double margin = known ? floor - edge : edge - floor;
+    return new Verdict(true, known, floor, edge, margin, unit, note, true);
   }
 
   private static Verdict verdict(

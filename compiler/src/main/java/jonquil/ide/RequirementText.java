@@ -52,7 +52,8 @@ final class RequirementText {
         .filter(
             d ->
                 d.code() == DiagnosticCode.REQUIREMENT_FAILED
-                    || d.code() == DiagnosticCode.REQUIREMENT_MET)
+                    || d.code() == DiagnosticCode.REQUIREMENT_MET
+                    || d.code() == DiagnosticCode.REQUIREMENT_NOT_EVALUATED)
         .findFirst()
         .ifPresent(
             (Diagnostic d) ->
