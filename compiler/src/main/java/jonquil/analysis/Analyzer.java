@@ -146,9 +146,11 @@ public final class Analyzer {
         v.pass() ? RequirementStatus.PASS : RequirementStatus.FAIL,
         OptionalDouble.of(v.value()),
         OptionalDouble.of(v.bound()),
-        OptionalDouble.of(v.margin()),
+        // A class is a label: how far one class is from another is no number.
+        v.unit().equals("class") ? OptionalDouble.empty() : OptionalDouble.of(v.margin()),
         v.unit(),
-        v.text());
+        v.text(),
+        v.shownUnit());
   }
 
   private static String verdict(
@@ -158,10 +160,12 @@ public final class Analyzer {
         + ": "
         + what
         + (v.valueIsFloor() ? " is at least " : " is ")
-        + VerdictText.format(v.value(), v.unit())
+        + VerdictText.format(v.value(), v.shownUnit())
         + (v.text().isEmpty() ? "" : " (" + v.text() + ")")
         + ", bound "
-        + VerdictText.format(v.bound(), v.unit())
-        + (v.unit().equals("class") ? "" : ", margin " + VerdictText.format(v.margin(), v.unit()));
+        + VerdictText.format(v.bound(), v.shownUnit())
+        + (v.unit().equals("class")
+            ? ""
+            : ", margin " + VerdictText.margin(v.value(), v.bound(), v.margin(), v.shownUnit()));
   }
 }

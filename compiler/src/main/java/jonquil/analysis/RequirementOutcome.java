@@ -6,7 +6,8 @@ import jonquil.source.TextRange;
 
 /**
  * The verdict on one requirement line: computed value, bound and margin in SI units (the unit is
- * named by {@code siUnit}), plus a reason when it was not evaluated.
+ * named by {@code siUnit}), plus a reason when it was not evaluated. {@code shownUnit} is the unit
+ * people read them in, that of the bound as written ("dB", "%"); a hazard class has no margin.
  */
 public record RequirementOutcome(
     Path file,
@@ -17,7 +18,22 @@ public record RequirementOutcome(
     OptionalDouble bound,
     OptionalDouble margin,
     String siUnit,
-    String reason) {
+    String reason,
+    String shownUnit) {
+
+  /** Shown in its SI unit. */
+  public RequirementOutcome(
+      Path file,
+      TextRange range,
+      String text,
+      RequirementStatus status,
+      OptionalDouble value,
+      OptionalDouble bound,
+      OptionalDouble margin,
+      String siUnit,
+      String reason) {
+    this(file, range, text, status, value, bound, margin, siUnit, reason, siUnit);
+  }
 
   public static RequirementOutcome notEvaluated(
       Path file, TextRange range, String text, String reason) {

@@ -114,15 +114,7 @@ final class SafetyVerdicts {
 
   private static RequirementEvaluator.Verdict withNote(
       RequirementEvaluator.Verdict v, String note) {
-    return new RequirementEvaluator.Verdict(
-        v.evaluated(),
-        v.pass(),
-        v.value(),
-        v.bound(),
-        v.margin(),
-        v.unit(),
-        note,
-        v.valueIsFloor());
+    return v.withText(note);
   }
 
   /**

@@ -63,8 +63,15 @@ final class TextReport {
             .append(": ")
             .append(oneLine(r.text()));
     if (r.value().isPresent()) {
-      line.append(" (value ").append(VerdictText.format(r.value().getAsDouble(), r.siUnit()));
-      r.margin().ifPresent(m -> line.append(", margin ").append(VerdictText.format(m, r.siUnit())));
+      double value = r.value().getAsDouble();
+      line.append(" (value ").append(VerdictText.format(value, r.shownUnit()));
+      r.margin()
+          .ifPresent(
+              m ->
+                  line.append(", margin ")
+                      .append(
+                          VerdictText.margin(
+                              value, r.bound().orElse(Double.NaN), m, r.shownUnit())));
       line.append(')');
     }
     if (r.reason() != null && !r.reason().isBlank()) {
