@@ -150,12 +150,16 @@ public final class Analyzer {
         v.unit().equals("class") ? OptionalDouble.empty() : OptionalDouble.of(v.margin()),
         v.unit(),
         v.text(),
-        v.shownUnit());
+        v.shownUnit(),
+        v.valueIsFloor());
   }
 
   private static String verdict(
       String lead, ResolvedRequirement r, RequirementEvaluator.Verdict v) {
-    String what = r.yield().isPresent() ? "yield" : r.measure().map(m -> m.word()).orElse("value");
+    String what =
+        r.yield().isPresent()
+            ? "yield"
+            : !v.what().isEmpty() ? v.what() : r.measure().map(m -> m.word()).orElse("value");
     return lead
         + ": "
         + what

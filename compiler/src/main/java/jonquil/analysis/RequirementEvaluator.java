@@ -24,7 +24,10 @@ final class RequirementEvaluator {
   /** Largest DOP that still counts as 'unpolarized'. */
   static final double UNPOLARIZED_DOP = 0.01;
 
-  /** The verdict on one criterion. */
+  /**
+   * The verdict on one criterion. {@code what} names the measure it judged when that is not the
+   * requirement's own (a further condition of a compound requirement).
+   */
   record Verdict(
       boolean evaluated,
       boolean pass,
@@ -34,7 +37,8 @@ final class RequirementEvaluator {
       String unit,
       String text,
       boolean valueIsFloor,
-      String shownUnit) {
+      String shownUnit,
+      String what) {
     /** A value that was computed (not only bounded from below), shown in its SI unit. */
     Verdict(
         boolean evaluated,
@@ -44,16 +48,22 @@ final class RequirementEvaluator {
         double margin,
         String unit,
         String text) {
-      this(evaluated, pass, value, bound, margin, unit, text, false, unit);
+      this(evaluated, pass, value, bound, margin, unit, text, false, unit, "");
     }
 
     Verdict withText(String newText) {
       return new Verdict(
-          evaluated, pass, value, bound, margin, unit, newText, valueIsFloor, shownUnit);
+          evaluated, pass, value, bound, margin, unit, newText, valueIsFloor, shownUnit, what);
     }
 
     Verdict shownIn(String shown) {
-      return new Verdict(evaluated, pass, value, bound, margin, unit, text, valueIsFloor, shown);
+      return new Verdict(
+          evaluated, pass, value, bound, margin, unit, text, valueIsFloor, shown, what);
+    }
+
+    Verdict about(String measure) {
+      return new Verdict(
+          evaluated, pass, value, bound, margin, unit, text, valueIsFloor, shownUnit, measure);
     }
 
     static Verdict notEvaluated(String reason) {
@@ -137,6 +147,9 @@ final class RequirementEvaluator {
         return v;
       }
       v = v.shownIn(BoundText.shownUnit(r, c, v.unit()));
+      if (r.measure().isPresent() && c.measure() != r.measure().get()) {
+        v = v.about(c.measure().word());
+      }
       if (!v.pass()) {
         failed.add(BoundText.condition(r, c));
       }
@@ -370,7 +383,7 @@ final class RequirementEvaluator {
     double edge = c.relation() == ResolvedRequirement.Relation.WITHIN ? c.high() : low;
     // The true margin is no larger than this when failing, no smaller when passing.
     double margin = known ? floor - edge : edge - floor;
-    return new Verdict(true, known, floor, edge, margin, unit, note, true, unit);
+    return new Verdict(true, known, floor, edge, margin, unit, note, true, unit, "");
   }
 
   private static Verdict verdict(

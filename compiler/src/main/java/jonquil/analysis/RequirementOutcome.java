@@ -8,6 +8,8 @@ import jonquil.source.TextRange;
  * The verdict on one requirement line: computed value, bound and margin in SI units (the unit is
  * named by {@code siUnit}), plus a reason when it was not evaluated. {@code shownUnit} is the unit
  * people read them in, that of the bound as written ("dB", "%"); a hazard class has no margin.
+ * {@code valueIsLowerBound}: the value was not computed, only known to be at least this (a source
+ * above Class 3R is at least Class 3B).
  */
 public record RequirementOutcome(
     Path file,
@@ -19,7 +21,8 @@ public record RequirementOutcome(
     OptionalDouble margin,
     String siUnit,
     String reason,
-    String shownUnit) {
+    String shownUnit,
+    boolean valueIsLowerBound) {
 
   /** Shown in its SI unit. */
   public RequirementOutcome(
@@ -32,7 +35,7 @@ public record RequirementOutcome(
       OptionalDouble margin,
       String siUnit,
       String reason) {
-    this(file, range, text, status, value, bound, margin, siUnit, reason, siUnit);
+    this(file, range, text, status, value, bound, margin, siUnit, reason, siUnit, false);
   }
 
   public static RequirementOutcome notEvaluated(

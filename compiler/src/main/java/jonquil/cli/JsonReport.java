@@ -124,7 +124,13 @@ final class JsonReport {
     o.add("reason", textOrNull(r.reason()));
     JsonObject shown = new JsonObject();
     shown.add("unit", textOrNull(r.shownUnit()));
-    shown.add("value", shownText(r.value(), r.shownUnit()));
+    o.addProperty("value_is_lower_bound", r.valueIsLowerBound());
+    shown.add(
+        "value",
+        r.valueIsLowerBound() && r.value().isPresent()
+            ? new JsonPrimitive(
+                "at least " + VerdictText.format(r.value().getAsDouble(), r.shownUnit()))
+            : shownText(r.value(), r.shownUnit()));
     shown.add("bound", shownText(r.bound(), r.shownUnit()));
     shown.add(
         "margin",

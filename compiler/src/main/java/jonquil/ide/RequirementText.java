@@ -30,7 +30,9 @@ final class RequirementText {
           .append(" | ")
           .append(
               o.value().isPresent()
-                  ? MarkdownText.cell(VerdictText.format(o.value().getAsDouble(), o.shownUnit()))
+                  ? MarkdownText.cell(
+                      (o.valueIsLowerBound() ? "at least " : "")
+                          + VerdictText.format(o.value().getAsDouble(), o.shownUnit()))
                   : "—")
           .append(" | ")
           .append(

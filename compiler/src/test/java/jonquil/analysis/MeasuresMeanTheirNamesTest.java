@@ -124,6 +124,7 @@ class MeasuresMeanTheirNamesTest {
     assertEquals(RequirementStatus.FAIL, r.requirements().get(0).status());
     String m = verdictMessage(r);
     assertTrue(m.contains("'dop <= 0.5'"), m);
+    assertTrue(m.startsWith("requirement not met: dop is"), m);
     assertFalse(m.contains("'is linear 0 deg ± 2 deg'"), m);
   }
 }

@@ -102,6 +102,12 @@ class NotEvaluatedFailsClosedTest {
             .get(0)
             .getAsJsonObject();
     assertEquals("fail", req.get("status").getAsString());
+    // A class is a label, in JSON too, and a class has no numeric margin.
+    assertEquals("3B", req.get("value").getAsString());
+    assertEquals("1", req.get("bound").getAsString());
+    assertTrue(req.get("margin").isJsonNull());
+    assertTrue(req.get("value_is_lower_bound").getAsBoolean());
+    assertEquals("at least 3B", req.getAsJsonObject("shown").get("value").getAsString());
   }
 
   @Test
