@@ -221,7 +221,10 @@ final class RequirementEvaluator {
                   "magnitude of the ellipticity angle");
       case POLARIZATION, HANDEDNESS -> at.isEmpty() ? unreached(r) : state(c, at.get().light());
       case IRRADIANCE -> exposure(r, c, s, e -> OptionalDouble.of(e.averageIrradiance()), "W/m2");
-      case PEAK_IRRADIANCE -> exposure(r, c, s, RequirementEvaluator::peakIrradiance, "W/m2");
+      case PEAK_IRRADIANCE ->
+          exposure(r, c, s, e -> OptionalDouble.of(e.timeAndSpacePeakIrradiance()), "W/m2");
+      case AVERAGE_PEAK_IRRADIANCE ->
+          exposure(r, c, s, e -> OptionalDouble.of(e.peakIrradiance()), "W/m2");
       case FLUENCE -> exposure(r, c, s, BeamExposure::peakFluence, "J/m2");
       case PEAK_FIELD -> exposure(r, c, s, e -> OptionalDouble.of(e.peakField()), "V/m");
       case PEAK_POWER -> exposure(r, c, s, BeamExposure::peakPower, "W");
@@ -230,17 +233,6 @@ final class RequirementEvaluator {
       case DAMAGE_MARGIN -> damage(r, c, s, model);
       case HAZARD_CLASS, NOHD, EXPOSURE, EYEWEAR_OD -> SafetyVerdicts.evaluate(r, c, s, model);
     };
-  }
-
-  /**
-   * The Gaussian peak irradiance; for a pulsed beam, of the peak power (the pulse's peak, not the
-   * average's).
-   */
-  private static OptionalDouble peakIrradiance(BeamExposure e) {
-    return OptionalDouble.of(
-        e.peakPower().isPresent()
-            ? jonquil.optics.beam.Irradiance.peak(e.peakPower().getAsDouble(), e.beamRadius())
-            : e.peakIrradiance());
   }
 
   /**

@@ -127,4 +127,31 @@ class MeasuresMeanTheirNamesTest {
     assertTrue(m.startsWith("requirement not met: dop is"), m);
     assertFalse(m.contains("'is linear 0 deg ± 2 deg'"), m);
   }
+
+  @Test
+  void peakIrradianceIsTheTimeAndSpacePeakAndTheAveragesPeakHasItsOwnName() {
+    // 1 mJ in 10 ns at 1 kHz, 1 mm waist: average power 1 W, pulse peak power E/τ = 100 kW
+    // (definition, rectangular pulse); Gaussian spatial peak 2P/(πw²) (definition of the 1/e²
+    // radius). The time-and-space peak is 1e5 times the spatial peak of the average.
+    String pulsed =
+        "source s { wavelength 1064 nm; pulse_energy 1 mJ; pulse_duration 10 ns;"
+            + " repetition_rate 1 kHz; beam waist 1 mm }\n";
+    double w =
+        Bench.solve(pulsed + "probe mid\ntrain t { s -> 10 mm -> mid }\n")
+            .port("mid")
+            .orElseThrow()
+            .exposure()
+            .orElseThrow()
+            .beamRadius();
+    RequirementOutcome peak =
+        check(pulsed, "peak irradiance at mid <= 1 W/cm2").requirements().get(0);
+    assertEquals(
+        2 * 1e5 / (Math.PI * w * w), peak.value().getAsDouble(), 1e-6 * peak.value().getAsDouble());
+    RequirementOutcome averagePeak =
+        check(pulsed, "peak average irradiance at mid <= 1 W/cm2").requirements().get(0);
+    assertEquals(
+        2 * 1.0 / (Math.PI * w * w),
+        averagePeak.value().getAsDouble(),
+        1e-6 * averagePeak.value().getAsDouble());
+  }
 }
