@@ -51,12 +51,14 @@ public record Result(
   }
 
   /**
-   * True when the CI gate must fail: any error (failed requirements are errors too), or any warning
+   * True when the CI gate must fail: any error (failed requirements are errors too), any
+   * requirement not evaluated (fail closed: what cannot be evaluated does not pass), or any warning
    * when strict.
    */
   public boolean fails(boolean strict) {
     return count(Severity.ERROR) > 0
         || count(RequirementStatus.FAIL) > 0
+        || count(RequirementStatus.NOT_EVALUATED) > 0
         || (strict && count(Severity.WARNING) > 0);
   }
 

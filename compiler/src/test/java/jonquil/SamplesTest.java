@@ -95,7 +95,16 @@ class SamplesTest {
           .append(r.status().word())
           .append(": ")
           .append(r.text());
-      r.value().ifPresent(v -> out.append(" = ").append(v).append(' ').append(r.siUnit()));
+      // A hazard class is a label ("3R"), never a number.
+      r.value()
+          .ifPresent(
+              v ->
+                  out.append(" = ")
+                      .append(
+                          r.siUnit().equals("class")
+                              ? "Class "
+                                  + jonquil.safety.HazardClass.ofRank(v).orElseThrow().label()
+                              : v + " " + r.siUnit()));
       r.margin().ifPresent(m -> out.append(", margin ").append(m));
       out.append(" [").append(r.reason()).append("]\n");
     }

@@ -47,12 +47,23 @@ public final class Analyzer {
     List<Diagnostic> diagnostics = new ArrayList<>();
     List<RequirementOutcome> outcomes = new ArrayList<>();
     for (ResolvedRequirement r : model.requirements()) {
+      boolean deferred = r.yield().isPresent() && !yields;
       RequirementEvaluator.Verdict v =
-          r.yield().isPresent() && !yields
+          deferred
               ? RequirementEvaluator.Verdict.notEvaluated(
                   "yields are computed by 'jonquil check', not while typing")
               : RequirementEvaluator.evaluate(r, model, solve);
       outcomes.add(outcome(r, v));
+      if (!v.evaluated() && !deferred) {
+        // Fail closed: what cannot be evaluated is not met. A yield left to the CI gate while
+        // typing is no finding about the spec, so the editor shows no error for it.
+        diagnostics.add(
+            Diagnostic.of(
+                DiagnosticCode.REQUIREMENT_NOT_EVALUATED,
+                r.file(),
+                r.syntax().range(),
+                "requirement not evaluated, so not met: " + v.text()));
+      }
       if (v.evaluated()) {
         diagnostics.add(
             v.pass()
@@ -135,22 +146,30 @@ public final class Analyzer {
         v.pass() ? RequirementStatus.PASS : RequirementStatus.FAIL,
         OptionalDouble.of(v.value()),
         OptionalDouble.of(v.bound()),
-        OptionalDouble.of(v.margin()),
+        // A class is a label: how far one class is from another is no number.
+        v.unit().equals("class") ? OptionalDouble.empty() : OptionalDouble.of(v.margin()),
         v.unit(),
-        v.text());
+        v.text(),
+        v.shownUnit(),
+        v.valueIsFloor());
   }
 
   private static String verdict(
       String lead, ResolvedRequirement r, RequirementEvaluator.Verdict v) {
-    String what = r.yield().isPresent() ? "yield" : r.measure().map(m -> m.word()).orElse("value");
+    String what =
+        r.yield().isPresent()
+            ? "yield"
+            : !v.what().isEmpty() ? v.what() : r.measure().map(m -> m.word()).orElse("value");
     return lead
         + ": "
         + what
-        + " is "
-        + VerdictText.format(v.value(), v.unit())
+        + (v.valueIsFloor() ? " is at least " : " is ")
+        + VerdictText.format(v.value(), v.shownUnit())
         + (v.text().isEmpty() ? "" : " (" + v.text() + ")")
         + ", bound "
-        + VerdictText.format(v.bound(), v.unit())
-        + (v.unit().equals("class") ? "" : ", margin " + VerdictText.format(v.margin(), v.unit()));
+        + VerdictText.format(v.bound(), v.shownUnit())
+        + (v.unit().equals("class")
+            ? ""
+            : ", margin " + VerdictText.margin(v.value(), v.bound(), v.margin(), v.shownUnit()));
   }
 }

@@ -20,6 +20,17 @@ public record BeamExposure(
     double peakField,
     double index) {
 
+  /**
+   * The irradiance at its peak in time and space (what 'peak irradiance' means): 2P/(πw²) with the
+   * pulse's peak power for a pulsed beam; for a continuous one, {@link #peakIrradiance}, the
+   * spatial peak of the average.
+   */
+  public double timeAndSpacePeakIrradiance() {
+    return peakPower.isPresent()
+        ? Irradiance.peak(peakPower.getAsDouble(), beamRadius)
+        : peakIrradiance;
+  }
+
   /** Vacuum permittivity, F/m (CODATA 2018 recommended value). */
   public static final double EPSILON_0 = 8.8541878128e-12;
 

@@ -24,7 +24,10 @@ final class RequirementEvaluator {
   /** Largest DOP that still counts as 'unpolarized'. */
   static final double UNPOLARIZED_DOP = 0.01;
 
-  /** The verdict on one criterion. */
+  /**
+   * The verdict on one criterion. {@code what} names the measure it judged when that is not the
+   * requirement's own (a further condition of a compound requirement).
+   */
   record Verdict(
       boolean evaluated,
       boolean pass,
@@ -32,7 +35,37 @@ final class RequirementEvaluator {
       double bound,
       double margin,
       String unit,
-      String text) {
+      String text,
+      boolean valueIsFloor,
+      String shownUnit,
+      String what) {
+    /** A value that was computed (not only bounded from below), shown in its SI unit. */
+    Verdict(
+        boolean evaluated,
+        boolean pass,
+        double value,
+        double bound,
+        double margin,
+        String unit,
+        String text) {
+      this(evaluated, pass, value, bound, margin, unit, text, false, unit, "");
+    }
+
+    Verdict withText(String newText) {
+      return new Verdict(
+          evaluated, pass, value, bound, margin, unit, newText, valueIsFloor, shownUnit, what);
+    }
+
+    Verdict shownIn(String shown) {
+      return new Verdict(
+          evaluated, pass, value, bound, margin, unit, text, valueIsFloor, shown, what);
+    }
+
+    Verdict about(String measure) {
+      return new Verdict(
+          evaluated, pass, value, bound, margin, unit, text, valueIsFloor, shownUnit, measure);
+    }
+
     static Verdict notEvaluated(String reason) {
       return new Verdict(false, false, Double.NaN, Double.NaN, Double.NaN, "", reason);
     }
@@ -107,16 +140,35 @@ final class RequirementEvaluator {
 
   static Verdict evaluate(ResolvedRequirement r, ResolvedModel model, TrainSolution s) {
     Verdict worst = null;
+    java.util.List<String> failed = new java.util.ArrayList<>();
     for (Criterion c : r.criteria()) {
       Verdict v = criterion(r, c, s, model);
       if (!v.evaluated()) {
         return v;
       }
-      if (worst == null || v.margin() < worst.margin()) {
+      v = v.shownIn(BoundText.shownUnit(r, c, v.unit()));
+      if (r.measure().isPresent() && c.measure() != r.measure().get()) {
+        v = v.about(c.measure().word());
+      }
+      if (!v.pass()) {
+        failed.add(BoundText.condition(r, c));
+      }
+      // A failed condition outranks a passed one whatever their margins (their units differ).
+      if (worst == null
+          || (worst.pass() && !v.pass())
+          || (worst.pass() == v.pass() && v.margin() < worst.margin())) {
         worst = v;
       }
     }
-    return worst == null ? Verdict.notEvaluated("the requirement has no bound") : worst;
+    if (worst == null) {
+      return Verdict.notEvaluated("the requirement has no bound");
+    }
+    if (r.criteria().size() > 1 && !failed.isEmpty()) {
+      String which =
+          "fails " + String.join(" and ", failed.stream().map(f -> "'" + f + "'").toList());
+      worst = worst.withText(worst.text().isEmpty() ? which : which + "; " + worst.text());
+    }
+    return worst;
   }
 
   private static Verdict criterion(
@@ -154,12 +206,25 @@ final class RequirementEvaluator {
       case EXTINCTION ->
           at.isEmpty() ? unreached(r) : compare(c, at.get().light().extinctionRatio(), "", "");
       case AZIMUTH ->
-          at.isEmpty() ? unreached(r) : compare(c, at.get().light().azimuth(), "rad", "");
+          at.isEmpty()
+              ? unreached(r)
+              : compare(c, nearBound(c, at.get().light().azimuth()), "rad", "");
+      // Without a handedness a bound on ellipticity is on its size; 'handedness is ...' bounds
+      // the sign.
       case ELLIPTICITY ->
-          at.isEmpty() ? unreached(r) : compare(c, at.get().light().ellipticityAngle(), "rad", "");
+          at.isEmpty()
+              ? unreached(r)
+              : compare(
+                  c,
+                  Math.abs(at.get().light().ellipticityAngle()),
+                  "rad",
+                  "magnitude of the ellipticity angle");
       case POLARIZATION, HANDEDNESS -> at.isEmpty() ? unreached(r) : state(c, at.get().light());
       case IRRADIANCE -> exposure(r, c, s, e -> OptionalDouble.of(e.averageIrradiance()), "W/m2");
-      case PEAK_IRRADIANCE -> exposure(r, c, s, RequirementEvaluator::peakIrradiance, "W/m2");
+      case PEAK_IRRADIANCE ->
+          exposure(r, c, s, e -> OptionalDouble.of(e.timeAndSpacePeakIrradiance()), "W/m2");
+      case AVERAGE_PEAK_IRRADIANCE ->
+          exposure(r, c, s, e -> OptionalDouble.of(e.peakIrradiance()), "W/m2");
       case FLUENCE -> exposure(r, c, s, BeamExposure::peakFluence, "J/m2");
       case PEAK_FIELD -> exposure(r, c, s, e -> OptionalDouble.of(e.peakField()), "V/m");
       case PEAK_POWER -> exposure(r, c, s, BeamExposure::peakPower, "W");
@@ -168,17 +233,6 @@ final class RequirementEvaluator {
       case DAMAGE_MARGIN -> damage(r, c, s, model);
       case HAZARD_CLASS, NOHD, EXPOSURE, EYEWEAR_OD -> SafetyVerdicts.evaluate(r, c, s, model);
     };
-  }
-
-  /**
-   * The Gaussian peak irradiance; for a pulsed beam, of the peak power (the pulse's peak, not the
-   * average's).
-   */
-  private static OptionalDouble peakIrradiance(BeamExposure e) {
-    return OptionalDouble.of(
-        e.peakPower().isPresent()
-            ? jonquil.optics.beam.Irradiance.peak(e.peakPower().getAsDouble(), e.beamRadius())
-            : e.peakIrradiance());
   }
 
   /**
@@ -275,11 +329,12 @@ final class RequirementEvaluator {
       case BELOW -> verdict(value < low, value, low, low - value, unit, note);
       case AT_LEAST -> verdict(value >= low, value, low, value - low, unit, note);
       case ABOVE -> verdict(value > low, value, low, value - low, unit, note);
+      // The end nearest to being broken, with its margin.
       case WITHIN ->
           verdict(
               value >= low && value <= c.high(),
               value,
-              value < low ? low : c.high(),
+              value - low <= c.high() - value ? low : c.high(),
               Math.min(value - low, c.high() - value),
               unit,
               note);
@@ -295,6 +350,32 @@ final class RequirementEvaluator {
       // A stated state is judged by state(), never by a number.
       case IS -> throw new IllegalArgumentException("'is' bounds a state, not a number");
     };
+  }
+
+  /**
+   * A value that was not computed but is known to be at least {@code floor}: a bound that floor
+   * already breaks fails, one it already meets passes, and otherwise the value stays unknown.
+   */
+  static Verdict knownAtLeast(
+      Criterion c, double floor, String unit, String note, String unknownReason) {
+    double low = c.low();
+    Boolean known =
+        switch (c.relation()) {
+          case AT_MOST -> floor > low ? false : null;
+          case BELOW -> floor >= low ? false : null;
+          case EQUAL -> floor > low ? false : null;
+          case WITHIN -> floor > c.high() ? false : null;
+          case AT_LEAST -> floor >= low ? true : null;
+          case ABOVE -> floor > low ? true : null;
+          case IS -> null;
+        };
+    if (known == null) {
+      return Verdict.notEvaluated(unknownReason);
+    }
+    double edge = c.relation() == ResolvedRequirement.Relation.WITHIN ? c.high() : low;
+    // The true margin is no larger than this when failing, no smaller when passing.
+    double margin = known ? floor - edge : edge - floor;
+    return new Verdict(true, known, floor, edge, margin, unit, note, true, unit, "");
   }
 
   private static Verdict verdict(
@@ -344,7 +425,7 @@ final class RequirementEvaluator {
         yield new Verdict(
             true,
             margin >= 0,
-            light.azimuth(),
+            az.si() + wrapHalfTurn(light.azimuth() - az.si()),
             az.si(),
             margin,
             "rad",
@@ -376,13 +457,30 @@ final class RequirementEvaluator {
             Math.min(
                 tol - Math.abs(wrapHalfTurn(light.azimuth() - az.si())),
                 tol - Math.abs(chi - wantedChi));
-        yield new Verdict(true, margin >= 0, light.azimuth(), az.si(), margin, "rad", "");
+        yield new Verdict(
+            true,
+            margin >= 0,
+            az.si() + wrapHalfTurn(light.azimuth() - az.si()),
+            az.si(),
+            margin,
+            "rad",
+            "");
       }
       case UNPOLARIZED -> {
         double margin = UNPOLARIZED_DOP - light.dop();
         yield new Verdict(true, margin >= 0, light.dop(), UNPOLARIZED_DOP, margin, "", "");
       }
     };
+  }
+
+  /**
+   * A linear azimuth in the half turn the bound uses: the same polarization as {@code azimuth},
+   * within 90° of the bound's middle (90° ± 2° reads light at −88.2° as 91.8°).
+   */
+  static double nearBound(Criterion c, double azimuth) {
+    double middle =
+        c.relation() == ResolvedRequirement.Relation.WITHIN ? (c.low() + c.high()) / 2 : c.low();
+    return middle + wrapHalfTurn(azimuth - middle);
   }
 
   /** An azimuth difference folded into (−90°, 90°]: linear polarization repeats every half turn. */

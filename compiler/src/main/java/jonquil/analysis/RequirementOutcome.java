@@ -6,7 +6,10 @@ import jonquil.source.TextRange;
 
 /**
  * The verdict on one requirement line: computed value, bound and margin in SI units (the unit is
- * named by {@code siUnit}), plus a reason when it was not evaluated.
+ * named by {@code siUnit}), plus a reason when it was not evaluated. {@code shownUnit} is the unit
+ * people read them in, that of the bound as written ("dB", "%"); a hazard class has no margin.
+ * {@code valueIsLowerBound}: the value was not computed, only known to be at least this (a source
+ * above Class 3R is at least Class 3B).
  */
 public record RequirementOutcome(
     Path file,
@@ -17,7 +20,23 @@ public record RequirementOutcome(
     OptionalDouble bound,
     OptionalDouble margin,
     String siUnit,
-    String reason) {
+    String reason,
+    String shownUnit,
+    boolean valueIsLowerBound) {
+
+  /** Shown in its SI unit. */
+  public RequirementOutcome(
+      Path file,
+      TextRange range,
+      String text,
+      RequirementStatus status,
+      OptionalDouble value,
+      OptionalDouble bound,
+      OptionalDouble margin,
+      String siUnit,
+      String reason) {
+    this(file, range, text, status, value, bound, margin, siUnit, reason, siUnit, false);
+  }
 
   public static RequirementOutcome notEvaluated(
       Path file, TextRange range, String text, String reason) {

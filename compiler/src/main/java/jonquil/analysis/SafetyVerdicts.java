@@ -51,9 +51,17 @@ final class SafetyVerdicts {
       case HAZARD_CLASS:
         {
           Outcome<HazardClass> o = SafetyModel.hazardClass(element.get(), at);
+          if (!o.evaluated() && o.atLeast().isPresent()) {
+            HazardClass floor = o.atLeast().get();
+            return RequirementEvaluator.knownAtLeast(
+                c,
+                floor.rank(),
+                "class",
+                o.reason() + "; " + brief(o.standard()) + "; " + o.caution(),
+                unevaluated(o));
+          }
           if (!o.evaluated()) {
-            return RequirementEvaluator.Verdict.notEvaluated(
-                o.reason() + " (" + o.standard() + ")");
+            return RequirementEvaluator.Verdict.notEvaluated(unevaluated(o));
           }
           RequirementEvaluator.Verdict v =
               RequirementEvaluator.compare(c, o.get().rank(), "class", "");
@@ -67,8 +75,7 @@ final class SafetyVerdicts {
         {
           var od = SafetyModel.eyewear(wavelength, at, exposureTime);
           if (!od.evaluated()) {
-            return RequirementEvaluator.Verdict.notEvaluated(
-                od.reason() + " (" + od.standard() + ")");
+            return RequirementEvaluator.Verdict.notEvaluated(unevaluated(od));
           }
           RequirementEvaluator.Verdict v =
               RequirementEvaluator.compare(c, od.get().atAperture(), "OD", "");
@@ -86,17 +93,28 @@ final class SafetyVerdicts {
 
   private static RequirementEvaluator.Verdict verdict(Criterion c, Outcome<Double> o, String unit) {
     if (!o.evaluated()) {
-      return RequirementEvaluator.Verdict.notEvaluated(o.reason() + " (" + o.standard() + ")");
+      return RequirementEvaluator.Verdict.notEvaluated(unevaluated(o));
     }
     return withNote(
         RequirementEvaluator.compare(c, o.get(), unit, ""),
         brief(o.standard()) + "; " + o.caution());
   }
 
+  /**
+   * Why a safety figure is missing. A gap in the tables is no all-clear, so the reason keeps the
+   * caution and sends the reader to a person who can assess the emission.
+   */
+  static String unevaluated(Outcome<?> o) {
+    return o.reason()
+        + " ("
+        + o.standard()
+        + "); not evaluated here, so a qualified person must assess the emission. "
+        + o.caution();
+  }
+
   private static RequirementEvaluator.Verdict withNote(
       RequirementEvaluator.Verdict v, String note) {
-    return new RequirementEvaluator.Verdict(
-        v.evaluated(), v.pass(), v.value(), v.bound(), v.margin(), v.unit(), note);
+    return v.withText(note);
   }
 
   /**

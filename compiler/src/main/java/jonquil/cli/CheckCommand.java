@@ -43,8 +43,8 @@ import picocli.CommandLine.Spec;
       "JSON and SARIF paths are relative to it.",
       "",
       "Exit status:",
-      "  0  no error and no failed requirement (warnings too with --strict)",
-      "  1  an error, a failed requirement, or with --strict a warning",
+      "  0  no error and every requirement met (no warning either with --strict)",
+      "  1  an error, a requirement failed or not evaluated, or with --strict a warning",
       "  2  bad usage, an input that cannot be read, or an internal error",
       ""
     })

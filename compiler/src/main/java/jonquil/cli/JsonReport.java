@@ -12,6 +12,7 @@ import java.util.OptionalDouble;
 import jonquil.Result;
 import jonquil.analysis.RequirementOutcome;
 import jonquil.analysis.RequirementStatus;
+import jonquil.analysis.VerdictText;
 import jonquil.diag.Diagnostic;
 import jonquil.diag.Edit;
 import jonquil.diag.Fix;
@@ -25,7 +26,7 @@ import jonquil.source.TextRange;
  * understand; adding fields does not change it.
  */
 final class JsonReport {
-  static final String SCHEMA_ID = "jonquil.check/1";
+  static final String SCHEMA_ID = "jonquil.check/2";
 
   private static final Gson GSON =
       new GsonBuilder().setPrettyPrinting().serializeNulls().disableHtmlEscaping().create();
@@ -115,12 +116,49 @@ final class JsonReport {
     o.add("range", range(run, r.file(), r.range()));
     o.addProperty("text", r.text());
     o.addProperty("status", r.status().word());
-    o.add("value", number(r.value()));
-    o.add("bound", number(r.bound()));
-    o.add("margin", number(r.margin()));
+    boolean hazardClass = r.siUnit().equals("class");
+    o.add("value", hazardClass ? label(r.value()) : number(r.value()));
+    o.add("bound", hazardClass ? label(r.bound()) : number(r.bound()));
+    o.add("margin", hazardClass ? JsonNull.INSTANCE : number(r.margin()));
     o.add("unit", textOrNull(r.siUnit()));
     o.add("reason", textOrNull(r.reason()));
+    JsonObject shown = new JsonObject();
+    shown.add("unit", textOrNull(r.shownUnit()));
+    o.addProperty("value_is_lower_bound", r.valueIsLowerBound());
+    shown.add(
+        "value",
+        r.valueIsLowerBound() && r.value().isPresent()
+            ? new JsonPrimitive(
+                "at least " + VerdictText.format(r.value().getAsDouble(), r.shownUnit()))
+            : shownText(r.value(), r.shownUnit()));
+    shown.add("bound", shownText(r.bound(), r.shownUnit()));
+    shown.add(
+        "margin",
+        r.margin().isPresent() && r.value().isPresent() && r.bound().isPresent()
+            ? new JsonPrimitive(
+                VerdictText.margin(
+                    r.value().getAsDouble(),
+                    r.bound().getAsDouble(),
+                    r.margin().getAsDouble(),
+                    r.shownUnit()))
+            : JsonNull.INSTANCE);
+    o.add("shown", shown);
     return o;
+  }
+
+  /** A hazard class as the standard writes it ("3R"); the rank it is compared by is internal. */
+  private static JsonElement label(OptionalDouble rank) {
+    return rank.isPresent()
+        ? jonquil.safety.HazardClass.ofRank(rank.getAsDouble())
+            .<JsonElement>map(c -> new JsonPrimitive(c.label()))
+            .orElse(JsonNull.INSTANCE)
+        : JsonNull.INSTANCE;
+  }
+
+  private static JsonElement shownText(OptionalDouble value, String unit) {
+    return value.isPresent()
+        ? new JsonPrimitive(VerdictText.format(value.getAsDouble(), unit))
+        : JsonNull.INSTANCE;
   }
 
   private static JsonObject summary(Result result) {

@@ -32,13 +32,23 @@ final class TextReport {
       }
     }
     for (RequirementOutcome r : result.requirements()) {
-      // Evaluated verdicts are already findings (J609 failed, J611 met); list the others.
-      if (r.status() == RequirementStatus.NOT_EVALUATED) {
+      // Verdicts are already findings (J609 failed, J611 met, J613 not evaluated); list the
+      // others, those a spec's errors kept from being evaluated.
+      if (r.status() == RequirementStatus.NOT_EVALUATED && !isFinding(result, r)) {
         out.println(requirement(run, r));
       }
     }
     out.println(summary(result));
     out.flush();
+  }
+
+  private static boolean isFinding(Result result, RequirementOutcome r) {
+    return result.diagnostics().stream()
+        .anyMatch(
+            d ->
+                d.code() == jonquil.diag.DiagnosticCode.REQUIREMENT_NOT_EVALUATED
+                    && d.file().equals(r.file())
+                    && d.range().equals(r.range()));
   }
 
   /**
@@ -53,8 +63,15 @@ final class TextReport {
             .append(": ")
             .append(oneLine(r.text()));
     if (r.value().isPresent()) {
-      line.append(" (value ").append(VerdictText.format(r.value().getAsDouble(), r.siUnit()));
-      r.margin().ifPresent(m -> line.append(", margin ").append(VerdictText.format(m, r.siUnit())));
+      double value = r.value().getAsDouble();
+      line.append(" (value ").append(VerdictText.format(value, r.shownUnit()));
+      r.margin()
+          .ifPresent(
+              m ->
+                  line.append(", margin ")
+                      .append(
+                          VerdictText.margin(
+                              value, r.bound().orElse(Double.NaN), m, r.shownUnit())));
       line.append(')');
     }
     if (r.reason() != null && !r.reason().isBlank()) {

@@ -166,7 +166,9 @@ final class ValuesJson {
               j.add("beam_radius_m", number(e.beamRadius()));
               JsonObject irradiance = new JsonObject();
               irradiance.add("average", number(e.averageIrradiance()));
-              irradiance.add("peak", number(e.peakIrradiance()));
+              irradiance.add("average_peak", number(e.peakIrradiance()));
+              // 'peak' is the peak in time and space, as in the requirement 'peak irradiance'.
+              irradiance.add("peak", number(e.timeAndSpacePeakIrradiance()));
               j.add("irradiance_W_m2", irradiance);
               e.pulseEnergy().ifPresent(x -> j.add("pulse_energy_J", number(x)));
               e.peakPower().ifPresent(x -> j.add("peak_power_W", number(x)));

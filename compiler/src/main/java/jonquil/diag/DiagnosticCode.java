@@ -92,6 +92,8 @@ public enum DiagnosticCode {
   APERTURE_CLIPS("J612", Severity.WARNING, "An aperture cuts off a significant part of the beam"),
   STRAY_BEAM(
       "J610", Severity.NOTE, "Light leaves the train without reaching a probe, detector or dump"),
+  REQUIREMENT_NOT_EVALUATED(
+      "J613", Severity.ERROR, "A requirement cannot be evaluated, so it is not met (fail closed)"),
 
   // Limits and internals: J9xx
   INTERNAL_ERROR("J901", Severity.ERROR, "The checker failed internally; please report it"),

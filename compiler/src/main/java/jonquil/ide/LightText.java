@@ -51,7 +51,8 @@ final class LightText {
     MarkdownText.para(md)
         .append("**Light** (power in the table frame, summed over the source's lines)\n\n");
     md.append(
-        "| | power | beam radius | irradiance avg / peak | peak field |\n|---|---|---|---|---|\n");
+        "| | power | beam radius | irradiance avg / avg peak | peak field |\n"
+            + "|---|---|---|---|---|\n");
     for (Row row : rows) {
       Optional<BeamExposure> e = row.value().exposure();
       md.append("| ")
@@ -88,6 +89,8 @@ final class LightText {
                       .append(MarkdownText.q(x.pulseEnergy().getAsDouble(), Dimension.ENERGY))
                       .append(", peak power ")
                       .append(MarkdownText.q(x.peakPower().getAsDouble(), Dimension.POWER))
+                      .append(", peak irradiance (time and space) ")
+                      .append(MarkdownText.q(x.timeAndSpacePeakIrradiance(), Dimension.IRRADIANCE))
                       .append(", peak fluence ")
                       .append(MarkdownText.q(x.peakFluence().getAsDouble(), Dimension.FLUENCE))
                       .append('\n'));

@@ -30,17 +30,24 @@ final class RequirementText {
           .append(" | ")
           .append(
               o.value().isPresent()
-                  ? MarkdownText.cell(VerdictText.format(o.value().getAsDouble(), o.siUnit()))
+                  ? MarkdownText.cell(
+                      (o.valueIsLowerBound() ? "at least " : "")
+                          + VerdictText.format(o.value().getAsDouble(), o.shownUnit()))
                   : "—")
           .append(" | ")
           .append(
               o.bound().isPresent()
-                  ? MarkdownText.cell(VerdictText.format(o.bound().getAsDouble(), o.siUnit()))
+                  ? MarkdownText.cell(VerdictText.format(o.bound().getAsDouble(), o.shownUnit()))
                   : "—")
           .append(" | ")
           .append(
               o.margin().isPresent()
-                  ? MarkdownText.cell(VerdictText.format(o.margin().getAsDouble(), o.siUnit()))
+                  ? MarkdownText.cell(
+                      VerdictText.margin(
+                          o.value().orElse(Double.NaN),
+                          o.bound().orElse(Double.NaN),
+                          o.margin().getAsDouble(),
+                          o.shownUnit()))
                   : "—")
           .append(" |\n");
       if (!o.reason().isBlank()) {
@@ -52,7 +59,8 @@ final class RequirementText {
         .filter(
             d ->
                 d.code() == DiagnosticCode.REQUIREMENT_FAILED
-                    || d.code() == DiagnosticCode.REQUIREMENT_MET)
+                    || d.code() == DiagnosticCode.REQUIREMENT_MET
+                    || d.code() == DiagnosticCode.REQUIREMENT_NOT_EVALUATED)
         .findFirst()
         .ifPresent(
             (Diagnostic d) ->

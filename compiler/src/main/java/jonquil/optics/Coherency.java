@@ -208,18 +208,25 @@ public final class Coherency {
   }
 
   /**
-   * λmax/λmin of Φ: 1 for unpolarized light (and for no light, matching DOP = 0), infinite for
-   * fully polarized light.
+   * What a rotating ideal linear analyser sees, max/min over its angle: it passes I(θ) = ½(S0 + S1
+   * cos 2θ + S2 sin 2θ) (definition of the Stokes parameters), so the ratio is (S0 + L)/(S0 − L)
+   * with L = √(S1² + S2²). The circular and the unpolarized parts both lower it: 1 for circular or
+   * unpolarized light (and for no light), infinite only for pure linear light.
    */
   public double extinctionRatio() {
     double s0 = xx + yy;
     if (s0 <= 0) {
       return 1;
     }
-    double pol = Math.min(polarizedPower(), s0);
-    double max = (s0 + pol) / 2;
-    // det/λmax avoids the cancellation in (S0 − |S|)/2 for nearly pure states.
-    double min = (xx * yy - xyRe * xyRe - xyIm * xyIm) / max;
+    double s1 = xx - yy;
+    double s2 = 2 * xyRe;
+    double s3 = 2 * xyIm;
+    double linear = Math.min(Math.hypot(s1, s2), s0);
+    double max = (s0 + linear) / 2;
+    // (S0² − L²) = 4 det Φ + S3², which avoids the cancellation in (S0 − L)/2 for nearly pure
+    // linear states.
+    double det = Math.max(0, xx * yy - xyRe * xyRe - xyIm * xyIm);
+    double min = (4 * det + s3 * s3) / (2 * (s0 + linear));
     if (min * EXTINCTION_CEILING <= max) {
       return Double.POSITIVE_INFINITY;
     }

@@ -15,7 +15,17 @@ public enum Measure {
       "irradiance",
       "irradiance average",
       "average irradiance"),
+  /**
+   * The peak in time and space: for a pulsed beam the Gaussian centre at the pulse's peak power,
+   * for a continuous one the centre of the beam. The unqualified word 'peak' always means this.
+   */
   PEAK_IRRADIANCE(Bound.IRRADIANCE, Where.AT_OR_EVERYWHERE, "irradiance peak", "peak irradiance"),
+  /** The spatial peak of the average irradiance, 2P/(πw²) with the average power. */
+  AVERAGE_PEAK_IRRADIANCE(
+      Bound.IRRADIANCE,
+      Where.AT_OR_EVERYWHERE,
+      "irradiance average peak",
+      "peak average irradiance"),
   FLUENCE(Bound.FLUENCE, Where.AT_OR_EVERYWHERE, "fluence"),
   PEAK_FIELD(Bound.FIELD, Where.AT_OR_EVERYWHERE, "peak field", "field"),
   PEAK_POWER(Bound.POWER, Where.AT, "peak power"),

@@ -39,8 +39,11 @@ public final class Classifier {
   public static Outcome<HazardClass> classify(
       Emission e, double beamDiameterAtAperture, double divergence) {
     Outcome<Classification> c = assess(e, beamDiameterAtAperture, divergence);
-    return c.evaluated()
-        ? Outcome.of(c.get().hazardClass(), c.standard())
+    if (c.evaluated()) {
+      return Outcome.of(c.get().hazardClass(), c.standard());
+    }
+    return c.atLeast().isPresent()
+        ? Outcome.notEvaluatedAtLeast(c.atLeast().get().hazardClass(), c.reason(), c.standard())
         : Outcome.notEvaluated(c.reason(), c.standard());
   }
 
@@ -119,7 +122,8 @@ public final class Classifier {
           f3,
           "average power through condition 3 above the Class 3B AEL (0.5 W)");
     }
-    return Outcome.notEvaluated(
+    return Outcome.notEvaluatedAtLeast(
+        new Classification(HazardClass.CLASS_3B, f1, f3, "above the Class 3R AEL"),
         "above Class 3R; Class 3B or 4 depends on the single-pulse Class 3B AEL (Table 8),"
             + " which is not implemented",
         TABLES);
@@ -156,8 +160,11 @@ public final class Classifier {
   /** 1M / 2M: condition 1 must stay within the Class 3B AEL (cw only; pulses not implemented). */
   private static Outcome<Classification> bounded(
       Emission e, double f1, double f3, HazardClass c, String basis) {
+    // Every lower class's limits were not met, so the class is at least c.
+    Classification floor = new Classification(c, f1, f3, basis);
     if (e.pulsed()) {
-      return Outcome.notEvaluated(
+      return Outcome.notEvaluatedAtLeast(
+          floor,
           basis
               + "; the Class 3B limit under condition 1 that bounds "
               + c
@@ -165,8 +172,10 @@ public final class Classifier {
           TABLES);
     }
     if (e.averagePower() * f1 > Ed3.CLASS_3B_CW) {
-      return Outcome.notEvaluated(
-          basis + ", but condition 1 exceeds the Class 3B AEL (0.5 W): not evaluated", TABLES);
+      return Outcome.notEvaluatedAtLeast(
+          floor,
+          basis + ", but condition 1 exceeds the Class 3B AEL (0.5 W): not evaluated",
+          TABLES);
     }
     return result(c, f1, f3, basis + "; condition 1 within the Class 3B AEL");
   }

@@ -11,8 +11,11 @@ import java.util.Optional;
  * @param reason why it was not evaluated (empty string when evaluated)
  * @param standard standard, edition and table/clause the value (or the refusal) refers to
  * @param caution text that must accompany the figure wherever it is shown
+ * @param atLeast when not evaluated, what is nevertheless known: the figure is at least this (a
+ *     class above Class 3R is at least Class 3B), so a bound it already breaks can fail
  */
-public record Outcome<T>(Optional<T> value, String reason, String standard, String caution) {
+public record Outcome<T>(
+    Optional<T> value, String reason, String standard, String caution, Optional<T> atLeast) {
 
   /** Caution carried by every MPE, AEL/class, NOHD and OD result. */
   public static final String CAUTION =
@@ -25,9 +28,15 @@ public record Outcome<T>(Optional<T> value, String reason, String standard, Stri
     Objects.requireNonNull(reason, "reason");
     Objects.requireNonNull(standard, "standard");
     Objects.requireNonNull(caution, "caution");
+    Objects.requireNonNull(atLeast, "atLeast");
     if (value.isEmpty() && reason.isBlank()) {
       throw new IllegalArgumentException("a not-evaluated outcome needs a reason");
     }
+  }
+
+  /** Without a known lower bound. */
+  public Outcome(Optional<T> value, String reason, String standard, String caution) {
+    this(value, reason, standard, caution, Optional.empty());
   }
 
   /** An evaluated value, with the standard/table it came from and the safety caution. */
@@ -38,6 +47,11 @@ public record Outcome<T>(Optional<T> value, String reason, String standard, Stri
   /** Not evaluated, with the reason and the standard whose coverage was checked. */
   public static <T> Outcome<T> notEvaluated(String reason, String standard) {
     return new Outcome<>(Optional.empty(), reason, standard, CAUTION);
+  }
+
+  /** Not evaluated, but known to be at least {@code floor}. */
+  public static <T> Outcome<T> notEvaluatedAtLeast(T floor, String reason, String standard) {
+    return new Outcome<>(Optional.empty(), reason, standard, CAUTION, Optional.of(floor));
   }
 
   public boolean evaluated() {
@@ -51,6 +65,6 @@ public record Outcome<T>(Optional<T> value, String reason, String standard, Stri
 
   /** Same outcome with a different caution text (used for non-safety-limit figures). */
   Outcome<T> withCaution(String otherCaution) {
-    return new Outcome<>(value, reason, standard, otherCaution);
+    return new Outcome<>(value, reason, standard, otherCaution, atLeast);
   }
 }

@@ -139,7 +139,7 @@ class CliTest {
     spec("clean.jonq");
     CliRun json = CliRun.of(dir, "check", "--format", "json", "clean.jonq");
     assertEquals(
-        "jonquil.check/1",
+        "jonquil.check/2",
         JsonParser.parseString(json.out()).getAsJsonObject().get("schema").getAsString());
     CliRun sarif = CliRun.of(dir, "check", "--format", "sarif", "clean.jonq");
     assertEquals(

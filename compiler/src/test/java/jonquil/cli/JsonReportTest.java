@@ -37,7 +37,7 @@ class JsonReportTest {
   @Test
   void namesItsSchemaVersionAndTool() {
     JsonObject report = report();
-    assertEquals("jonquil.check/1", report.get("schema").getAsString());
+    assertEquals("jonquil.check/2", report.get("schema").getAsString());
     assertEquals(
         ToolVersion.current(), report.getAsJsonObject("tool").get("version").getAsString());
   }
@@ -46,7 +46,7 @@ class JsonReportTest {
   void keysComeInTheDocumentedOrderWithTwoSpaceIndent() {
     String json = JsonReport.render(SampleRun.run());
     assertTrue(
-        json.startsWith("{\n  \"schema\": \"jonquil.check/1\",\n  \"tool\": {\n    \"name\""),
+        json.startsWith("{\n  \"schema\": \"jonquil.check/2\",\n  \"tool\": {\n    \"name\""),
         json);
     List<String> keys = List.copyOf(report().keySet());
     assertEquals(
