@@ -12,6 +12,7 @@ import java.util.OptionalDouble;
 import jonquil.Result;
 import jonquil.analysis.RequirementOutcome;
 import jonquil.analysis.RequirementStatus;
+import jonquil.analysis.YieldEstimate;
 import jonquil.diag.Diagnostic;
 import jonquil.diag.Edit;
 import jonquil.diag.Fix;
@@ -120,6 +121,23 @@ final class JsonReport {
     o.add("margin", number(r.margin()));
     o.add("unit", textOrNull(r.siUnit()));
     o.add("reason", textOrNull(r.reason()));
+    r.yield().ifPresent(y -> o.add("yield", yieldEstimate(y)));
+    return o;
+  }
+
+  /** Only on a yield requirement whose builds were drawn. */
+  private static JsonObject yieldEstimate(YieldEstimate y) {
+    JsonObject o = new JsonObject();
+    o.addProperty("builds", y.builds());
+    o.addProperty("passes", y.passes());
+    JsonObject interval = new JsonObject();
+    interval.addProperty("method", "wilson");
+    interval.addProperty("confidence", 0.95);
+    interval.addProperty("low", y.interval().low());
+    interval.addProperty("high", y.interval().high());
+    o.add("interval", interval);
+    o.addProperty("settled", y.settled());
+    o.addProperty("seed", y.seedHex());
     return o;
   }
 
