@@ -13,9 +13,11 @@ import jonquil.resolve.Symbol;
 import jonquil.resolve.Value;
 
 /**
- * One toleranced build of a spec: every quantity written with '± t' is drawn uniformly from its
- * interval (the usual reading of a ± tolerance when nothing more is known), the rest kept as
- * written. Seeded, so a yield figure is reproducible run after run.
+ * One toleranced build of a spec: every number written with '± t' (a quantity, a fraction, a ratio,
+ * a count such as an index or M², a density, a distance) is drawn uniformly from its interval (the
+ * usual reading of a ± tolerance when nothing more is known), the rest kept as written. The
+ * resolver refuses a tolerance that reaches outside its value's range, so every draw is a possible
+ * build and none is clipped. Seeded, so a yield is reproducible.
  */
 final class Tolerances {
   private Tolerances() {}
@@ -58,7 +60,7 @@ final class Tolerances {
         for (ResolvedTrain.Step s : p.steps()) {
           if (s instanceof ResolvedTrain.Gap gap && gap.tolerance().isPresent()) {
             double half = gap.tolerance().getAsDouble();
-            double length = Math.max(0, gap.length() + (2 * random.nextDouble() - 1) * half);
+            double length = gap.length() + (2 * random.nextDouble() - 1) * half;
             steps.add(
                 new ResolvedTrain.Gap(length, OptionalDouble.empty(), gap.medium(), gap.range()));
           } else {

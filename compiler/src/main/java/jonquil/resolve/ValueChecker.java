@@ -282,12 +282,30 @@ final class ValueChecker {
       }
       return Optional.empty();
     }
-    return Optional.of(
-        new Value.Num(si, dim, tolerance(a, unit.orElse(null), si, dim, what), a.range()));
+    OptionalDouble tolerance =
+        inRange(
+            a,
+            tolerance(a, unit.orElse(null), si, dim, !dim.isDimensionless(), what),
+            si,
+            bounds,
+            x -> QuantityFormat.format(x, dim),
+            describe(bounds, dim),
+            what);
+    return Optional.of(new Value.Num(si, dim, tolerance, a.range()));
   }
 
+  /**
+   * The ± half-width in SI. A '%' tolerance is a share of the value when {@code percentOfValue}
+   * ('100 mm ± 1 %', 'index 1.5 ± 0.1 %'); on a fraction written in percent it is percentage points
+   * ('99 % ± 1 %').
+   */
   private OptionalDouble tolerance(
-      Arg.QuantityArg a, Unit valueUnit, double si, Dimension dim, String what) {
+      Arg.QuantityArg a,
+      Unit valueUnit,
+      double si,
+      Dimension dim,
+      boolean percentOfValue,
+      String what) {
     if (a.tolerance().isEmpty()) {
       return OptionalDouble.empty();
     }
@@ -302,7 +320,7 @@ final class ValueChecker {
         return OptionalDouble.empty();
       }
       Unit u = ((UnitParse.Ok) parsed).unit();
-      if (u.symbol().equals("%") && !dim.isDimensionless()) {
+      if (u.symbol().equals("%") && percentOfValue) {
         halfWidth = Math.abs(si) * t.number().value() / 100;
       } else if (!u.dimension().equals(dim) || u.scale() != Scale.LINEAR) {
         sink.report(
@@ -337,6 +355,43 @@ final class ValueChecker {
     return OptionalDouble.of(halfWidth);
   }
 
+  /**
+   * Keeps a tolerance only when every build it allows is physically possible: a Monte Carlo build
+   * draws anywhere within '±', so a tolerance that crosses the value's range is refused at its line
+   * rather than clipped (clipping would pile builds up on the edge without saying so).
+   */
+  private OptionalDouble inRange(
+      Arg.QuantityArg a,
+      OptionalDouble half,
+      double si,
+      Bounds bounds,
+      java.util.function.DoubleFunction<String> shown,
+      String allowed,
+      String what) {
+    if (half.isEmpty()) {
+      return half;
+    }
+    double low = si - half.getAsDouble();
+    double high = si + half.getAsDouble();
+    boolean throughZero = bounds.nonZero() && low <= 0 && high >= 0;
+    if (bounds.contains(low) && bounds.contains(high) && !throughZero) {
+      return half;
+    }
+    double reached = throughZero ? 0 : bounds.contains(low) ? high : low;
+    sink.report(
+        DiagnosticCode.OUT_OF_RANGE,
+        a.tolerance().get().range(),
+        "'"
+            + what
+            + "' reaches "
+            + shown.apply(reached)
+            + " within its tolerance, but must be "
+            + allowed
+            + "; every build a tolerance allows must be possible, so narrow the tolerance or"
+            + " move the value");
+    return OptionalDouble.empty();
+  }
+
   /** A fraction: '95 %', '200 ppm' or a plain number from 0 to 1. */
   Optional<Value.Num> ratio(Arg.QuantityArg a, Bounds bounds, String what) {
     Optional<Unit> unit = unitOf(a);
@@ -359,19 +414,21 @@ final class ValueChecker {
           new Fix("write '" + a.number().text() + " %'", List.of(new Edit(sink.file, at, " %"))));
       return Optional.empty();
     }
+    String allowed =
+        Double.isFinite(bounds.max())
+            ? "between " + percent(bounds.min()) + " and " + percent(bounds.max())
+            : "zero or more";
     if (!bounds.contains(si)) {
-      String allowed =
-          Double.isFinite(bounds.max())
-              ? "between " + percent(bounds.min()) + " and " + percent(bounds.max())
-              : "zero or more";
       sink.report(
           DiagnosticCode.OUT_OF_RANGE,
           a.range(),
           "'" + what + "' must be " + allowed + "; got '" + written(a) + "'");
       return Optional.empty();
     }
-    return Optional.of(
-        new Value.Num(si, Dimension.DIMENSIONLESS, OptionalDouble.empty(), a.range()));
+    OptionalDouble tolerance =
+        tolerance(a, unit.orElse(null), si, Dimension.DIMENSIONLESS, false, what);
+    tolerance = inRange(a, tolerance, si, bounds, ValueChecker::percent, allowed, what);
+    return Optional.of(new Value.Num(si, Dimension.DIMENSIONLESS, tolerance, a.range()));
   }
 
   /** Reports a unit that does not fit the form of value {@code what} takes. */
@@ -412,7 +469,37 @@ final class ValueChecker {
       return Optional.empty();
     }
     return Optional.of(
-        new Value.Num(si, Dimension.DIMENSIONLESS, OptionalDouble.empty(), a.range()));
+        new Value.Num(si, Dimension.DIMENSIONLESS, plainTolerance(a, si, bounds, what), a.range()));
+  }
+
+  /**
+   * The tolerance of a plain number (a count, an index, M², a ratio, a density), within its range.
+   * In decibels a '±' would not be symmetric about the ratio it bounds, so it is refused.
+   */
+  private OptionalDouble plainTolerance(Arg.QuantityArg a, double si, Bounds bounds, String what) {
+    if (a.tolerance().isEmpty()) {
+      return OptionalDouble.empty();
+    }
+    if (a.unit().isPresent()) {
+      sink.report(
+          DiagnosticCode.TOLERANCE_MISMATCH,
+          a.tolerance().get().range(),
+          "a tolerance on '"
+              + what
+              + "' in '"
+              + a.unit().get().text()
+              + "' is not symmetric about its ratio; write the ratio as a plain number"
+              + " ('1000 ± 100')");
+      return OptionalDouble.empty();
+    }
+    return inRange(
+        a,
+        tolerance(a, null, si, Dimension.DIMENSIONLESS, true, what),
+        si,
+        bounds,
+        x -> QuantityFormat.format(x, Dimension.DIMENSIONLESS),
+        describe(bounds, Dimension.DIMENSIONLESS),
+        what);
   }
 
   private Optional<Value.Num> count(Arg.QuantityArg a, Shape.Count c, String what) {
@@ -444,8 +531,16 @@ final class ValueChecker {
               + "'");
       return Optional.empty();
     }
+    if (c.integer() && a.tolerance().isPresent()) {
+      sink.report(
+          DiagnosticCode.BAD_ARGUMENT,
+          a.tolerance().get().range(),
+          "'" + what + "' is a whole number and takes no tolerance");
+      return Optional.empty();
+    }
     return Optional.of(
-        new Value.Num(v, Dimension.DIMENSIONLESS, OptionalDouble.empty(), a.range()));
+        new Value.Num(
+            v, Dimension.DIMENSIONLESS, plainTolerance(a, v, c.bounds(), what), a.range()));
   }
 
   private Optional<Value.Num> density(Arg.QuantityArg a, String what) {
@@ -467,9 +562,13 @@ final class ValueChecker {
           "an optical density cannot be negative; got '" + written(a) + "'");
       return Optional.empty();
     }
+    double od = a.number().value();
     return Optional.of(
         new Value.Num(
-            a.number().value(), Dimension.DIMENSIONLESS, OptionalDouble.empty(), a.range()));
+            od,
+            Dimension.DIMENSIONLESS,
+            plainTolerance(a, od, Bounds.NON_NEGATIVE, what),
+            a.range()));
   }
 
   /** Resolves a name to a declaration or catalog entry of an allowed category. */
