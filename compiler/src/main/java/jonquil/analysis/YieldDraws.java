@@ -16,7 +16,7 @@ public record YieldDraws(int builds, OptionalLong seed) {
   public static final int DEFAULT_BUILDS = 400;
 
   /** The most builds a requirement or the command line may ask for (each is a full solve). */
-  public static final int MAX_BUILDS = 100_000;
+  public static final int MAX_BUILDS = jonquil.resolve.YieldBuilds.MAX;
 
   public static final YieldDraws DEFAULT = new YieldDraws(DEFAULT_BUILDS, OptionalLong.empty());
 

@@ -82,6 +82,29 @@ class YieldIsReproducibleAndSettledTest {
   }
 
   @Test
+  void theLinesOwnBuildsWinOverTheRuns() {
+    String s = spec("yield >= 40 % over 1500 builds for power at mid >= 5 mW");
+    assertEquals(1500, run(s, YieldDraws.DEFAULT).yield().orElseThrow().builds());
+    assertEquals(
+        1500, run(s, new YieldDraws(3000, OptionalLong.empty())).yield().orElseThrow().builds());
+  }
+
+  @Test
+  void moreBuildsSettleWhatFewerCouldNot() {
+    // The true yield is 50 % (Malus, see spec()); a bound of 46 % is inside the interval of 400
+    // builds (about ±4.9 %, the Wilson half-width at p̂ = 0.5) but outside that of 10 000 (±1 %).
+    String few = spec("yield >= 46 % over 400 builds for power at mid >= 5 mW");
+    String many = spec("yield >= 46 % over 10000 builds for power at mid >= 5 mW");
+    RequirementOutcome unsettled = run(few, new YieldDraws(400, OptionalLong.of(3)));
+    RequirementOutcome settled = run(many, new YieldDraws(400, OptionalLong.of(3)));
+    assertTrue(settled.yield().orElseThrow().settled(), settled.toString());
+    assertEquals(RequirementStatus.PASS, settled.status());
+    // With seed 3, 182 of the 400 builds pass: interval 40.7 % .. 50.4 %, across the bound.
+    assertFalse(unsettled.yield().orElseThrow().settled(), unsettled.toString());
+    assertEquals(RequirementStatus.FAIL, unsettled.status());
+  }
+
+  @Test
   void anIntervalThatStraddlesTheBoundFailsAndSaysSo() {
     // The true yield is 50 %: a bound of 50 % sits inside any honest interval around it.
     RequirementOutcome o = run(spec("yield >= 50 % for power at mid >= 5 mW"), YieldDraws.DEFAULT);
