@@ -7,6 +7,7 @@ import java.security.NoSuchAlgorithmException;
 import java.util.List;
 import java.util.Map;
 import java.util.OptionalLong;
+import java.util.TreeMap;
 import jonquil.resolve.ResolvedElement;
 import jonquil.resolve.ResolvedModel;
 import jonquil.resolve.ResolvedTrain;
@@ -14,19 +15,20 @@ import jonquil.resolve.Value;
 
 /**
  * The seed of a spec's Monte Carlo builds: SHA-256 over a canonical text of its resolved elements
- * and trains (names, kinds, SI values with their tolerances, steps in path order). Positions,
- * comments, layout and the folder the files sit in are left out, so reformatting or moving a spec
- * draws the same builds, while any change to a value draws new ones. A seed given on the command
- * line is hashed in after the model.
+ * and trains (names, kinds, SI values with their tolerances, steps in path order; elements,
+ * parameters and slots in name order, since the order a map was filled in may differ from one JVM
+ * start to the next). Positions, comments, layout and the folder the files sit in are left out, so
+ * reformatting or moving a spec draws the same builds, while any change to a value draws new ones.
+ * A seed given on the command line is hashed in after the model.
  */
 final class ModelDigest {
   private ModelDigest() {}
 
   static long seed(ResolvedModel model, OptionalLong userSeed) {
     StringBuilder text = new StringBuilder();
-    for (ResolvedElement e : model.elements().values()) {
+    for (ResolvedElement e : Tolerances.canonical(model)) {
       text.append("element ").append(e.symbol().name()).append(' ').append(e.kind().word());
-      for (Map.Entry<String, List<Value.Group>> p : e.params().entrySet()) {
+      for (Map.Entry<String, List<Value.Group>> p : new TreeMap<>(e.params()).entrySet()) {
         text.append("\n ").append(p.getKey());
         p.getValue().forEach(g -> value(g, text));
       }
@@ -84,7 +86,7 @@ final class ModelDigest {
       text.append(" flag");
     } else if (v instanceof Value.Group g) {
       text.append(" {");
-      g.slots()
+      new TreeMap<>(g.slots())
           .forEach(
               (k, inner) -> {
                 text.append(' ').append(k).append('=');

@@ -95,11 +95,11 @@ class YieldIsReproducibleAndSettledTest {
     // builds (about ±4.9 %, the Wilson half-width at p̂ = 0.5) but outside that of 10 000 (±1 %).
     String few = spec("yield >= 46 % over 400 builds for power at mid >= 5 mW");
     String many = spec("yield >= 46 % over 10000 builds for power at mid >= 5 mW");
-    RequirementOutcome unsettled = run(few, new YieldDraws(400, OptionalLong.of(3)));
+    RequirementOutcome unsettled = run(few, new YieldDraws(400, OptionalLong.of(4)));
     RequirementOutcome settled = run(many, new YieldDraws(400, OptionalLong.of(3)));
     assertTrue(settled.yield().orElseThrow().settled(), settled.toString());
     assertEquals(RequirementStatus.PASS, settled.status());
-    // With seed 3, 182 of the 400 builds pass: interval 40.7 % .. 50.4 %, across the bound.
+    // With seed 4, 188 of the 400 builds pass: interval 42.16 % .. 51.9 %, across the bound.
     assertFalse(unsettled.yield().orElseThrow().settled(), unsettled.toString());
     assertEquals(RequirementStatus.FAIL, unsettled.status());
   }
