@@ -200,6 +200,17 @@ final class ValueChecker {
           "the range in '" + what + "' runs backwards: its low end is above its high end");
       return Optional.empty();
     }
+    // A build draws each end within its '±': they must not be able to cross.
+    if (low.get().si() + low.get().tolerance().orElse(0)
+        > high.get().si() - high.get().tolerance().orElse(0)) {
+      sink.report(
+          DiagnosticCode.INVERTED_RANGE,
+          arg.range(),
+          "within their tolerances the ends of the range in '"
+              + what
+              + "' can cross; narrow the tolerances");
+      return Optional.empty();
+    }
     return Optional.of(
         new Value.Group(Map.of("low", low.get(), "high", high.get()), List.of(), arg.range()));
   }
