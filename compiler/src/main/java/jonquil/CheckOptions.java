@@ -1,15 +1,27 @@
 package jonquil;
 
+import jonquil.analysis.YieldDraws;
+
 /**
  * How much a check computes. The command line computes everything; an editor re-checks on every
  * pause in typing, so it leaves out the Monte Carlo yields (hundreds of re-solves), which the CI
  * gate still evaluates. A workspace index needs only names, so it stops after resolution and
  * computes no physics at all.
  */
-public record CheckOptions(boolean yields, boolean analyses) {
+public record CheckOptions(boolean yields, boolean analyses, YieldDraws draws) {
   public static final CheckOptions FULL = new CheckOptions(true, true);
   public static final CheckOptions EDITOR = new CheckOptions(false, true);
 
   /** Parse and resolve only: declarations, scopes and name references, no analysis. */
   public static final CheckOptions NAMES = new CheckOptions(false, false);
+
+  /** Yields, if computed, drawn with the default builds and the spec's own seed. */
+  public CheckOptions(boolean yields, boolean analyses) {
+    this(yields, analyses, YieldDraws.DEFAULT);
+  }
+
+  /** The same, with yields drawn as {@code draws} says ('--builds', '--seed'). */
+  public CheckOptions withDraws(YieldDraws draws) {
+    return new CheckOptions(yields, analyses, draws);
+  }
 }

@@ -115,7 +115,7 @@ public final class Checker {
           }
           continue;
         }
-        Analyzer.Analysis analysis = Analyzer.analyze(model, options.yields());
+        Analyzer.Analysis analysis = Analyzer.analyze(model, options.yields(), options.draws());
         diagnostics.addAll(analysis.diagnostics());
         requirements.addAll(analysis.outcomes());
         solutions.put(root, analysis.solution());

@@ -38,6 +38,11 @@ public final class Analyzer {
    * them).
    */
   public static Analysis analyze(ResolvedModel model, boolean yields) {
+    return analyze(model, yields, YieldDraws.DEFAULT);
+  }
+
+  /** As above, drawing yields as {@code draws} says. */
+  public static Analysis analyze(ResolvedModel model, boolean yields, YieldDraws draws) {
     MaterialModel materials = new MaterialModel(model);
     ElementOptics optics = new ElementOptics(materials, new SurfaceModel(model, materials));
     Map<OptionalDouble, TrainSolution> solved = new HashMap<>();
@@ -48,12 +53,18 @@ public final class Analyzer {
     List<RequirementOutcome> outcomes = new ArrayList<>();
     for (ResolvedRequirement r : model.requirements()) {
       boolean deferred = r.yield().isPresent() && !yields;
-      RequirementEvaluator.Verdict v =
-          deferred
-              ? RequirementEvaluator.Verdict.notEvaluated(
-                  "yields are computed by 'jonquil check', not while typing")
-              : RequirementEvaluator.evaluate(r, model, solve);
-      outcomes.add(outcome(r, v));
+      YieldMonteCarlo.Judged judged =
+          r.yield().isEmpty()
+              ? new YieldMonteCarlo.Judged(
+                  RequirementEvaluator.evaluate(r, model, solve), java.util.Optional.empty())
+              : yields
+                  ? YieldMonteCarlo.evaluate(r, model, draws)
+                  : new YieldMonteCarlo.Judged(
+                      RequirementEvaluator.Verdict.notEvaluated(
+                          "yields are computed by 'jonquil check', not while typing"),
+                      java.util.Optional.empty());
+      RequirementEvaluator.Verdict v = judged.verdict();
+      outcomes.add(outcome(r, v, judged.estimate()));
       if (!v.evaluated() && !deferred) {
         // Fail closed: what cannot be evaluated is not met. A yield left to the CI gate while
         // typing is no finding about the spec, so the editor shows no error for it.
@@ -134,7 +145,10 @@ public final class Analyzer {
         .findFirst();
   }
 
-  private static RequirementOutcome outcome(ResolvedRequirement r, RequirementEvaluator.Verdict v) {
+  private static RequirementOutcome outcome(
+      ResolvedRequirement r,
+      RequirementEvaluator.Verdict v,
+      java.util.Optional<YieldEstimate> estimate) {
     Path file = r.file();
     if (!v.evaluated()) {
       return RequirementOutcome.notEvaluated(file, r.syntax().range(), r.syntax().text(), v.text());
@@ -151,7 +165,8 @@ public final class Analyzer {
         v.unit(),
         v.text(),
         v.shownUnit(),
-        v.valueIsFloor());
+        v.valueIsFloor(),
+        estimate);
   }
 
   private static String verdict(

@@ -73,12 +73,12 @@ final class RequirementEvaluator {
 
   private RequirementEvaluator() {}
 
-  /** All criteria of a requirement, worst margin first; over a band, at its worst wavelength. */
+  /**
+   * All criteria of a requirement, worst margin first; over a band, at its worst wavelength. A
+   * yield's bound is judged by {@link YieldMonteCarlo}, which calls this once per build.
+   */
   static Verdict evaluate(
       ResolvedRequirement r, ResolvedModel model, Function<OptionalDouble, TrainSolution> solve) {
-    if (r.yield().isPresent()) {
-      return yieldOverTolerances(r, model);
-    }
     if (r.band().isPresent()) {
       Verdict worst = null;
       ResolvedRequirement.Band band = r.band().get();
@@ -95,47 +95,6 @@ final class RequirementEvaluator {
       return worst;
     }
     return evaluate(r, model, solve.apply(OptionalDouble.empty()));
-  }
-
-  /**
-   * Builds drawn for a yield; the standard error of the estimate is then at most 0.5/√N ≈ 2.5 %.
-   */
-  static final int YIELD_TRIALS = 400;
-
-  /** A fixed seed: the same spec gives the same yield on every run and in every tool. */
-  static final long YIELD_SEED = 0x4A4F4E51L;
-
-  /**
-   * The fraction of toleranced builds that meet the requirement, by Monte Carlo over every '±' in
-   * the spec (uniform within each tolerance), compared with the yield bound.
-   */
-  private static Verdict yieldOverTolerances(ResolvedRequirement r, ResolvedModel model) {
-    if (!Tolerances.any(model)) {
-      return Verdict.notEvaluated(
-          "the spec states no tolerances ('± ...'), so every build is the same; "
-              + "check the requirement itself without 'yield'");
-    }
-    java.util.SplittableRandom random = new java.util.SplittableRandom(YIELD_SEED);
-    int pass = 0;
-    for (int i = 0; i < YIELD_TRIALS; i++) {
-      ResolvedModel build = Tolerances.draw(model, random);
-      MaterialModel m = new MaterialModel(build);
-      ElementOptics optics = new ElementOptics(m, new SurfaceModel(build, m));
-      Verdict v =
-          evaluate(r, build, new Propagator(build, optics, m).solve(OptionalDouble.empty()));
-      if (!v.evaluated()) {
-        return Verdict.notEvaluated("the yield's requirement cannot be evaluated: " + v.text());
-      }
-      if (v.pass()) {
-        pass++;
-      }
-    }
-    double fraction = (double) pass / YIELD_TRIALS;
-    return compare(
-        r.yield().get(),
-        fraction,
-        "%",
-        YIELD_TRIALS + " toleranced builds, uniform within each '±'");
   }
 
   static Verdict evaluate(ResolvedRequirement r, ResolvedModel model, TrainSolution s) {

@@ -1,6 +1,7 @@
 package jonquil.analysis;
 
 import java.nio.file.Path;
+import java.util.Optional;
 import java.util.OptionalDouble;
 import jonquil.source.TextRange;
 
@@ -9,7 +10,8 @@ import jonquil.source.TextRange;
  * named by {@code siUnit}), plus a reason when it was not evaluated. {@code shownUnit} is the unit
  * people read them in, that of the bound as written ("dB", "%"); a hazard class has no margin.
  * {@code valueIsLowerBound}: the value was not computed, only known to be at least this (a source
- * above Class 3R is at least Class 3B).
+ * above Class 3R is at least Class 3B). A yield also carries the builds it drew and the interval of
+ * its estimate.
  */
 public record RequirementOutcome(
     Path file,
@@ -22,9 +24,10 @@ public record RequirementOutcome(
     String siUnit,
     String reason,
     String shownUnit,
-    boolean valueIsLowerBound) {
+    boolean valueIsLowerBound,
+    Optional<YieldEstimate> yield) {
 
-  /** Shown in its SI unit. */
+  /** Shown in its SI unit; no yield. */
   public RequirementOutcome(
       Path file,
       TextRange range,
@@ -35,7 +38,19 @@ public record RequirementOutcome(
       OptionalDouble margin,
       String siUnit,
       String reason) {
-    this(file, range, text, status, value, bound, margin, siUnit, reason, siUnit, false);
+    this(
+        file,
+        range,
+        text,
+        status,
+        value,
+        bound,
+        margin,
+        siUnit,
+        reason,
+        siUnit,
+        false,
+        Optional.empty());
   }
 
   public static RequirementOutcome notEvaluated(

@@ -1,11 +1,14 @@
 package jonquil.analysis;
 
 import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.OptionalDouble;
 import java.util.SplittableRandom;
+import java.util.TreeMap;
 import jonquil.resolve.ResolvedElement;
 import jonquil.resolve.ResolvedModel;
 import jonquil.resolve.ResolvedTrain;
@@ -13,9 +16,11 @@ import jonquil.resolve.Symbol;
 import jonquil.resolve.Value;
 
 /**
- * One toleranced build of a spec: every quantity written with '± t' is drawn uniformly from its
- * interval (the usual reading of a ± tolerance when nothing more is known), the rest kept as
- * written. Seeded, so a yield figure is reproducible run after run.
+ * One toleranced build of a spec: every number written with '± t' (a quantity, a fraction, a ratio,
+ * a count such as an index or M², a density, a distance) is drawn uniformly from its interval (the
+ * usual reading of a ± tolerance when nothing more is known), the rest kept as written. The
+ * resolver refuses a tolerance that reaches outside its value's range, so every draw is a possible
+ * build and none is clipped. Seeded, so a yield is reproducible.
  */
 final class Tolerances {
   private Tolerances() {}
@@ -37,19 +42,34 @@ final class Tolerances {
         .anyMatch(s -> s instanceof ResolvedTrain.Gap gap && gap.tolerance().isPresent());
   }
 
+  /**
+   * The order in which builds draw elements and their parameters: by name, never by the order a map
+   * was filled in, which may differ from one JVM start to the next.
+   */
+  static final Comparator<ResolvedElement> CANONICAL =
+      Comparator.comparing((ResolvedElement e) -> e.symbol().name())
+          .thenComparing(
+              e -> e.symbol().file() == null ? "" : e.symbol().file().getFileName().toString())
+          .thenComparingInt(e -> e.symbol().nameNode().map(n -> n.range().start()).orElse(-1));
+
+  static List<ResolvedElement> canonical(ResolvedModel model) {
+    return model.elements().values().stream().sorted(CANONICAL).toList();
+  }
+
   static ResolvedModel draw(ResolvedModel model, SplittableRandom random) {
+    Map<Symbol, ResolvedElement> drawn = new HashMap<>();
+    for (ResolvedElement e : canonical(model)) {
+      Map<String, List<Value.Group>> params = new TreeMap<>();
+      new TreeMap<>(e.params())
+          .forEach(
+              (name, groups) ->
+                  params.put(name, groups.stream().map(g -> draw(g, random)).toList()));
+      Map<String, List<Value.Group>> inOrder = new LinkedHashMap<>();
+      e.params().keySet().forEach(k -> inOrder.put(k, params.get(k)));
+      drawn.put(e.symbol(), new ResolvedElement(e.symbol(), e.kind(), inOrder));
+    }
     Map<Symbol, ResolvedElement> elements = new LinkedHashMap<>();
-    model
-        .elements()
-        .forEach(
-            (symbol, e) -> {
-              Map<String, List<Value.Group>> params = new LinkedHashMap<>();
-              e.params()
-                  .forEach(
-                      (name, groups) ->
-                          params.put(name, groups.stream().map(g -> draw(g, random)).toList()));
-              elements.put(symbol, new ResolvedElement(e.symbol(), e.kind(), params));
-            });
+    model.elements().keySet().forEach(symbol -> elements.put(symbol, drawn.get(symbol)));
     List<ResolvedTrain> trains = new ArrayList<>();
     for (ResolvedTrain t : model.trains()) {
       List<ResolvedTrain.BeamPath> paths = new ArrayList<>();
@@ -58,7 +78,7 @@ final class Tolerances {
         for (ResolvedTrain.Step s : p.steps()) {
           if (s instanceof ResolvedTrain.Gap gap && gap.tolerance().isPresent()) {
             double half = gap.tolerance().getAsDouble();
-            double length = Math.max(0, gap.length() + (2 * random.nextDouble() - 1) * half);
+            double length = gap.length() + (2 * random.nextDouble() - 1) * half;
             steps.add(
                 new ResolvedTrain.Gap(length, OptionalDouble.empty(), gap.medium(), gap.range()));
           } else {
@@ -80,9 +100,12 @@ final class Tolerances {
   }
 
   private static Value.Group draw(Value.Group g, SplittableRandom random) {
-    Map<String, Value> slots = new LinkedHashMap<>();
-    g.slots().forEach((k, v) -> slots.put(k, draw(v, random)));
-    return new Value.Group(slots, g.items().stream().map(i -> draw(i, random)).toList(), g.range());
+    Map<String, Value> slots = new TreeMap<>();
+    new TreeMap<>(g.slots()).forEach((k, v) -> slots.put(k, draw(v, random)));
+    Map<String, Value> inOrder = new LinkedHashMap<>();
+    g.slots().keySet().forEach(k -> inOrder.put(k, slots.get(k)));
+    return new Value.Group(
+        inOrder, g.items().stream().map(i -> draw(i, random)).toList(), g.range());
   }
 
   private static Value draw(Value v, SplittableRandom random) {

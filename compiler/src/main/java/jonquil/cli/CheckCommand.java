@@ -8,10 +8,13 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import java.util.OptionalLong;
 import java.util.concurrent.Callable;
+import jonquil.CheckOptions;
 import jonquil.Checker;
 import jonquil.Result;
 import jonquil.Workspace;
+import jonquil.analysis.YieldDraws;
 import jonquil.diag.Diagnostic;
 import jonquil.diag.DiagnosticCode;
 import jonquil.source.ProjectRoot;
@@ -77,6 +80,22 @@ final class CheckCommand implements Callable<Integer> {
   @Option(names = "--debug", description = "Print the stack trace of an internal error.")
   boolean debug;
 
+  @Option(
+      names = "--builds",
+      paramLabel = "N",
+      description =
+          "Monte Carlo builds per yield requirement, 1 to 100000 (default 400); a requirement's"
+              + " own 'over N builds' wins.")
+  Integer builds;
+
+  @Option(
+      names = "--seed",
+      paramLabel = "N",
+      description =
+          "Another draw of the yield builds: N is hashed in after the spec's content, which"
+              + " alone seeds them when this is left out.")
+  Long seed;
+
   @Mixin HelpOption help;
 
   @Mixin SpecPaths specPaths;
@@ -106,7 +125,12 @@ final class CheckCommand implements Callable<Integer> {
     Result result = new Result(Map.of(), List.of(), List.of());
     if (!inputs.files().isEmpty()) {
       result =
-          withoutUnreadable(Checker.check(Workspace.onDisk(projectRoot), inputs.files()), problems);
+          withoutUnreadable(
+              Checker.check(
+                  Workspace.onDisk(projectRoot),
+                  inputs.files(),
+                  CheckOptions.FULL.withDraws(draws())),
+              problems);
     }
     problems.forEach(err::println);
     err.flush();
@@ -120,6 +144,16 @@ final class CheckCommand implements Callable<Integer> {
       case SARIF -> writeUtf8(SarifReport.render(run));
     }
     return ExitCode.of(result, strict, exitZero, !problems.isEmpty());
+  }
+
+  private YieldDraws draws() {
+    int n = builds == null ? YieldDraws.DEFAULT_BUILDS : builds;
+    if (n < 1 || n > YieldDraws.MAX_BUILDS) {
+      throw new ParameterException(
+          spec.commandLine(),
+          "--builds must be from 1 to " + YieldDraws.MAX_BUILDS + "; got " + builds);
+    }
+    return new YieldDraws(n, seed == null ? OptionalLong.empty() : OptionalLong.of(seed));
   }
 
   private Path projectRoot() {

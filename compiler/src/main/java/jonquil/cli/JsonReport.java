@@ -13,6 +13,7 @@ import jonquil.Result;
 import jonquil.analysis.RequirementOutcome;
 import jonquil.analysis.RequirementStatus;
 import jonquil.analysis.VerdictText;
+import jonquil.analysis.YieldEstimate;
 import jonquil.diag.Diagnostic;
 import jonquil.diag.Edit;
 import jonquil.diag.Fix;
@@ -143,6 +144,23 @@ final class JsonReport {
                     r.shownUnit()))
             : JsonNull.INSTANCE);
     o.add("shown", shown);
+    r.yield().ifPresent(y -> o.add("yield", yieldEstimate(y)));
+    return o;
+  }
+
+  /** Only on a yield requirement whose builds were drawn. */
+  private static JsonObject yieldEstimate(YieldEstimate y) {
+    JsonObject o = new JsonObject();
+    o.addProperty("builds", y.builds());
+    o.addProperty("passes", y.passes());
+    JsonObject interval = new JsonObject();
+    interval.addProperty("method", "wilson");
+    interval.addProperty("confidence", 0.95);
+    interval.addProperty("low", y.interval().low());
+    interval.addProperty("high", y.interval().high());
+    o.add("interval", interval);
+    o.addProperty("settled", y.settled());
+    o.addProperty("seed", y.seedHex());
     return o;
   }
 

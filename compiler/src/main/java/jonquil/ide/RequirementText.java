@@ -50,6 +50,20 @@ final class RequirementText {
                           o.shownUnit()))
                   : "—")
           .append(" |\n");
+      o.yield()
+          .ifPresent(
+              y ->
+                  md.append("\n95 % Wilson score interval ")
+                      .append(VerdictText.format(y.interval().low(), "%"))
+                      .append(" .. ")
+                      .append(VerdictText.format(y.interval().high(), "%"))
+                      .append(" from ")
+                      .append(y.passes())
+                      .append(" of ")
+                      .append(y.builds())
+                      .append(" builds (seed ")
+                      .append(y.seedHex())
+                      .append(y.settled() ? ")\n" : "): not settled, raise the builds\n"));
       if (!o.reason().isBlank()) {
         md.append("\n").append(o.reason()).append('\n');
       }

@@ -90,6 +90,13 @@ final class SemanticTokens {
 
   private void requirement(Requirement q) {
     q.yield().ifPresent(y -> arg(y.bound()));
+    q.yield()
+        .flatMap(Requirement.Yield::builds)
+        .ifPresent(
+            b -> {
+              add(b.count().range(), NUMBER, false);
+              add(b.word().range(), KEYWORD, false);
+            });
     Requirement.Check c = q.check();
     c.measure().words().forEach(w -> add(w.range(), PROPERTY, false));
     for (Requirement.Place p : c.places()) {

@@ -83,9 +83,10 @@ final class RequirementResolver {
     }
     Optional<ResolvedRequirement.Band> band = check.band().flatMap(this::band);
     Optional<ResolvedRequirement.Criterion> yield = req.yield().flatMap(this::yield);
+    java.util.OptionalInt builds = YieldBuilds.resolve(req.yield(), sink);
     boolean valid = errorCount() == errorsBefore;
     return new ResolvedRequirement(
-        sink.file, req, measure, at, from, to, everywhere, criteria, band, yield, valid);
+        sink.file, req, measure, at, from, to, everywhere, criteria, band, yield, valid, builds);
   }
 
   private int errorCount() {

@@ -3,12 +3,14 @@ package jonquil.resolve;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
+import java.util.OptionalInt;
 import jonquil.source.TextRange;
 import jonquil.syntax.Requirement;
 
 /**
  * A requirement with its measure, places and bounds checked and converted to SI, ready for an
- * analysis to evaluate. {@code valid} is false when the line had errors.
+ * analysis to evaluate. {@code valid} is false when the line had errors; {@code yieldBuilds} is the
+ * number of builds the line names ('over 2000 builds').
  */
 public record ResolvedRequirement(
     Path file,
@@ -21,10 +23,39 @@ public record ResolvedRequirement(
     List<Criterion> criteria,
     Optional<Band> band,
     Optional<Criterion> yield,
-    boolean valid) {
+    boolean valid,
+    OptionalInt yieldBuilds) {
 
   public ResolvedRequirement {
     criteria = List.copyOf(criteria);
+  }
+
+  /** A requirement whose yield, if any, draws as many builds as the check is told to. */
+  public ResolvedRequirement(
+      Path file,
+      Requirement syntax,
+      Optional<Measure> measure,
+      Optional<Target> at,
+      Optional<Target> from,
+      Optional<Target> to,
+      boolean everywhere,
+      List<Criterion> criteria,
+      Optional<Band> band,
+      Optional<Criterion> yield,
+      boolean valid) {
+    this(
+        file,
+        syntax,
+        measure,
+        at,
+        from,
+        to,
+        everywhere,
+        criteria,
+        band,
+        yield,
+        valid,
+        OptionalInt.empty());
   }
 
   /** A named place: an element, optionally one of its output ports. */

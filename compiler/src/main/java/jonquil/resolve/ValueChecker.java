@@ -188,6 +188,17 @@ final class ValueChecker {
           "the range in '" + what + "' runs backwards: its low end is above its high end");
       return Optional.empty();
     }
+    // A build draws each end within its '±': they must not be able to cross.
+    if (low.get().si() + low.get().tolerance().orElse(0)
+        > high.get().si() - high.get().tolerance().orElse(0)) {
+      sink.report(
+          DiagnosticCode.INVERTED_RANGE,
+          arg.range(),
+          "within their tolerances the ends of the range in '"
+              + what
+              + "' can cross; narrow the tolerances");
+      return Optional.empty();
+    }
     return Optional.of(
         new Value.Group(Map.of("low", low.get(), "high", high.get()), List.of(), arg.range()));
   }
@@ -270,12 +281,30 @@ final class ValueChecker {
       }
       return Optional.empty();
     }
-    return Optional.of(
-        new Value.Num(si, dim, tolerance(a, unit.orElse(null), si, dim, what), a.range()));
+    OptionalDouble tolerance =
+        inRange(
+            a,
+            tolerance(a, unit.orElse(null), si, dim, !dim.isDimensionless(), what),
+            si,
+            bounds,
+            x -> QuantityFormat.format(x, dim),
+            describe(bounds, dim),
+            what);
+    return Optional.of(new Value.Num(si, dim, tolerance, a.range()));
   }
 
+  /**
+   * The ± half-width in SI. A '%' tolerance is a share of the value when {@code percentOfValue}
+   * ('100 mm ± 1 %', 'index 1.5 ± 0.1 %'); on a fraction written in percent it is percentage points
+   * ('99 % ± 1 %').
+   */
   private OptionalDouble tolerance(
-      Arg.QuantityArg a, Unit valueUnit, double si, Dimension dim, String what) {
+      Arg.QuantityArg a,
+      Unit valueUnit,
+      double si,
+      Dimension dim,
+      boolean percentOfValue,
+      String what) {
     if (a.tolerance().isEmpty()) {
       return OptionalDouble.empty();
     }
@@ -290,7 +319,7 @@ final class ValueChecker {
         return OptionalDouble.empty();
       }
       Unit u = ((UnitParse.Ok) parsed).unit();
-      if (u.symbol().equals("%") && !dim.isDimensionless()) {
+      if (u.symbol().equals("%") && percentOfValue) {
         halfWidth = Math.abs(si) * t.number().value() / 100;
       } else if (!u.dimension().equals(dim) || u.scale() != Scale.LINEAR) {
         sink.report(
@@ -325,6 +354,43 @@ final class ValueChecker {
     return OptionalDouble.of(halfWidth);
   }
 
+  /**
+   * Keeps a tolerance only when every build it allows is physically possible: a Monte Carlo build
+   * draws anywhere within '±', so a tolerance that crosses the value's range is refused at its line
+   * rather than clipped (clipping would pile builds up on the edge without saying so).
+   */
+  private OptionalDouble inRange(
+      Arg.QuantityArg a,
+      OptionalDouble half,
+      double si,
+      Bounds bounds,
+      java.util.function.DoubleFunction<String> shown,
+      String allowed,
+      String what) {
+    if (half.isEmpty()) {
+      return half;
+    }
+    double low = si - half.getAsDouble();
+    double high = si + half.getAsDouble();
+    boolean throughZero = bounds.nonZero() && low <= 0 && high >= 0;
+    if (bounds.contains(low) && bounds.contains(high) && !throughZero) {
+      return half;
+    }
+    double reached = throughZero ? 0 : bounds.contains(low) ? high : low;
+    sink.report(
+        DiagnosticCode.OUT_OF_RANGE,
+        a.tolerance().get().range(),
+        "'"
+            + what
+            + "' reaches "
+            + shown.apply(reached)
+            + " within its tolerance, but must be "
+            + allowed
+            + "; every build a tolerance allows must be possible, so narrow the tolerance or"
+            + " move the value");
+    return OptionalDouble.empty();
+  }
+
   /** A fraction: '95 %', '200 ppm' or a plain number from 0 to 1. */
   Optional<Value.Num> ratio(Arg.QuantityArg a, Bounds bounds, String what) {
     OptionalDouble plain =
@@ -346,14 +412,19 @@ final class ValueChecker {
           new Fix("write '" + a.number().text() + " %'", List.of(new Edit(sink.file, at, " %"))));
       return Optional.empty();
     }
+    String allowed =
+        Double.isFinite(bounds.max())
+            ? "between " + percent(bounds.min()) + " and " + percent(bounds.max())
+            : "zero or more";
     if (!bounds.contains(si)) {
-      String allowed =
-          Double.isFinite(bounds.max())
-              ? "between " + percent(bounds.min()) + " and " + percent(bounds.max())
-              : "zero or more";
       return outOfRange(a, "'" + what + "' must be " + allowed + "; got '" + written(a) + "'");
     }
-    return plainNumber(a, si);
+    // Known here: an unknown unit was reported by plainSi, which then gave no value.
+    Optional<Unit> unit = a.unit().isEmpty() ? Optional.empty() : unitOf(a);
+    OptionalDouble tolerance =
+        tolerance(a, unit.orElse(null), si, Dimension.DIMENSIONLESS, false, what);
+    tolerance = inRange(a, tolerance, si, bounds, ValueChecker::percent, allowed, what);
+    return Optional.of(new Value.Num(si, Dimension.DIMENSIONLESS, tolerance, a.range()));
   }
 
   /**
@@ -390,6 +461,36 @@ final class ValueChecker {
     return si.isEmpty() ? Optional.empty() : plainNumberWithin(a, si.getAsDouble(), bounds, what);
   }
 
+  /**
+   * The tolerance of a plain number (a count, an index, M², a ratio, a density), within its range.
+   * In decibels a '±' would not be symmetric about the ratio it bounds, so it is refused.
+   */
+  private OptionalDouble plainTolerance(Arg.QuantityArg a, double si, Bounds bounds, String what) {
+    if (a.tolerance().isEmpty()) {
+      return OptionalDouble.empty();
+    }
+    if (a.unit().isPresent()) {
+      sink.report(
+          DiagnosticCode.TOLERANCE_MISMATCH,
+          a.tolerance().get().range(),
+          "a tolerance on '"
+              + what
+              + "' in '"
+              + a.unit().get().text()
+              + "' is not symmetric about its ratio; write the ratio as a plain number"
+              + " ('1000 ± 100')");
+      return OptionalDouble.empty();
+    }
+    return inRange(
+        a,
+        tolerance(a, null, si, Dimension.DIMENSIONLESS, true, what),
+        si,
+        bounds,
+        x -> QuantityFormat.format(x, Dimension.DIMENSIONLESS),
+        describe(bounds, Dimension.DIMENSIONLESS),
+        what);
+  }
+
   private Optional<Value.Num> count(Arg.QuantityArg a, Shape.Count c, String what) {
     if (a.unit().isPresent()) {
       sink.report(
@@ -401,6 +502,13 @@ final class ValueChecker {
     double v = a.number().value();
     if (c.integer() && v != Math.rint(v)) {
       return outOfRange(a, "'" + what + "' must be a whole number; got '" + written(a) + "'");
+    }
+    if (c.integer() && a.tolerance().isPresent()) {
+      sink.report(
+          DiagnosticCode.BAD_ARGUMENT,
+          a.tolerance().get().range(),
+          "'" + what + "' is a whole number and takes no tolerance");
+      return Optional.empty();
     }
     return plainNumberWithin(a, v, c.bounds(), what);
   }
@@ -420,7 +528,7 @@ final class ValueChecker {
     if (a.number().value() < 0) {
       return outOfRange(a, "an optical density cannot be negative; got '" + written(a) + "'");
     }
-    return plainNumber(a, a.number().value());
+    return plainNumber(a, a.number().value(), Bounds.NON_NEGATIVE, what);
   }
 
   /** A plain number checked against its bounds. */
@@ -437,12 +545,13 @@ final class ValueChecker {
               + written(a)
               + "'");
     }
-    return plainNumber(a, v);
+    return plainNumber(a, v, bounds, what);
   }
 
-  private static Optional<Value.Num> plainNumber(Arg.QuantityArg a, double v) {
+  /** A plain number already within its bounds, with its tolerance. */
+  private Optional<Value.Num> plainNumber(Arg.QuantityArg a, double v, Bounds bounds, String what) {
     return Optional.of(
-        new Value.Num(v, Dimension.DIMENSIONLESS, OptionalDouble.empty(), a.range()));
+        new Value.Num(v, Dimension.DIMENSIONLESS, plainTolerance(a, v, bounds, what), a.range()));
   }
 
   /** Reports {@code a} as out of range; there is no value. */

@@ -259,11 +259,21 @@ record AstBuilder(SourceFile source, OffsetMap offsets, List<TextRange> comments
     if (present(ctx.YIELD()) && ctx.comparator != null && ctx.bound != null) {
       Arg bound = value(ctx.bound);
       Requirement.Comparator cmp = comparator(ctx.comparator);
+      Optional<Requirement.Builds> builds = Optional.empty();
+      if (present(ctx.OVER()) && ctx.builds != null && present(ctx.buildsWord)) {
+        Arg.NumberLit count = number(ctx.builds);
+        Name word = name(ctx.buildsWord);
+        builds =
+            Optional.of(
+                new Requirement.Builds(
+                    count, word, TextRange.span(range(ctx.OVER().getSymbol()), word.range())));
+      }
       if (bound != null && cmp != null) {
+        TextRange end = builds.map(Requirement.Builds::range).orElse(bound.range());
         yield =
             Optional.of(
                 new Requirement.Yield(
-                    cmp, bound, TextRange.span(range(ctx.YIELD().getSymbol()), bound.range())));
+                    cmp, bound, builds, TextRange.span(range(ctx.YIELD().getSymbol()), end)));
       }
     }
     CheckContext c = ctx.check();

@@ -143,7 +143,23 @@ final class AstShift {
                             name(b.quantity()), arg(b.low()), arg(b.high()), range(b.range()))),
             range(c.range()));
     Optional<Requirement.Yield> yield =
-        r.yield().map(y -> new Requirement.Yield(y.comparator(), arg(y.bound()), range(y.range())));
+        r.yield()
+            .map(
+                y ->
+                    new Requirement.Yield(
+                        y.comparator(),
+                        arg(y.bound()),
+                        y.builds()
+                            .map(
+                                b ->
+                                    new Requirement.Builds(
+                                        new Arg.NumberLit(
+                                            b.count().value(),
+                                            b.count().text(),
+                                            range(b.count().range())),
+                                        name(b.word()),
+                                        range(b.range()))),
+                        range(y.range())));
     return new Requirement(yield, check, r.text(), range(r.range()));
   }
 

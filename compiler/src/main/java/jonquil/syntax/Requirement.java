@@ -10,8 +10,18 @@ import jonquil.source.TextRange;
  */
 public record Requirement(Optional<Yield> yield, Check check, String text, TextRange range) {
 
-  /** {@code yield >= 99 % for ...}: the fraction of toleranced builds that must pass. */
-  public record Yield(Comparator comparator, Arg bound, TextRange range) {}
+  /**
+   * {@code yield >= 99 % for ...}: the fraction of toleranced builds that must pass, optionally
+   * with how many builds to draw ({@code yield >= 99 % over 2000 builds for ...}).
+   */
+  public record Yield(Comparator comparator, Arg bound, Optional<Builds> builds, TextRange range) {
+    public Yield(Comparator comparator, Arg bound, TextRange range) {
+      this(comparator, bound, Optional.empty(), range);
+    }
+  }
+
+  /** {@code over 2000 builds}: the count and the word after it, as written. */
+  public record Builds(Arg.NumberLit count, Name word, TextRange range) {}
 
   /** The core of a requirement. */
   public record Check(

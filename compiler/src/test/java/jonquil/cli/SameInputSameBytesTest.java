@@ -24,4 +24,17 @@ class SameInputSameBytesTest {
     CliProcess second = CliProcess.run(root, Map.of(), jvm, "check", "--format", "json", sample);
     assertArrayEquals(first.out(), second.out(), "the JSON of two runs differs: " + sample);
   }
+
+  @ParameterizedTest
+  @ValueSource(strings = {"", "7"})
+  void aDrawnYieldIsTheSameInTwoJvms(String seed) throws Exception {
+    Path root = Repo.samples();
+    List<String> args =
+        seed.isEmpty()
+            ? List.of("check", "--format", "json", "optical_trap.jonq")
+            : List.of("check", "--format", "json", "--seed", seed, "optical_trap.jonq");
+    CliProcess first = CliProcess.run(root, Map.of(), List.of(), args.toArray(String[]::new));
+    CliProcess second = CliProcess.run(root, Map.of(), List.of(), args.toArray(String[]::new));
+    assertArrayEquals(first.out(), second.out(), "the yield of two runs differs: " + args);
+  }
 }

@@ -46,6 +46,24 @@ class HoverTest {
   }
 
   @Test
+  void aYieldShowsItsIntervalItsBuildsAndItsSeed() {
+    String md =
+        hover(
+            """
+            source s { wavelength 633 nm; power 10 mW; polarization linear 0 deg }
+            polarizer p45 { axis 45 deg ± 10 deg }
+            probe mid
+            train t { s -> 10 mm -> p45 -> 10 mm -> mid }
+            require {
+              $0yield >= 50 % over 300 builds for power at mid >= 5 mW
+            }
+            """);
+    assertTrue(md.contains("95 % Wilson score interval"), md);
+    assertTrue(md.contains(" of 300 builds (seed "), md);
+    assertTrue(md.contains("not settled, raise the builds"), md);
+  }
+
+  @Test
   void aWindowShowsBothOfItsPorts() {
     Golden.check(GOLDEN.resolve("window.md"), hover(bench("w1", 0)));
   }

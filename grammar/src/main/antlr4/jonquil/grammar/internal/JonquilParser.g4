@@ -57,7 +57,8 @@ distance      : quantity (IN medium=reference)? ;
 
 // 'require { power at trap in 400 mW .. 600 mW }'
 requireDecl   : REQUIRE LBRACE sep* (requirement (sep+ requirement)*)? sep* RBRACE ;
-requirement   : (YIELD comparator=cmp bound=value FOR)? check ;
+// 'yield >= 99 % over 2000 builds for power at trap >= 400 mW'; the word is checked later.
+requirement   : (YIELD comparator=cmp bound=value (OVER builds=number buildsWord=IDENT)? FOR)? check ;
 check         : measure place* condition? place* (COMMA extra)* band? ;
 extra         : measure? condition ;
 measure       : IDENT+ ;
