@@ -35,6 +35,9 @@ final class SafetyModel {
       return Emission.continuous(wavelength, power);
     }
     Pulses p = pulses.get();
+    if (p.single()) {
+      return Emission.singlePulse(wavelength, p.energy(power), p.duration());
+    }
     return Emission.pulseTrain(wavelength, p.energy(power), p.duration(), p.repetitionRate());
   }
 

@@ -30,7 +30,11 @@ final class KindChecks {
     // A switch expression, so that a new kind does not compile until it is listed here.
     Runnable rules =
         switch (kind) {
-          case SOURCE -> () -> pulses(sink, who, decl, params, given);
+          case SOURCE ->
+              () -> {
+                pulses(sink, who, decl, params, given);
+                beamQuality(sink, who, params, given);
+              };
           case MATERIAL ->
               () -> {
                 needs(sink, who, decl, given, Param.K, Param.INDEX);
@@ -125,6 +129,74 @@ final class KindChecks {
                 + " disagrees with pulse_energy × repetition_rate = "
                 + QuantityFormat.format(product, Dimension.POWER)
                 + "; give two of the three, or make them agree");
+      }
+    }
+  }
+
+  /**
+   * Relative mismatch tolerated between a stated M² and the one waist and divergence give (data
+   * sheets round each figure to two or three digits; a chosen, documented tolerance).
+   */
+  static final double BEAM_CONSISTENCY = 0.05;
+
+  /**
+   * Waist and divergence together fix M² = π W0 θ/λ (Siegman, Lasers, 1986, ch. 17, θ = M² λ/(π
+   * W0)), in vacuum (the ambient index differs from 1 by 3e-4, far inside the tolerance). With M²
+   * also stated the three must agree; a pair below the diffraction limit (M² < 1) is refused.
+   */
+  private static void beamQuality(
+      Sink sink, String who, Map<String, List<Value.Group>> params, Map<String, Property> given) {
+    List<Value.Group> beam = params.get(Param.BEAM.word());
+    if (beam == null || beam.isEmpty()) {
+      return;
+    }
+    OptionalDouble w0 = beam.get(0).number("waist");
+    OptionalDouble theta = beam.get(0).number("divergence");
+    if (w0.isEmpty() || theta.isEmpty()) {
+      return;
+    }
+    OptionalDouble stated = beam.get(0).number("m2");
+    List<Double> wavelengths = new java.util.ArrayList<>();
+    number(params, Param.WAVELENGTH, "wavelength").ifPresent(wavelengths::add);
+    for (Value.Group line : params.getOrDefault(Param.LINE.word(), List.of())) {
+      line.number("wavelength").ifPresent(wavelengths::add);
+    }
+    for (double wl : wavelengths) {
+      double m2 = Math.PI * w0.getAsDouble() * theta.getAsDouble() / wl;
+      String derived =
+          "waist "
+              + QuantityFormat.format(w0.getAsDouble(), Dimension.LENGTH)
+              + " and divergence "
+              + QuantityFormat.format(theta.getAsDouble(), Dimension.ANGLE)
+              + " at "
+              + QuantityFormat.format(wl, Dimension.LENGTH)
+              + " give M² = π W0 θ/λ = "
+              + QuantityFormat.format(m2, Dimension.DIMENSIONLESS);
+      if (stated.isPresent()) {
+        if (Math.abs(m2 - stated.getAsDouble()) > BEAM_CONSISTENCY * stated.getAsDouble()) {
+          sink.report(
+              DiagnosticCode.CONFLICTING_PARAMETERS,
+              given.get(Param.BEAM.word()).range(),
+              "the beam of "
+                  + who
+                  + " is over-determined and inconsistent: "
+                  + derived
+                  + ", not the stated "
+                  + QuantityFormat.format(stated.getAsDouble(), Dimension.DIMENSIONLESS)
+                  + "; give two of the three, or make them agree");
+          return;
+        }
+      } else if (m2 < 1 - BEAM_CONSISTENCY) {
+        sink.report(
+            DiagnosticCode.OUT_OF_RANGE,
+            given.get(Param.BEAM.word()).range(),
+            "the beam of "
+                + who
+                + " is below the diffraction limit: "
+                + derived
+                + ", and M² cannot be below 1; check the waist (a radius at 1/e²) and the"
+                + " divergence (a half angle)");
+        return;
       }
     }
   }
