@@ -75,6 +75,9 @@ final class ElementOptics {
             od.isPresent()
                 ? Math.pow(10, -od.getAsDouble())
                 : e.number(Param.TRANSMISSION, "t").orElse(1);
+        if (outsideBand(e, in.wavelength())) {
+          t = Math.pow(10, -e.number(Param.BLOCKING, "od").orElse(0));
+        }
         yield Response.balance(in, Map.of("out", in.with(in.light().scaled(t))), List.of())
             .withJones(scalar("out", t));
       }
@@ -88,6 +91,21 @@ final class ElementOptics {
           throw new IllegalArgumentException(
               e.kind().word() + " '" + e.symbol().name() + "' cannot stand in a beam path");
     };
+  }
+
+  /** Whether a filter's stated band leaves this wavelength out (the band's ends are inside). */
+  private static boolean outsideBand(ResolvedElement e, double wavelength) {
+    Optional<Value.Group> band =
+        e.param(Param.BAND)
+            .flatMap(b -> b.slot("from..to"))
+            .filter(v -> v instanceof Value.Group)
+            .map(v -> (Value.Group) v);
+    if (band.isEmpty()) {
+      return false;
+    }
+    double from = band.get().number("low").orElse(0);
+    double to = band.get().number("high").orElse(Double.POSITIVE_INFINITY);
+    return wavelength < from || wavelength > to;
   }
 
   private static Response aperture(ResolvedElement e, TracedBeam in) {

@@ -364,7 +364,11 @@ final class KindTables {
             new Shape.Span(
                 q("from", Dimension.LENGTH, WAVELENGTH, "400 nm"),
                 q("to", Dimension.LENGTH, WAVELENGTH, "700 nm")),
-            "wavelength band where the rating holds"),
+            "wavelength band where the rating holds (needs 'blocking')"),
+        optional(
+            Param.BLOCKING,
+            new Shape.Density("od"),
+            "optical density outside the band, 'OD 0' for none (needs 'band')"),
         DAMAGE_PARAM);
     put(
         ElementKind.RHOMB,
