@@ -381,7 +381,16 @@ final class ElementOptics {
     Complex outside = real(materials.index(in.medium(), wl));
     Complex n = glass.map(g -> real(materials.index(g, wl))).orElse(new Complex(1.5, 0));
     SurfaceModel.Powers s1 = surfaces.surface(e, outside, n, 0, wl);
-    double[] pair = plate(s1.rs(), s1.ts(), s1.rs(), s1.ts(), 1);
+    // The glass absorbs over the centre thickness (its edge is thinner or thicker; a thin lens).
+    double tau =
+        glass
+            .map(
+                g ->
+                    Math.exp(
+                        -materials.absorption(Medium.of(g), wl)
+                            * e.number(Param.THICKNESS, "thickness").orElse(0)))
+            .orElse(1.0);
+    double[] pair = plate(s1.rs(), s1.ts(), s1.rs(), s1.ts(), tau);
     TracedBeam out = in.with(in.light().scaled(pair[0]));
     TracedBeam back = in.with(in.light().scaled(pair[1]), in.frame().reflect(0, 0));
     return Response.balance(

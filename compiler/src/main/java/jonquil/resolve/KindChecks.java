@@ -54,6 +54,13 @@ final class KindChecks {
               };
           case SPLITTER ->
               () -> {
+                refused(
+                    sink,
+                    who,
+                    given,
+                    Param.COATING,
+                    "a splitter's coating is its splitting layer, whose effect is what 'ratio',"
+                        + " 'polarizing' and the reflectances and transmittances state");
                 if (!given.containsKey(Param.POLARIZING.word())) {
                   needs(sink, who, decl, given, Param.REFLECT_S, Param.REFLECT_P);
                   needs(sink, who, decl, given, Param.REFLECT_P, Param.REFLECT_S);
