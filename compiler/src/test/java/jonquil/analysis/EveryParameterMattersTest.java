@@ -125,10 +125,7 @@ class EveryParameterMattersTest {
     change("waveplate", "order", plate + "; order zero", "order multi 5");
     // With no thickness the plate is made to its design retardance, whatever its birefringence.
     change(
-        "waveplate",
-        "material",
-        plate + "; material crystal; thickness 1 mm",
-        "material crystal2");
+        "waveplate", "material", plate + "; material crystal; thickness 1 mm", "material crystal2");
     change(
         "waveplate", "thickness", plate + "; material crystal; thickness 1 mm", "thickness 2 mm");
     change("waveplate", "coating", plate + "; coating ar 0.5 %", "coating ar 2 %");
