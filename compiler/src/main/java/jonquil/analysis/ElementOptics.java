@@ -218,9 +218,36 @@ final class ElementOptics {
         Jones.reflection(
             new Complex(Math.sqrt(clamp(rp)), 0), new Complex(-Math.sqrt(clamp(rs)), 0), plane);
     TracedBeam reflected = in.with(in.light().transform(reflect), in.frame().reflect(aoi, plane));
+    if (e.param(Param.COATING).isEmpty()) {
+      return Response.balance(
+              in, Map.of("through", in.with(through), "reflected", reflected), List.of())
+          .withJones(Map.of("through", pass, "reflected", reflect));
+    }
+    // A coating is on the cube's outer faces (glass of n = 1.5 assumed, as for a coated plate),
+    // met at normal incidence: once on entry (its reflection heads back) and once at each exit
+    // (those reflections are stray inside the cube); single passes, summed incoherently.
+    Complex outside = real(materials.index(in.medium(), in.wavelength()));
+    SurfaceModel.Powers face =
+        surfaces.surface(e, outside, new Complex(1.5, 0), 0, in.wavelength());
+    double t = face.ts();
+    double exitLoss = t * face.rs() * (through.power() + reflected.power());
     return Response.balance(
-            in, Map.of("through", in.with(through), "reflected", reflected), List.of())
-        .withJones(Map.of("through", pass, "reflected", reflect));
+            in,
+            Map.of(
+                "through",
+                in.with(through.scaled(t * t)),
+                "reflected",
+                reflected.with(reflected.light().scaled(t * t))),
+            List.of(
+                new Ghost(
+                    "entry face reflection",
+                    in.with(in.light().scaled(face.rs()), in.frame().reflect(0, 0)),
+                    true),
+                new Ghost(
+                    "exit face reflections",
+                    in.with(in.light().scaled(exitLoss / Math.max(in.power(), Double.MIN_VALUE))),
+                    false)))
+        .withJones(Map.of("through", pass.scaled(t), "reflected", reflect.scaled(t)));
   }
 
   private Response mirror(ResolvedElement e, TracedBeam in, double plane) {

@@ -54,13 +54,6 @@ final class KindChecks {
               };
           case SPLITTER ->
               () -> {
-                refused(
-                    sink,
-                    who,
-                    given,
-                    Param.COATING,
-                    "a splitter's coating is its splitting layer, whose effect is what 'ratio',"
-                        + " 'polarizing' and the reflectances and transmittances state");
                 if (!given.containsKey(Param.POLARIZING.word())) {
                   needs(sink, who, decl, given, Param.REFLECT_S, Param.REFLECT_P);
                   needs(sink, who, decl, given, Param.REFLECT_P, Param.REFLECT_S);
@@ -94,16 +87,6 @@ final class KindChecks {
                           + " ghosts); give the faces' tilt with 'aoi'");
           case LENS -> () -> needs(sink, who, decl, given, Param.THICKNESS, Param.MATERIAL);
           case WAVEPLATE -> () -> needs(sink, who, decl, given, Param.THICKNESS, Param.MATERIAL);
-          case PROBE ->
-              () ->
-                  refused(
-                      sink,
-                      who,
-                      given,
-                      Param.APERTURE,
-                      "a probe reads the whole beam, and exposure is averaged over the standard's"
-                          + " limiting aperture (7 mm for the eye); another aperture is not"
-                          + " modelled");
           case DETECTOR ->
               () -> {
                 refused(
@@ -121,7 +104,7 @@ final class KindChecks {
                     "no figure Jonquil computes uses it (there is no photocurrent measure)");
               };
           // The tables and KindRules say all there is to check of these.
-          case COATING, INTERFACE, POLARIZER, DEPOLARIZER, MIRROR, APERTURE, RHOMB, DUMP ->
+          case COATING, INTERFACE, POLARIZER, DEPOLARIZER, MIRROR, APERTURE, RHOMB, PROBE, DUMP ->
               () -> {};
         };
     rules.run();

@@ -390,7 +390,8 @@ final class KindTables {
         optional(
             Param.APERTURE,
             q("diameter", Dimension.LENGTH, Bounds.POSITIVE, "7 mm"),
-            "measurement aperture diameter"),
+            "measurement aperture diameter: exposure is averaged over it where it is smaller than"
+                + " the standard's limiting aperture"),
         optional(
             Param.EXPOSURE_TIME,
             q("time", Dimension.TIME, Bounds.POSITIVE, "0.25 s"),

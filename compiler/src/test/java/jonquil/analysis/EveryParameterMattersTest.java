@@ -52,10 +52,8 @@ class EveryParameterMattersTest {
               "wedge",
               "material glass; thickness 3 mm",
               "material glass; thickness 3 mm; wedge 0.5 deg"),
-          new Change("probe", "aperture", "", "aperture 7 mm"),
           new Change("detector", "aperture", "", "aperture 3 mm"),
-          new Change("detector", "responsivity", "", "responsivity 0.4 A/W"),
-          new Change("splitter", "coating", "ratio 50 %", "ratio 50 %; coating ar 0.5 %"));
+          new Change("detector", "responsivity", "", "responsivity 0.4 A/W"));
 
   static final List<Change> CHANGES = new ArrayList<>();
 
@@ -149,6 +147,7 @@ class EveryParameterMattersTest {
     // The angle sets where the reflected beam goes: straight up at 45 deg in a vertical plane.
     change("splitter", "aoi", "ratio 50 %; plane 90 deg; aoi 45 deg", "aoi 30 deg");
     change("splitter", "plane", "polarizing; plane 0 deg", "plane 45 deg");
+    change("splitter", "coating", "ratio 50 %; coating ar 0.5 %", "coating ar 2 %");
     damage("splitter", "ratio 50 %");
 
     change("depolarizer", "depolarization", "depolarization 50 %", "depolarization 100 %");
@@ -197,6 +196,8 @@ class EveryParameterMattersTest {
     damage("rhomb", rhomb);
 
     change("probe", "exposure_time", "exposure_time 0.25 s", "exposure_time 100 s");
+    // Averaged over a smaller aperture, the 1 mm-waist beam's mean irradiance is higher.
+    change("probe", "aperture", "aperture 7 mm", "aperture 1 mm");
 
     damage("detector", "");
 
