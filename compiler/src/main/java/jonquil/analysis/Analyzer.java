@@ -90,6 +90,7 @@ public final class Analyzer {
                     verdict("requirement not met", r, v)));
       }
     }
+    diagnostics.addAll(TerminalLimits.check(model, solution));
     for (StrayBeam s : solution.stray()) {
       if (s.power() > STRAY_NOTE_THRESHOLD * solution.sourcePower() && s.file() != null) {
         diagnostics.add(

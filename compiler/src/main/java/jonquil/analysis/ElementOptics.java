@@ -75,6 +75,9 @@ final class ElementOptics {
             od.isPresent()
                 ? Math.pow(10, -od.getAsDouble())
                 : e.number(Param.TRANSMISSION, "t").orElse(1);
+        if (outsideBand(e, in.wavelength())) {
+          t = Math.pow(10, -e.number(Param.BLOCKING, "od").orElse(0));
+        }
         yield Response.balance(in, Map.of("out", in.with(in.light().scaled(t))), List.of())
             .withJones(scalar("out", t));
       }
@@ -88,6 +91,21 @@ final class ElementOptics {
           throw new IllegalArgumentException(
               e.kind().word() + " '" + e.symbol().name() + "' cannot stand in a beam path");
     };
+  }
+
+  /** Whether a filter's stated band leaves this wavelength out (the band's ends are inside). */
+  private static boolean outsideBand(ResolvedElement e, double wavelength) {
+    Optional<Value.Group> band =
+        e.param(Param.BAND)
+            .flatMap(b -> b.slot("from..to"))
+            .filter(v -> v instanceof Value.Group)
+            .map(v -> (Value.Group) v);
+    if (band.isEmpty()) {
+      return false;
+    }
+    double from = band.get().number("low").orElse(0);
+    double to = band.get().number("high").orElse(Double.POSITIVE_INFINITY);
+    return wavelength < from || wavelength > to;
   }
 
   private static Response aperture(ResolvedElement e, TracedBeam in) {
@@ -195,9 +213,36 @@ final class ElementOptics {
         Jones.reflection(
             new Complex(Math.sqrt(clamp(rp)), 0), new Complex(-Math.sqrt(clamp(rs)), 0), plane);
     TracedBeam reflected = in.with(in.light().transform(reflect), in.frame().reflect(aoi, plane));
+    if (e.param(Param.COATING).isEmpty()) {
+      return Response.balance(
+              in, Map.of("through", in.with(through), "reflected", reflected), List.of())
+          .withJones(Map.of("through", pass, "reflected", reflect));
+    }
+    // A coating is on the cube's outer faces (glass of n = 1.5 assumed, as for a coated plate),
+    // met at normal incidence: once on entry (its reflection heads back) and once at each exit
+    // (those reflections are stray inside the cube); single passes, summed incoherently.
+    Complex outside = real(materials.index(in.medium(), in.wavelength()));
+    SurfaceModel.Powers face =
+        surfaces.surface(e, outside, new Complex(1.5, 0), 0, in.wavelength());
+    double t = face.ts();
+    double exitLoss = t * face.rs() * (through.power() + reflected.power());
     return Response.balance(
-            in, Map.of("through", in.with(through), "reflected", reflected), List.of())
-        .withJones(Map.of("through", pass, "reflected", reflect));
+            in,
+            Map.of(
+                "through",
+                in.with(through.scaled(t * t)),
+                "reflected",
+                reflected.with(reflected.light().scaled(t * t))),
+            List.of(
+                new Ghost(
+                    "entry face reflection",
+                    in.with(in.light().scaled(face.rs()), in.frame().reflect(0, 0)),
+                    true),
+                new Ghost(
+                    "exit face reflections",
+                    in.with(in.light().scaled(exitLoss / Math.max(in.power(), Double.MIN_VALUE))),
+                    false)))
+        .withJones(Map.of("through", pass.scaled(t), "reflected", reflect.scaled(t)));
   }
 
   private Response mirror(ResolvedElement e, TracedBeam in, double plane) {
@@ -371,7 +416,16 @@ final class ElementOptics {
     Complex outside = real(materials.index(in.medium(), wl));
     Complex n = glass.map(g -> real(materials.index(g, wl))).orElse(new Complex(1.5, 0));
     SurfaceModel.Powers s1 = surfaces.surface(e, outside, n, 0, wl);
-    double[] pair = plate(s1.rs(), s1.ts(), s1.rs(), s1.ts(), 1);
+    // The glass absorbs over the centre thickness (its edge is thinner or thicker; a thin lens).
+    double tau =
+        glass
+            .map(
+                g ->
+                    Math.exp(
+                        -materials.absorption(Medium.of(g), wl)
+                            * e.number(Param.THICKNESS, "thickness").orElse(0)))
+            .orElse(1.0);
+    double[] pair = plate(s1.rs(), s1.ts(), s1.rs(), s1.ts(), tau);
     TracedBeam out = in.with(in.light().scaled(pair[0]));
     TracedBeam back = in.with(in.light().scaled(pair[1]), in.frame().reflect(0, 0));
     return Response.balance(

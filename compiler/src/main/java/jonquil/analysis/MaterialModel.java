@@ -7,6 +7,7 @@ import java.util.OptionalDouble;
 import jonquil.optics.material.CatalogMaterial;
 import jonquil.optics.material.MaterialCatalog;
 import jonquil.optics.material.TabulatedIndex;
+import jonquil.optics.material.ThermoOptic;
 import jonquil.optics.material.Uniaxial;
 import jonquil.optics.material.WavelengthRange;
 import jonquil.resolve.ElementKind;
@@ -78,6 +79,14 @@ final class MaterialModel {
             });
     Optional<Value.Group> catalog = m.param(Param.CATALOG);
     if (catalog.isPresent() && catalog.get().slot("name").orElse(null) instanceof Value.Ref ref) {
+      OptionalDouble kelvin = m.number(Param.TEMPERATURE, "temperature");
+      Optional<CatalogMaterial> entry = MaterialCatalog.lookup(ref.symbol().name());
+      Optional<ThermoOptic> thermo = ThermoOptic.of(ref.symbol().name());
+      if (kelvin.isPresent() && entry.isPresent() && thermo.isPresent()) {
+        // The resolver refused a temperature that no published data cover.
+        check(ref.symbol(), entry.get(), wavelength);
+        return thermo.get().index(entry.get(), wavelength, kelvin.getAsDouble());
+      }
       return index(ref.symbol(), wavelength);
     }
     OptionalDouble n = m.number(Param.INDEX, "n");

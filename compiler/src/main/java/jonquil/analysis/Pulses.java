@@ -4,9 +4,16 @@ import java.util.Optional;
 import jonquil.resolve.Param;
 import jonquil.resolve.ResolvedElement;
 
-/** The pulse train of a pulsed source: repetition rate and pulse duration (FWHM), both SI. */
+/**
+ * The pulses of a pulsed source: repetition rate and pulse duration (FWHM), both SI. A rate of 0 is
+ * a single pulse, which the train carries at its peak power E/τ (the rectangular-equivalent peak
+ * power, by definition), since it has no average power.
+ */
 public record Pulses(double repetitionRate, double duration) {
-  /** The pulses of a source, when it states a duration and a rate (or energy and average power). */
+  /**
+   * The pulses of a source: a duration with a rate (or with energy and average power), or a single
+   * pulse (energy and duration alone).
+   */
   static Optional<Pulses> of(ResolvedElement source) {
     var duration = source.number(Param.PULSE_DURATION, "duration");
     if (duration.isEmpty()) {
@@ -22,11 +29,21 @@ public record Pulses(double repetitionRate, double duration) {
       return Optional.of(
           new Pulses(power.getAsDouble() / energy.getAsDouble(), duration.getAsDouble()));
     }
+    if (energy.isPresent() && power.isEmpty()) {
+      return Optional.of(new Pulses(0, duration.getAsDouble()));
+    }
     return Optional.empty();
   }
 
-  /** Energy per pulse carried by an average power. */
-  public double energy(double averagePower) {
-    return averagePower / repetitionRate;
+  public boolean single() {
+    return repetitionRate == 0;
+  }
+
+  /**
+   * Energy per pulse carried by a traced power: the average power over the rate, or for a single
+   * pulse its peak power times its duration.
+   */
+  public double energy(double tracedPower) {
+    return single() ? tracedPower * duration : tracedPower / repetitionRate;
   }
 }

@@ -153,14 +153,13 @@ final class RequirementEvaluator {
         yield compare(c, a.get().power() == 0 ? 0 : b.get().power() / a.get().power(), "", "");
       }
       case STRAY -> compare(c, s.strayPower(), "W", "");
-      case BACK_REFLECTION ->
-          c.relativeToSource()
-              ? compare(
-                  c,
-                  s.sourcePower() == 0 ? 0 : s.backReflected() / s.sourcePower(),
-                  "",
-                  "of the source power")
-              : compare(c, s.backReflected(), "W", "");
+      case BACK_REFLECTION -> {
+        double back = s.backReflected(r.at().map(t -> t.symbol()));
+        yield c.relativeToSource()
+            ? compare(
+                c, s.sourcePower() == 0 ? 0 : back / s.sourcePower(), "", "of the source power")
+            : compare(c, back, "W", "");
+      }
       case DOP -> at.isEmpty() ? unreached(r) : compare(c, at.get().light().dop(), "", "");
       case EXTINCTION ->
           at.isEmpty() ? unreached(r) : compare(c, at.get().light().extinctionRatio(), "", "");

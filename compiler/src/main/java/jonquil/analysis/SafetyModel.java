@@ -35,6 +35,9 @@ final class SafetyModel {
       return Emission.continuous(wavelength, power);
     }
     Pulses p = pulses.get();
+    if (p.single()) {
+      return Emission.singlePulse(wavelength, p.energy(power), p.duration());
+    }
     return Emission.pulseTrain(wavelength, p.energy(power), p.duration(), p.repetitionRate());
   }
 
@@ -77,6 +80,16 @@ final class SafetyModel {
    * Exposure at a place as a fraction of the ocular MPE, averaged over the 7 mm limiting aperture.
    */
   static Outcome<Double> mpeFraction(double wavelength, PortValue at, double exposureTime) {
+    return mpeFraction(wavelength, at, exposureTime, Double.POSITIVE_INFINITY);
+  }
+
+  /**
+   * As above, averaged over a probe's own aperture where it is smaller than the limiting aperture
+   * (a smaller aperture sees a higher mean irradiance). A larger one would dilute the exposure
+   * below what the standard measures, so the limiting aperture bounds it: fail closed.
+   */
+  static Outcome<Double> mpeFraction(
+      double wavelength, PortValue at, double exposureTime, double probeAperture) {
     if (at.mode().isEmpty()) {
       return Outcome.notEvaluated(
           "the beam size is unknown: give the source a 'beam' line", "IEC 60825-1:2014");
@@ -87,7 +100,7 @@ final class SafetyModel {
       return Outcome.notEvaluated(mpe.reason(), mpe.standard());
     }
     double radius = at.mode().get().radius();
-    double aperture = OcularMpe.LIMITING_APERTURE;
+    double aperture = Math.min(OcularMpe.LIMITING_APERTURE, probeAperture);
     double fraction =
         e.pulsed()
             ? Irradiance.meanOverAperture(e.pulseEnergy(), radius, aperture)

@@ -70,7 +70,14 @@ final class SafetyVerdicts {
       case NOHD:
         return verdict(c, SafetyModel.nohd(element.get(), at), "m");
       case EXPOSURE:
-        return verdict(c, SafetyModel.mpeFraction(wavelength, at, exposureTime), "");
+        return verdict(
+            c,
+            SafetyModel.mpeFraction(
+                wavelength,
+                at,
+                exposureTime,
+                element.get().number(Param.APERTURE, "diameter").orElse(Double.POSITIVE_INFINITY)),
+            "");
       default:
         {
           var od = SafetyModel.eyewear(wavelength, at, exposureTime);

@@ -52,7 +52,8 @@ final class SourceBeams {
 
   /**
    * The source's Gaussian mode from its 'beam' line: a waist radius (1/e²), or a far-field
-   * half-angle divergence; M² defaults to 1 and the waist to the exit face.
+   * half-angle divergence; M² defaults to 1 (or follows from waist and divergence together) and the
+   * waist to the exit face.
    */
   static Optional<GaussianBeam> mode(ResolvedElement source, double wavelength, double index) {
     Optional<Value.Group> beam = source.param(Param.BEAM);
@@ -63,6 +64,13 @@ final class SourceBeams {
     double waistAhead = beam.get().number("waist_at").orElse(0);
     OptionalDouble waist = beam.get().number("waist");
     OptionalDouble divergence = beam.get().number("divergence");
+    if (waist.isPresent() && divergence.isPresent() && beam.get().number("m2").isEmpty()) {
+      // Waist and divergence fix the beam quality: θ = M² λ/(π n W0) (Siegman, Lasers, 1986,
+      // ch. 17); the resolver refused a pair that would make M² < 1 beyond rounding.
+      m2 =
+          Math.max(
+              1, Math.PI * index * waist.getAsDouble() * divergence.getAsDouble() / wavelength);
+    }
     if (waist.isPresent()) {
       return Optional.of(
           GaussianBeam.fromWaist(wavelength, m2, waist.getAsDouble(), waistAhead, index));
@@ -75,8 +83,9 @@ final class SourceBeams {
   }
 
   /**
-   * Average power: stated, or pulse energy × repetition rate; a single-shot source averages to
-   * zero.
+   * The power a source's beam carries through the train: the stated (average) power, or pulse
+   * energy × repetition rate; a single pulse (energy and duration, no rate) is carried at its peak
+   * power E/τ ({@link Pulses}), never as 0 W.
    */
   static double averagePower(ResolvedElement source) {
     OptionalDouble power = source.number(Param.POWER, "power");
@@ -85,7 +94,14 @@ final class SourceBeams {
     }
     OptionalDouble energy = source.number(Param.PULSE_ENERGY, "energy");
     OptionalDouble rate = source.number(Param.REPETITION_RATE, "rate");
-    return energy.isPresent() && rate.isPresent() ? energy.getAsDouble() * rate.getAsDouble() : 0;
+    OptionalDouble duration = source.number(Param.PULSE_DURATION, "duration");
+    if (energy.isPresent() && rate.isPresent()) {
+      return energy.getAsDouble() * rate.getAsDouble();
+    }
+    if (energy.isPresent() && duration.isPresent()) {
+      return energy.getAsDouble() / duration.getAsDouble();
+    }
+    return 0;
   }
 
   /**

@@ -65,6 +65,23 @@ public record TrainSolution(
     return stray.stream().filter(StrayBeam::backward).mapToDouble(StrayBeam::power).sum();
   }
 
+  /**
+   * The light heading back from one place: an element's own backward ghosts and ports; at a source
+   * (or with no place) every backward beam of the train, since Jonquil does not trace light back
+   * through the elements before it (an upper bound on what returns to the source).
+   */
+  public double backReflected(Optional<jonquil.resolve.Symbol> at) {
+    if (at.isEmpty() || at.get().category() == jonquil.resolve.Category.SOURCE) {
+      return backReflected();
+    }
+    String name = at.get().name();
+    return stray.stream()
+        .filter(StrayBeam::backward)
+        .filter(b -> b.origin().equals(name) || b.origin().startsWith(name + "."))
+        .mapToDouble(StrayBeam::power)
+        .sum();
+  }
+
   /** |source − accounted| / source: zero up to rounding when the budget closes. */
   public double conservationError() {
     double accounted = absorbed + stopped + observedAtPathEnds + strayPower();

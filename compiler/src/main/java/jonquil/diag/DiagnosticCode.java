@@ -55,6 +55,8 @@ public enum DiagnosticCode {
   UNSUPPORTED_WAVELENGTH("J408", Severity.ERROR, "A wavelength outside the range Jonquil supports"),
   MATERIAL_OUT_OF_RANGE(
       "J409", Severity.WARNING, "A material used outside the wavelength range of its data"),
+  PARAMETER_NOT_MODELLED(
+      "J410", Severity.ERROR, "A parameter whose effect Jonquil does not model, refused"),
 
   // Beam trains: J5xx
   PATH_START_NOT_SOURCE(
@@ -75,6 +77,9 @@ public enum DiagnosticCode {
   EMPTY_TRAIN("J513", Severity.WARNING, "A train without beam paths"),
   PORT_ON_ELEMENT_WITHOUT_PORTS(
       "J514", Severity.ERROR, "A port named on an element with a single output"),
+  MISSING_DISTANCE(
+      "J515", Severity.ERROR, "Two elements follow each other with no distance between them"),
+  ELEMENT_NEVER_PLACED("J517", Severity.WARNING, "An element is declared but no path places it"),
 
   // Requirements: J6xx
   UNKNOWN_MEASURE("J601", Severity.ERROR, "A requirement on a quantity Jonquil does not know"),
@@ -94,6 +99,8 @@ public enum DiagnosticCode {
       "J610", Severity.NOTE, "Light leaves the train without reaching a probe, detector or dump"),
   REQUIREMENT_NOT_EVALUATED(
       "J613", Severity.ERROR, "A requirement cannot be evaluated, so it is not met (fail closed)"),
+  RATING_EXCEEDED(
+      "J616", Severity.ERROR, "A dump or detector takes more than its stated rating or threshold"),
 
   // Limits and internals: J9xx
   INTERNAL_ERROR("J901", Severity.ERROR, "The checker failed internally; please report it"),

@@ -2,8 +2,10 @@ package jonquil.resolve;
 
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.OptionalDouble;
 import jonquil.diag.DiagnosticCode;
+import jonquil.optics.material.ThermoOptic;
 import jonquil.syntax.Declaration;
 import jonquil.syntax.Property;
 import jonquil.units.Dimension;
@@ -30,40 +32,150 @@ final class KindChecks {
     // A switch expression, so that a new kind does not compile until it is listed here.
     Runnable rules =
         switch (kind) {
-          case SOURCE -> () -> pulses(sink, who, decl, params, given);
+          case SOURCE ->
+              () -> {
+                pulses(sink, who, decl, params, given);
+                beamQuality(sink, who, params, given);
+              };
           case MATERIAL ->
               () -> {
                 needs(sink, who, decl, given, Param.K, Param.INDEX);
                 needs(sink, who, decl, given, Param.ORDINARY, Param.EXTRAORDINARY);
                 needs(sink, who, decl, given, Param.EXTRAORDINARY, Param.ORDINARY);
+                temperature(sink, who, params, given);
+              };
+          // Outside its band a filter does what 'blocking' says: nothing is assumed, since a
+          // guessed out-of-band transmission would be wrong one way for eye safety and the other
+          // for a power budget.
+          case FILTER ->
+              () -> {
+                needs(sink, who, decl, given, Param.BAND, Param.BLOCKING);
+                needs(sink, who, decl, given, Param.BLOCKING, Param.BAND);
               };
           case SPLITTER ->
               () -> {
                 if (!given.containsKey(Param.POLARIZING.word())) {
                   needs(sink, who, decl, given, Param.REFLECT_S, Param.REFLECT_P);
                   needs(sink, who, decl, given, Param.REFLECT_P, Param.REFLECT_S);
+                  refused(
+                      sink,
+                      who,
+                      given,
+                      Param.EXTINCTION,
+                      "an extinction ratio describes a polarizing splitter, and this one is not"
+                          + " 'polarizing'; its split is set by 'ratio' or the reflectances");
                 }
               };
+          case ROTATOR ->
+              () ->
+                  refused(
+                      sink,
+                      who,
+                      given,
+                      Param.TYPE,
+                      "reciprocal and Faraday rotators act alike on light passing forward, and"
+                          + " Jonquil does not trace light back through an element, so the type"
+                          + " would change nothing");
+          case WINDOW, PLATE ->
+              () ->
+                  refused(
+                      sink,
+                      who,
+                      given,
+                      Param.WEDGE,
+                      "Jonquil does not model a wedge (the deviation of the beam and of its"
+                          + " ghosts); give the faces' tilt with 'aoi'");
+          case LENS -> () -> needs(sink, who, decl, given, Param.THICKNESS, Param.MATERIAL);
+          case WAVEPLATE -> () -> needs(sink, who, decl, given, Param.THICKNESS, Param.MATERIAL);
+          case DETECTOR ->
+              () -> {
+                refused(
+                    sink,
+                    who,
+                    given,
+                    Param.APERTURE,
+                    "a detector takes the whole beam; clipping at its active area is not"
+                        + " modelled (place an 'aperture' before it)");
+                refused(
+                    sink,
+                    who,
+                    given,
+                    Param.RESPONSIVITY,
+                    "no figure Jonquil computes uses it (there is no photocurrent measure)");
+              };
           // The tables and KindRules say all there is to check of these.
-          case COATING,
-              INTERFACE,
-              POLARIZER,
-              WAVEPLATE,
-              ROTATOR,
-              DEPOLARIZER,
-              MIRROR,
-              WINDOW,
-              PLATE,
-              LENS,
-              APERTURE,
-              FILTER,
-              RHOMB,
-              PROBE,
-              DETECTOR,
-              DUMP ->
+          case COATING, INTERFACE, POLARIZER, DEPOLARIZER, MIRROR, APERTURE, RHOMB, PROBE, DUMP ->
               () -> {};
         };
     rules.run();
+  }
+
+  /**
+   * A material's temperature moves its index only where the change is published
+   * (optics.material.ThermoOptic): a catalog entry with such data, within the temperatures they
+   * cover. Anything else is refused: an index written in the spec holds as given, and for other
+   * entries the index at that temperature is unknown.
+   */
+  private static void temperature(
+      Sink sink, String who, Map<String, List<Value.Group>> params, Map<String, Property> given) {
+    OptionalDouble kelvin = number(params, Param.TEMPERATURE, "temperature");
+    if (kelvin.isEmpty()) {
+      return;
+    }
+    List<Value.Group> catalog = params.get(Param.CATALOG.word());
+    Symbol entry =
+        catalog == null
+                || catalog.isEmpty()
+                || !(catalog.get(0).slot("name").orElse(null) instanceof Value.Ref ref)
+            ? null
+            : ref.symbol();
+    Optional<ThermoOptic> thermo =
+        entry == null || !entry.isCatalog() ? Optional.empty() : ThermoOptic.of(entry.name());
+    Property line = given.get(Param.TEMPERATURE.word());
+    if (thermo.isEmpty()) {
+      sink.report(
+          DiagnosticCode.PARAMETER_NOT_MODELLED,
+          line.range(),
+          "'temperature' in "
+              + who
+              + " is not modelled: "
+              + (entry == null || !entry.isCatalog()
+                  ? "an index written in the spec holds as given"
+                  : "catalog entry '" + entry.name() + "' has no published dn/dT in Jonquil")
+              + "; a temperature is taken only by the catalog entries "
+              + ThermoOptic.names());
+      return;
+    }
+    if (!thermo.get().covers(kelvin.getAsDouble())) {
+      sink.report(
+          DiagnosticCode.OUT_OF_RANGE,
+          line.range(),
+          "the temperature dependence of '"
+              + entry.name()
+              + "' is published from "
+              + QuantityFormat.format(thermo.get().minKelvin(), Dimension.TEMPERATURE)
+              + " to "
+              + QuantityFormat.format(thermo.get().maxKelvin(), Dimension.TEMPERATURE)
+              + " ("
+              + thermo.get().reference()
+              + "); "
+              + QuantityFormat.format(kelvin.getAsDouble(), Dimension.TEMPERATURE)
+              + " is outside it");
+    }
+  }
+
+  /**
+   * A parameter the language accepts but whose effect Jonquil does not model: refused with why,
+   * rather than accepted and silently ignored.
+   */
+  private static void refused(
+      Sink sink, String who, Map<String, Property> given, Param param, String why) {
+    if (given.containsKey(param.word())) {
+      sink.report(
+          DiagnosticCode.PARAMETER_NOT_MODELLED,
+          given.get(param.word()).range(),
+          "'" + param.word() + "' in " + who + " is not modelled: " + why);
+    }
   }
 
   private static void needs(
@@ -125,6 +237,74 @@ final class KindChecks {
                 + " disagrees with pulse_energy × repetition_rate = "
                 + QuantityFormat.format(product, Dimension.POWER)
                 + "; give two of the three, or make them agree");
+      }
+    }
+  }
+
+  /**
+   * Relative mismatch tolerated between a stated M² and the one waist and divergence give (data
+   * sheets round each figure to two or three digits; a chosen, documented tolerance).
+   */
+  static final double BEAM_CONSISTENCY = 0.05;
+
+  /**
+   * Waist and divergence together fix M² = π W0 θ/λ (Siegman, Lasers, 1986, ch. 17, θ = M² λ/(π
+   * W0)), in vacuum (the ambient index differs from 1 by 3e-4, far inside the tolerance). With M²
+   * also stated the three must agree; a pair below the diffraction limit (M² < 1) is refused.
+   */
+  private static void beamQuality(
+      Sink sink, String who, Map<String, List<Value.Group>> params, Map<String, Property> given) {
+    List<Value.Group> beam = params.get(Param.BEAM.word());
+    if (beam == null || beam.isEmpty()) {
+      return;
+    }
+    OptionalDouble w0 = beam.get(0).number("waist");
+    OptionalDouble theta = beam.get(0).number("divergence");
+    if (w0.isEmpty() || theta.isEmpty()) {
+      return;
+    }
+    OptionalDouble stated = beam.get(0).number("m2");
+    List<Double> wavelengths = new java.util.ArrayList<>();
+    number(params, Param.WAVELENGTH, "wavelength").ifPresent(wavelengths::add);
+    for (Value.Group line : params.getOrDefault(Param.LINE.word(), List.of())) {
+      line.number("wavelength").ifPresent(wavelengths::add);
+    }
+    for (double wl : wavelengths) {
+      double m2 = Math.PI * w0.getAsDouble() * theta.getAsDouble() / wl;
+      String derived =
+          "waist "
+              + QuantityFormat.format(w0.getAsDouble(), Dimension.LENGTH)
+              + " and divergence "
+              + QuantityFormat.format(theta.getAsDouble(), Dimension.ANGLE)
+              + " at "
+              + QuantityFormat.format(wl, Dimension.LENGTH)
+              + " give M² = π W0 θ/λ = "
+              + QuantityFormat.format(m2, Dimension.DIMENSIONLESS);
+      if (stated.isPresent()) {
+        if (Math.abs(m2 - stated.getAsDouble()) > BEAM_CONSISTENCY * stated.getAsDouble()) {
+          sink.report(
+              DiagnosticCode.CONFLICTING_PARAMETERS,
+              given.get(Param.BEAM.word()).range(),
+              "the beam of "
+                  + who
+                  + " is over-determined and inconsistent: "
+                  + derived
+                  + ", not the stated "
+                  + QuantityFormat.format(stated.getAsDouble(), Dimension.DIMENSIONLESS)
+                  + "; give two of the three, or make them agree");
+          return;
+        }
+      } else if (m2 < 1 - BEAM_CONSISTENCY) {
+        sink.report(
+            DiagnosticCode.OUT_OF_RANGE,
+            given.get(Param.BEAM.word()).range(),
+            "the beam of "
+                + who
+                + " is below the diffraction limit: "
+                + derived
+                + ", and M² cannot be below 1; check the waist (a radius at 1/e²) and the"
+                + " divergence (a half angle)");
+        return;
       }
     }
   }

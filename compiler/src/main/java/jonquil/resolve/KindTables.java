@@ -364,7 +364,11 @@ final class KindTables {
             new Shape.Span(
                 q("from", Dimension.LENGTH, WAVELENGTH, "400 nm"),
                 q("to", Dimension.LENGTH, WAVELENGTH, "700 nm")),
-            "wavelength band where the rating holds"),
+            "wavelength band where the rating holds (needs 'blocking')"),
+        optional(
+            Param.BLOCKING,
+            new Shape.Density("od"),
+            "optical density outside the band, 'OD 0' for none (needs 'band')"),
         DAMAGE_PARAM);
     put(
         ElementKind.RHOMB,
@@ -386,7 +390,8 @@ final class KindTables {
         optional(
             Param.APERTURE,
             q("diameter", Dimension.LENGTH, Bounds.POSITIVE, "7 mm"),
-            "measurement aperture diameter"),
+            "measurement aperture diameter: exposure is averaged over it where it is smaller than"
+                + " the standard's limiting aperture"),
         optional(
             Param.EXPOSURE_TIME,
             q("time", Dimension.TIME, Bounds.POSITIVE, "0.25 s"),

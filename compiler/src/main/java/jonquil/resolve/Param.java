@@ -63,6 +63,7 @@ public enum Param {
   DIAMETER("diameter"),
   OD("od"),
   BAND("band"),
+  BLOCKING("blocking"),
   REFLECTIONS("reflections"),
   APERTURE("aperture"),
   EXPOSURE_TIME("exposure_time"),

@@ -7,6 +7,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.Set;
 import jonquil.diag.Diagnostic;
 import jonquil.diag.DiagnosticCode;
 import jonquil.diag.Related;
@@ -125,6 +126,9 @@ public final class Resolver {
       for (RequireDecl block : rootFile.requires()) {
         block.requirements().forEach(r -> requirements.add(reqs.resolve(r)));
       }
+      if (!rootFile.trains().isEmpty()) {
+        neverPlaced(sink, own.get(root).values(), trainResolver.placedElements());
+      }
     }
 
     List<Diagnostic> diagnostics = new ArrayList<>();
@@ -134,6 +138,28 @@ public final class Resolver {
       refs.addAll(s.refs);
     }
     return new ResolvedModel(root, scopes, elements, trains, requirements, refs, diagnostics);
+  }
+
+  /**
+   * An element of the main spec that no path places computes nothing, so it is flagged. Parts of a
+   * used library are not: a library serves many benches. A spec without a train (a library opened
+   * on its own) is not checked either.
+   */
+  private static void neverPlaced(Sink sink, Iterable<Symbol> declared, Set<Symbol> placed) {
+    for (Symbol s : declared) {
+      if (s.kind().isEmpty()
+          || !s.kind().get().category().placeable()
+          || placed.contains(s)
+          || s.nameNode().isEmpty()) {
+        continue;
+      }
+      sink.report(
+          DiagnosticCode.ELEMENT_NEVER_PLACED,
+          s.nameNode().get().range(),
+          s.describe()
+              + " is declared but no path places it, so nothing about it is computed; place it in"
+              + " a train or remove it");
+    }
   }
 
   /** The symbols a file declares itself; duplicates within the file are reported here. */

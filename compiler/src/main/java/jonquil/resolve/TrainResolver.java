@@ -42,6 +42,14 @@ final class TrainResolver {
 
   private record Pending(ResolvedTrain.PortRef port) {}
 
+  /** Two elements written next to each other, and the element or source whose light they get. */
+  private record Adjacent(Symbol before, Symbol after, TextRange range, Symbol origin) {}
+
+  private final List<Adjacent> adjacent = new ArrayList<>();
+
+  /** The source or branching element each placed element's path starts from. */
+  private final Map<Symbol, Symbol> originOf = new HashMap<>();
+
   TrainResolver(Sink sink, Scope scope, jonquil.syntax.SpecFile file) {
     this.refs = new ElementRefs(sink, scope);
     this.sink = sink;
@@ -69,6 +77,7 @@ final class TrainResolver {
     }
     checkBranches();
     checkUnfollowedPorts();
+    checkDistances();
     return out;
   }
 
@@ -83,6 +92,8 @@ final class TrainResolver {
     Set<Symbol> inThisPath = new HashSet<>();
     List<TrainDecl.Step> written = path.steps();
     boolean damaged = file.damaged(path.range());
+    Symbol previous = null;
+    Symbol origin = null;
     for (int i = 0; i < written.size(); i++) {
       TrainDecl.Step step = written.get(i);
       boolean first = i == 0;
@@ -97,6 +108,7 @@ final class TrainResolver {
           return Optional.empty();
         }
         gap(d).ifPresent(steps::add);
+        previous = null;
         if (last && !damaged) {
           sink.report(
               DiagnosticCode.PATH_ENDS_WITH_DISTANCE,
@@ -113,6 +125,15 @@ final class TrainResolver {
       }
       Symbol s = symbol.get();
       ElementKind kind = s.kind().orElseThrow();
+      if (first) {
+        origin = s;
+      } else if (previous != null && origin != null) {
+        adjacent.add(new Adjacent(previous, s, ref.range(), origin));
+      }
+      previous = s;
+      if (origin != null && !first) {
+        originOf.putIfAbsent(s, origin);
+      }
       if (first && ref.port().isPresent()) {
         branchFrom = portOf(ref, kind).map(port -> new ResolvedTrain.PortRef(s, port, ref.range()));
         branchFrom.ifPresent(start -> branches.add(new Pending(start)));
@@ -210,7 +231,7 @@ final class TrainResolver {
   private Optional<ResolvedTrain.Step> gap(TrainDecl.Distance d) {
     Optional<Value.Num> length =
         values.quantity(
-            d.length(), List.of(Dimension.LENGTH), Bounds.POSITIVE, "150 mm", "distance");
+            d.length(), List.of(Dimension.LENGTH), Bounds.NON_NEGATIVE, "150 mm", "distance");
     Optional<Symbol> medium = Optional.empty();
     if (d.medium().isPresent()) {
       Optional<Value.Ref> ref =
@@ -275,6 +296,39 @@ final class TrainResolver {
                     + key
                     + "' is already followed by another path; each output port feeds one path");
         sink.replace(d, d.withRelated(new Related(sink.file, earlier, "already followed here")));
+      }
+    }
+  }
+
+  /**
+   * Two elements written with no distance between them: where the beam's size is known (its source
+   * states a 'beam'), every size downstream depends on that distance, so it must be written ('0 mm'
+   * for parts in contact) rather than taken as zero. Without a 'beam' line nothing depends on it
+   * (no figure uses the beam's size and the ambient medium does not absorb).
+   */
+  private void checkDistances() {
+    for (Adjacent a : adjacent) {
+      Symbol source = a.origin();
+      for (int hops = 0; hops < 64 && originOf.containsKey(source); hops++) {
+        source = originOf.get(source);
+      }
+      boolean sized =
+          source.declaration().stream()
+              .flatMap(d -> d.properties().stream())
+              .anyMatch(p -> p.key().text().equals(Param.BEAM.word()));
+      if (sized) {
+        sink.report(
+            DiagnosticCode.MISSING_DISTANCE,
+            a.range(),
+            "no distance between '"
+                + a.before().name()
+                + "' and '"
+                + a.after().name()
+                + "': the beam's size depends on it, so write it (such as '"
+                + a.before().name()
+                + " -> 20 mm -> "
+                + a.after().name()
+                + "', or '0 mm' for parts in contact)");
       }
     }
   }
