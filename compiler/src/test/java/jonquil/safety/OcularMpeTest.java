@@ -23,7 +23,7 @@ class OcularMpeTest {
             + " 18 * 0.25^0.75 / 0.25 = 25.46 W/m2 (computed)",
         "488 | 0.25 | 25.5 | from memory: the same Table A.1 row, 400-700 nm, 0.25 s -> 25.46"
             + " W/m2",
-        "633 | 1    | 18.0 | 18 t^0.75 J/m2 (confirmed row) at t = 1 s",
+        "633 | 1    | 18.0 | from memory: Table A.1, 18 t^0.75 J/m2 at t = 1 s",
         "1064 | 100 | 50.0 | from memory: 10 C4 C7 W/m2, C4 = 5 (C4 confirmed, ICNIRP C_A)",
         "1064 | 1   | 90.0 | from memory: 90 t^0.75 C7 J/m2 (= 18 C4 t^0.75, C4 = 5)",
         "808 | 100  | 16.44 | from memory: 10 C4 W/m2 with C4 = 10^(0.002*108) (C4 formula"
