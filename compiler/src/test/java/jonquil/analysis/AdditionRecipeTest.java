@@ -68,6 +68,7 @@ class AdditionRecipeTest {
             .next()
             .element("s")
             .orElseThrow();
+    // 1064 nm in SI: the nano prefix is 1e-9 by definition (SI Brochure, 9th ed. 2019, Table 7).
     assertEquals(1064e-9, e.number(Param.WAVELENGTH, "wavelength").orElseThrow(), 1e-18);
     org.junit.jupiter.api.Assertions.assertThrows(
         IllegalArgumentException.class, () -> e.number(Param.WAVELENGTH, "wavelenght"));
@@ -99,6 +100,7 @@ class AdditionRecipeTest {
     TrainSolution s = r.solutions().values().iterator().next();
     assertTrue(s.incidentAt("x").isPresent(), kind + " is not reached");
     assertTrue(s.budgets().stream().anyMatch(b -> b.element().equals("x")), kind + " budget");
+    // Zero by definition of the budget (DEVELOPERS.md, Invariants: Budget).
     assertEquals(0, s.conservationError(), 1e-9, kind + " does not close the budget");
   }
 

@@ -28,19 +28,27 @@ class BeamAlongTheTrainTest {
   }
 
   @Test
-  void peakFieldFromIrradianceInVacuumAndInGlass() {
-    // |E0| = √(2 I Z0 / n), impedance of free space Z0 = 376.730313668 Ω (CODATA 2018).
+  void theTrapCoverGlassSeesALowerPeakFieldThanTheAirBeforeIt() {
+    // The optical trap's focus region: 3.2 kW/cm² at the cover glass (index 1.523, the sample's
+    // cover_glass), first in the air before it, then inside it. A plane wave's irradiance is
+    // I = n|E0|²/(2 Z0), so |E0| = √(2 I Z0 / n) (Saleh & Teich, Fundamentals of Photonics, 2nd
+    // ed. 2007, §5.4, section number from memory), with the impedance of free space
+    // Z0 = 376.730313668 Ω (CODATA 2018 recommended values, Tiesinga et al., Rev. Mod. Phys. 93,
+    // 025010, 2021).
     double z0 = 376.730313668;
-    double irradiance = 1e4; // 1 W/cm²
-    assertEquals(Math.sqrt(2 * irradiance * z0), BeamExposure.peakField(irradiance, 1.0), 1e-6);
+    double irradiance = 3.2e7; // 3.2 kW/cm²
+    // √(2 · 3.2e7 · Z0) = 155.28 kV/m in air of index 1 (Saleh & Teich §5.4, as above).
+    assertEquals(155_276.33, BeamExposure.peakField(irradiance, 1.0), 0.01);
+    // √(2 · 3.2e7 · Z0 / 1.523) = 125.82 kV/m in the glass (Saleh & Teich §5.4, as above).
+    assertEquals(125_821.63, BeamExposure.peakField(irradiance, 1.523), 0.01);
     assertEquals(
-        Math.sqrt(2 * irradiance * z0 / 1.5), BeamExposure.peakField(irradiance, 1.5), 1e-6);
+        Math.sqrt(2 * irradiance * z0 / 1.523), BeamExposure.peakField(irradiance, 1.523), 1e-6);
   }
 
   @Test
   void aGaussianPeakIsTwiceTheAverageIrradiance() {
-    // I(0) = 2P/(πw²) for a Gaussian beam of 1/e² radius w (Siegman, Lasers, 1986, §17.1). [section
-    // numbers from memory]
+    // I(0) = 2P/(πw²) for a Gaussian beam of 1/e² radius w (Siegman, Lasers, 1986, §17.1,
+    // section number from memory); the average over πw² is P/(πw²) by definition.
     BeamExposure e = BeamExposure.of(1.0, 1e-3, java.util.Optional.empty(), 1);
     assertEquals(2 / (Math.PI * 1e-6), e.peakIrradiance(), 1e-6);
     assertEquals(e.peakIrradiance() / 2, e.averageIrradiance(), 1e-9);
@@ -49,15 +57,19 @@ class BeamAlongTheTrainTest {
   @Test
   void pulsedExposureGivesEnergyPeakPowerAndFluence() {
     BeamExposure e = BeamExposure.of(10.0, 1e-3, java.util.Optional.of(new Pulses(10e3, 10e-9)), 1);
+    // Definition: pulse energy = average power / repetition rate = 10 W / 10 kHz.
     assertEquals(1e-3, e.pulseEnergy().getAsDouble(), 1e-15);
+    // Common practice for a rectangular pulse: peak power = energy / duration = 1 mJ / 10 ns.
     assertEquals(1e5, e.peakPower().getAsDouble(), 1e-6);
+    // Peak fluence of a Gaussian spot, 2Q/(πw²): the spatial peak as in I(0) = 2P/(πw²) (Siegman,
+    // Lasers, 1986, §17.1, section number from memory), with energy in place of power.
     assertEquals(2e-3 / (Math.PI * 1e-6), e.peakFluence().getAsDouble(), 1e-9);
   }
 
   @Test
   void anApertureOfTheBeamDiameterPassesEightySixPercentAndIsFlagged() {
     // 1 − e^{−2} of a Gaussian passes a circular aperture of its 1/e² diameter
-    // (Saleh & Teich, 2nd ed. 2007, §3.1). [section numbers from memory]
+    // (Saleh & Teich, Fundamentals of Photonics, 2nd ed. 2007, §3.1, section number from memory).
     Result r =
         Bench.check(
             """

@@ -29,14 +29,18 @@ class RequirementVerdictTest {
   void absolutePowerPassesWithItsMargin() {
     RequirementOutcome o = verdicts("power at mid >= 4 mW").get(0);
     assertEquals(RequirementStatus.PASS, o.status());
-    assertEquals(0.005, o.value().getAsDouble(), 1e-12); // Malus: 10 mW · cos² 45°
+    // Malus's law, 10 mW · cos² 45° (Hecht, Optics, 5th ed. 2017, eq. 8.24, from memory); the
+    // margin is value − bound by definition.
+    assertEquals(0.005, o.value().getAsDouble(), 1e-12);
     assertEquals(0.001, o.margin().getAsDouble(), 1e-12);
     assertEquals("W", o.siUnit());
   }
 
   @Test
   void relativePowerInDecibelsIsAgainstTheSourcePower() {
-    // 5 mW of 10 mW is −3.01 dB: '>= -3 dB' fails by a hair, '>= -3.1 dB' passes.
+    // 5 mW of 10 mW (Malus's law, Hecht, Optics, 5th ed. 2017, eq. 8.24, from memory) is
+    // 10·log10(0.5) = −3.01 dB (definition of the decibel for a power ratio): '>= -3 dB' fails
+    // by a hair, '>= -3.1 dB' passes.
     assertEquals(RequirementStatus.FAIL, verdicts("power at mid >= -3 dB").get(0).status());
     assertEquals(RequirementStatus.PASS, verdicts("power at mid >= -3.1 dB").get(0).status());
   }
@@ -45,6 +49,7 @@ class RequirementVerdictTest {
   void transmissionBetweenTwoPlaces() {
     RequirementOutcome o = verdicts("transmission from s to mid >= 49 %").get(0);
     assertEquals(RequirementStatus.PASS, o.status());
+    // cos² 45° (Malus's law, Hecht, Optics, 5th ed. 2017, eq. 8.24, from memory).
     assertEquals(0.5, o.value().getAsDouble(), 1e-12);
   }
 
@@ -90,7 +95,7 @@ class RequirementVerdictTest {
   void aYieldIsTheFractionOfTolerancedBuildsThatPass() {
     // Polarizer axis 45° ± 10° on linear 0° light: P = 10 mW · cos²θ with θ uniform in [35°, 55°].
     // P >= 5 mW exactly when θ <= 45°, so half the builds pass (Malus's law, Hecht 5th ed. eq.
-    // 8.24). [section numbers from memory]
+    // 8.24, equation number from memory).
     Result r =
         Bench.check(
             """
@@ -132,8 +137,8 @@ class RequirementVerdictTest {
 
   @Test
   void aMirrorTurnsRightCircularIntoLeft() {
-    // Reflection reverses the handedness of circular light (Hecht, Optics, 5th ed. 2017, §8.6).
-    // [section numbers from memory]
+    // Reflection reverses the handedness of circular light (Hecht, Optics, 5th ed. 2017, §8.6,
+    // section number from memory).
     TrainSolution s =
         Bench.solve(
             """

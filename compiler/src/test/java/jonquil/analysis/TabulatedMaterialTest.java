@@ -39,7 +39,7 @@ class TabulatedMaterialTest {
     double reflectance =
         Math.pow(
             (n - air) / (n + air),
-            2); // Born & Wolf, 7th ed. 1999, §1.5.3, normal incidence [section numbers from memory]
+            2); // Born & Wolf, 7th ed. 1999, §1.5.3, normal incidence (section number from memory)
     assertEquals((1 - reflectance) / (1 + reflectance), s.port("p").orElseThrow().power(), 1e-12);
   }
 }

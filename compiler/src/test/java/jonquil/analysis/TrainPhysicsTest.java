@@ -23,10 +23,8 @@ class TrainPhysicsTest {
 
   @Test
   void aPeriscopeWithFoldsInPerpendicularPlanesTurnsLinearPolarizationByNinetyDegrees() {
-    // Geometry of a two-mirror periscope whose second fold turns the beam by 90°: the
-    // polarization plane turns with the image (e.g. Hecht, Optics, 5th ed. 2017, §5.4 on [section
-    // numbers from memory]
-    // image rotation by plane mirrors). Ideal mirrors isolate the geometry from coatings.
+    // Geometry of a two-mirror periscope whose second fold turns the beam by 90°. Ideal mirrors
+    // isolate the geometry from coatings.
     TrainSolution s =
         Bench.solve(
             LINEAR_SOURCE
@@ -37,13 +35,40 @@ class TrainPhysicsTest {
                 train t { s -> 100 mm -> up -> 100 mm -> across -> 100 mm -> p }
                 """);
     var light = s.port("p").orElseThrow().light();
-    assertEquals(90, Math.abs(Math.toDegrees(light.azimuth())), 1e-9);
+    // Independent computation with the laws of reflection at a perfect conductor (the tangential
+    // field reverses, the normal one stays: E' = 2(E·n)n − E, k' = k − 2(k·n)n; Jackson,
+    // Classical Electrodynamics, 3rd ed. 1999, §8.1, section from memory). The beam runs along z
+    // with E along x (table plane xz); the first fold sends it up y, the second along x.
+    double[] k = {0, 0, 1};
+    double[] e = {1, 0, 0};
+    double h = Math.sqrt(0.5);
+    for (double[] normal : new double[][] {{0, h, -h}, {h, -h, 0}}) {
+      k = mirrorLaw(k, normal, -1);
+      e = mirrorLaw(e, normal, 1);
+    }
+    assertEquals(1, k[0], 1e-12); // the beam leaves along x, level again
+    double outOfTablePlane = Math.toDegrees(Math.asin(Math.min(1, Math.abs(e[1]))));
+    assertEquals(outOfTablePlane, Math.abs(Math.toDegrees(light.azimuth())), 1e-9);
+    assertEquals(90, outOfTablePlane, 1e-9); // derived above (definition of the azimuth)
+    // Ideal mirrors: reflectance 100 % by definition.
     assertEquals(1.0, light.power(), 1e-12);
+  }
+
+  /** sign −1: k − 2(k·n)n (the direction); sign +1: 2(E·n)n − E (the field at a conductor). */
+  private static double[] mirrorLaw(double[] v, double[] n, int sign) {
+    double dot = v[0] * n[0] + v[1] * n[1] + v[2] * n[2];
+    double[] out = new double[3];
+    for (int i = 0; i < 3; i++) {
+      out[i] = sign < 0 ? v[i] - 2 * dot * n[i] : 2 * dot * n[i] - v[i];
+    }
+    return out;
   }
 
   @Test
   void aParallelOffsetPeriscopeKeepsThePolarization() {
-    // Two folds in the same plane send the beam on parallel to itself: no rotation.
+    // Two folds in the same plane send the beam on parallel to itself: no rotation (the same
+    // reflection law as above with both normals in the yz plane keeps E along x; Jackson,
+    // Classical Electrodynamics, 3rd ed. 1999, §8.1, section from memory).
     TrainSolution s =
         Bench.solve(
             LINEAR_SOURCE
@@ -58,8 +83,8 @@ class TrainPhysicsTest {
 
   @Test
   void malusLawThroughAnIdealPolarizer() {
-    // Malus's law I = I0 cos²θ (Hecht, Optics, 5th ed. 2017, eq. 8.24). [section numbers from
-    // memory]
+    // Malus's law I = I0 cos²θ (Hecht, Optics, 5th ed. 2017, eq. 8.24, equation number from
+    // memory).
     TrainSolution s =
         Bench.solve(
             LINEAR_SOURCE
@@ -74,8 +99,8 @@ class TrainPhysicsTest {
 
   @Test
   void unpolarizedLightKeepsHalfItsPowerThroughAnIdealPolarizerAndBecomesFullyPolarized() {
-    // Hecht, Optics, 5th ed. 2017, §8.2: an ideal linear polarizer passes half of natural light.
-    // [section numbers from memory]
+    // An ideal linear polarizer passes half of natural light and polarizes it fully (Hecht,
+    // Optics, 5th ed. 2017, §8.2, section number from memory).
     TrainSolution s =
         Bench.solve(
             """
@@ -85,6 +110,7 @@ class TrainPhysicsTest {
             train t { s -> 10 mm -> pol -> 10 mm -> p }
             """);
     var light = s.port("p").orElseThrow().light();
+    // Half of 2 W, fully polarized: Hecht, Optics, 5th ed. 2017, §8.2 (section from memory).
     assertEquals(1.0, light.power(), 1e-9);
     assertEquals(1.0, light.dop(), 1e-9);
   }
@@ -92,8 +118,8 @@ class TrainPhysicsTest {
   @Test
   void aBrewsterWindowPassesPLightWithoutReflectionLoss() {
     // At Brewster's angle tan θB = n2/n1 the p reflectance vanishes (Hecht, Optics, 5th ed.
-    // [section numbers from memory]
-    // 2017, eq. 4.43); n = 1.5 gives θB = 56.31°. p is in the plane of incidence (azimuth 0).
+    // 2017, eq. 4.43, equation number from memory); n = 1.5 gives θB = 56.31°. p is in the plane
+    // of incidence (azimuth 0).
     // The bench's ambient medium is standard air, so the angle is atan(1.5 / n_air).
     double brewster = Math.toDegrees(Math.atan(1.5 / AIR_633));
     TrainSolution s =
@@ -108,6 +134,7 @@ class TrainPhysicsTest {
                 train t { s -> 10 mm -> w -> 10 mm -> p }
                 """,
                 brewster));
+    // Rp = 0 at θB on both faces (Hecht, Optics, 5th ed. 2017, eq. 4.43, from memory).
     assertEquals(1.0, s.port("p").orElseThrow().power(), 1e-8);
     assertEquals(0.0, s.port("w.reflected").orElseThrow().power(), 1e-8);
   }
@@ -115,9 +142,8 @@ class TrainPhysicsTest {
   @Test
   void aWindowAtNormalIncidenceLosesTheIncoherentSumOfItsSurfaceReflections() {
     // Incoherent plate: T = (1−R)²/(1−R²) = (1−R)/(1+R) with R = ((n−1)/(n+1))² = 4 % for
-    // n = 1.5 (Born & Wolf, Principles of Optics, 7th ed. 1999, §1.5.3 for R; the sum of [section
-    // numbers from memory]
-    // multiple incoherent reflections is the geometric series of §7.6.1's setting).
+    // n = 1.5 (Born & Wolf, Principles of Optics, 7th ed. 1999, §1.5.3 for R; the sum of the
+    // multiple incoherent reflections is a geometric series; section numbers from memory).
     TrainSolution s =
         Bench.solve(
             """
@@ -130,15 +156,16 @@ class TrainPhysicsTest {
               s -> 10 mm -> w -> 10 mm -> p
             }
             """);
-    double r = Math.pow((1.5 - AIR_633) / (1.5 + AIR_633), 2); // 4 % in vacuum; the bench is in air
+    // Born & Wolf, 7th ed., §1.5.3 (from memory): 4 % in vacuum; the bench is in air.
+    double r = Math.pow((1.5 - AIR_633) / (1.5 + AIR_633), 2);
     assertEquals((1 - r) / (1 + r), s.port("p").orElseThrow().power(), 1e-12);
   }
 
   @Test
   void aFresnelRhombMakesCircularLightFromLinearAtFortyFiveDegrees() {
     // Fresnel's rhomb: two total internal reflections at 54.6° in glass of n = 1.51 give
-    // 45° each, a quarter wave in all (Hecht, Optics, 5th ed. 2017, §8.7.4, Fig. 8.44). [section
-    // numbers from memory]
+    // 45° each, a quarter wave in all (Hecht, Optics, 5th ed. 2017, §8.7.4, Fig. 8.44; section
+    // and figure numbers from memory).
     TrainSolution s =
         Bench.solve(
             LINEAR_SOURCE
@@ -149,13 +176,16 @@ class TrainPhysicsTest {
                 train t { s -> 10 mm -> fr -> 10 mm -> p }
                 """);
     var light = s.port("p").orElseThrow().light();
+    // Quarter wave: ellipticity angle 45° (Hecht, 5th ed., §8.7.4, from memory).
     assertEquals(45, Math.abs(Math.toDegrees(light.ellipticityAngle())), 0.5);
     assertTrue(light.handedness() != Handedness.NONE);
   }
 
   @Test
   void aPolarizingSplitterSendsPThroughAndSAway() {
-    // A 45° linear input splits equally between p (through) and s (reflected).
+    // A 45° linear input splits equally between p (through) and s (reflected): its p and s
+    // amplitudes are cos 45° and sin 45°, so each carries cos²45° = ½ of the power (Malus's law,
+    // Hecht, Optics, 5th ed. 2017, eq. 8.24, equation number from memory).
     TrainSolution s =
         Bench.solve(
             """
@@ -168,9 +198,11 @@ class TrainPhysicsTest {
               pbs.reflected -> 10 mm -> d
             }
             """);
+    // Malus's law on 2 W (Hecht, eq. 8.24, from memory): 1 W each way.
     assertEquals(1.0, s.port("p").orElseThrow().power(), 1e-6);
     assertEquals(1.0, s.port("pbs.reflected").orElseThrow().power(), 1e-6);
-    // The through port leaks s at 1/extinction in power: atan(√1e-9) ≈ 0.0018°.
+    // The through port leaks s at 1/extinction in power (definition of the extinction ratio):
+    // atan(√1e-9) ≈ 0.0018°.
     assertEquals(
         Math.toDegrees(Math.atan(Math.sqrt(1e-9))),
         Math.toDegrees(s.port("p").orElseThrow().light().azimuth()),
@@ -179,8 +211,8 @@ class TrainPhysicsTest {
 
   @Test
   void aHalfWavePlateAtTwentyTwoAndAHalfDegreesTurnsLinearByFortyFive() {
-    // A half-wave plate at θ turns linear polarization by 2θ (Hecht, Optics, 5th ed. 2017, §8.7.1).
-    // [section numbers from memory]
+    // A half-wave plate at θ turns linear polarization by 2θ (Hecht, Optics, 5th ed. 2017,
+    // §8.7.1, section number from memory).
     TrainSolution s =
         Bench.solve(
             LINEAR_SOURCE
@@ -217,8 +249,8 @@ class TrainPhysicsTest {
   @Test
   void aCoatedWaveplateSendsItsFaceReflectionsBackAsStrayLight() {
     // Two faces of residual reflectance R, summed incoherently: T = (1 − R)/(1 + R), the rest
-    // heads back (same series as the window above; Born & Wolf, 7th ed. 1999, §1.5.3 for R).
-    // [section numbers from memory]
+    // heads back (same series as the window above; Born & Wolf, 7th ed. 1999, §1.5.3 for R,
+    // section number from memory).
     TrainSolution s =
         Bench.solve(
             LINEAR_SOURCE

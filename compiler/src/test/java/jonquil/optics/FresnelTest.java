@@ -44,6 +44,7 @@ class FresnelTest {
         2 * Math.sin(tt) * Math.cos(ti) / (Math.sin(ti + tt) * Math.cos(ti - tt)),
         c.tp().getReal(),
         1e-14);
+    // Between lossless media the coefficients are real (the forms above, Hecht eqs. 4.42–4.45).
     assertEquals(0, c.rs().getImaginary(), 1e-15);
     assertEquals(0, c.rp().getImaginary(), 1e-15);
   }
@@ -144,6 +145,8 @@ class FresnelTest {
     assertTrue(xi.getImaginary() > 0);
     Complex evanescent =
         Fresnel.normalComponent(new Complex(1.0), new Complex(1.5 * Math.sin(1.0)));
+    // Beyond the critical angle the normal component is purely imaginary (Born & Wolf, Principles
+    // of Optics, 7th ed. 1999, §1.5.4, section number from memory).
     assertEquals(0, evanescent.getReal(), 1e-15);
     assertTrue(evanescent.getImaginary() > 0);
     // A lossless medium whose radicand picked up a −6e-19 imaginary part by rounding still

@@ -41,6 +41,7 @@ class PolarizationTest {
     Coherency out = Coherency.linear(0, W).transform(Jones.retarder(Math.PI / 2, Math.PI / 4));
     assertEquals(W, out.stokes()[3], 1e-15);
     assertSame(Handedness.RIGHT, out.handedness());
+    // S3 = +S0 and χ = π/4 for right circular light: definition (optics/package-info.java).
     assertEquals(Math.PI / 4, out.ellipticityAngle(), 1e-12);
     // Independent of any Stokes sign: follow the real field Re{E e^{−iωt}} in time and read its
     // sense of rotation as the receiver sees it (x' right, y' up, beam towards the viewer).
@@ -111,6 +112,8 @@ class PolarizationTest {
 
   @Test
   void realPolarizerLeaksOneOverItsExtinctionRatio() {
+    // Definitions of a polarizer's transmission (0.9 of light along its axis) and extinction ratio
+    // (the crossed state passes 1/1000 of the aligned one); unpolarized input gives that ratio.
     Jones p = Jones.polarizer(0, 0.9, 1000);
     assertEquals(0.9 * W, Coherency.linear(0, W).transform(p).power(), 1e-18);
     assertEquals(0.9 * W / 1000, Coherency.linear(Math.PI / 2, W).transform(p).power(), 1e-18);
@@ -127,6 +130,8 @@ class PolarizationTest {
     assertEquals(W, out.power(), 1e-18);
     // A real metal approaches the perfect mirror as κ grows.
     Fresnel.Coefficients c = Fresnel.at(Complex.ONE, new Complex(0, 1e5), 0);
+    // A perfect conductor gives rp = 1, rs = −1 in Hecht's sign convention (Hecht, Optics, 5th ed.
+    // 2017, §4.6, section number from memory); the mirror above keeps W by definition.
     assertEquals(1, c.rp().getReal(), 1e-4);
     assertEquals(-1, c.rs().getReal(), 1e-4);
     // Any interface at normal incidence has rp = −rs, so glass flips the hand too.
@@ -160,6 +165,8 @@ class PolarizationTest {
   void rotatorTurnsTheAzimuthAndFrameRotationUndoesIt() {
     Coherency in = Coherency.elliptical(0.2, 0.3, W);
     Coherency turned = in.transform(Jones.rotator(0.5));
+    // Definition of a rotator: it adds its angle (0.5 rad) to the azimuth and keeps the
+    // ellipticity; a frame turned by 0.5 rad sees the azimuth 0.5 rad smaller (definition).
     assertEquals(0.7, turned.azimuth(), 1e-12);
     assertEquals(0.3, turned.ellipticityAngle(), 1e-12);
     assertEquals(-0.3, in.inFrameRotatedBy(0.5).azimuth(), 1e-12);
@@ -181,6 +188,7 @@ class PolarizationTest {
 
   @Test
   void unitsStayWatts() {
+    // Power is S0, in watts (definition of the Stokes parameters).
     assertEquals(2.5, Coherency.circular(Handedness.LEFT, 2.5).power(), 0);
     assertEquals(2.5 * 0.25, Coherency.circular(Handedness.LEFT, 2.5).scaled(0.25).power(), 1e-15);
   }

@@ -101,6 +101,7 @@ class PropertiesTest {
     if (Math.abs(Math.abs(chi) - Math.PI / 4) > 1e-3) {
       assertEquals(psi, c.azimuth(), 1e-9);
     }
+    // A fully polarized state has dop 1 (definition of the degree of polarization).
     assertEquals(1, c.dop(), 1e-12);
     Coherency mixed = c.depolarized(rnd.nextDouble());
     double[] m = mixed.stokes();

@@ -9,14 +9,11 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
 /**
- * Class boundaries, IEC 60825-1:2014 (Ed. 3). Sources for the confirmed limits: class summaries of
- * IEC 60825-1 by a laser-equipment vendor (apinex.com "laser classification": Class 2 up to 1 mW
- * visible, 3R = 5 × Class 2 visible / 5 × Class 1 otherwise, 3B up to 500 mW), a UK laser-safety
- * firm (scitec.uk.com: "CW visible lasers emitting between 1 and 5 mW are normally Class 3R"), and
- * an instrument vendor's table (mxmco.com: IEC Class 1 500–700 nm 0.39 mW, Class 2 1 mW, 3R 5 mW,
- * 3B 500 mW). The 0.039 mW Class 1 limit for blue (400–450 nm) is from memory (3.9e-5 C3 W, C3 =
- * 1), matching a published EN 60825-1:2014 summary seen during this work but not an authoritative
- * source.
+ * Class boundaries, IEC 60825-1:2014 (Ed. 3): Class 1 AEL Table 3, Class 2 Table 5, Class 3R Table
+ * 6, Class 3B Table 8 (table numbers and values from memory, as in Ed3.java; the standard's text
+ * was not at hand). A row marked "confirmed" agreed with secondary class summaries consulted during
+ * earlier work; those are not published works and are not cited, so every row counts as from memory
+ * until it is checked against the standard.
  */
 class ClassifierTest {
 
@@ -59,6 +56,10 @@ class ClassifierTest {
     // m passes all 8 mW.
     Classification c = Classifier.assess(Emission.continuous(1064e-9, 8e-3), 20e-3, 1e-4).get();
     assertEquals(HazardClass.CLASS_1M, c.hazardClass());
+    // Power of a Gaussian beam through a centred circular aperture, 1 − exp(−2r²/w²) (Siegman,
+    // Lasers, 1986, §17.1, from memory), at the measurement conditions of IEC 60825-1:2014:
+    // condition 3 a 7 mm aperture at 100 mm, condition 1 a 50 mm aperture at 2 m (Table 10,
+    // table number from memory).
     assertEquals(1 - Math.exp(-2 * 49.0 / 400), c.fractionCondition3(), 1e-3);
     assertEquals(1 - Math.exp(-12.5), c.fractionCondition1(), 1e-7); // beam grows 0.2 mm in 2 m
   }
@@ -122,6 +123,8 @@ class ClassifierTest {
   })
   void class1AelIsMpeTimesPupil(double nm, double t) {
     double area = Math.PI * 3.5e-3 * 3.5e-3;
+    // IEC 60825-1:2014, Table 3 (from memory): the Class 1 AEL is the MPE of Table A.1 times the
+    // area of the 7 mm limiting aperture.
     assertEquals(1.0, Ed3.class1Ael(nm * 1e-9, t) / (Ed3.ocularMpe(nm * 1e-9, t) * area), 0.03);
   }
 

@@ -19,11 +19,11 @@ class OcularMpeTest {
       delimiter = '|',
       value = {
         // λ nm | t s | irradiance MPE W/m² | source
-        "532 | 0.25 | 25.5 | confirmed: univ. laser-safety 'Sample calculations' (AS/NZS 2211.1 ="
-            + " IEC 60825-1): 1.8 t^0.75 mJ/cm2 -> 2.55 mW/cm2 at 0.25 s; brief: 25.4 W/m2",
-        "488 | 0.25 | 25.5 | confirmed: same sample calculation, argon 488 nm, 0.25 s -> 2.55"
-            + " mW/cm2",
-        "633 | 1    | 18.0 | 18 t^0.75 J/m2 (confirmed row) at t = 1 s",
+        "532 | 0.25 | 25.5 | from memory: Table A.1, 18 t^0.75 J/m2 over t ="
+            + " 18 * 0.25^0.75 / 0.25 = 25.46 W/m2 (computed)",
+        "488 | 0.25 | 25.5 | from memory: the same Table A.1 row, 400-700 nm, 0.25 s -> 25.46"
+            + " W/m2",
+        "633 | 1    | 18.0 | from memory: Table A.1, 18 t^0.75 J/m2 at t = 1 s",
         "1064 | 100 | 50.0 | from memory: 10 C4 C7 W/m2, C4 = 5 (C4 confirmed, ICNIRP C_A)",
         "1064 | 1   | 90.0 | from memory: 90 t^0.75 C7 J/m2 (= 18 C4 t^0.75, C4 = 5)",
         "808 | 100  | 16.44 | from memory: 10 C4 W/m2 with C4 = 10^(0.002*108) (C4 formula"
@@ -39,6 +39,7 @@ class OcularMpeTest {
     assertTrue(o.evaluated(), source);
     assertEquals(irradiance, o.get().irradiance(), irradiance * 0.01, source);
     assertEquals(irradiance * t, o.get().radiantExposure(), irradiance * t * 0.01, source);
+    // The 7 mm limiting aperture of the eye, 400–1400 nm (IEC 60825-1:2014, Annex A, from memory).
     assertEquals(7e-3, o.get().apertureDiameter(), 1e-12);
     assertEquals(Outcome.CAUTION, o.caution());
   }
@@ -70,6 +71,7 @@ class OcularMpeTest {
   void breakpointsJoin(double nm, double t) {
     double below = Ed3.ocularMpe(nm * 1e-9, t * (1 - 1e-9));
     double above = Ed3.ocularMpe(nm * 1e-9, t);
+    // Common practice in reading Table A.1: adjacent rows meet at their breakpoint (within 6 %).
     assertEquals(1.0, below / above, 0.06, "jump at " + t + " s");
   }
 
@@ -79,6 +81,9 @@ class OcularMpeTest {
     // single.
     MaximumPermissibleExposure x =
         OcularMpe.at(Emission.pulseTrain(532e-9, 1e-6, 1e-8, 1e3), 0.25).get();
+    // IEC 60825-1:2014, Table A.1 (from memory): single pulse 2e-3 J/m² (400–700 nm, 10 ns);
+    // average rule 18 t^0.75 J/m² over the 250 pulses of 0.25 s; the limit is the smaller, and
+    // as an irradiance it is per-pulse limit × rate = 2e-3 × 1000 = 2 W/m² (definition).
     assertEquals(2e-3, x.radiantExposure(), 1e-6);
     assertEquals(18 * Math.pow(0.25, 0.75) / 250, x.averagePower(), 1e-6);
     assertEquals("single pulse", x.limitingCriterion());
@@ -92,6 +97,9 @@ class OcularMpeTest {
     // grouped: 18 (5e-6)^0.75 / 50 = 3.8e-5; single 2e-3.
     MaximumPermissibleExposure x =
         OcularMpe.at(Emission.pulseTrain(532e-9, 1e-9, 1e-8, 1e7), 0.25).get();
+    // IEC 60825-1:2014, Table A.1 and its pulse rules (from memory): average rule 18 t^0.75 J/m²
+    // over the 2.5e6 pulses of 0.25 s; pulses within T_i = 5 µs (the time constant for
+    // 400–1050 nm, from memory) are grouped, 50 to a group, as one pulse of 5 µs.
     assertEquals(18 * Math.pow(0.25, 0.75) / 2.5e6, x.radiantExposure(), 1e-9);
     assertEquals(18 * Math.pow(5e-6, 0.75) / 50, x.repetitivePulse(), 1e-8);
     assertTrue(x.limitingCriterion().startsWith("average power"));

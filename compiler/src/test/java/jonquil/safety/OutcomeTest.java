@@ -5,7 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 
 import org.junit.jupiter.api.Test;
 
-/** The caution text is fixed by the brief; a not-evaluated outcome must say why. */
+/** The caution text is fixed (README.md, Status); a not-evaluated outcome must say why. */
 class OutcomeTest {
 
   @Test

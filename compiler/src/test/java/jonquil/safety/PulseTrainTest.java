@@ -23,6 +23,9 @@ class PulseTrainTest {
     MaximumPermissibleExposure m =
         PulseTrain.limit(MPE, 1e-6, 100, 10, NAMES, null, 7e-3, "made up");
     assertEquals(10, m.singlePulse());
+    // The three pulse rules of IEC 60825-1:2014, §A.3 (section number from memory), applied to
+    // the made-up limit above: the radiant exposure is the smallest, and as an irradiance it is
+    // the per-pulse limit × rate (definition).
     assertEquals(0.1, m.averagePower(), 1e-15);
     assertTrue(Double.isNaN(m.repetitivePulse()), "no third rule: NaN, not a number made up");
     assertEquals(0.1, m.radiantExposure(), 1e-15);

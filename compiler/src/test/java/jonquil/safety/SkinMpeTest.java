@@ -27,11 +27,13 @@ class SkinMpeTest {
     Outcome<MaximumPermissibleExposure> o = SkinMpe.at(e, t);
     assertTrue(o.evaluated(), source);
     assertEquals(h, o.get().radiantExposure(), h * 0.01, source);
+    // The 3.5 mm limiting aperture of the skin (IEC 60825-1:2014, Annex A, from memory).
     assertEquals(3.5e-3, o.get().apertureDiameter(), 1e-12);
   }
 
   @Test
   void breakpointsJoin() {
+    // Common practice in reading Table A.5: adjacent rows meet at their breakpoint (within 3 %).
     assertEquals(1.0, Ed3.skinMpe(532e-9, 1e-7 * (1 - 1e-9)) / Ed3.skinMpe(532e-9, 1e-7), 0.03);
     assertEquals(1.0, Ed3.skinMpe(532e-9, 10 * (1 - 1e-9)) / Ed3.skinMpe(532e-9, 10), 0.03);
   }
@@ -41,6 +43,8 @@ class SkinMpeTest {
     // 1064 nm, 10 ns, 1 kHz, 10 s: single 1000 J/m2; average 2000*5*10 / 1e4 = 10 J/m2 per pulse.
     MaximumPermissibleExposure x =
         SkinMpe.at(Emission.pulseTrain(1064e-9, 1e-3, 1e-8, 1e3), 10).get();
+    // Skin MPE of IEC 60825-1:2014, Table A.5 (from memory): 2000 C4 W/m² for 10 s–3e4 s, with
+    // C4 = 5 at 1064 nm: 2000 · 5 · 10 s = 1e5 J/m² shared by 1e4 pulses = 10 J/m² each.
     assertEquals(10, x.radiantExposure(), 1e-6);
     assertTrue(Double.isNaN(x.repetitivePulse()));
   }

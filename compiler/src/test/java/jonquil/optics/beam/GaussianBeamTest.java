@@ -96,6 +96,7 @@ class GaussianBeamTest {
   void fromDivergenceInvertsTheDivergence() {
     // Same relation, θ = M² λ/(π n W0), solved for W0.
     GaussianBeam b = GaussianBeam.fromDivergence(1550e-9, 1.5, 2e-3, 0.1, 1);
+    // θ = M² λ/(π n W0) (Siegman, Lasers, 1986, §17.1, section number from memory).
     assertEquals(1.5 * 1550e-9 / (Math.PI * 2e-3), b.waistRadius(), 1e-18);
     assertEquals(2e-3, b.divergence(), 1e-15);
     assertEquals(0.1, b.waistPosition());
@@ -184,7 +185,10 @@ class GaussianBeamTest {
     double f = in.rayleighRange();
     Focus focus = Focus.afterThinLens(in, f).orElseThrow();
     double approx = 1064e-9 * f / (Math.PI * 0.2e-3);
+    // Thin-lens focusing of a Gaussian beam (Self, Appl. Opt. 22, 658 (1983); from memory):
+    // with z_R = f the waist is W/√2.
     assertEquals(0.2e-3 / Math.sqrt(2), focus.radius(), 1e-15);
+    // Focus at f/2 for z_R = f (same relation, Self 1983, from memory).
     assertEquals(f / 2, focus.distance(), 1e-12 * f);
     assertTrue(approx / focus.radius() > 1.4);
   }
@@ -195,6 +199,8 @@ class GaussianBeamTest {
     // (same sources as the collimated-focus test).
     GaussianBeam in = GaussianBeam.fromWaist(1064e-9, 1, 1e-3, 0, 1);
     Focus focus = Focus.afterThinLens(in, 0.01).orElseThrow();
+    // λf/(πW) = 1064e-9 · 0.01/(π · 1e-3) = 3.387 µm (Self, Appl. Opt. 22, 658 (1983), citation
+    // from memory); the waist sits within 1e-6 m of the focal point.
     assertEquals(3.387e-6, focus.radius(), 1e-9);
     assertEquals(0.01, focus.distance(), 1e-6);
     assertEquals(2 * focus.rayleighRange(), focus.depthOfFocus());

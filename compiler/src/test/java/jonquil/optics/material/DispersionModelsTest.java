@@ -18,6 +18,7 @@ class DispersionModelsTest {
   void sellmeierOneTermByHand() {
     // n² = 1 + 1·λ²/(λ² − (0.5 µm)²) at λ = 1 µm: 1 + 1/(1 − 0.25) = 7/3.
     Sellmeier s = new Sellmeier(new double[] {1}, new double[] {0.25e-12});
+    // Definition of the Sellmeier form n² = 1 + Σ B λ²/(λ² − C).
     assertEquals(Math.sqrt(7.0 / 3), s.index(1 * UM).getReal(), 1e-12);
     assertEquals(0, s.index(1 * UM).getImaginary());
   }
@@ -45,6 +46,7 @@ class DispersionModelsTest {
     Sellmeier s =
         Sellmeier.fromResonancesMicrometres(
             new double[] {1}, new double[] {0.5}, WavelengthRange.ofMicrometres(0.6, 2));
+    // Definition of the Sellmeier form with C = λ₀² (7/3 as above).
     assertEquals(Math.sqrt(7.0 / 3), s.index(1 * UM).getReal(), 1e-12);
   }
 
@@ -54,6 +56,7 @@ class DispersionModelsTest {
     Sellmeier s = new Sellmeier(new double[] {1}, new double[] {1e-12});
     Complex n = s.index(0.9 * UM);
     assertEquals(0, n.getReal());
+    // Definition of the Sellmeier form: n² < 0 gives n = i√(−n²).
     assertEquals(Math.sqrt(0.81 / 0.19 - 1), n.getImaginary(), 1e-12);
   }
 
@@ -63,6 +66,7 @@ class DispersionModelsTest {
     Sellmeier s = new Sellmeier(b, new double[] {0.25e-12});
     b[0] = 99;
     s.b()[0] = 99;
+    // Definition of the Sellmeier form (7/3 as above): the copies did not change it.
     assertEquals(Math.sqrt(7.0 / 3), s.index(1 * UM).getReal(), 1e-12);
     assertEquals(s, new Sellmeier(new double[] {1}, new double[] {0.25e-12}));
   }
@@ -70,6 +74,7 @@ class DispersionModelsTest {
   @Test
   void cauchyByHand() {
     // n = 1.5 + 4e-15 m²/λ² + 1e-27 m⁴/λ⁴ at 1 µm: 1.5 + 0.004 + 0.001.
+    // Definition of the Cauchy form n = A + B/λ² + C/λ⁴.
     assertEquals(1.505, new Cauchy(1.5, 4e-15, 1e-27).index(1 * UM).getReal(), 1e-12);
     // At 0.5 µm: 1.5 + 0.016 + 0.016.
     assertEquals(1.532, new Cauchy(1.5, 4e-15, 1e-27).index(0.5 * UM).getReal(), 1e-12);
@@ -84,6 +89,7 @@ class DispersionModelsTest {
     assertEquals(new Complex(1.0, 2.0), t.index(0.5 * UM));
     assertEquals(new Complex(2.0, 4.0), t.index(1.0 * UM));
     Complex quarter = t.index(0.625 * UM);
+    // Definition of linear interpolation in wavelength between the table's rows.
     assertEquals(1.25, quarter.getReal(), 1e-12);
     assertEquals(2.5, quarter.getImaginary(), 1e-12);
     Complex mid = t.index(1.5 * UM);
@@ -122,6 +128,8 @@ class DispersionModelsTest {
   @Test
   void uniaxialBirefringenceAndAngleDependence() {
     Uniaxial u = new Uniaxial(new ConstantIndex(1.6, 0), new ConstantIndex(1.5, 0));
+    // Definition of a uniaxial index: Δn = ne − no; n(θ) from 1/n² = cos²θ/no² + sin²θ/ne²
+    // (Born & Wolf, Principles of Optics, 7th ed. 1999, §15.3, section number from memory).
     assertEquals(-0.1, u.birefringence(1 * UM), 1e-12);
     assertEquals(1.6, u.extraordinaryIndexAt(1 * UM, 0), 1e-12);
     assertEquals(1.5, u.extraordinaryIndexAt(1 * UM, Math.PI / 2), 1e-12);
@@ -145,6 +153,8 @@ class DispersionModelsTest {
   void bulkAbsorptionAddsKappaAndGivesBeerLambert() {
     // α = 100 /m at 1 µm: κ = αλ/4π = 1e-4/(4π); 1 cm of it transmits e^-1.
     BulkAbsorption a = new BulkAbsorption(new ConstantIndex(1.5, 0), 100);
+    // Beer–Lambert, T = e^(−αd), with κ = αλ/4π (Born & Wolf, 7th ed. 1999, §14.1, section number
+    // from memory).
     assertEquals(1.5, a.index(1 * UM).getReal(), 0);
     assertEquals(1e-4 / (4 * Math.PI), a.index(1 * UM).getImaginary(), 1e-18);
     assertEquals(Math.exp(-1), a.internalTransmittance(0.01), 1e-15);
@@ -162,6 +172,8 @@ class DispersionModelsTest {
     LorentzDrude free =
         new LorentzDrude(10, 1, 0, new double[0], new double[0], new double[0], Optional.empty());
     double lambda = LorentzDrude.EV_METRE / 5;
+    // Definition of the Drude term ε = 1 − f0 ωp²/(ω(ω + iΓ0)) (Rakić et al., Appl. Opt. 37, 5271
+    // (1998), eq. 1, equation number from memory).
     assertEquals(-3, free.permittivity(lambda).getReal(), 1e-12);
     assertEquals(0, free.index(lambda).getReal(), 1e-12);
     assertEquals(Math.sqrt(3), free.index(lambda).getImaginary(), 1e-12);
@@ -170,6 +182,7 @@ class DispersionModelsTest {
     LorentzDrude damped =
         new LorentzDrude(10, 1, 1, new double[0], new double[0], new double[0], Optional.empty());
     Complex eps = damped.permittivity(lambda);
+    // Same Drude definition with damping.
     assertEquals(1 - 2500.0 / 650, eps.getReal(), 1e-12);
     assertEquals(500.0 / 650, eps.getImaginary(), 1e-12);
     assertTrue(damped.index(lambda).getImaginary() > 0);
@@ -182,6 +195,7 @@ class DispersionModelsTest {
     LorentzDrude l =
         new LorentzDrude(
             3, 0, 0, new double[] {1}, new double[] {0}, new double[] {4}, Optional.empty());
+    // Definition of a Lorentz term f ωp²/(ω1² − ω² − iωΓ1) (Rakić et al. 1998, eq. 1, from memory).
     assertEquals(Math.sqrt(1.75), l.index(LorentzDrude.EV_METRE / 2).getReal(), 1e-12);
   }
 

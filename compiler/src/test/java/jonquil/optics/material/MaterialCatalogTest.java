@@ -37,6 +37,7 @@ class MaterialCatalogTest {
           d.index(lambda).getReal(),
           TOL,
           "n at " + lambda / NM + " nm");
+      // k = 0: a real dispersion formula has no absorption (definition).
       assertEquals(0, d.index(lambda).getImaginary(), 0, "k at " + lambda / NM + " nm");
     }
   }
@@ -44,8 +45,7 @@ class MaterialCatalogTest {
   @Test
   void fusedSilicaMalitson1965() {
     // Computed from Malitson 1965 (JOSA 55, 1205), three-term Sellmeier; n_d = 1.45846 is the value
-    // the paper's
-    // fit reproduces at the d line (brief: n_d ≈ 1.4585).
+    // the paper's fit reproduces at the d line.
     rows(m("fused_silica").dispersion(), F, 1.463127, D, 1.458464, C, 1.456367, YAG, 1.449631);
   }
 
@@ -81,6 +81,7 @@ class MaterialCatalogTest {
     rows(u.ordinary(), F, 1.549664, D, 1.544276, C, 1.541854, YAG, 1.534099);
     rows(u.extraordinary(), F, 1.558951, D, 1.553379, C, 1.550873, YAG, 1.542835);
     // Δn at the d line: 1.553379 − 1.544276.
+    // Definition of the birefringence, ne − no, from the rows above (Ghosh 1999, from memory).
     assertEquals(0.009103, u.birefringence(D), 2e-6);
   }
 
@@ -90,6 +91,7 @@ class MaterialCatalogTest {
     Uniaxial u = m("calcite").uniaxial().orElseThrow();
     rows(u.ordinary(), F, 1.667649, D, 1.658461, C, 1.654456, YAG, 1.642457);
     rows(u.extraordinary(), F, 1.490491, D, 1.486185, C, 1.484349, YAG, 1.479643);
+    // Definition of the birefringence, ne − no, from the rows above (Ghosh 1999, from memory).
     assertEquals(1.486185 - 1.658461, u.birefringence(D), 2e-6);
   }
 
@@ -105,6 +107,7 @@ class MaterialCatalogTest {
     // Ciddor 1996 for the catalog's air (dry, 20 °C, 101 325 Pa, 450 ppm): n − 1 ≈ 2.7e-4 at 633
     // nm;
     // computed from the paper's equations: 2.71802e-4 at 632.8 nm.
+    // Ciddor, Appl. Opt. 35, 1566 (1996), eqs. 1–5 (equation numbers from memory).
     assertEquals(1 + 2.71802e-4, m("air").dispersion().index(632.8 * NM).getReal(), 2e-9);
   }
 
@@ -134,6 +137,8 @@ class MaterialCatalogTest {
   void metalTableInterpolatesBetweenRows() {
     // Halfway (in wavelength) between the Johnson & Christy silver rows at 1216 and 1393 nm.
     Complex mid = m("silver").dispersion().index(1304.5 * NM);
+    // Definition of linear interpolation; rows of Johnson & Christy, Phys. Rev. B 6, 4370 (1972),
+    // Table 1 (table number from memory).
     assertEquals((0.09 + 0.13) / 2, mid.getReal(), 1e-12);
     assertEquals((8.828 + 10.10) / 2, mid.getImaginary(), 1e-12);
   }
@@ -143,6 +148,7 @@ class MaterialCatalogTest {
     // Computed from the Rakić et al. 1998 (Appl. Opt. 37, 5271) Lorentz–Drude parameters for Al:
     // at 502.30 nm n = 0.76990, k = 5.9264; at 1000.5 nm n = 1.4766, k = 9.2883.
     Complex a = m("aluminium").dispersion().index(502.30 * NM);
+    // Rakić et al., Appl. Opt. 37, 5271 (1998), Table 1 parameters in eq. 1 (numbers from memory).
     assertEquals(0.76990, a.getReal(), 2e-5);
     assertEquals(5.9264, a.getImaginary(), 2e-4);
     Complex b = m("aluminium").dispersion().index(1000.5 * NM);
@@ -170,6 +176,7 @@ class MaterialCatalogTest {
     CatalogMaterial silica = m("fused_silica");
     assertEquals(IndexBasis.RELATIVE_TO_AIR, silica.basis());
     double nAir = CiddorAir.dryAt(293.15).index(D).getReal();
+    // Ciddor, Appl. Opt. 35, 1566 (1996), eqs. 1–5 (equation numbers from memory).
     assertEquals(1 + 2.72433e-4, nAir, 2e-9);
     assertEquals(1.458867, silica.absoluteIndex(D).getReal(), TOL);
     assertEquals(

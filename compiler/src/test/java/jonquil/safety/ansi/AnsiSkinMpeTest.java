@@ -30,6 +30,8 @@ class AnsiSkinMpeTest {
     Outcome<MaximumPermissibleExposure> o = AnsiSkinMpe.at(Emission.continuous(nm * 1e-9, 1), t);
     assertTrue(o.evaluated(), source);
     assertEquals(irradiance, o.get().irradiance(), irradiance * 0.002, source);
+    // The 3.5 mm limiting aperture of the skin (ANSI Z136.1-2014, Table 8, table number from
+    // memory).
     assertEquals(3.5e-3, o.get().apertureDiameter(), 1e-12);
     assertTrue(o.standard().contains("Table 7"));
     assertEquals(Outcome.CAUTION, o.caution());
@@ -64,6 +66,7 @@ class AnsiSkinMpeTest {
   @ParameterizedTest(name = "skin breakpoint at {0} s")
   @CsvSource({"1e-7", "10"})
   void breakpointsJoin(double t) {
+    // Common practice in reading Table 7: adjacent rows meet at their breakpoint (within 3 %).
     assertEquals(1.0, Z136.skin(532e-9, t * (1 - 1e-9)) / Z136.skin(532e-9, t), 0.03);
   }
 
