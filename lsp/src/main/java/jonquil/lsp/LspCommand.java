@@ -10,8 +10,8 @@ import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicInteger;
 import jonquil.cli.HelpOption;
 import jonquil.ide.EditorFeatures;
+import org.eclipse.lsp4j.MessageType;
 import org.eclipse.lsp4j.jsonrpc.Launcher;
-import org.eclipse.lsp4j.launch.LSPLauncher;
 import org.eclipse.lsp4j.services.LanguageClient;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -82,7 +82,8 @@ public final class LspCommand implements java.util.concurrent.Callable<Integer> 
             });
     try {
       Launcher<LanguageClient> launcher =
-          LSPLauncher.createServerLauncher(server, input, output, io, null);
+          MessageReader.serverLauncher(
+              server, input, output, io, m -> server.log(MessageType.Warning, m));
       server.connect(launcher.getRemoteProxy());
       Future<Void> listening = launcher.startListening();
       CompletableFuture<Integer> inputClosed =

@@ -7,7 +7,7 @@ parser grammar JonquilParser;
 
 options { tokenVocab = JonquilLexer; }
 
-file          : sep* (topStatement (sep+ topStatement)*)? sep* EOF ;
+file          : sep* (topStatement (sep+ topStatement)* sep*)? EOF ;
 sep           : NL | SEMI ;
 // One top-level statement alone: an editor re-parses only the statements an edit touched.
 statementOnly : topStatement EOF ;
