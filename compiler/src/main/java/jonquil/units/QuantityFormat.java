@@ -57,7 +57,8 @@ public final class QuantityFormat {
     // Decide on the rounded value, so 0.99996 W prints "1 W" rather than "1000 mW".
     double magnitude = Math.abs(NumberText.round(si));
     if (magnitude == 0 || !Double.isFinite(magnitude)) {
-      return coherentOf(dim, ladder);
+      // Angles are written in degrees on a bench; "0 rad" beside "2°" reads as a unit mix-up.
+      return dim.equals(Dimension.ANGLE) ? ladder.get(0) : coherentOf(dim, ladder);
     }
     for (DisplayUnit u : ladder) {
       if (magnitude >= u.from()) {

@@ -141,6 +141,7 @@ class AcceptedParametersActTest {
             .port("p")
             .orElseThrow()
             .power();
+    // 1 W through OD 4 in band and OD 1 outside it: T = 10^-OD (definition).
     assertEquals(1e-4, in, 1e-9);
     assertEquals(0.1, out, 1e-9);
     // Fail closed: a band without a stated out-of-band blocking is refused, and the reverse.
@@ -233,6 +234,7 @@ class AcceptedParametersActTest {
     // entry's 20 °C (Malitson 1965) raises n by 1.2675e-4.
     double shift =
         thermo.index(silica, 1064e-9, 308.15).getReal() - silica.absoluteIndex(1064e-9).getReal();
+    // Leviton & Frey 2006, Table 3 region (dn/dT near 1 µm, from memory of the table number).
     assertEquals(8.45e-6 * 15, shift, 1e-9);
     String spec =
         "source s { wavelength 1064 nm; power 1 W }\nmaterial g { %s }\n"

@@ -276,7 +276,9 @@ class EveryParameterMattersTest {
 
   private static long failedRequirements(Result r) {
     return r.diagnostics().stream()
-        .filter(d -> d.code().id().equals("J609") || d.code().id().equals("J616"))
+        // A requirement left unevaluated (J613, e.g. no damage threshold in reach) is a finding
+        // about the bench, not a fault in the spec's text.
+        .filter(d -> List.of("J609", "J613", "J616").contains(d.code().id()))
         .count();
   }
 

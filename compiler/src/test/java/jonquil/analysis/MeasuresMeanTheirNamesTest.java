@@ -72,6 +72,7 @@ class MeasuresMeanTheirNamesTest {
     // 10 mW in 9 mW .. 100 mW: the low end is 1 mW away, the high end 90 mW (arithmetic).
     RequirementOutcome o = check(LINEAR_0, "power at mid in 9 mW .. 100 mW").requirements().get(0);
     assertEquals(RequirementStatus.PASS, o.status());
+    // The nearest end and its distance (definition of a range's margin, README 'Requirements').
     assertEquals(0.009, o.bound().getAsDouble(), 1e-15);
     assertEquals(0.001, o.margin().getAsDouble(), 1e-15);
   }
