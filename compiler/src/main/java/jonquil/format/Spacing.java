@@ -56,6 +56,9 @@ final class Spacing {
         || n == TokenKind.CARET) {
       return true; // a compound unit is one word: 'kW/cm2', 'J/cm^2'
     }
+    if (p == TokenKind.NUMBER && isHazardClassSuffix(prev, next)) {
+      return true; // a hazard class is one label: '3R', '1M', never '3 R'
+    }
     if (n == TokenKind.SLASH) {
       // After a value a '/' starts the unit ('0.2 /cm'); after a unit factor it continues it.
       return !(p == TokenKind.NUMBER && !isExponent(line, i - 1));
@@ -66,6 +69,16 @@ final class Spacing {
       return !next.spaceBefore(); // both '95 %' and '45°' are common: keep the writer's choice
     }
     return false;
+  }
+
+  /**
+   * The lexer reads '3R' as a number and a name; the laser classes 1M, 2M and 3R are the only
+   * places the language writes a digit and such a letter together.
+   */
+  private static boolean isHazardClassSuffix(WrittenToken number, WrittenToken letter) {
+    return letter.kind() == TokenKind.IDENTIFIER
+        && number.text().matches("[123]")
+        && (letter.text().equals("M") || letter.text().equals("R"));
   }
 
   /**

@@ -26,6 +26,15 @@ class FormatterTest {
   }
 
   @Test
+  void aHazardClassStaysOneLabel() {
+    // Found trying a bench: 'hazard class <= 3R' came back as '3 R'.
+    String text = "require {\n  hazard class <= 3R at s\n  hazard class >= 1 M at s\n}\n";
+    assertEquals(
+        "require {\n  hazard class <= 3R at s\n  hazard class >= 1M at s\n}\n",
+        format(text, FormatOptions.DEFAULT));
+  }
+
+  @Test
   void aCanonicalFileNeedsNoEdit() {
     assertEquals(
         List.of(), Formatter.edits(FormatCorpus.source("probe p\n"), FormatOptions.DEFAULT));
