@@ -1,6 +1,8 @@
 package jonquil.analysis;
 
+import java.util.ArrayDeque;
 import java.util.ArrayList;
+import java.util.Deque;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -20,7 +22,7 @@ import jonquil.resolve.Symbol;
  * Walks the beam-path graph from every source, element by element, and books every watt: at each
  * port, absorbed, stopped by a dump or detector, observed at a probe that ends a path, or stray.
  * The graph is a tree (each element sits in one place and each port feeds at most one path), so a
- * depth-first walk visits every beam once.
+ * depth-first walk visits every beam once; it keeps its own stack, so nesting has no depth limit.
  */
 final class Propagator {
   private final ResolvedModel model;
@@ -97,10 +99,41 @@ final class Propagator {
         surfaces);
   }
 
+  /**
+   * Follows one path and every branch that leaves it with an explicit stack, not recursion, so a
+   * spec may nest branches as deep as it likes. The order is that of a depth-first walk: at an
+   * element, each port that is not the path's exit (in the kind's port order) is followed to its
+   * end before the path goes on, so every total is summed in one defined order.
+   */
   private void walk(ResolvedTrain.BeamPath path, int from, List<TracedBeam> arriving) {
-    List<TracedBeam> beams = arriving;
-    ResolvedTrain.Element last = null;
-    for (int i = from; i < path.steps().size(); i++) {
+    Deque<Work> stack = new ArrayDeque<>();
+    stack.push(new Resume(path, from, arriving, null));
+    while (!stack.isEmpty()) {
+      Work next = stack.pop();
+      if (next instanceof Resume r) {
+        resume(r, stack);
+      } else if (next instanceof Leak l) {
+        stray.add(l.beam());
+      }
+    }
+  }
+
+  /** What is left to do: a path to go on with, or light to book as stray at its turn. */
+  private sealed interface Work permits Resume, Leak {}
+
+  /** Go on along {@code path} from step {@code from}, with {@code last} the element before it. */
+  private record Resume(
+      ResolvedTrain.BeamPath path, int from, List<TracedBeam> beams, ResolvedTrain.Element last)
+      implements Work {}
+
+  /** Light that leaves a port no path follows. */
+  private record Leak(StrayBeam beam) implements Work {}
+
+  private void resume(Resume at, Deque<Work> stack) {
+    ResolvedTrain.BeamPath path = at.path();
+    List<TracedBeam> beams = at.beams();
+    ResolvedTrain.Element last = at.last();
+    for (int i = at.from(); i < path.steps().size(); i++) {
       ResolvedTrain.Step step = path.steps().get(i);
       if (step instanceof ResolvedTrain.Gap gap) {
         beams = across(gap, beams);
@@ -112,8 +145,17 @@ final class Propagator {
       if (element.isEmpty()) {
         return;
       }
-      beams = pass(element.get(), placed, beams);
+      List<Work> sideways = new ArrayList<>();
+      beams = pass(element.get(), placed, beams, sideways);
       if (placed.symbol().category() == Category.TERMINAL) {
+        return;
+      }
+      if (!sideways.isEmpty()) {
+        // The side ports first, in port order; then this path, from the next step.
+        stack.push(new Resume(path, i + 1, beams, last));
+        for (int k = sideways.size() - 1; k >= 0; k--) {
+          stack.push(sideways.get(k));
+        }
         return;
       }
     }
@@ -154,9 +196,15 @@ final class Propagator {
     return out;
   }
 
-  /** One element acting on every arriving line; continues with the beams at the exit port. */
+  /**
+   * One element acting on every arriving line; continues with the beams at the exit port and adds
+   * to {@code sideways} what its other ports lead to, in port order.
+   */
   private List<TracedBeam> pass(
-      ResolvedElement element, ResolvedTrain.Element placed, List<TracedBeam> beams) {
+      ResolvedElement element,
+      ResolvedTrain.Element placed,
+      List<TracedBeam> beams,
+      List<Work> sideways) {
     String name = placed.symbol().name();
     double[] totals = budgetTotals.computeIfAbsent(name, k -> new double[3]);
     Map<String, Double> byPort = budgetPorts.computeIfAbsent(name, k -> new LinkedHashMap<>());
@@ -217,20 +265,21 @@ final class Propagator {
       String key = name + "." + e.getKey();
       ResolvedTrain.BeamPath branch = branches.get(key);
       if (branch != null) {
-        walk(branch, 0, e.getValue());
+        sideways.add(new Resume(branch, 0, e.getValue(), null));
       } else {
         double p = e.getValue().stream().mapToDouble(TracedBeam::power).sum();
         Vec3 arriving = beams.isEmpty() ? Vec3.Z : beams.get(0).frame().k();
         boolean backward =
             e.getValue().stream().anyMatch(b -> b.frame().k().dot(arriving) < -0.999);
-        stray.add(
-            new StrayBeam(
-                key,
-                "leaves '" + key + "', which no path follows",
-                p,
-                backward,
-                placed.symbol().file(),
-                placed.range()));
+        sideways.add(
+            new Leak(
+                new StrayBeam(
+                    key,
+                    "leaves '" + key + "', which no path follows",
+                    p,
+                    backward,
+                    placed.symbol().file(),
+                    placed.range())));
       }
     }
     return atPorts.getOrDefault(placed.exitPort(), List.of());

@@ -141,10 +141,18 @@ final class DeclarationChecker {
                     "table",
                     List.of(
                         new Value.Group(
-                            Map.of("file", name, "rows", new Value.Table(rows, name.range())),
+                            tableSlots(name, new Value.Table(rows, name.range())),
                             List.of(),
                             g.range()))),
             () -> params.remove("table"));
+  }
+
+  /** A table's slots as written: file, then rows (not Map.of, whose order is salted per JVM). */
+  private static Map<String, Value> tableSlots(Value file, Value rows) {
+    Map<String, Value> slots = new LinkedHashMap<>();
+    slots.put("file", file);
+    slots.put("rows", rows);
+    return slots;
   }
 
   /** Block lines as written, or the '=' shorthand split into lines at parameter names. */

@@ -228,7 +228,8 @@ public final class Resolver {
 
   private static Scope scope(
       Path path, Map<Path, Map<String, Symbol>> own, List<UseEdge> edges, Sink sink) {
-    Map<String, Symbol> visible = new HashMap<>(own.getOrDefault(path, Map.of()));
+    // Own names in source order, then each used file's in the order of its 'use' line.
+    Map<String, Symbol> visible = new LinkedHashMap<>(own.getOrDefault(path, Map.of()));
     Map<String, UseEdge> via = new HashMap<>();
     for (UseEdge edge : edges) {
       for (Symbol s : own.getOrDefault(edge.target(), Map.of()).values()) {

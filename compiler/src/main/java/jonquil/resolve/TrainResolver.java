@@ -307,11 +307,9 @@ final class TrainResolver {
    * (no figure uses the beam's size and the ambient medium does not absorb).
    */
   private void checkDistances() {
+    Map<Symbol, Symbol> sourceOf = new HashMap<>();
     for (Adjacent a : adjacent) {
-      Symbol source = a.origin();
-      for (int hops = 0; hops < 64 && originOf.containsKey(source); hops++) {
-        source = originOf.get(source);
-      }
+      Symbol source = sourceOf(a.origin(), sourceOf);
       boolean sized =
           source.declaration().stream()
               .flatMap(d -> d.properties().stream())
@@ -331,6 +329,23 @@ final class TrainResolver {
                 + "', or '0 mm' for parts in contact)");
       }
     }
+  }
+
+  /**
+   * Back along the branches to the path's source, however deep they nest (a broken graph may loop;
+   * the walk stops where it would repeat), remembering the answer for every step passed.
+   */
+  private Symbol sourceOf(Symbol origin, Map<Symbol, Symbol> known) {
+    List<Symbol> passed = new ArrayList<>();
+    Set<Symbol> seen = new HashSet<>();
+    Symbol at = origin;
+    while (!known.containsKey(at) && originOf.containsKey(at) && seen.add(at)) {
+      passed.add(at);
+      at = originOf.get(at);
+    }
+    Symbol source = known.getOrDefault(at, at);
+    passed.forEach(s -> known.put(s, source));
+    return source;
   }
 
   private void checkUnfollowedPorts() {

@@ -1,6 +1,6 @@
 package jonquil.resolve;
 
-import java.util.HashMap;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
@@ -42,7 +42,8 @@ final class ValueChecker {
       reportMismatch(outcome, args, what, whole);
       return Optional.empty();
     }
-    Map<String, Value> slots = new HashMap<>();
+    // Slots in the order they are written: a model's maps iterate in source order.
+    Map<String, Value> slots = new LinkedHashMap<>();
     Map<Integer, Map<String, Value>> items = new java.util.TreeMap<>();
     String clause = null;
     for (ShapeMatcher.Binding b : outcome.bindings()) {
@@ -61,7 +62,7 @@ final class ValueChecker {
         continue;
       }
       if (b.item() >= 0) {
-        items.computeIfAbsent(b.item(), k -> new HashMap<>()).put(slot, v.get());
+        items.computeIfAbsent(b.item(), k -> new LinkedHashMap<>()).put(slot, v.get());
       } else {
         slots.put(slot, v.get());
       }
@@ -199,8 +200,11 @@ final class ValueChecker {
               + "' can cross; narrow the tolerances");
       return Optional.empty();
     }
-    return Optional.of(
-        new Value.Group(Map.of("low", low.get(), "high", high.get()), List.of(), arg.range()));
+    // Not Map.of: its order is salted per JVM start, and the model's maps iterate as written.
+    Map<String, Value> ends = new LinkedHashMap<>();
+    ends.put("low", low.get());
+    ends.put("high", high.get());
+    return Optional.of(new Value.Group(ends, List.of(), arg.range()));
   }
 
   private Optional<Value.Num> quantity(Arg.QuantityArg a, Shape.Quantity q, String what) {
