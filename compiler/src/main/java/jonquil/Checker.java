@@ -133,7 +133,7 @@ public final class Checker {
         Analyzer.Analysis analysis = Analyzer.analyze(model, options.yields(), options.draws());
         diagnostics.addAll(analysis.diagnostics());
         requirements.addAll(analysis.outcomes());
-        solutions.put(root, analysis.solution());
+        analysis.solution().ifPresent(s -> solutions.put(root, s));
       } catch (RuntimeException | StackOverflowError e) {
         onInternalError.accept(root, e);
         // Fail closed: the file's requirements stay in the summary, none of them judged.

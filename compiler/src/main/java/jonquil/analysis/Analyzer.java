@@ -29,9 +29,15 @@ public final class Analyzer {
    */
   public static final double CONSERVATION_TOLERANCE = 1e-9;
 
-  /** What analysing one spec gives. */
+  /** What analysing one spec gives; no solution when the physics refused the model. */
   public record Analysis(
-      TrainSolution solution, List<RequirementOutcome> outcomes, List<Diagnostic> diagnostics) {}
+      java.util.Optional<TrainSolution> solution,
+      List<RequirementOutcome> outcomes,
+      List<Diagnostic> diagnostics) {
+    Analysis(TrainSolution solution, List<RequirementOutcome> outcomes, List<Diagnostic> found) {
+      this(java.util.Optional.of(solution), outcomes, found);
+    }
+  }
 
   private Analyzer() {}
 
@@ -47,8 +53,28 @@ public final class Analyzer {
     return analyze(model, yields, YieldDraws.DEFAULT);
   }
 
-  /** As above, drawing yields as {@code draws} says. */
+  /**
+   * As above, drawing yields as {@code draws} says. A model the physics finds unphysical is
+   * reported on its line, and none of its requirements is judged.
+   */
   public static Analysis analyze(ResolvedModel model, boolean yields, YieldDraws draws) {
+    try {
+      return analyzeOrRefuse(model, yields, draws);
+    } catch (UnphysicalModel refused) {
+      List<RequirementOutcome> outcomes = new ArrayList<>();
+      for (ResolvedRequirement r : model.requirements()) {
+        outcomes.add(
+            RequirementOutcome.notEvaluated(
+                r.file(),
+                r.syntax().range(),
+                r.syntax().text(),
+                "not evaluated: " + refused.getMessage()));
+      }
+      return new Analysis(java.util.Optional.empty(), outcomes, List.of(refused.diagnostic()));
+    }
+  }
+
+  private static Analysis analyzeOrRefuse(ResolvedModel model, boolean yields, YieldDraws draws) {
     MaterialModel materials = new MaterialModel(model);
     ElementOptics optics = new ElementOptics(materials, new SurfaceModel(model, materials));
     Map<OptionalDouble, TrainSolution> solved = new HashMap<>();

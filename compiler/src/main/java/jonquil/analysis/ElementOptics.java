@@ -335,6 +335,10 @@ final class ElementOptics {
    */
   static double[] plate(double r1, double t1, double r2, double t2, double tau) {
     double denominator = 1 - r1 * r2 * tau * tau;
+    if (!(denominator > 0)) {
+      // Both faces reflect all (grazing incidence, rounded to R = 1): nothing gets through.
+      return new double[] {0, r1};
+    }
     double t = t1 * t2 * tau / denominator;
     double r = r1 + t1 * t1 * r2 * tau * tau / denominator;
     return new double[] {t, r};
@@ -345,7 +349,9 @@ final class ElementOptics {
     double wl = in.wavelength();
     Symbol from = e.ref(Param.FROM, "material").orElseThrow();
     Symbol to = e.ref(Param.TO, "material").orElseThrow();
-    Complex n1 = materials.index(from, wl);
+    // The incidence medium's loss acts in its bulk, not at the face: Fresnel's power split holds
+    // for a lossless incidence medium only, and with κ > 0 it sent out more than came in.
+    Complex n1 = real(materials.index(from, wl));
     Complex n2 = materials.index(to, wl);
     Fresnel.Coefficients c = Fresnel.at(n1, n2, aoi);
     SurfaceModel.Powers powers = surfaces.surface(e, n1, n2, aoi, wl);

@@ -345,14 +345,35 @@ final class KindChecks {
     }
     OptionalDouble w0 = beam.get(0).number("waist");
     OptionalDouble theta = beam.get(0).number("divergence");
-    if (w0.isEmpty() || theta.isEmpty()) {
-      return;
-    }
     OptionalDouble stated = beam.get(0).number("m2");
     List<Double> wavelengths = new java.util.ArrayList<>();
     number(params, Param.WAVELENGTH, "wavelength").ifPresent(wavelengths::add);
     for (Value.Group line : params.getOrDefault(Param.LINE.word(), List.of())) {
       line.number("wavelength").ifPresent(wavelengths::add);
+    }
+    if (w0.isPresent() && theta.isEmpty()) {
+      for (double wl : wavelengths) {
+        // θ = M² λ/(π W0) (Siegman, Lasers, 1986, ch. 17): a waist so small that the half angle
+        // reaches 90° is no beam, and every figure drawn from it would overflow.
+        double spread = stated.orElse(1) * wl / (Math.PI * w0.getAsDouble());
+        if (!(spread < Math.PI / 2)) {
+          sink.report(
+              DiagnosticCode.OUT_OF_RANGE,
+              given.get(Param.BEAM.word()).range(),
+              "the beam of "
+                  + who
+                  + " cannot have a waist of "
+                  + QuantityFormat.format(w0.getAsDouble(), Dimension.LENGTH)
+                  + " at "
+                  + QuantityFormat.format(wl, Dimension.LENGTH)
+                  + ": its half-angle divergence M² λ/(π W0) would reach 90° or more; a"
+                  + " waist radius (1/e²) is at least about λ/π");
+          return;
+        }
+      }
+    }
+    if (w0.isEmpty() || theta.isEmpty()) {
+      return;
     }
     for (double wl : wavelengths) {
       double m2 = Math.PI * w0.getAsDouble() * theta.getAsDouble() / wl;
