@@ -102,4 +102,18 @@ class InternalFailuresLookInternalTest {
     assertEquals(ExitCode.TROUBLE, ExitCode.of(broken, false, true, false));
     assertEquals(ExitCode.TROUBLE, ExitCode.of(broken, true, false, false));
   }
+
+  @ParameterizedTest
+  @ValueSource(strings = {"Infinity", "NaN", "0x1p1", "1.5d"})
+  void aTableNumberThatIsNoPlainDecimalIsABadRow(String n) throws IOException {
+    Files.writeString(dir.resolve("nk.txt"), "500 nm 1.5 0\n600 nm " + n + " 0\n");
+    CliRun run = check("material glass { table \"nk.txt\" }\n");
+    assertEquals(1, run.exitCode(), run.out());
+    assertTrue(
+        run.out()
+            .contains(
+                "nk.txt:2:1: error: numbers must be plain decimals such as '1.5195' or '1.2e-3'"
+                    + " [J214]"),
+        run.out());
+  }
 }
