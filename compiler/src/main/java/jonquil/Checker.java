@@ -9,6 +9,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
+import java.util.function.BiConsumer;
 import java.util.function.BooleanSupplier;
 import jonquil.analysis.Analyzer;
 import jonquil.analysis.RequirementOutcome;
@@ -54,6 +55,19 @@ public final class Checker {
    */
   public static Optional<Result> check(
       Workspace workspace, List<Path> files, CheckOptions options, BooleanSupplier superseded) {
+    return check(workspace, files, options, superseded, (file, failure) -> {});
+  }
+
+  /**
+   * As above, handing each internal failure to {@code onInternalError} as well (the command line
+   * prints its stack trace under '--debug'; the J901 finding carries no trace).
+   */
+  public static Optional<Result> check(
+      Workspace workspace,
+      List<Path> files,
+      CheckOptions options,
+      BooleanSupplier superseded,
+      BiConsumer<Path, Throwable> onInternalError) {
     Map<Path, ParseResult> parsed = new HashMap<>();
     Set<Diagnostic> diagnostics = new LinkedHashSet<>();
     List<RequirementOutcome> requirements = new ArrayList<>();
@@ -65,6 +79,7 @@ public final class Checker {
         return Optional.empty();
       }
       Path root = file.toAbsolutePath().normalize();
+      int requirementsBefore = requirements.size();
       try {
         SpecLoader loader = new SpecLoader(workspace, parsed);
         boolean loaded = loader.load(root);
@@ -118,8 +133,22 @@ public final class Checker {
         Analyzer.Analysis analysis = Analyzer.analyze(model, options.yields(), options.draws());
         diagnostics.addAll(analysis.diagnostics());
         requirements.addAll(analysis.outcomes());
-        solutions.put(root, analysis.solution());
+        analysis.solution().ifPresent(s -> solutions.put(root, s));
       } catch (RuntimeException | StackOverflowError e) {
+        onInternalError.accept(root, e);
+        // Fail closed: the file's requirements stay in the summary, none of them judged.
+        requirements.subList(requirementsBefore, requirements.size()).clear();
+        ResolvedModel model = models.get(root);
+        if (model != null) {
+          for (ResolvedRequirement r : model.requirements()) {
+            requirements.add(
+                RequirementOutcome.notEvaluated(
+                    r.file(),
+                    r.syntax().range(),
+                    r.syntax().text(),
+                    "not evaluated: the checker failed internally"));
+          }
+        }
         diagnostics.add(
             Diagnostic.of(
                 DiagnosticCode.INTERNAL_ERROR,

@@ -31,6 +31,7 @@ class DiagnosticsCorpusTest {
   static final Set<DiagnosticCode> NOT_IN_CORPUS =
       EnumSet.of(
           DiagnosticCode.INTERNAL_ERROR,
+          DiagnosticCode.CONSERVATION_BROKEN,
           DiagnosticCode.UNREADABLE_FILE,
           DiagnosticCode.USE_UNREADABLE,
           DiagnosticCode.REQUIREMENT_FAILED,

@@ -23,9 +23,21 @@ public final class Analyzer {
   /** Stray beams weaker than this fraction of the source power are not worth a note. */
   static final double STRAY_NOTE_THRESHOLD = 1e-9;
 
-  /** What analysing one spec gives. */
+  /**
+   * Relative budget error above which the model itself is wrong (DEVELOPERS.md, "Budget"): far
+   * above the rounding of a long train's sums, far below any error a reader would notice.
+   */
+  public static final double CONSERVATION_TOLERANCE = 1e-9;
+
+  /** What analysing one spec gives; no solution when the physics refused the model. */
   public record Analysis(
-      TrainSolution solution, List<RequirementOutcome> outcomes, List<Diagnostic> diagnostics) {}
+      java.util.Optional<TrainSolution> solution,
+      List<RequirementOutcome> outcomes,
+      List<Diagnostic> diagnostics) {
+    Analysis(TrainSolution solution, List<RequirementOutcome> outcomes, List<Diagnostic> found) {
+      this(java.util.Optional.of(solution), outcomes, found);
+    }
+  }
 
   private Analyzer() {}
 
@@ -41,8 +53,28 @@ public final class Analyzer {
     return analyze(model, yields, YieldDraws.DEFAULT);
   }
 
-  /** As above, drawing yields as {@code draws} says. */
+  /**
+   * As above, drawing yields as {@code draws} says. A model the physics finds unphysical is
+   * reported on its line, and none of its requirements is judged.
+   */
   public static Analysis analyze(ResolvedModel model, boolean yields, YieldDraws draws) {
+    try {
+      return analyzeOrRefuse(model, yields, draws);
+    } catch (UnphysicalModel refused) {
+      List<RequirementOutcome> outcomes = new ArrayList<>();
+      for (ResolvedRequirement r : model.requirements()) {
+        outcomes.add(
+            RequirementOutcome.notEvaluated(
+                r.file(),
+                r.syntax().range(),
+                r.syntax().text(),
+                "not evaluated: " + refused.getMessage()));
+      }
+      return new Analysis(java.util.Optional.empty(), outcomes, List.of(refused.diagnostic()));
+    }
+  }
+
+  private static Analysis analyzeOrRefuse(ResolvedModel model, boolean yields, YieldDraws draws) {
     MaterialModel materials = new MaterialModel(model);
     ElementOptics optics = new ElementOptics(materials, new SurfaceModel(model, materials));
     Map<OptionalDouble, TrainSolution> solved = new HashMap<>();
@@ -51,6 +83,19 @@ public final class Analyzer {
     TrainSolution solution = solve.apply(OptionalDouble.empty());
     List<Diagnostic> diagnostics = new ArrayList<>();
     List<RequirementOutcome> outcomes = new ArrayList<>();
+    if (!(solution.conservationError() <= CONSERVATION_TOLERANCE)) {
+      // Fail closed: a model that creates or loses light judges nothing.
+      conservationBroken(model, solution).ifPresent(diagnostics::add);
+      for (ResolvedRequirement r : model.requirements()) {
+        outcomes.add(
+            RequirementOutcome.notEvaluated(
+                r.file(),
+                r.syntax().range(),
+                r.syntax().text(),
+                "not evaluated: the power budget does not close"));
+      }
+      return new Analysis(solution, outcomes, diagnostics);
+    }
     for (ResolvedRequirement r : model.requirements()) {
       boolean deferred = r.yield().isPresent() && !yields;
       YieldMonteCarlo.Judged judged =
@@ -90,6 +135,12 @@ public final class Analyzer {
                     verdict("requirement not met", r, v)));
       }
     }
+    // The solves at other wavelengths that requirements asked for must close as well.
+    solved.values().stream()
+        .filter(s -> !(s.conservationError() <= CONSERVATION_TOLERANCE))
+        .findFirst()
+        .flatMap(s -> conservationBroken(model, s))
+        .ifPresent(diagnostics::add);
     diagnostics.addAll(TerminalLimits.check(model, solution));
     for (StrayBeam s : solution.stray()) {
       if (s.power() > STRAY_NOTE_THRESHOLD * solution.sourcePower() && s.file() != null) {
@@ -137,6 +188,32 @@ public final class Analyzer {
                               + "); its index there is extrapolated")));
     }
     return new Analysis(solution, outcomes, diagnostics.stream().distinct().toList());
+  }
+
+  /**
+   * A budget that does not close is an error on the first train: every figure drawn from it is
+   * suspect, so it must not pass as a JSON number only.
+   */
+  private static java.util.Optional<Diagnostic> conservationBroken(
+      ResolvedModel model, TrainSolution s) {
+    return model.trains().stream()
+        .findFirst()
+        .map(
+            t ->
+                Diagnostic.of(
+                    DiagnosticCode.CONSERVATION_BROKEN,
+                    t.file(),
+                    t.range(),
+                    "the power budget does not close: the sources give "
+                        + QuantityFormat.format(s.sourcePower(), Dimension.POWER)
+                        + " but absorbed, stopped, observed and stray light add to "
+                        + QuantityFormat.format(
+                            s.absorbed() + s.stopped() + s.observedAtPathEnds() + s.strayPower(),
+                            Dimension.POWER)
+                        + " (relative error "
+                        + s.conservationError()
+                        + ", more than 1e-9); no figure of this spec can be trusted, so its"
+                        + " requirements are not evaluated"));
   }
 
   private static java.util.Optional<ResolvedRef> firstUse(

@@ -10,6 +10,7 @@ import jonquil.optics.Jones;
 import jonquil.optics.beam.Clipping;
 import jonquil.resolve.Param;
 import jonquil.resolve.ResolvedElement;
+import jonquil.resolve.SplitterFractions;
 import jonquil.resolve.Symbol;
 import jonquil.resolve.Value;
 import org.apache.commons.math3.complex.Complex;
@@ -22,14 +23,6 @@ import org.apache.commons.math3.complex.Complex;
 final class ElementOptics {
   /** Extinction ratio of an ideal polarizer or polarizing splitter when none is stated. */
   static final double IDEAL_EXTINCTION = 1e12;
-
-  /**
-   * Stated defaults of a polarizing splitter (DEVELOPERS.md): p transmittance and s reflectance.
-   */
-  static final double DEFAULT_PBS_TP = 0.95;
-
-  static final double DEFAULT_PBS_RS = 0.99;
-  static final double DEFAULT_PBS_EXTINCTION = 1000;
 
   private final MaterialModel materials;
   private final SurfaceModel surfaces;
@@ -190,23 +183,19 @@ final class ElementOptics {
 
   private Response splitter(ResolvedElement e, TracedBeam in, double plane) {
     double aoi = e.number(Param.AOI, "angle").orElse(Math.PI / 4);
-    double tp;
-    double ts;
-    double rs;
-    double rp;
-    if (e.has(Param.POLARIZING)) {
-      tp = e.number(Param.TRANSMIT_P, "t").orElse(DEFAULT_PBS_TP);
-      double er = e.number(Param.EXTINCTION, "ratio").orElse(DEFAULT_PBS_EXTINCTION);
-      ts = e.number(Param.TRANSMIT_S, "t").orElse(tp / er);
-      rs = e.number(Param.REFLECT_S, "r").orElse(Math.min(DEFAULT_PBS_RS, 1 - ts));
-      rp = e.number(Param.REFLECT_P, "r").orElse(1 - tp);
-    } else {
-      double ratio = e.number(Param.RATIO, "reflected").orElse(0.5);
-      rs = e.number(Param.REFLECT_S, "r").orElse(ratio);
-      rp = e.number(Param.REFLECT_P, "r").orElse(ratio);
-      ts = e.number(Param.TRANSMIT_S, "t").orElse(1 - rs);
-      tp = e.number(Param.TRANSMIT_P, "t").orElse(1 - rp);
-    }
+    SplitterFractions f =
+        SplitterFractions.of(
+            e.has(Param.POLARIZING),
+            e.number(Param.RATIO, "reflected"),
+            e.number(Param.TRANSMIT_P, "t"),
+            e.number(Param.TRANSMIT_S, "t"),
+            e.number(Param.REFLECT_P, "r"),
+            e.number(Param.REFLECT_S, "r"),
+            e.number(Param.EXTINCTION, "ratio"));
+    double tp = f.tp();
+    double ts = f.ts();
+    double rs = f.rs();
+    double rp = f.rp();
     Jones pass = Jones.transmission(Complex.ONE, Complex.ONE, plane, clamp(tp), clamp(ts));
     Coherency through = in.light().transform(pass);
     Jones reflect =
@@ -346,6 +335,10 @@ final class ElementOptics {
    */
   static double[] plate(double r1, double t1, double r2, double t2, double tau) {
     double denominator = 1 - r1 * r2 * tau * tau;
+    if (!(denominator > 0)) {
+      // Both faces reflect all (grazing incidence, rounded to R = 1): nothing gets through.
+      return new double[] {0, r1};
+    }
     double t = t1 * t2 * tau / denominator;
     double r = r1 + t1 * t1 * r2 * tau * tau / denominator;
     return new double[] {t, r};
@@ -356,7 +349,9 @@ final class ElementOptics {
     double wl = in.wavelength();
     Symbol from = e.ref(Param.FROM, "material").orElseThrow();
     Symbol to = e.ref(Param.TO, "material").orElseThrow();
-    Complex n1 = materials.index(from, wl);
+    // The incidence medium's loss acts in its bulk, not at the face: Fresnel's power split holds
+    // for a lossless incidence medium only, and with κ > 0 it sent out more than came in.
+    Complex n1 = real(materials.index(from, wl));
     Complex n2 = materials.index(to, wl);
     Fresnel.Coefficients c = Fresnel.at(n1, n2, aoi);
     SurfaceModel.Powers powers = surfaces.surface(e, n1, n2, aoi, wl);

@@ -4,8 +4,10 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
+import jonquil.diag.DiagnosticCode;
 import jonquil.optics.material.CatalogMaterial;
 import jonquil.optics.material.MaterialCatalog;
+import jonquil.optics.material.PhysicalIndex;
 import jonquil.optics.material.TabulatedIndex;
 import jonquil.optics.material.ThermoOptic;
 import jonquil.optics.material.Uniaxial;
@@ -16,6 +18,8 @@ import jonquil.resolve.ResolvedElement;
 import jonquil.resolve.ResolvedModel;
 import jonquil.resolve.Symbol;
 import jonquil.resolve.Value;
+import jonquil.units.Dimension;
+import jonquil.units.QuantityFormat;
 import org.apache.commons.math3.complex.Complex;
 
 /**
@@ -48,7 +52,35 @@ final class MaterialModel {
         .orElseGet(() -> catalogIndex("air", null, wavelength));
   }
 
+  /**
+   * As {@link #indexAsStated}, refusing an index that is not physical at this wavelength on the
+   * material's line (a formula can pass resolution and still give n² < 0 or meet a pole).
+   */
   Complex index(Symbol material, double wavelength) {
+    Complex n = indexAsStated(material, wavelength);
+    Optional<String> problem = PhysicalIndex.problem(n);
+    if (problem.isPresent() && !material.isCatalog() && material.declaration().isPresent()) {
+      throw new UnphysicalModel(
+          DiagnosticCode.OUT_OF_RANGE,
+          material.file(),
+          material.declaration().get().range(),
+          "material '"
+              + material.name()
+              + "' gives no physical index at "
+              + QuantityFormat.format(wavelength, Dimension.LENGTH)
+              + ": "
+              + problem.get()
+              + "; check its dispersion terms (a Sellmeier pole near this wavelength, or terms"
+              + " that make n² negative)");
+    }
+    if (problem.isPresent()) {
+      throw new IllegalStateException(
+          "catalog material '" + material.name() + "' gives " + problem.get());
+    }
+    return n;
+  }
+
+  private Complex indexAsStated(Symbol material, double wavelength) {
     if (material.isCatalog()) {
       return catalogIndex(material.name(), material, wavelength);
     }
@@ -112,7 +144,8 @@ final class MaterialModel {
       for (Value.Group term : sellmeier.get().items()) {
         n2 += term.number("b").orElse(0) * l2 / (l2 - term.number("c").orElse(0));
       }
-      return new Complex(Math.sqrt(Math.max(n2, 0)), 0);
+      // n² ≤ 0 is no index; NaN lets the check above refuse it instead of a made-up n = 0.
+      return new Complex(n2 > 0 ? Math.sqrt(n2) : Double.NaN, 0);
     }
     Optional<Value.Group> table = m.param(Param.TABLE);
     if (table.isPresent() && table.get().slot("rows").orElse(null) instanceof Value.Table t) {

@@ -127,9 +127,12 @@ final class CheckCommand implements Callable<Integer> {
       result =
           withoutUnreadable(
               Checker.check(
-                  Workspace.onDisk(projectRoot),
-                  inputs.files(),
-                  CheckOptions.FULL.withDraws(draws())),
+                      Workspace.onDisk(projectRoot),
+                      inputs.files(),
+                      CheckOptions.FULL.withDraws(draws()),
+                      () -> false,
+                      this::internalError)
+                  .orElseThrow(),
               problems);
     }
     problems.forEach(err::println);
@@ -187,6 +190,14 @@ final class CheckCommand implements Callable<Integer> {
     return kept.size() == result.diagnostics().size()
         ? result
         : new Result(result.files(), kept, result.requirements());
+  }
+
+  /** The stack trace behind a J901 finding, printed under '--debug' only. */
+  private void internalError(Path file, Throwable failure) {
+    if (debug) {
+      err.println("jonquil: internal error checking '" + PathText.oneLine(file.toString()) + "':");
+      failure.printStackTrace(err);
+    }
   }
 
   /** JSON and SARIF are UTF-8 by definition, whatever the platform's console encoding. */

@@ -25,11 +25,17 @@ public enum ExitCode {
   }
 
   /**
-   * Findings outrank unreadable input because they are real news about the specs; but a partly
-   * unread check must never look clean, and --exit-zero must not hide that either.
+   * An internal failure outranks everything, '--exit-zero' included: the checker did not do its
+   * job, so no flag may make the run look clean or merely "with findings". Findings outrank
+   * unreadable input because they are real news about the specs; but a partly unread check must
+   * never look clean, and --exit-zero must not hide that either.
    */
   public static ExitCode of(
       Result result, boolean strict, boolean exitZero, boolean someInputUnreadable) {
+    if (result.diagnostics().stream()
+        .anyMatch(d -> d.code() == jonquil.diag.DiagnosticCode.INTERNAL_ERROR)) {
+      return TROUBLE;
+    }
     boolean fails = result.fails(strict);
     if (someInputUnreadable) {
       return fails && !exitZero ? FINDINGS : TROUBLE;

@@ -57,6 +57,11 @@ public enum DiagnosticCode {
       "J409", Severity.WARNING, "A material used outside the wavelength range of its data"),
   PARAMETER_NOT_MODELLED(
       "J410", Severity.ERROR, "A parameter whose effect Jonquil does not model, refused"),
+  // Numbered with the analysis codes it guards, but found from the parameters alone.
+  ENERGY_NOT_CONSERVED_BY_PARAMETERS(
+      "J618",
+      Severity.ERROR,
+      "Parameters that together send out more light than comes in (R + T above 100 %)"),
 
   // Beam trains: J5xx
   PATH_START_NOT_SOURCE(
@@ -101,6 +106,10 @@ public enum DiagnosticCode {
       "J613", Severity.ERROR, "A requirement cannot be evaluated, so it is not met (fail closed)"),
   RATING_EXCEEDED(
       "J616", Severity.ERROR, "A dump or detector takes more than its stated rating or threshold"),
+  CONSERVATION_BROKEN(
+      "J617",
+      Severity.ERROR,
+      "The power budget does not close: the model created or lost light (a checker fault)"),
 
   // Limits and internals: J9xx
   INTERNAL_ERROR("J901", Severity.ERROR, "The checker failed internally; please report it"),

@@ -65,6 +65,7 @@ final class KindChecks {
                       "an extinction ratio describes a polarizing splitter, and this one is not"
                           + " 'polarizing'; its split is set by 'ratio' or the reflectances");
                 }
+                splitterConserves(sink, who, params, given);
               };
           case ROTATOR ->
               () ->
@@ -178,6 +179,91 @@ final class KindChecks {
     }
   }
 
+  /**
+   * A splitter may lose light (absorption) but never make it: per polarization, reflected plus
+   * transmitted is at most 100 %. The fractions are those the optics use (SplitterFractions, whose
+   * defaults yield to stated figures), each stated one at the edge of its tolerance that sends out
+   * the most.
+   */
+  private static void splitterConserves(
+      Sink sink, String who, Map<String, List<Value.Group>> params, Map<String, Property> given) {
+    SplitterFractions f =
+        SplitterFractions.of(
+            given.containsKey(Param.POLARIZING.word()),
+            edge(params, Param.RATIO, "reflected", 1),
+            edge(params, Param.TRANSMIT_P, "t", 1),
+            edge(params, Param.TRANSMIT_S, "t", 1),
+            edge(params, Param.REFLECT_P, "r", 1),
+            edge(params, Param.REFLECT_S, "r", 1),
+            edge(params, Param.EXTINCTION, "ratio", -1));
+    List<String> broken = new java.util.ArrayList<>();
+    double worst = 0;
+    if (f.tp() + f.rp() > 1 + CONSERVATION_SLACK) {
+      broken.add("p: transmitted " + percent(f.tp()) + " + reflected " + percent(f.rp()));
+      worst = f.tp() + f.rp();
+    }
+    if (f.ts() + f.rs() > 1 + CONSERVATION_SLACK) {
+      broken.add("s: transmitted " + percent(f.ts()) + " + reflected " + percent(f.rs()));
+      worst = Math.max(worst, f.ts() + f.rs());
+    }
+    if (broken.isEmpty()) {
+      return;
+    }
+    // The line that states the last of the fractions in play: the one that tipped the sum.
+    Property at =
+        java.util.stream.Stream.of(
+                Param.RATIO,
+                Param.TRANSMIT_P,
+                Param.TRANSMIT_S,
+                Param.REFLECT_P,
+                Param.REFLECT_S,
+                Param.EXTINCTION,
+                Param.POLARIZING)
+            .map(p -> given.get(p.word()))
+            .filter(java.util.Objects::nonNull)
+            .max(java.util.Comparator.comparingInt(p -> p.range().start()))
+            .orElseThrow();
+    sink.report(
+        DiagnosticCode.ENERGY_NOT_CONSERVED_BY_PARAMETERS,
+        at.range(),
+        who
+            + " would send out more light than comes in ("
+            + String.join("; ", broken)
+            + ", up to "
+            + percent(worst)
+            + (given.containsKey(Param.EXTINCTION.word())
+                    && !given.containsKey(Param.TRANSMIT_S.word())
+                ? "; s is transmitted as transmit_p / extinction"
+                : "")
+            + "); make reflected plus transmitted at most 100 % for each polarization, the rest"
+            + " is absorbed");
+  }
+
+  /**
+   * Excess over 100 % let pass: the power budget's own tolerance (Analyzer.CONSERVATION_TOLERANCE),
+   * so that a near-ideal splitter ('reflect_s 100 %' with an extinction of 1e9) is not refused for
+   * light the budget itself would not notice.
+   */
+  static final double CONSERVATION_SLACK = 1e-9;
+
+  /**
+   * A stated number at the edge of its tolerance ({@code side} +1 for the top, −1 for the bottom),
+   * empty when not stated.
+   */
+  private static OptionalDouble edge(
+      Map<String, List<Value.Group>> params, Param param, String slot, int side) {
+    List<Value.Group> v = params.get(param.word());
+    param.checkSlot(slot);
+    if (v == null || v.isEmpty() || !(v.get(0).slot(slot).orElse(null) instanceof Value.Num n)) {
+      return OptionalDouble.empty();
+    }
+    return OptionalDouble.of(n.si() + side * n.tolerance().orElse(0));
+  }
+
+  private static String percent(double fraction) {
+    return QuantityFormat.format(100 * fraction, Dimension.DIMENSIONLESS) + " %";
+  }
+
   private static void needs(
       Sink sink,
       String who,
@@ -260,14 +346,35 @@ final class KindChecks {
     }
     OptionalDouble w0 = beam.get(0).number("waist");
     OptionalDouble theta = beam.get(0).number("divergence");
-    if (w0.isEmpty() || theta.isEmpty()) {
-      return;
-    }
     OptionalDouble stated = beam.get(0).number("m2");
     List<Double> wavelengths = new java.util.ArrayList<>();
     number(params, Param.WAVELENGTH, "wavelength").ifPresent(wavelengths::add);
     for (Value.Group line : params.getOrDefault(Param.LINE.word(), List.of())) {
       line.number("wavelength").ifPresent(wavelengths::add);
+    }
+    if (w0.isPresent() && theta.isEmpty()) {
+      for (double wl : wavelengths) {
+        // θ = M² λ/(π W0) (Siegman, Lasers, 1986, ch. 17): a waist so small that the half angle
+        // reaches 90° is no beam, and every figure drawn from it would overflow.
+        double spread = stated.orElse(1) * wl / (Math.PI * w0.getAsDouble());
+        if (!(spread < Math.PI / 2)) {
+          sink.report(
+              DiagnosticCode.OUT_OF_RANGE,
+              given.get(Param.BEAM.word()).range(),
+              "the beam of "
+                  + who
+                  + " cannot have a waist of "
+                  + QuantityFormat.format(w0.getAsDouble(), Dimension.LENGTH)
+                  + " at "
+                  + QuantityFormat.format(wl, Dimension.LENGTH)
+                  + ": its half-angle divergence M² λ/(π W0) would reach 90° or more; a"
+                  + " waist radius (1/e²) is at least about M² λ/π");
+          return;
+        }
+      }
+    }
+    if (w0.isEmpty() || theta.isEmpty()) {
+      return;
     }
     for (double wl : wavelengths) {
       double m2 = Math.PI * w0.getAsDouble() * theta.getAsDouble() / wl;

@@ -58,7 +58,10 @@ public final class TableReader {
               double wl = u.toSi(Double.parseDouble(f[0]));
               double n = Double.parseDouble(f[2]);
               double k = f.length == 4 ? Double.parseDouble(f[3]) : 0;
-              if (!Double.isFinite(n) || !Double.isFinite(k)) {
+              if (!plain(f[0]) || !plain(f[2]) || (f.length == 4 && !plain(f[3]))) {
+                // Java would read 'NaN', 'Infinity', '0x1p3' or '2d'; a data file means none.
+                problem = "numbers must be plain decimals such as '1.5195' or '1.2e-3'";
+              } else if (!Double.isFinite(wl) || !Double.isFinite(n) || !Double.isFinite(k)) {
                 problem = "n and k must be finite numbers";
               } else if (!(wl > 0) || !(n > 0) || !(k >= 0)) {
                 problem = "the wavelength and n must be positive and k zero or more";
@@ -108,5 +111,12 @@ public final class TableReader {
       return slashes;
     }
     return slashes < 0 ? hash : Math.min(hash, slashes);
+  }
+
+  private static final java.util.regex.Pattern PLAIN_DECIMAL =
+      java.util.regex.Pattern.compile("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
+
+  private static boolean plain(String number) {
+    return PLAIN_DECIMAL.matcher(number).matches();
   }
 }
