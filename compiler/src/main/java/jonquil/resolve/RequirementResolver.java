@@ -308,6 +308,9 @@ final class RequirementResolver {
       return Optional.empty();
     }
     String what = m.word();
+    if (toleranceRefused(q, BOUND)) {
+      return Optional.empty();
+    }
     return switch (m.bound()) {
       case POWER, IRRADIANCE, FLUENCE, FIELD, ENERGY, LENGTH ->
           si(q, m.bound(), Bounds.NON_NEGATIVE, what);
@@ -396,6 +399,9 @@ final class RequirementResolver {
           "a band is written like 'wavelength 1060 nm .. 1070 nm'");
       return Optional.empty();
     }
+    if (toleranceRefused(lo, "a band's end") | toleranceRefused(hi, "a band's end")) {
+      return Optional.empty();
+    }
     Optional<Value.Num> low =
         values.quantity(
             lo, List.of(Dimension.LENGTH), KindTables.WAVELENGTH, "1060 nm", "wavelength");
@@ -421,6 +427,9 @@ final class RequirementResolver {
           DiagnosticCode.BAD_ARGUMENT, y.bound().range(), "a yield is a fraction such as '99 %'");
       return Optional.empty();
     }
+    if (toleranceRefused(q, "a yield's bound")) {
+      return Optional.empty();
+    }
     return values
         .ratio(q, Bounds.closed(0, 1), "yield")
         .map(
@@ -433,6 +442,33 @@ final class RequirementResolver {
                     false,
                     Optional.empty(),
                     y.range()));
+  }
+
+  /**
+   * A tolerance belongs to a part, where builds draw it; on a bound it would be accepted and
+   * ignored, so it is refused, and the message says how to ask what was probably meant.
+   */
+  private static final String BOUND = "a requirement's bound";
+
+  private boolean toleranceRefused(Arg.QuantityArg q, String where) {
+    if (q.tolerance().isEmpty()) {
+      return false;
+    }
+    Arg.Tolerance tolerance = q.tolerance().get();
+    sink.report(
+        DiagnosticCode.BAD_ARGUMENT,
+        tolerance.range(),
+        "a tolerance has no meaning on "
+            + where
+            + ", which is exact: remove '± "
+            + tolerance.number().text()
+            + tolerance.unit().map(u -> " " + u.text()).orElse("")
+            + "'"
+            + (where.equals(BOUND)
+                ? "; to ask how often toleranced builds meet a bound, put the ± on the part and"
+                    + " write 'yield >= 95 % for ...'"
+                : ""));
+    return true;
   }
 
   private static ResolvedRequirement.Relation relation(Requirement.Comparator c) {
