@@ -20,9 +20,6 @@ import jonquil.units.QuantityFormat;
  * same answer.
  */
 public final class Analyzer {
-  /** Stray beams weaker than this fraction of the source power are not worth a note. */
-  static final double STRAY_NOTE_THRESHOLD = 1e-9;
-
   /** What analysing one spec gives. */
   public record Analysis(
       TrainSolution solution, List<RequirementOutcome> outcomes, List<Diagnostic> diagnostics) {}
@@ -91,19 +88,7 @@ public final class Analyzer {
       }
     }
     diagnostics.addAll(TerminalLimits.check(model, solution));
-    for (StrayBeam s : solution.stray()) {
-      if (s.power() > STRAY_NOTE_THRESHOLD * solution.sourcePower() && s.file() != null) {
-        diagnostics.add(
-            Diagnostic.of(
-                DiagnosticCode.STRAY_BEAM,
-                s.file(),
-                s.range(),
-                "stray light: "
-                    + QuantityFormat.format(s.power(), Dimension.POWER)
-                    + " "
-                    + s.description()));
-      }
-    }
+    diagnostics.addAll(StrayNotes.of(solution));
     for (Clip c : solution.clips()) {
       diagnostics.add(
           Diagnostic.of(
