@@ -16,9 +16,32 @@ import jonquil.diag.Severity;
 final class TextReport {
   private TextReport() {}
 
+  /**
+   * What the text report shows beyond its default. {@code quiet}: only the findings that fail the
+   * gate (errors, failed and unevaluated requirements, and warnings when {@code strict}), then the
+   * summary, whose counts stay those of the whole check. {@code budget}: each path's power budget
+   * before the summary.
+   */
+  record Shown(boolean quiet, boolean strict, boolean budget) {
+    static final Shown ALL = new Shown(false, false, false);
+
+    boolean shows(Diagnostic d) {
+      return !quiet
+          || d.severity() == Severity.ERROR
+          || (strict && d.severity() == Severity.WARNING);
+    }
+  }
+
   static void write(CheckRun run, PrintStream out) {
+    write(run, out, Shown.ALL);
+  }
+
+  static void write(CheckRun run, PrintStream out, Shown shown) {
     Result result = run.result();
     for (Diagnostic d : result.diagnostics()) {
+      if (!shown.shows(d)) {
+        continue;
+      }
       out.println(line(run, d));
       for (Related r : d.related()) {
         // Printed as a note on its own line so that the same tools can jump to it.
@@ -37,6 +60,10 @@ final class TextReport {
       if (r.status() == RequirementStatus.NOT_EVALUATED && !isFinding(result, r)) {
         out.println(requirement(run, r));
       }
+    }
+    if (shown.budget()) {
+      BudgetTable.write(run, out);
+      out.println();
     }
     out.println(summary(result));
     out.flush();
