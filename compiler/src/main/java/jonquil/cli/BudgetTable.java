@@ -1,6 +1,5 @@
 package jonquil.cli;
 
-import java.io.PrintStream;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -28,7 +27,9 @@ final class BudgetTable {
 
   private BudgetTable() {}
 
-  static void write(CheckRun run, PrintStream out) {
+  /** The tables of every checked file, one block per path, blocks separated by a blank line. */
+  static List<String> lines(CheckRun run) {
+    List<String> lines = new ArrayList<>();
     for (Map.Entry<Path, TrainSolution> e : run.result().solutions().entrySet()) {
       ResolvedModel model = run.result().models().get(e.getKey());
       if (model == null) {
@@ -39,8 +40,10 @@ final class BudgetTable {
       for (ResolvedTrain train : model.trains()) {
         String trainName = train.name().map(n -> "train '" + n + "'").orElse("the train");
         for (ResolvedTrain.BeamPath path : train.paths()) {
-          out.println();
-          out.println(
+          if (!lines.isEmpty()) {
+            lines.add("");
+          }
+          lines.add(
               "power budget, "
                   + file
                   + ", "
@@ -50,10 +53,11 @@ final class BudgetTable {
                   + " (sources emit "
                   + QuantityFormat.format(s.sourcePower(), Dimension.POWER)
                   + "):");
-          table(path, s).forEach(out::println);
+          lines.addAll(table(path, s));
         }
       }
     }
+    return lines;
   }
 
   private static String from(ResolvedTrain.BeamPath path) {

@@ -1,6 +1,7 @@
 package jonquil.cli;
 
 import java.io.PrintStream;
+import java.util.List;
 import jonquil.Result;
 import jonquil.analysis.RequirementOutcome;
 import jonquil.analysis.RequirementStatus;
@@ -38,11 +39,13 @@ final class TextReport {
 
   static void write(CheckRun run, PrintStream out, Shown shown) {
     Result result = run.result();
+    boolean printed = false;
     for (Diagnostic d : result.diagnostics()) {
       if (!shown.shows(d)) {
         continue;
       }
       out.println(line(run, d));
+      printed = true;
       for (Related r : d.related()) {
         // Printed as a note on its own line so that the same tools can jump to it.
         out.println(
@@ -59,11 +62,18 @@ final class TextReport {
       // others, those a spec's errors kept from being evaluated.
       if (r.status() == RequirementStatus.NOT_EVALUATED && !isFinding(result, r)) {
         out.println(requirement(run, r));
+        printed = true;
       }
     }
     if (shown.budget()) {
-      BudgetTable.write(run, out);
-      out.println();
+      List<String> budget = BudgetTable.lines(run);
+      if (!budget.isEmpty() && printed) {
+        out.println();
+      }
+      budget.forEach(out::println);
+      if (!budget.isEmpty()) {
+        out.println();
+      }
     }
     out.println(summary(result));
     out.flush();
