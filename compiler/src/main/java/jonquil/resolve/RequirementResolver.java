@@ -8,6 +8,7 @@ import jonquil.diag.DiagnosticCode;
 import jonquil.safety.HazardClass;
 import jonquil.source.TextRange;
 import jonquil.syntax.Arg;
+import jonquil.syntax.Name;
 import jonquil.syntax.Requirement;
 import jonquil.units.Dimension;
 
@@ -209,17 +210,15 @@ final class RequirementResolver {
       return Optional.empty();
     }
     if (condition instanceof Requirement.Compare c) {
+      Optional<Value.Group> hand = handedness(m, c);
+      if (c.handedness().isPresent() && hand.isEmpty()) {
+        return Optional.empty();
+      }
       Optional<Bound> b = bound(m, c.value());
       return b.map(
           v ->
               new ResolvedRequirement.Criterion(
-                  m,
-                  relation(c.comparator()),
-                  v.value,
-                  v.value,
-                  v.relative,
-                  Optional.empty(),
-                  c.range()));
+                  m, relation(c.comparator()), v.value, v.value, v.relative, hand, c.range()));
     }
     Requirement.Within w = (Requirement.Within) condition;
     Optional<Bound> low = bound(m, w.low());
@@ -250,6 +249,33 @@ final class RequirementResolver {
             low.get().relative,
             Optional.empty(),
             w.range()));
+  }
+
+  /**
+   * The handedness after an ellipticity bound ({@code >= 40 deg right}), carried as the group a
+   * {@code handedness is right} state gives, so both read it the same way.
+   */
+  private Optional<Value.Group> handedness(Measure m, Requirement.Compare c) {
+    if (c.handedness().isEmpty()) {
+      return Optional.empty();
+    }
+    Name hand = c.handedness().get();
+    if (m != Measure.ELLIPTICITY) {
+      sink.report(
+          DiagnosticCode.BAD_ARGUMENT,
+          hand.range(),
+          "only an 'ellipticity' bound takes a handedness; remove '"
+              + hand.text()
+              + "', or bound it with 'handedness is "
+              + hand.text()
+              + "' after a comma");
+      return Optional.empty();
+    }
+    return Optional.of(
+        new Value.Group(
+            java.util.Map.of("handedness", new Value.Word(hand.text(), hand.range())),
+            List.of(),
+            hand.range()));
   }
 
   private Optional<ResolvedRequirement.Criterion> state(Measure m, Requirement.Is is) {
