@@ -20,9 +20,6 @@ import jonquil.units.QuantityFormat;
  * same answer.
  */
 public final class Analyzer {
-  /** Stray beams weaker than this fraction of the source power are not worth a note. */
-  static final double STRAY_NOTE_THRESHOLD = 1e-9;
-
   /**
    * Relative budget error above which the model itself is wrong (DEVELOPERS.md, "Budget"): far
    * above the rounding of a long train's sums, far below any error a reader would notice.
@@ -142,19 +139,7 @@ public final class Analyzer {
         .flatMap(s -> conservationBroken(model, s))
         .ifPresent(diagnostics::add);
     diagnostics.addAll(TerminalLimits.check(model, solution));
-    for (StrayBeam s : solution.stray()) {
-      if (s.power() > STRAY_NOTE_THRESHOLD * solution.sourcePower() && s.file() != null) {
-        diagnostics.add(
-            Diagnostic.of(
-                DiagnosticCode.STRAY_BEAM,
-                s.file(),
-                s.range(),
-                "stray light: "
-                    + QuantityFormat.format(s.power(), Dimension.POWER)
-                    + " "
-                    + s.description()));
-      }
-    }
+    diagnostics.addAll(StrayNotes.of(solution));
     for (Clip c : solution.clips()) {
       diagnostics.add(
           Diagnostic.of(

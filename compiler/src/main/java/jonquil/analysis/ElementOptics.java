@@ -21,8 +21,11 @@ import org.apache.commons.math3.complex.Complex;
  * models").
  */
 final class ElementOptics {
-  /** Extinction ratio of an ideal polarizer or polarizing splitter when none is stated. */
-  static final double IDEAL_EXTINCTION = 1e12;
+  /**
+   * Extinction ratio of a polarizer when none is stated: ideal, so the crossed state passes nothing
+   * (a large finite ratio still leaks at first order in the field between tilted polarizers).
+   */
+  static final double IDEAL_EXTINCTION = Double.POSITIVE_INFINITY;
 
   private final MaterialModel materials;
   private final SurfaceModel surfaces;

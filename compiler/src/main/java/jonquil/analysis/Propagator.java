@@ -242,7 +242,8 @@ final class Propagator {
                 g.beam().power(),
                 g.backward(),
                 placed.symbol().file(),
-                placed.range()));
+                placed.range(),
+                java.util.OptionalDouble.of(b.wavelength())));
       }
     }
     if (jonquil.optics.beam.Clipping.significant(1 - clippedMost)) {

@@ -167,16 +167,7 @@ final class RequirementEvaluator {
           at.isEmpty()
               ? unreached(r)
               : compare(c, nearBound(c, at.get().light().azimuth()), "rad", "");
-      // Without a handedness a bound on ellipticity is on its size; 'handedness is ...' bounds
-      // the sign.
-      case ELLIPTICITY ->
-          at.isEmpty()
-              ? unreached(r)
-              : compare(
-                  c,
-                  Math.abs(at.get().light().ellipticityAngle()),
-                  "rad",
-                  "magnitude of the ellipticity angle");
+      case ELLIPTICITY -> at.isEmpty() ? unreached(r) : EllipticityBound.judge(c, at.get().light());
       case POLARIZATION, HANDEDNESS -> at.isEmpty() ? unreached(r) : state(c, at.get().light());
       case IRRADIANCE -> exposure(r, c, s, e -> OptionalDouble.of(e.averageIrradiance()), "W/m2");
       case PEAK_IRRADIANCE ->

@@ -96,6 +96,18 @@ final class CheckCommand implements Callable<Integer> {
               + " alone seeds them when this is left out.")
   Long seed;
 
+  @Option(
+      names = "--quiet",
+      description =
+          "Text: show only what fails the check (errors, failed or unevaluated requirements, with"
+              + " --strict warnings), then the summary.")
+  boolean quiet;
+
+  @Option(
+      names = "--budget",
+      description = "Text: add each path's power budget, element by element, before the summary.")
+  boolean budget;
+
   @Mixin HelpOption help;
 
   @Mixin SpecPaths specPaths;
@@ -119,6 +131,7 @@ final class CheckCommand implements Callable<Integer> {
   }
 
   private ExitCode check() {
+    textOnlyOptions();
     Path projectRoot = projectRoot();
     Inputs inputs = Inputs.collect(specPaths.paths, cwd);
     List<String> problems = new ArrayList<>(inputs.problems());
@@ -142,11 +155,24 @@ final class CheckCommand implements Callable<Integer> {
     }
     CheckRun run = new CheckRun(result, projectRoot, cwd, problems);
     switch (format) {
-      case TEXT -> TextReport.write(run, out);
+      case TEXT -> TextReport.write(run, out, new TextReport.Shown(quiet, strict, budget));
       case JSON -> writeUtf8(JsonReport.render(run));
       case SARIF -> writeUtf8(SarifReport.render(run));
     }
     return ExitCode.of(result, strict, exitZero, !problems.isEmpty());
+  }
+
+  /**
+   * JSON and SARIF always carry every finding and the budget: the text options would do nothing.
+   */
+  private void textOnlyOptions() {
+    if (format != OutputFormat.TEXT && (quiet || budget)) {
+      throw new ParameterException(
+          spec.commandLine(),
+          (quiet ? "--quiet" : "--budget")
+              + " shapes the text report; JSON and SARIF always carry every finding and the"
+              + " budget");
+    }
   }
 
   private YieldDraws draws() {

@@ -1,6 +1,7 @@
 package jonquil.cli;
 
 import java.io.PrintStream;
+import java.util.List;
 import jonquil.Result;
 import jonquil.analysis.RequirementOutcome;
 import jonquil.analysis.RequirementStatus;
@@ -16,10 +17,35 @@ import jonquil.diag.Severity;
 final class TextReport {
   private TextReport() {}
 
+  /**
+   * What the text report shows beyond its default. {@code quiet}: only the findings that fail the
+   * gate (errors, failed and unevaluated requirements, and warnings when {@code strict}), then the
+   * summary, whose counts stay those of the whole check. {@code budget}: each path's power budget
+   * before the summary.
+   */
+  record Shown(boolean quiet, boolean strict, boolean budget) {
+    static final Shown ALL = new Shown(false, false, false);
+
+    boolean shows(Diagnostic d) {
+      return !quiet
+          || d.severity() == Severity.ERROR
+          || (strict && d.severity() == Severity.WARNING);
+    }
+  }
+
   static void write(CheckRun run, PrintStream out) {
+    write(run, out, Shown.ALL);
+  }
+
+  static void write(CheckRun run, PrintStream out, Shown shown) {
     Result result = run.result();
+    boolean printed = false;
     for (Diagnostic d : result.diagnostics()) {
+      if (!shown.shows(d)) {
+        continue;
+      }
       out.println(line(run, d));
+      printed = true;
       for (Related r : d.related()) {
         // Printed as a note on its own line so that the same tools can jump to it.
         out.println(
@@ -36,6 +62,17 @@ final class TextReport {
       // others, those a spec's errors kept from being evaluated.
       if (r.status() == RequirementStatus.NOT_EVALUATED && !isFinding(result, r)) {
         out.println(requirement(run, r));
+        printed = true;
+      }
+    }
+    if (shown.budget()) {
+      List<String> budget = BudgetTable.lines(run);
+      if (!budget.isEmpty() && printed) {
+        out.println();
+      }
+      budget.forEach(out::println);
+      if (!budget.isEmpty()) {
+        out.println();
       }
     }
     out.println(summary(result));

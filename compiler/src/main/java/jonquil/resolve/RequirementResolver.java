@@ -8,6 +8,7 @@ import jonquil.diag.DiagnosticCode;
 import jonquil.safety.HazardClass;
 import jonquil.source.TextRange;
 import jonquil.syntax.Arg;
+import jonquil.syntax.Name;
 import jonquil.syntax.Requirement;
 import jonquil.units.Dimension;
 
@@ -209,17 +210,15 @@ final class RequirementResolver {
       return Optional.empty();
     }
     if (condition instanceof Requirement.Compare c) {
+      Optional<Value.Group> hand = handedness(m, c);
+      if (c.handedness().isPresent() && hand.isEmpty()) {
+        return Optional.empty();
+      }
       Optional<Bound> b = bound(m, c.value());
       return b.map(
           v ->
               new ResolvedRequirement.Criterion(
-                  m,
-                  relation(c.comparator()),
-                  v.value,
-                  v.value,
-                  v.relative,
-                  Optional.empty(),
-                  c.range()));
+                  m, relation(c.comparator()), v.value, v.value, v.relative, hand, c.range()));
     }
     Requirement.Within w = (Requirement.Within) condition;
     Optional<Bound> low = bound(m, w.low());
@@ -250,6 +249,33 @@ final class RequirementResolver {
             low.get().relative,
             Optional.empty(),
             w.range()));
+  }
+
+  /**
+   * The handedness after an ellipticity bound ({@code >= 40 deg right}), carried as the group a
+   * {@code handedness is right} state gives, so both read it the same way.
+   */
+  private Optional<Value.Group> handedness(Measure m, Requirement.Compare c) {
+    if (c.handedness().isEmpty()) {
+      return Optional.empty();
+    }
+    Name hand = c.handedness().get();
+    if (m != Measure.ELLIPTICITY) {
+      sink.report(
+          DiagnosticCode.BAD_ARGUMENT,
+          hand.range(),
+          "only an 'ellipticity' bound takes a handedness; remove '"
+              + hand.text()
+              + "', or bound it with 'handedness is "
+              + hand.text()
+              + "' after a comma");
+      return Optional.empty();
+    }
+    return Optional.of(
+        new Value.Group(
+            java.util.Map.of("handedness", new Value.Word(hand.text(), hand.range())),
+            List.of(),
+            hand.range()));
   }
 
   private Optional<ResolvedRequirement.Criterion> state(Measure m, Requirement.Is is) {
@@ -308,6 +334,9 @@ final class RequirementResolver {
       return Optional.empty();
     }
     String what = m.word();
+    if (toleranceRefused(q, BOUND)) {
+      return Optional.empty();
+    }
     return switch (m.bound()) {
       case POWER, IRRADIANCE, FLUENCE, FIELD, ENERGY, LENGTH ->
           si(q, m.bound(), Bounds.NON_NEGATIVE, what);
@@ -396,6 +425,9 @@ final class RequirementResolver {
           "a band is written like 'wavelength 1060 nm .. 1070 nm'");
       return Optional.empty();
     }
+    if (toleranceRefused(lo, "a band's end") | toleranceRefused(hi, "a band's end")) {
+      return Optional.empty();
+    }
     Optional<Value.Num> low =
         values.quantity(
             lo, List.of(Dimension.LENGTH), KindTables.WAVELENGTH, "1060 nm", "wavelength");
@@ -421,6 +453,9 @@ final class RequirementResolver {
           DiagnosticCode.BAD_ARGUMENT, y.bound().range(), "a yield is a fraction such as '99 %'");
       return Optional.empty();
     }
+    if (toleranceRefused(q, "a yield's bound")) {
+      return Optional.empty();
+    }
     return values
         .ratio(q, Bounds.closed(0, 1), "yield")
         .map(
@@ -433,6 +468,33 @@ final class RequirementResolver {
                     false,
                     Optional.empty(),
                     y.range()));
+  }
+
+  /**
+   * A tolerance belongs to a part, where builds draw it; on a bound it would be accepted and
+   * ignored, so it is refused, and the message says how to ask what was probably meant.
+   */
+  private static final String BOUND = "a requirement's bound";
+
+  private boolean toleranceRefused(Arg.QuantityArg q, String where) {
+    if (q.tolerance().isEmpty()) {
+      return false;
+    }
+    Arg.Tolerance tolerance = q.tolerance().get();
+    sink.report(
+        DiagnosticCode.BAD_ARGUMENT,
+        tolerance.range(),
+        "a tolerance has no meaning on "
+            + where
+            + ", which is exact: remove '± "
+            + tolerance.number().text()
+            + tolerance.unit().map(u -> " " + u.text()).orElse("")
+            + "'"
+            + (where.equals(BOUND)
+                ? "; to ask how often toleranced builds meet a bound, put the ± on the part and"
+                    + " write 'yield >= 95 % for ...'"
+                : ""));
+    return true;
   }
 
   private static ResolvedRequirement.Relation relation(Requirement.Comparator c) {

@@ -344,7 +344,10 @@ record AstBuilder(SourceFile source, OffsetMap offsets, List<TextRange> comments
     if (ctx instanceof CompareConditionContext c && c.cmp() != null) {
       Arg value = value(c.value());
       Requirement.Comparator cmp = comparator(c.cmp());
-      return value == null || cmp == null ? null : new Requirement.Compare(cmp, value, range(c));
+      return value == null || cmp == null
+          ? null
+          : new Requirement.Compare(
+              cmp, value, java.util.Optional.ofNullable(c.hand).map(this::name), range(c));
     }
     if (ctx instanceof RangeConditionContext r) {
       Arg low = value(r.low);

@@ -182,7 +182,8 @@ final class AstShift {
 
   private Requirement.Condition condition(Requirement.Condition c) {
     if (c instanceof Requirement.Compare cmp) {
-      return new Requirement.Compare(cmp.comparator(), arg(cmp.value()), range(cmp.range()));
+      return new Requirement.Compare(
+          cmp.comparator(), arg(cmp.value()), cmp.handedness().map(this::name), range(cmp.range()));
     }
     if (c instanceof Requirement.Within w) {
       return new Requirement.Within(arg(w.low()), arg(w.high()), range(w.range()));

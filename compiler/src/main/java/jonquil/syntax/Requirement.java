@@ -67,8 +67,17 @@ public record Requirement(Optional<Yield> yield, Check check, String text, TextR
     TextRange range();
   }
 
-  /** {@code >= 400 mW}. */
-  public record Compare(Comparator comparator, Arg value, TextRange range) implements Condition {}
+  /**
+   * {@code >= 400 mW}; {@code >= 40 deg right}: a handedness after the bound, which only an
+   * ellipticity bound takes.
+   */
+  public record Compare(
+      Comparator comparator, Arg value, Optional<Name> handedness, TextRange range)
+      implements Condition {
+    public Compare(Comparator comparator, Arg value, TextRange range) {
+      this(comparator, value, Optional.empty(), range);
+    }
+  }
 
   /** {@code in 400 mW .. 600 mW}. */
   public record Within(Arg low, Arg high, TextRange range) implements Condition {}

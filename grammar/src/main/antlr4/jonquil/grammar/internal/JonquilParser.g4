@@ -66,7 +66,7 @@ place         : AT target=reference              # atPlace
               | EVERYWHERE                       # everywherePlace
               | FROM from=reference TO to=reference  # betweenPlace
               ;
-condition     : cmp value                        # compareCondition
+condition     : cmp value hand=(RIGHT | LEFT)?    # compareCondition
               | IN low=value RANGE high=value    # rangeCondition
               | IS state                         # stateCondition
               ;
