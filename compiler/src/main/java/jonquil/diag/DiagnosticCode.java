@@ -101,6 +101,7 @@ public enum DiagnosticCode {
       "J613", Severity.ERROR, "A requirement cannot be evaluated, so it is not met (fail closed)"),
   RATING_EXCEEDED(
       "J616", Severity.ERROR, "A dump or detector takes more than its stated rating or threshold"),
+  UNKNOWN_LINE("J619", Severity.ERROR, "A requirement names a laser line the source does not have"),
 
   // Limits and internals: J9xx
   INTERNAL_ERROR("J901", Severity.ERROR, "The checker failed internally; please report it"),
