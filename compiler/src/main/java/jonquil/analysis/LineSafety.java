@@ -62,7 +62,7 @@ final class LineSafety {
     RequirementEvaluator.Verdict worst = null;
     for (Map.Entry<OcularEffect, List<Double>> range : ranges.entrySet()) {
       RequirementEvaluator.Verdict v =
-          c.measure() == Measure.EXPOSURE
+          c.measure() == Measure.EXPOSURE || c.measure() == Measure.EYEWEAR_OD
               ? summed(r, model, c, range.getKey(), range.getValue(), solved)
               : strictest(r, model, c, range.getKey(), range.getValue(), solved, power);
       if (!v.evaluated()) {
@@ -75,7 +75,10 @@ final class LineSafety {
     return worst;
   }
 
-  /** The exposure of a range: each line's fraction of its own MPE, added. */
+  /**
+   * The exposure of a range: each line's fraction of its own MPE, added; for the eyewear OD, the OD
+   * that divides that sum down to 1.
+   */
   private static RequirementEvaluator.Verdict summed(
       ResolvedRequirement r,
       ResolvedModel model,
@@ -92,9 +95,16 @@ final class LineSafety {
         return RequirementEvaluator.Verdict.notEvaluated("line " + name(wl) + ": " + v.text());
       }
       first = first == null ? v : first;
-      sum += v.value();
-      parts.add(name(wl) + " " + percent(v.value()));
+      boolean od = c.measure() == Measure.EYEWEAR_OD;
+      sum += od ? Math.pow(10, v.value()) : v.value();
+      parts.add(
+          name(wl)
+              + " "
+              + (od
+                  ? "OD " + QuantityFormat.format(v.value(), Dimension.DIMENSIONLESS)
+                  : percent(v.value())));
     }
+    double value = c.measure() == Measure.EYEWEAR_OD ? Math.log10(sum) : sum;
     String how =
         lines.size() == 1
             ? "line " + name(lines.get(0)) + " alone acts on " + effect.description()
@@ -105,7 +115,12 @@ final class LineSafety {
                 + "): "
                 + String.join(" + ", parts);
     RequirementEvaluator.Verdict combined =
-        RequirementEvaluator.compare(c, sum, first.unit(), how + "; " + first.text());
+        RequirementEvaluator.compare(
+            c,
+            value,
+            first.unit(),
+            // The peak OD a line's own note states is that line's alone: not the sum's.
+            how + "; " + first.text().replaceFirst("OD [0-9.]+ at the beam's peak; ", ""));
     return combined.shownIn(first.shownUnit());
   }
 
