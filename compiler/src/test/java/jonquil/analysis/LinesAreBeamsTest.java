@@ -170,6 +170,29 @@ class LinesAreBeamsTest {
   }
 
   @Test
+  void twoLinesEachBelowTheClassOneLimitAreTogetherClassTwo() {
+    // The Class 1 AEL for visible cw light is 0.39 mW and the Class 2 AEL 1 mW (IEC 60825-1:2014,
+    // Tables 3 and 5, from memory). 0.3 mW at 635 nm and 0.3 mW at 650 nm are each Class 1
+    // alone; both act on the retina, so their ratios add (4.3): 0.6 mW is Class 2.
+    String bench =
+        """
+        source src { line 635 nm 0.3 mW; line 650 nm 0.3 mW; beam waist 0.4 mm, m2 1.2 }
+        probe eye
+        train t { src -> 1 m -> eye }
+        """;
+    List<RequirementOutcome> o =
+        outcomes(
+            bench,
+            "hazard class <= 1 at src",
+            "hazard class <= 2 at src",
+            "hazard class <= 1 at src for line 635 nm");
+    assertEquals(RequirementStatus.FAIL, o.get(0).status());
+    assertEquals(RequirementStatus.PASS, o.get(1).status());
+    assertTrue(o.get(1).reason().contains("judged as their total 600 µW"), o.get(1).reason());
+    assertEquals(RequirementStatus.PASS, o.get(2).status());
+  }
+
+  @Test
   void aLineWhoseLimitIsUnknownLeavesTheSumNotEvaluated() {
     // Jonquil has no corneal MPE for 1550 nm: the pair cannot be judged, so it is not met (fail
     // closed), where judging the total at the 532 nm limit alone would have let it pass.
