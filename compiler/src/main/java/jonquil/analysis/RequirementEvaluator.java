@@ -74,27 +74,66 @@ final class RequirementEvaluator {
   private RequirementEvaluator() {}
 
   /**
-   * All criteria of a requirement, worst margin first; over a band, at its worst wavelength. A
-   * yield's bound is judged by {@link YieldMonteCarlo}, which calls this once per build.
+   * All criteria of a requirement, worst margin first. Lines are beams of their own: 'for line 532
+   * nm' judges that line alone; 'over wavelength a .. b' judges each line inside the band alone and
+   * reports the worst, naming the lines (a source without lines is one line at its wavelength; a
+   * band holding no line fails closed); a safety bound on light of several lines adds the lines by
+   * the standard's rule ({@link LineSafety}). {@code solve} gives the solution of one line (by its
+   * vacuum wavelength) or, given nothing, of every line together. A yield's bound is judged by
+   * {@link YieldMonteCarlo}, which calls this once per build.
    */
   static Verdict evaluate(
       ResolvedRequirement r, ResolvedModel model, Function<OptionalDouble, TrainSolution> solve) {
+    if (r.line().isPresent()) {
+      double wl = r.line().getAsDouble();
+      Verdict v = evaluate(r, model, solve.apply(OptionalDouble.of(wl)));
+      return v.evaluated() ? v.withText(noted("line " + LineSafety.name(wl) + " alone", v)) : v;
+    }
+    java.util.List<Double> lines = SourceBeams.lines(model);
     if (r.band().isPresent()) {
-      Verdict worst = null;
       ResolvedRequirement.Band band = r.band().get();
-      for (int i = 0; i <= 4; i++) {
-        double wl = band.low() + (band.high() - band.low()) * i / 4.0;
+      java.util.List<Double> inside =
+          lines.stream().filter(w -> w >= band.low() && w <= band.high()).toList();
+      if (inside.isEmpty()) {
+        return Verdict.notEvaluated(
+            "no laser line lies in the band "
+                + LineSafety.name(band.low())
+                + " .. "
+                + LineSafety.name(band.high())
+                + (lines.isEmpty()
+                    ? ""
+                    : "; the lines are "
+                        + String.join(", ", lines.stream().map(LineSafety::name).toList())));
+      }
+      Verdict worst = null;
+      double worstLine = 0;
+      for (double wl : inside) {
         Verdict v = evaluate(r, model, solve.apply(OptionalDouble.of(wl)));
         if (!v.evaluated()) {
-          return v;
+          return Verdict.notEvaluated("line " + LineSafety.name(wl) + ": " + v.text());
         }
-        if (worst == null || v.margin() < worst.margin()) {
+        if (worst == null || (worst.pass() && !v.pass()) || v.margin() < worst.margin()) {
           worst = v;
+          worstLine = wl;
         }
       }
-      return worst;
+      String which =
+          inside.size() == 1
+              ? "line " + LineSafety.name(worstLine) + ", the one line in the band"
+              : "lines in the band, each alone: "
+                  + String.join(", ", inside.stream().map(LineSafety::name).toList())
+                  + "; worst "
+                  + LineSafety.name(worstLine);
+      return worst.withText(noted(which, worst));
+    }
+    if (LineSafety.applies(r, lines)) {
+      return LineSafety.evaluate(r, model, solve, lines);
     }
     return evaluate(r, model, solve.apply(OptionalDouble.empty()));
+  }
+
+  private static String noted(String lead, Verdict v) {
+    return v.text().isEmpty() ? lead : lead + "; " + v.text();
   }
 
   static Verdict evaluate(ResolvedRequirement r, ResolvedModel model, TrainSolution s) {

@@ -57,7 +57,7 @@ final class SafetyModel {
     }
     var mode = exit.mode().get();
     return Classifier.classify(
-        emission(wavelength(source), exit.power(), exit.pulses()),
+        emission(exit.wavelength(), exit.power(), exit.pulses()),
         2 * mode.radius(),
         2 * mode.divergence());
   }
@@ -68,7 +68,7 @@ final class SafetyModel {
           "the beam size is unknown: give the source a 'beam' line", "IEC 60825-1:2014");
     }
     var mode = exit.mode().get();
-    double wl = wavelength(source);
+    double wl = exit.wavelength();
     return Nohd.of(
         emission(wl, exit.power(), exit.pulses()),
         2 * mode.radius(),

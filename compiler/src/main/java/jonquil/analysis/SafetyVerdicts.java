@@ -21,6 +21,25 @@ final class SafetyVerdicts {
 
   static RequirementEvaluator.Verdict evaluate(
       ResolvedRequirement r, Criterion c, TrainSolution s, ResolvedModel model) {
+    return evaluate(r, c, s, model, 1);
+  }
+
+  /** The light a safety criterion judges: at a source its exit, elsewhere what arrives there. */
+  static Optional<PortValue> lightAt(ResolvedRequirement r, Measure m, TrainSolution s) {
+    if (r.at().isEmpty()) {
+      return Optional.empty();
+    }
+    String name = r.at().get().symbol().name();
+    Optional<PortValue> here = s.incidentAt(name).or(() -> s.port(name));
+    return m == Measure.HAZARD_CLASS || m == Measure.NOHD ? s.port(name).or(() -> here) : here;
+  }
+
+  /**
+   * As above, with the light at the place scaled by {@code powerScale}: one line carrying the power
+   * of every line it adds with ({@link LineSafety}).
+   */
+  static RequirementEvaluator.Verdict evaluate(
+      ResolvedRequirement r, Criterion c, TrainSolution s, ResolvedModel model, double powerScale) {
     if (r.at().isEmpty()) {
       return RequirementEvaluator.Verdict.notEvaluated("no place given");
     }
@@ -37,10 +56,7 @@ final class SafetyVerdicts {
       return RequirementEvaluator.Verdict.notEvaluated(
           "'" + m.word() + "' is a property of a source; name the source");
     }
-    PortValue at =
-        m == Measure.HAZARD_CLASS || m == Measure.NOHD
-            ? s.port(name).orElse(here.get())
-            : here.get();
+    PortValue at = scaled(lightAt(r, m, s).orElseThrow(), powerScale);
     double wavelength = at.wavelength();
     double exposureTime =
         element
@@ -96,6 +112,22 @@ final class SafetyVerdicts {
                   od.caution()));
         }
     }
+  }
+
+  private static PortValue scaled(PortValue p, double scale) {
+    return scale == 1
+        ? p
+        : new PortValue(
+            p.element(),
+            p.port(),
+            p.file(),
+            p.range(),
+            p.light().scaled(scale),
+            p.vertical(),
+            p.mode(),
+            p.pulses(),
+            p.index(),
+            p.wavelength());
   }
 
   private static RequirementEvaluator.Verdict verdict(Criterion c, Outcome<Double> o, String unit) {

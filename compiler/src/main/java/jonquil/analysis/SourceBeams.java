@@ -7,8 +7,11 @@ import java.util.OptionalDouble;
 import jonquil.optics.Coherency;
 import jonquil.optics.Handedness;
 import jonquil.optics.beam.GaussianBeam;
+import jonquil.resolve.ElementKind;
 import jonquil.resolve.Param;
 import jonquil.resolve.ResolvedElement;
+import jonquil.resolve.ResolvedModel;
+import jonquil.resolve.ResolvedTrain;
 import jonquil.resolve.StateForm;
 import jonquil.resolve.Value;
 
@@ -20,8 +23,11 @@ import jonquil.resolve.Value;
 final class SourceBeams {
   private SourceBeams() {}
 
-  static List<TracedBeam> of(
-      ResolvedElement source, OptionalDouble wavelengthOverride, double ambientIndex) {
+  /**
+   * The beams of a source: every line, or with {@code onlyLine} the one line at that vacuum
+   * wavelength (none when the source lacks it, so a per-line solution carries that line alone).
+   */
+  static List<TracedBeam> of(ResolvedElement source, OptionalDouble onlyLine, double ambientIndex) {
     List<double[]> lines = new ArrayList<>();
     if (!source.all(Param.LINE).isEmpty()) {
       for (Value.Group g : source.all(Param.LINE)) {
@@ -35,7 +41,10 @@ final class SourceBeams {
     }
     List<TracedBeam> beams = new ArrayList<>();
     for (int i = 0; i < lines.size(); i++) {
-      double wavelength = wavelengthOverride.orElse(lines.get(i)[0]);
+      double wavelength = lines.get(i)[0];
+      if (onlyLine.isPresent() && !ResolvedElement.sameLine(wavelength, onlyLine.getAsDouble())) {
+        continue;
+      }
       Coherency light = state(source.param(Param.POLARIZATION), lines.get(i)[1]);
       beams.add(
           new TracedBeam(
@@ -48,6 +57,27 @@ final class SourceBeams {
               mode(source, wavelength, ambientIndex)));
     }
     return beams;
+  }
+
+  /**
+   * The distinct vacuum wavelengths of the lines of every source that starts a path, shortest
+   * first: what a band or a per-line safety sum ranges over.
+   */
+  static List<Double> lines(ResolvedModel model) {
+    java.util.TreeSet<Double> out = new java.util.TreeSet<>();
+    for (ResolvedTrain train : model.trains()) {
+      for (ResolvedTrain.BeamPath path : train.paths()) {
+        if (path.branchFrom().isEmpty()
+            && !path.steps().isEmpty()
+            && path.steps().get(0) instanceof ResolvedTrain.Element start) {
+          model
+              .element(start.symbol())
+              .filter(e -> e.kind() == ElementKind.SOURCE)
+              .ifPresent(e -> out.addAll(e.lineWavelengths()));
+        }
+      }
+    }
+    return List.copyOf(out);
   }
 
   /**

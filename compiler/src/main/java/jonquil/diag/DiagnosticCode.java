@@ -110,6 +110,7 @@ public enum DiagnosticCode {
       "J617",
       Severity.ERROR,
       "The power budget does not close: the model created or lost light (a checker fault)"),
+  UNKNOWN_LINE("J619", Severity.ERROR, "A requirement names a laser line the source does not have"),
 
   // Limits and internals: J9xx
   INTERNAL_ERROR("J901", Severity.ERROR, "The checker failed internally; please report it"),

@@ -105,6 +105,9 @@ final class SemanticTokens {
       } else if (p instanceof Requirement.Between b) {
         ref(b.from(), true);
         ref(b.to(), true);
+      } else if (p instanceof Requirement.ForLine l) {
+        add(l.word().range(), PROPERTY, false);
+        arg(l.wavelength());
       }
     }
     c.condition().ifPresent(this::condition);

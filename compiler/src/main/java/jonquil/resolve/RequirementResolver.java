@@ -23,8 +23,15 @@ final class RequirementResolver {
   private final Set<Symbol> placed;
 
   private final jonquil.syntax.SpecFile file;
+  private final java.util.Map<Symbol, ResolvedElement> elements;
 
-  RequirementResolver(Sink sink, Scope scope, Set<Symbol> placed, jonquil.syntax.SpecFile file) {
+  RequirementResolver(
+      Sink sink,
+      Scope scope,
+      Set<Symbol> placed,
+      jonquil.syntax.SpecFile file,
+      java.util.Map<Symbol, ResolvedElement> elements) {
+    this.elements = elements;
     this.refs = new ElementRefs(sink, scope);
     this.sink = sink;
     this.scope = scope;
@@ -41,16 +48,20 @@ final class RequirementResolver {
     Optional<ResolvedRequirement.Target> from = Optional.empty();
     Optional<ResolvedRequirement.Target> to = Optional.empty();
     boolean everywhere = false;
+    List<Requirement.ForLine> lines = new ArrayList<>();
     for (Requirement.Place place : check.places()) {
       if (place instanceof Requirement.At a) {
         at = target(a.target());
       } else if (place instanceof Requirement.Between b) {
         from = target(b.from());
         to = target(b.to());
+      } else if (place instanceof Requirement.ForLine l) {
+        lines.add(l);
       } else {
         everywhere = true;
       }
     }
+    java.util.OptionalDouble line = line(lines, at, check);
     boolean damaged = file.damaged(req.range());
     if (!damaged) {
       measure.ifPresent(m -> checkPlaces(m, check));
@@ -87,7 +98,117 @@ final class RequirementResolver {
     java.util.OptionalInt builds = YieldBuilds.resolve(req.yield(), sink);
     boolean valid = errorCount() == errorsBefore;
     return new ResolvedRequirement(
-        sink.file, req, measure, at, from, to, everywhere, criteria, band, yield, valid, builds);
+        sink.file,
+        req,
+        measure,
+        at,
+        from,
+        to,
+        everywhere,
+        criteria,
+        band,
+        yield,
+        valid,
+        builds,
+        line);
+  }
+
+  /**
+   * 'for line 532 nm': the vacuum wavelength of a line of the source named by 'at', or else of a
+   * placed source; a line no such source has is J619 with the lines there are.
+   */
+  private java.util.OptionalDouble line(
+      List<Requirement.ForLine> written,
+      Optional<ResolvedRequirement.Target> at,
+      Requirement.Check check) {
+    if (written.isEmpty()) {
+      return java.util.OptionalDouble.empty();
+    }
+    for (Requirement.ForLine extra : written.subList(1, written.size())) {
+      sink.report(
+          DiagnosticCode.UNEXPECTED_PLACE,
+          extra.range(),
+          "a requirement judges one line or all of them; split it into one line per laser line");
+    }
+    Requirement.ForLine l = written.get(0);
+    if (!l.word().text().equals("line")) {
+      sink.report(
+          DiagnosticCode.BAD_ARGUMENT,
+          l.word().range(),
+          "after 'for' a requirement names a laser line, like 'for line 532 nm'; '"
+              + l.word().text()
+              + "' is not understood");
+      return java.util.OptionalDouble.empty();
+    }
+    if (check.band().isPresent()) {
+      sink.report(
+          DiagnosticCode.CONFLICTING_PARAMETERS,
+          l.range(),
+          "a requirement names one line or a band of them ('over wavelength'), not both");
+      return java.util.OptionalDouble.empty();
+    }
+    if (!(l.wavelength() instanceof Arg.QuantityArg q)) {
+      sink.report(
+          DiagnosticCode.BAD_ARGUMENT, l.wavelength().range(), "a line is named by its wavelength");
+      return java.util.OptionalDouble.empty();
+    }
+    Optional<Value.Num> wl =
+        values.quantity(
+            q, List.of(Dimension.LENGTH), KindTables.WAVELENGTH, "532 nm", "wavelength");
+    if (wl.isEmpty()) {
+      return java.util.OptionalDouble.empty();
+    }
+    List<ResolvedElement> sources =
+        elements.values().stream()
+            .filter(e -> e.kind() == ElementKind.SOURCE)
+            .filter(
+                e ->
+                    at.isPresent() && at.get().symbol().category() == Category.SOURCE
+                        ? e.symbol().equals(at.get().symbol())
+                        : placed.contains(e.symbol()))
+            .toList();
+    List<Double> known = new ArrayList<>();
+    for (ResolvedElement source : sources) {
+      for (double w : source.lineWavelengths()) {
+        if (!known.contains(w)) {
+          known.add(w);
+        }
+      }
+    }
+    double wanted = wl.get().si();
+    for (double w : known) {
+      if (ResolvedElement.sameLine(w, wanted)) {
+        return java.util.OptionalDouble.of(w);
+      }
+    }
+    known.sort(Double::compare);
+    String listed =
+        String.join(
+            ", ",
+            known.stream()
+                .map(w -> jonquil.units.QuantityFormat.format(w, Dimension.LENGTH))
+                .toList());
+    Optional<Double> nearest =
+        known.stream().min(java.util.Comparator.comparingDouble(w -> Math.abs(w - wanted)));
+    sink.report(
+        DiagnosticCode.UNKNOWN_LINE,
+        l.range(),
+        (sources.size() == 1
+                ? "'" + sources.get(0).symbol().name() + "' has no line at "
+                : "no source in the trains has a line at ")
+            + jonquil.units.QuantityFormat.format(wanted, Dimension.LENGTH)
+            + (known.isEmpty()
+                ? "; no source is placed in a train"
+                : (sources.size() == 1 ? "; its lines are " : "; their lines are ")
+                    + listed
+                    + nearest
+                        .map(
+                            n ->
+                                "; did you mean 'for line "
+                                    + jonquil.units.QuantityFormat.format(n, Dimension.LENGTH)
+                                    + "'?")
+                        .orElse("")));
+    return java.util.OptionalDouble.empty();
   }
 
   private int errorCount() {
@@ -158,12 +279,13 @@ final class RequirementResolver {
   private void unexpected(Requirement.Check check, Measure m) {
     for (Requirement.Place p : check.places()) {
       boolean bad =
-          switch (m.where()) {
-            case AT, OPTIONAL_AT -> !(p instanceof Requirement.At);
-            case AT_OR_EVERYWHERE -> p instanceof Requirement.Between;
-            case BETWEEN -> !(p instanceof Requirement.Between);
-            case NONE -> !(p instanceof Requirement.Everywhere);
-          };
+          !(p instanceof Requirement.ForLine)
+              && switch (m.where()) {
+                case AT, OPTIONAL_AT -> !(p instanceof Requirement.At);
+                case AT_OR_EVERYWHERE -> p instanceof Requirement.Between;
+                case BETWEEN -> !(p instanceof Requirement.Between);
+                case NONE -> !(p instanceof Requirement.Everywhere);
+              };
       if (bad) {
         sink.report(
             DiagnosticCode.UNEXPECTED_PLACE,

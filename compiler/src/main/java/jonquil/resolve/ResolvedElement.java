@@ -48,4 +48,24 @@ public record ResolvedElement(
     p.checkSlot(slot);
     return param(p).flatMap(g -> g.slot(slot)).map(v -> ((Value.Ref) v).symbol());
   }
+
+  /**
+   * The vacuum wavelengths a source emits, one per laser line: its 'line' entries in order, or its
+   * one 'wavelength' (a source without lines is a source of one line).
+   */
+  public List<Double> lineWavelengths() {
+    List<Double> out = new java.util.ArrayList<>();
+    for (Value.Group g : all(Param.LINE)) {
+      g.number("wavelength").ifPresent(out::add);
+    }
+    if (out.isEmpty()) {
+      number(Param.WAVELENGTH, "wavelength").ifPresent(out::add);
+    }
+    return List.copyOf(out);
+  }
+
+  /** Two written wavelengths name the same line when they agree to rounding (1e-9 relative). */
+  public static boolean sameLine(double a, double b) {
+    return Math.abs(a - b) <= 1e-9 * Math.max(Math.abs(a), Math.abs(b));
+  }
 }

@@ -10,7 +10,8 @@ import jonquil.syntax.Requirement;
 /**
  * A requirement with its measure, places and bounds checked and converted to SI, ready for an
  * analysis to evaluate. {@code valid} is false when the line had errors; {@code yieldBuilds} is the
- * number of builds the line names ('over 2000 builds').
+ * number of builds the line names ('over 2000 builds'); {@code line} the vacuum wavelength of the
+ * one laser line the requirement judges ('for line 532 nm'), empty for all lines together.
  */
 public record ResolvedRequirement(
     Path file,
@@ -24,7 +25,8 @@ public record ResolvedRequirement(
     Optional<Band> band,
     Optional<Criterion> yield,
     boolean valid,
-    OptionalInt yieldBuilds) {
+    OptionalInt yieldBuilds,
+    java.util.OptionalDouble line) {
 
   public ResolvedRequirement {
     criteria = List.copyOf(criteria);
@@ -55,7 +57,8 @@ public record ResolvedRequirement(
         band,
         yield,
         valid,
-        OptionalInt.empty());
+        OptionalInt.empty(),
+        java.util.OptionalDouble.empty());
   }
 
   /** A named place: an element, optionally one of its output ports. */

@@ -122,7 +122,8 @@ public final class Resolver {
       TrainResolver trainResolver = new TrainResolver(sink, scopes.get(root), rootFile);
       trains = trainResolver.resolve(rootFile.trains());
       RequirementResolver reqs =
-          new RequirementResolver(sink, scopes.get(root), trainResolver.placedElements(), rootFile);
+          new RequirementResolver(
+              sink, scopes.get(root), trainResolver.placedElements(), rootFile, elements);
       for (RequireDecl block : rootFile.requires()) {
         block.requirements().forEach(r -> requirements.add(reqs.resolve(r)));
       }

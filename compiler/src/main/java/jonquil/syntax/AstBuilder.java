@@ -337,6 +337,12 @@ record AstBuilder(SourceFile source, OffsetMap offsets, List<TextRange> comments
       Arg.RefArg to = reference(b.to);
       return from == null || to == null ? null : new Requirement.Between(from, to, range(b));
     }
+    if (ctx instanceof LinePlaceContext l && present(l.lineWord) && l.line != null) {
+      Arg wavelength = value(l.line);
+      return wavelength == null
+          ? null
+          : new Requirement.ForLine(name(l.lineWord), wavelength, range(l));
+    }
     return null;
   }
 

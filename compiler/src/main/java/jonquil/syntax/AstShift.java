@@ -177,6 +177,9 @@ final class AstShift {
     if (p instanceof Requirement.Between b) {
       return new Requirement.Between(ref(b.from()), ref(b.to()), range(b.range()));
     }
+    if (p instanceof Requirement.ForLine l) {
+      return new Requirement.ForLine(name(l.word()), arg(l.wavelength()), range(l.range()));
+    }
     throw new IllegalArgumentException("unknown place: " + p.getClass().getSimpleName());
   }
 

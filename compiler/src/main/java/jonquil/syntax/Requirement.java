@@ -62,6 +62,12 @@ public record Requirement(Optional<Yield> yield, Check check, String text, TextR
   /** {@code from a to b}. */
   public record Between(Arg.RefArg from, Arg.RefArg to, TextRange range) implements Place {}
 
+  /**
+   * {@code for line 532 nm}: which line of a source the requirement judges. Written among the
+   * places because it narrows where the light is looked at; {@code word} is checked later.
+   */
+  public record ForLine(Name word, Arg wavelength, TextRange range) implements Place {}
+
   /** The bound. */
   public sealed interface Condition {
     TextRange range();

@@ -55,7 +55,7 @@ step          : distance
               ;
 distance      : quantity (IN medium=reference)? ;
 
-// 'require { power at trap in 400 mW .. 600 mW }'
+// 'require { power at trap in 400 mW .. 600 mW }'; 'for line 532 nm' names one line of a source.
 requireDecl   : REQUIRE LBRACE sep* (requirement (sep+ requirement)*)? sep* RBRACE ;
 // 'yield >= 99 % over 2000 builds for power at trap >= 400 mW'; the word is checked later.
 requirement   : (YIELD comparator=cmp bound=value (OVER builds=number buildsWord=IDENT)? FOR)? check ;
@@ -65,6 +65,7 @@ measure       : IDENT+ ;
 place         : AT target=reference              # atPlace
               | EVERYWHERE                       # everywherePlace
               | FROM from=reference TO to=reference  # betweenPlace
+              | FOR lineWord=IDENT line=value      # linePlace
               ;
 condition     : cmp value hand=(RIGHT | LEFT)?    # compareCondition
               | IN low=value RANGE high=value    # rangeCondition
