@@ -57,6 +57,10 @@ public enum DiagnosticCode {
       "J409", Severity.WARNING, "A material used outside the wavelength range of its data"),
   PARAMETER_NOT_MODELLED(
       "J410", Severity.ERROR, "A parameter whose effect Jonquil does not model, refused"),
+  AMBIENT_OUT_OF_RANGE(
+      "J411",
+      Severity.ERROR,
+      "An ambient air condition outside the validity of Ciddor's equations"),
 
   // Beam trains: J5xx
   PATH_START_NOT_SOURCE(
