@@ -6,12 +6,14 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import jonquil.diag.DiagnosticCode;
 import jonquil.optics.material.CatalogMaterial;
+import jonquil.optics.material.CiddorAir;
 import jonquil.optics.material.MaterialCatalog;
 import jonquil.optics.material.PhysicalIndex;
 import jonquil.optics.material.TabulatedIndex;
 import jonquil.optics.material.ThermoOptic;
 import jonquil.optics.material.Uniaxial;
 import jonquil.optics.material.WavelengthRange;
+import jonquil.resolve.Ambient;
 import jonquil.resolve.ElementKind;
 import jonquil.resolve.Param;
 import jonquil.resolve.ResolvedElement;
@@ -44,12 +46,27 @@ final class MaterialModel {
     return outOfRange;
   }
 
-  /** The complex index n + iκ of a medium; the ambient medium is standard air. */
+  /** The complex index n + iκ of a medium; the ambient is the spec's (default: dry air). */
   Complex index(Medium medium, double wavelength) {
-    return medium
-        .material()
-        .map(m -> index(m, wavelength))
-        .orElseGet(() -> catalogIndex("air", null, wavelength));
+    return medium.material().map(m -> index(m, wavelength)).orElseGet(() -> ambient(wavelength));
+  }
+
+  /**
+   * The ambient's index at a vacuum wavelength: Ciddor's air of the stated conditions, extrapolated
+   * with the same equations outside 230-1690 nm as the catalog's relative indices are.
+   */
+  private Complex ambient(double wavelength) {
+    Ambient a = model.ambient();
+    return switch (a.fill()) {
+      case VACUUM -> Complex.ONE;
+      case AIR ->
+          new CiddorAir(
+                  a.temperatureKelvin(),
+                  a.pressurePascal(),
+                  a.relativeHumidity(),
+                  a.co2Fraction() * 1e6)
+              .index(wavelength);
+    };
   }
 
   /**

@@ -96,7 +96,8 @@ final class Tolerances {
         trains,
         model.requirements(),
         model.references(),
-        model.diagnostics());
+        model.diagnostics(),
+        model.ambient());
   }
 
   private static Value.Group draw(Value.Group g, SplittableRandom random) {

@@ -57,6 +57,10 @@ public enum DiagnosticCode {
       "J409", Severity.WARNING, "A material used outside the wavelength range of its data"),
   PARAMETER_NOT_MODELLED(
       "J410", Severity.ERROR, "A parameter whose effect Jonquil does not model, refused"),
+  AMBIENT_OUT_OF_RANGE(
+      "J411",
+      Severity.ERROR,
+      "An ambient air condition outside the validity of Ciddor's equations"),
   // Numbered with the analysis codes it guards, but found from the parameters alone.
   ENERGY_NOT_CONSERVED_BY_PARAMETERS(
       "J618",

@@ -83,7 +83,8 @@ final class Hover {
           model.element(s).ifPresent(e -> lines(md, e));
         }
         LightText.append(md, model, OwningModels.solution(r, model), s.name(), s.kind().get());
-        OpticsText.append(md, OwningModels.solution(r, model), s.name(), s.kind().get());
+        OpticsText.append(
+            md, model.ambient(), OwningModels.solution(r, model), s.name(), s.kind().get());
         if (s.kind().get() == ElementKind.SOURCE) {
           SafetyText.append(md, model, OwningModels.solution(r, model), s.name());
         }

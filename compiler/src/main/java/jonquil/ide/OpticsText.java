@@ -6,6 +6,7 @@ import jonquil.analysis.PortJones;
 import jonquil.analysis.SurfaceAtAngle;
 import jonquil.analysis.TrainSolution;
 import jonquil.optics.Jones;
+import jonquil.resolve.Ambient;
 import jonquil.resolve.ElementKind;
 import jonquil.units.Dimension;
 import org.apache.commons.math3.complex.Complex;
@@ -17,12 +18,16 @@ final class OpticsText {
   private OpticsText() {}
 
   static void append(
-      StringBuilder md, Optional<TrainSolution> solution, String name, ElementKind kind) {
+      StringBuilder md,
+      Ambient ambient,
+      Optional<TrainSolution> solution,
+      String name,
+      ElementKind kind) {
     if (solution.isEmpty() || solution.get().incidentAt(name).isEmpty()) {
       return;
     }
     TrainSolution s = solution.get();
-    s.surfaceOf(name).ifPresent(f -> surface(md, f));
+    s.surfaceOf(name).ifPresent(f -> surface(md, f, ambient));
     if (kind == ElementKind.DEPOLARIZER) {
       MarkdownText.para(md)
           .append(
@@ -53,7 +58,7 @@ final class OpticsText {
     }
   }
 
-  private static void surface(StringBuilder md, SurfaceAtAngle f) {
+  private static void surface(StringBuilder md, SurfaceAtAngle f, Ambient ambient) {
     MarkdownText.para(md)
         .append("**Surface** at ")
         .append(MarkdownText.q(f.wavelength(), Dimension.LENGTH))
@@ -81,7 +86,11 @@ final class OpticsText {
             f.critical().isPresent()
                 ? ", critical angle " + MarkdownText.deg(f.critical().getAsDouble())
                 : ", no critical angle (the far side is denser)")
-        .append("; both from the bare indices\n");
+        .append("; both from the bare indices\n\n")
+        .append("The bench's ambient (the air side of every surface, and between elements) is ")
+        .append(ambient.describe())
+        .append(ambient.declared().isPresent() ? "" : ", the default")
+        .append("\n");
   }
 
   private static String percent(double fraction) {

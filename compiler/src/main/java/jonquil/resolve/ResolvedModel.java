@@ -9,7 +9,7 @@ import jonquil.diag.Diagnostic;
 /**
  * The spec rooted at one file, with names, units and parameters checked: its elements, trains and
  * requirements, plus a side table of every name reference (for navigation). The syntax trees are
- * untouched; everything learned lives here.
+ * untouched; everything learned lives here. The ambient is the medium between elements.
  */
 public record ResolvedModel(
     Path root,
@@ -18,7 +18,8 @@ public record ResolvedModel(
     List<ResolvedTrain> trains,
     List<ResolvedRequirement> requirements,
     List<ResolvedRef> references,
-    List<Diagnostic> diagnostics) {
+    List<Diagnostic> diagnostics,
+    Ambient ambient) {
 
   public ResolvedModel {
     scopes = jonquil.source.InOrder.copyOf(scopes);
@@ -27,6 +28,7 @@ public record ResolvedModel(
     requirements = List.copyOf(requirements);
     references = List.copyOf(references);
     diagnostics = List.copyOf(diagnostics);
+    java.util.Objects.requireNonNull(ambient, "ambient");
   }
 
   /** The checked element behind a symbol (empty for catalog entries and broken declarations). */

@@ -102,6 +102,8 @@ public final class Resolver {
                               + from.getFileName()
                               + "', so it may only declare parts; move the train to the main spec");
                     }
+                    AmbientResolver.refuseInLibrary(
+                        lib.declarations(), sink, from.getFileName().toString());
                     for (RequireDecl r : lib.requires()) {
                       sink.report(
                           DiagnosticCode.USED_FILE_HAS_TRAIN,
@@ -117,8 +119,10 @@ public final class Resolver {
     List<ResolvedTrain> trains = List.of();
     List<ResolvedRequirement> requirements = new ArrayList<>();
     SpecFile rootFile = files.get(root);
+    Ambient ambient = Ambient.DEFAULT;
     if (rootFile != null) {
       Sink sink = sinks.get(root);
+      ambient = AmbientResolver.resolve(rootFile.declarations(), sink, scopes.get(root));
       TrainResolver trainResolver = new TrainResolver(sink, scopes.get(root), rootFile);
       trains = trainResolver.resolve(rootFile.trains());
       RequirementResolver reqs =
@@ -138,7 +142,8 @@ public final class Resolver {
       diagnostics.addAll(s.diagnostics);
       refs.addAll(s.refs);
     }
-    return new ResolvedModel(root, scopes, elements, trains, requirements, refs, diagnostics);
+    return new ResolvedModel(
+        root, scopes, elements, trains, requirements, refs, diagnostics, ambient);
   }
 
   /**
@@ -167,6 +172,9 @@ public final class Resolver {
   private static Map<String, Symbol> declare(SpecFile file, Sink sink) {
     Map<String, Symbol> symbols = new LinkedHashMap<>();
     for (Declaration decl : file.declarations()) {
+      if (AmbientResolver.isAmbient(decl)) {
+        continue; // a statement about the bench, not a named part
+      }
       Optional<ElementKind> kind = ElementKind.byWord(decl.kind().text());
       if (kind.isEmpty()) {
         Optional<String> close = Suggest.closest(decl.kind().text(), ElementKind.words());

@@ -34,6 +34,9 @@ public record Dimension(int length, int mass, int time, int current, int tempera
   public static final Dimension ELECTRIC_FIELD = VOLTAGE.divide(LENGTH);
   public static final Dimension RESPONSIVITY = CURRENT.divide(POWER);
 
+  /** Force per area: the ambient air's pressure. */
+  public static final Dimension PRESSURE = ENERGY.divide(LENGTH.pow(3));
+
   // Insertion order is irrelevant: dimensions are unique keys, so lookups never compete.
   private static final Map<Dimension, String> NAMES =
       Map.ofEntries(
@@ -55,7 +58,8 @@ public record Dimension(int length, int mass, int time, int current, int tempera
           Map.entry(LINEAR_POWER_DENSITY, "power per length"),
           Map.entry(VOLTAGE, "voltage"),
           Map.entry(ELECTRIC_FIELD, "electric field strength"),
-          Map.entry(RESPONSIVITY, "responsivity (current per power)"));
+          Map.entry(RESPONSIVITY, "responsivity (current per power)"),
+          Map.entry(PRESSURE, "pressure"));
 
   /** Base symbols in the order SI texts write coherent units (kg·m²·s⁻³·A⁻¹). */
   static final String[] BASE_SYMBOLS = {"kg", "m", "s", "A", "K", "rad"};

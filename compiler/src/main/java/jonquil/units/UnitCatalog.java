@@ -40,6 +40,7 @@ final class UnitCatalog {
     prefixable("J", 1, Dimension.ENERGY);
     prefixable("V", 1, Dimension.VOLTAGE);
     prefixable("Hz", 1, Dimension.FREQUENCY);
+    prefixable("Pa", 1, Dimension.PRESSURE);
     prefixable("rad", 1, Dimension.ANGLE);
     // Exact since the 2019 redefinition fixed the elementary charge (SI Brochure 9th ed., Table 8).
     prefixable("eV", 1.602176634e-19, Dimension.ENERGY);

@@ -14,9 +14,11 @@ import org.apache.commons.math3.complex.Complex;
  * #absoluteIndex(double)}, which converts: with {@code n_air} the index of dry air at 101 325 Pa
  * and the entry's own temperature (Ciddor 1996, see {@link CiddorAir#dryAt}), the formula is
  * evaluated at the air wavelength {@code λ_vac / n_air} and the result is multiplied by {@code
- * n_air}. {@link IndexBasis#ABSOLUTE} entries are returned unchanged. Outside Ciddor's 230–1690 nm
- * the air index is extrapolated with the same equations; air dispersion is weak there, and the
- * error is far below that of the crystal data.
+ * n_air}. That is the air the paper measured in, never the bench's ambient (a spec's {@code
+ * ambient} line changes what light crosses between elements, not a glass's published index). {@link
+ * IndexBasis#ABSOLUTE} entries are returned unchanged. Outside Ciddor's 230–1690 nm the air index
+ * is extrapolated with the same equations; air dispersion is weak there, and the error is far below
+ * that of the crystal data.
  *
  * <p>For birefringent crystals {@link #dispersion()} is the ordinary index and {@link #uniaxial()}
  * holds both.

@@ -28,6 +28,19 @@ public record CiddorAir(
   /** ISO standard atmosphere pressure, the reference of every "standard air". */
   public static final double STANDARD_PRESSURE = 101_325;
 
+  /** Ciddor's stated validity (abstract of the paper): −40 °C to 100 °C. */
+  public static final double MIN_CELSIUS = -40;
+
+  public static final double MAX_CELSIUS = 100;
+
+  /** Ciddor's stated validity: 80 kPa to 120 kPa. */
+  public static final double MIN_PRESSURE = 80_000;
+
+  public static final double MAX_PRESSURE = 120_000;
+
+  /** Ciddor's stated validity: 0 to 2000 ppm CO₂. */
+  public static final double MAX_CO2_PPM = 2000;
+
   private static final double R = 8.314510; // J/(mol K), the value the paper uses
   private static final double K0 = 238.0185;
   private static final double K1 = 5_792_105;
@@ -41,11 +54,11 @@ public record CiddorAir(
 
   public CiddorAir {
     double celsius = temperatureKelvin - 273.15;
-    if (!(celsius >= -40 && celsius <= 100)) {
+    if (!(celsius >= MIN_CELSIUS && celsius <= MAX_CELSIUS)) {
       throw new IllegalArgumentException(
           "Ciddor's equations hold from -40 °C to 100 °C; got " + temperatureKelvin + " K");
     }
-    if (!(pressurePascal >= 80_000 && pressurePascal <= 120_000)) {
+    if (!(pressurePascal >= MIN_PRESSURE && pressurePascal <= MAX_PRESSURE)) {
       throw new IllegalArgumentException(
           "Ciddor's equations hold from 80 kPa to 120 kPa; got " + pressurePascal + " Pa");
     }
@@ -53,7 +66,7 @@ public record CiddorAir(
       throw new IllegalArgumentException(
           "relative humidity is a fraction from 0 to 1; got " + relativeHumidity);
     }
-    if (!(co2Ppm >= 0 && co2Ppm <= 2000)) {
+    if (!(co2Ppm >= 0 && co2Ppm <= MAX_CO2_PPM)) {
       throw new IllegalArgumentException("CO2 content must be 0 to 2000 ppm; got " + co2Ppm);
     }
   }

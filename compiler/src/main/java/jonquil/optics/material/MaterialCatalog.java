@@ -31,7 +31,8 @@ public final class MaterialCatalog {
             ConstantIndex.VACUUM,
             new Reference(
                 "Definition: the refractive index of vacuum is exactly 1 (the SI fixes c; "
-                    + "BIPM, The International System of Units, 9th ed., 2019)"),
+                    + "BIPM, The International System of Units, 9th ed., 2019, Table 1);"
+                    + " absolute"),
             IndexBasis.ABSOLUTE,
             ROOM,
             Optional.of(WavelengthRange.ALL)));
@@ -45,15 +46,18 @@ public final class MaterialCatalog {
             new Reference(
                 "P. E. Ciddor, \"Refractive index of air: new equations for the visible and near"
                     + " infrared\", Applied Optics 35(9), 1566-1573 (1996),"
-                    + " doi:10.1364/AO.35.001566; dry air, 101 325 Pa, 450 ppm CO2"),
+                    + " doi:10.1364/AO.35.001566; eqs. (1)-(2) standard-air dispersion and CO2"
+                    + " term, with the appendix's density steps (equation numbers from memory); dry"
+                    + " air, 20 °C, 101 325 Pa, 450 ppm CO2; absolute, vacuum wavelengths"),
             IndexBasis.ABSOLUTE,
             293.15,
             air.validRange()));
 
     // Daimon & Masumura 2007, coefficients of their fit for 20.0 °C, n² − 1 = Σ B λ²/(λ² − C), C in
-    // µm².
-    // Basis relative to air: from memory (the paper's prism measurements; not confirmed whether it
-    // converted).
+    // µm². Absolute: the paper converts its prism-in-air measurements to indices relative to
+    // vacuum (from memory; the public transcription of this fit says "refractive index is absolute
+    // (relative to vacuum)"). Until this basis was checked the entry was marked relative to air,
+    // which multiplied it by n_air once more (+3.6e-4 at 633 nm).
     Sellmeier water =
         Sellmeier.fromMicrometres(
             0,
@@ -68,8 +72,8 @@ public final class MaterialCatalog {
                 "M. Daimon and A. Masumura, \"Measurement of the refractive index of distilled"
                     + " water from the near-infrared region to the ultraviolet region\", Applied"
                     + " Optics 46(18), 3811-3820 (2007), doi:10.1364/AO.46.003811; four-term"
-                    + " Sellmeier fit for 20.0 °C"),
-            IndexBasis.RELATIVE_TO_AIR,
+                    + " Sellmeier fit for 20.0 °C, Table 3 (table number from memory); absolute"),
+            IndexBasis.ABSOLUTE,
             293.15,
             water.validRange()));
 
@@ -86,7 +90,8 @@ public final class MaterialCatalog {
             new Reference(
                 "I. H. Malitson, \"Interspecimen comparison of the refractive index of fused"
                     + " silica\", Journal of the Optical Society of America 55(10), 1205-1208"
-                    + " (1965), doi:10.1364/JOSA.55.001205"),
+                    + " (1965), doi:10.1364/JOSA.55.001205; dispersion equation of the abstract, p."
+                    + " 1205; 20 °C; relative to air (prism measured in air)"),
             IndexBasis.RELATIVE_TO_AIR,
             293.15,
             silica.validRange()));
@@ -104,7 +109,8 @@ public final class MaterialCatalog {
             new Reference(
                 "I. H. Malitson, \"A redetermination of some optical properties of calcium"
                     + " fluoride\", Applied Optics 2(11), 1103-1107 (1963),"
-                    + " doi:10.1364/AO.2.001103; 24 °C"),
+                    + " doi:10.1364/AO.2.001103; dispersion equation of the abstract, p. 1103 (page"
+                    + " from memory); 24 °C; relative to air"),
             IndexBasis.RELATIVE_TO_AIR,
             297.15,
             caf2.validRange()));
@@ -123,7 +129,8 @@ public final class MaterialCatalog {
             mgf2Range),
         new Reference(
             "M. J. Dodge, \"Refractive properties of magnesium fluoride\", Applied Optics 23(12), "
-                + "1980-1985 (1984), doi:10.1364/AO.23.001980; 19 °C"),
+                + "1980-1985 (1984), doi:10.1364/AO.23.001980; Sellmeier coefficients of Table 2"
+                + " (table number from memory); 19 °C; relative to air"),
         292.15,
         mgf2Range);
 
@@ -146,7 +153,8 @@ public final class MaterialCatalog {
                 + " sapphire\", Journal of the Optical Society of America 62, 1405 (1972)"
                 + " (abstract); Sellmeier coefficients as given in M. J. Dodge, \"Refractive"
                 + " index\", in Handbook of Laser Science and Technology, Vol. IV, Optical"
-                + " Materials, Part 2, CRC Press, Boca Raton (1986), p. 30; 20 °C"),
+                + " Materials, Part 2, CRC Press, Boca Raton (1986), p. 30; 20 °C; relative to"
+                + " air"),
         293.15,
         sapphireRange);
 
@@ -158,7 +166,8 @@ public final class MaterialCatalog {
         new Reference(
             "G. Ghosh, \"Dispersion-equation coefficients for the refractive index and"
                 + " birefringence of calcite and quartz crystals\", Optics Communications 163(1-3),"
-                + " 95-102 (1999), doi:10.1016/S0030-4018(99)00091-7; room temperature");
+                + " 95-102 (1999), doi:10.1016/S0030-4018(99)00091-7; eq. (1) with the coefficients"
+                + " of Table 1 (numbers from memory); room temperature; relative to air");
     uniaxial(
         "quartz",
         Sellmeier.fromMicrometres(
@@ -195,8 +204,9 @@ public final class MaterialCatalog {
     Reference johnsonChristy =
         new Reference(
             "P. B. Johnson and R. W. Christy, \"Optical constants of the noble metals\", Physical"
-                + " Review B 6(12), 4370-4379 (1972), doi:10.1103/PhysRevB.6.4370; room"
-                + " temperature; rows are the paper's photon energies expressed as wavelengths");
+                + " Review B 6(12), 4370-4379 (1972), doi:10.1103/PhysRevB.6.4370; Table I; room"
+                + " temperature; rows are the paper's photon energies expressed as wavelengths;"
+                + " absolute");
     metal("silver", TabulatedIndex.ofMicrometreRows(JohnsonChristy.SILVER), johnsonChristy);
     metal("gold", TabulatedIndex.ofMicrometreRows(JohnsonChristy.GOLD), johnsonChristy);
     metal("copper", TabulatedIndex.ofMicrometreRows(JohnsonChristy.COPPER), johnsonChristy);
@@ -218,8 +228,9 @@ public final class MaterialCatalog {
         new Reference(
             "A. D. Rakić, A. B. Djurišić, J. M. Elazar and M. L. Majewski, \"Optical properties of"
                 + " metallic films for vertical-cavity optoelectronic devices\", Applied Optics"
-                + " 37(22), 5271-5283 (1998), doi:10.1364/AO.37.005271; Lorentz-Drude model, fitted"
-                + " from 0.1 eV to 6 eV"));
+                + " 37(22), 5271-5283 (1998), doi:10.1364/AO.37.005271; Lorentz-Drude model, eq."
+                + " (3) with the Al parameters of Table 1 (numbers from memory), fitted from 0.1 eV"
+                + " to 6 eV; absolute"));
   }
 
   /** The entry with this canonical name (aliases are resolved by the caller). */
