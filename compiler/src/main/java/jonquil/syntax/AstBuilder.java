@@ -260,8 +260,9 @@ record AstBuilder(SourceFile source, OffsetMap offsets, List<TextRange> comments
       Arg bound = value(ctx.bound);
       Requirement.Comparator cmp = comparator(ctx.comparator);
       Optional<Requirement.Builds> builds = Optional.empty();
-      if (present(ctx.OVER()) && ctx.builds != null && present(ctx.buildsWord)) {
-        Arg.NumberLit count = number(ctx.builds);
+      Arg.NumberLit count = number(ctx.builds);
+      // 'over builds' with the count left out: the parser has reported it; keep no half clause.
+      if (present(ctx.OVER()) && count != null && present(ctx.buildsWord)) {
         Name word = name(ctx.buildsWord);
         builds =
             Optional.of(

@@ -48,8 +48,9 @@ final class FormatCorpus {
   }
 
   /**
-   * The syntax tree without positions and with all whitespace removed from its strings (a
-   * requirement keeps its source text): equal exactly when formatting changed only layout.
+   * The syntax tree without positions and with all blanks (whitespace, and U+FEFF as the lexer
+   * counts it) removed from its strings (a requirement keeps its source text): equal exactly when
+   * formatting changed only layout.
    */
   static String tree(String text) {
     SpecFile ast = SpecParser.parse(source(text)).ast();
@@ -80,7 +81,7 @@ final class FormatCorpus {
       return "_";
     }
     if (value instanceof String s) {
-      return '"' + s.replaceAll("\\s+", "") + '"';
+      return '"' + s.replaceAll("[\\s\\uFEFF]+", "") + '"';
     }
     if (value instanceof Optional<?> o) {
       return o.map(FormatCorpus::render).orElse("none");
