@@ -3,10 +3,11 @@ package jonquil;
 import jonquil.analysis.YieldDraws;
 
 /**
- * How much a check computes. The command line computes everything; an editor re-checks on every
- * pause in typing, so it leaves out the Monte Carlo yields (hundreds of re-solves), which the CI
- * gate still evaluates. A workspace index needs only names, so it stops after resolution and
- * computes no physics at all.
+ * How much a check computes. The command line computes everything. An editor re-checks on every
+ * pause in typing, so it first checks without the Monte Carlo yields (hundreds of re-solves) and
+ * publishes, then checks in full and publishes again unless a newer edit stopped it: the editor
+ * ends with the command line's verdicts. A workspace index needs only names, so it stops after
+ * resolution and computes no physics at all.
  */
 public record CheckOptions(boolean yields, boolean analyses, YieldDraws draws) {
   public static final CheckOptions FULL = new CheckOptions(true, true);

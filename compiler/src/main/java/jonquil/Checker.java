@@ -130,10 +130,13 @@ public final class Checker {
           }
           continue;
         }
-        Analyzer.Analysis analysis = Analyzer.analyze(model, options.yields(), options.draws());
+        Analyzer.Analysis analysis =
+            Analyzer.analyze(model, options.yields(), options.draws(), superseded);
         diagnostics.addAll(analysis.diagnostics());
         requirements.addAll(analysis.outcomes());
         analysis.solution().ifPresent(s -> solutions.put(root, s));
+      } catch (jonquil.analysis.CheckSuperseded stale) {
+        return Optional.empty();
       } catch (RuntimeException | StackOverflowError e) {
         onInternalError.accept(root, e);
         // Fail closed: the file's requirements stay in the summary, none of them judged.

@@ -55,8 +55,20 @@ public final class Analyzer {
    * reported on its line, and none of its requirements is judged.
    */
   public static Analysis analyze(ResolvedModel model, boolean yields, YieldDraws draws) {
+    return analyze(model, yields, draws, () -> false);
+  }
+
+  /**
+   * As above; a yield stops drawing with {@link CheckSuperseded} once {@code superseded} says a
+   * newer check wants the answer instead.
+   */
+  public static Analysis analyze(
+      ResolvedModel model,
+      boolean yields,
+      YieldDraws draws,
+      java.util.function.BooleanSupplier superseded) {
     try {
-      return analyzeOrRefuse(model, yields, draws);
+      return analyzeOrRefuse(model, yields, draws, superseded);
     } catch (UnphysicalModel refused) {
       List<RequirementOutcome> outcomes = new ArrayList<>();
       for (ResolvedRequirement r : model.requirements()) {
@@ -71,7 +83,11 @@ public final class Analyzer {
     }
   }
 
-  private static Analysis analyzeOrRefuse(ResolvedModel model, boolean yields, YieldDraws draws) {
+  private static Analysis analyzeOrRefuse(
+      ResolvedModel model,
+      boolean yields,
+      YieldDraws draws,
+      java.util.function.BooleanSupplier superseded) {
     MaterialModel materials = new MaterialModel(model);
     ElementOptics optics = new ElementOptics(materials, new SurfaceModel(model, materials));
     Map<OptionalDouble, TrainSolution> solved = new HashMap<>();
@@ -100,16 +116,16 @@ public final class Analyzer {
               ? new YieldMonteCarlo.Judged(
                   RequirementEvaluator.evaluate(r, model, solve), java.util.Optional.empty())
               : yields
-                  ? YieldMonteCarlo.evaluate(r, model, draws)
+                  ? YieldMonteCarlo.evaluate(r, model, draws, superseded)
                   : new YieldMonteCarlo.Judged(
                       RequirementEvaluator.Verdict.notEvaluated(
-                          "yields are computed by 'jonquil check', not while typing"),
+                          "the yield is drawn after the quick check; its verdict follows"),
                       java.util.Optional.empty());
       RequirementEvaluator.Verdict v = judged.verdict();
       outcomes.add(outcome(r, v, judged.estimate()));
       if (!v.evaluated() && !deferred) {
-        // Fail closed: what cannot be evaluated is not met. A yield left to the CI gate while
-        // typing is no finding about the spec, so the editor shows no error for it.
+        // Fail closed: what cannot be evaluated is not met. A yield an editor draws in its second
+        // pass (CheckOptions.EDITOR, then FULL) is no finding yet: its verdict follows.
         diagnostics.add(
             Diagnostic.of(
                 DiagnosticCode.REQUIREMENT_NOT_EVALUATED,

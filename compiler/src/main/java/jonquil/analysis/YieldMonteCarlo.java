@@ -21,7 +21,11 @@ final class YieldMonteCarlo {
   /** The verdict and, when builds were drawn, what they gave. */
   record Judged(RequirementEvaluator.Verdict verdict, java.util.Optional<YieldEstimate> estimate) {}
 
-  static Judged evaluate(ResolvedRequirement r, ResolvedModel model, YieldDraws draws) {
+  static Judged evaluate(
+      ResolvedRequirement r,
+      ResolvedModel model,
+      YieldDraws draws,
+      java.util.function.BooleanSupplier superseded) {
     if (!Tolerances.any(model)) {
       return new Judged(
           RequirementEvaluator.Verdict.notEvaluated(
@@ -34,6 +38,9 @@ final class YieldMonteCarlo {
     SplittableRandom random = new SplittableRandom(seed);
     int passes = 0;
     for (int i = 0; i < builds; i++) {
+      if (superseded.getAsBoolean()) {
+        throw new CheckSuperseded(); // an editor's newer edit: this answer would never be shown
+      }
       ResolvedModel build = Tolerances.draw(model, random);
       MaterialModel m = new MaterialModel(build);
       ElementOptics optics = new ElementOptics(m, new SurfaceModel(build, m));

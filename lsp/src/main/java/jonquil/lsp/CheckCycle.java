@@ -95,7 +95,48 @@ final class CheckCycle implements CheckScheduler.Task {
     memo.retainOnly(sources(results).keySet());
     snapshots.publish(new Snapshots.Snapshot(results, versions, now.generation()));
     publish(open, results);
+    if (!drawsYields(results)) {
+      return true;
+    }
+    // Second pass: the yields, so the editor ends with the gate's verdicts (fail closed there too).
+    // The parse memo makes everything but the draws cheap; a newer edit stops the draws.
+    // Any edit stops them, even one the scheduler's max delay would let the first pass finish.
+    BooleanSupplier edited = () -> superseded.getAsBoolean() || edited(versions);
+    List<Result> full = new ArrayList<>();
+    for (Map.Entry<Path, List<Path>> root : byRoot.entrySet()) {
+      Optional<Result> result =
+          Checker.check(
+              Workspace.withOverlay(root.getKey(), buffers).withMemo(memo),
+              root.getValue(),
+              jonquil.CheckOptions.FULL,
+              edited);
+      if (result.isEmpty()) {
+        return false;
+      }
+      full.add(result.get());
+    }
+    snapshots.publish(new Snapshots.Snapshot(full, versions, now.generation()));
+    publish(open, full);
     return true;
+  }
+
+  /** True when an open document is no longer at the version this run checked. */
+  private boolean edited(Map<Path, Integer> versions) {
+    for (Map.Entry<Path, Integer> v : versions.entrySet()) {
+      Optional<Documents.Doc> now = documents.get(v.getKey());
+      if (now.isEmpty() || now.get().version() != v.getValue()) {
+        return true;
+      }
+    }
+    return false;
+  }
+
+  /** True when some checked spec has a 'yield' requirement, which the first pass left undrawn. */
+  private static boolean drawsYields(List<Result> results) {
+    return results.stream()
+        .flatMap(r -> r.models().values().stream())
+        .flatMap(m -> m.requirements().stream())
+        .anyMatch(q -> q.yield().isPresent());
   }
 
   /** After a failed run: every open document shows that checking failed, at its current version. */
