@@ -55,4 +55,32 @@ class SupersededCheckTest {
       assertTrue(r.isEmpty(), "superseded at poll " + stage);
     }
   }
+
+  @Test
+  void aYieldStopsDrawingOnceSuperseded() {
+    AtomicInteger polls = new AtomicInteger();
+    Optional<Result> full =
+        Checker.check(
+            Workspace.onDisk(Repo.samples()),
+            List.of(SAMPLE),
+            CheckOptions.FULL,
+            () -> {
+              polls.incrementAndGet();
+              return false;
+            });
+    assertTrue(full.isPresent());
+    // The sample's yield draws 400 builds and asks before each one, so the stages alone cannot
+    // account for the polls.
+    assertTrue(polls.get() > 400, "the yield does not ask whether it is still wanted: " + polls);
+    AtomicInteger seen = new AtomicInteger();
+    int midway = polls.get() - 200;
+    Optional<Result> stopped =
+        Checker.check(
+            Workspace.onDisk(Repo.samples()),
+            List.of(SAMPLE),
+            CheckOptions.FULL,
+            () -> seen.incrementAndGet() >= midway);
+    assertTrue(stopped.isEmpty(), "a yield superseded half-way still gave a result");
+    assertEquals(midway, seen.get(), "drawing went on after the newer edit");
+  }
 }
