@@ -19,7 +19,6 @@ import jonquil.diag.Diagnostic;
 import jonquil.diag.DiagnosticCode;
 import jonquil.diag.Severity;
 import jonquil.resolve.ResolvedModel;
-import jonquil.resolve.ResolvedRequirement;
 import jonquil.resolve.Resolver;
 import jonquil.source.SourceFile;
 import jonquil.source.TextRange;
@@ -153,14 +152,8 @@ public final class Checker {
           continue; // names only: no requirement verdicts, no physics
         }
         if (found.stream().anyMatch(d -> d.severity() == Severity.ERROR)) {
-          for (ResolvedRequirement r : model.requirements()) {
-            requirements.add(
-                RequirementOutcome.notEvaluated(
-                    r.file(),
-                    r.syntax().range(),
-                    r.syntax().text(),
-                    "not evaluated: the spec has errors"));
-          }
+          requirements.addAll(
+              RequirementOutcome.noneEvaluated(model, "not evaluated: the spec has errors"));
           continue;
         }
         Analyzer.Analysis analysis = Analyzer.analyze(model, options.yields(), options.draws());
@@ -176,14 +169,9 @@ public final class Checker {
         requirements.subList(requirementsBefore, requirements.size()).clear();
         solution = null;
         if (model != null) {
-          for (ResolvedRequirement r : model.requirements()) {
-            requirements.add(
-                RequirementOutcome.notEvaluated(
-                    r.file(),
-                    r.syntax().range(),
-                    r.syntax().text(),
-                    "not evaluated: the checker failed internally"));
-          }
+          requirements.addAll(
+              RequirementOutcome.noneEvaluated(
+                  model, "not evaluated: the checker failed internally"));
         }
         diagnostics.add(
             Diagnostic.of(

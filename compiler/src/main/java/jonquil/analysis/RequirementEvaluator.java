@@ -405,20 +405,7 @@ final class RequirementEvaluator {
   private static Verdict pureState(Value.Group g, StateForm form, Coherency light) {
     double chi = light.ellipticityAngle();
     return switch (form) {
-      case LINEAR -> {
-        Value.Num az = (Value.Num) g.slot("azimuth").orElseThrow();
-        double tol = az.tolerance().orElse(DEFAULT_STATE_TOLERANCE);
-        double off = Math.abs(wrapHalfTurn(light.azimuth() - az.si()));
-        double margin = Math.min(tol - off, tol - Math.abs(chi));
-        yield new Verdict(
-            true,
-            margin >= 0,
-            az.si() + wrapHalfTurn(light.azimuth() - az.si()),
-            az.si(),
-            margin,
-            "rad",
-            "azimuth against the table frame");
-      }
+      case LINEAR -> azimuthState(g, light, chi, "azimuth against the table frame");
       case CIRCULAR -> {
         Handedness wanted =
             g.word("handedness").orElse("right").equals("left")
@@ -436,29 +423,29 @@ final class RequirementEvaluator {
             "ellipticity angle; " + light.handedness().describe());
       }
       case ELLIPTICAL -> {
-        Value.Num az = (Value.Num) g.slot("azimuth").orElseThrow();
-        double tol = az.tolerance().orElse(DEFAULT_STATE_TOLERANCE);
         double wantedChi =
             Math.atan(g.number("axis_ratio").orElse(0))
                 * (g.word("handedness").orElse("right").equals("left") ? -1 : 1);
-        double margin =
-            Math.min(
-                tol - Math.abs(wrapHalfTurn(light.azimuth() - az.si())),
-                tol - Math.abs(chi - wantedChi));
-        yield new Verdict(
-            true,
-            margin >= 0,
-            az.si() + wrapHalfTurn(light.azimuth() - az.si()),
-            az.si(),
-            margin,
-            "rad",
-            "");
+        yield azimuthState(g, light, chi - wantedChi, "");
       }
       case UNPOLARIZED -> {
         double margin = UNPOLARIZED_DOP - light.dop();
         yield new Verdict(true, margin >= 0, light.dop(), UNPOLARIZED_DOP, margin, "", "");
       }
     };
+  }
+
+  /**
+   * A state with an azimuth (linear, elliptical): the value is the light's azimuth in the bound's
+   * half turn; the margin is the smaller of the azimuth's and the ellipticity's distances to the
+   * tolerance, {@code chiOff} being how far the ellipticity angle is from the one wanted.
+   */
+  private static Verdict azimuthState(Value.Group g, Coherency light, double chiOff, String note) {
+    Value.Num az = (Value.Num) g.slot("azimuth").orElseThrow();
+    double tol = az.tolerance().orElse(DEFAULT_STATE_TOLERANCE);
+    double off = wrapHalfTurn(light.azimuth() - az.si());
+    double margin = Math.min(tol - Math.abs(off), tol - Math.abs(chiOff));
+    return new Verdict(true, margin >= 0, az.si() + off, az.si(), margin, "rad", note);
   }
 
   /**
