@@ -11,6 +11,7 @@ import java.util.Optional;
 import java.util.Set;
 import java.util.function.BiConsumer;
 import java.util.function.BooleanSupplier;
+import java.util.function.Consumer;
 import jonquil.analysis.Analyzer;
 import jonquil.analysis.RequirementOutcome;
 import jonquil.analysis.TrainSolution;
@@ -18,7 +19,6 @@ import jonquil.diag.Diagnostic;
 import jonquil.diag.DiagnosticCode;
 import jonquil.diag.Severity;
 import jonquil.resolve.ResolvedModel;
-import jonquil.resolve.ResolvedRequirement;
 import jonquil.resolve.Resolver;
 import jonquil.source.SourceFile;
 import jonquil.source.TextRange;
@@ -68,7 +68,35 @@ public final class Checker {
       CheckOptions options,
       BooleanSupplier superseded,
       BiConsumer<Path, Throwable> onInternalError) {
+    return check(workspace, files, options, superseded, onInternalError, true, root -> {});
+  }
+
+  /**
+   * Checks {@code files} one after another, handing each root's model and solution to {@code
+   * onRoot} as soon as it is checked and keeping none of them: the result holds the texts read, the
+   * diagnostics and the verdicts, but no trees, models or solutions. Memory then stays flat however
+   * many files a folder holds (a command-line check of a whole tree needs nothing more).
+   */
+  public static Result checkEach(
+      Workspace workspace,
+      List<Path> files,
+      CheckOptions options,
+      BiConsumer<Path, Throwable> onInternalError,
+      Consumer<CheckedRoot> onRoot) {
+    return check(workspace, files, options, () -> false, onInternalError, false, onRoot)
+        .orElseThrow();
+  }
+
+  private static Optional<Result> check(
+      Workspace workspace,
+      List<Path> files,
+      CheckOptions options,
+      BooleanSupplier superseded,
+      BiConsumer<Path, Throwable> onInternalError,
+      boolean keep,
+      Consumer<CheckedRoot> onRoot) {
     Map<Path, ParseResult> parsed = new HashMap<>();
+    Map<Path, SourceFile> read = new LinkedHashMap<>();
     Set<Diagnostic> diagnostics = new LinkedHashSet<>();
     List<RequirementOutcome> requirements = new ArrayList<>();
     Map<Path, ResolvedModel> models = new LinkedHashMap<>();
@@ -80,6 +108,8 @@ public final class Checker {
       }
       Path root = file.toAbsolutePath().normalize();
       int requirementsBefore = requirements.size();
+      ResolvedModel model = null;
+      TrainSolution solution = null;
       try {
         SpecLoader loader = new SpecLoader(workspace, parsed);
         boolean loaded = loader.load(root);
@@ -100,7 +130,7 @@ public final class Checker {
           found.addAll(parsed.get(p).diagnostics());
         }
         found.addAll(loader.diagnostics());
-        ResolvedModel model =
+        model =
             Resolver.resolve(
                 root,
                 loader.closure(),
@@ -112,7 +142,9 @@ public final class Checker {
             .forEach((p, text) -> dataSources.putIfAbsent(p, new SourceFile(p, text)));
         found.addAll(model.diagnostics());
         diagnostics.addAll(found);
-        models.put(root, model);
+        if (keep) {
+          models.put(root, model);
+        }
         if (superseded.getAsBoolean()) {
           return Optional.empty();
         }
@@ -120,37 +152,29 @@ public final class Checker {
           continue; // names only: no requirement verdicts, no physics
         }
         if (found.stream().anyMatch(d -> d.severity() == Severity.ERROR)) {
-          for (ResolvedRequirement r : model.requirements()) {
-            requirements.add(
-                RequirementOutcome.notEvaluated(
-                    r.file(),
-                    r.syntax().range(),
-                    r.syntax().text(),
-                    "not evaluated: the spec has errors"));
-          }
+          requirements.addAll(
+              RequirementOutcome.noneEvaluated(model, "not evaluated: the spec has errors"));
           continue;
         }
         Analyzer.Analysis analysis =
             Analyzer.analyze(model, options.yields(), options.draws(), superseded);
         diagnostics.addAll(analysis.diagnostics());
         requirements.addAll(analysis.outcomes());
-        analysis.solution().ifPresent(s -> solutions.put(root, s));
+        solution = analysis.solution().orElse(null);
+        if (keep && solution != null) {
+          solutions.put(root, solution);
+        }
       } catch (jonquil.analysis.CheckSuperseded stale) {
         return Optional.empty();
       } catch (RuntimeException | StackOverflowError e) {
         onInternalError.accept(root, e);
         // Fail closed: the file's requirements stay in the summary, none of them judged.
         requirements.subList(requirementsBefore, requirements.size()).clear();
-        ResolvedModel model = models.get(root);
+        solution = null;
         if (model != null) {
-          for (ResolvedRequirement r : model.requirements()) {
-            requirements.add(
-                RequirementOutcome.notEvaluated(
-                    r.file(),
-                    r.syntax().range(),
-                    r.syntax().text(),
-                    "not evaluated: the checker failed internally"));
-          }
+          requirements.addAll(
+              RequirementOutcome.noneEvaluated(
+                  model, "not evaluated: the checker failed internally"));
         }
         diagnostics.add(
             Diagnostic.of(
@@ -160,14 +184,26 @@ public final class Checker {
                 "the checker failed internally ("
                     + e.getClass().getSimpleName()
                     + "); please report this file"));
+      } finally {
+        if (!keep) {
+          // Only what a later file may 'use' stays parsed; the root's text stays for positions.
+          ParseResult own = parsed.remove(root);
+          if (own != null) {
+            read.putIfAbsent(root, own.source());
+          }
+          onRoot.accept(
+              new CheckedRoot(root, Optional.ofNullable(model), Optional.ofNullable(solution)));
+        }
       }
     }
-    Map<Path, SourceFile> sources = new LinkedHashMap<>();
+    Map<Path, SourceFile> sources = new LinkedHashMap<>(read);
     Map<Path, SpecFile> trees = new LinkedHashMap<>();
     parsed.forEach(
         (p, r) -> {
-          sources.put(p, r.source());
-          trees.put(p, r.ast());
+          sources.putIfAbsent(p, r.source());
+          if (keep) {
+            trees.put(p, r.ast());
+          }
         });
     dataSources.forEach(sources::putIfAbsent);
     return Optional.of(

@@ -70,16 +70,10 @@ public final class Analyzer {
     try {
       return analyzeOrRefuse(model, yields, draws, superseded);
     } catch (UnphysicalModel refused) {
-      List<RequirementOutcome> outcomes = new ArrayList<>();
-      for (ResolvedRequirement r : model.requirements()) {
-        outcomes.add(
-            RequirementOutcome.notEvaluated(
-                r.file(),
-                r.syntax().range(),
-                r.syntax().text(),
-                "not evaluated: " + refused.getMessage()));
-      }
-      return new Analysis(java.util.Optional.empty(), outcomes, List.of(refused.diagnostic()));
+      return new Analysis(
+          java.util.Optional.empty(),
+          RequirementOutcome.noneEvaluated(model, "not evaluated: " + refused.getMessage()),
+          List.of(refused.diagnostic()));
     }
   }
 
@@ -99,14 +93,9 @@ public final class Analyzer {
     if (!(solution.conservationError() <= CONSERVATION_TOLERANCE)) {
       // Fail closed: a model that creates or loses light judges nothing.
       conservationBroken(model, solution).ifPresent(diagnostics::add);
-      for (ResolvedRequirement r : model.requirements()) {
-        outcomes.add(
-            RequirementOutcome.notEvaluated(
-                r.file(),
-                r.syntax().range(),
-                r.syntax().text(),
-                "not evaluated: the power budget does not close"));
-      }
+      outcomes.addAll(
+          RequirementOutcome.noneEvaluated(
+              model, "not evaluated: the power budget does not close"));
       return new Analysis(solution, outcomes, diagnostics);
     }
     for (ResolvedRequirement r : model.requirements()) {

@@ -22,8 +22,7 @@ final class EllipticityBound {
     // The angle counted positive in the stated sense: light of the other hand (or none) has
     // broken the bound by that much, whatever its size.
     double signed = hand.get().equals("left") ? -chi : chi;
-    return new Verdict(
-        true,
+    return RequirementEvaluator.verdict(
         size.pass() && signed > 0,
         signed,
         size.bound(),

@@ -39,18 +39,6 @@ final class RequirementEvaluator {
       boolean valueIsFloor,
       String shownUnit,
       String what) {
-    /** A value that was computed (not only bounded from below), shown in its SI unit. */
-    Verdict(
-        boolean evaluated,
-        boolean pass,
-        double value,
-        double bound,
-        double margin,
-        String unit,
-        String text) {
-      this(evaluated, pass, value, bound, margin, unit, text, false, unit, "");
-    }
-
     Verdict withText(String newText) {
       return new Verdict(
           evaluated, pass, value, bound, margin, unit, newText, valueIsFloor, shownUnit, what);
@@ -67,7 +55,8 @@ final class RequirementEvaluator {
     }
 
     static Verdict notEvaluated(String reason) {
-      return new Verdict(false, false, Double.NaN, Double.NaN, Double.NaN, "", reason);
+      return new Verdict(
+          false, false, Double.NaN, Double.NaN, Double.NaN, "", reason, false, "", "");
     }
   }
 
@@ -366,9 +355,10 @@ final class RequirementEvaluator {
     return new Verdict(true, known, floor, edge, margin, unit, note, true, unit, "");
   }
 
-  private static Verdict verdict(
+  /** A value that was computed (not only bounded from below), shown in its SI unit. */
+  static Verdict verdict(
       boolean pass, double value, double bound, double margin, String unit, String note) {
-    return new Verdict(true, pass, value, bound, margin, unit, note);
+    return new Verdict(true, pass, value, bound, margin, unit, note, false, unit, "");
   }
 
   /**
@@ -382,14 +372,8 @@ final class RequirementEvaluator {
       Handedness wanted = hand.orElse("right").equals("left") ? Handedness.LEFT : Handedness.RIGHT;
       double chi = light.ellipticityAngle();
       double signed = wanted == Handedness.RIGHT ? chi : -chi;
-      return new Verdict(
-          true,
-          signed > 0,
-          chi,
-          0,
-          signed,
-          "rad",
-          "ellipticity angle; " + light.handedness().describe());
+      return verdict(
+          signed > 0, chi, 0, signed, "rad", "ellipticity angle; " + light.handedness().describe());
     }
     StateForm form = StateForm.of(g);
     if (g.word("form_mix").isPresent()) {
@@ -397,7 +381,7 @@ final class RequirementEvaluator {
       double margin = UNPOLARIZED_DOP - Math.abs(light.dop() - dop);
       Verdict polarized = pureState(g, form, light);
       double worst = Math.min(margin, polarized.margin());
-      return new Verdict(true, worst >= 0, light.dop(), dop, worst, "", "");
+      return verdict(worst >= 0, light.dop(), dop, worst, "", "");
     }
     return pureState(g, form, light);
   }
@@ -405,20 +389,7 @@ final class RequirementEvaluator {
   private static Verdict pureState(Value.Group g, StateForm form, Coherency light) {
     double chi = light.ellipticityAngle();
     return switch (form) {
-      case LINEAR -> {
-        Value.Num az = (Value.Num) g.slot("azimuth").orElseThrow();
-        double tol = az.tolerance().orElse(DEFAULT_STATE_TOLERANCE);
-        double off = Math.abs(wrapHalfTurn(light.azimuth() - az.si()));
-        double margin = Math.min(tol - off, tol - Math.abs(chi));
-        yield new Verdict(
-            true,
-            margin >= 0,
-            az.si() + wrapHalfTurn(light.azimuth() - az.si()),
-            az.si(),
-            margin,
-            "rad",
-            "azimuth against the table frame");
-      }
+      case LINEAR -> azimuthState(g, light, chi, "azimuth against the table frame");
       case CIRCULAR -> {
         Handedness wanted =
             g.word("handedness").orElse("right").equals("left")
@@ -426,8 +397,7 @@ final class RequirementEvaluator {
                 : Handedness.RIGHT;
         double signed = wanted == Handedness.RIGHT ? chi : -chi;
         double margin = signed - (Math.PI / 4 - DEFAULT_STATE_TOLERANCE);
-        yield new Verdict(
-            true,
+        yield verdict(
             margin >= 0,
             chi,
             wanted == Handedness.RIGHT ? Math.PI / 4 : -Math.PI / 4,
@@ -436,29 +406,29 @@ final class RequirementEvaluator {
             "ellipticity angle; " + light.handedness().describe());
       }
       case ELLIPTICAL -> {
-        Value.Num az = (Value.Num) g.slot("azimuth").orElseThrow();
-        double tol = az.tolerance().orElse(DEFAULT_STATE_TOLERANCE);
         double wantedChi =
             Math.atan(g.number("axis_ratio").orElse(0))
                 * (g.word("handedness").orElse("right").equals("left") ? -1 : 1);
-        double margin =
-            Math.min(
-                tol - Math.abs(wrapHalfTurn(light.azimuth() - az.si())),
-                tol - Math.abs(chi - wantedChi));
-        yield new Verdict(
-            true,
-            margin >= 0,
-            az.si() + wrapHalfTurn(light.azimuth() - az.si()),
-            az.si(),
-            margin,
-            "rad",
-            "");
+        yield azimuthState(g, light, chi - wantedChi, "");
       }
       case UNPOLARIZED -> {
         double margin = UNPOLARIZED_DOP - light.dop();
-        yield new Verdict(true, margin >= 0, light.dop(), UNPOLARIZED_DOP, margin, "", "");
+        yield verdict(margin >= 0, light.dop(), UNPOLARIZED_DOP, margin, "", "");
       }
     };
+  }
+
+  /**
+   * A state with an azimuth (linear, elliptical): the value is the light's azimuth in the bound's
+   * half turn; the margin is the smaller of the azimuth's and the ellipticity's distances to the
+   * tolerance, {@code chiOff} being how far the ellipticity angle is from the one wanted.
+   */
+  private static Verdict azimuthState(Value.Group g, Coherency light, double chiOff, String note) {
+    Value.Num az = (Value.Num) g.slot("azimuth").orElseThrow();
+    double tol = az.tolerance().orElse(DEFAULT_STATE_TOLERANCE);
+    double off = wrapHalfTurn(light.azimuth() - az.si());
+    double margin = Math.min(tol - Math.abs(off), tol - Math.abs(chiOff));
+    return verdict(margin >= 0, az.si() + off, az.si(), margin, "rad", note);
   }
 
   /**

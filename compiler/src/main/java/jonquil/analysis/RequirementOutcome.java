@@ -1,8 +1,12 @@
 package jonquil.analysis;
 
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
+import jonquil.resolve.ResolvedModel;
+import jonquil.resolve.ResolvedRequirement;
 import jonquil.source.TextRange;
 
 /**
@@ -27,30 +31,13 @@ public record RequirementOutcome(
     boolean valueIsLowerBound,
     Optional<YieldEstimate> yield) {
 
-  /** Shown in its SI unit; no yield. */
-  public RequirementOutcome(
-      Path file,
-      TextRange range,
-      String text,
-      RequirementStatus status,
-      OptionalDouble value,
-      OptionalDouble bound,
-      OptionalDouble margin,
-      String siUnit,
-      String reason) {
-    this(
-        file,
-        range,
-        text,
-        status,
-        value,
-        bound,
-        margin,
-        siUnit,
-        reason,
-        siUnit,
-        false,
-        Optional.empty());
+  /** Every requirement of {@code model}, none of them evaluated, for {@code reason}. */
+  public static List<RequirementOutcome> noneEvaluated(ResolvedModel model, String reason) {
+    List<RequirementOutcome> outcomes = new ArrayList<>();
+    for (ResolvedRequirement r : model.requirements()) {
+      outcomes.add(notEvaluated(r.file(), r.syntax().range(), r.syntax().text(), reason));
+    }
+    return outcomes;
   }
 
   public static RequirementOutcome notEvaluated(
@@ -64,6 +51,9 @@ public record RequirementOutcome(
         OptionalDouble.empty(),
         OptionalDouble.empty(),
         "",
-        reason);
+        reason,
+        "",
+        false,
+        Optional.empty());
   }
 }

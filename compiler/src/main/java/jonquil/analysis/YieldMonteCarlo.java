@@ -86,8 +86,8 @@ final class YieldMonteCarlo {
                   + ")";
         };
     return new Judged(
-        new RequirementEvaluator.Verdict(
-            true, side == Side.PASSES, fraction, bound.low(), margin(bound, interval), "%", note),
+        RequirementEvaluator.verdict(
+            side == Side.PASSES, fraction, bound.low(), margin(bound, interval), "%", note),
         java.util.Optional.of(estimate));
   }
 

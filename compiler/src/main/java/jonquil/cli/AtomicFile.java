@@ -10,7 +10,9 @@ import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.nio.file.StandardOpenOption;
 import java.nio.file.attribute.PosixFileAttributeView;
+import java.nio.file.attribute.PosixFilePermission;
 import java.nio.file.attribute.PosixFilePermissions;
+import java.util.Set;
 import java.util.function.UnaryOperator;
 
 /**
@@ -34,12 +36,13 @@ final class AtomicFile {
       throws IOException {
     // Through a link, replace the file it names and keep the link.
     Path file = written.toRealPath();
-    if (!Files.isWritable(file)) {
-      // The rename would replace a read-only file anyway; respect what its owner said.
+    PosixFileAttributeView posix = Files.getFileAttributeView(file, PosixFileAttributeView.class);
+    if (!Files.isWritable(file) || (posix != null && readOnlyForAll(posix))) {
+      // The rename would replace a read-only file anyway; respect what its owner said, also when
+      // the one formatting is root, whom the system lets write anything.
       throw new AccessDeniedException(file.toString());
     }
     Path folder = file.getParent();
-    PosixFileAttributeView posix = Files.getFileAttributeView(file, PosixFileAttributeView.class);
     Path temp =
         posix == null
             ? Files.createTempFile(folder, ".jonquil-fmt-", ".tmp")
@@ -68,5 +71,12 @@ final class AtomicFile {
       }
       throw e;
     }
+  }
+
+  private static boolean readOnlyForAll(PosixFileAttributeView posix) throws IOException {
+    Set<PosixFilePermission> mode = posix.readAttributes().permissions();
+    return !mode.contains(PosixFilePermission.OWNER_WRITE)
+        && !mode.contains(PosixFilePermission.GROUP_WRITE)
+        && !mode.contains(PosixFilePermission.OTHERS_WRITE);
   }
 }

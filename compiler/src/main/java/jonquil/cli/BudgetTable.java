@@ -32,32 +32,36 @@ final class BudgetTable {
     List<String> lines = new ArrayList<>();
     for (Map.Entry<Path, TrainSolution> e : run.result().solutions().entrySet()) {
       ResolvedModel model = run.result().models().get(e.getKey());
-      if (model == null) {
-        continue;
-      }
-      TrainSolution s = e.getValue();
-      String file = PathText.oneLine(PathText.relative(run.cwd(), e.getKey()));
-      for (ResolvedTrain train : model.trains()) {
-        String trainName = train.name().map(n -> "train '" + n + "'").orElse("the train");
-        for (ResolvedTrain.BeamPath path : train.paths()) {
-          if (!lines.isEmpty()) {
-            lines.add("");
-          }
-          lines.add(
-              "power budget, "
-                  + file
-                  + ", "
-                  + trainName
-                  + ", path "
-                  + from(path)
-                  + " (sources emit "
-                  + QuantityFormat.format(s.sourcePower(), Dimension.POWER)
-                  + "):");
-          lines.addAll(table(path, s));
-        }
+      if (model != null) {
+        add(lines, run.cwd(), e.getKey(), model, e.getValue());
       }
     }
     return lines;
+  }
+
+  /** Appends one checked file's tables to {@code lines}, after a blank line if it has any. */
+  static void add(
+      List<String> lines, Path cwd, Path checked, ResolvedModel model, TrainSolution s) {
+    String file = PathText.oneLine(PathText.relative(cwd, checked));
+    for (ResolvedTrain train : model.trains()) {
+      String trainName = train.name().map(n -> "train '" + n + "'").orElse("the train");
+      for (ResolvedTrain.BeamPath path : train.paths()) {
+        if (!lines.isEmpty()) {
+          lines.add("");
+        }
+        lines.add(
+            "power budget, "
+                + file
+                + ", "
+                + trainName
+                + ", path "
+                + from(path)
+                + " (sources emit "
+                + QuantityFormat.format(s.sourcePower(), Dimension.POWER)
+                + "):");
+        lines.addAll(table(path, s));
+      }
+    }
   }
 
   private static String from(ResolvedTrain.BeamPath path) {

@@ -1,6 +1,11 @@
 package jonquil.cli;
 
+import java.io.BufferedWriter;
+import java.io.IOException;
+import java.io.OutputStreamWriter;
 import java.io.PrintStream;
+import java.io.UncheckedIOException;
+import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.InvalidPathException;
@@ -11,12 +16,15 @@ import java.util.Map;
 import java.util.OptionalLong;
 import java.util.concurrent.Callable;
 import jonquil.CheckOptions;
+import jonquil.CheckedRoot;
 import jonquil.Checker;
 import jonquil.Result;
 import jonquil.Workspace;
+import jonquil.analysis.TrainSolution;
 import jonquil.analysis.YieldDraws;
 import jonquil.diag.Diagnostic;
 import jonquil.diag.DiagnosticCode;
+import jonquil.resolve.ResolvedModel;
 import jonquil.source.ProjectRoot;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -135,31 +143,71 @@ final class CheckCommand implements Callable<Integer> {
     Path projectRoot = projectRoot();
     Inputs inputs = Inputs.collect(specPaths.paths, cwd);
     List<String> problems = new ArrayList<>(inputs.problems());
-    Result result = new Result(Map.of(), List.of(), List.of());
-    if (!inputs.files().isEmpty()) {
-      result =
-          withoutUnreadable(
-              Checker.check(
-                      Workspace.onDisk(projectRoot),
-                      inputs.files(),
-                      CheckOptions.FULL.withDraws(draws()),
-                      () -> false,
-                      this::internalError)
-                  .orElseThrow(),
-              problems);
+    try (PathOrderedSpool perFile = new PathOrderedSpool()) {
+      Result result = new Result(Map.of(), List.of(), List.of());
+      if (!inputs.files().isEmpty()) {
+        // Each file's model and solution go into the report as soon as it is checked and are let
+        // go: memory stays flat however many files a folder holds.
+        result =
+            withoutUnreadable(
+                Checker.checkEach(
+                    Workspace.onDisk(projectRoot),
+                    inputs.files(),
+                    CheckOptions.FULL.withDraws(draws()),
+                    this::internalError,
+                    checked -> putAside(checked, projectRoot, perFile)),
+                problems);
+      }
+      problems.forEach(err::println);
+      err.flush();
+      if (result.files().isEmpty() && !problems.isEmpty()) {
+        return ExitCode.TROUBLE; // nothing was checked, so there is nothing to report
+      }
+      CheckRun run = new CheckRun(result, projectRoot, cwd, problems);
+      switch (format) {
+        case TEXT ->
+            TextReport.write(run, out, new TextReport.Shown(quiet, strict, budget), perFile);
+        case JSON -> writeJson(run, perFile);
+        case SARIF -> writeUtf8(SarifReport.render(run));
+      }
+      return ExitCode.of(result, strict, exitZero, !problems.isEmpty());
     }
-    problems.forEach(err::println);
-    err.flush();
-    if (result.files().isEmpty() && !problems.isEmpty()) {
-      return ExitCode.TROUBLE; // nothing was checked, so there is nothing to report
+  }
+
+  /** What the report will show of one checked file's model and solution, before they go. */
+  private void putAside(CheckedRoot checked, Path projectRoot, PathOrderedSpool perFile) {
+    if (checked.model().isEmpty() || checked.solution().isEmpty()) {
+      return; // no solved train: neither values nor a budget to show
     }
-    CheckRun run = new CheckRun(result, projectRoot, cwd, problems);
+    ResolvedModel model = checked.model().get();
+    TrainSolution solution = checked.solution().get();
     switch (format) {
-      case TEXT -> TextReport.write(run, out, new TextReport.Shown(quiet, strict, budget));
-      case JSON -> writeUtf8(JsonReport.render(run));
-      case SARIF -> writeUtf8(SarifReport.render(run));
+      case TEXT -> {
+        if (budget) {
+          List<String> lines = new ArrayList<>();
+          BudgetTable.add(lines, cwd, checked.file(), model, solution);
+          if (!lines.isEmpty()) {
+            perFile.put(checked.file(), String.join("\n", lines));
+          }
+        }
+      }
+      case JSON ->
+          perFile.put(
+              checked.file(),
+              JsonReport.valuesEntry(ValuesJson.of(projectRoot, checked.file(), model, solution)));
+      case SARIF -> {} // SARIF carries findings only
     }
-    return ExitCode.of(result, strict, exitZero, !problems.isEmpty());
+  }
+
+  /** JSON is UTF-8 by definition, whatever the platform's console encoding. */
+  private void writeJson(CheckRun run, Iterable<String> valuesEntries) {
+    Writer writer = new BufferedWriter(new OutputStreamWriter(out, StandardCharsets.UTF_8));
+    try {
+      JsonReport.write(run, valuesEntries, writer);
+    } catch (IOException e) {
+      throw new UncheckedIOException("cannot write the report", e);
+    }
+    out.flush();
   }
 
   /**
@@ -226,7 +274,7 @@ final class CheckCommand implements Callable<Integer> {
     }
   }
 
-  /** JSON and SARIF are UTF-8 by definition, whatever the platform's console encoding. */
+  /** SARIF is UTF-8 by definition, whatever the platform's console encoding. */
   private void writeUtf8(String document) {
     byte[] bytes = document.getBytes(StandardCharsets.UTF_8);
     out.write(bytes, 0, bytes.length);

@@ -7,7 +7,11 @@ import com.google.gson.JsonElement;
 import com.google.gson.JsonNull;
 import com.google.gson.JsonObject;
 import com.google.gson.JsonPrimitive;
+import com.google.gson.stream.JsonWriter;
+import java.io.IOException;
+import java.io.Writer;
 import java.nio.file.Path;
+import java.util.Map;
 import java.util.OptionalDouble;
 import jonquil.Result;
 import jonquil.analysis.RequirementOutcome;
@@ -36,6 +40,38 @@ final class JsonReport {
 
   static String render(CheckRun run) {
     return GSON.toJson(build(run)) + "\n";
+  }
+
+  /**
+   * Writes the report with the "values" of each checked file given as already rendered {@link
+   * #valuesEntry entries}, in the order listed: the same bytes as {@link #render}, without holding
+   * every file's values at once.
+   */
+  static void write(CheckRun run, Iterable<String> valuesEntries, Writer out) throws IOException {
+    JsonWriter w = GSON.newJsonWriter(out);
+    w.beginObject();
+    for (Map.Entry<String, JsonElement> member : build(run).entrySet()) {
+      w.name(member.getKey());
+      if (member.getKey().equals("values")) {
+        w.beginArray();
+        for (String entry : valuesEntries) {
+          w.jsonValue(entry);
+        }
+        w.endArray();
+      } else {
+        GSON.toJson(member.getValue(), w);
+      }
+    }
+    w.endObject();
+    w.flush();
+    out.write("\n");
+    out.flush();
+  }
+
+  /** One checked file's values as an entry of {@link #write}: pretty-printed at its depth. */
+  static String valuesEntry(JsonObject values) {
+    // Strings never hold a raw line break (JSON escapes it), so each break starts a nested line.
+    return GSON.toJson(values).replace("\n", "\n    ");
   }
 
   static JsonObject build(CheckRun run) {

@@ -38,6 +38,15 @@ final class TextReport {
   }
 
   static void write(CheckRun run, PrintStream out, Shown shown) {
+    List<String> budget = shown.budget() ? BudgetTable.lines(run) : List.of();
+    write(run, out, shown, budget.isEmpty() ? List.of() : List.of(String.join("\n", budget)));
+  }
+
+  /**
+   * As above, with the budget tables given as one block of lines per checked file, in the order
+   * shown (a check that streams its files has no models left to build them from).
+   */
+  static void write(CheckRun run, PrintStream out, Shown shown, Iterable<String> budgetBlocks) {
     Result result = run.result();
     boolean printed = false;
     for (Diagnostic d : result.diagnostics()) {
@@ -65,15 +74,16 @@ final class TextReport {
         printed = true;
       }
     }
-    if (shown.budget()) {
-      List<String> budget = BudgetTable.lines(run);
-      if (!budget.isEmpty() && printed) {
-        out.println();
+    boolean first = true;
+    for (String block : shown.budget() ? budgetBlocks : List.<String>of()) {
+      if (!first || printed) {
+        out.println(); // a blank line between blocks, and after the findings
       }
-      budget.forEach(out::println);
-      if (!budget.isEmpty()) {
-        out.println();
-      }
+      first = false;
+      block.lines().forEach(out::println);
+    }
+    if (!first) {
+      out.println();
     }
     out.println(summary(result));
     out.flush();

@@ -14,6 +14,7 @@ import jonquil.analysis.StrayBeam;
 import jonquil.analysis.TrainSolution;
 import jonquil.optics.Coherency;
 import jonquil.optics.Handedness;
+import jonquil.resolve.ResolvedModel;
 
 /**
  * The computed values of the JSON report: light at every port, the power budget of every element,
@@ -29,71 +30,72 @@ final class ValuesJson {
   static JsonArray build(CheckRun run) {
     JsonArray out = new JsonArray();
     for (Map.Entry<Path, TrainSolution> e : run.result().solutions().entrySet()) {
-      TrainSolution s = e.getValue();
-      JsonObject o = new JsonObject();
-      o.addProperty("path", PathText.relative(run.root(), e.getKey()));
-      JsonArray ports = new JsonArray();
-      s.ports()
-          .forEach(
-              (key, value) -> {
-                if (!key.equals(value.key())) {
-                  return; // aliases ("element" for its exit port) are not repeated
-                }
-                ports.add(port(value));
-              });
-      o.add("ports", ports);
-      JsonArray incident = new JsonArray();
-      s.incident().values().forEach(v -> incident.add(port(v)));
-      o.add("incident", incident);
-      var model = run.result().models().get(e.getKey());
-      java.util.Map<String, Double> margins =
-          model == null ? java.util.Map.of() : SafetySummary.damageMargins(model, s);
-      JsonArray budget = new JsonArray();
-      for (ElementBudget b : s.budgets()) {
-        JsonObject j = new JsonObject();
-        j.addProperty("element", b.element());
-        j.add("in_W", number(b.in()));
-        JsonObject outs = new JsonObject();
-        b.out().forEach((port, w) -> outs.add(port, number(w)));
-        j.add("out_W", outs);
-        j.add("absorbed_W", number(b.absorbed()));
-        j.add("ghosts_W", number(b.ghosts()));
-        j.add(
-            "damage_margin",
-            margins.containsKey(b.element())
-                ? number(margins.get(b.element()))
-                : JsonNull.INSTANCE);
-        budget.add(j);
-      }
-      o.add("budget", budget);
-      JsonArray stray = new JsonArray();
-      for (StrayBeam b : s.stray()) {
-        JsonObject j = new JsonObject();
-        j.addProperty("origin", b.origin());
-        j.addProperty("description", b.description());
-        j.add("power_W", number(b.power()));
-        j.addProperty("towards_source", b.backward());
-        stray.add(j);
-      }
-      o.add("stray", stray);
-      JsonObject conservation = new JsonObject();
-      conservation.add("source_W", number(s.sourcePower()));
-      conservation.add("absorbed_W", number(s.absorbed()));
-      conservation.add("stopped_W", number(s.stopped()));
-      conservation.add("observed_at_path_ends_W", number(s.observedAtPathEnds()));
-      conservation.add("stray_W", number(s.strayPower()));
-      conservation.add("relative_error", number(s.conservationError()));
-      o.add("conservation", conservation);
-      JsonArray safety = new JsonArray();
-      if (model != null) {
-        for (SafetySummary.SourceSafety src : SafetySummary.sources(model, s)) {
-          safety.add(safety(src));
-        }
-      }
-      o.add("safety", safety);
-      out.add(o);
+      out.add(of(run.root(), e.getKey(), run.result().models().get(e.getKey()), e.getValue()));
     }
     return out;
+  }
+
+  /** The values of one checked root file ({@code model} null when it has none). */
+  static JsonObject of(Path root, Path file, ResolvedModel model, TrainSolution s) {
+    JsonObject o = new JsonObject();
+    o.addProperty("path", PathText.relative(root, file));
+    JsonArray ports = new JsonArray();
+    s.ports()
+        .forEach(
+            (key, value) -> {
+              if (!key.equals(value.key())) {
+                return; // aliases ("element" for its exit port) are not repeated
+              }
+              ports.add(port(value));
+            });
+    o.add("ports", ports);
+    JsonArray incident = new JsonArray();
+    s.incident().values().forEach(v -> incident.add(port(v)));
+    o.add("incident", incident);
+    java.util.Map<String, Double> margins =
+        model == null ? java.util.Map.of() : SafetySummary.damageMargins(model, s);
+    JsonArray budget = new JsonArray();
+    for (ElementBudget b : s.budgets()) {
+      JsonObject j = new JsonObject();
+      j.addProperty("element", b.element());
+      j.add("in_W", number(b.in()));
+      JsonObject outs = new JsonObject();
+      b.out().forEach((port, w) -> outs.add(port, number(w)));
+      j.add("out_W", outs);
+      j.add("absorbed_W", number(b.absorbed()));
+      j.add("ghosts_W", number(b.ghosts()));
+      j.add(
+          "damage_margin",
+          margins.containsKey(b.element()) ? number(margins.get(b.element())) : JsonNull.INSTANCE);
+      budget.add(j);
+    }
+    o.add("budget", budget);
+    JsonArray stray = new JsonArray();
+    for (StrayBeam b : s.stray()) {
+      JsonObject j = new JsonObject();
+      j.addProperty("origin", b.origin());
+      j.addProperty("description", b.description());
+      j.add("power_W", number(b.power()));
+      j.addProperty("towards_source", b.backward());
+      stray.add(j);
+    }
+    o.add("stray", stray);
+    JsonObject conservation = new JsonObject();
+    conservation.add("source_W", number(s.sourcePower()));
+    conservation.add("absorbed_W", number(s.absorbed()));
+    conservation.add("stopped_W", number(s.stopped()));
+    conservation.add("observed_at_path_ends_W", number(s.observedAtPathEnds()));
+    conservation.add("stray_W", number(s.strayPower()));
+    conservation.add("relative_error", number(s.conservationError()));
+    o.add("conservation", conservation);
+    JsonArray safety = new JsonArray();
+    if (model != null) {
+      for (SafetySummary.SourceSafety src : SafetySummary.sources(model, s)) {
+        safety.add(safety(src));
+      }
+    }
+    o.add("safety", safety);
+    return o;
   }
 
   private static JsonObject safety(SafetySummary.SourceSafety s) {

@@ -1,6 +1,7 @@
 package jonquil.format;
 
 import java.util.List;
+import java.util.Set;
 import jonquil.syntax.Token;
 import jonquil.syntax.TokenKind;
 import jonquil.syntax.Tokens;
@@ -11,6 +12,9 @@ import jonquil.syntax.Tokens;
  * only ever written together when the two texts still read back as the same two tokens.
  */
 final class Spacing {
+  /** The hazard classes written with a letter (IEC 60825-1:2014, clause 5). */
+  private static final Set<String> LETTERED_CLASSES = Set.of("1M", "2M", "3R", "3B");
+
   private Spacing() {}
 
   /** The tokens joined with the spacing rules, as they appear on one line. */
@@ -72,13 +76,12 @@ final class Spacing {
   }
 
   /**
-   * The lexer reads '3R' as a number and a name; the laser classes 1M, 2M and 3R are the only
+   * The lexer reads '3R' as a number and a name; the laser classes 1M, 2M, 3R and 3B are the only
    * places the language writes a digit and such a letter together.
    */
   private static boolean isHazardClassSuffix(WrittenToken number, WrittenToken letter) {
     return letter.kind() == TokenKind.IDENTIFIER
-        && number.text().matches("[123]")
-        && (letter.text().equals("M") || letter.text().equals("R"));
+        && LETTERED_CLASSES.contains(number.text() + letter.text());
   }
 
   /**

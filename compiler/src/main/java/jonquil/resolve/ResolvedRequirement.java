@@ -32,35 +32,6 @@ public record ResolvedRequirement(
     criteria = List.copyOf(criteria);
   }
 
-  /** A requirement whose yield, if any, draws as many builds as the check is told to. */
-  public ResolvedRequirement(
-      Path file,
-      Requirement syntax,
-      Optional<Measure> measure,
-      Optional<Target> at,
-      Optional<Target> from,
-      Optional<Target> to,
-      boolean everywhere,
-      List<Criterion> criteria,
-      Optional<Band> band,
-      Optional<Criterion> yield,
-      boolean valid) {
-    this(
-        file,
-        syntax,
-        measure,
-        at,
-        from,
-        to,
-        everywhere,
-        criteria,
-        band,
-        yield,
-        valid,
-        OptionalInt.empty(),
-        java.util.OptionalDouble.empty());
-  }
-
   /** A named place: an element, optionally one of its output ports. */
   public record Target(Symbol symbol, Optional<String> port, TextRange range) {}
 

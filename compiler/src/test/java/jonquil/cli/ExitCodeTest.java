@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.OptionalDouble;
 import jonquil.Result;
 import jonquil.analysis.RequirementOutcome;
@@ -43,7 +44,10 @@ class ExitCodeTest {
                   OptionalDouble.of(0.001),
                   OptionalDouble.of(-0.001),
                   "W",
-                  "")));
+                  "",
+                  "W",
+                  false,
+                  Optional.empty())));
 
   @Test
   void aCleanCheckExitsZero() {

@@ -3,6 +3,7 @@ package jonquil.cli;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.OptionalDouble;
 import jonquil.Result;
 import jonquil.analysis.RequirementOutcome;
@@ -91,7 +92,10 @@ final class SampleRun {
                 OptionalDouble.of(0.01),
                 OptionalDouble.of(0.005),
                 "W",
-                ""),
+                "",
+                "W",
+                false,
+                Optional.empty()),
             new RequirementOutcome(
                 MAIN,
                 TextRange.of(0, 6),
@@ -101,7 +105,10 @@ final class SampleRun {
                 OptionalDouble.of(0.001),
                 OptionalDouble.of(-0.004),
                 "W",
-                ""),
+                "",
+                "W",
+                false,
+                Optional.empty()),
             RequirementOutcome.notEvaluated(
                 PARTS,
                 TextRange.of(0, 4),

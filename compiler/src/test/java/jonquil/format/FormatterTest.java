@@ -35,6 +35,17 @@ class FormatterTest {
   }
 
   @Test
+  void everyLetteredHazardClassStaysOneLabel() {
+    // Found in a sample: 'hazard class <= 3B' came back as '3 B'. Labels: IEC 60825-1:2014, 5.
+    for (String label : List.of("1M", "2M", "3R", "3B")) {
+      String glued = "require {\n  hazard class <= " + label + " at s\n}\n";
+      String spaced = glued.replace(label, label.charAt(0) + " " + label.charAt(1));
+      assertEquals(glued, format(glued, FormatOptions.DEFAULT), label + " stays");
+      assertEquals(glued, format(spaced, FormatOptions.DEFAULT), label + " is joined");
+    }
+  }
+
+  @Test
   void aCanonicalFileNeedsNoEdit() {
     assertEquals(
         List.of(), Formatter.edits(FormatCorpus.source("probe p\n"), FormatOptions.DEFAULT));

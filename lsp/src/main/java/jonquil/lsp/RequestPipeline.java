@@ -16,6 +16,7 @@ import java.util.concurrent.RejectedExecutionException;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.BiFunction;
+import java.util.function.Consumer;
 import java.util.function.Function;
 import java.util.function.Supplier;
 import jonquil.CheckOptions;
@@ -264,21 +265,22 @@ final class RequestPipeline {
               ? checked
               : checked.thenCombine(before.get(), (snapshot, ignored) -> snapshot);
       CompletableFuture<T> reply = new CompletableFuture<>();
-      if (server.debugging()) {
-        long start = System.nanoTime();
-        reply.whenComplete(
-            (value, error) ->
-                server.debug(
-                    "request "
-                        + method
-                        + ": "
-                        + (error == null
-                            ? "answered"
-                            : "failed (" + JonquilLanguageServer.describe(error) + ")")
-                        + " in "
-                        + JonquilLanguageServer.millisSince(start)
-                        + " ms"));
-      }
+      long start = System.nanoTime();
+      // Written before the reply is completed, so the line is on stderr before the answer leaves.
+      Consumer<Throwable> logged =
+          !server.debugging()
+              ? error -> {}
+              : error ->
+                  server.debug(
+                      "request "
+                          + method
+                          + ": "
+                          + (error == null
+                              ? "answered"
+                              : "failed (" + JonquilLanguageServer.describe(error) + ")")
+                          + " in "
+                          + JonquilLanguageServer.millisSince(start)
+                          + " ms");
       AtomicReference<Future<?>> running = new AtomicReference<>();
       fresh.whenComplete(
           (snapshot, waitError) -> {
@@ -286,7 +288,7 @@ final class RequestPipeline {
               return; // cancelled while waiting for a fresh check
             }
             if (waitError != null) {
-              reply.completeExceptionally(asResponseError(method, waitError));
+              settle(reply, null, asResponseError(method, waitError), logged);
               return;
             }
             try {
@@ -298,18 +300,18 @@ final class RequestPipeline {
                         }
                         try {
                           T value = body.apply(snapshot, path);
-                          replies.execute(() -> reply.complete(value));
+                          replies.execute(() -> settle(reply, value, null, logged));
                         } catch (Throwable error) {
                           if (!reply
                               .isDone()) { // after a cancel, the interrupt's own failure is no
                             // error to report
                             Throwable response = asResponseError(method, error);
-                            replies.execute(() -> reply.completeExceptionally(response));
+                            replies.execute(() -> settle(reply, null, response, logged));
                           }
                         }
                       }));
             } catch (RejectedExecutionException e) {
-              reply.completeExceptionally(shuttingDown());
+              settle(reply, null, shuttingDown(), logged);
             }
             if (reply.isCancelled()) {
               cancel(running.get());
@@ -320,6 +322,7 @@ final class RequestPipeline {
             if (reply.isCancelled()) {
               // $/cancelRequest: LSP4J answers -32800 at once; interrupting frees the worker for
               // the next request.
+              logged.accept(error);
               fresh.cancel(false);
               checked.cancel(false);
               cancel(running.get());
@@ -328,6 +331,23 @@ final class RequestPipeline {
       return reply;
     } catch (RuntimeException | StackOverflowError e) {
       return CompletableFuture.failedFuture(asResponseError(method, e));
+    }
+  }
+
+  /**
+   * Writes the request's debug line, then answers: completing the reply hands it to the protocol
+   * writer at once, so a line written after it would trail the answer it describes.
+   */
+  private static <T> void settle(
+      CompletableFuture<T> reply, T value, Throwable error, Consumer<Throwable> logged) {
+    if (reply.isDone()) {
+      return; // cancelled meanwhile: the cancel logs and answers
+    }
+    logged.accept(error);
+    if (error == null) {
+      reply.complete(value);
+    } else {
+      reply.completeExceptionally(error);
     }
   }
 
