@@ -19,7 +19,10 @@ public record TrainSolution(
     double stopped,
     double observedAtPathEnds,
     Map<String, PortJones> jones,
-    Map<String, SurfaceAtAngle> surfaces) {
+    Map<String, SurfaceAtAngle> surfaces,
+    List<ElementPass> passes,
+    List<PortArrival> arrivals,
+    List<jonquil.source.TextRange> unsettledLoops) {
 
   /**
    * Maps keep the order the propagation filled them in (the order light travels the paths), so
@@ -33,6 +36,14 @@ public record TrainSolution(
     budgets = List.copyOf(budgets);
     stray = List.copyOf(stray);
     clips = List.copyOf(clips);
+    passes = List.copyOf(passes);
+    arrivals = List.copyOf(arrivals);
+    unsettledLoops = List.copyOf(unsettledLoops);
+  }
+
+  /** The passes of light through one element, in the order light takes them. */
+  public List<ElementPass> passesOf(String element) {
+    return passes.stream().filter(p -> p.element().equals(element)).toList();
   }
 
   /** The light arriving at an element, before it acts. */
