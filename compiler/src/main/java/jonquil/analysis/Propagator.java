@@ -44,6 +44,13 @@ final class Propagator {
   private final Map<String, Resume> continuations = new HashMap<>();
 
   private final Map<Symbol, ElementOptics.FaceFrames> frames = new HashMap<>();
+
+  /** Where each element is placed: its path and step, to retrace light heading back from it. */
+  private final Map<Symbol, Resume> placements = new HashMap<>();
+
+  /** Light that ran back along its paths to a source's output, by source, in the table frame. */
+  private final Map<String, Coherency> returned = new LinkedHashMap<>();
+
   private final Map<ResolvedTrain.Entry, int[]> visits = new HashMap<>();
   private final java.util.Set<Symbol> entered = new java.util.HashSet<>();
   private final List<ElementPass> passes = new ArrayList<>();
@@ -83,6 +90,7 @@ final class Propagator {
       for (ResolvedTrain.BeamPath path : train.paths()) {
         for (int i = 0; i < path.steps().size(); i++) {
           if (path.steps().get(i) instanceof ResolvedTrain.Element el) {
+            placements.putIfAbsent(el.symbol(), new Resume(path, i, List.of(), null));
             continuations.putIfAbsent(
                 el.symbol().name() + "." + el.exitPort(), resumeAt(path, i + 1));
           } else if (path.steps().get(i) instanceof ResolvedTrain.Entry en) {
@@ -151,6 +159,7 @@ final class Propagator {
         observed,
         jones,
         surfaces,
+        returned,
         passes,
         arrivals.values().stream().filter(Propagator::meet).flatMap(List::stream).toList(),
         unsettled.stream().map(ResolvedTrain.Entry::range).toList());
@@ -203,12 +212,22 @@ final class Propagator {
         resume(r, stack);
       } else if (next instanceof Leak l) {
         stray.add(l.beam());
+      } else if (next instanceof Retrace back) {
+        retrace(back, stack);
       }
     }
   }
 
   /** What is left to do: a path to go on with, or light to book as stray at its turn. */
-  private sealed interface Work permits Resume, Leak {}
+  private sealed interface Work permits Resume, Leak, Retrace {}
+
+  /**
+   * Light heading back out of the front of the element at step {@code at} of {@code path}: it runs
+   * the path backwards, entering each element before it by the face its light had left by, to the
+   * path's start (a source, or the port a branch left by).
+   */
+  private record Retrace(ResolvedTrain.BeamPath path, int at, List<TracedBeam> beams)
+      implements Work {}
 
   /** Go on along {@code path} from step {@code from}, with {@code last} the element before it. */
   private record Resume(ResolvedTrain.BeamPath path, int from, List<TracedBeam> beams, Exit last)
@@ -499,8 +518,11 @@ final class Propagator {
       }
       String key = name + "." + e.getKey();
       Resume next = continuations.get(key);
+      Resume placement = placements.get(entry.symbol());
       if (next != null) {
         sideways.add(next.with(e.getValue()));
+      } else if (e.getKey().equals("front") && placement != null) {
+        sideways.add(new Retrace(placement.path(), placement.from(), e.getValue()));
       } else {
         double p = e.getValue().stream().mapToDouble(TracedBeam::power).sum();
         sideways.add(
@@ -515,6 +537,104 @@ final class Propagator {
       }
     }
     return inline ? atPorts.getOrDefault(entry.exitPort(), List.of()) : List.of();
+  }
+
+  /**
+   * Runs light back along a path from the front of step {@code at}: distances as forward, each
+   * element entered by the face its first pass left by ({@code reflected} when that pass left by
+   * it, else {@code back}), its other exits going where they lead. At a source the light is booked
+   * as returned to it (heading back, so counted by {@code back reflection}); at a branch's start it
+   * enters the element the branch left, by the face of that port.
+   */
+  private void retrace(Retrace back, Deque<Work> stack) {
+    List<TracedBeam> beams = back.beams();
+    ResolvedTrain.BeamPath path = back.path();
+    for (int i = back.at() - 1; i >= 0 && !beams.isEmpty(); i--) {
+      ResolvedTrain.Step step = path.steps().get(i);
+      if (step instanceof ResolvedTrain.Gap gap) {
+        beams = across(gap, beams);
+        continue;
+      }
+      if (step instanceof ResolvedTrain.Entry en) {
+        // Light that came in by an entry came from elsewhere: its way back is not this path's.
+        stray.add(backLeak(en.symbol(), en.range(), beams));
+        return;
+      }
+      ResolvedTrain.Element el = (ResolvedTrain.Element) step;
+      if (el.symbol().category() == Category.SOURCE) {
+        double p = beams.stream().mapToDouble(TracedBeam::power).sum();
+        Coherency c = Coherency.ZERO;
+        for (TracedBeam b : beams) {
+          c = c.plus(b.light().inFrameRotatedBy(b.frame().tableAngle()));
+        }
+        returned.merge(el.symbol().name(), c, Coherency::plus);
+        stray.add(
+            new StrayBeam(
+                el.symbol().name(),
+                "returns to source '" + el.symbol().name() + "' along its path",
+                p,
+                true,
+                el.symbol().file(),
+                el.range()));
+        return;
+      }
+      String face = el.exitPort().equals("reflected") ? "reflected" : "back";
+      if (el.symbol().kind().orElseThrow().entryFaces().isEmpty()) {
+        stray.add(backLeak(el.symbol(), el.range(), beams));
+        return;
+      }
+      reenter(el.symbol(), face, el.range(), beams, stack);
+      return;
+    }
+    if (beams.isEmpty() || path.branchFrom().isEmpty()) {
+      return;
+    }
+    ResolvedTrain.PortRef from = path.branchFrom().get();
+    String face =
+        switch (from.port()) {
+          case "through", "out" -> "back";
+          case "reflected" -> "reflected";
+          case "side" -> "side";
+          default -> "front";
+        };
+    reenter(from.element(), face, from.range(), beams, stack);
+  }
+
+  /**
+   * Light entering {@code symbol} by {@code face} on its way back; what leaves goes where it leads,
+   * its front exit back along the element's own path.
+   */
+  private void reenter(
+      Symbol symbol,
+      String face,
+      jonquil.source.TextRange range,
+      List<TracedBeam> beams,
+      Deque<Work> stack) {
+    Optional<ResolvedElement> element = model.element(symbol);
+    if (element.isEmpty()) {
+      return;
+    }
+    ElementKind kind = element.get().kind();
+    List<Work> sideways = new ArrayList<>();
+    enter(
+        element.get(),
+        new ResolvedTrain.Entry(symbol, face, kind.exitFor(face, kind.ports().get(0)), range),
+        beams,
+        sideways,
+        false);
+    pushAll(stack, sideways, null);
+  }
+
+  private static StrayBeam backLeak(
+      Symbol symbol, jonquil.source.TextRange range, List<TracedBeam> beams) {
+    double p = beams.stream().mapToDouble(TracedBeam::power).sum();
+    return new StrayBeam(
+        symbol.name(),
+        "heads back into '" + symbol.name() + "', where it is not followed further",
+        p,
+        true,
+        symbol.file(),
+        range);
   }
 
   /** The side ports first, in port order; then {@code then}, if any. */

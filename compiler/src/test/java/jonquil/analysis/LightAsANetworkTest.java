@@ -148,4 +148,26 @@ class LightAsANetworkTest {
     assertEquals("front", passes.get(0).face());
     assertEquals("side", passes.get(1).face());
   }
+
+  @Test
+  void lightHeadingBackRunsThroughTheIsolatorToTheSource() {
+    TrainSolution s =
+        Bench.solve(
+            source(0)
+                + """
+                polarizer entry { axis 0 deg; extinction 10000 }
+                rotator faraday { rotation 45 deg; type faraday }
+                polarizer exit { axis 45 deg; extinction 10000 }
+                mirror facet { reflectance 4 %; aoi 0 deg }
+                train t {
+                  s -> 50 mm -> entry -> 10 mm -> faraday -> 10 mm -> exit -> 100 mm -> facet
+                    -> 100 mm -> exit.back
+                }
+                """);
+    // The facet returns 4 % (definition of reflectance); the isolator passes 1/ER of it back, the
+    // returning light meeting the entry polarizer crossed (definition of the extinction ratio).
+    assertEquals(0.04 / 1e4, s.returnedTo("s").orElseThrow().power(), 1e-15);
+    assertEquals(0.04 / 1e4, s.backReflected(), 1e-15); // nothing else heads back (definition)
+    assertEquals(0, s.conservationError(), 1e-9); // the budget closes (definition)
+  }
 }
