@@ -282,10 +282,12 @@ final class ElementOptics {
             e.number(Param.REFLECT_P, "r"),
             e.number(Param.REFLECT_S, "r"),
             e.number(Param.EXTINCTION, "ratio"));
-    double tp = f.tp();
-    double ts = f.ts();
-    double rs = f.rs();
-    double rp = f.rp();
+    // A dichroic's split holds inside its band; outside it, what it reflected it transmits.
+    boolean swapped = outsideBand(e, in.wavelength());
+    double tp = swapped ? f.rp() : f.tp();
+    double ts = swapped ? f.rs() : f.ts();
+    double rs = swapped ? f.ts() : f.rs();
+    double rp = swapped ? f.tp() : f.rp();
     Jones pass = Jones.transmission(Complex.ONE, Complex.ONE, plane, clamp(tp), clamp(ts));
     Coherency through = in.light().transform(pass);
     Jones reflect =

@@ -278,6 +278,13 @@ final class KindTables {
         optional(Param.TRANSMIT_S, ratio("t"), "transmittance for s"),
         optional(Param.REFLECT_S, ratio("r"), "reflectance for s"),
         optional(Param.REFLECT_P, ratio("r"), "reflectance for p"),
+        optional(
+            Param.BAND,
+            new Shape.Span(
+                q("from", Dimension.LENGTH, WAVELENGTH, "400 nm"),
+                q("to", Dimension.LENGTH, WAVELENGTH, "500 nm")),
+            "a dichroic: the split holds inside the band; outside it, reflection and transmission"
+                + " swap"),
         AOI_PARAM,
         PLANE,
         COATING_PARAM,

@@ -139,6 +139,7 @@ class EveryParameterMattersTest {
 
     change("splitter", "polarizing", "ratio 50 %", "polarizing");
     change("splitter", "ratio", "ratio 50 %", "ratio 30 %");
+    change("splitter", "band", "ratio 90 %; band 400 nm .. 700 nm", "band 1000 nm .. 1100 nm");
     change("splitter", "extinction", "polarizing; extinction 100", "extinction 1000");
     change("splitter", "transmit_p", "polarizing; transmit_p 90 %", "transmit_p 80 %");
     change(
