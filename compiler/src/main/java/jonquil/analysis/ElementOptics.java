@@ -78,6 +78,7 @@ final class ElementOptics {
             .withJones(scalar("out", t));
       }
       case RHOMB -> rhomb(e, in);
+      case ISOLATOR -> through(in, "out", isolator(e, false));
       case APERTURE -> aperture(e, in);
       case PROBE -> Response.balance(in, Map.of("out", in), List.of()).withJones(scalar("out", 1));
       case DETECTOR, DUMP -> Response.absorbedAll(in);
@@ -126,7 +127,9 @@ final class ElementOptics {
     }
     TracedBeam asForward = in.with(mirrored(light), frames.in());
     Response r;
-    if (e.kind() == jonquil.resolve.ElementKind.ROTATOR
+    if (e.kind() == jonquil.resolve.ElementKind.ISOLATOR) {
+      r = through(asForward, "out", isolator(e, true));
+    } else if (e.kind() == jonquil.resolve.ElementKind.ROTATOR
         && !e.word(Param.TYPE, "type").orElse("reciprocal").equals("faraday")) {
       double t = e.number(Param.TRANSMISSION, "t").orElse(1);
       r =
@@ -158,6 +161,28 @@ final class ElementOptics {
                         !g.backward()))
             .toList();
     return new Response(ports, r.absorbed(), ghosts, r.clipped(), jones, r.surface());
+  }
+
+  /**
+   * An isolator's matrix, in the first pass's frame. Polarization-independent: √(1/loss) forward,
+   * √(1/isolation) backward, whatever the state. Polarization-dependent: a polarizer at the axis, a
+   * 45° Faraday rotator and a polarizer at axis + 45°, each polarizer with the isolation as its
+   * extinction and the loss shared between them; backward the light meets them in reverse order and
+   * the rotator turns it the same way again (M·J·M for the rotator alone), so it reaches the entry
+   * polarizer crossed.
+   */
+  private static Jones isolator(ResolvedElement e, boolean backward) {
+    double loss = e.number(Param.INSERTION_LOSS, "loss").orElse(1);
+    double isolation = e.number(Param.ISOLATION, "ratio").orElse(1);
+    if (!e.word(Param.TYPE, "type").orElse("independent").equals("dependent")) {
+      return Jones.IDENTITY.scaled(Math.sqrt(1 / (backward ? isolation : loss)));
+    }
+    double axis = e.number(Param.AXIS, "angle").orElse(0);
+    double each = Math.sqrt(1 / loss);
+    Jones entry = Jones.polarizer(axis, each, isolation);
+    Jones exit = Jones.polarizer(axis + Math.PI / 4, each, isolation);
+    Jones faraday = Jones.rotator(Math.PI / 4);
+    return backward ? entry.times(faraday).times(exit) : exit.times(faraday).times(entry);
   }
 
   /**

@@ -27,6 +27,7 @@ public enum ElementKind {
   APERTURE("aperture", Category.OPTIC, List.of("out")),
   FILTER("filter", Category.OPTIC, List.of("out")),
   RHOMB("rhomb", Category.OPTIC, List.of("out")),
+  ISOLATOR("isolator", Category.OPTIC, List.of("out")),
   PROBE("probe", Category.PROBE, List.of("out")),
   DETECTOR("detector", Category.TERMINAL, List.of()),
   DUMP("dump", Category.TERMINAL, List.of());

@@ -103,6 +103,7 @@ final class KindChecks {
               MIRROR,
               APERTURE,
               RHOMB,
+              ISOLATOR,
               PROBE,
               DUMP ->
               () -> {};

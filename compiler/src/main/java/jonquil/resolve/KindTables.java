@@ -378,6 +378,24 @@ final class KindTables {
             "optical density outside the band, 'OD 0' for none (needs 'band')"),
         DAMAGE_PARAM);
     put(
+        ElementKind.ISOLATOR,
+        KindRules.NONE,
+        required(
+            Param.ISOLATION,
+            EXTINCTION,
+            "how much less light passes backward than forward, '35 dB' or '3000'"),
+        optional(
+            Param.INSERTION_LOSS,
+            new Shape.PowerRatio("loss", Bounds.atLeast(1)),
+            "forward loss, '0.5 dB' or '1.12' (default none)"),
+        optional(
+            Param.TYPE,
+            word("type", "independent", "dependent"),
+            "polarization 'independent' (default), or 'dependent': a polarizer at 'axis', a 45°"
+                + " Faraday rotator and a polarizer at 'axis' + 45°"),
+        optional(Param.AXIS, ANGLE, "entry polarizer's axis of a polarization-dependent isolator"),
+        DAMAGE_PARAM);
+    put(
         ElementKind.RHOMB,
         KindRules.NONE,
         required(Param.MATERIAL, ref("material", Category.MATERIAL), "prism material"),

@@ -134,6 +134,12 @@ class EveryParameterMattersTest {
     damage("waveplate", plate);
 
     change("rotator", "rotation", "rotation 30 deg", "rotation 40 deg");
+    String iso = "isolation 30 dB; type dependent; axis 30 deg";
+    change("isolator", "isolation", iso, "isolation 10 dB");
+    change("isolator", "insertion_loss", iso + "; insertion_loss 0.5 dB", "insertion_loss 1 dB");
+    change("isolator", "type", "isolation 30 dB; axis 30 deg", "type dependent");
+    change("isolator", "axis", iso, "axis 40 deg");
+    damage("isolator", "isolation 30 dB");
     change("rotator", "transmission", "rotation 30 deg; transmission 90 %", "transmission 80 %");
     damage("rotator", "rotation 30 deg");
 

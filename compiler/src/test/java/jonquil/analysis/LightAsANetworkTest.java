@@ -170,4 +170,29 @@ class LightAsANetworkTest {
     assertEquals(0.04 / 1e4, s.backReflected(), 1e-15); // nothing else heads back (definition)
     assertEquals(0, s.conservationError(), 1e-9); // the budget closes (definition)
   }
+
+  static double returnedThrough(String isolator) {
+    TrainSolution s =
+        Bench.solve(
+            source(0)
+                + RETRO
+                + isolator
+                + """
+                train t { s -> 50 mm -> iso -> 100 mm -> retro -> 100 mm -> iso.back -> 50 mm -> back_out }
+                """);
+    return s.port("back_out").orElseThrow().power();
+  }
+
+  @Test
+  void anIsolatorElementPassesItsInsertionLossForwardAndItsIsolationBackward() {
+    double independent = returnedThrough("isolator iso { isolation 30 dB; insertion_loss 1 dB }\n");
+    double dependent = returnedThrough("isolator iso { isolation 30 dB; type dependent }\n");
+    // Independent: forward 10^(−0.1), backward 10^(−3) (definitions of insertion loss and
+    // isolation in dB).
+    assertEquals(Math.pow(10, -0.1) * 1e-3, independent, 1e-15);
+    // Dependent, lossless: the light at 0° passes the entry polarizer, turns to 45°, passes the
+    // exit polarizer; back, it turns to 90° and meets the entry polarizer crossed: 1/ER of it
+    // passes (definition of the extinction ratio).
+    assertEquals(1e-3, dependent, 1e-15);
+  }
 }
