@@ -76,6 +76,25 @@ final class ValuesJson {
         stray.add(j);
       }
       o.add("stray", stray);
+      if (!s.passes().isEmpty()) {
+        // Only where light meets an element more than once, so one-way benches read as before.
+        JsonArray passes = new JsonArray();
+        for (jonquil.analysis.ElementPass p : s.passes()) {
+          JsonObject j = new JsonObject();
+          j.addProperty("element", p.element());
+          j.addProperty("face", p.face());
+          j.addProperty("direction", p.backward() ? "backward" : "forward");
+          j.add("in_W", number(p.powerIn()));
+          j.add("out_W", number(p.powerOut()));
+          JsonArray stokes = new JsonArray();
+          for (double x : p.out().stokes()) {
+            stokes.add(number(x));
+          }
+          j.add("stokes_out_W", stokes);
+          passes.add(j);
+        }
+        o.add("passes", passes);
+      }
       JsonObject conservation = new JsonObject();
       conservation.add("source_W", number(s.sourcePower()));
       conservation.add("absorbed_W", number(s.absorbed()));
