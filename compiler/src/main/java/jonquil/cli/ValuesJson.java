@@ -95,6 +95,25 @@ final class ValuesJson {
         }
         o.add("passes", passes);
       }
+      if (!s.returned().isEmpty()) {
+        // Light traced back along its paths to a source's output: what 'back reflection' means
+        // there, with its polarization.
+        JsonArray returned = new JsonArray();
+        s.returned()
+            .forEach(
+                (source, light) -> {
+                  JsonObject j = new JsonObject();
+                  j.addProperty("source", source);
+                  j.add("power_W", number(light.power()));
+                  JsonArray stokes = new JsonArray();
+                  for (double x : light.stokes()) {
+                    stokes.add(number(x));
+                  }
+                  j.add("stokes_W", stokes);
+                  returned.add(j);
+                });
+        o.add("returned_to_sources", returned);
+      }
       JsonObject conservation = new JsonObject();
       conservation.add("source_W", number(s.sourcePower()));
       conservation.add("absorbed_W", number(s.absorbed()));
