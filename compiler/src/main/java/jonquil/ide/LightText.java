@@ -103,6 +103,14 @@ final class LightText {
     }
     polarization(md, rows);
     passes(md, s.passesOf(name));
+    s.returnedTo(name)
+        .ifPresent(
+            back ->
+                md.append("\nReturned to its output (traced back through the train): ")
+                    .append(MarkdownText.q(back.power(), Dimension.POWER))
+                    .append(", ")
+                    .append(InlayHints.polarization(back))
+                    .append('\n'));
   }
 
   /** Each pass of light through an element met more than once, in the order light takes them. */

@@ -40,6 +40,14 @@ class ReturnPassesInTheEditorTest {
   }
 
   @Test
+  void theHoverOfTheSourceShowsTheLightReturnedToItsOutput() {
+    Result r = Specs.check(BENCH).result();
+    int at = Specs.offsetOf(r, Specs.MAIN, "laser", 0);
+    String md = EditorFeatures.standard().hover(r, Specs.MAIN, at).orElseThrow().markdown();
+    assertTrue(md.contains("Returned to its output (traced back through the train): "), md);
+  }
+
+  @Test
   void theStepThatEntersAgainHasItsOwnHint() {
     Result r = Specs.check(BENCH).result();
     String text = r.files().get(Specs.MAIN).text();
