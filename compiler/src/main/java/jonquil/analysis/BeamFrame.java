@@ -44,4 +44,12 @@ public record BeamFrame(Vec3 k, Vec3 x, Vec3 y) {
   public boolean vertical() {
     return Vec3.Y.cross(k).norm() < 1e-9;
   }
+
+  /**
+   * The frame of light running the other way along the same line, seen as a mirror at normal
+   * incidence leaves it: (−x, y, −k), still right-handed.
+   */
+  public BeamFrame mirrored() {
+    return new BeamFrame(k.times(-1), x.times(-1), y);
+  }
 }

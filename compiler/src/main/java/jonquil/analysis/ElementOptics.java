@@ -78,6 +78,7 @@ final class ElementOptics {
             .withJones(scalar("out", t));
       }
       case RHOMB -> rhomb(e, in);
+      case ISOLATOR -> through(in, "out", isolator(e, false));
       case APERTURE -> aperture(e, in);
       case PROBE -> Response.balance(in, Map.of("out", in), List.of()).withJones(scalar("out", 1));
       case DETECTOR, DUMP -> Response.absorbedAll(in);
@@ -87,6 +88,117 @@ final class ElementOptics {
           throw new IllegalArgumentException(
               e.kind().word() + " '" + e.symbol().name() + "' cannot stand in a beam path");
     };
+  }
+
+  /**
+   * One beam entering an element by {@code face} ({@link
+   * jonquil.resolve.ElementKind#entryFaces()}); the ports of the response are the exits its light
+   * leaves by.
+   *
+   * <p>A back-face pass uses reciprocity. Its frame is the mirror image of the first pass's: with
+   * (x, y, k) the frame of the light that left by {@code out} or {@code through}, the returning
+   * light is described in (−x, y, −k), which is where a mirror at normal incidence leaves it. In
+   * that frame a reciprocal element's reverse matrix is M·Jᵀ·M with M = diag(−1, 1); every Jones
+   * matrix here but a rotator's is symmetric (Jᵀ = J), so the reverse pass is the forward physics
+   * seen in a mirror: flip x, act, flip back. A Faraday rotator is not reciprocal: its rotation
+   * keeps its sense against the magnet, not the beam, so its reverse matrix is M·J·M, which turns
+   * by −ρ in the returning frame, and a double pass turns by 2ρ; an optically active (reciprocal)
+   * rotator undoes itself. Light entering by {@code reflected} or {@code side} meets the forward
+   * physics in its own carried frame (exact for planes of incidence at 0° or 90°).
+   */
+  Response respondFrom(ResolvedElement e, TracedBeam in, String face, FaceFrames frames) {
+    if (face.equals("front")) {
+      return respond(e, in);
+    }
+    if (!face.equals("back")) {
+      Response r = respond(e, in);
+      Map<String, TracedBeam> ports = new java.util.LinkedHashMap<>();
+      Map<String, Jones> jones = new java.util.LinkedHashMap<>();
+      r.ports().forEach((port, b) -> ports.put(e.kind().exitFor(face, port), b));
+      r.jones().forEach((port, j) -> jones.put(e.kind().exitFor(face, port), j));
+      return new Response(ports, r.absorbed(), r.ghosts(), r.clipped(), jones, r.surface());
+    }
+    BeamFrame back = frames.out().mirrored();
+    Coherency light = in.light();
+    if (in.frame().k().dot(back.k()) > 0.999) {
+      light =
+          light.inFrameRotatedBy(
+              Math.atan2(back.x().dot(in.frame().y()), back.x().dot(in.frame().x())));
+    }
+    TracedBeam asForward = in.with(mirrored(light), frames.in());
+    Response r;
+    if (e.kind() == jonquil.resolve.ElementKind.ISOLATOR) {
+      r = through(asForward, "out", isolator(e, true));
+    } else if (e.kind() == jonquil.resolve.ElementKind.ROTATOR
+        && !e.word(Param.TYPE, "type").orElse("reciprocal").equals("faraday")) {
+      double t = e.number(Param.TRANSMISSION, "t").orElse(1);
+      r =
+          through(
+              asForward,
+              "out",
+              Jones.rotator(-e.number(Param.ROTATION, "angle").orElse(0)).scaled(Math.sqrt(t)));
+    } else {
+      r = respond(e, asForward);
+    }
+    Map<String, TracedBeam> ports = new java.util.LinkedHashMap<>();
+    Map<String, Jones> jones = new java.util.LinkedHashMap<>();
+    BeamFrame front = frames.in().mirrored();
+    r.ports()
+        .forEach(
+            (port, b) -> {
+              String exit = e.kind().exitFor(face, port);
+              BeamFrame f = exit.equals("front") ? front : b.frame().mirrored();
+              ports.put(exit, b.with(mirrored(b.light()), f));
+            });
+    r.jones().forEach((port, j) -> jones.put(e.kind().exitFor(face, port), mirrored(j)));
+    List<Ghost> ghosts =
+        r.ghosts().stream()
+            .map(
+                g ->
+                    new Ghost(
+                        g.label(),
+                        g.beam().with(mirrored(g.beam().light()), g.beam().frame().mirrored()),
+                        !g.backward()))
+            .toList();
+    return new Response(ports, r.absorbed(), ghosts, r.clipped(), jones, r.surface());
+  }
+
+  /**
+   * An isolator's matrix, in the first pass's frame. Polarization-independent: √(1/loss) forward,
+   * √(1/isolation) backward, whatever the state. Polarization-dependent: a polarizer at the axis, a
+   * 45° Faraday rotator and a polarizer at axis + 45°, each polarizer with the isolation as its
+   * extinction and the loss shared between them; backward the light meets them in reverse order and
+   * the rotator turns it the same way again (M·J·M for the rotator alone), so it reaches the entry
+   * polarizer crossed.
+   */
+  private static Jones isolator(ResolvedElement e, boolean backward) {
+    double loss = e.number(Param.INSERTION_LOSS, "loss").orElse(1);
+    double isolation = e.number(Param.ISOLATION, "ratio").orElse(1);
+    if (!e.word(Param.TYPE, "type").orElse("independent").equals("dependent")) {
+      return Jones.IDENTITY.scaled(Math.sqrt(1 / (backward ? isolation : loss)));
+    }
+    double axis = e.number(Param.AXIS, "angle").orElse(0);
+    double each = Math.sqrt(1 / loss);
+    Jones entry = Jones.polarizer(axis, each, isolation);
+    Jones exit = Jones.polarizer(axis + Math.PI / 4, each, isolation);
+    Jones faraday = Jones.rotator(Math.PI / 4);
+    return backward ? entry.times(faraday).times(exit) : exit.times(faraday).times(entry);
+  }
+
+  /**
+   * The frames of an element's first pass: the light arriving, and the light leaving by its first
+   * port.
+   */
+  record FaceFrames(BeamFrame in, BeamFrame out) {}
+
+  /** Light described with its x axis reversed: M·Φ·M with M = diag(−1, 1). */
+  private static Coherency mirrored(Coherency c) {
+    return Coherency.of(c.xx(), c.yy(), -c.xyRe(), -c.xyIm());
+  }
+
+  /** M·J·M with M = diag(−1, 1): a matrix read in frames whose x axes are reversed. */
+  private static Jones mirrored(Jones j) {
+    return Jones.of(j.a(), j.b().negate(), j.c().negate(), j.d());
   }
 
   /** Whether a filter's stated band leaves this wavelength out (the band's ends are inside). */
@@ -195,10 +307,12 @@ final class ElementOptics {
             e.number(Param.REFLECT_P, "r"),
             e.number(Param.REFLECT_S, "r"),
             e.number(Param.EXTINCTION, "ratio"));
-    double tp = f.tp();
-    double ts = f.ts();
-    double rs = f.rs();
-    double rp = f.rp();
+    // A dichroic's split holds inside its band; outside it, what it reflected it transmits.
+    boolean swapped = outsideBand(e, in.wavelength());
+    double tp = swapped ? f.rp() : f.tp();
+    double ts = swapped ? f.rs() : f.ts();
+    double rs = swapped ? f.ts() : f.rs();
+    double rp = swapped ? f.tp() : f.rp();
     Jones pass = Jones.transmission(Complex.ONE, Complex.ONE, plane, clamp(tp), clamp(ts));
     Coherency through = in.light().transform(pass);
     Jones reflect =

@@ -44,6 +44,8 @@ final class ModelDigest {
         for (ResolvedTrain.Step s : p.steps()) {
           if (s instanceof ResolvedTrain.Element el) {
             text.append(" -> ").append(el.symbol().name()).append('.').append(el.exitPort());
+          } else if (s instanceof ResolvedTrain.Entry en) {
+            text.append(" -> into ").append(en.symbol().name()).append('.').append(en.face());
           } else if (s instanceof ResolvedTrain.Gap gap) {
             text.append(" -> ").append(hex(gap.length()));
             gap.tolerance().ifPresent(h -> text.append('±').append(hex(h)));

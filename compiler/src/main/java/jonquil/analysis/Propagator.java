@@ -9,6 +9,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
+import jonquil.diag.DiagnosticCode;
 import jonquil.optics.Coherency;
 import jonquil.resolve.Category;
 import jonquil.resolve.ElementKind;
@@ -19,17 +20,43 @@ import jonquil.resolve.ResolvedTrain;
 import jonquil.resolve.Symbol;
 
 /**
- * Walks the beam-path graph from every source, element by element, and books every watt: at each
- * port, absorbed, stopped by a dump or detector, observed at a probe that ends a path, or stray.
- * The graph is a tree (each element sits in one place and each port feeds at most one path), so a
- * depth-first walk visits every beam once; it keeps its own stack, so nesting has no depth limit.
+ * Walks the network of element faces from every source and books every watt: at each port,
+ * absorbed, stopped by a dump or detector, observed at a probe that ends a path, or stray. Light is
+ * linear in its coherency matrix, so each beam travels on its own and beams that meet add as
+ * powers: a path that enters an element placed elsewhere ({@link ResolvedTrain.Entry}) sends its
+ * light through that element again, and what leaves goes on wherever that port leads. Without
+ * entries the network is a tree and the walk is today's depth-first order; a closed loop is summed
+ * round trip by round trip until what is left is below {@link #SETTLED} of the source. The walk
+ * keeps its own stack, so nesting has no depth limit.
  */
 final class Propagator {
   private final ResolvedModel model;
   private final ElementOptics optics;
   private final MaterialModel materials;
 
-  private final Map<String, ResolvedTrain.BeamPath> branches = new HashMap<>();
+  /** What is left of a loop's light, relative to its source, when its round trips stop. */
+  static final double SETTLED = 1e-12;
+
+  /** Round trips through one entry after which a loop that has not settled is an error. */
+  static final int MOST_ROUND_TRIPS = 100_000;
+
+  /** Where light leaving each port goes on: "element.port" → the path and step. */
+  private final Map<String, Resume> continuations = new HashMap<>();
+
+  private final Map<Symbol, ElementOptics.FaceFrames> frames = new HashMap<>();
+
+  /** Where each element is placed: its path and step, to retrace light heading back from it. */
+  private final Map<Symbol, Resume> placements = new HashMap<>();
+
+  /** Light that ran back along its paths to a source's output, by source, in the table frame. */
+  private final Map<String, Coherency> returned = new LinkedHashMap<>();
+
+  private final Map<ResolvedTrain.Entry, int[]> visits = new HashMap<>();
+  private final java.util.Set<Symbol> entered = new java.util.HashSet<>();
+  private final List<ElementPass> passes = new ArrayList<>();
+  private final Map<String, List<PortArrival>> arrivals = new LinkedHashMap<>();
+  private final List<ResolvedTrain.Entry> unsettled = new ArrayList<>();
+  private double emitted;
   private final Map<String, Coherency> portLight = new LinkedHashMap<>();
   private final Map<String, PortValue> ports = new LinkedHashMap<>();
   private final Map<String, double[]> budgetTotals = new LinkedHashMap<>();
@@ -54,7 +81,26 @@ final class Propagator {
   TrainSolution solve(OptionalDouble wavelengthOverride) {
     for (ResolvedTrain train : model.trains()) {
       for (ResolvedTrain.BeamPath path : train.paths()) {
-        path.branchFrom().ifPresent(b -> branches.put(b.element().name() + "." + b.port(), path));
+        path.branchFrom()
+            .ifPresent(
+                b -> continuations.put(b.element().name() + "." + b.port(), resumeAt(path, 0)));
+      }
+    }
+    for (ResolvedTrain train : model.trains()) {
+      for (ResolvedTrain.BeamPath path : train.paths()) {
+        for (int i = 0; i < path.steps().size(); i++) {
+          if (path.steps().get(i) instanceof ResolvedTrain.Element el) {
+            placements.putIfAbsent(el.symbol(), new Resume(path, i, List.of(), null));
+            continuations.putIfAbsent(
+                el.symbol().name() + "." + el.exitPort(), resumeAt(path, i + 1));
+          } else if (path.steps().get(i) instanceof ResolvedTrain.Entry en) {
+            entered.add(en.symbol());
+            if (i + 1 < path.steps().size()) {
+              continuations.putIfAbsent(
+                  en.symbol().name() + "." + en.exitPort(), resumeAt(path, i + 1));
+            }
+          }
+        }
       }
     }
     for (ResolvedTrain train : model.trains()) {
@@ -75,12 +121,28 @@ final class Propagator {
         List<TracedBeam> beams =
             SourceBeams.of(
                 source.get(), wavelengthOverride, materials.index(Medium.AMBIENT, wl).getReal());
-        double emitted = beams.stream().mapToDouble(TracedBeam::power).sum();
+        emitted = beams.stream().mapToDouble(TracedBeam::power).sum();
         sourcePower += emitted;
-        record(start.symbol().name(), "out", start, beams);
+        visits.clear();
+        record(start.symbol().name(), "out", exit(start), beams);
         portAlias(start.symbol().name(), "out");
         walk(path, 1, beams);
       }
+    }
+    if (!unsettled.isEmpty()) {
+      ResolvedTrain.Entry loop = unsettled.get(0);
+      throw new UnphysicalModel(
+          DiagnosticCode.LOOP_DOES_NOT_SETTLE,
+          loop.symbol().file(),
+          loop.range(),
+          "light entering '"
+              + loop.symbol().name()
+              + "."
+              + loop.face()
+              + "' goes round a closed loop that does not die out after "
+              + MOST_ROUND_TRIPS
+              + " round trips (its round-trip gain is 1 or more): make one of its reflectors"
+              + " partial, or add the loss that stops it");
     }
     List<ElementBudget> budgets = new ArrayList<>();
     budgetTotals.forEach(
@@ -96,8 +158,44 @@ final class Propagator {
         stopped,
         observed,
         jones,
-        surfaces);
+        surfaces,
+        returned,
+        passes,
+        arrivals.values().stream().filter(Propagator::meet).flatMap(List::stream).toList(),
+        unsettled.stream().map(ResolvedTrain.Entry::range).toList());
   }
+
+  /** Whether two beams of one line arrive at one port. */
+  private static boolean meet(List<PortArrival> at) {
+    java.util.Set<String> lines = new java.util.HashSet<>();
+    for (PortArrival a : at) {
+      if (!lines.add(a.source().name() + "#" + a.line())) {
+        return true;
+      }
+    }
+    return false;
+  }
+
+  /** Going on along {@code path} from step {@code from}, the element before it as the last. */
+  private static Resume resumeAt(ResolvedTrain.BeamPath path, int from) {
+    Exit last = null;
+    if (from > 0) {
+      ResolvedTrain.Step before = path.steps().get(from - 1);
+      if (before instanceof ResolvedTrain.Element el) {
+        last = exit(el);
+      } else if (before instanceof ResolvedTrain.Entry en) {
+        last = new Exit(en.symbol(), en.exitPort(), en.range());
+      }
+    }
+    return new Resume(path, from, List.of(), last);
+  }
+
+  private static Exit exit(ResolvedTrain.Element el) {
+    return new Exit(el.symbol(), el.exitPort(), el.range());
+  }
+
+  /** Where light leaves: an element, the port it leaves by, the step that placed it. */
+  private record Exit(Symbol symbol, String port, jonquil.source.TextRange range) {}
 
   /**
    * Follows one path and every branch that leaves it with an explicit stack, not recursion, so a
@@ -114,17 +212,30 @@ final class Propagator {
         resume(r, stack);
       } else if (next instanceof Leak l) {
         stray.add(l.beam());
+      } else if (next instanceof Retrace back) {
+        retrace(back, stack);
       }
     }
   }
 
   /** What is left to do: a path to go on with, or light to book as stray at its turn. */
-  private sealed interface Work permits Resume, Leak {}
+  private sealed interface Work permits Resume, Leak, Retrace {}
+
+  /**
+   * Light heading back out of the front of the element at step {@code at} of {@code path}: it runs
+   * the path backwards, entering each element before it by the face its light had left by, to the
+   * path's start (a source, or the port a branch left by).
+   */
+  private record Retrace(ResolvedTrain.BeamPath path, int at, List<TracedBeam> beams)
+      implements Work {}
 
   /** Go on along {@code path} from step {@code from}, with {@code last} the element before it. */
-  private record Resume(
-      ResolvedTrain.BeamPath path, int from, List<TracedBeam> beams, ResolvedTrain.Element last)
-      implements Work {}
+  private record Resume(ResolvedTrain.BeamPath path, int from, List<TracedBeam> beams, Exit last)
+      implements Work {
+    Resume with(List<TracedBeam> next) {
+      return new Resume(path, from, next, last);
+    }
+  }
 
   /** Light that leaves a port no path follows. */
   private record Leak(StrayBeam beam) implements Work {}
@@ -132,15 +243,31 @@ final class Propagator {
   private void resume(Resume at, Deque<Work> stack) {
     ResolvedTrain.BeamPath path = at.path();
     List<TracedBeam> beams = at.beams();
-    ResolvedTrain.Element last = at.last();
+    Exit last = at.last();
     for (int i = at.from(); i < path.steps().size(); i++) {
       ResolvedTrain.Step step = path.steps().get(i);
       if (step instanceof ResolvedTrain.Gap gap) {
         beams = across(gap, beams);
         continue;
       }
+      if (step instanceof ResolvedTrain.Entry entry) {
+        Optional<ResolvedElement> element = model.element(entry.symbol());
+        if (element.isEmpty()) {
+          return;
+        }
+        boolean inline = i + 1 < path.steps().size();
+        List<Work> sideways = new ArrayList<>();
+        beams = enter(element.get(), entry, beams, sideways, inline);
+        last = new Exit(entry.symbol(), entry.exitPort(), entry.range());
+        if (!inline || beams.isEmpty()) {
+          pushAll(stack, sideways, null);
+          return;
+        }
+        pushAll(stack, sideways, new Resume(path, i + 1, beams, last));
+        return;
+      }
       ResolvedTrain.Element placed = (ResolvedTrain.Element) step;
-      last = placed;
+      last = exit(placed);
       Optional<ResolvedElement> element = model.element(placed.symbol());
       if (element.isEmpty()) {
         return;
@@ -152,10 +279,7 @@ final class Propagator {
       }
       if (!sideways.isEmpty()) {
         // The side ports first, in port order; then this path, from the next step.
-        stack.push(new Resume(path, i + 1, beams, last));
-        for (int k = sideways.size() - 1; k >= 0; k--) {
-          stack.push(sideways.get(k));
-        }
+        pushAll(stack, sideways, new Resume(path, i + 1, beams, last));
         return;
       }
     }
@@ -166,7 +290,7 @@ final class Propagator {
     if (last.symbol().category() == Category.PROBE) {
       observed += leaving;
     } else {
-      String origin = last.symbol().name() + "." + last.exitPort();
+      String origin = last.symbol().name() + "." + last.port();
       stray.add(
           new StrayBeam(
               origin,
@@ -191,7 +315,16 @@ final class Propagator {
                   .map(g -> g.propagate(gap.length())));
       double t = Math.exp(-materials.absorption(in.medium(), in.wavelength()) * gap.length());
       absorbed += in.power() * (1 - t);
-      out.add(in.with(in.light().scaled(t)));
+      out.add(
+          new TracedBeam(
+              in.source(),
+              in.line(),
+              in.wavelength(),
+              in.light().scaled(t),
+              in.frame(),
+              in.medium(),
+              in.mode(),
+              in.opticalPath() + n * gap.length()));
     }
     return out;
   }
@@ -212,11 +345,18 @@ final class Propagator {
     for (String port : element.kind().ports()) {
       atPorts.put(port, new ArrayList<>());
     }
-    incident.put(name, value(name, "", placed, beams));
+    incident.put(name, value(name, "", placed.symbol(), placed.range(), beams));
     double clippedMost = 0;
     for (TracedBeam b : beams) {
       totals[0] += b.power();
       Response r = optics.respond(element, b);
+      if (!frames.containsKey(placed.symbol())) {
+        TracedBeam leaving =
+            r.ports().get(element.kind().ports().isEmpty() ? "" : element.kind().ports().get(0));
+        frames.put(
+            placed.symbol(),
+            new ElementOptics.FaceFrames(b.frame(), leaving == null ? b.frame() : leaving.frame()));
+      }
       // The hover shows one matrix per port: the one for the first line that arrives.
       r.jones()
           .forEach(
@@ -250,13 +390,16 @@ final class Propagator {
       clips.add(new Clip(name, clippedMost, placed.symbol().file(), placed.range()));
     }
     if (placed.symbol().category() == Category.TERMINAL) {
-      record(name, "", placed, beams);
+      record(name, "", exit(placed), beams);
       return List.of();
     }
     for (Map.Entry<String, List<TracedBeam>> e : atPorts.entrySet()) {
       byPort.merge(
           e.getKey(), e.getValue().stream().mapToDouble(TracedBeam::power).sum(), Double::sum);
-      record(name, e.getKey(), placed, e.getValue());
+      record(name, e.getKey(), exit(placed), e.getValue());
+    }
+    if (entered.contains(placed.symbol())) {
+      passes.add(passOf(name, "front", false, beams, atPorts));
     }
     portAlias(name, placed.exitPort());
     for (Map.Entry<String, List<TracedBeam>> e : atPorts.entrySet()) {
@@ -264,9 +407,9 @@ final class Propagator {
         continue;
       }
       String key = name + "." + e.getKey();
-      ResolvedTrain.BeamPath branch = branches.get(key);
+      Resume branch = continuations.get(key);
       if (branch != null) {
-        sideways.add(new Resume(branch, 0, e.getValue(), null));
+        sideways.add(branch.with(e.getValue()));
       } else {
         double p = e.getValue().stream().mapToDouble(TracedBeam::power).sum();
         Vec3 arriving = beams.isEmpty() ? Vec3.Z : beams.get(0).frame().k();
@@ -286,10 +429,266 @@ final class Propagator {
     return atPorts.getOrDefault(placed.exitPort(), List.of());
   }
 
-  private void record(
-      String element, String port, ResolvedTrain.Element placed, List<TracedBeam> beams) {
+  /**
+   * Light entering an element placed elsewhere: every line through the element from that face,
+   * booked like a first pass. Returns the light of the path's own exit when the path goes on
+   * ({@code inline}); what leaves by any other port goes where that port leads.
+   */
+  private List<TracedBeam> enter(
+      ResolvedElement element,
+      ResolvedTrain.Entry entry,
+      List<TracedBeam> beams,
+      List<Work> sideways,
+      boolean inline) {
+    String name = entry.symbol().name();
+    double arriving = beams.stream().mapToDouble(TracedBeam::power).sum();
+    int[] count = visits.computeIfAbsent(entry, k -> new int[1]);
+    count[0]++;
+    if (count[0] > 1 && arriving < SETTLED * emitted) {
+      // What a loop has left after its round trips: below the settling bound, booked as absorbed
+      // so the budget still closes.
+      absorbed += arriving;
+      return List.of();
+    }
+    if (count[0] > MOST_ROUND_TRIPS) {
+      if (!unsettled.contains(entry)) {
+        unsettled.add(entry);
+      }
+      absorbed += arriving;
+      return List.of();
+    }
+    double[] totals = budgetTotals.computeIfAbsent(name, k -> new double[3]);
+    Map<String, Double> byPort = budgetPorts.computeIfAbsent(name, k -> new LinkedHashMap<>());
+    Map<String, List<TracedBeam>> atPorts = new LinkedHashMap<>();
+    for (String port : element.kind().exits()) {
+      atPorts.put(port, new ArrayList<>());
+    }
+    PortValue in = value(name, "", entry.symbol(), entry.range(), beams);
+    incident.merge(name, in, Propagator::plus);
+    ElementOptics.FaceFrames faces =
+        frames.getOrDefault(
+            entry.symbol(),
+            new ElementOptics.FaceFrames(
+                beams.isEmpty() ? BeamFrame.SOURCE : beams.get(0).frame().mirrored(),
+                beams.isEmpty() ? BeamFrame.SOURCE : beams.get(0).frame().mirrored()));
+    Exit at = new Exit(entry.symbol(), entry.exitPort(), entry.range());
+    for (TracedBeam b : beams) {
+      totals[0] += b.power();
+      Response r = optics.respondFrom(element, b, entry.face(), faces);
+      r.jones()
+          .forEach(
+              (port, j) ->
+                  jones.putIfAbsent(
+                      name + "." + port, new PortJones(name, port, b.wavelength(), j)));
+      totals[1] += r.absorbed();
+      absorbed += r.absorbed();
+      r.ports()
+          .forEach((port, beam) -> atPorts.computeIfAbsent(port, k -> new ArrayList<>()).add(beam));
+      for (Ghost g : r.ghosts()) {
+        totals[2] += g.beam().power();
+        stray.add(
+            new StrayBeam(
+                name,
+                g.label() + " of '" + name + "'" + (g.backward() ? ", heading back" : ""),
+                g.beam().power(),
+                g.backward(),
+                entry.symbol().file(),
+                entry.range(),
+                OptionalDouble.of(b.wavelength())));
+      }
+    }
+    for (Map.Entry<String, List<TracedBeam>> e : atPorts.entrySet()) {
+      double p = e.getValue().stream().mapToDouble(TracedBeam::power).sum();
+      byPort.merge(e.getKey(), p, Double::sum);
+      record(name, e.getKey(), at, e.getValue());
+    }
+    passes.add(
+        passOf(
+            name,
+            entry.face(),
+            entry.face().equals("back") || entry.face().equals("reflected"),
+            beams,
+            atPorts));
+    for (Map.Entry<String, List<TracedBeam>> e : atPorts.entrySet()) {
+      if (inline && e.getKey().equals(entry.exitPort())) {
+        continue;
+      }
+      if (e.getValue().isEmpty()) {
+        continue;
+      }
+      String key = name + "." + e.getKey();
+      Resume next = continuations.get(key);
+      Resume placement = placements.get(entry.symbol());
+      if (next != null) {
+        sideways.add(next.with(e.getValue()));
+      } else if (e.getKey().equals("front") && placement != null) {
+        sideways.add(new Retrace(placement.path(), placement.from(), e.getValue()));
+      } else {
+        double p = e.getValue().stream().mapToDouble(TracedBeam::power).sum();
+        sideways.add(
+            new Leak(
+                new StrayBeam(
+                    key,
+                    "leaves '" + key + "', which no path follows",
+                    p,
+                    e.getKey().equals("front"),
+                    entry.symbol().file(),
+                    entry.range())));
+      }
+    }
+    return inline ? atPorts.getOrDefault(entry.exitPort(), List.of()) : List.of();
+  }
+
+  /**
+   * Runs light back along a path from the front of step {@code at}: distances as forward, each
+   * element entered by the face its first pass left by ({@code reflected} when that pass left by
+   * it, else {@code back}), its other exits going where they lead. At a source the light is booked
+   * as returned to it (heading back, so counted by {@code back reflection}); at a branch's start it
+   * enters the element the branch left, by the face of that port.
+   */
+  private void retrace(Retrace back, Deque<Work> stack) {
+    List<TracedBeam> beams = back.beams();
+    ResolvedTrain.BeamPath path = back.path();
+    for (int i = back.at() - 1; i >= 0 && !beams.isEmpty(); i--) {
+      ResolvedTrain.Step step = path.steps().get(i);
+      if (step instanceof ResolvedTrain.Gap gap) {
+        beams = across(gap, beams);
+        continue;
+      }
+      if (step instanceof ResolvedTrain.Entry en) {
+        // Light that came in by an entry came from elsewhere: its way back is not this path's.
+        stray.add(backLeak(en.symbol(), en.range(), beams));
+        return;
+      }
+      ResolvedTrain.Element el = (ResolvedTrain.Element) step;
+      if (el.symbol().category() == Category.SOURCE) {
+        double p = beams.stream().mapToDouble(TracedBeam::power).sum();
+        Coherency c = Coherency.ZERO;
+        for (TracedBeam b : beams) {
+          c = c.plus(b.light().inFrameRotatedBy(b.frame().tableAngle()));
+        }
+        returned.merge(el.symbol().name(), c, Coherency::plus);
+        stray.add(
+            new StrayBeam(
+                el.symbol().name(),
+                "returns to source '" + el.symbol().name() + "' along its path",
+                p,
+                true,
+                el.symbol().file(),
+                el.range()));
+        return;
+      }
+      String face = el.exitPort().equals("reflected") ? "reflected" : "back";
+      if (el.symbol().kind().orElseThrow().entryFaces().isEmpty()) {
+        stray.add(backLeak(el.symbol(), el.range(), beams));
+        return;
+      }
+      reenter(el.symbol(), face, el.range(), beams, stack);
+      return;
+    }
+    if (beams.isEmpty() || path.branchFrom().isEmpty()) {
+      return;
+    }
+    ResolvedTrain.PortRef from = path.branchFrom().get();
+    String face =
+        switch (from.port()) {
+          case "through", "out" -> "back";
+          case "reflected" -> "reflected";
+          case "side" -> "side";
+          default -> "front";
+        };
+    reenter(from.element(), face, from.range(), beams, stack);
+  }
+
+  /**
+   * Light entering {@code symbol} by {@code face} on its way back; what leaves goes where it leads,
+   * its front exit back along the element's own path.
+   */
+  private void reenter(
+      Symbol symbol,
+      String face,
+      jonquil.source.TextRange range,
+      List<TracedBeam> beams,
+      Deque<Work> stack) {
+    Optional<ResolvedElement> element = model.element(symbol);
+    if (element.isEmpty()) {
+      return;
+    }
+    ElementKind kind = element.get().kind();
+    List<Work> sideways = new ArrayList<>();
+    enter(
+        element.get(),
+        new ResolvedTrain.Entry(symbol, face, kind.exitFor(face, kind.ports().get(0)), range),
+        beams,
+        sideways,
+        false);
+    pushAll(stack, sideways, null);
+  }
+
+  private static StrayBeam backLeak(
+      Symbol symbol, jonquil.source.TextRange range, List<TracedBeam> beams) {
+    double p = beams.stream().mapToDouble(TracedBeam::power).sum();
+    return new StrayBeam(
+        symbol.name(),
+        "heads back into '" + symbol.name() + "', where it is not followed further",
+        p,
+        true,
+        symbol.file(),
+        range);
+  }
+
+  /** The side ports first, in port order; then {@code then}, if any. */
+  private static void pushAll(Deque<Work> stack, List<Work> sideways, Work then) {
+    if (then != null) {
+      stack.push(then);
+    }
+    for (int k = sideways.size() - 1; k >= 0; k--) {
+      stack.push(sideways.get(k));
+    }
+  }
+
+  private ElementPass passOf(
+      String name,
+      String face,
+      boolean backward,
+      List<TracedBeam> beams,
+      Map<String, List<TracedBeam>> atPorts) {
+    Coherency in = Coherency.ZERO;
+    for (TracedBeam b : beams) {
+      in = in.plus(b.light().inFrameRotatedBy(b.frame().tableAngle()));
+    }
+    Coherency out = Coherency.ZERO;
+    for (List<TracedBeam> leaving : atPorts.values()) {
+      for (TracedBeam b : leaving) {
+        out = out.plus(b.light().inFrameRotatedBy(b.frame().tableAngle()));
+      }
+    }
+    return new ElementPass(name, face, backward, in, out);
+  }
+
+  private static PortValue plus(PortValue a, PortValue b) {
+    return new PortValue(
+        a.element(),
+        a.port(),
+        a.file(),
+        a.range(),
+        a.light().plus(b.light()),
+        a.vertical(),
+        a.mode(),
+        a.pulses(),
+        a.index(),
+        a.wavelength());
+  }
+
+  private void record(String element, String port, Exit placed, List<TracedBeam> beams) {
     String key = port.isEmpty() ? element : element + "." + port;
-    PortValue v = value(element, port, placed, beams);
+    if (!entered.isEmpty()) {
+      List<PortArrival> here = arrivals.computeIfAbsent(key, k -> new ArrayList<>());
+      for (TracedBeam b : beams) {
+        here.add(arrival(key, b));
+      }
+    }
+    PortValue v = value(element, port, placed.symbol(), placed.range(), beams);
     Coherency total = portLight.merge(key, v.light(), Coherency::plus);
     ports.put(
         key,
@@ -310,8 +709,28 @@ final class Propagator {
    * The light of all lines at one place, in the table frame. Its mode and pulses are those of the
    * strongest line (exposure is judged on one beam size; lines usually share it).
    */
+  /** A beam's arrival at a port, its field in the table frame when it is fully polarized. */
+  private static PortArrival arrival(String key, TracedBeam b) {
+    Coherency c = b.light().inFrameRotatedBy(b.frame().tableAngle());
+    Optional<double[]> field = Optional.empty();
+    if (c.power() > 0 && c.dop() > 1 - 1e-9) {
+      // Ex real and non-negative; Ey from Φxy = Ex·Ey*.
+      if (c.xx() > 0) {
+        double ex = Math.sqrt(c.xx());
+        field = Optional.of(new double[] {ex, 0, c.xyRe() / ex, -c.xyIm() / ex});
+      } else {
+        field = Optional.of(new double[] {0, 0, Math.sqrt(c.yy()), 0});
+      }
+    }
+    return new PortArrival(key, b.source(), b.line(), b.wavelength(), field, b.opticalPath());
+  }
+
   private PortValue value(
-      String element, String port, ResolvedTrain.Element placed, List<TracedBeam> beams) {
+      String element,
+      String port,
+      Symbol symbol,
+      jonquil.source.TextRange range,
+      List<TracedBeam> beams) {
     Coherency sum = Coherency.ZERO;
     boolean vertical = false;
     TracedBeam strongest = null;
@@ -334,16 +753,7 @@ final class Propagator {
             : materials.index(strongest.medium(), strongest.wavelength()).getReal();
     double wavelength = strongest == null ? 0 : strongest.wavelength();
     return new PortValue(
-        element,
-        port,
-        placed.symbol().file(),
-        placed.range(),
-        sum,
-        vertical,
-        mode,
-        train,
-        index,
-        wavelength);
+        element, port, symbol.file(), range, sum, vertical, mode, train, index, wavelength);
   }
 
   /** "element" alone names the port its path leaves by. */

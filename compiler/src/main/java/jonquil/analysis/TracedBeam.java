@@ -7,8 +7,9 @@ import jonquil.resolve.Symbol;
 
 /**
  * Light of one laser line at one point of the train: its polarization and power as a coherency
- * matrix (watts) in the beam's carried frame, the medium it runs in, and its Gaussian mode when the
- * source states one. Lines of one source are incoherent, so each travels as its own beam.
+ * matrix (watts) in the beam's carried frame, the medium it runs in, its Gaussian mode when the
+ * source states one, and the optical path (Σ n·L over the distances, metres) it has run since its
+ * source. Lines of one source are incoherent, so each travels as its own beam.
  */
 public record TracedBeam(
     Symbol source,
@@ -17,22 +18,40 @@ public record TracedBeam(
     Coherency light,
     BeamFrame frame,
     Medium medium,
-    Optional<GaussianBeam> mode) {
+    Optional<GaussianBeam> mode,
+    double opticalPath) {
+
+  /** A beam just leaving its source. */
+  public TracedBeam(
+      Symbol source,
+      int line,
+      double wavelength,
+      Coherency light,
+      BeamFrame frame,
+      Medium medium,
+      Optional<GaussianBeam> mode) {
+    this(source, line, wavelength, light, frame, medium, mode, 0);
+  }
 
   public TracedBeam with(Coherency next) {
-    return new TracedBeam(source, line, wavelength, next, frame, medium, mode);
+    return new TracedBeam(source, line, wavelength, next, frame, medium, mode, opticalPath);
   }
 
   public TracedBeam with(Coherency next, BeamFrame nextFrame) {
-    return new TracedBeam(source, line, wavelength, next, nextFrame, medium, mode);
+    return new TracedBeam(source, line, wavelength, next, nextFrame, medium, mode, opticalPath);
   }
 
   public TracedBeam in(Medium next) {
-    return new TracedBeam(source, line, wavelength, light, frame, next, mode);
+    return new TracedBeam(source, line, wavelength, light, frame, next, mode, opticalPath);
   }
 
   public TracedBeam withMode(Optional<GaussianBeam> next) {
-    return new TracedBeam(source, line, wavelength, light, frame, medium, next);
+    return new TracedBeam(source, line, wavelength, light, frame, medium, next, opticalPath);
+  }
+
+  /** The same beam after running a further optical path {@code nl} (metres). */
+  public TracedBeam advanced(double nl) {
+    return new TracedBeam(source, line, wavelength, light, frame, medium, mode, opticalPath + nl);
   }
 
   public double power() {

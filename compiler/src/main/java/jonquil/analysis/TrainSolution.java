@@ -19,7 +19,11 @@ public record TrainSolution(
     double stopped,
     double observedAtPathEnds,
     Map<String, PortJones> jones,
-    Map<String, SurfaceAtAngle> surfaces) {
+    Map<String, SurfaceAtAngle> surfaces,
+    Map<String, jonquil.optics.Coherency> returned,
+    List<ElementPass> passes,
+    List<PortArrival> arrivals,
+    List<jonquil.source.TextRange> unsettledLoops) {
 
   /**
    * Maps keep the order the propagation filled them in (the order light travels the paths), so
@@ -33,6 +37,15 @@ public record TrainSolution(
     budgets = List.copyOf(budgets);
     stray = List.copyOf(stray);
     clips = List.copyOf(clips);
+    returned = jonquil.source.InOrder.copyOf(returned);
+    passes = List.copyOf(passes);
+    arrivals = List.copyOf(arrivals);
+    unsettledLoops = List.copyOf(unsettledLoops);
+  }
+
+  /** The passes of light through one element, in the order light takes them. */
+  public List<ElementPass> passesOf(String element) {
+    return passes.stream().filter(p -> p.element().equals(element)).toList();
   }
 
   /** The light arriving at an element, before it acts. */
@@ -66,9 +79,11 @@ public record TrainSolution(
   }
 
   /**
-   * The light heading back from one place: an element's own backward ghosts and ports; at a source
-   * (or with no place) every backward beam of the train, since Jonquil does not trace light back
-   * through the elements before it (an upper bound on what returns to the source).
+   * The light heading back from one place: an element's own backward ghosts and ports. At a source
+   * (or with no place): every backward beam of the train, which is what returns to the source's
+   * output where light is traced back through the elements before it (a return pass, or a face
+   * entered from behind; "returns to source" in the stray list) and an upper bound where it is not
+   * (a ghost, or a port no path follows, heading back).
    */
   public double backReflected(Optional<jonquil.resolve.Symbol> at) {
     if (at.isEmpty() || at.get().category() == jonquil.resolve.Category.SOURCE) {
@@ -80,6 +95,11 @@ public record TrainSolution(
         .filter(b -> b.origin().equals(name) || b.origin().startsWith(name + "."))
         .mapToDouble(StrayBeam::power)
         .sum();
+  }
+
+  /** The light that ran back along its paths to a source's output, in the table frame. */
+  public Optional<jonquil.optics.Coherency> returnedTo(String source) {
+    return Optional.ofNullable(returned.get(source));
   }
 
   /** |source − accounted| / source: zero up to rounding when the budget closes. */

@@ -80,6 +80,44 @@ final class ValuesJson {
       stray.add(j);
     }
     o.add("stray", stray);
+    if (!s.passes().isEmpty()) {
+      // Only where light meets an element more than once, so one-way benches read as before.
+      JsonArray passes = new JsonArray();
+      for (jonquil.analysis.ElementPass p : s.passes()) {
+        JsonObject j = new JsonObject();
+        j.addProperty("element", p.element());
+        j.addProperty("face", p.face());
+        j.addProperty("direction", p.backward() ? "backward" : "forward");
+        j.add("in_W", number(p.powerIn()));
+        j.add("out_W", number(p.powerOut()));
+        JsonArray stokes = new JsonArray();
+        for (double x : p.out().stokes()) {
+          stokes.add(number(x));
+        }
+        j.add("stokes_out_W", stokes);
+        passes.add(j);
+      }
+      o.add("passes", passes);
+    }
+    if (!s.returned().isEmpty()) {
+      // Light traced back along its paths to a source's output: what 'back reflection' means
+      // there, with its polarization.
+      JsonArray returned = new JsonArray();
+      s.returned()
+          .forEach(
+              (source, light) -> {
+                JsonObject j = new JsonObject();
+                j.addProperty("source", source);
+                j.add("power_W", number(light.power()));
+                JsonArray stokes = new JsonArray();
+                for (double x : light.stokes()) {
+                  stokes.add(number(x));
+                }
+                j.add("stokes_W", stokes);
+                returned.add(j);
+              });
+      o.add("returned_to_sources", returned);
+    }
     JsonObject conservation = new JsonObject();
     conservation.add("source_W", number(s.sourcePower()));
     conservation.add("absorbed_W", number(s.absorbed()));

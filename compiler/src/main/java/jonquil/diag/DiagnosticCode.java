@@ -89,6 +89,12 @@ public enum DiagnosticCode {
   MISSING_DISTANCE(
       "J515", Severity.ERROR, "Two elements follow each other with no distance between them"),
   ELEMENT_NEVER_PLACED("J517", Severity.WARNING, "An element is declared but no path places it"),
+  ENTRY_INTO_UNPLACED(
+      "J518", Severity.ERROR, "Light enters a face of an element that no path places"),
+  LOOP_DOES_NOT_SETTLE(
+      "J519",
+      Severity.ERROR,
+      "A closed loop of light whose round trips do not die out (round-trip gain of 1 or more)"),
 
   // Requirements: J6xx
   UNKNOWN_MEASURE("J601", Severity.ERROR, "A requirement on a quantity Jonquil does not know"),

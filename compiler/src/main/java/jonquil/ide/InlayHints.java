@@ -33,6 +33,11 @@ final class InlayHints {
         for (TrainDecl.Step step : path.steps()) {
           int at = step.range().end();
           if (step instanceof TrainDecl.Place place && at >= start && at <= end) {
+            Optional<InlayHint> entry = entry(solution.get(), place, at);
+            if (entry.isPresent()) {
+              out.add(entry.get());
+              continue;
+            }
             leaving(solution.get(), place)
                 .ifPresent(
                     v ->
@@ -65,6 +70,37 @@ final class InlayHints {
     String name = place.ref().name().text();
     Optional<PortValue> v = s.port(place.ref().text());
     return v.isPresent() || place.ref().port().isPresent() ? v : s.port(name + ".out");
+  }
+
+  /**
+   * A step that enters an element again by a face: the light that left by all its passes through
+   * that face, summed, with each pass in the tooltip.
+   */
+  private static Optional<InlayHint> entry(TrainSolution s, TrainDecl.Place place, int at) {
+    if (place.ref().port().isEmpty()) {
+      return Optional.empty();
+    }
+    String face = place.ref().port().get().text();
+    List<jonquil.analysis.ElementPass> passes =
+        s.passesOf(place.ref().name().text()).stream().filter(p -> p.face().equals(face)).toList();
+    if (passes.isEmpty() || s.port(place.ref().text()).isPresent()) {
+      return Optional.empty();
+    }
+    double out = passes.stream().mapToDouble(jonquil.analysis.ElementPass::powerOut).sum();
+    StringBuilder tip = new StringBuilder();
+    for (jonquil.analysis.ElementPass p : passes) {
+      tip.append(tip.length() == 0 ? "" : "; ")
+          .append("in by '")
+          .append(p.face())
+          .append("' ")
+          .append(MarkdownText.q(p.powerIn(), Dimension.POWER))
+          .append(", out ")
+          .append(MarkdownText.q(p.powerOut(), Dimension.POWER))
+          .append(": ")
+          .append(polarization(p.out()));
+    }
+    return Optional.of(
+        new InlayHint(at, " " + MarkdownText.q(out, Dimension.POWER), tip.toString()));
   }
 
   /** Light recorded without a port is light a beam stop receives. */

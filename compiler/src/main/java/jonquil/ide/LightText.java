@@ -102,6 +102,41 @@ final class LightText {
           .append(" (threshold ÷ exposure)\n");
     }
     polarization(md, rows);
+    passes(md, s.passesOf(name));
+    s.returnedTo(name)
+        .ifPresent(
+            back ->
+                md.append("\nReturned to its output (traced back through the train): ")
+                    .append(MarkdownText.q(back.power(), Dimension.POWER))
+                    .append(", ")
+                    .append(InlayHints.polarization(back))
+                    .append('\n'));
+  }
+
+  /** Each pass of light through an element met more than once, in the order light takes them. */
+  private static void passes(StringBuilder md, List<jonquil.analysis.ElementPass> passes) {
+    if (passes.size() < 2) {
+      return;
+    }
+    md.append("\n**Passes** (in the order light takes them)\n\n")
+        .append("| # | enters by | direction | power in | power out | polarization out |\n")
+        .append("|---|---|---|---|---|---|\n");
+    int n = 1;
+    for (jonquil.analysis.ElementPass p : passes) {
+      md.append("| ")
+          .append(n++)
+          .append(" | `")
+          .append(p.face())
+          .append("` | ")
+          .append(p.backward() ? "backward" : "forward")
+          .append(" | ")
+          .append(MarkdownText.q(p.powerIn(), Dimension.POWER))
+          .append(" | ")
+          .append(MarkdownText.q(p.powerOut(), Dimension.POWER))
+          .append(" | ")
+          .append(InlayHints.polarization(p.out()))
+          .append(" |\n");
+    }
   }
 
   private static List<Row> rows(TrainSolution s, String name, ElementKind kind) {

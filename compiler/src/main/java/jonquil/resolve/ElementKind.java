@@ -27,6 +27,7 @@ public enum ElementKind {
   APERTURE("aperture", Category.OPTIC, List.of("out")),
   FILTER("filter", Category.OPTIC, List.of("out")),
   RHOMB("rhomb", Category.OPTIC, List.of("out")),
+  ISOLATOR("isolator", Category.OPTIC, List.of("out")),
   PROBE("probe", Category.PROBE, List.of("out")),
   DETECTOR("detector", Category.TERMINAL, List.of()),
   DUMP("dump", Category.TERMINAL, List.of());
@@ -60,6 +61,65 @@ public enum ElementKind {
    */
   public List<String> primaryPorts() {
     return this == SPLITTER ? ports : List.of();
+  }
+
+  /**
+   * The faces light may enter this element by once it is placed: {@code front} (the first pass's
+   * entry), {@code back} (against the light that left by {@code out} or {@code through}), and for a
+   * four-port (splitter, window, plate, interface) {@code reflected} (against the reflected light)
+   * and {@code side} (the second input, whose reflection joins {@code through}). Empty for what
+   * light cannot enter twice: sources, beam stops, materials, coatings.
+   */
+  public List<String> entryFaces() {
+    return switch (shape()) {
+      case FOUR_PORT -> List.of("front", "back", "reflected", "side");
+      case ONE_PORT -> List.of("front", "back");
+      case NONE -> List.of();
+    };
+  }
+
+  /**
+   * Every port light may leave by: the forward {@link #ports()}, then those of returning light,
+   * {@code front} (heading back out of the entry face) and, on a four-port, {@code side}.
+   */
+  public List<String> exits() {
+    return switch (shape()) {
+      case FOUR_PORT -> List.of("through", "reflected", "front", "side");
+      case ONE_PORT -> List.of("out", "front");
+      case NONE -> ports;
+    };
+  }
+
+  /**
+   * The port by which light that entered by {@code entry} and took the element's forward route
+   * {@code forwardPort} leaves: the same physics, met from another face (a four-port is taken as a
+   * cube, so transmission crosses to the opposite face and reflection turns to the adjacent one).
+   */
+  public String exitFor(String entry, String forwardPort) {
+    if (entry.equals("front")) {
+      return forwardPort;
+    }
+    boolean transmitted = !forwardPort.equals("reflected");
+    return switch (entry) {
+      case "back" -> transmitted ? "front" : "side";
+      case "reflected" -> transmitted ? "side" : "front";
+      case "side" -> transmitted ? "reflected" : "through";
+      default -> throw new IllegalArgumentException("no entry face '" + entry + "'");
+    };
+  }
+
+  /** How light can cross the element, which fixes its faces. */
+  private enum Shape {
+    FOUR_PORT,
+    ONE_PORT,
+    NONE
+  }
+
+  private Shape shape() {
+    return switch (category) {
+      case SOURCE, TERMINAL, MATERIAL, COATING, TRAIN -> Shape.NONE;
+      case OPTIC, PROBE -> ports.size() == 2 ? Shape.FOUR_PORT : Shape.ONE_PORT;
+    };
   }
 
   public List<ParamSpec> params() {

@@ -67,16 +67,6 @@ final class KindChecks {
                 }
                 splitterConserves(sink, who, params, given);
               };
-          case ROTATOR ->
-              () ->
-                  refused(
-                      sink,
-                      who,
-                      given,
-                      Param.TYPE,
-                      "reciprocal and Faraday rotators act alike on light passing forward, and"
-                          + " Jonquil does not trace light back through an element, so the type"
-                          + " would change nothing");
           case WINDOW, PLATE ->
               () ->
                   refused(
@@ -105,7 +95,17 @@ final class KindChecks {
                     "no figure Jonquil computes uses it (there is no photocurrent measure)");
               };
           // The tables and KindRules say all there is to check of these.
-          case COATING, INTERFACE, POLARIZER, DEPOLARIZER, MIRROR, APERTURE, RHOMB, PROBE, DUMP ->
+          case COATING,
+              INTERFACE,
+              POLARIZER,
+              ROTATOR,
+              DEPOLARIZER,
+              MIRROR,
+              APERTURE,
+              RHOMB,
+              ISOLATOR,
+              PROBE,
+              DUMP ->
               () -> {};
         };
     rules.run();

@@ -278,6 +278,13 @@ final class KindTables {
         optional(Param.TRANSMIT_S, ratio("t"), "transmittance for s"),
         optional(Param.REFLECT_S, ratio("r"), "reflectance for s"),
         optional(Param.REFLECT_P, ratio("r"), "reflectance for p"),
+        optional(
+            Param.BAND,
+            new Shape.Span(
+                q("from", Dimension.LENGTH, WAVELENGTH, "400 nm"),
+                q("to", Dimension.LENGTH, WAVELENGTH, "500 nm")),
+            "a dichroic: the split holds inside the band; outside it, reflection and transmission"
+                + " swap"),
         AOI_PARAM,
         PLANE,
         COATING_PARAM,
@@ -369,6 +376,24 @@ final class KindTables {
             Param.BLOCKING,
             new Shape.Density("od"),
             "optical density outside the band, 'OD 0' for none (needs 'band')"),
+        DAMAGE_PARAM);
+    put(
+        ElementKind.ISOLATOR,
+        KindRules.NONE,
+        required(
+            Param.ISOLATION,
+            EXTINCTION,
+            "how much less light passes backward than forward, '35 dB' or '3000'"),
+        optional(
+            Param.INSERTION_LOSS,
+            new Shape.PowerRatio("loss", Bounds.atLeast(1)),
+            "forward loss, '0.5 dB' or '1.12' (default none)"),
+        optional(
+            Param.TYPE,
+            word("type", "independent", "dependent"),
+            "polarization 'independent' (default), or 'dependent': a polarizer at 'axis', a 45°"
+                + " Faraday rotator and a polarizer at 'axis' + 45°"),
+        optional(Param.AXIS, ANGLE, "entry polarizer's axis of a polarization-dependent isolator"),
         DAMAGE_PARAM);
     put(
         ElementKind.RHOMB,

@@ -68,7 +68,9 @@ public enum Param {
   APERTURE("aperture"),
   EXPOSURE_TIME("exposure_time"),
   RESPONSIVITY("responsivity"),
-  RATING("rating");
+  RATING("rating"),
+  INSERTION_LOSS("insertion_loss"),
+  ISOLATION("isolation");
 
   private final String word;
   private volatile Set<String> slots;

@@ -20,7 +20,10 @@ public record ResolvedTrain(
     }
   }
 
-  /** An element's output port. */
+  /**
+   * An element's output port: one of {@link ElementKind#exits()} (a returning beam's {@code front}
+   * or {@code side} included).
+   */
   public record PortRef(Symbol element, String port, TextRange range) {}
 
   /** A step along a path. */
@@ -30,6 +33,14 @@ public record ResolvedTrain(
 
   /** The beam passes an element and leaves it by {@code exitPort}. */
   public record Element(Symbol symbol, String exitPort, TextRange range) implements Step {}
+
+  /**
+   * Light enters an element placed elsewhere by {@code face} (one of {@link
+   * ElementKind#entryFaces()}): the same element, its parameters and tolerance draw, met again. The
+   * path goes on with the light that leaves by {@code exitPort}, the one that crosses the element.
+   */
+  public record Entry(Symbol symbol, String face, String exitPort, TextRange range)
+      implements Step {}
 
   /**
    * Free propagation over a length, in a medium (empty: the surrounding medium, air by default).

@@ -35,6 +35,9 @@ final class TrainResolver {
 
   private final List<Pending> branches = new ArrayList<>();
 
+  /** Faces light enters by, checked once every path is read (a path may enter before placing). */
+  private final List<ResolvedTrain.PortRef> entries = new ArrayList<>();
+
   /** Elements named with a wrong port somewhere: whether their ports are followed is unknowable. */
   private final Set<Symbol> badPorts = new HashSet<>();
 
@@ -76,6 +79,7 @@ final class TrainResolver {
       out.add(new ResolvedTrain(sink.file, train.name().map(n -> n.text()), paths, train.range()));
     }
     checkBranches();
+    checkEntries();
     checkUnfollowedPorts();
     checkDistances();
     return out;
@@ -135,8 +139,13 @@ final class TrainResolver {
         originOf.putIfAbsent(s, origin);
       }
       if (first && ref.port().isPresent()) {
-        branchFrom = portOf(ref, kind).map(port -> new ResolvedTrain.PortRef(s, port, ref.range()));
-        branchFrom.ifPresent(start -> branches.add(new Pending(start)));
+        String word = ref.port().get().text();
+        Optional<String> leaving =
+            kind.exits().contains(word) && !kind.ports().contains(word)
+                ? Optional.of(word)
+                : portOf(ref, kind);
+        branchFrom = leaving.map(port -> new ResolvedTrain.PortRef(s, port, ref.range()));
+        branchFrom.ifPresent(b -> branches.add(new Pending(b)));
         inThisPath.add(s);
         continue;
       }
@@ -157,13 +166,19 @@ final class TrainResolver {
             "source '" + s.name() + "' can only start a path; a beam cannot pass through it");
         continue;
       }
+      if (!first && ref.port().isPresent()) {
+        String word = ref.port().get().text();
+        boolean entryOnly = kind.entryFaces().contains(word) && !kind.ports().contains(word);
+        if (placed.containsKey(s) || entryOnly) {
+          entry(ref, s, kind, word, last).ifPresent(steps::add);
+          continue;
+        }
+      }
       if (!inThisPath.add(s)) {
         sink.report(
             DiagnosticCode.ELEMENT_TWICE_IN_PATH,
             ref.range(),
-            "'"
-                + s.name()
-                + "' appears twice in this path; for a second pass, declare a second element");
+            "'" + s.name() + "' appears twice in this path; " + reentryHint(s, kind));
         continue;
       }
       ResolvedTrain.Element already = placed.get(s);
@@ -180,9 +195,9 @@ final class TrainResolver {
                             + s.name()
                             + "."
                             + kind.ports().get(1)
-                            + "'"
-                        : "an element sits in one place; for a second pass, declare a second"
-                            + " element"));
+                            + "'; "
+                        : "")
+                    + reentryHint(s, kind));
         sink.replace(
             diag, diag.withRelated(new Related(sink.file, already.range(), "placed here")));
         continue;
@@ -226,6 +241,77 @@ final class TrainResolver {
       }
     }
     return Optional.of(new ResolvedTrain.BeamPath(branchFrom, steps, path.range()));
+  }
+
+  /** What to write instead of naming an element a second time. */
+  private static String reentryHint(Symbol s, ElementKind kind) {
+    if (kind.entryFaces().isEmpty()) {
+      return "an element sits in one place; for another one, declare a second element";
+    }
+    return "to send light into it again, name the face it enters by, such as '"
+        + s.name()
+        + ".back' (its faces: "
+        + ShapeMatcher.quoteList(kind.entryFaces())
+        + ")";
+  }
+
+  /**
+   * Light entering an element placed elsewhere by one of its faces; checked against the faces, and
+   * remembered so that an element no path places is reported once every path is read.
+   */
+  private Optional<ResolvedTrain.Step> entry(
+      Arg.RefArg ref, Symbol s, ElementKind kind, String face, boolean last) {
+    List<String> faces = kind.entryFaces();
+    TextRange at = ref.port().orElseThrow().range();
+    if (!faces.contains(face)) {
+      Optional<String> close = Suggest.closest(face, faces);
+      badPorts.add(s);
+      sink.report(
+          DiagnosticCode.UNKNOWN_PORT,
+          at,
+          faces.isEmpty()
+              ? s.kindPhrase()
+                  + " '"
+                  + s.name()
+                  + "' is already placed; light cannot enter it again"
+              : "'"
+                  + s.name()
+                  + "' is already placed, so light enters it again by one of its faces; it has no"
+                  + " face '"
+                  + face
+                  + "'"
+                  + close
+                      .map(c -> "; did you mean '" + c + "'?")
+                      .orElse("; its faces are " + ShapeMatcher.quoteList(faces)),
+          Resolver.replacement(sink.file, at, face, close));
+      return Optional.empty();
+    }
+    String exit = kind.exitFor(face, kind.ports().get(0));
+    if (!last) {
+      followedPorts.put(s.name() + "." + exit, ref.range());
+    }
+    entries.add(new ResolvedTrain.PortRef(s, face, ref.range()));
+    return Optional.of(new ResolvedTrain.Entry(s, face, exit, ref.range()));
+  }
+
+  /** Every face entered must belong to an element some path places. */
+  private void checkEntries() {
+    for (ResolvedTrain.PortRef e : entries) {
+      if (!placed.containsKey(e.element())) {
+        sink.report(
+            DiagnosticCode.ENTRY_INTO_UNPLACED,
+            e.range(),
+            "light enters '"
+                + e.element().name()
+                + "' by its "
+                + e.port()
+                + " face, but no path places '"
+                + e.element().name()
+                + "' in the beam; place it first, such as 'laser -> 100 mm -> "
+                + e.element().name()
+                + "'");
+      }
+    }
   }
 
   private Optional<ResolvedTrain.Step> gap(TrainDecl.Distance d) {
