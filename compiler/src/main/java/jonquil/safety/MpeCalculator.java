@@ -96,6 +96,24 @@ public abstract class MpeCalculator {
     return null;
   }
 
+  /** The repetitive-pulse rule for this train; by default the wavelength's. */
+  protected PulseTrain.RepetitiveRule repetitiveRule(Emission e) {
+    return repetitiveRule(e.wavelength());
+  }
+
+  /** The limiting aperture for an exposure of duration t, m; by default the tissue's. */
+  protected double aperture(double lambda, double t) {
+    return tissue.aperture();
+  }
+
+  /**
+   * The effect whose limit governs at (lambda, t), in words, with the more lenient one that also
+   * applied; empty where the calculator does not say.
+   */
+  protected String governing(double lambda, double t) {
+    return "";
+  }
+
   /** Why a train its pulse rules could otherwise judge is still refused, or null. */
   protected String trainRefusal(Emission e) {
     return null;
@@ -130,17 +148,23 @@ public abstract class MpeCalculator {
       return Outcome.notEvaluated(trainRefusal, rulesCited);
     }
     double lambda = e.wavelength();
-    return Outcome.of(
+    MaximumPermissibleExposure train =
         PulseTrain.limit(
             t -> mpe.applyAsDouble(lambda, t),
             e.pulseDuration(),
             e.repetitionRate(),
             exposureDuration,
             rules,
-            repetitiveRule(lambda),
+            repetitiveRule(e),
             tissue.aperture(),
-            trainTable),
-        trainTable);
+            trainTable);
+    // The aperture of the pulse: never larger than that of the whole exposure, so never diluting.
+    double limitedAt =
+        train.limitingCriterion().equals(rules.averagePower())
+            ? exposureDuration
+            : e.pulseDuration();
+    return Outcome.of(
+        train.with(aperture(lambda, e.pulseDuration()), governing(lambda, limitedAt)), trainTable);
   }
 
   /** One exposure of duration t: continuous wave over t, or a single pulse t long. */
@@ -150,7 +174,16 @@ public abstract class MpeCalculator {
     double single = singlePulse ? h : Double.NaN;
     return Outcome.of(
         new MaximumPermissibleExposure(
-            h, h / t, t, tissue.aperture(), single, Double.NaN, Double.NaN, criterion, table),
+            h,
+            h / t,
+            t,
+            aperture(lambda, t),
+            single,
+            Double.NaN,
+            Double.NaN,
+            criterion,
+            table,
+            governing(lambda, t)),
         table);
   }
 

@@ -36,9 +36,27 @@ public final class TableScope {
   /** Limiting aperture for the skin, 400–1400 nm: 3.5 mm (IEC Table A.3, ANSI Table 8; memory). */
   public static final double APERTURE_SKIN = 3.5e-3;
 
+  /**
+   * Shortest exposure the IEC 60825-1:2014 (Ed. 3) tables cover, s: 10⁻¹³ s (100 fs), Table A.1 and
+   * A.5 (from memory).
+   */
+  public static final double T_MIN_IEC = 1e-13;
+
+  /** Shortest wavelength of the IEC tables, m (180 nm, Table A.1; from memory). */
+  public static final double LAMBDA_MIN_IEC = 180e-9;
+
+  /** Longest wavelength of the IEC tables, m (1 mm, Table A.1; from memory). */
+  public static final double LAMBDA_MAX_IEC = 1e-3;
+
   /** What an MPE protects: its limiting aperture and the shortest pulse its rows cover (s). */
   public record Tissue(double aperture, double shortestPulse, String shortestPulseText) {
     public static final Tissue EYE = new Tissue(APERTURE_EYE, T_MIN_EYE, "10 ps");
     public static final Tissue SKIN = new Tissue(APERTURE_SKIN, T_MIN_SKIN, "1 ns");
+
+    /** The eye under IEC Ed. 3: rows from 100 fs (aperture per band: {@link LimitingAperture}). */
+    public static final Tissue IEC_EYE = new Tissue(APERTURE_EYE, T_MIN_IEC, "100 fs");
+
+    /** The skin under IEC Ed. 3: rows from 100 fs (aperture per band: {@link LimitingAperture}). */
+    public static final Tissue IEC_SKIN = new Tissue(APERTURE_SKIN, T_MIN_IEC, "100 fs");
   }
 }
