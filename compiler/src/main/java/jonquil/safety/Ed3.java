@@ -9,9 +9,11 @@ import static jonquil.safety.CorrectionFactors.nm;
  * Why it exists: the one place that holds the formulas and constants taken from IEC 60825-1:2014
  * (Edition 3), so that every number can be audited against its source in a single file.
  *
- * <p>Scope: point-source viewing only (apparent source α ≤ α<sub>min</sub> = 1.5 mrad, so C6 = 1),
- * 400 nm ≤ λ &lt; 1250 nm for the eye. Table numbers are those of Edition 3 as remembered; where a
- * value could not be confirmed by a published secondary source it is marked "from memory".
+ * <p>Scope: the retinal hazard region 400 nm ≤ λ &lt; 1250 nm for point and extended sources (C6,
+ * T2, γ_ph: {@link ExtendedSource}); the ultraviolet and far-infrared rows are in {@link
+ * Ed3Ultraviolet} and {@link Ed3Infrared}, the AELs outside these rows in {@link
+ * AccessibleEmissionLimits}. Table numbers are those of Edition 3 as remembered; where a value
+ * could not be confirmed by a published secondary source it is marked "from memory".
  *
  * <p>Confirmed by secondary sources (see the tests for the exact citations):
  *

@@ -163,8 +163,19 @@ public abstract class MpeCalculator {
         train.limitingCriterion().equals(rules.averagePower())
             ? exposureDuration
             : e.pulseDuration();
+    String governing = governing(lambda, limitedAt);
     return Outcome.of(
-        train.with(aperture(lambda, e.pulseDuration()), governing(lambda, limitedAt)), trainTable);
+        train.with(aperture(lambda, e.pulseDuration()), governing), cited(trainTable, governing));
+  }
+
+  /**
+   * The tables cited, and where two limits applied, which one governed: a reader of the figure
+   * learns it wherever the standard is shown.
+   */
+  private static String cited(String tables, String governing) {
+    return governing.contains("stricter than")
+        ? tables + "; governing limit: " + governing
+        : tables;
   }
 
   /** One exposure of duration t: continuous wave over t, or a single pulse t long. */
@@ -172,6 +183,7 @@ public abstract class MpeCalculator {
       double lambda, double t, String criterion, boolean singlePulse) {
     double h = mpe.applyAsDouble(lambda, t);
     double single = singlePulse ? h : Double.NaN;
+    String governing = governing(lambda, t);
     return Outcome.of(
         new MaximumPermissibleExposure(
             h,
@@ -183,8 +195,8 @@ public abstract class MpeCalculator {
             Double.NaN,
             criterion,
             table,
-            governing(lambda, t)),
-        table);
+            governing),
+        cited(table, governing));
   }
 
   /** A refusal of a wavelength, quoted in nanometres to one decimal, and {@code why}. */

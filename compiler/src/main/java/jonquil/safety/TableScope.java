@@ -9,7 +9,10 @@ package jonquil.safety;
 public final class TableScope {
   private TableScope() {}
 
-  /** Lowest wavelength evaluated, m: the retinal hazard region and both tables' rows start here. */
+  /**
+   * Lowest wavelength of the rows both standards share as implemented, m: the retinal hazard
+   * region; ANSI's implemented rows start here, IEC's at {@link #LAMBDA_MIN_IEC}.
+   */
   public static final double LAMBDA_MIN = 400e-9;
 
   /** Upper end of the evaluated skin range, m (skin rows 400–1400 nm of both tables). */
@@ -19,12 +22,12 @@ public final class TableScope {
   public static final double T_MAX = 3e4;
 
   /**
-   * Shortest pulse evaluated for the eye, s. Both tables have rows below 10 ps (IEC from memory;
-   * ANSI 100 fs–10 ps); they are not implemented, so shorter pulses are "not evaluated".
+   * Shortest pulse evaluated for the eye under ANSI, s: its 100 fs–10 ps rows are not implemented,
+   * so shorter pulses are "not evaluated" there. IEC's rows run from {@link #T_MIN_IEC}.
    */
   public static final double T_MIN_EYE = 1e-11;
 
-  /** Shortest pulse evaluated for the skin, s (rows from 1 ns; below: not implemented). */
+  /** Shortest pulse evaluated for the skin under ANSI, s (rows from 1 ns; IEC: T_MIN_IEC). */
   public static final double T_MIN_SKIN = 1e-9;
 
   /**

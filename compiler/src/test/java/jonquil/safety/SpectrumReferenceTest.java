@@ -157,4 +157,18 @@ class SpectrumReferenceTest {
     assertEquals(e, o.get().irradiance(), e * 0.01, source);
     assertTrue(o.get().governingLimit().startsWith(effect), o.get().governingLimit());
   }
+
+  @org.junit.jupiter.api.Test
+  void whereTwoLimitsApplyTheCitedTablesNameTheGoverningOne() {
+    // From memory: Table A.1, 450 nm over 1000 s, photochemical 1 C3 W/m2 below thermal 10 W/m2.
+    Outcome<MaximumPermissibleExposure> o = OcularMpe.at(Emission.continuous(450e-9, 1e-3), 1000);
+    assertTrue(
+        o.standard()
+            .endsWith(
+                "governing limit: retinal photochemical (stricter than retinal" + " thermal)"),
+        o.standard());
+    Outcome<MaximumPermissibleExposure> single =
+        OcularMpe.at(Emission.continuous(1064e-9, 1e-3), 10);
+    assertTrue(single.standard().indexOf("governing") < 0, single.standard());
+  }
 }
