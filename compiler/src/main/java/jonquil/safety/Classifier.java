@@ -9,11 +9,12 @@ import jonquil.optics.beam.Clipping;
  * 1/1M), 5 (Class 2/2M), 6 (Class 3R) and 8 (Class 3B) ({@link AccessibleEmissionLimits}).
  *
  * <p>Measurement (Table 10 of Ed. 3, from memory): condition 1 (optically aided, telescope) = 50 mm
- * aperture at 2000 mm, for 302.5–4000 nm only (glass optics pass nothing else); condition 3 (naked
- * eye) = 7 mm aperture at 100 mm, or the limiting aperture where that is larger (11 mm above 100
- * µm), both from the exit, which is taken as the reference point and the beam waist. The accessible
- * emission is the power (energy) through the aperture: P · (1 − exp(−D²/(2w²))), w the 1/e² radius
- * at that distance ({@link jonquil.optics.beam.Clipping}).
+ * aperture at 2000 mm, for 302.5–4000 nm only (glass optics pass nothing else; that Class 1M and 2M
+ * exist only from 302.5 nm to 4000 nm is confirmed by published class summaries of Ed. 3, see
+ * ClassSpectrumTest); condition 3 (naked eye) = 7 mm aperture at 100 mm, or the limiting aperture
+ * where that is larger (11 mm above 100 µm), both from the exit, which is taken as the reference
+ * point and the beam waist. The accessible emission is the power (energy) through the aperture: P ·
+ * (1 − exp(−D²/(2w²))), w the 1/e² radius at that distance ({@link jonquil.optics.beam.Clipping}).
  *
  * <p>Decision: Class 1 (2) when both conditions are within the Class 1 (2) AEL; 1M (2M) when only
  * condition 3 is, and condition 1 stays within the Class 3B AEL; 3R, 3B, 4 decided on condition 3

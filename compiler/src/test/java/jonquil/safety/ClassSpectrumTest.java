@@ -103,4 +103,17 @@ class ClassSpectrumTest {
         AccessibleEmissionLimits.class1(1550e-9, 100, ExtendedSource.ALPHA_MIN),
         1e-9);
   }
+
+  @Test
+  void aWidePulsedBeamSafeOnlyToTheNakedEyeIsClass1m() {
+    // From memory: Tables 3 and 8 with Table 10. 4 uJ at 10 kHz (40 mW) at 1550 nm in a 30 mm
+    // beam: about 10 % passes the 7 mm stop of condition 3 (4.1 mW, below the 9.6 mW Class 1
+    // AEL), nearly all the 50 mm stop of condition 1, which stays within Class 3B (0.125 J per
+    // pulse, 0.5 W). Class 1M exists only for 302.5-4000 nm (published class summaries of Ed. 3).
+    Outcome<Classification> c =
+        Classifier.assess(Emission.pulseTrain(1550e-9, 4e-6, 5e-9, 1e4), 30e-3, 0.1e-3);
+    assertTrue(c.evaluated(), c.reason());
+    assertEquals(HazardClass.CLASS_1M, c.get().hazardClass());
+    assertEquals(0.103, c.get().fractionCondition3(), 0.002);
+  }
 }
