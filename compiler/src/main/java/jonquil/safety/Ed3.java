@@ -9,9 +9,11 @@ import static jonquil.safety.CorrectionFactors.nm;
  * Why it exists: the one place that holds the formulas and constants taken from IEC 60825-1:2014
  * (Edition 3), so that every number can be audited against its source in a single file.
  *
- * <p>Scope: point-source viewing only (apparent source α ≤ α<sub>min</sub> = 1.5 mrad, so C6 = 1),
- * 400 nm ≤ λ &lt; 1250 nm for the eye. Table numbers are those of Edition 3 as remembered; where a
- * value could not be confirmed by a published secondary source it is marked "from memory".
+ * <p>Scope: the retinal hazard region 400 nm ≤ λ &lt; 1250 nm for point and extended sources (C6,
+ * T2, γ_ph: {@link ExtendedSource}); the ultraviolet and far-infrared rows are in {@link
+ * Ed3Ultraviolet} and {@link Ed3Infrared}, the AELs outside these rows in {@link
+ * AccessibleEmissionLimits}. Table numbers are those of Edition 3 as remembered; where a value
+ * could not be confirmed by a published secondary source it is marked "from memory".
  *
  * <p>Confirmed by secondary sources (see the tests for the exact citations):
  *
@@ -71,12 +73,38 @@ final class Ed3 {
    * </ul>
    */
   static double retinalThermal(double lambda, double t) {
+    return retinalThermal(lambda, t, ExtendedSource.ALPHA_MIN);
+  }
+
+  /**
+   * The retinal thermal limit for a source of angular subtense alpha (rad), J/m². Below 10 ps (Ed.
+   * 3 Table A.1, from memory; the same values as ANSI Z136.1-2014 Table 5a, 1.0×10⁻⁷ J/cm² and
+   * 1.0×10⁻⁶ C_C J/cm²): 1×10⁻³ C4 C6 J/m² (400–1050 nm), 1×10⁻² C7 C6 J/m² (1050–1400 nm); the
+   * tables step up by 2 at 10 ps. Extended sources (α &gt; α_min): every row times C6, the rising
+   * row running to T2 and the last row 18 C4 C6 T2^−0.25 W/m² (90 C7 C6 T2^−0.25 above 1050 nm),
+   * Ed. 3 Table A.1 (from memory).
+   */
+  static double retinalThermal(double lambda, double t, double alpha) {
     double c4 = cA(lambda);
     double c7 = c7(lambda);
+    double c6 = ExtendedSource.c6(alpha, t);
+    boolean below1050 = nm(lambda) < 1050;
+    if (t < 1e-11) {
+      return (below1050 ? 1e-3 * c4 : 1e-2 * c7) * c6;
+    }
+    if (alpha <= ExtendedSource.ALPHA_MIN) {
+      LimitRows rows =
+          below1050
+              ? new LimitRows(5e-6, 2e-3 * c4, 10, 18 * c4, 0.75, 10 * c4 * c7)
+              : new LimitRows(1.3e-5, 2e-2 * c7, 10, 90 * c7, 0.75, 10 * c4 * c7);
+      return rows.at(t);
+    }
+    double t2 = ExtendedSource.t2(alpha);
+    double k = below1050 ? 18 * c4 * c7 * c6 : 90 * c7 * c6;
     LimitRows rows =
-        nm(lambda) < 1050
-            ? new LimitRows(5e-6, 2e-3 * c4, 10, 18 * c4, 0.75, 10 * c4 * c7)
-            : new LimitRows(1.3e-5, 2e-2 * c7, 10, 90 * c7, 0.75, 10 * c4 * c7);
+        below1050
+            ? new LimitRows(5e-6, 2e-3 * c4 * c6, t2, k, 0.75, k * Math.pow(t2, -0.25))
+            : new LimitRows(1.3e-5, 2e-2 * c7 * c6, t2, k, 0.75, k * Math.pow(t2, -0.25));
     return rows.at(t);
   }
 
@@ -91,20 +119,70 @@ final class Ed3 {
   }
 
   /**
+   * The photochemical limit for a source of subtense alpha: a source larger than γ_ph is seen only
+   * in part ({@link ExtendedSource#photochemicalDilution}).
+   */
+  static double retinalPhotochemical(double lambda, double t, double alpha) {
+    return retinalPhotochemical(lambda, t) * ExtendedSource.photochemicalDilution(alpha, t);
+  }
+
+  /**
    * Ocular MPE (radiant exposure over t, J/m²): the lower of the thermal and photochemical limits.
    */
   static double ocularMpe(double lambda, double t) {
-    return LimitRows.lowerOf(retinalThermal(lambda, t), retinalPhotochemical(lambda, t));
+    return ocularLimit(lambda, t, ExtendedSource.ALPHA_MIN).exposure();
+  }
+
+  static final String RETINAL_THERMAL = "retinal thermal";
+  static final String RETINAL_PHOTOCHEMICAL = "retinal photochemical";
+
+  /**
+   * The ocular limit over t, J/m², at any wavelength the eye rows cover (180–1250 nm, 1400 nm–1
+   * mm), for a source of subtense alpha, with the effect that governs.
+   */
+  static GoverningLimit ocularLimit(double lambda, double t, double alpha) {
+    double n = nm(lambda);
+    if (n < 400) {
+      return Ed3Ultraviolet.limit(lambda, t);
+    }
+    if (n >= 1400) {
+      return GoverningLimit.only(Ed3Infrared.limit(lambda, t), Ed3Infrared.CORNEA);
+    }
+    return GoverningLimit.stricter(
+        retinalThermal(lambda, t, alpha),
+        RETINAL_THERMAL,
+        retinalPhotochemical(lambda, t, alpha),
+        RETINAL_PHOTOCHEMICAL);
   }
 
   /**
    * Skin MPE, J/m², 400–1400 nm (Table A.5 of Ed. 3, from memory; same values as ANSI Z136.1-2014
-   * Table 7: 2 C_A×10⁻² J/cm², 1.1 C_A t^0.25 J/cm², 0.2 C_A W/cm²): 1 ns–100 ns: 200 C4 J/m²; 100
-   * ns–10 s: 1.1×10⁴ C4 t^0.25 J/m²; 10 s–3×10⁴ s: 2000 C4 W/m².
+   * Table 7: 2 C_A×10⁻² J/cm², 1.1 C_A t^0.25 J/cm², 0.2 C_A W/cm²): below 1 ns: 2×10¹¹ C4 W/m²
+   * (from memory; joins 200 C4 J/m² at 1 ns); 1 ns–100 ns: 200 C4 J/m²; 100 ns–10 s: 1.1×10⁴ C4
+   * t^0.25 J/m²; 10 s–3×10⁴ s: 2000 C4 W/m². Ultraviolet and far infrared: {@link Ed3Ultraviolet},
+   * {@link Ed3Infrared}, the same rows as the eye there.
    */
   static double skinMpe(double lambda, double t) {
+    return skinLimit(lambda, t).exposure();
+  }
+
+  static final String SKIN_THERMAL = "skin thermal";
+
+  /** The skin limit over t at any wavelength from 180 nm to 1 mm, with the effect that governs. */
+  static GoverningLimit skinLimit(double lambda, double t) {
+    double n = nm(lambda);
+    if (n < 400) {
+      return Ed3Ultraviolet.limit(lambda, t);
+    }
+    if (n >= 1400) {
+      return GoverningLimit.only(Ed3Infrared.limit(lambda, t), Ed3Infrared.SKIN);
+    }
     double c4 = cA(lambda);
-    return new LimitRows(1e-7, 200 * c4, 10, 1.1e4 * c4, 0.25, 2000 * c4).at(t);
+    if (t < 1e-9) {
+      return GoverningLimit.only(2e11 * c4 * t, SKIN_THERMAL);
+    }
+    return GoverningLimit.only(
+        new LimitRows(1e-7, 200 * c4, 10, 1.1e4 * c4, 0.25, 2000 * c4).at(t), SKIN_THERMAL);
   }
 
   /**

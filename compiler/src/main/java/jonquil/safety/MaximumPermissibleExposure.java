@@ -18,6 +18,9 @@ package jonquil.safety;
  *     not applied)
  * @param limitingCriterion which criterion gave the value
  * @param table standard, edition and table it came from
+ * @param governingLimit the biological effect whose limit governs, and the more lenient one that
+ *     also applied (e.g. "retinal photochemical (stricter than retinal thermal)"); empty where the
+ *     standard's calculator does not say
  */
 public record MaximumPermissibleExposure(
     double radiantExposure,
@@ -28,7 +31,47 @@ public record MaximumPermissibleExposure(
     double averagePower,
     double repetitivePulse,
     String limitingCriterion,
-    String table) {
+    String table,
+    String governingLimit) {
+
+  /** Without a stated governing effect. */
+  public MaximumPermissibleExposure(
+      double radiantExposure,
+      double irradiance,
+      double exposureDuration,
+      double apertureDiameter,
+      double singlePulse,
+      double averagePower,
+      double repetitivePulse,
+      String limitingCriterion,
+      String table) {
+    this(
+        radiantExposure,
+        irradiance,
+        exposureDuration,
+        apertureDiameter,
+        singlePulse,
+        averagePower,
+        repetitivePulse,
+        limitingCriterion,
+        table,
+        "");
+  }
+
+  /** The same MPE averaged over another aperture and with its governing effect named. */
+  MaximumPermissibleExposure with(double aperture, String governing) {
+    return new MaximumPermissibleExposure(
+        radiantExposure,
+        irradiance,
+        exposureDuration,
+        aperture,
+        singlePulse,
+        averagePower,
+        repetitivePulse,
+        limitingCriterion,
+        table,
+        governing);
+  }
 
   /** The caution that goes with every MPE. */
   public String caution() {

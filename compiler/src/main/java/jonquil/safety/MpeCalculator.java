@@ -96,6 +96,24 @@ public abstract class MpeCalculator {
     return null;
   }
 
+  /** The repetitive-pulse rule for this train; by default the wavelength's. */
+  protected PulseTrain.RepetitiveRule repetitiveRule(Emission e) {
+    return repetitiveRule(e.wavelength());
+  }
+
+  /** The limiting aperture for an exposure of duration t, m; by default the tissue's. */
+  protected double aperture(double lambda, double t) {
+    return tissue.aperture();
+  }
+
+  /**
+   * The effect whose limit governs at (lambda, t), in words, with the more lenient one that also
+   * applied; empty where the calculator does not say.
+   */
+  protected String governing(double lambda, double t) {
+    return "";
+  }
+
   /** Why a train its pulse rules could otherwise judge is still refused, or null. */
   protected String trainRefusal(Emission e) {
     return null;
@@ -130,17 +148,34 @@ public abstract class MpeCalculator {
       return Outcome.notEvaluated(trainRefusal, rulesCited);
     }
     double lambda = e.wavelength();
-    return Outcome.of(
+    MaximumPermissibleExposure train =
         PulseTrain.limit(
             t -> mpe.applyAsDouble(lambda, t),
             e.pulseDuration(),
             e.repetitionRate(),
             exposureDuration,
             rules,
-            repetitiveRule(lambda),
+            repetitiveRule(e),
             tissue.aperture(),
-            trainTable),
-        trainTable);
+            trainTable);
+    // The aperture of the pulse: never larger than that of the whole exposure, so never diluting.
+    double limitedAt =
+        train.limitingCriterion().equals(rules.averagePower())
+            ? exposureDuration
+            : e.pulseDuration();
+    String governing = governing(lambda, limitedAt);
+    return Outcome.of(
+        train.with(aperture(lambda, e.pulseDuration()), governing), cited(trainTable, governing));
+  }
+
+  /**
+   * The tables cited, and where two limits applied, which one governed: a reader of the figure
+   * learns it wherever the standard is shown.
+   */
+  private static String cited(String tables, String governing) {
+    return governing.contains("stricter than")
+        ? tables + "; governing limit: " + governing
+        : tables;
   }
 
   /** One exposure of duration t: continuous wave over t, or a single pulse t long. */
@@ -148,10 +183,20 @@ public abstract class MpeCalculator {
       double lambda, double t, String criterion, boolean singlePulse) {
     double h = mpe.applyAsDouble(lambda, t);
     double single = singlePulse ? h : Double.NaN;
+    String governing = governing(lambda, t);
     return Outcome.of(
         new MaximumPermissibleExposure(
-            h, h / t, t, tissue.aperture(), single, Double.NaN, Double.NaN, criterion, table),
-        table);
+            h,
+            h / t,
+            t,
+            aperture(lambda, t),
+            single,
+            Double.NaN,
+            Double.NaN,
+            criterion,
+            table,
+            governing),
+        cited(table, governing));
   }
 
   /** A refusal of a wavelength, quoted in nanometres to one decimal, and {@code why}. */

@@ -2,7 +2,9 @@ package jonquil.safety;
 
 /**
  * Why it exists: the skin maximum permissible exposure, IEC 60825-1:2014 (Ed. 3) Annex A Table A.5,
- * for 400–1400 nm and 1 ns to 3×10⁴ s, averaged over the 3.5 mm limiting aperture.
+ * from 180 nm to 1 mm and 100 fs to 3×10⁴ s, averaged over the limiting aperture of Table A.3 (3.5
+ * mm; 11 mm above 100 µm). In the ultraviolet the photochemical dose and the thermal limit both
+ * apply and the stricter governs ({@link MaximumPermissibleExposure#governingLimit()}).
  */
 public final class SkinMpe extends MpeCalculator {
   private static final String TABLE = Ed3.MPE_SKIN_TABLE + ", " + Ed3.FACTORS_TABLE;
@@ -10,7 +12,7 @@ public final class SkinMpe extends MpeCalculator {
 
   /** No repetitive-pulse rule: C5 is a retinal-thermal rule (Ed. 3, from memory). */
   private SkinMpe() {
-    super(TABLE, TABLE, TableScope.Tissue.SKIN, PulseRules.NAMES, TABLE, Ed3::skinMpe);
+    super(TABLE, TABLE, TableScope.Tissue.IEC_SKIN, PulseRules.NAMES, TABLE, Ed3::skinMpe);
   }
 
   /**
@@ -24,24 +26,25 @@ public final class SkinMpe extends MpeCalculator {
 
   @Override
   protected String wavelengthRefusal(double lambda) {
-    double n = CorrectionFactors.nm(lambda);
-    if (n < 400 || n >= 1400) {
+    if (lambda < TableScope.LAMBDA_MIN_IEC || lambda > TableScope.LAMBDA_MAX_IEC) {
       return wavelengthRefused(
-          lambda, "is outside 400–1400 nm: skin MPEs for other wavelengths are not implemented");
+          lambda, "is outside 180 nm–1 mm, where the skin tables of Ed. 3 end");
     }
     return null;
   }
 
   @Override
-  protected String durationRefusal(double t) {
-    if (!(t > 0) || t > TableScope.T_MAX) {
-      return "exposure duration must be in (0, 3e4] s";
-    }
-    return t < TableScope.T_MIN_SKIN ? "exposure below 1 ns: not implemented" : null;
+  protected double aperture(double lambda, double t) {
+    return LimitingAperture.skin(lambda);
+  }
+
+  @Override
+  protected String governing(double lambda, double t) {
+    return Ed3.skinLimit(lambda, t).describe();
   }
 
   @Override
   protected String rowsBelowShortestPulse() {
-    return "not implemented";
+    return "Table A.5 starts at 100 fs";
   }
 }

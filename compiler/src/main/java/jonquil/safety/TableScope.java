@@ -9,7 +9,10 @@ package jonquil.safety;
 public final class TableScope {
   private TableScope() {}
 
-  /** Lowest wavelength evaluated, m: the retinal hazard region and both tables' rows start here. */
+  /**
+   * Lowest wavelength of the rows both standards share as implemented, m: the retinal hazard
+   * region; ANSI's implemented rows start here, IEC's at {@link #LAMBDA_MIN_IEC}.
+   */
   public static final double LAMBDA_MIN = 400e-9;
 
   /** Upper end of the evaluated skin range, m (skin rows 400–1400 nm of both tables). */
@@ -19,12 +22,12 @@ public final class TableScope {
   public static final double T_MAX = 3e4;
 
   /**
-   * Shortest pulse evaluated for the eye, s. Both tables have rows below 10 ps (IEC from memory;
-   * ANSI 100 fs–10 ps); they are not implemented, so shorter pulses are "not evaluated".
+   * Shortest pulse evaluated for the eye under ANSI, s: its 100 fs–10 ps rows are not implemented,
+   * so shorter pulses are "not evaluated" there. IEC's rows run from {@link #T_MIN_IEC}.
    */
   public static final double T_MIN_EYE = 1e-11;
 
-  /** Shortest pulse evaluated for the skin, s (rows from 1 ns; below: not implemented). */
+  /** Shortest pulse evaluated for the skin under ANSI, s (rows from 1 ns; IEC: T_MIN_IEC). */
   public static final double T_MIN_SKIN = 1e-9;
 
   /**
@@ -36,9 +39,27 @@ public final class TableScope {
   /** Limiting aperture for the skin, 400–1400 nm: 3.5 mm (IEC Table A.3, ANSI Table 8; memory). */
   public static final double APERTURE_SKIN = 3.5e-3;
 
+  /**
+   * Shortest exposure the IEC 60825-1:2014 (Ed. 3) tables cover, s: 10⁻¹³ s (100 fs), Table A.1 and
+   * A.5 (from memory).
+   */
+  public static final double T_MIN_IEC = 1e-13;
+
+  /** Shortest wavelength of the IEC tables, m (180 nm, Table A.1; from memory). */
+  public static final double LAMBDA_MIN_IEC = 180e-9;
+
+  /** Longest wavelength of the IEC tables, m (1 mm, Table A.1; from memory). */
+  public static final double LAMBDA_MAX_IEC = 1e-3;
+
   /** What an MPE protects: its limiting aperture and the shortest pulse its rows cover (s). */
   public record Tissue(double aperture, double shortestPulse, String shortestPulseText) {
     public static final Tissue EYE = new Tissue(APERTURE_EYE, T_MIN_EYE, "10 ps");
     public static final Tissue SKIN = new Tissue(APERTURE_SKIN, T_MIN_SKIN, "1 ns");
+
+    /** The eye under IEC Ed. 3: rows from 100 fs (aperture per band: {@link LimitingAperture}). */
+    public static final Tissue IEC_EYE = new Tissue(APERTURE_EYE, T_MIN_IEC, "100 fs");
+
+    /** The skin under IEC Ed. 3: rows from 100 fs (aperture per band: {@link LimitingAperture}). */
+    public static final Tissue IEC_SKIN = new Tissue(APERTURE_SKIN, T_MIN_IEC, "100 fs");
   }
 }

@@ -194,12 +194,13 @@ class LinesAreBeamsTest {
 
   @Test
   void aLineWhoseLimitIsUnknownLeavesTheSumNotEvaluated() {
-    // Jonquil has no corneal MPE for 1550 nm: the pair cannot be judged, so it is not met (fail
-    // closed), where judging the total at the 532 nm limit alone would have let it pass.
+    // Jonquil has no MPE for 1300 nm (the 1250-1400 nm corneal/lens dual limit): the pair cannot
+    // be judged, so it is not met (fail closed), where judging the total at the 532 nm limit alone
+    // would have let it pass.
     List<RequirementOutcome> o =
-        outcomes(eyeBench("532 nm", 1e-4, "1550 nm", 1e-4), "exposure at eye <= 100 %");
+        outcomes(eyeBench("532 nm", 1e-4, "1300 nm", 1e-4), "exposure at eye <= 100 %");
     assertEquals(RequirementStatus.NOT_EVALUATED, o.get(0).status());
-    assertTrue(o.get(0).reason().startsWith("line 1550 nm: "), o.get(0).reason());
+    assertTrue(o.get(0).reason().startsWith("line 1300 nm: "), o.get(0).reason());
   }
 
   @Test

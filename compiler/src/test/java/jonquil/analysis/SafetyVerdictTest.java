@@ -61,7 +61,7 @@ class SafetyVerdictTest {
   void aWavelengthOutsideTheImplementedTablesIsNotEvaluatedRatherThanGuessed() {
     RequirementOutcome o =
         check(
-                "source src { wavelength 1550 nm; power 10 mW; beam waist 1 mm }\n",
+                "source src { wavelength 1300 nm; power 10 mW; beam waist 1 mm }\n",
                 "  hazard class <= 1 at src")
             .get(0);
     assertEquals(RequirementStatus.NOT_EVALUATED, o.status());

@@ -22,20 +22,23 @@ class NotEvaluatedFailsClosedTest {
   private static final String PROBE =
       "probe eye { aperture 7 mm }\ntrain t { s -> 1 m -> eye }\nrequire {\n";
 
-  /** 355 nm lies below the ultraviolet rows this version implements (definition of its scope). */
+  /**
+   * 1300 nm lies in 1250–1400 nm, where this version does not implement the corneal/lens limit
+   * (definition of its scope).
+   */
   static final String ULTRAVIOLET =
-      "source s { wavelength 355 nm; power 1 W; beam waist 1 mm }\n"
+      "source s { wavelength 1300 nm; power 1 W; beam waist 1 mm }\n"
           + PROBE
           + "  hazard class <= 1 at s\n}\n";
 
-  /** 1550 nm lies outside the retinal rows 400–1400 nm this version implements. */
+  /** 1320 nm lies in the same unimplemented 1250–1400 nm rows. */
   static final String TELECOM_SAFETY_ONLY =
-      "source s { wavelength 1550 nm; power 2 W; beam waist 1 mm }\n"
+      "source s { wavelength 1320 nm; power 2 W; beam waist 1 mm }\n"
           + PROBE
           + "  hazard class <= 1 at s\n  exposure at eye <= 100 %\n}\n";
 
   static final String NOHD_UNSUPPORTED =
-      "source s { wavelength 1550 nm; power 2 W; beam waist 1 mm }\n"
+      "source s { wavelength 1320 nm; power 2 W; beam waist 1 mm }\n"
           + PROBE
           + "  nohd <= 1 m at s\n}\n";
 
@@ -54,7 +57,7 @@ class NotEvaluatedFailsClosedTest {
     CliRun text = run(ULTRAVIOLET);
     assertEquals(1, text.exitCode(), text.out());
     assertTrue(text.out().contains("error: requirement not evaluated"), text.out());
-    assertTrue(text.out().contains("below 400 nm"), text.out());
+    assertTrue(text.out().contains("1250–1400 nm"), text.out());
     assertTrue(text.out().contains("[J613]"), text.out());
     assertEquals(1, run(ULTRAVIOLET, "--strict").exitCode());
   }
@@ -82,11 +85,11 @@ class NotEvaluatedFailsClosedTest {
 
   @Test
   void aPulsedSourceKnownToBeAboveClass3RFailsClassOne() throws IOException {
-    // 10 µJ, 100 ns at 905 nm, 10 kHz: the classifier places it above Class 3R (IEC 60825-1:2014
-    // Table 6 AEL exceeded, single-pulse Class 3B AEL of Table 8 not implemented), so a bound of
-    // Class 1 is broken whatever the exact class.
+    // 10 µJ, 100 ns at 308 nm, 10 kHz: the classifier places it above Class 3R (IEC 60825-1:2014
+    // Table 6 AEL exceeded, the 302.5-315 nm single-pulse Class 3B AEL of Table 8 not
+    // implemented), so a bound of Class 1 is broken whatever the exact class.
     String lidar =
-        "source s { wavelength 905 nm; pulse_energy 10 uJ; pulse_duration 100 ns;"
+        "source s { wavelength 308 nm; pulse_energy 10 uJ; pulse_duration 100 ns;"
             + " repetition_rate 10 kHz; beam waist 1 mm }\n"
             + PROBE
             + "  hazard class <= 1 at s\n}\n";

@@ -56,6 +56,6 @@ class EyewearTest {
 
   @Test
   void outsideCoverageIsNotEvaluated() {
-    assertFalse(Eyewear.required(Emission.continuous(250e-9, 1), 1e-3, 10).evaluated());
+    assertFalse(Eyewear.required(Emission.continuous(1300e-9, 1), 1e-3, 10).evaluated());
   }
 }

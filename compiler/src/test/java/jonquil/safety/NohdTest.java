@@ -59,6 +59,6 @@ class NohdTest {
 
   @Test
   void outsideCoverageIsNotEvaluated() {
-    assertFalse(Nohd.of(Emission.continuous(10.6e-6, 10), 5e-3, 2e-3, 10).evaluated());
+    assertFalse(Nohd.of(Emission.continuous(1.3e-6, 10), 5e-3, 2e-3, 10).evaluated());
   }
 }

@@ -121,11 +121,11 @@ class OcularMpeTest {
   @CsvSource(
       delimiter = '|',
       value = {
-        "10600 | 0     | 10   | CO2 laser, outside 400-1400 nm",
-        "250   | 0     | 10   | ultraviolet",
+        "2e6   | 0     | 10   | beyond 1 mm, where the tables end",
+        "150   | 0     | 10   | below 180 nm, where the tables start",
         "1300  | 0     | 10   | 1250-1400 nm: corneal dual limit not implemented",
-        "1550  | 0     | 10   | beyond 1400 nm",
-        "532   | 1e-12 | 0.25 | sub-10-ps pulse",
+        "1350  | 1e-8  | 10   | 1250-1400 nm, pulsed",
+        "532   | 1e-14 | 0.25 | pulse below 100 fs, where Table A.1 starts",
         "532   | 0     | 1e5  | beyond 3e4 s",
       })
   void outsideCoverageIsNotEvaluated(double nm, double tau, double t, String why) {

@@ -51,8 +51,8 @@ class SkinMpeTest {
 
   @Test
   void outsideCoverage() {
-    assertFalse(SkinMpe.at(Emission.continuous(10.6e-6, 1), 10).evaluated());
-    assertFalse(SkinMpe.at(Emission.continuous(250e-9, 1), 10).evaluated());
-    assertFalse(SkinMpe.at(Emission.singlePulse(1064e-9, 1e-3, 5e-10), 1).evaluated());
+    assertFalse(SkinMpe.at(Emission.continuous(2e-3, 1), 10).evaluated());
+    assertFalse(SkinMpe.at(Emission.continuous(150e-9, 1), 10).evaluated());
+    assertFalse(SkinMpe.at(Emission.singlePulse(1064e-9, 1e-3, 5e-14), 1).evaluated());
   }
 }
