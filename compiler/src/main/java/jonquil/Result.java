@@ -69,4 +69,13 @@ public record Result(
   private static <V> Map<Path, V> byPath(Map<Path, V> m) {
     return java.util.Collections.unmodifiableMap(new java.util.TreeMap<>(m));
   }
+
+  /**
+   * True when some checked spec has a 'yield' requirement (an editor draws it in a second pass).
+   */
+  public boolean hasYields() {
+    return models.values().stream()
+        .flatMap(m -> m.requirements().stream())
+        .anyMatch(q -> q.yield().isPresent());
+  }
 }

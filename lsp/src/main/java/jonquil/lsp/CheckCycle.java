@@ -133,10 +133,7 @@ final class CheckCycle implements CheckScheduler.Task {
 
   /** True when some checked spec has a 'yield' requirement, which the first pass left undrawn. */
   private static boolean drawsYields(List<Result> results) {
-    return results.stream()
-        .flatMap(r -> r.models().values().stream())
-        .flatMap(m -> m.requirements().stream())
-        .anyMatch(q -> q.yield().isPresent());
+    return results.stream().anyMatch(Result::hasYields);
   }
 
   /** After a failed run: every open document shows that checking failed, at its current version. */
