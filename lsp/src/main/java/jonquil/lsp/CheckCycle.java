@@ -79,19 +79,12 @@ final class CheckCycle implements CheckScheduler.Task {
                   .computeIfAbsent(ProjectRoot.owning(doc.path(), roots), k -> new ArrayList<>())
                   .add(doc.path());
             });
-    List<Result> results = new ArrayList<>();
-    for (Map.Entry<Path, List<Path>> root : byRoot.entrySet()) {
-      Optional<Result> result =
-          Checker.check(
-              Workspace.withOverlay(root.getKey(), buffers).withMemo(memo),
-              root.getValue(),
-              jonquil.CheckOptions.EDITOR,
-              superseded);
-      if (result.isEmpty()) {
-        return false; // a newer edit is waiting; its check publishes instead
-      }
-      results.add(result.get());
+    Optional<List<Result>> quick =
+        checkAll(byRoot, buffers, jonquil.CheckOptions.EDITOR, superseded);
+    if (quick.isEmpty()) {
+      return false; // a newer edit is waiting; its check publishes instead
     }
+    List<Result> results = quick.get();
     memo.retainOnly(sources(results).keySet());
     snapshots.publish(new Snapshots.Snapshot(results, versions, now.generation()));
     publish(open, results);
@@ -99,25 +92,38 @@ final class CheckCycle implements CheckScheduler.Task {
       return true;
     }
     // Second pass: the yields, so the editor ends with the gate's verdicts (fail closed there too).
-    // The parse memo makes everything but the draws cheap; a newer edit stops the draws.
-    // Any edit stops them, even one the scheduler's max delay would let the first pass finish.
+    // The parse memo makes everything but the draws cheap. Any edit stops the draws, even one the
+    // scheduler's max delay would let the first pass finish.
     BooleanSupplier edited = () -> superseded.getAsBoolean() || edited(versions);
-    List<Result> full = new ArrayList<>();
+    Optional<List<Result>> full = checkAll(byRoot, buffers, jonquil.CheckOptions.FULL, edited);
+    if (full.isEmpty()) {
+      return false;
+    }
+    snapshots.publish(new Snapshots.Snapshot(full.get(), versions, now.generation()));
+    publish(open, full.get());
+    return true;
+  }
+
+  /** Each root's open files checked with {@code options}; empty once a newer edit supersedes. */
+  private Optional<List<Result>> checkAll(
+      Map<Path, List<Path>> byRoot,
+      Map<Path, String> buffers,
+      jonquil.CheckOptions options,
+      BooleanSupplier superseded) {
+    List<Result> out = new ArrayList<>();
     for (Map.Entry<Path, List<Path>> root : byRoot.entrySet()) {
       Optional<Result> result =
           Checker.check(
               Workspace.withOverlay(root.getKey(), buffers).withMemo(memo),
               root.getValue(),
-              jonquil.CheckOptions.FULL,
-              edited);
+              options,
+              superseded);
       if (result.isEmpty()) {
-        return false;
+        return Optional.empty();
       }
-      full.add(result.get());
+      out.add(result.get());
     }
-    snapshots.publish(new Snapshots.Snapshot(full, versions, now.generation()));
-    publish(open, full);
-    return true;
+    return Optional.of(out);
   }
 
   /** True when an open document is no longer at the version this run checked. */
