@@ -10,9 +10,9 @@ import static jonquil.safety.CorrectionFactors.nm;
  * from 180 nm to 1 mm, for a source of angular subtense α.
  *
  * <p>Class 1, 400–1250 nm, point source: the rows of {@link Ed3#class1Ael} (Table 3 as printed,
- * from memory). Elsewhere the Class 1 AEL is derived, not transcribed: the MPE of Table A.1 times
- * the area of the limiting aperture of Table A.3 for the same duration, which is how Table 3 is
- * built (from memory; ClassifierTest checks the derivation against the printed rows to 3 % where
+ * from memory). Elsewhere the Class 1 AEL is derived, not copied from a table: the MPE of Table A.1
+ * times the area of the limiting aperture of Table A.3 for the same duration, which is how Table 3
+ * is built (from memory; ClassifierTest checks the derivation against the printed rows to 3 % where
  * both exist, and the 10 mW long-exposure Class 1 limit at 1400–4000 nm, from memory, is 1000 W/m²
  * × the 3.5 mm aperture = 9.6 mW). Below 10 ps and for extended sources the retinal rows are
  * derived the same way. Class 2 (400–700 nm): the Class 1 AEL below 0.25 s, 10⁻³ C6 W beyond

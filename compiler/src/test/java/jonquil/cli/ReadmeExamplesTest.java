@@ -26,10 +26,10 @@ import org.junit.jupiter.api.io.TempDir;
  *
  * <p>A fenced block tagged {@code jonq} is a spec file; its first line, {@code // <path>}, names it
  * relative to the example directory. Every such file is written, exactly as printed, into one
- * directory holding nothing else. A block tagged {@code console} is a transcript: a line {@code $
+ * directory holding nothing else. A block tagged {@code console} is a recorded run: a line {@code $
  * java -jar lsp/target/jonquil.jar ARGS} is run in that directory and must print exactly the lines
  * that follow it; {@code $ echo $?} is followed by the exit status the run must give. A spec
- * example must be checked by a transcript, directly or through a {@code use}, and a block that
+ * example must be checked by a recorded run, directly or through a {@code use}, and a block that
  * looks like a spec must be tagged {@code jonq}, so no example escapes.
  */
 class ReadmeExamplesTest {
@@ -85,7 +85,7 @@ class ReadmeExamplesTest {
   }
 
   @Test
-  void everySpecExampleIsCheckedByATranscriptOrUsedByOne() throws IOException {
+  void everySpecExampleIsCheckedByARecordedRunOrUsedByOne() throws IOException {
     List<Block> blocks = readmeBlocks();
     Map<String, String> files = specFiles(blocks);
     assertTrue(files.size() >= 3, "the tour, its part library and the typo example: " + files);
@@ -113,7 +113,7 @@ class ReadmeExamplesTest {
   }
 
   @TestFactory
-  Stream<DynamicTest> everyTranscriptPrintsExactlyWhatTheReadmeShows(@TempDir Path dir)
+  Stream<DynamicTest> everyRecordedRunPrintsExactlyWhatTheReadmeShows(@TempDir Path dir)
       throws IOException {
     List<Block> blocks = readmeBlocks();
     for (Map.Entry<String, String> f : specFiles(blocks).entrySet()) {
@@ -124,18 +124,18 @@ class ReadmeExamplesTest {
     List<DynamicTest> tests = new ArrayList<>();
     for (Block b : blocks) {
       if (b.tag().equals("console") && b.text().startsWith(RUN)) {
-        tests.add(transcript(dir, b.text()));
+        tests.add(recordedRun(dir, b.text()));
       }
     }
     assertTrue(tests.size() >= 2, "the tour's run and the typo example's run");
     return tests.stream();
   }
 
-  private static DynamicTest transcript(Path dir, String text) {
+  private static DynamicTest recordedRun(Path dir, String text) {
     List<String> lines = text.lines().toList();
     String command = lines.get(0).substring(RUN.length());
     int echo = lines.indexOf("$ echo $?");
-    assertTrue(echo > 0 && echo == lines.size() - 2, "a transcript ends with its exit status");
+    assertTrue(echo > 0 && echo == lines.size() - 2, "a recorded run ends with its exit status");
     String printed = String.join("\n", lines.subList(1, echo)) + "\n";
     int status = Integer.parseInt(lines.get(echo + 1));
     return DynamicTest.dynamicTest(

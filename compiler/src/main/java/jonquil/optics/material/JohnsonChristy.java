@@ -8,8 +8,7 @@ package jonquil.optics.material;
  * Review B 6(12), 4370–4379 (1972), doi:10.1103/PhysRevB.6.4370, table of n and k against photon
  * energy (0.64 eV to 6.60 eV), room temperature. Each row is {wavelength in µm, n, k}; the
  * wavelengths are the paper's photon energies converted with λ = hc/E and rounded to four figures.
- * Values transcribed from a public-domain transcription of the table and compared with it row by
- * row.
+ * Values copied from a public-domain restatement of the table and compared with it row by row.
  */
 final class JohnsonChristy {
   private JohnsonChristy() {}

@@ -12,9 +12,9 @@ import java.util.Optional;
  * <p>Names are the canonical names of {@code jonquil.resolve.CatalogSpellings}; aliases are
  * resolved there. All data are embedded below next to their source; nothing is read at run time.
  * Coefficients are copied as printed in the cited source (checked against a public-domain
- * transcription of each source); the sources' wavelengths are in µm and are converted to metres
- * here. Where a comment says "from memory", that detail (not the coefficients) was recalled rather
- * than confirmed in the source.
+ * restatement of each source); the sources' wavelengths are in µm and are converted to metres here.
+ * Where a comment says "from memory", that detail (not the coefficients) was recalled rather than
+ * confirmed in the source.
  */
 public final class MaterialCatalog {
   private MaterialCatalog() {}
@@ -55,7 +55,7 @@ public final class MaterialCatalog {
 
     // Daimon & Masumura 2007, coefficients of their fit for 20.0 °C, n² − 1 = Σ B λ²/(λ² − C), C in
     // µm². Absolute: the paper converts its prism-in-air measurements to indices relative to
-    // vacuum (from memory; the public transcription of this fit says "refractive index is absolute
+    // vacuum (from memory; the public restatement of this fit says "refractive index is absolute
     // (relative to vacuum)"). Until this basis was checked the entry was marked relative to air,
     // which multiplied it by n_air once more (+3.6e-4 at 633 nm).
     Sellmeier water =
