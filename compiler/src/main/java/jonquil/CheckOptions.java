@@ -1,14 +1,18 @@
 package jonquil;
 
+import java.util.Optional;
 import jonquil.analysis.YieldDraws;
+import jonquil.resolve.SafetyStandard;
 
 /**
  * How much a check computes. The command line computes everything; an editor re-checks on every
  * pause in typing, so it leaves out the Monte Carlo yields (hundreds of re-solves), which the CI
  * gate still evaluates. A workspace index needs only names, so it stops after resolution and
- * computes no physics at all.
+ * computes no physics at all. A standard given here ('check --standard') gates the safety
+ * requirements in place of the one the spec chooses.
  */
-public record CheckOptions(boolean yields, boolean analyses, YieldDraws draws) {
+public record CheckOptions(
+    boolean yields, boolean analyses, YieldDraws draws, Optional<SafetyStandard> standard) {
   public static final CheckOptions FULL = new CheckOptions(true, true);
   public static final CheckOptions EDITOR = new CheckOptions(false, true);
 
@@ -20,8 +24,18 @@ public record CheckOptions(boolean yields, boolean analyses, YieldDraws draws) {
     this(yields, analyses, YieldDraws.DEFAULT);
   }
 
+  /** Yields drawn as {@code draws} says; the spec's own standard. */
+  public CheckOptions(boolean yields, boolean analyses, YieldDraws draws) {
+    this(yields, analyses, draws, Optional.empty());
+  }
+
   /** The same, with yields drawn as {@code draws} says ('--builds', '--seed'). */
   public CheckOptions withDraws(YieldDraws draws) {
-    return new CheckOptions(yields, analyses, draws);
+    return new CheckOptions(yields, analyses, draws, standard);
+  }
+
+  /** The same, with {@code chosen} gating the safety requirements whatever the spec says. */
+  public CheckOptions withStandard(SafetyStandard chosen) {
+    return new CheckOptions(yields, analyses, draws, Optional.of(chosen));
   }
 }
