@@ -123,7 +123,7 @@ final class SafetyVerdicts {
                   },
                   v -> "OD " + QuantityFormat.format(v, Dimension.DIMENSIONLESS));
           if (!od.evaluated()) {
-            return RequirementEvaluator.Verdict.notEvaluated(unevaluated(od) + " " + beside);
+            return RequirementEvaluator.Verdict.notEvaluated(unevaluated(od, beside));
           }
           RequirementEvaluator.Verdict v =
               RequirementEvaluator.compare(c, od.get().atAperture(), "OD", "");
@@ -170,7 +170,7 @@ final class SafetyVerdicts {
     String beside =
         StandardComparison.beside(governing, o.evaluated() ? o.get() : Double.NaN, under, shown);
     if (!o.evaluated()) {
-      return RequirementEvaluator.Verdict.notEvaluated(unevaluated(o) + " " + beside);
+      return RequirementEvaluator.Verdict.notEvaluated(unevaluated(o, beside));
     }
     return withNote(
         RequirementEvaluator.compare(c, o.get(), unit, ""),
@@ -197,6 +197,17 @@ final class SafetyVerdicts {
         + " ("
         + o.standard()
         + "); not evaluated here, so a qualified person must assess the emission. "
+        + o.caution();
+  }
+
+  /** As above, with the other standards' figures stated before the caution. */
+  private static String unevaluated(Outcome<?> o, String beside) {
+    return o.reason()
+        + " ("
+        + o.standard()
+        + "); not evaluated here, so a qualified person must assess the emission; "
+        + beside
+        + ". "
         + o.caution();
   }
 
