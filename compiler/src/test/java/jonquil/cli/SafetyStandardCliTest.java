@@ -103,4 +103,30 @@ class SafetyStandardCliTest {
     assertTrue(
         r.err().contains("unknown safety standard 'directiv'; did you mean 'directive'?"), r.err());
   }
+
+  @Test
+  void sarifCarriesTheGoverningStandardAndTheComparison() throws IOException {
+    CliRun r = run(RANGING, "--standard", "directive", "--format", "sarif");
+    assertEquals(0, r.exitCode(), r.out());
+    assertTrue(r.out().contains("Directive 2006/25/EC; beside it: IEC 60825-1:2014"), r.out());
+    assertTrue(r.out().contains("Computed estimate only"), r.out());
+  }
+
+  @Test
+  void theStandardIsChosenOnceWithItsNameAlone() throws IOException {
+    CliRun twice = run("standard directive\nstandard ansi\n" + RANGING);
+    assertEquals(1, twice.exitCode(), twice.out());
+    assertTrue(twice.out().contains("the safety standard is chosen twice"), twice.out());
+    CliRun withBlock = run("standard directive { edition 2006 }\n" + RANGING);
+    assertEquals(1, withBlock.exitCode(), withBlock.out());
+    assertTrue(withBlock.out().contains("write the standard's name alone"), withBlock.out());
+  }
+
+  @Test
+  void aPartLibraryMayNotChooseTheStandard() throws IOException {
+    Files.writeString(dir.resolve("parts.jonq"), "standard directive\nprobe spare\n");
+    CliRun r = run("use \"parts.jonq\"\n" + RANGING);
+    assertEquals(1, r.exitCode(), r.out());
+    assertTrue(r.out().contains("choose the safety standard in the main spec"), r.out());
+  }
 }
