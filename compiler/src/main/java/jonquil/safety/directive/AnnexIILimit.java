@@ -24,8 +24,16 @@ abstract class AnnexIILimit extends MpeCalculator {
   private static final TableScope.Tissue RANGE =
       new TableScope.Tissue(Double.NaN, AnnexII.T_MIN, "1e-13 s");
 
+  private final String tables;
+
+  /**
+   * @param tables every table the limit draws on, cited for a pulse train, whose single pulses and
+   *     exposure duration may fall in different tables
+   * @param limit the radiant-exposure limit (J m⁻²) at a wavelength (m) over a duration (s)
+   */
   AnnexIILimit(String tables, DoubleBinaryOperator limit) {
     super(tables, tables + "; " + AnnexII.REPETITIVE, RANGE, NAMES, AnnexII.REPETITIVE, limit);
+    this.tables = tables;
   }
 
   /** The table an answer at this wavelength and duration comes from. */
@@ -42,10 +50,12 @@ abstract class AnnexIILimit extends MpeCalculator {
     }
     MaximumPermissibleExposure m = o.get();
     double lambda = e.wavelength();
-    String table = table(lambda, m.exposureDuration()) + "; " + AnnexII.FACTORS;
-    if (e.pulsed() && !e.singlePulseOnly()) {
-      table += "; " + AnnexII.REPETITIVE;
-    }
+    boolean train = e.pulsed() && !e.singlePulseOnly();
+    String table =
+        (train ? tables : table(lambda, m.exposureDuration()))
+            + "; "
+            + AnnexII.FACTORS
+            + (train ? "; " + AnnexII.REPETITIVE : "");
     return Outcome.of(
         new MaximumPermissibleExposure(
             m.radiantExposure(),

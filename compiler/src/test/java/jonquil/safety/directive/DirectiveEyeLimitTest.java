@@ -104,6 +104,8 @@ class DirectiveEyeLimitTest {
     assertEquals(0.09 * Math.pow(1000, -0.25), m.radiantExposure(), 1e-6);
     assertTrue(m.limitingCriterion().startsWith("rule 3"), m.limitingCriterion());
     assertTrue(m.table().contains("Table 2.6"), m.table());
+    // Its single pulses come from Table 2.2, its 10 s exposure from Table 2.3: both are cited.
+    assertTrue(m.table().contains("Table 2.2") && m.table().contains("Table 2.3"), m.table());
   }
 
   @Test
