@@ -130,13 +130,14 @@ public final class Checker {
           found.addAll(parsed.get(p).diagnostics());
         }
         found.addAll(loader.diagnostics());
-        model =
+        ResolvedModel resolved =
             Resolver.resolve(
                 root,
                 loader.closure(),
                 loader.edges(),
                 loader.dataFiles(),
                 loader.dataFileProblems());
+        model = options.standard().map(resolved::withStandard).orElse(resolved);
         loader
             .dataFiles()
             .forEach((p, text) -> dataSources.putIfAbsent(p, new SourceFile(p, text)));

@@ -120,7 +120,11 @@ final class LineSafety {
             value,
             first.unit(),
             // The peak OD a line's own note states is that line's alone: not the sum's.
-            how + "; " + first.text().replaceFirst("OD [0-9.]+ at the beam's peak; ", ""));
+            // Nor are the other standards' figures beside it.
+            how
+                + "; "
+                + StandardComparison.without(
+                    first.text().replaceFirst("OD [0-9.]+ at the beam's peak; ", "")));
     return combined.shownIn(first.shownUnit());
   }
 

@@ -4,19 +4,24 @@ import java.util.Optional;
 import jonquil.optics.beam.Irradiance;
 import jonquil.resolve.Param;
 import jonquil.resolve.ResolvedElement;
+import jonquil.resolve.SafetyStandard;
 import jonquil.safety.Classifier;
 import jonquil.safety.Emission;
 import jonquil.safety.Eyewear;
 import jonquil.safety.HazardClass;
+import jonquil.safety.MaximumPermissibleExposure;
 import jonquil.safety.Nohd;
 import jonquil.safety.OcularMpe;
 import jonquil.safety.OpticalDensity;
 import jonquil.safety.Outcome;
+import jonquil.safety.ansi.AnsiOcularMpe;
+import jonquil.safety.directive.DirectiveEyeLimit;
 
 /**
  * Eye-safety figures of the solved train: the hazard class, NOHD and eyewear OD of a source, and
- * the exposure at a probe against the ocular MPE (IEC 60825-1:2014 as implemented in
- * jonquil.safety). Every figure keeps its standard and the caution.
+ * the exposure at a probe against the ocular limit of the chosen standard (IEC 60825-1:2014 unless
+ * the spec or the command line chooses another; the hazard class is IEC's alone, the other
+ * standards defining no classes here). Every figure keeps its standard and the caution.
  */
 final class SafetyModel {
   /**
@@ -62,18 +67,51 @@ final class SafetyModel {
         2 * mode.divergence());
   }
 
-  static Outcome<Double> nohd(ResolvedElement source, PortValue exit) {
+  /** The ocular limit of a standard for an emission over an exposure duration (s). */
+  static Outcome<MaximumPermissibleExposure> ocularMpe(
+      SafetyStandard standard, Emission e, double exposureTime) {
+    return switch (standard) {
+      case IEC_60825_1 -> OcularMpe.at(e, exposureTime);
+      case DIRECTIVE_2006_25 -> DirectiveEyeLimit.at(e, exposureTime);
+      case ANSI_Z136_1 -> AnsiOcularMpe.at(e, exposureTime);
+    };
+  }
+
+  /** The limiting aperture of a standard's ocular limit here, m; 7 mm where it has none. */
+  static double limitingAperture(
+      SafetyStandard standard, double wavelength, PortValue at, double exposureTime) {
+    var mpe = ocularMpe(standard, emission(wavelength, at.power(), at.pulses()), exposureTime);
+    return mpe.evaluated() ? mpe.get().apertureDiameter() : OcularMpe.LIMITING_APERTURE;
+  }
+
+  static Outcome<Double> nohd(SafetyStandard standard, ResolvedElement source, PortValue exit) {
     if (exit.mode().isEmpty()) {
       return Outcome.notEvaluated(
-          "the beam size is unknown: give the source a 'beam' line", "IEC 60825-1:2014");
+          "the beam size is unknown: give the source a 'beam' line", standard.title());
     }
     var mode = exit.mode().get();
     double wl = exit.wavelength();
-    return Nohd.of(
-        emission(wl, exit.power(), exit.pulses()),
-        2 * mode.radius(),
-        2 * mode.divergence(),
-        defaultExposureTime(wl));
+    Emission e = emission(wl, exit.power(), exit.pulses());
+    return switch (standard) {
+      case IEC_60825_1 ->
+          Nohd.of(e, 2 * mode.radius(), 2 * mode.divergence(), defaultExposureTime(wl));
+      case DIRECTIVE_2006_25, ANSI_Z136_1 -> {
+        // Nohd.of's conversion of the 1/e² beam to the 1/e values of the formula, with this
+        // standard's limit in place of IEC's.
+        var mpe = ocularMpe(standard, e, defaultExposureTime(wl));
+        String cited = "NOHD = (sqrt(4P/(pi MPE)) - a)/phi under " + mpe.standard();
+        if (!mpe.evaluated()) {
+          yield Outcome.notEvaluated(mpe.reason(), cited);
+        }
+        double a = 2 * mode.radius() / Math.sqrt(2);
+        double phi = 2 * mode.divergence() / Math.sqrt(2);
+        Outcome<Double> d =
+            e.pulsed()
+                ? Nohd.forLimit(e.pulseEnergy(), a, phi, mpe.get().radiantExposure())
+                : Nohd.forLimit(e.averagePower(), a, phi, mpe.get().irradiance());
+        yield Outcome.of(d.get(), cited);
+      }
+    };
   }
 
   /**
@@ -90,17 +128,27 @@ final class SafetyModel {
    */
   static Outcome<Double> mpeFraction(
       double wavelength, PortValue at, double exposureTime, double probeAperture) {
+    return mpeFraction(SafetyStandard.IEC_60825_1, wavelength, at, exposureTime, probeAperture);
+  }
+
+  /** As above, against the ocular limit of {@code standard}, over its own limiting aperture. */
+  static Outcome<Double> mpeFraction(
+      SafetyStandard standard,
+      double wavelength,
+      PortValue at,
+      double exposureTime,
+      double probeAperture) {
     if (at.mode().isEmpty()) {
       return Outcome.notEvaluated(
-          "the beam size is unknown: give the source a 'beam' line", "IEC 60825-1:2014");
+          "the beam size is unknown: give the source a 'beam' line", standard.title());
     }
     Emission e = emission(wavelength, at.power(), at.pulses());
-    var mpe = OcularMpe.at(e, exposureTime);
+    var mpe = ocularMpe(standard, e, exposureTime);
     if (!mpe.evaluated()) {
       return Outcome.notEvaluated(mpe.reason(), mpe.standard());
     }
     double radius = at.mode().get().radius();
-    double aperture = Math.min(OcularMpe.LIMITING_APERTURE, probeAperture);
+    double aperture = Math.min(mpe.get().apertureDiameter(), probeAperture);
     double fraction =
         e.pulsed()
             ? Irradiance.meanOverAperture(e.pulseEnergy(), radius, aperture)
@@ -110,12 +158,37 @@ final class SafetyModel {
     return Outcome.of(fraction, mpe.standard());
   }
 
-  static Outcome<OpticalDensity> eyewear(double wavelength, PortValue at, double exposureTime) {
+  static Outcome<OpticalDensity> eyewear(
+      SafetyStandard standard, double wavelength, PortValue at, double exposureTime) {
     if (at.mode().isEmpty()) {
       return Outcome.notEvaluated(
-          "the beam size is unknown: give the source a 'beam' line", "IEC 60825-1:2014");
+          "the beam size is unknown: give the source a 'beam' line", standard.title());
     }
-    return Eyewear.required(
-        emission(wavelength, at.power(), at.pulses()), 2 * at.mode().get().radius(), exposureTime);
+    Emission e = emission(wavelength, at.power(), at.pulses());
+    double diameter = 2 * at.mode().get().radius();
+    return switch (standard) {
+      case IEC_60825_1 -> Eyewear.required(e, diameter, exposureTime);
+      case DIRECTIVE_2006_25, ANSI_Z136_1 -> {
+        // Eyewear.required's reading (over the limiting aperture and at the peak) against this
+        // standard's limit and aperture.
+        var mpe = ocularMpe(standard, e, exposureTime);
+        String cited = "OD = log10(H/MPE) under " + mpe.standard();
+        if (!mpe.evaluated()) {
+          yield Outcome.notEvaluated(mpe.reason(), cited);
+        }
+        double q = e.pulsed() ? e.pulseEnergy() : e.averagePower();
+        double limit = e.pulsed() ? mpe.get().radiantExposure() : mpe.get().irradiance();
+        double ap = Irradiance.meanOverAperture(q, diameter / 2, mpe.get().apertureDiameter());
+        double peak = Irradiance.peak(q, diameter / 2);
+        yield Outcome.of(
+            new OpticalDensity(
+                Eyewear.forLimit(ap, limit).get(),
+                Eyewear.forLimit(peak, limit).get(),
+                ap,
+                peak,
+                limit),
+            cited);
+      }
+    };
   }
 }

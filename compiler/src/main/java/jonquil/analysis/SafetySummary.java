@@ -10,6 +10,7 @@ import jonquil.resolve.Category;
 import jonquil.resolve.ElementKind;
 import jonquil.resolve.ResolvedElement;
 import jonquil.resolve.ResolvedModel;
+import jonquil.resolve.SafetyStandard;
 import jonquil.safety.HazardClass;
 import jonquil.safety.Outcome;
 
@@ -54,8 +55,8 @@ public final class SafetySummary {
               jonquil.safety.OcularMpe.at(emission, t),
               jonquil.safety.SkinMpe.at(emission, t),
               jonquil.safety.ansi.AnsiOcularMpe.at(emission, t),
-              SafetyModel.nohd(e, exit.get()),
-              SafetyModel.eyewear(wl, exit.get(), t),
+              SafetyModel.nohd(SafetyStandard.IEC_60825_1, e, exit.get()),
+              SafetyModel.eyewear(SafetyStandard.IEC_60825_1, wl, exit.get(), t),
               t));
     }
     return out;

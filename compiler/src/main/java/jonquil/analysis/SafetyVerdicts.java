@@ -8,13 +8,18 @@ import jonquil.resolve.ResolvedElement;
 import jonquil.resolve.ResolvedModel;
 import jonquil.resolve.ResolvedRequirement;
 import jonquil.resolve.ResolvedRequirement.Criterion;
+import jonquil.resolve.SafetyStandard;
 import jonquil.safety.HazardClass;
 import jonquil.safety.Outcome;
+import jonquil.units.Dimension;
+import jonquil.units.QuantityFormat;
 
 /**
  * Requirements on eye safety: hazard class and NOHD of a source, exposure against the MPE and the
- * eyewear OD needed at a place. Each verdict names the standard it used and carries the caution
- * that a laser safety officer must confirm it.
+ * eyewear OD needed at a place. The model's standard gates them (the hazard class is IEC 60825-1's
+ * whatever the choice); NOHD, exposure and OD state the other standards' figures beside. Each
+ * verdict names the standard it used and carries the caution that a laser safety officer must
+ * confirm it.
  */
 final class SafetyVerdicts {
   private SafetyVerdicts() {}
@@ -63,6 +68,10 @@ final class SafetyVerdicts {
             .get()
             .number(Param.EXPOSURE_TIME, "time")
             .orElse(SafetyModel.defaultExposureTime(wavelength));
+    SafetyStandard standard = model.standard();
+    ResolvedElement place = element.get();
+    double probeAperture =
+        place.number(Param.APERTURE, "diameter").orElse(Double.POSITIVE_INFINITY);
     switch (m) {
       case HAZARD_CLASS:
         {
@@ -81,24 +90,40 @@ final class SafetyVerdicts {
           }
           RequirementEvaluator.Verdict v =
               RequirementEvaluator.compare(c, o.get().rank(), "class", "");
-          return withNote(v, brief(o.standard()) + "; " + o.caution());
+          return withNote(v, brief(o.standard()) + classOnly(standard) + "; " + o.caution());
         }
       case NOHD:
-        return verdict(c, SafetyModel.nohd(element.get(), at), "m");
+        return verdict(
+            c,
+            SafetyModel.nohd(standard, place, at),
+            "m",
+            standard,
+            other -> SafetyModel.nohd(other, place, at),
+            v -> QuantityFormat.format(v, Dimension.LENGTH));
       case EXPOSURE:
         return verdict(
             c,
-            SafetyModel.mpeFraction(
-                wavelength,
-                at,
-                exposureTime,
-                element.get().number(Param.APERTURE, "diameter").orElse(Double.POSITIVE_INFINITY)),
-            "");
+            SafetyModel.mpeFraction(standard, wavelength, at, exposureTime, probeAperture),
+            "",
+            standard,
+            other -> SafetyModel.mpeFraction(other, wavelength, at, exposureTime, probeAperture),
+            v -> QuantityFormat.format(100 * v, Dimension.DIMENSIONLESS) + " %");
       default:
         {
-          var od = SafetyModel.eyewear(wavelength, at, exposureTime);
+          var od = SafetyModel.eyewear(standard, wavelength, at, exposureTime);
+          String beside =
+              StandardComparison.beside(
+                  standard,
+                  od.evaluated() ? od.get().atAperture() : Double.NaN,
+                  std -> {
+                    var other = SafetyModel.eyewear(std, wavelength, at, exposureTime);
+                    return other.evaluated()
+                        ? Outcome.of(other.get().atAperture(), other.standard())
+                        : Outcome.notEvaluated(other.reason(), other.standard());
+                  },
+                  v -> "OD " + QuantityFormat.format(v, Dimension.DIMENSIONLESS));
           if (!od.evaluated()) {
-            return RequirementEvaluator.Verdict.notEvaluated(unevaluated(od));
+            return RequirementEvaluator.Verdict.notEvaluated(unevaluated(od, beside));
           }
           RequirementEvaluator.Verdict v =
               RequirementEvaluator.compare(c, od.get().atAperture(), "OD", "");
@@ -106,9 +131,13 @@ final class SafetyVerdicts {
               v,
               String.format(
                   java.util.Locale.ROOT,
-                  "averaged over the 7 mm limiting aperture; OD %.2f at the beam's peak; %s; %s",
+                  "averaged over the %s limiting aperture; OD %.2f at the beam's peak; %s; %s; %s",
+                  QuantityFormat.format(
+                      SafetyModel.limitingAperture(standard, wavelength, at, exposureTime),
+                      Dimension.LENGTH),
                   od.get().atPeak(),
                   brief(od.standard()),
+                  beside,
                   od.caution()));
         }
     }
@@ -130,13 +159,33 @@ final class SafetyVerdicts {
             p.wavelength());
   }
 
-  private static RequirementEvaluator.Verdict verdict(Criterion c, Outcome<Double> o, String unit) {
+  /** A figure of the governing standard, judged, with the other standards' figures beside it. */
+  private static RequirementEvaluator.Verdict verdict(
+      Criterion c,
+      Outcome<Double> o,
+      String unit,
+      SafetyStandard governing,
+      java.util.function.Function<SafetyStandard, Outcome<Double>> under,
+      java.util.function.DoubleFunction<String> shown) {
+    String beside =
+        StandardComparison.beside(governing, o.evaluated() ? o.get() : Double.NaN, under, shown);
     if (!o.evaluated()) {
-      return RequirementEvaluator.Verdict.notEvaluated(unevaluated(o));
+      return RequirementEvaluator.Verdict.notEvaluated(unevaluated(o, beside));
     }
     return withNote(
         RequirementEvaluator.compare(c, o.get(), unit, ""),
-        brief(o.standard()) + "; " + o.caution());
+        brief(o.standard()) + "; " + beside + "; " + o.caution());
+  }
+
+  /** Under another standard, why the class is still IEC's. */
+  private static String classOnly(SafetyStandard standard) {
+    return switch (standard) {
+      case IEC_60825_1 -> "";
+      case DIRECTIVE_2006_25, ANSI_Z136_1 ->
+          ", whose classes stand whichever standard gates the limits: "
+              + standard.title()
+              + " defines no classes here";
+    };
   }
 
   /**
@@ -148,6 +197,17 @@ final class SafetyVerdicts {
         + " ("
         + o.standard()
         + "); not evaluated here, so a qualified person must assess the emission. "
+        + o.caution();
+  }
+
+  /** As above, with the other standards' figures stated before the caution. */
+  private static String unevaluated(Outcome<?> o, String beside) {
+    return o.reason()
+        + " ("
+        + o.standard()
+        + "); not evaluated here, so a qualified person must assess the emission; "
+        + beside
+        + ". "
         + o.caution();
   }
 

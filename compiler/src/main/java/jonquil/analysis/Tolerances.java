@@ -97,7 +97,8 @@ final class Tolerances {
         model.requirements(),
         model.references(),
         model.diagnostics(),
-        model.ambient());
+        model.ambient(),
+        model.standard());
   }
 
   private static Value.Group draw(Value.Group g, SplittableRandom random) {

@@ -105,6 +105,16 @@ final class CheckCommand implements Callable<Integer> {
   Long seed;
 
   @Option(
+      names = "--standard",
+      paramLabel = "NAME",
+      converter = StandardConverter.class,
+      description =
+          "The laser-safety standard that gates the safety requirements: iec (IEC 60825-1:2014,"
+              + " the default), directive (Directive 2006/25/EC) or ansi (ANSI Z136.1-2014); it"
+              + " wins over a spec's 'standard' line. The others are reported for comparison.")
+  jonquil.resolve.SafetyStandard standard;
+
+  @Option(
       names = "--quiet",
       description =
           "Text: show only what fails the check (errors, failed or unevaluated requirements, with"
@@ -138,6 +148,11 @@ final class CheckCommand implements Callable<Integer> {
     }
   }
 
+  private CheckOptions options() {
+    CheckOptions options = CheckOptions.FULL.withDraws(draws());
+    return standard == null ? options : options.withStandard(standard);
+  }
+
   private ExitCode check() {
     textOnlyOptions();
     Path projectRoot = projectRoot();
@@ -153,7 +168,7 @@ final class CheckCommand implements Callable<Integer> {
                 Checker.checkEach(
                     Workspace.onDisk(projectRoot),
                     inputs.files(),
-                    CheckOptions.FULL.withDraws(draws()),
+                    options(),
                     this::internalError,
                     checked -> putAside(checked, projectRoot, perFile)),
                 problems);

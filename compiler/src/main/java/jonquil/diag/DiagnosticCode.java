@@ -61,6 +61,7 @@ public enum DiagnosticCode {
       "J411",
       Severity.ERROR,
       "An ambient air condition outside the validity of Ciddor's equations"),
+  UNKNOWN_STANDARD("J417", Severity.ERROR, "A laser-safety standard that Jonquil does not know"),
   // Numbered with the analysis codes it guards, but found from the parameters alone.
   ENERGY_NOT_CONSERVED_BY_PARAMETERS(
       "J618",

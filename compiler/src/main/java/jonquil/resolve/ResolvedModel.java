@@ -9,7 +9,8 @@ import jonquil.diag.Diagnostic;
 /**
  * The spec rooted at one file, with names, units and parameters checked: its elements, trains and
  * requirements, plus a side table of every name reference (for navigation). The syntax trees are
- * untouched; everything learned lives here. The ambient is the medium between elements.
+ * untouched; everything learned lives here. The ambient is the medium between elements; the
+ * standard is the laser-safety standard that gates the safety requirements.
  */
 public record ResolvedModel(
     Path root,
@@ -19,7 +20,8 @@ public record ResolvedModel(
     List<ResolvedRequirement> requirements,
     List<ResolvedRef> references,
     List<Diagnostic> diagnostics,
-    Ambient ambient) {
+    Ambient ambient,
+    SafetyStandard standard) {
 
   public ResolvedModel {
     scopes = jonquil.source.InOrder.copyOf(scopes);
@@ -29,6 +31,13 @@ public record ResolvedModel(
     references = List.copyOf(references);
     diagnostics = List.copyOf(diagnostics);
     java.util.Objects.requireNonNull(ambient, "ambient");
+    java.util.Objects.requireNonNull(standard, "standard");
+  }
+
+  /** The same model gated by another standard ('check --standard' overrides the spec's line). */
+  public ResolvedModel withStandard(SafetyStandard other) {
+    return new ResolvedModel(
+        root, scopes, elements, trains, requirements, references, diagnostics, ambient, other);
   }
 
   /** The checked element behind a symbol (empty for catalog entries and broken declarations). */

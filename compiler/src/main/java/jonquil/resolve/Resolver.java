@@ -104,6 +104,8 @@ public final class Resolver {
                     }
                     AmbientResolver.refuseInLibrary(
                         lib.declarations(), sink, from.getFileName().toString());
+                    StandardResolver.refuseInLibrary(
+                        lib.declarations(), sink, from.getFileName().toString());
                     for (RequireDecl r : lib.requires()) {
                       sink.report(
                           DiagnosticCode.USED_FILE_HAS_TRAIN,
@@ -120,9 +122,11 @@ public final class Resolver {
     List<ResolvedRequirement> requirements = new ArrayList<>();
     SpecFile rootFile = files.get(root);
     Ambient ambient = Ambient.DEFAULT;
+    SafetyStandard standard = SafetyStandard.DEFAULT;
     if (rootFile != null) {
       Sink sink = sinks.get(root);
       ambient = AmbientResolver.resolve(rootFile.declarations(), sink, scopes.get(root));
+      standard = StandardResolver.resolve(rootFile.declarations(), sink);
       TrainResolver trainResolver = new TrainResolver(sink, scopes.get(root), rootFile);
       trains = trainResolver.resolve(rootFile.trains());
       RequirementResolver reqs =
@@ -143,7 +147,7 @@ public final class Resolver {
       refs.addAll(s.refs);
     }
     return new ResolvedModel(
-        root, scopes, elements, trains, requirements, refs, diagnostics, ambient);
+        root, scopes, elements, trains, requirements, refs, diagnostics, ambient, standard);
   }
 
   /**
@@ -172,7 +176,7 @@ public final class Resolver {
   private static Map<String, Symbol> declare(SpecFile file, Sink sink) {
     Map<String, Symbol> symbols = new LinkedHashMap<>();
     for (Declaration decl : file.declarations()) {
-      if (AmbientResolver.isAmbient(decl)) {
+      if (AmbientResolver.isAmbient(decl) || StandardResolver.isStandard(decl)) {
         continue; // a statement about the bench, not a named part
       }
       Optional<ElementKind> kind = ElementKind.byWord(decl.kind().text());

@@ -10,9 +10,10 @@ import jonquil.safety.TableScope.Tissue;
 
 /**
  * Why it exists: the ocular MPE for intrabeam (point-source) viewing after ANSI Z136.1-2014 Table
- * 5a with the Table 6 factors and the section 8.2.3 pulse rules, 400 nm ≤ λ &lt; 1200 nm, 7 mm
- * limiting aperture, so it can be shown beside the IEC 60825-1:2014 (Ed. 3) figure of {@link
- * jonquil.safety.OcularMpe}.
+ * 5a with the Table 6 factors and the section 8.2.3 pulse rules, so it can be shown beside the IEC
+ * 60825-1:2014 (Ed. 3) figure of {@link jonquil.safety.OcularMpe}: retinal 400 nm ≤ λ &lt; 1200 nm
+ * (7 mm aperture), and the corneal rows of 180–400 nm and 1400 nm–1 mm for continuous wave and
+ * single pulses from 1 ns (Table 8 apertures; from memory). 1200–1400 nm stays not evaluated.
  *
  * <p>Where the two differ (both from memory unless noted):
  *
@@ -44,21 +45,44 @@ public final class AnsiOcularMpe extends Z136Mpe {
    * the record.
    */
   public static Outcome<MaximumPermissibleExposure> at(Emission e, double exposureDuration) {
-    return ANSI.evaluate(e, exposureDuration);
+    double lambda = e.wavelength();
+    double t = e.pulsed() ? e.pulseDuration() : exposureDuration;
+    boolean cornea = lambda < TableScope.LAMBDA_MIN || lambda >= TableScope.LAMBDA_MAX_SKIN;
+    if (cornea && ANSI.wavelengthRefusal(lambda) == null && t > 0 && t < Z136.T_MIN_CORNEA) {
+      return Outcome.notEvaluated(
+          "exposure or pulse of "
+              + t
+              + " s: the ultraviolet and infrared rows of Table 5a start"
+              + " at 1 ns (from memory); not implemented below",
+          TABLE);
+    }
+    Outcome<MaximumPermissibleExposure> o = ANSI.evaluate(e, exposureDuration);
+    if (!o.evaluated() || !cornea) {
+      return o;
+    }
+    MaximumPermissibleExposure m = o.get();
+    return Outcome.of(
+        new MaximumPermissibleExposure(
+            m.radiantExposure(),
+            m.irradiance(),
+            m.exposureDuration(),
+            Z136.eyeAperture(lambda, m.exposureDuration()),
+            m.singlePulse(),
+            m.averagePower(),
+            m.repetitivePulse(),
+            m.limitingCriterion(),
+            m.table()),
+        o.standard());
   }
 
   @Override
   protected String wavelengthRefusal(double lambda) {
     double n = CorrectionFactors.nm(lambda);
-    if (lambda < TableScope.LAMBDA_MIN) {
-      return wavelengthRefused(
-          lambda, "is below 400 nm: ultraviolet MPEs of Table 5a are not implemented");
+    if (n < 180 || n > 1e6) {
+      return wavelengthRefused(lambda, "is outside 180 nm to 1 mm, the range of Table 5a");
     }
-    if (n >= 1400) {
-      return wavelengthRefused(
-          lambda,
-          "is outside the retinal hazard region 400–1400 nm: infrared (corneal)"
-              + " MPEs of Table 5a are not implemented");
+    if (lambda < TableScope.LAMBDA_MIN || n >= 1400) {
+      return null;
     }
     if (lambda >= Z136.LAMBDA_MAX_EYE) {
       return wavelengthRefused(
@@ -81,6 +105,12 @@ public final class AnsiOcularMpe extends Z136Mpe {
 
   @Override
   protected String trainRefusal(Emission e) {
+    double n = CorrectionFactors.nm(e.wavelength());
+    if (n < 400 || n >= 1400) {
+      return "pulse trains below 400 nm or from 1400 nm: the t_min and Rule 3 of Table 6 /"
+          + " section 8.2.3 for the cornea were not confirmed, so the train is not evaluated"
+          + " (single pulses and continuous wave are)";
+    }
     double tau = e.pulseDuration();
     double tMin = CorrectionFactors.pulseGroupTime(e.wavelength());
     if (tau >= tMin) {

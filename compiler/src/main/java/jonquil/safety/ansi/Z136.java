@@ -107,10 +107,85 @@ final class Z136 {
   }
 
   /**
-   * Ocular MPE (radiant exposure over t, J/m²): the lower of the thermal and photochemical limits.
+   * Ocular MPE (radiant exposure over t, J/m²): the lower of the thermal and photochemical limits;
+   * outside the retinal region the corneal limits of {@link #ultraviolet} and {@link #infrared}.
    */
   static double ocular(double lambda, double t) {
+    double n = nm(lambda);
+    if (n < 400) {
+      return ultraviolet(n, t);
+    }
+    if (n >= 1400) {
+      return infrared(n, t);
+    }
     return LimitRows.lowerOf(retinalThermal(lambda, t), retinalPhotochemical(lambda, t));
+  }
+
+  /** Shortest exposure of the ultraviolet and infrared rows of Table 5a, s (from memory). */
+  static final double T_MIN_CORNEA = 1e-9;
+
+  /**
+   * Ultraviolet ocular MPE, J/m², Table 5a, 180–400 nm, 1 ns ≤ t ≤ 3×10⁴ s, the lower of its dual
+   * limits (all from memory; each equals the Directive 2006/25/EC Table 2.2/2.3 value, which the
+   * cross-check test compares): thermal 0.56 t^0.25 J/cm² below 10 s; photochemical 3×10⁻³ J/cm²
+   * (180–302 nm), 10^(0.2(λ−295)) × 10⁻⁴ J/cm² (302–315 nm), and for 315–400 nm 1 J/cm² from 10 s
+   * to 10³ s then 10⁻³ W/cm².
+   */
+  static double ultraviolet(double n, double t) {
+    double thermal = t < 10 ? 0.56 * Math.pow(t, 0.25) : Double.POSITIVE_INFINITY;
+    double photochemical;
+    if (n < 302) {
+      photochemical = 3e-3;
+    } else if (n < 315) {
+      photochemical = Math.pow(10, 0.2 * (n - 295)) * 1e-4;
+    } else if (t < 10) {
+      photochemical = Double.POSITIVE_INFINITY;
+    } else {
+      photochemical = t < 1e3 ? 1.0 : 1e-3 * t;
+    }
+    return Math.min(thermal, photochemical) * PER_CM2;
+  }
+
+  /**
+   * Infrared (corneal) ocular MPE, J/m², Table 5a, 1400 nm–1 mm, 1 ns ≤ t ≤ 3×10⁴ s (from memory;
+   * equal to Directive 2006/25/EC Tables 2.2/2.3): 1400–1500 and 1800–2600 nm: 0.1 J/cm² to 1 ms,
+   * then 0.56 t^0.25 J/cm²; 1500–1800 nm: 1.0 J/cm² to 10 s; 2600 nm–1 mm: 10⁻² J/cm² to 100 ns,
+   * then 0.56 t^0.25 J/cm²; from 10 s: 0.1 W/cm².
+   */
+  static double infrared(double n, double t) {
+    double h;
+    if (t >= 10) {
+      h = 0.1 * t;
+    } else if (n >= 1500 && n < 1800) {
+      h = 1.0;
+    } else if (n >= 2600) {
+      h = t < 1e-7 ? 1e-2 : 0.56 * Math.pow(t, 0.25);
+    } else {
+      h = t < 1e-3 ? 0.1 : 0.56 * Math.pow(t, 0.25);
+    }
+    return h * PER_CM2;
+  }
+
+  /**
+   * Limiting aperture of the eye, m, Table 8 (from memory): 7 mm for 400–1400 nm; 1 mm for 180–400
+   * nm; for 1400 nm–100 µm 1 mm below 0.3 s, 1.5 t^0.375 mm to 10 s, 3.5 mm from 10 s; 11 mm from
+   * 100 µm.
+   */
+  static double eyeAperture(double lambda, double t) {
+    double n = nm(lambda);
+    if (n >= 400 && n < 1400) {
+      return TableScope.APERTURE_EYE;
+    }
+    if (n < 400) {
+      return 1e-3;
+    }
+    if (n >= 1e5) {
+      return 11e-3;
+    }
+    if (t < 0.3) {
+      return 1e-3;
+    }
+    return t < 10 ? 1.5e-3 * Math.pow(t, 0.375) : 3.5e-3;
   }
 
   /**

@@ -141,10 +141,12 @@ class AnsiOcularMpeTest {
   @CsvSource(
       delimiter = '|',
       value = {
-        "10600 | 0     | 0    | 10   | CO2 laser, outside 400-1400 nm",
-        "250   | 0     | 0    | 10   | ultraviolet",
+        "10600 | 1e-8  | 1e3  | 10   | CO2 laser pulse train: corneal t_min and Rule 3 not"
+            + " confirmed",
+        "250   | 1e-12 | 0    | 10   | ultraviolet pulse below the 1 ns rows",
         "1300  | 0     | 0    | 10   | 1200-1400 nm: 2014 C_C and corneal/lens limit not confirmed",
-        "1550  | 0     | 0    | 10   | beyond 1400 nm",
+        "1550  | 1e-10 | 0    | 10   | infrared pulse below the 1 ns rows",
+        "150   | 0     | 0    | 10   | below 180 nm, outside Table 5a",
         "532   | 1e-12 | 0    | 0.25 | sub-10-ps single pulse",
         "532   | 1e-8  | 1e3  | 0.25 | ns train: tau < t_min = 5 us, 2014 sub-t_min provisions not"
             + " confirmed",
