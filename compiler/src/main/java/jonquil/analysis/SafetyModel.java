@@ -6,12 +6,14 @@ import jonquil.resolve.Param;
 import jonquil.resolve.ResolvedElement;
 import jonquil.safety.Classifier;
 import jonquil.safety.Emission;
+import jonquil.safety.ExposureDuration;
 import jonquil.safety.Eyewear;
 import jonquil.safety.HazardClass;
 import jonquil.safety.Nohd;
 import jonquil.safety.OcularMpe;
 import jonquil.safety.OpticalDensity;
 import jonquil.safety.Outcome;
+import jonquil.safety.Viewing;
 
 /**
  * Eye-safety figures of the solved train: the hazard class, NOHD and eyewear OD of a source, and
@@ -20,11 +22,17 @@ import jonquil.safety.Outcome;
  */
 final class SafetyModel {
   /**
-   * Exposure duration when a probe states none: 0.25 s (the aversion response) in the visible, 10 s
-   * in the near infrared. Common practice for accidental intrabeam viewing.
+   * Exposure duration when nothing states one, for accidental intrabeam viewing ({@link
+   * ExposureDuration#byDefault}): 0.25 s (the aversion response) in the visible, 10 s outside it,
+   * 30 000 s in the ultraviolet.
    */
+  static ExposureDuration defaultExposure(double wavelength) {
+    return ExposureDuration.byDefault(wavelength, Viewing.DIRECT);
+  }
+
+  /** The seconds of {@link #defaultExposure}. */
   static double defaultExposureTime(double wavelength) {
-    return wavelength >= 400e-9 && wavelength <= 700e-9 ? 0.25 : 10;
+    return defaultExposure(wavelength).seconds();
   }
 
   private SafetyModel() {}
@@ -73,7 +81,7 @@ final class SafetyModel {
         emission(wl, exit.power(), exit.pulses()),
         2 * mode.radius(),
         2 * mode.divergence(),
-        defaultExposureTime(wl));
+        defaultExposure(wl).seconds());
   }
 
   /**

@@ -29,7 +29,8 @@ public final class SafetySummary {
       Outcome<jonquil.safety.MaximumPermissibleExposure> ansiMpe,
       Outcome<Double> nohd,
       Outcome<jonquil.safety.OpticalDensity> eyewear,
-      double exposureTime) {}
+      double exposureTime,
+      String exposureTimeReason) {}
 
   private SafetySummary() {}
 
@@ -44,7 +45,8 @@ public final class SafetySummary {
         continue;
       }
       double wl = SafetyModel.wavelength(e);
-      double t = SafetyModel.defaultExposureTime(wl);
+      jonquil.safety.ExposureDuration d = SafetyModel.defaultExposure(wl);
+      double t = d.seconds();
       var emission = SafetyModel.emission(wl, exit.get().power(), exit.get().pulses());
       out.add(
           new SourceSafety(
@@ -56,7 +58,8 @@ public final class SafetySummary {
               jonquil.safety.ansi.AnsiOcularMpe.at(emission, t),
               SafetyModel.nohd(e, exit.get()),
               SafetyModel.eyewear(wl, exit.get(), t),
-              t));
+              t,
+              d.reason()));
     }
     return out;
   }

@@ -1,5 +1,6 @@
 package jonquil.analysis;
 
+import java.util.List;
 import java.util.Optional;
 import jonquil.resolve.ElementKind;
 import jonquil.resolve.Measure;
@@ -57,12 +58,8 @@ final class SafetyVerdicts {
           "'" + m.word() + "' is a property of a source; name the source");
     }
     PortValue at = scaled(lightAt(r, m, s).orElseThrow(), powerScale);
-    double wavelength = at.wavelength();
-    double exposureTime =
-        element
-            .get()
-            .number(Param.EXPOSURE_TIME, "time")
-            .orElse(SafetyModel.defaultExposureTime(wavelength));
+    ViewingSafety.Setting setting =
+        ViewingSafety.setting(r.viewing(), element.get(), at.wavelength());
     switch (m) {
       case HAZARD_CLASS:
         {
@@ -84,34 +81,69 @@ final class SafetyVerdicts {
           return withNote(v, brief(o.standard()) + "; " + o.caution());
         }
       case NOHD:
-        return verdict(c, SafetyModel.nohd(element.get(), at), "m");
+        return verdict(c, ViewingSafety.nohd(at, setting), "m", setting);
       case EXPOSURE:
         return verdict(
             c,
-            SafetyModel.mpeFraction(
-                wavelength,
+            ViewingSafety.exposure(
                 at,
-                exposureTime,
+                setting,
                 element.get().number(Param.APERTURE, "diameter").orElse(Double.POSITIVE_INFINITY)),
-            "");
+            "",
+            setting);
       default:
         {
-          var od = SafetyModel.eyewear(wavelength, at, exposureTime);
+          var od = ViewingSafety.eyewear(at, setting);
           if (!od.evaluated()) {
-            return RequirementEvaluator.Verdict.notEvaluated(unevaluated(od));
+            return RequirementEvaluator.Verdict.notEvaluated(unevaluated(od, setting));
           }
           RequirementEvaluator.Verdict v =
               RequirementEvaluator.compare(c, od.get().atAperture(), "OD", "");
           return withNote(
               v,
-              String.format(
-                  java.util.Locale.ROOT,
-                  "averaged over the 7 mm limiting aperture; OD %.2f at the beam's peak; %s; %s",
-                  od.get().atPeak(),
-                  brief(od.standard()),
-                  od.caution()));
+              setting.text()
+                  + "; "
+                  + (setting.viewing() == jonquil.safety.Viewing.DIFFUSE
+                      ? "at the eye, uniform over the 7 mm pupil"
+                      : String.format(
+                          java.util.Locale.ROOT,
+                          "averaged over the 7 mm limiting aperture; OD %.2f at the beam's peak",
+                          od.get().atPeak()))
+                  + "; "
+                  + ViewingSafety.markings(at, setting)
+                  + "; "
+                  + brief(od.standard())
+                  + sourceNote(od.standard())
+                  + "; "
+                  + od.caution());
         }
     }
+  }
+
+  /**
+   * The assumptions (viewing, duration and why) the verdict on this requirement states first,
+   * recomputed for one line's solution; empty when the requirement is not judged there.
+   */
+  static Optional<String> settingText(
+      ResolvedRequirement r, Measure m, TrainSolution s, ResolvedModel model) {
+    return setting(r, m, s, model).map(ViewingSafety.Setting::text);
+  }
+
+  /** The EN 207 / EN 208 markings an eyewear verdict states, for one line's solution. */
+  static Optional<String> markingText(
+      ResolvedRequirement r, Measure m, TrainSolution s, ResolvedModel model) {
+    Optional<PortValue> at = lightAt(r, m, s);
+    return setting(r, m, s, model).flatMap(st -> at.map(a -> ViewingSafety.markings(a, st)));
+  }
+
+  private static Optional<ViewingSafety.Setting> setting(
+      ResolvedRequirement r, Measure m, TrainSolution s, ResolvedModel model) {
+    Optional<PortValue> at = lightAt(r, m, s);
+    Optional<ResolvedElement> element = r.at().flatMap(t -> model.element(t.symbol()));
+    if (at.isEmpty() || element.isEmpty()) {
+      return Optional.empty();
+    }
+    return Optional.of(ViewingSafety.setting(r.viewing(), element.get(), at.get().wavelength()));
   }
 
   private static PortValue scaled(PortValue p, double scale) {
@@ -130,13 +162,35 @@ final class SafetyVerdicts {
             p.wavelength());
   }
 
-  private static RequirementEvaluator.Verdict verdict(Criterion c, Outcome<Double> o, String unit) {
+  private static RequirementEvaluator.Verdict verdict(
+      Criterion c, Outcome<Double> o, String unit, ViewingSafety.Setting setting) {
     if (!o.evaluated()) {
-      return RequirementEvaluator.Verdict.notEvaluated(unevaluated(o));
+      return RequirementEvaluator.Verdict.notEvaluated(unevaluated(o, setting));
     }
     return withNote(
         RequirementEvaluator.compare(c, o.get(), unit, ""),
-        brief(o.standard()) + "; " + o.caution());
+        setting.text()
+            + "; "
+            + brief(o.standard())
+            + sourceNote(o.standard())
+            + "; "
+            + o.caution());
+  }
+
+  /** The extended-source part of a standard's text (C6 and the apparent source), if any. */
+  static String sourceNote(String standard) {
+    for (String marker : List.of("; extended source, ", "; apparent source = ", "; spot size")) {
+      int i = standard.indexOf(marker);
+      if (i >= 0) {
+        return standard.substring(i);
+      }
+    }
+    return "";
+  }
+
+  /** As {@link #unevaluated(Outcome)}, saying what was assumed. */
+  private static String unevaluated(Outcome<?> o, ViewingSafety.Setting setting) {
+    return setting.text() + ": " + unevaluated(o);
   }
 
   /**

@@ -61,6 +61,10 @@ public enum DiagnosticCode {
       "J411",
       Severity.ERROR,
       "An ambient air condition outside the validity of Ciddor's equations"),
+  VIEWING_NOT_APPLICABLE(
+      "J420",
+      Severity.ERROR,
+      "A viewing condition or exposure duration on a requirement whose measure does not use it"),
   // Numbered with the analysis codes it guards, but found from the parameters alone.
   ENERGY_NOT_CONSERVED_BY_PARAMETERS(
       "J618",
