@@ -230,6 +230,6 @@ final class ViewingSafety {
   }
 
   private static String percent(double f) {
-    return String.format(Locale.ROOT, "%.4g %%", 100 * f);
+    return String.format(Locale.ROOT, "%.4g", 100 * f).replaceFirst("\\.?0+$", "") + " %";
   }
 }
