@@ -10,6 +10,11 @@ import java.util.Locale;
  * 0.25 s and 100 mrad above 0.25 s. Directive 2006/25/EC, Annex II, Table 2.5 states the same α_min
  * and the 100 mrad ceiling for its C_E.
  *
+ * <p>Beyond 10 s the thermal limit of a point source is flat from T2 = 10 s, but an extended
+ * source's T2 = 10·10^((α − 1.5 mrad)/98.5 mrad) s (100 s from α = 100 mrad; IEC 60825-1:2014 Table
+ * 10, from memory) is later, so the factor is C6·(T2/10 s)^−0.25: exact beyond T2 and stricter than
+ * the table between 10 s and T2.
+ *
  * <p>Applied only where it is certain not to be lenient: 400–1400 nm, continuous wave or a single
  * pulse, and not where the photochemical limit may govern (400–600 nm beyond 10 s), whose
  * extended-source rule is a field of view, not C6. Elsewhere C6 = 1 (the point-source MPE, never
@@ -37,6 +42,12 @@ public final class ExtendedSource {
       return 5e-3;
     }
     return t <= 0.25 ? 0.2 * Math.sqrt(t) : 0.1;
+  }
+
+  /** T2 for subtense α (rad), s: 10 s up to α_min, 100 s from 100 mrad. */
+  public static double t2(double alpha) {
+    double mrad = Math.max(1.5, Math.min(alpha * 1e3, 100));
+    return 10 * Math.pow(10, (mrad - 1.5) / 98.5);
   }
 
   /** C6 at subtense α (rad) and duration t (s), without regard to where it applies. */
@@ -72,16 +83,28 @@ public final class ExtendedSource {
           angle + ": C6 = 1 kept, the photochemical limit may govern (400-600 nm, > 10 s)");
     }
     double c6 = c6(alpha, t);
-    return new Correction(
-        c6,
-        alpha,
-        max,
+    String c6Text =
         String.format(
             Locale.ROOT,
             "%s: C6 = %.3g (alpha_min 1.5 mrad, alpha_max %.3g mrad; IEC 60825-1:2014 Table 10,"
                 + " from memory)",
             angle,
             c6,
-            max * 1e3));
+            max * 1e3);
+    if (t <= 10) {
+      return new Correction(c6, alpha, max, c6Text);
+    }
+    double t2 = t2(alpha);
+    double factor = c6 * Math.pow(t2 / 10, -0.25);
+    return new Correction(
+        factor,
+        alpha,
+        max,
+        String.format(
+            Locale.ROOT,
+            "%s, beyond 10 s with T2 = %.3g s: factor C6 (T2/10 s)^-0.25 = %.3g",
+            c6Text,
+            t2,
+            factor));
   }
 }

@@ -49,6 +49,12 @@ class ExtendedSourceTest {
         ExtendedSource.of(Emission.continuous(1550e-9, 1e-3), 20e-3, 10);
     // No retinal image outside 400-1400 nm, so no C6 (definition)
     assertEquals(1.0, cornea.c6(), 0.0);
+    // 633 nm over 100 s, 15 mrad: T2 = 10 * 10^(13.5/98.5) = 13.71 s, 10 * 1.371^-0.25 = 9.241
+    // (IEC 60825-1:2014 Table 10, from memory)
+    assertEquals(
+        9.2414, ExtendedSource.of(Emission.continuous(633e-9, 1e-3), 15e-3, 100).c6(), 1e-4);
+    // T2 reaches 100 s at 100 mrad (IEC 60825-1:2014, from memory)
+    assertEquals(100, ExtendedSource.t2(0.1), 1e-9);
     // 633 nm over 10 s, 15 mrad: 10 (IEC 60825-1:2014, from memory)
     assertEquals(10.0, ExtendedSource.of(Emission.continuous(633e-9, 1e-3), 15e-3, 10).c6(), 1e-9);
   }
