@@ -58,8 +58,7 @@ final class SafetyVerdicts {
           "'" + m.word() + "' is a property of a source; name the source");
     }
     PortValue at = scaled(lightAt(r, m, s).orElseThrow(), powerScale);
-    ViewingSafety.Setting setting =
-        ViewingSafety.setting(r.viewing(), element.get(), at.wavelength());
+    ViewingSafety.Setting setting = ViewingSafety.setting(r.viewing(), element.get(), at);
     switch (m) {
       case HAZARD_CLASS:
         {
@@ -143,7 +142,7 @@ final class SafetyVerdicts {
     if (at.isEmpty() || element.isEmpty()) {
       return Optional.empty();
     }
-    return Optional.of(ViewingSafety.setting(r.viewing(), element.get(), at.get().wavelength()));
+    return Optional.of(ViewingSafety.setting(r.viewing(), element.get(), at.get()));
   }
 
   private static PortValue scaled(PortValue p, double scale) {

@@ -47,8 +47,9 @@ final class ViewingSafety {
       double distance,
       String text) {}
 
-  /** The setting of a requirement at an element, for light of this wavelength. */
-  static Setting setting(ViewingTerms terms, ResolvedElement element, double wavelength) {
+  /** The setting of a requirement at an element, for the light there. */
+  static Setting setting(ViewingTerms terms, ResolvedElement element, PortValue at) {
+    double wavelength = at.wavelength();
     Viewing v = terms.viewingOrDirect();
     OptionalDouble onElement = element.number(Param.EXPOSURE_TIME, "time");
     ExposureDuration d =
@@ -85,6 +86,10 @@ final class ViewingSafety {
                 text.append(
                     String.format(Locale.ROOT, ", apparent source %.4g mrad (stated)", a * 1e3)));
     text.append("; exposure duration ").append(d.text());
+    if (at.pulses().isPresent() && at.pulses().get().single()) {
+      // The tables judge a lone pulse over its own duration; say so rather than seem to use d.
+      text.append(" (a single pulse: its MPE is that of the pulse's own duration)");
+    }
     return new Setting(v, d, rho, terms.subtense(), distance, text.toString());
   }
 

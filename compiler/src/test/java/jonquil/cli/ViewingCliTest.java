@@ -70,6 +70,10 @@ class ViewingCliTest {
     // 0.9 * 50 mW/(pi (0.1 m)^2) = 1.432 W/m2 over the 10 W/m2 MPE for 100 s (Lambertian formula,
     // ANSI Z136.1-2014 from memory; MPE IEC 60825-1:2014 Table A.1, from memory)
     assertEquals(0.9 * 0.05 / (Math.PI * 0.01) / 10, diffuse.get("value").getAsDouble(), 1e-6);
+    // Specular at 4 %: 2 mW, MPE 25.46 W/m2 (532 nm, 0.25 s; IEC 60825-1:2014, from memory);
+    // a = 1 mm/sqrt(2), phi = 2 lambda/(pi w0)/sqrt(2) = 0.479 mrad at 1/e (Gaussian definition):
+    // (sqrt(4*0.002/(pi*25.46)) - 0.000707)/0.000479 = 19.40 m (ANSI Z136.1-2014 NOHD, from memory)
+    assertEquals(19.40, requirements.get(1).getAsJsonObject().get("value").getAsDouble(), 0.05);
     JsonObject source =
         report
             .getAsJsonArray("values")
