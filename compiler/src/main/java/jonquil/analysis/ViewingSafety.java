@@ -65,26 +65,30 @@ final class ViewingSafety {
     double rho = 1;
     double distance = NEAREST_VIEWING;
     if (v != Viewing.DIRECT) {
-      rho = terms.reflectance().orElse(1);
+      OptionalDouble onPart = element.number(Param.REFLECTANCE, "r");
+      rho = terms.reflectance().orElse(onPart.orElse(1));
       text.append(
           terms.reflectance().isPresent()
               ? ", reflectance " + percent(rho)
-              : ", reflectance 100 % (not stated: the worst case)");
+              : onPart.isPresent()
+                  ? ", reflectance "
+                      + percent(rho)
+                      + " (its 'reflectance' on '"
+                      + element.symbol().name()
+                      + "')"
+                  : ", reflectance 100 % (not stated: the worst case)");
     }
     if (v == Viewing.DIFFUSE) {
       distance = terms.distance().orElse(NEAREST_VIEWING);
       text.append(
           terms.distance().isPresent()
-              ? String.format(Locale.ROOT, ", eye at %.4g m from the spot", distance)
+              ? ", eye at " + number(distance) + " m from the spot"
               : ", eye at 0.1 m from the spot (not stated: the nearest distance the eye focuses,"
                   + " the worst case)");
     }
     terms
         .subtense()
-        .ifPresent(
-            a ->
-                text.append(
-                    String.format(Locale.ROOT, ", apparent source %.4g mrad (stated)", a * 1e3)));
+        .ifPresent(a -> text.append(", apparent source " + number(a * 1e3) + " mrad (stated)"));
     text.append("; exposure duration ").append(d.text());
     if (at.pulses().isPresent() && at.pulses().get().single()) {
       // The tables judge a lone pulse over its own duration; say so rather than seem to use d.
@@ -235,6 +239,12 @@ final class ViewingSafety {
   }
 
   private static String percent(double f) {
-    return String.format(Locale.ROOT, "%.4g", 100 * f).replaceFirst("\\.?0+$", "") + " %";
+    return number(100 * f) + " %";
+  }
+
+  /** Four significant digits without trailing zeros. */
+  private static String number(double v) {
+    String s = String.format(Locale.ROOT, "%.4g", v);
+    return s.contains(".") && !s.contains("e") ? s.replaceFirst("\\.?0+$", "") : s;
   }
 }

@@ -96,4 +96,31 @@ class ViewingCliTest {
     assertTrue(run.out().contains("governing line 561 nm (53.1 % of the sum)"), run.out());
     assertTrue(run.out().contains("at 488 nm, the strictest of their wavelengths"), run.out());
   }
+
+  @Test
+  void aMirrorsReflectanceAndAStatedSubtenseAreUsedAndSaid() throws IOException {
+    Files.writeString(
+        dir.resolve("mirror.jonq"),
+        """
+        source pointer { wavelength 635 nm; power 50 mW; beam waist 0.5 mm }
+        mirror m1 { reflectance 99 %; aoi 45 deg }
+        probe card
+        train { pointer -> 1 m -> m1 -> 1 m -> card }
+        require {
+          exposure at m1 <= 10000 % for viewing specular
+          exposure at m1 <= 10000 % for viewing specular for subtense 3 mrad
+        }
+        """);
+    CliRun run = CliRun.of(dir, "check", "--format", "json", "mirror.jonq");
+    assertEquals(0, run.exitCode(), run.out() + run.err());
+    JsonArray requirements =
+        JsonParser.parseString(run.out()).getAsJsonObject().getAsJsonArray("requirements");
+    JsonObject point = requirements.get(0).getAsJsonObject();
+    JsonObject extended = requirements.get(1).getAsJsonObject();
+    assertTrue(
+        point.get("reason").getAsString().contains("(its 'reflectance' on 'm1')"), run.out());
+    // 3 mrad over 0.25 s: C6 = 3/1.5 = 2 (IEC 60825-1:2014 Table 10, from memory) halves it
+    assertEquals(point.get("value").getAsDouble() / 2, extended.get("value").getAsDouble(), 1e-9);
+    assertTrue(extended.get("reason").getAsString().contains("C6 = 2"), run.out());
+  }
 }
