@@ -89,14 +89,29 @@ final class LineSafety {
     double sum = 0;
     List<String> parts = new ArrayList<>();
     RequirementEvaluator.Verdict first = null;
+    boolean od = c.measure() == Measure.EYEWEAR_OD;
+    double governingShare = -1;
+    double governing = lines.get(0);
+    Map<Double, String> settings = new LinkedHashMap<>();
+    List<String> markings = new ArrayList<>();
     for (double wl : lines) {
       RequirementEvaluator.Verdict v = RequirementEvaluator.evaluate(r, model, solved.get(wl));
       if (!v.evaluated()) {
         return RequirementEvaluator.Verdict.notEvaluated("line " + name(wl) + ": " + v.text());
       }
       first = first == null ? v : first;
-      boolean od = c.measure() == Measure.EYEWEAR_OD;
-      sum += od ? Math.pow(10, v.value()) : v.value();
+      double share = od ? Math.pow(10, v.value()) : v.value();
+      sum += share;
+      if (share > governingShare) {
+        governingShare = share;
+        governing = wl;
+      }
+      settings.put(
+          wl, SafetyVerdicts.settingText(r, c.measure(), solved.get(wl), model).orElse(""));
+      if (od) {
+        SafetyVerdicts.markingText(r, c.measure(), solved.get(wl), model)
+            .ifPresent(mark -> markings.add(name(wl) + ": " + mark));
+      }
       parts.add(
           name(wl)
               + " "
@@ -104,7 +119,7 @@ final class LineSafety {
                   ? "OD " + QuantityFormat.format(v.value(), Dimension.DIMENSIONLESS)
                   : percent(v.value())));
     }
-    double value = c.measure() == Measure.EYEWEAR_OD ? Math.log10(sum) : sum;
+    double value = od ? Math.log10(sum) : sum;
     String how =
         lines.size() == 1
             ? "line " + name(lines.get(0)) + " alone acts on " + effect.description()
@@ -113,18 +128,41 @@ final class LineSafety {
                 + " add ("
                 + OcularEffect.RULE
                 + "): "
-                + String.join(" + ", parts);
+                + String.join(" + ", parts)
+                + "; governing line "
+                + name(governing)
+                + " ("
+                + percent(sum > 0 ? governingShare / sum : 0)
+                + " of the sum)";
+    // The first line's own note states its setting, its peak OD and its markings: not the sum's.
+    String firstSetting = settings.get(lines.get(0));
+    String rest = first.text();
+    if (!firstSetting.isEmpty() && rest.startsWith(firstSetting + "; ")) {
+      rest = rest.substring(firstSetting.length() + 2);
+    }
+    if (od) {
+      String firstMark =
+          SafetyVerdicts.markingText(r, c.measure(), solved.get(lines.get(0)), model).orElse("");
+      rest = rest.replace("; " + firstMark, "").replaceFirst("OD [0-9.]+ at the beam's peak; ", "");
+    }
+    boolean oneSetting = settings.values().stream().distinct().count() == 1;
+    String assumed =
+        oneSetting
+            ? firstSetting
+            : String.join(
+                " / ",
+                settings.entrySet().stream()
+                    .map(e -> name(e.getKey()) + ": " + e.getValue())
+                    .toList());
+    String note =
+        how
+            + (assumed.isEmpty() ? "" : "; " + assumed)
+            + (markings.isEmpty() ? "" : "; " + String.join("; ", markings))
+            + "; "
+            + rest;
     RequirementEvaluator.Verdict combined =
-        RequirementEvaluator.compare(
-            c,
-            value,
-            first.unit(),
-            // The peak OD a line's own note states is that line's alone: not the sum's.
-            // Nor are the other standards' figures beside it.
-            how
-                + "; "
-                + StandardComparison.without(
-                    first.text().replaceFirst("OD [0-9.]+ at the beam's peak; ", "")));
+        // Nor are the other standards' figures beside it: each line's are not the sum's.
+        RequirementEvaluator.compare(c, value, first.unit(), StandardComparison.without(note));
     return combined.shownIn(first.shownUnit());
   }
 
@@ -164,7 +202,9 @@ final class LineSafety {
                 + QuantityFormat.format(total, Dimension.POWER)
                 + " at "
                 + name(at)
-                + ", the strictest of their wavelengths, which is never below that sum";
+                + ", the strictest of their wavelengths, which is never below that sum;"
+                + " governing line "
+                + name(at);
     return worst.withText(worst.text().isEmpty() ? how : how + "; " + worst.text());
   }
 

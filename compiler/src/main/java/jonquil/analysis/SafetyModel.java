@@ -7,13 +7,16 @@ import jonquil.resolve.ResolvedElement;
 import jonquil.resolve.SafetyStandard;
 import jonquil.safety.Classifier;
 import jonquil.safety.Emission;
+import jonquil.safety.ExposureDuration;
 import jonquil.safety.Eyewear;
 import jonquil.safety.HazardClass;
 import jonquil.safety.MaximumPermissibleExposure;
 import jonquil.safety.Nohd;
+import jonquil.safety.OcularLimit;
 import jonquil.safety.OcularMpe;
 import jonquil.safety.OpticalDensity;
 import jonquil.safety.Outcome;
+import jonquil.safety.Viewing;
 import jonquil.safety.ansi.AnsiOcularMpe;
 import jonquil.safety.directive.DirectiveEyeLimit;
 
@@ -25,11 +28,17 @@ import jonquil.safety.directive.DirectiveEyeLimit;
  */
 final class SafetyModel {
   /**
-   * Exposure duration when a probe states none: 0.25 s (the aversion response) in the visible, 10 s
-   * in the near infrared. Common practice for accidental intrabeam viewing.
+   * Exposure duration when nothing states one, for accidental intrabeam viewing ({@link
+   * ExposureDuration#byDefault}): 0.25 s (the aversion response) in the visible, 10 s outside it,
+   * 30 000 s in the ultraviolet.
    */
+  static ExposureDuration defaultExposure(double wavelength) {
+    return ExposureDuration.byDefault(wavelength, Viewing.DIRECT);
+  }
+
+  /** The seconds of {@link #defaultExposure}. */
   static double defaultExposureTime(double wavelength) {
-    return wavelength >= 400e-9 && wavelength <= 700e-9 ? 0.25 : 10;
+    return defaultExposure(wavelength).seconds();
   }
 
   private SafetyModel() {}
@@ -67,14 +76,19 @@ final class SafetyModel {
         2 * mode.divergence());
   }
 
+  /** The ocular limit of a standard. */
+  static OcularLimit ocularLimit(SafetyStandard standard) {
+    return switch (standard) {
+      case IEC_60825_1 -> OcularLimit.IEC;
+      case DIRECTIVE_2006_25 -> DirectiveEyeLimit::at;
+      case ANSI_Z136_1 -> AnsiOcularMpe::at;
+    };
+  }
+
   /** The ocular limit of a standard for an emission over an exposure duration (s). */
   static Outcome<MaximumPermissibleExposure> ocularMpe(
       SafetyStandard standard, Emission e, double exposureTime) {
-    return switch (standard) {
-      case IEC_60825_1 -> OcularMpe.at(e, exposureTime);
-      case DIRECTIVE_2006_25 -> DirectiveEyeLimit.at(e, exposureTime);
-      case ANSI_Z136_1 -> AnsiOcularMpe.at(e, exposureTime);
-    };
+    return ocularLimit(standard).at(e, exposureTime);
   }
 
   /** The limiting aperture of a standard's ocular limit here, m; 7 mm where it has none. */
@@ -91,27 +105,12 @@ final class SafetyModel {
     }
     var mode = exit.mode().get();
     double wl = exit.wavelength();
-    Emission e = emission(wl, exit.power(), exit.pulses());
-    return switch (standard) {
-      case IEC_60825_1 ->
-          Nohd.of(e, 2 * mode.radius(), 2 * mode.divergence(), defaultExposureTime(wl));
-      case DIRECTIVE_2006_25, ANSI_Z136_1 -> {
-        // Nohd.of's conversion of the 1/e² beam to the 1/e values of the formula, with this
-        // standard's limit in place of IEC's.
-        var mpe = ocularMpe(standard, e, defaultExposureTime(wl));
-        String cited = "NOHD = (sqrt(4P/(pi MPE)) - a)/phi under " + mpe.standard();
-        if (!mpe.evaluated()) {
-          yield Outcome.notEvaluated(mpe.reason(), cited);
-        }
-        double a = 2 * mode.radius() / Math.sqrt(2);
-        double phi = 2 * mode.divergence() / Math.sqrt(2);
-        Outcome<Double> d =
-            e.pulsed()
-                ? Nohd.forLimit(e.pulseEnergy(), a, phi, mpe.get().radiantExposure())
-                : Nohd.forLimit(e.averagePower(), a, phi, mpe.get().irradiance());
-        yield Outcome.of(d.get(), cited);
-      }
-    };
+    return Nohd.of(
+        ocularLimit(standard),
+        emission(wl, exit.power(), exit.pulses()),
+        2 * mode.radius(),
+        2 * mode.divergence(),
+        defaultExposureTime(wl));
   }
 
   /**
@@ -164,31 +163,11 @@ final class SafetyModel {
       return Outcome.notEvaluated(
           "the beam size is unknown: give the source a 'beam' line", standard.title());
     }
-    Emission e = emission(wavelength, at.power(), at.pulses());
-    double diameter = 2 * at.mode().get().radius();
-    return switch (standard) {
-      case IEC_60825_1 -> Eyewear.required(e, diameter, exposureTime);
-      case DIRECTIVE_2006_25, ANSI_Z136_1 -> {
-        // Eyewear.required's reading (over the limiting aperture and at the peak) against this
-        // standard's limit and aperture.
-        var mpe = ocularMpe(standard, e, exposureTime);
-        String cited = "OD = log10(H/MPE) under " + mpe.standard();
-        if (!mpe.evaluated()) {
-          yield Outcome.notEvaluated(mpe.reason(), cited);
-        }
-        double q = e.pulsed() ? e.pulseEnergy() : e.averagePower();
-        double limit = e.pulsed() ? mpe.get().radiantExposure() : mpe.get().irradiance();
-        double ap = Irradiance.meanOverAperture(q, diameter / 2, mpe.get().apertureDiameter());
-        double peak = Irradiance.peak(q, diameter / 2);
-        yield Outcome.of(
-            new OpticalDensity(
-                Eyewear.forLimit(ap, limit).get(),
-                Eyewear.forLimit(peak, limit).get(),
-                ap,
-                peak,
-                limit),
-            cited);
-      }
-    };
+    return Eyewear.required(
+        ocularLimit(standard),
+        emission(wavelength, at.power(), at.pulses()),
+        2 * at.mode().get().radius(),
+        exposureTime,
+        1);
   }
 }

@@ -30,7 +30,8 @@ public final class SafetySummary {
       Outcome<jonquil.safety.MaximumPermissibleExposure> ansiMpe,
       Outcome<Double> nohd,
       Outcome<jonquil.safety.OpticalDensity> eyewear,
-      double exposureTime) {}
+      double exposureTime,
+      String exposureTimeReason) {}
 
   private SafetySummary() {}
 
@@ -45,7 +46,8 @@ public final class SafetySummary {
         continue;
       }
       double wl = SafetyModel.wavelength(e);
-      double t = SafetyModel.defaultExposureTime(wl);
+      jonquil.safety.ExposureDuration d = SafetyModel.defaultExposure(wl);
+      double t = d.seconds();
       var emission = SafetyModel.emission(wl, exit.get().power(), exit.get().pulses());
       out.add(
           new SourceSafety(
@@ -57,7 +59,8 @@ public final class SafetySummary {
               jonquil.safety.ansi.AnsiOcularMpe.at(emission, t),
               SafetyModel.nohd(SafetyStandard.IEC_60825_1, e, exit.get()),
               SafetyModel.eyewear(SafetyStandard.IEC_60825_1, wl, exit.get(), t),
-              t));
+              t,
+              d.reason()));
     }
     return out;
   }

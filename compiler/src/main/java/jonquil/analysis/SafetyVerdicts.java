@@ -1,5 +1,6 @@
 package jonquil.analysis;
 
+import java.util.List;
 import java.util.Optional;
 import jonquil.resolve.ElementKind;
 import jonquil.resolve.Measure;
@@ -62,14 +63,9 @@ final class SafetyVerdicts {
           "'" + m.word() + "' is a property of a source; name the source");
     }
     PortValue at = scaled(lightAt(r, m, s).orElseThrow(), powerScale);
-    double wavelength = at.wavelength();
-    double exposureTime =
-        element
-            .get()
-            .number(Param.EXPOSURE_TIME, "time")
-            .orElse(SafetyModel.defaultExposureTime(wavelength));
     SafetyStandard standard = model.standard();
     ResolvedElement place = element.get();
+    ViewingSafety.Setting setting = ViewingSafety.setting(r.viewing(), place, at);
     double probeAperture =
         place.number(Param.APERTURE, "diameter").orElse(Double.POSITIVE_INFINITY);
     switch (m) {
@@ -95,52 +91,93 @@ final class SafetyVerdicts {
       case NOHD:
         return verdict(
             c,
-            SafetyModel.nohd(standard, place, at),
+            ViewingSafety.nohd(standard, at, setting),
             "m",
             standard,
-            other -> SafetyModel.nohd(other, place, at),
-            v -> QuantityFormat.format(v, Dimension.LENGTH));
+            other -> ViewingSafety.nohd(other, at, setting),
+            v -> QuantityFormat.format(v, Dimension.LENGTH),
+            setting);
       case EXPOSURE:
         return verdict(
             c,
-            SafetyModel.mpeFraction(standard, wavelength, at, exposureTime, probeAperture),
+            ViewingSafety.exposure(standard, at, setting, probeAperture),
             "",
             standard,
-            other -> SafetyModel.mpeFraction(other, wavelength, at, exposureTime, probeAperture),
-            v -> QuantityFormat.format(100 * v, Dimension.DIMENSIONLESS) + " %");
-      default:
+            other -> ViewingSafety.exposure(other, at, setting, probeAperture),
+            v -> QuantityFormat.format(100 * v, Dimension.DIMENSIONLESS) + " %",
+            setting);
+      case EYEWEAR_OD:
         {
-          var od = SafetyModel.eyewear(standard, wavelength, at, exposureTime);
+          var od = ViewingSafety.eyewear(standard, at, setting);
           String beside =
               StandardComparison.beside(
                   standard,
                   od.evaluated() ? od.get().atAperture() : Double.NaN,
                   std -> {
-                    var other = SafetyModel.eyewear(std, wavelength, at, exposureTime);
+                    var other = ViewingSafety.eyewear(std, at, setting);
                     return other.evaluated()
                         ? Outcome.of(other.get().atAperture(), other.standard())
                         : Outcome.notEvaluated(other.reason(), other.standard());
                   },
                   v -> "OD " + QuantityFormat.format(v, Dimension.DIMENSIONLESS));
           if (!od.evaluated()) {
-            return RequirementEvaluator.Verdict.notEvaluated(unevaluated(od, beside));
+            return RequirementEvaluator.Verdict.notEvaluated(unevaluated(od, beside, setting));
           }
           RequirementEvaluator.Verdict v =
               RequirementEvaluator.compare(c, od.get().atAperture(), "OD", "");
           return withNote(
               v,
-              String.format(
-                  java.util.Locale.ROOT,
-                  "averaged over the %s limiting aperture; OD %.2f at the beam's peak; %s; %s; %s",
-                  QuantityFormat.format(
-                      SafetyModel.limitingAperture(standard, wavelength, at, exposureTime),
-                      Dimension.LENGTH),
-                  od.get().atPeak(),
-                  brief(od.standard()),
-                  beside,
-                  od.caution()));
+              setting.text()
+                  + "; "
+                  + (setting.viewing() == jonquil.safety.Viewing.DIFFUSE
+                      ? "at the eye, uniform over the pupil"
+                      : String.format(
+                          java.util.Locale.ROOT,
+                          "averaged over the %s limiting aperture; OD %.2f at the beam's peak",
+                          QuantityFormat.format(
+                              ViewingSafety.limitingAperture(standard, at, setting),
+                              Dimension.LENGTH),
+                          od.get().atPeak()))
+                  + "; "
+                  + ViewingSafety.markings(at, setting)
+                  + "; "
+                  + brief(od.standard())
+                  + sourceNote(od.standard())
+                  + "; "
+                  + beside
+                  + "; "
+                  + od.caution());
         }
+      default:
+        // RequirementEvaluator dispatches only HAZARD_CLASS, NOHD, EXPOSURE and EYEWEAR_OD here.
+        throw new IllegalStateException("not a safety measure: " + m);
     }
+  }
+
+  /**
+   * The assumptions (viewing, duration and why) the verdict on this requirement states first,
+   * recomputed for one line's solution; empty when the requirement is not judged there.
+   */
+  static Optional<String> settingText(
+      ResolvedRequirement r, Measure m, TrainSolution s, ResolvedModel model) {
+    return setting(r, m, s, model).map(ViewingSafety.Setting::text);
+  }
+
+  /** The EN 207 / EN 208 markings an eyewear verdict states, for one line's solution. */
+  static Optional<String> markingText(
+      ResolvedRequirement r, Measure m, TrainSolution s, ResolvedModel model) {
+    Optional<PortValue> at = lightAt(r, m, s);
+    return setting(r, m, s, model).flatMap(st -> at.map(a -> ViewingSafety.markings(a, st)));
+  }
+
+  private static Optional<ViewingSafety.Setting> setting(
+      ResolvedRequirement r, Measure m, TrainSolution s, ResolvedModel model) {
+    Optional<PortValue> at = lightAt(r, m, s);
+    Optional<ResolvedElement> element = r.at().flatMap(t -> model.element(t.symbol()));
+    if (at.isEmpty() || element.isEmpty()) {
+      return Optional.empty();
+    }
+    return Optional.of(ViewingSafety.setting(r.viewing(), element.get(), at.get()));
   }
 
   private static PortValue scaled(PortValue p, double scale) {
@@ -166,15 +203,23 @@ final class SafetyVerdicts {
       String unit,
       SafetyStandard governing,
       java.util.function.Function<SafetyStandard, Outcome<Double>> under,
-      java.util.function.DoubleFunction<String> shown) {
+      java.util.function.DoubleFunction<String> shown,
+      ViewingSafety.Setting setting) {
     String beside =
         StandardComparison.beside(governing, o.evaluated() ? o.get() : Double.NaN, under, shown);
     if (!o.evaluated()) {
-      return RequirementEvaluator.Verdict.notEvaluated(unevaluated(o, beside));
+      return RequirementEvaluator.Verdict.notEvaluated(unevaluated(o, beside, setting));
     }
     return withNote(
         RequirementEvaluator.compare(c, o.get(), unit, ""),
-        brief(o.standard()) + "; " + beside + "; " + o.caution());
+        setting.text()
+            + "; "
+            + brief(o.standard())
+            + sourceNote(o.standard())
+            + "; "
+            + beside
+            + "; "
+            + o.caution());
   }
 
   /** Under another standard, why the class is still IEC's. */
@@ -186,6 +231,22 @@ final class SafetyVerdicts {
               + standard.title()
               + " defines no classes here";
     };
+  }
+
+  /** The extended-source part of a standard's text (C6 and the apparent source), if any. */
+  static String sourceNote(String standard) {
+    for (String marker : List.of("; extended source, ", "; apparent source = ", "; spot size")) {
+      int i = standard.indexOf(marker);
+      if (i >= 0) {
+        return standard.substring(i);
+      }
+    }
+    return "";
+  }
+
+  /** As {@link #unevaluated(Outcome)}, saying what was assumed and what the others give. */
+  private static String unevaluated(Outcome<?> o, String beside, ViewingSafety.Setting setting) {
+    return setting.text() + ": " + unevaluated(o, beside);
   }
 
   /**

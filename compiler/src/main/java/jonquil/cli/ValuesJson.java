@@ -141,6 +141,7 @@ final class ValuesJson {
     j.addProperty("source", s.source());
     j.add("wavelength_m", number(s.wavelength()));
     j.add("exposure_time_s", number(s.exposureTime()));
+    j.addProperty("exposure_time_reason", s.exposureTimeReason());
     j.add("hazard_class", outcome(s.hazardClass(), c -> new JsonPrimitive(c.label())));
     j.add("mpe", outcome(s.mpe(), ValuesJson::mpe));
     j.add("mpe_ansi_z136_1", outcome(s.ansiMpe(), ValuesJson::mpe));

@@ -62,6 +62,10 @@ public enum DiagnosticCode {
       Severity.ERROR,
       "An ambient air condition outside the validity of Ciddor's equations"),
   UNKNOWN_STANDARD("J417", Severity.ERROR, "A laser-safety standard that Jonquil does not know"),
+  VIEWING_NOT_APPLICABLE(
+      "J420",
+      Severity.ERROR,
+      "A viewing condition or exposure duration on a requirement whose measure does not use it"),
   // Numbered with the analysis codes it guards, but found from the parameters alone.
   ENERGY_NOT_CONSERVED_BY_PARAMETERS(
       "J618",

@@ -49,6 +49,7 @@ final class RequirementResolver {
     Optional<ResolvedRequirement.Target> to = Optional.empty();
     boolean everywhere = false;
     List<Requirement.ForLine> lines = new ArrayList<>();
+    List<Requirement.ForLine> viewingPlaces = new ArrayList<>();
     for (Requirement.Place place : check.places()) {
       if (place instanceof Requirement.At a) {
         at = target(a.target());
@@ -56,12 +57,13 @@ final class RequirementResolver {
         from = target(b.from());
         to = target(b.to());
       } else if (place instanceof Requirement.ForLine l) {
-        lines.add(l);
+        (ViewingTermsResolver.WORDS.contains(l.word().text()) ? viewingPlaces : lines).add(l);
       } else {
         everywhere = true;
       }
     }
     java.util.OptionalDouble line = line(lines, at, check);
+    ViewingTerms viewing = new ViewingTermsResolver(sink, values).resolve(viewingPlaces, measure);
     boolean damaged = file.damaged(req.range());
     if (!damaged) {
       measure.ifPresent(m -> checkPlaces(m, check));
@@ -110,7 +112,8 @@ final class RequirementResolver {
         yield,
         valid,
         builds,
-        line);
+        line,
+        viewing);
   }
 
   /**
@@ -135,9 +138,20 @@ final class RequirementResolver {
       sink.report(
           DiagnosticCode.BAD_ARGUMENT,
           l.word().range(),
-          "after 'for' a requirement names a laser line, like 'for line 532 nm'; '"
+          "after 'for' a requirement names a laser line, like 'for line 532 nm', or how the"
+              + " light is viewed: "
+              + ViewingTermsResolver.EXAMPLES
+              + "; '"
               + l.word().text()
-              + "' is not understood");
+              + "' is not understood"
+              + Suggest.closest(
+                      l.word().text(),
+                      java.util.stream.Stream.concat(
+                              java.util.stream.Stream.of("line"),
+                              ViewingTermsResolver.WORDS.stream())
+                          .toList())
+                  .map(c -> "; did you mean 'for " + c + "'?")
+                  .orElse(""));
       return java.util.OptionalDouble.empty();
     }
     if (check.band().isPresent()) {

@@ -11,7 +11,8 @@ import jonquil.syntax.Requirement;
  * A requirement with its measure, places and bounds checked and converted to SI, ready for an
  * analysis to evaluate. {@code valid} is false when the line had errors; {@code yieldBuilds} is the
  * number of builds the line names ('over 2000 builds'); {@code line} the vacuum wavelength of the
- * one laser line the requirement judges ('for line 532 nm'), empty for all lines together.
+ * one laser line the requirement judges ('for line 532 nm'), empty for all lines together; {@code
+ * viewing} how a safety requirement's light meets the eye ('for viewing diffuse').
  */
 public record ResolvedRequirement(
     Path file,
@@ -26,7 +27,8 @@ public record ResolvedRequirement(
     Optional<Criterion> yield,
     boolean valid,
     OptionalInt yieldBuilds,
-    java.util.OptionalDouble line) {
+    java.util.OptionalDouble line,
+    ViewingTerms viewing) {
 
   public ResolvedRequirement {
     criteria = List.copyOf(criteria);

@@ -1,5 +1,7 @@
 package jonquil.safety;
 
+import java.util.Locale;
+
 /**
  * The extended-source correction of IEC 60825-1:2014 (Ed. 3), written once so that a caller can
  * pass the angular subtense α of the apparent source: C6, its bounds α_min and α_max(t), the time
@@ -12,6 +14,13 @@ package jonquil.safety;
  * ExtendedSourceTest checks). γ_ph = 11 mrad for 10–100 s, 1.1 t^0.5 mrad for 100–10⁴ s, 110 mrad
  * beyond: confirmed by Directive 2006/25/EC, Annex II, Table 2.5 (γ = 1.1 t^0.5 mrad, 110 mrad
  * above 10⁴ s); that Ed. 3 uses the same angles is from memory.
+ *
+ * <p>{@link #of} is the factor a caller outside the tables applies (a reflection's apparent source,
+ * a diffuse spot): only where it is certain not to be lenient, 400–1400 nm, continuous wave or a
+ * single pulse, and not where the photochemical limit may govern (400–600 nm beyond 10 s), whose
+ * extended-source rule is a field of view, not C6. Beyond 10 s it is C6·(T2/10 s)^−0.25: exact
+ * beyond T2 and stricter than the table between 10 s and T2. Elsewhere C6 = 1 (the point-source
+ * MPE, never above the extended-source one) and the note says why.
  */
 public final class ExtendedSource {
   private ExtendedSource() {}
@@ -21,6 +30,16 @@ public final class ExtendedSource {
 
   static final String TABLE =
       Ed3.EDITION + ", Table 9 (C6, α_min = 1.5 mrad, α_max(t), T2; from memory)";
+
+  /**
+   * The correction applied and why.
+   *
+   * @param c6 the factor the point-source MPE is multiplied by (≥ 1)
+   * @param alpha the apparent source subtense, rad
+   * @param alphaMax α_max for the duration, rad
+   * @param note how C6 was found, for findings
+   */
+  public record Correction(double c6, double alpha, double alphaMax, String note) {}
 
   /** α_max for the exposure duration t (s), rad: 5 mrad, 200 t^0.5 mrad, 100 mrad. */
   public static double alphaMax(double t) {
@@ -61,6 +80,56 @@ public final class ExtendedSource {
   static double photochemicalDilution(double alpha, double t) {
     double gamma = photochemicalAcceptance(t);
     return alpha > gamma ? (alpha / gamma) * (alpha / gamma) : 1.0;
+  }
+
+  /** C6 for this emission, or 1 with the reason it is not applied. */
+  public static Correction of(Emission e, double alpha, double exposureDuration) {
+    double nm = CorrectionFactors.nm(e.wavelength());
+    double t = e.singlePulseOnly() ? e.pulseDuration() : exposureDuration;
+    double max = alphaMax(t);
+    String angle = String.format(Locale.ROOT, "alpha %.3g mrad", alpha * 1e3);
+    if (nm < 400 || nm >= 1400) {
+      return new Correction(
+          1, alpha, max, angle + ": C6 = 1, no retinal image outside 400-1400 nm");
+    }
+    if (e.pulsed() && !e.singlePulseOnly()) {
+      return new Correction(
+          1,
+          alpha,
+          max,
+          angle + ": C6 = 1 kept for a pulse train (C5 depends on alpha), conservative");
+    }
+    if (nm < 600 && t > 10) {
+      return new Correction(
+          1,
+          alpha,
+          max,
+          angle + ": C6 = 1 kept, the photochemical limit may govern (400-600 nm, > 10 s)");
+    }
+    double c6 = c6(alpha, t);
+    String c6Text =
+        String.format(
+            Locale.ROOT,
+            "%s: C6 = %.3g (alpha_min 1.5 mrad, alpha_max %.3g mrad; %s)",
+            angle,
+            c6,
+            max * 1e3,
+            TABLE);
+    if (t <= 10) {
+      return new Correction(c6, alpha, max, c6Text);
+    }
+    double t2 = t2(alpha);
+    double factor = c6 * Math.pow(t2 / 10, -0.25);
+    return new Correction(
+        factor,
+        alpha,
+        max,
+        String.format(
+            Locale.ROOT,
+            "%s, beyond 10 s with T2 = %.3g s: factor C6 (T2/10 s)^-0.25 = %.3g",
+            c6Text,
+            t2,
+            factor));
   }
 
   static void requireAlpha(double alpha) {

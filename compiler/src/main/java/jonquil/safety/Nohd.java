@@ -48,7 +48,17 @@ public final class Nohd {
    */
   public static Outcome<Double> of(
       Emission e, double exitDiameter1e2, double divergence1e2, double exposureDuration) {
-    Outcome<MaximumPermissibleExposure> mpe = OcularMpe.at(e, exposureDuration);
+    return of(OcularLimit.IEC, e, exitDiameter1e2, divergence1e2, exposureDuration);
+  }
+
+  /** As above, against {@code limit}'s MPE. */
+  public static Outcome<Double> of(
+      OcularLimit limit,
+      Emission e,
+      double exitDiameter1e2,
+      double divergence1e2,
+      double exposureDuration) {
+    Outcome<MaximumPermissibleExposure> mpe = limit.at(e, exposureDuration);
     String standard = FORMULA + "; MPE: " + mpe.standard();
     if (!mpe.evaluated()) {
       return Outcome.notEvaluated(mpe.reason(), standard);
@@ -60,5 +70,106 @@ public final class Nohd {
             ? forLimit(e.pulseEnergy(), a, phi, mpe.get().radiantExposure())
             : forLimit(e.averagePower(), a, phi, mpe.get().irradiance());
     return Outcome.of(d.get(), standard);
+  }
+
+  static final String SPECULAR =
+      "specular: the reflected beam is the beam with rho P (ANSI Z136.1-2014, specular-reflection"
+          + " NHZ; IEC TR 60825-14:2004; from memory)";
+
+  static final String DIFFUSE =
+      "NOHD = sqrt(rho P cos(theta)/(pi MPE)), Lambertian reflection (ANSI Z136.1-2014, diffuse"
+          + " reflection NHZ; IEC TR 60825-14:2004; equation numbers from memory)";
+
+  /**
+   * NOHD of a mirror-like reflection of the beam, measured along the beam's path from the exit: the
+   * beam with its power scaled by the reflectance ρ, which a flat mirror leaves unchanged in size
+   * and divergence.
+   */
+  public static Outcome<Double> specular(
+      Emission e,
+      double exitDiameter1e2,
+      double divergence1e2,
+      double exposureDuration,
+      double reflectance) {
+    return specular(
+        OcularLimit.IEC, e, exitDiameter1e2, divergence1e2, exposureDuration, reflectance);
+  }
+
+  /** As above, against {@code limit}'s MPE. */
+  public static Outcome<Double> specular(
+      OcularLimit limit,
+      Emission e,
+      double exitDiameter1e2,
+      double divergence1e2,
+      double exposureDuration,
+      double reflectance) {
+    requireReflectance(reflectance);
+    if (reflectance == 0) {
+      return Outcome.of(0.0, SPECULAR);
+    }
+    Emission reflected = scaled(e, reflectance);
+    Outcome<Double> d = of(limit, reflected, exitDiameter1e2, divergence1e2, exposureDuration);
+    String standard = d.standard() + "; " + SPECULAR;
+    return d.evaluated()
+        ? Outcome.of(d.get(), standard)
+        : Outcome.notEvaluated(d.reason(), standard);
+  }
+
+  /**
+   * The bare Lambertian formula: the distance from a diffusely reflecting spot beyond which the
+   * irradiance ρ P cos θ/(π r²) of a perfect diffuser stays below the MPE. The spot is taken as a
+   * point source, which is never lenient (its C6 would only raise the MPE).
+   *
+   * @param powerOrEnergy W (cw, MPE in W/m²) or J per pulse (MPE in J/m²) reaching the spot
+   * @param reflectance ρ, 0 to 1
+   * @param cosTheta cosine of the viewing angle from the surface normal
+   * @param mpe same basis as powerOrEnergy
+   */
+  public static Outcome<Double> diffuseForLimit(
+      double powerOrEnergy, double reflectance, double cosTheta, double mpe) {
+    requireReflectance(reflectance);
+    if (!(mpe > 0) || !(powerOrEnergy >= 0) || !(cosTheta >= 0 && cosTheta <= 1)) {
+      throw new IllegalArgumentException("need mpe > 0, power >= 0 and 0 <= cos theta <= 1");
+    }
+    return Outcome.of(Math.sqrt(reflectance * powerOrEnergy * cosTheta / (Math.PI * mpe)), DIFFUSE);
+  }
+
+  /**
+   * NOHD of a diffuse reflection of the whole emission, viewed along the normal (cos θ = 1, the
+   * worst case), measured from the reflecting spot.
+   */
+  public static Outcome<Double> diffuse(Emission e, double exposureDuration, double reflectance) {
+    return diffuse(OcularLimit.IEC, e, exposureDuration, reflectance);
+  }
+
+  /** As above, against {@code limit}'s MPE. */
+  public static Outcome<Double> diffuse(
+      OcularLimit limit, Emission e, double exposureDuration, double reflectance) {
+    Outcome<MaximumPermissibleExposure> mpe = limit.at(e, exposureDuration);
+    String standard = DIFFUSE + "; point-source MPE, conservative; MPE: " + mpe.standard();
+    if (!mpe.evaluated()) {
+      return Outcome.notEvaluated(mpe.reason(), standard);
+    }
+    Outcome<Double> d =
+        e.pulsed()
+            ? diffuseForLimit(e.pulseEnergy(), reflectance, 1, mpe.get().radiantExposure())
+            : diffuseForLimit(e.averagePower(), reflectance, 1, mpe.get().irradiance());
+    return Outcome.of(d.get(), standard);
+  }
+
+  /** The emission with its power (and pulse energy) scaled by a reflectance. */
+  static Emission scaled(Emission e, double reflectance) {
+    return new Emission(
+        e.wavelength(),
+        e.averagePower() * reflectance,
+        e.pulseEnergy() * reflectance,
+        e.pulseDuration(),
+        e.repetitionRate());
+  }
+
+  private static void requireReflectance(double r) {
+    if (!(r >= 0 && r <= 1)) {
+      throw new IllegalArgumentException("reflectance must be within 0..1");
+    }
   }
 }
