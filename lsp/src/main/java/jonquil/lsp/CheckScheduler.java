@@ -103,6 +103,16 @@ final class CheckScheduler implements AutoCloseable {
     }
   }
 
+  /** A check is running on the worker. */
+  private boolean running;
+
+  /** True when no check is running or waiting to run: what a memory measurement waits for. */
+  boolean idle() {
+    synchronized (lock) {
+      return !dirty && !running;
+    }
+  }
+
   /** True while a requested run has not started yet. */
   boolean pending() {
     synchronized (lock) {
@@ -164,6 +174,7 @@ final class CheckScheduler implements AutoCloseable {
         leading = false;
         since = firstRequest;
         servingSince = since;
+        running = true;
       }
       boolean finished = true;
       try {
@@ -175,8 +186,9 @@ final class CheckScheduler implements AutoCloseable {
           // Reporting the failure failed too; the worker still lives for the next edit.
         }
       }
-      if (!finished) {
-        synchronized (lock) {
+      synchronized (lock) {
+        running = false;
+        if (!finished) {
           // The edits that run served are still unserved: they keep their age for the maxDelay
           // bound.
           firstRequest = Math.min(firstRequest, since);

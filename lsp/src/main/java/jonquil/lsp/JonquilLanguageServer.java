@@ -317,6 +317,11 @@ public final class JonquilLanguageServer implements LanguageServer, LanguageClie
     scheduler.request();
   }
 
+  /** No check is running or waiting: every edit so far has been checked in full. */
+  boolean checksIdle() {
+    return scheduler.idle();
+  }
+
   @Override
   public void cancelProgress(WorkDoneProgressCancelParams params) {
     onNotification(

@@ -112,7 +112,15 @@ class MemorySoakTest {
    * %.
    */
   private static long settledHeap(LspHarness h) throws InterruptedException {
-    Thread.sleep(300); // past the debounce: no check is running
+    // Past the debounce and past the editor's second, full pass (the yields), which on a loaded
+    // machine can take seconds: a check still running holds its model and would count as growth.
+    Thread.sleep(300);
+    long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(60);
+    while (!h.server.checksIdle() && System.nanoTime() < deadline) {
+      TimeUnit.MILLISECONDS.sleep(20);
+    }
+    assertTrue(h.server.checksIdle(), "the server still checks a minute after the last edit");
+    Thread.sleep(100); // the publication of the last check
     h.client.forget();
     long previous = Long.MAX_VALUE;
     long used = used();
