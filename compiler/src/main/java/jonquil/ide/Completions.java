@@ -12,6 +12,9 @@ import jonquil.resolve.Category;
 import jonquil.resolve.ElementKind;
 import jonquil.resolve.Measure;
 import jonquil.resolve.ParamSpec;
+import jonquil.resolve.SafetyStandard;
+import jonquil.resolve.ViewingTerms;
+import jonquil.safety.Viewing;
 import jonquil.source.SourceFile;
 import jonquil.syntax.Token;
 import jonquil.syntax.TokenKind;
@@ -55,9 +58,10 @@ final class Completions {
         return inTrain(c, v);
       case REQUIRE:
         return inRequire(c, v);
-      default:
+      case TOP:
         return topLevel(c, v);
     }
+    throw new IllegalStateException("unknown block " + c.block());
   }
 
   private static List<CompletionItemInfo> topLevel(CursorContext c, Vocabulary v) {
@@ -69,7 +73,17 @@ final class Completions {
       out.add(keyword("use", "bring in the declarations of a part library: use \"parts.jonq\""));
       out.add(keyword("train", "the beam paths of the bench: train main { ... }"));
       out.add(keyword("require", "the requirements the train must meet: require { ... }"));
+      out.add(
+          keyword(
+              "standard",
+              "the laser-safety standard that gates the safety requirements: standard "
+                  + String.join(" | ", SafetyStandard.words())));
       return out;
+    }
+    if (c.statement().get(0).is("standard") && c.statement().size() == 1) {
+      return java.util.Arrays.stream(SafetyStandard.values())
+          .map(st -> keyword(st.word(), st.title()))
+          .toList();
     }
     String kind = c.statement().get(0).text();
     boolean shorthand = c.statement().stream().anyMatch(l -> l.is("="));
@@ -189,6 +203,14 @@ final class Completions {
       return List.of(
           keyword("wavelength", "a wavelength band: over wavelength 1060 nm .. 1070 nm"));
     }
+    if (c.after("for")) {
+      return ViewingTerms.WORDS.stream().map(w -> keyword(w, ViewingTerms.example(w))).toList();
+    }
+    if (c.after("viewing")) {
+      return java.util.Arrays.stream(Viewing.values())
+          .map(w -> keyword(w.word(), w.description()))
+          .toList();
+    }
     if (c.afterNumber()) {
       boolean band = c.statement().stream().anyMatch(l -> l.is("over"));
       return units(
@@ -200,6 +222,12 @@ final class Completions {
       List<CompletionItemInfo> out = new ArrayList<>();
       for (String k : List.of("at", "everywhere", "from", "to", "in", "is", "over")) {
         out.add(keyword(k, ""));
+      }
+      if (measure(c).get().viewed()) {
+        out.add(
+            keyword(
+                "for",
+                "how the light meets the eye: for " + String.join(" | ", ViewingTerms.WORDS)));
       }
       return out;
     }

@@ -152,6 +152,37 @@ public enum Measure {
     return Arrays.stream(values()).flatMap(m -> m.spellings.stream()).toList();
   }
 
+  /**
+   * Whether how the light meets the eye ('for viewing', 'for duration', ...) changes this measure:
+   * the eye-safety figures of a place. A hazard class has the standard's own conditions.
+   */
+  public boolean viewed() {
+    return switch (this) {
+      case EXPOSURE, EYEWEAR_OD, NOHD -> true;
+      case POWER,
+          TRANSMISSION,
+          IRRADIANCE,
+          PEAK_IRRADIANCE,
+          AVERAGE_PEAK_IRRADIANCE,
+          FLUENCE,
+          PEAK_FIELD,
+          PEAK_POWER,
+          PULSE_ENERGY,
+          BEAM_RADIUS,
+          DAMAGE_MARGIN,
+          HAZARD_CLASS,
+          STRAY,
+          BACK_REFLECTION,
+          POLARIZATION,
+          AZIMUTH,
+          ELLIPTICITY,
+          HANDEDNESS,
+          EXTINCTION,
+          DOP ->
+          false;
+    };
+  }
+
   /** Measures that may follow a polarization requirement after a comma. */
   public boolean polarizationDetail() {
     return this == AZIMUTH

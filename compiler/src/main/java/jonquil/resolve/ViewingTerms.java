@@ -1,5 +1,6 @@
 package jonquil.resolve;
 
+import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import jonquil.safety.ExposureDuration;
@@ -22,6 +23,23 @@ public record ViewingTerms(
     OptionalDouble reflectance,
     OptionalDouble subtense,
     OptionalDouble distance) {
+
+  /** The words after 'for' that state how the light is viewed, in the order messages list them. */
+  public static final List<String> WORDS =
+      List.of("viewing", "duration", "reflectance", "subtense", "distance");
+
+  /** What each word of {@link #WORDS} states, with an example, for messages and completion. */
+  public static String example(String word) {
+    return switch (word) {
+      case "viewing" -> "how the light meets the eye: for viewing direct | specular | diffuse";
+      case "duration" -> "the exposure duration: for duration 10 s, or for duration deliberate";
+      case "reflectance" ->
+          "the reflector's reflectance (specular or diffuse): for reflectance 90 %";
+      case "subtense" -> "the apparent source's angular subtense: for subtense 5 mrad";
+      case "distance" -> "the eye's distance from a diffuse spot: for distance 20 cm";
+      default -> throw new IllegalArgumentException("not a viewing word: " + word);
+    };
+  }
 
   /** Nothing stated. */
   public static final ViewingTerms NONE =

@@ -18,9 +18,7 @@ import jonquil.units.Dimension;
  * or its viewing would not use (nothing accepted is ignored).
  */
 final class ViewingTermsResolver {
-  /** The words after 'for' that state how the light is viewed, in the order messages list them. */
-  static final List<String> WORDS =
-      List.of("viewing", "duration", "reflectance", "subtense", "distance");
+  static final List<String> WORDS = ViewingTerms.WORDS;
 
   static final String EXAMPLES =
       "'for viewing diffuse', 'for duration 10 s', 'for reflectance 90 %', 'for subtense 5 mrad',"
@@ -92,24 +90,24 @@ final class ViewingTermsResolver {
 
   /** Whether the measure uses this word; reports J420 when not. */
   private boolean applies(Measure m, String word, Requirement.ForLine f) {
-    String why =
-        switch (m) {
-          case EXPOSURE, EYEWEAR_OD -> null;
-          case NOHD ->
-              switch (word) {
-                case "subtense" ->
-                    "an NOHD is worked out for a point source (C6 = 1), which is never lenient;"
-                        + " state the subtense on an 'exposure' or 'eyewear od' requirement";
-                case "distance" ->
-                    "the NOHD is itself the distance; 'for distance' sets where an 'exposure' or"
-                        + " 'eyewear od' requirement views a diffuse spot";
-                default -> null;
-              };
-          case HAZARD_CLASS ->
-              "a hazard class is fixed by the standard's own time bases and measurement"
-                  + " conditions, not by how the beam is viewed";
-          default -> "only 'exposure', 'nohd' and 'eyewear od' depend on how the light is viewed";
-        };
+    String why;
+    if (m == Measure.HAZARD_CLASS) {
+      why =
+          "a hazard class is fixed by the standard's own time bases and measurement"
+              + " conditions, not by how the beam is viewed";
+    } else if (!m.viewed()) {
+      why = "only 'exposure', 'nohd' and 'eyewear od' depend on how the light is viewed";
+    } else if (m == Measure.NOHD && word.equals("subtense")) {
+      why =
+          "an NOHD is worked out for a point source (C6 = 1), which is never lenient;"
+              + " state the subtense on an 'exposure' or 'eyewear od' requirement";
+    } else if (m == Measure.NOHD && word.equals("distance")) {
+      why =
+          "the NOHD is itself the distance; 'for distance' sets where an 'exposure' or"
+              + " 'eyewear od' requirement views a diffuse spot";
+    } else {
+      why = null;
+    }
     if (why == null) {
       return true;
     }

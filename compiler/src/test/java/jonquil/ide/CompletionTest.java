@@ -54,7 +54,30 @@ class CompletionTest {
   void atTheStartOfATopLevelLineEveryKindAndTheBlockKeywords() {
     List<CompletionItemInfo> items = at(BENCH.replace("@", "$0"));
     assertEquals(ElementKind.words(), labels(items, "kind"));
-    assertEquals(List.of("use", "train", "require"), labels(items, "keyword"));
+    assertEquals(List.of("use", "train", "require", "standard"), labels(items, "keyword"));
+  }
+
+  @Test
+  void afterStandardTheStandardsByTheirWords() {
+    List<CompletionItemInfo> items = at(BENCH.replace("@", "standard $0"));
+    assertEquals(List.of("iec", "directive", "ansi"), labels(items, "keyword"));
+    assertTrue(items.get(1).documentation().contains("2006/25/EC"), items.toString());
+  }
+
+  @Test
+  void aSafetyRequirementOffersForAndItsViewingWords() {
+    String exposure = "power at spot >= 1 W\n  exposure at spot <= 100 % ";
+    assertTrue(labels(at(BENCH.replace("power at spot >= 1 W", exposure + "$0"))).contains("for"));
+    assertFalse(
+        labels(at(BENCH.replace("power at spot >= 1 W", "power at spot >= 1 W $0")))
+            .contains("for"),
+        "power does not depend on how the light is viewed");
+    assertEquals(
+        List.of("viewing", "duration", "reflectance", "subtense", "distance"),
+        labels(at(BENCH.replace("power at spot >= 1 W", exposure + "for $0")), "keyword"));
+    assertEquals(
+        List.of("direct", "specular", "diffuse"),
+        labels(at(BENCH.replace("power at spot >= 1 W", exposure + "for viewing $0")), "keyword"));
   }
 
   @Test
