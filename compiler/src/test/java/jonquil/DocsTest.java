@@ -1,11 +1,15 @@
 package jonquil;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
 import java.nio.file.Files;
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import jonquil.diag.DiagnosticCode;
 import jonquil.resolve.ElementKind;
 import jonquil.resolve.Measure;
@@ -79,5 +83,65 @@ class DocsTest {
       }
     }
     assertTrue(missing.isEmpty(), "not in DEVELOPERS.md: " + missing);
+  }
+
+  /** Room for the map only: detail belongs in the module guides it points to. */
+  static final int GUIDE_MAX_BYTES = 11_000;
+
+  @Test
+  void theDevelopersGuideStaysAMap() throws IOException {
+    long size = Files.size(Repo.root().resolve("DEVELOPERS.md"));
+    assertTrue(
+        size <= GUIDE_MAX_BYTES,
+        "DEVELOPERS.md is "
+            + size
+            + " bytes, over "
+            + GUIDE_MAX_BYTES
+            + ": move detail to compiler/README.md or lsp/README.md and leave a pointer");
+  }
+
+  /** A Markdown link or image: its target runs to the first closing parenthesis or blank. */
+  static final Pattern LINK = Pattern.compile("\\]\\(([^)\\s]+)\\)");
+
+  /** The relative link targets of a Markdown file, without their #fragment. */
+  static List<String> relativeLinks(String markdown) {
+    List<String> targets = new ArrayList<>();
+    Matcher m = LINK.matcher(markdown);
+    while (m.find()) {
+      String target = m.group(1);
+      // A scheme (https:, mailto:) leaves the repository; a bare #anchor stays on the page.
+      if (target.matches("[A-Za-z][A-Za-z0-9+.-]*:.*") || target.startsWith("#")) {
+        continue;
+      }
+      int hash = target.indexOf('#');
+      targets.add(hash < 0 ? target : target.substring(0, hash));
+    }
+    return targets;
+  }
+
+  @Test
+  void relativeLinksFindTheirTargetsWithoutAnchorsOrSchemes() {
+    assertEquals(
+        List.of("a/b.md", "../c.md", "d.png"),
+        relativeLinks(
+            "[a](a/b.md) [x](https://example.org/y) [c](../c.md#part) ![d](d.png) [e](#top)"));
+  }
+
+  @Test
+  void everyRelativeLinkOfTheGuidesNamesAFileThatExists() throws IOException {
+    List<String> broken = new ArrayList<>();
+    for (String guide : List.of("DEVELOPERS.md", "compiler/README.md", "lsp/README.md")) {
+      Path file = Repo.root().resolve(guide);
+      for (String target : relativeLinks(Files.readString(file))) {
+        if (target.startsWith("/") || !Files.exists(file.resolveSibling(target))) {
+          broken.add(guide + " -> " + target);
+        }
+      }
+    }
+    assertEquals(List.of(), broken, "links to no file");
+    List<String> pointers = relativeLinks(Files.readString(Repo.root().resolve("DEVELOPERS.md")));
+    assertTrue(
+        pointers.contains("compiler/README.md") && pointers.contains("lsp/README.md"),
+        "DEVELOPERS.md must point at the two module guides that hold its detail");
   }
 }

@@ -17,8 +17,8 @@ import org.apache.commons.math3.complex.Complex;
 
 /**
  * The optical model of each element kind: how one incoming beam divides among the element's ports,
- * its ghosts and absorption. Defaults for unstated values are listed in DEVELOPERS.md ("Element
- * models").
+ * its ghosts and absorption. Defaults for unstated values are listed in compiler/README.md
+ * ("Element models").
  */
 final class ElementOptics {
   /**

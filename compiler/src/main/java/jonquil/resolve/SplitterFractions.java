@@ -4,9 +4,9 @@ import java.util.OptionalDouble;
 
 /**
  * The four power fractions of a splitter (transmitted and reflected, p and s) from what its
- * declaration states, with the stated defaults (DEVELOPERS.md, "Element models") filling the rest.
- * The one home of that rule: the optics use it to split the beam, the resolver to refuse a set that
- * sends out more light than comes in.
+ * declaration states, with the stated defaults (compiler/README.md, "Element models") filling the
+ * rest. The one home of that rule: the optics use it to split the beam, the resolver to refuse a
+ * set that sends out more light than comes in.
  */
 public record SplitterFractions(double tp, double ts, double rp, double rs) {
   /** Stated defaults of a polarizing splitter: p transmittance, s reflectance, extinction. */

@@ -27,11 +27,6 @@ final class Ed3Infrared {
   static final String CORNEA = "corneal thermal (infrared)";
   static final String SKIN = "skin thermal (infrared)";
 
-  static final String TABLE =
-      Ed3.EDITION
-          + ", Annex A, Table A.1 / A.5, 1400 nm-1 mm (from memory; cross-check: Directive"
-          + " 2006/25/EC, Annex II, Tables 2.2-2.4)";
-
   /** The limit over t, J/m², for 1400 nm ≤ λ ≤ 1 mm. */
   static double limit(double lambda, double t) {
     double n = CorrectionFactors.nm(lambda);

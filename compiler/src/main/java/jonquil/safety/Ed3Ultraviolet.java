@@ -26,11 +26,6 @@ final class Ed3Ultraviolet {
   static final String PHOTOCHEMICAL = "ultraviolet photochemical (cornea, lens, skin)";
   static final String THERMAL = "ultraviolet thermal";
 
-  static final String TABLE =
-      Ed3.EDITION
-          + ", Annex A, Table A.1 / A.5, 180-400 nm (C1, C2, T1; from memory; cross-check:"
-          + " Directive 2006/25/EC, Annex II, Table 2.2)";
-
   /** C1 = 5.6×10³ t^0.25 J/m² (Ed. 3 Table 9; from memory). */
   static double c1(double t) {
     return 5.6e3 * Math.pow(t, 0.25);
