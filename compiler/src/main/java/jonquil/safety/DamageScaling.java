@@ -34,10 +34,10 @@ public final class DamageScaling {
     if (outside(tau1) || outside(tau2)) {
       return Outcome.<Double>notEvaluated(
               "pulse durations "
-                  + tau1
-                  + " s → "
-                  + tau2
-                  + " s leave the 10 ps–100 ns window"
+                  + MpeCalculator.seconds(tau1)
+                  + " → "
+                  + MpeCalculator.seconds(tau2)
+                  + " leave the 10 ps–100 ns window"
                   + " of the sqrt(tau) rule; use a threshold measured at the target duration",
               RULES)
           .withCaution(CAUTION);

@@ -52,12 +52,12 @@ public abstract class MpeCalculator {
       return "exposure duration must be > 0 s";
     }
     if (t > TableScope.T_MAX) {
-      return "exposure duration " + t + " s exceeds 3e4 s, the end of the tables";
+      return "exposure duration " + seconds(t) + " exceeds 30000 s, the end of the tables";
     }
     if (t < tissue.shortestPulse()) {
       return "exposure duration "
-          + t
-          + " s is below "
+          + seconds(t)
+          + " is below "
           + tissue.shortestPulseText()
           + "; not implemented";
     }
@@ -71,8 +71,8 @@ public abstract class MpeCalculator {
   private String pulseRefusal(double tau, boolean single) {
     if (tau < tissue.shortestPulse()) {
       return "pulse duration "
-          + tau
-          + " s is below "
+          + seconds(tau)
+          + " is below "
           + tissue.shortestPulseText()
           + ": "
           + rowsBelowShortestPulse();
@@ -197,6 +197,11 @@ public abstract class MpeCalculator {
             table,
             governing),
         cited(table, governing));
+  }
+
+  /** A duration for a message, in the unit that suits it ("300 fs", "18 µs", "10 s"). */
+  public static String seconds(double t) {
+    return jonquil.units.QuantityFormat.format(t, jonquil.units.Dimension.TIME);
   }
 
   /** A refusal of a wavelength, quoted in nanometres to one decimal, and {@code why}. */

@@ -33,7 +33,7 @@ final class PulseRules {
         double perGroup = rate * ti;
         return new PulseTrain.Limit(
             mpe.applyAsDouble(ti) / perGroup,
-            "repetitive pulse (pulses within T_i = " + ti + " s added)");
+            "repetitive pulse (pulses within T_i = " + MpeCalculator.seconds(ti) + " added)");
       }
       return new PulseTrain.Limit(single, "repetitive pulse (" + C5_NOTE + ")");
     };
@@ -113,7 +113,11 @@ final class PulseRules {
         double c5 = c5(lambda, alpha, tau, groups, exposure);
         return new PulseTrain.Limit(
             mpe.applyAsDouble(span) * c5 / perGroup,
-            "repetitive pulse (pulses within T_i = " + ti + " s added, C5 = " + round(c5) + ")");
+            "repetitive pulse (pulses within T_i = "
+                + MpeCalculator.seconds(ti)
+                + " added, C5 = "
+                + round(c5)
+                + ")");
       }
       double c5 = c5(lambda, alpha, tau, pulses, exposure);
       return new PulseTrain.Limit(

@@ -3,6 +3,7 @@ package jonquil.safety.ansi;
 import jonquil.safety.CorrectionFactors;
 import jonquil.safety.Emission;
 import jonquil.safety.MaximumPermissibleExposure;
+import jonquil.safety.MpeCalculator;
 import jonquil.safety.Outcome;
 import jonquil.safety.PulseTrain;
 import jonquil.safety.TableScope;
@@ -51,8 +52,8 @@ public final class AnsiOcularMpe extends Z136Mpe {
     if (cornea && ANSI.wavelengthRefusal(lambda) == null && t > 0 && t < Z136.T_MIN_CORNEA) {
       return Outcome.notEvaluated(
           "exposure or pulse of "
-              + t
-              + " s: the ultraviolet and infrared rows of Table 5a start"
+              + MpeCalculator.seconds(t)
+              + ": the ultraviolet and infrared rows of Table 5a start"
               + " at 1 ns (from memory); not implemented below",
           TABLE);
     }
@@ -117,10 +118,10 @@ public final class AnsiOcularMpe extends Z136Mpe {
       return null;
     }
     return "pulse duration "
-        + tau
-        + " s is below t_min = "
-        + tMin
-        + " s: for such trains ANSI Z136.1-2014 section 8.2.3 / Table 6 adds pulses within"
+        + MpeCalculator.seconds(tau)
+        + " is below t_min = "
+        + MpeCalculator.seconds(tMin)
+        + ": for such trains ANSI Z136.1-2014 section 8.2.3 / Table 6 adds pulses within"
         + " t_min and modifies C_P (from memory); those provisions were not confirmed, so the"
         + " train is not evaluated (single pulses are)";
   }
