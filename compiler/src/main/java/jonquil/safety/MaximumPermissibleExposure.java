@@ -34,32 +34,8 @@ public record MaximumPermissibleExposure(
     String table,
     String governingLimit) {
 
-  /** Without a stated governing effect. */
-  public MaximumPermissibleExposure(
-      double radiantExposure,
-      double irradiance,
-      double exposureDuration,
-      double apertureDiameter,
-      double singlePulse,
-      double averagePower,
-      double repetitivePulse,
-      String limitingCriterion,
-      String table) {
-    this(
-        radiantExposure,
-        irradiance,
-        exposureDuration,
-        apertureDiameter,
-        singlePulse,
-        averagePower,
-        repetitivePulse,
-        limitingCriterion,
-        table,
-        "");
-  }
-
   /** The same MPE averaged over another aperture and with its governing effect named. */
-  MaximumPermissibleExposure with(double aperture, String governing) {
+  public MaximumPermissibleExposure with(double aperture, String governing) {
     return new MaximumPermissibleExposure(
         radiantExposure,
         irradiance,
@@ -71,6 +47,23 @@ public record MaximumPermissibleExposure(
         limitingCriterion,
         table,
         governing);
+  }
+
+  /**
+   * The same MPE over another aperture, cited from {@code cited}: another standard's restatement.
+   */
+  public MaximumPermissibleExposure restated(double aperture, String cited) {
+    return new MaximumPermissibleExposure(
+        radiantExposure,
+        irradiance,
+        exposureDuration,
+        aperture,
+        singlePulse,
+        averagePower,
+        repetitivePulse,
+        limitingCriterion,
+        cited,
+        governingLimit);
   }
 
   /** The caution that goes with every MPE. */

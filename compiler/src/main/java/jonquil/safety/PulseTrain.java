@@ -70,7 +70,8 @@ public final class PulseTrain {
         criterion = r.criterion();
       }
     }
+    // The governing biological effect is named by the calculator (MaximumPermissibleExposure.with).
     return new MaximumPermissibleExposure(
-        limit, limit * rate, exposure, aperture, single, average, repetitive, criterion, table);
+        limit, limit * rate, exposure, aperture, single, average, repetitive, criterion, table, "");
   }
 }

@@ -63,17 +63,7 @@ public final class AnsiOcularMpe extends Z136Mpe {
     }
     MaximumPermissibleExposure m = o.get();
     return Outcome.of(
-        new MaximumPermissibleExposure(
-            m.radiantExposure(),
-            m.irradiance(),
-            m.exposureDuration(),
-            Z136.eyeAperture(lambda, m.exposureDuration()),
-            m.singlePulse(),
-            m.averagePower(),
-            m.repetitivePulse(),
-            m.limitingCriterion(),
-            m.table()),
-        o.standard());
+        m.restated(Z136.eyeAperture(lambda, m.exposureDuration()), m.table()), o.standard());
   }
 
   @Override

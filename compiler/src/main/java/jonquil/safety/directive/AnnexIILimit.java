@@ -57,18 +57,7 @@ abstract class AnnexIILimit extends MpeCalculator {
             + "; "
             + AnnexII.FACTORS
             + (train ? "; " + AnnexII.REPETITIVE : "");
-    return Outcome.of(
-        new MaximumPermissibleExposure(
-            m.radiantExposure(),
-            m.irradiance(),
-            m.exposureDuration(),
-            aperture(lambda, m.exposureDuration()),
-            m.singlePulse(),
-            m.averagePower(),
-            m.repetitivePulse(),
-            m.limitingCriterion(),
-            table),
-        table);
+    return Outcome.of(m.restated(aperture(lambda, m.exposureDuration()), table), table);
   }
 
   @Override
