@@ -179,10 +179,15 @@ final class RequirementEvaluator {
           yield unreached(r);
         }
         double p = at.get().power();
+        jonquil.optics.PowerRange range = PortInterference.powerRange(model, s, at.get().key(), p);
+        if (range.varies()) {
+          yield overPhase(c, range, s.sourcePower());
+        }
         yield c.relativeToSource()
             ? compare(c, s.sourcePower() == 0 ? 0 : p / s.sourcePower(), "", "of the source power")
             : compare(c, p, "W", "");
       }
+      case VISIBILITY -> at.isEmpty() ? unreached(r) : visibility(c, s, model, at.get().key());
       case TRANSMISSION -> {
         Optional<PortValue> a = r.from().flatMap(t -> s.port(Propagator.key(t.symbol(), t.port())));
         Optional<PortValue> b = r.to().flatMap(t -> s.port(Propagator.key(t.symbol(), t.port())));
@@ -221,6 +226,51 @@ final class RequirementEvaluator {
       case DAMAGE_MARGIN -> damage(r, c, s, model);
       case HAZARD_CLASS, NOHD, EXPOSURE, EYEWEAR_OD -> SafetyVerdicts.evaluate(r, c, s, model);
     };
+  }
+
+  /**
+   * A power bound where beams of one line meet: it must hold over the whole range the unknown phase
+   * sweeps, so both ends are judged and the worse one reported.
+   */
+  private static Verdict overPhase(
+      Criterion c, jonquil.optics.PowerRange range, double sourcePower) {
+    boolean relative = c.relativeToSource();
+    double scale = relative ? (sourcePower == 0 ? 0 : 1 / sourcePower) : 1;
+    String unit = relative ? "" : "W";
+    String note =
+        "over the unknown phase of beams that meet here: "
+            + VerdictText.format(range.min(), "W")
+            + " .. "
+            + VerdictText.format(range.max(), "W")
+            + (range.exact() ? "" : " (an enclosure)")
+            + (relative ? " of the source power" : "");
+    Verdict low = compare(c, range.min() * scale, unit, note);
+    Verdict high = compare(c, range.max() * scale, unit, note);
+    if (low.pass() != high.pass()) {
+      return low.pass() ? high : low;
+    }
+    return low.margin() <= high.margin() ? low : high;
+  }
+
+  /** The fringe visibility of every line whose beams meet at a port; the worst line counts. */
+  private static Verdict visibility(
+      Criterion c, TrainSolution s, ResolvedModel model, String port) {
+    java.util.List<PortInterference> lines = PortInterference.at(model, s, port);
+    if (lines.isEmpty()) {
+      return Verdict.notEvaluated(PortInterference.NONE_MEET);
+    }
+    Verdict worst = null;
+    for (PortInterference i : lines) {
+      if (i.visibility().isEmpty()) {
+        return Verdict.notEvaluated(i.unknownReason());
+      }
+      Verdict v =
+          compare(c, i.visibility().getAsDouble(), "", "line " + LineSafety.name(i.wavelength()));
+      if (worst == null || (worst.pass() && !v.pass()) || v.margin() < worst.margin()) {
+        worst = v;
+      }
+    }
+    return worst;
   }
 
   /**

@@ -19,7 +19,8 @@ public record TrainSolution(
     double stopped,
     double observedAtPathEnds,
     Map<String, PortJones> jones,
-    Map<String, SurfaceAtAngle> surfaces) {
+    Map<String, SurfaceAtAngle> surfaces,
+    Map<String, List<PortArrival>> arrivals) {
 
   /**
    * Maps keep the order the propagation filled them in (the order light travels the paths), so
@@ -33,6 +34,45 @@ public record TrainSolution(
     budgets = List.copyOf(budgets);
     stray = List.copyOf(stray);
     clips = List.copyOf(clips);
+    Map<String, List<PortArrival>> arriving = new java.util.LinkedHashMap<>();
+    arrivals.forEach((port, list) -> arriving.put(port, List.copyOf(list)));
+    arrivals = java.util.Collections.unmodifiableMap(arriving);
+  }
+
+  /** A solution where no beams of one line meet again (a tree of paths). */
+  public TrainSolution(
+      Map<String, PortValue> ports,
+      Map<String, PortValue> incident,
+      List<ElementBudget> budgets,
+      List<StrayBeam> stray,
+      List<Clip> clips,
+      double sourcePower,
+      double absorbed,
+      double stopped,
+      double observedAtPathEnds,
+      Map<String, PortJones> jones,
+      Map<String, SurfaceAtAngle> surfaces) {
+    this(
+        ports,
+        incident,
+        budgets,
+        stray,
+        clips,
+        sourcePower,
+        absorbed,
+        stopped,
+        observedAtPathEnds,
+        jones,
+        surfaces,
+        Map.of());
+  }
+
+  /**
+   * The beams arriving at a port ("element.port") where beams of one line meet again, in the order
+   * light reached it; empty where none meet.
+   */
+  public List<PortArrival> arrivalsAt(String port) {
+    return arrivals.getOrDefault(port, List.of());
   }
 
   /** The light arriving at an element, before it acts. */

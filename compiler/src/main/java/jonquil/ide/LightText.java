@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import jonquil.analysis.BeamExposure;
+import jonquil.analysis.PortInterference;
 import jonquil.analysis.PortValue;
 import jonquil.analysis.SafetySummary;
 import jonquil.analysis.TrainSolution;
@@ -101,7 +102,35 @@ final class LightText {
           .append(MarkdownText.num(margins.get(name)))
           .append(" (threshold ÷ exposure)\n");
     }
+    interference(md, model, s, name, kind);
     polarization(md, rows);
+  }
+
+  /** Where beams of one line meet at a port of the element: visibility and power over phase. */
+  private static void interference(
+      StringBuilder md, ResolvedModel model, TrainSolution s, String name, ElementKind kind) {
+    for (String port : kind.ports()) {
+      String key = name + "." + port;
+      for (PortInterference i : PortInterference.at(model, s, key)) {
+        md.append("\nInterference at `")
+            .append(port)
+            .append("`: line ")
+            .append(MarkdownText.q(i.wavelength(), Dimension.LENGTH))
+            .append(", ")
+            .append(i.beams())
+            .append(" beams meet; visibility ")
+            .append(
+                i.visibility().isPresent()
+                    ? MarkdownText.num(i.visibility().getAsDouble())
+                    : "unknown (" + i.unknownReason() + ")")
+            .append("; power ")
+            .append(MarkdownText.q(i.range().min(), Dimension.POWER))
+            .append(" .. ")
+            .append(MarkdownText.q(i.range().max(), Dimension.POWER))
+            .append(i.range().exact() ? "" : " (an enclosure)")
+            .append(" over their relative phase\n");
+      }
+    }
   }
 
   private static List<Row> rows(TrainSolution s, String name, ElementKind kind) {

@@ -25,10 +25,9 @@ public record TemporalCoherence(OptionalDouble coherenceLength) {
   public static final TemporalCoherence UNSTATED = new TemporalCoherence(OptionalDouble.empty());
 
   public TemporalCoherence {
-    if (coherenceLength.isPresent()
-        && !(coherenceLength.getAsDouble() > 0 && coherenceLength.getAsDouble() < 1e300)) {
-      throw new IllegalArgumentException(
-          "coherence length must be positive and finite: " + coherenceLength);
+    // An infinite length (a linewidth too narrow for a double) is a line that never decoheres.
+    if (coherenceLength.isPresent() && !(coherenceLength.getAsDouble() > 0)) {
+      throw new IllegalArgumentException("coherence length must be positive: " + coherenceLength);
     }
   }
 
