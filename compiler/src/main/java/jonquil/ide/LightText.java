@@ -109,12 +109,14 @@ final class LightText {
   /** Where beams of one line meet at a port of the element: visibility and power over phase. */
   private static void interference(
       StringBuilder md, ResolvedModel model, TrainSolution s, String name, ElementKind kind) {
-    for (String port : kind.ports()) {
-      String key = name + "." + port;
+    // An element without ports (a detector) is its own one place.
+    List<String> ports = kind.ports().isEmpty() ? List.of("") : kind.ports();
+    for (String port : ports) {
+      String key = port.isEmpty() ? name : name + "." + port;
       for (PortInterference i : PortInterference.at(model, s, key)) {
-        md.append("\nInterference at `")
-            .append(port)
-            .append("`: line ")
+        md.append("\nInterference")
+            .append(port.isEmpty() ? "" : " at `" + port + "`")
+            .append(": line ")
             .append(MarkdownText.q(i.wavelength(), Dimension.LENGTH))
             .append(", ")
             .append(i.beams())
