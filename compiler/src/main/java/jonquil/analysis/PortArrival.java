@@ -7,9 +7,10 @@ import jonquil.optics.JonesVector;
 /**
  * One beam of one laser line arriving at a port where beams of that line meet again: the line
  * ({@link #lineKey}), its vacuum wavelength (m), its field after its route (a Jones vector in the
- * port's carried frame, |E|² = watts, without the propagation phase), the optical path from the
- * source (m, Σ n·d) and, for partially polarized light, the second, mutually incoherent polarized
- * part after the same route ({@link jonquil.optics.Coherency#polarizedParts()}; zero otherwise).
+ * table frame, as {@link PortValue} gives light, so that arrivals by different routes share one
+ * frame; |E|² = watts; without the propagation phase), the optical path from the source (m, Σ n·d)
+ * and, for partially polarized light, the second, mutually incoherent polarized part after the same
+ * route ({@link jonquil.optics.Coherency#polarizedParts()}; zero otherwise).
  */
 public record PortArrival(
     String line, double wavelength, JonesVector field, double opticalPath, JonesVector otherPart) {

@@ -194,7 +194,18 @@ final class RequirementEvaluator {
         if (a.isEmpty() || b.isEmpty()) {
           yield unreached(r);
         }
-        yield compare(c, a.get().power() == 0 ? 0 : b.get().power() / a.get().power(), "", "");
+        double in = a.get().power();
+        jonquil.optics.PowerRange out =
+            PortInterference.powerRange(model, s, b.get().key(), b.get().power());
+        if (out.varies() && in > 0) {
+          Verdict low = compare(c, out.min() / in, "", "over the unknown phase of beams that meet");
+          Verdict high =
+              compare(c, out.max() / in, "", "over the unknown phase of beams that meet");
+          yield low.pass() != high.pass()
+              ? (low.pass() ? high : low)
+              : (low.margin() <= high.margin() ? low : high);
+        }
+        yield compare(c, in == 0 ? 0 : b.get().power() / in, "", "");
       }
       case STRAY -> compare(c, s.strayPower(), "W", "");
       case BACK_REFLECTION -> {
@@ -213,16 +224,17 @@ final class RequirementEvaluator {
               : compare(c, nearBound(c, at.get().light().azimuth()), "rad", "");
       case ELLIPTICITY -> at.isEmpty() ? unreached(r) : EllipticityBound.judge(c, at.get().light());
       case POLARIZATION, HANDEDNESS -> at.isEmpty() ? unreached(r) : state(c, at.get().light());
-      case IRRADIANCE -> exposure(r, c, s, e -> OptionalDouble.of(e.averageIrradiance()), "W/m2");
+      case IRRADIANCE ->
+          exposure(r, c, s, model, e -> OptionalDouble.of(e.averageIrradiance()), "W/m2");
       case PEAK_IRRADIANCE ->
-          exposure(r, c, s, e -> OptionalDouble.of(e.timeAndSpacePeakIrradiance()), "W/m2");
+          exposure(r, c, s, model, e -> OptionalDouble.of(e.timeAndSpacePeakIrradiance()), "W/m2");
       case AVERAGE_PEAK_IRRADIANCE ->
-          exposure(r, c, s, e -> OptionalDouble.of(e.peakIrradiance()), "W/m2");
-      case FLUENCE -> exposure(r, c, s, BeamExposure::peakFluence, "J/m2");
-      case PEAK_FIELD -> exposure(r, c, s, e -> OptionalDouble.of(e.peakField()), "V/m");
-      case PEAK_POWER -> exposure(r, c, s, BeamExposure::peakPower, "W");
-      case PULSE_ENERGY -> exposure(r, c, s, BeamExposure::pulseEnergy, "J");
-      case BEAM_RADIUS -> exposure(r, c, s, e -> OptionalDouble.of(e.beamRadius()), "m");
+          exposure(r, c, s, model, e -> OptionalDouble.of(e.peakIrradiance()), "W/m2");
+      case FLUENCE -> exposure(r, c, s, model, BeamExposure::peakFluence, "J/m2");
+      case PEAK_FIELD -> exposure(r, c, s, model, e -> OptionalDouble.of(e.peakField()), "V/m");
+      case PEAK_POWER -> exposure(r, c, s, model, BeamExposure::peakPower, "W");
+      case PULSE_ENERGY -> exposure(r, c, s, model, BeamExposure::pulseEnergy, "J");
+      case BEAM_RADIUS -> exposure(r, c, s, model, e -> OptionalDouble.of(e.beamRadius()), "m");
       case DAMAGE_MARGIN -> damage(r, c, s, model);
       case HAZARD_CLASS, NOHD, EXPOSURE, EYEWEAR_OD -> SafetyVerdicts.evaluate(r, c, s, model);
     };
@@ -281,6 +293,7 @@ final class RequirementEvaluator {
       ResolvedRequirement r,
       Criterion c,
       TrainSolution s,
+      ResolvedModel model,
       Function<BeamExposure, OptionalDouble> quantity,
       String unit) {
     java.util.List<PortValue> places = new java.util.ArrayList<>();
@@ -297,7 +310,7 @@ final class RequirementEvaluator {
       return unreached(r);
     }
     Verdict worst = null;
-    for (PortValue p : places) {
+    for (PortValue p : atPhaseExtremes(places, s, model)) {
       Optional<BeamExposure> e = p.exposure();
       if (e.isEmpty()) {
         return Verdict.notEvaluated(
@@ -315,6 +328,37 @@ final class RequirementEvaluator {
       }
     }
     return worst;
+  }
+
+  /**
+   * Each place as light at both ends of its interference range (power scaled, beam unchanged) where
+   * beams of one line meet there, else as it is: a bound must hold at every phase.
+   */
+  private static java.util.List<PortValue> atPhaseExtremes(
+      java.util.List<PortValue> places, TrainSolution s, ResolvedModel model) {
+    java.util.List<PortValue> out = new java.util.ArrayList<>();
+    for (PortValue p : places) {
+      jonquil.optics.PowerRange range = PortInterference.powerRange(model, s, p.key(), p.power());
+      if (!range.varies() || p.power() <= 0) {
+        out.add(p);
+        continue;
+      }
+      for (double end : new double[] {range.min(), range.max()}) {
+        out.add(
+            new PortValue(
+                p.element(),
+                p.port(),
+                p.file(),
+                p.range(),
+                p.light().scaled(end / p.power()),
+                p.vertical(),
+                p.mode(),
+                p.pulses(),
+                p.index(),
+                p.wavelength()));
+      }
+    }
+    return out;
   }
 
   /** The smallest damage margin at a part, or over every part that declares thresholds. */

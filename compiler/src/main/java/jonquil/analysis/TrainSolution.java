@@ -68,8 +68,12 @@ public record TrainSolution(
   }
 
   /**
-   * The beams arriving at a port ("element.port") where beams of one line meet again, in the order
-   * light reached it; empty where none meet.
+   * The beams of one line that meet at a place, in the order light reached it; empty where none
+   * meet. The key is that of the place's {@link PortValue#key()}: "element.port" for light leaving
+   * a port (the element alone when it has no port), and "element" for the light arriving at an
+   * element with ports, as {@link #incidentAt} keys it. Beams that met travel on together, so every
+   * place downstream of a meeting lists them too; the port's {@link PortValue} keeps their
+   * incoherent sum, which the interference range is centred on.
    */
   public List<PortArrival> arrivalsAt(String port) {
     return arrivals.getOrDefault(port, List.of());

@@ -70,7 +70,7 @@ class InterferenceRequirementsTest {
 
   static Bench bench(String coherence) {
     String spec =
-        "source s { wavelength 633 nm; power 1 mW; polarization linear 0 deg"
+        "source s { wavelength 633 nm; power 1 mW; polarization linear 0 deg; beam waist 1 mm"
             + coherence
             + " }\n"
             + "detector d\n"
@@ -79,6 +79,8 @@ class InterferenceRequirementsTest {
             + "  visibility at d >= 0.9\n"
             + "  power at d >= 0.5 mW\n"
             + "  power at d <= 3 mW\n"
+            + "  irradiance at d <= 1 W/cm2\n"
+            + "  transmission from s to d >= 50 %\n"
             + "}\n";
     Path file = ROOT.resolve("mz.jonq");
     Result r = Checker.check(Workspace.withOverlay(ROOT, Map.of(file, spec)), List.of(file));
@@ -135,6 +137,22 @@ class InterferenceRequirementsTest {
     RequirementEvaluator.Verdict high = b.judge("power at d <= 3 mW", parallel);
     assertTrue(high.pass());
     assertEquals(2e-3, high.value(), 1e-15); // the bright fringe (definition)
+  }
+
+  @Test
+  void exposureAndTransmissionBoundsAreJudgedAtTheWorstPhase() {
+    Bench b = bench("; coherence_length 10 cm");
+    TrainSolution parallel = b.withArms(0, 0);
+    RequirementEvaluator.Verdict alone = b.judge("irradiance", b.solution());
+    RequirementEvaluator.Verdict bright = b.judge("irradiance", parallel);
+    // The bright fringe carries 2 mW where the incoherent sum is 1 mW, on the same beam: twice
+    // the irradiance (definition: irradiance is proportional to power for a fixed beam).
+    assertEquals(2 * alone.value(), bright.value(), 1e-9 * alone.value());
+    RequirementEvaluator.Verdict t = b.judge("transmission", parallel);
+    // A lower bound meets the dark fringe: 0 of the source (definition).
+    assertEquals(0.0, t.value(), 1e-15);
+    assertFalse(t.pass());
+    assertTrue(b.judge("transmission", b.withArms(Math.PI / 4, 0)).pass());
   }
 
   @Test
