@@ -109,6 +109,15 @@ public record PortInterference(
   }
 
   /**
+   * The light at a place at its bright fringe, where beams of one line meet there: what a limit on
+   * exposure, damage or a rating must be judged on. Unchanged where none meet.
+   */
+  public static PortValue brightest(ResolvedModel model, TrainSolution s, PortValue v) {
+    PowerRange range = powerRange(model, s, v.key(), v.power());
+    return range.varies() && v.power() > 0 ? v.scaledBy(range.max() / v.power()) : v;
+  }
+
+  /**
    * The coherence of every line of a source: from its 'coherence_length', or from its Lorentzian
    * 'linewidth', or unstated.
    */

@@ -343,20 +343,8 @@ final class RequirementEvaluator {
         out.add(p);
         continue;
       }
-      for (double end : new double[] {range.min(), range.max()}) {
-        out.add(
-            new PortValue(
-                p.element(),
-                p.port(),
-                p.file(),
-                p.range(),
-                p.light().scaled(end / p.power()),
-                p.vertical(),
-                p.mode(),
-                p.pulses(),
-                p.index(),
-                p.wavelength()));
-      }
+      out.add(p.scaledBy(range.min() / p.power()));
+      out.add(p.scaledBy(range.max() / p.power()));
     }
     return out;
   }
@@ -373,7 +361,7 @@ final class RequirementEvaluator {
     Verdict worst = null;
     for (String name : names) {
       Optional<jonquil.resolve.ResolvedElement> part = model.element(name);
-      Optional<PortValue> in = s.incidentAt(name);
+      Optional<PortValue> in = s.incidentAt(name).map(v -> PortInterference.brightest(model, s, v));
       if (part.isEmpty() || in.isEmpty()) {
         continue;
       }

@@ -156,6 +156,22 @@ class InterferenceRequirementsTest {
   }
 
   @Test
+  void safetyLimitsAreJudgedAtTheBrightFringe() {
+    Path file = ROOT.resolve("probe.jonq");
+    String spec =
+        "source s { wavelength 633 nm; power 1 mW; polarization linear 0 deg; beam waist 1 mm;"
+            + " coherence_length 10 cm }\nprobe d\ntrain t { s -> 300 mm -> d }\n"
+            + "require {\n  exposure at d < 100 %\n}\n";
+    Result r = Checker.check(Workspace.withOverlay(ROOT, Map.of(file, spec)), List.of(file));
+    Bench b = new Bench(r.models().get(file), r.solutions().get(file));
+    double alone = b.judge("exposure", b.solution()).value();
+    double bright = b.judge("exposure", b.withArms(0, 0)).value();
+    // Twice the power on the same beam, twice the fraction of a CW MPE (definition: the MPE of a
+    // continuous beam bounds irradiance, which is proportional to power).
+    assertEquals(2 * alone, bright, 1e-9 * alone);
+  }
+
+  @Test
   void beyondTheCoherenceLengthTheArmsStopInterfering() {
     Bench b = bench("; coherence_length 10 cm");
     RequirementEvaluator.Verdict v = b.judge("visibility", b.withArms(0, 0.10));
