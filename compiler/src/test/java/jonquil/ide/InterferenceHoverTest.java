@@ -67,6 +67,16 @@ class InterferenceHoverTest {
   }
 
   @Test
+  void aSourceShowsTheCoherenceLengthOfItsLines() {
+    Specs.Checked c =
+        Specs.check("source $0s { wavelength 633 nm; power 1 mW; linewidth 1 MHz }\n");
+    String md =
+        EditorFeatures.standard().hover(c.result(), c.file(), c.offset()).orElseThrow().markdown();
+    // Lc = c/(πΔν) = 95.43 m at 1 MHz (Goodman, Statistical Optics, §5.2; from memory).
+    assertTrue(md.contains("**Coherence length**: 95.43 m"), md);
+  }
+
+  @Test
   void noInterferenceLineWhereNothingMeets() {
     Specs.Checked c = Specs.check(SPEC);
     String md =
