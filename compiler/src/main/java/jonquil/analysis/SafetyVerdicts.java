@@ -56,7 +56,8 @@ final class SafetyVerdicts {
       return RequirementEvaluator.Verdict.notEvaluated(
           "'" + m.word() + "' is a property of a source; name the source");
     }
-    PortValue at = scaled(lightAt(r, m, s).orElseThrow(), powerScale);
+    PortValue at =
+        scaled(PortInterference.brightest(model, s, lightAt(r, m, s).orElseThrow()), powerScale);
     double wavelength = at.wavelength();
     double exposureTime =
         element
