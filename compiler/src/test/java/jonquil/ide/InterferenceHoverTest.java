@@ -54,6 +54,32 @@ class InterferenceHoverTest {
   }
 
   @Test
+  void aRecombiningSplitterOfANetworkShowsTheArmsThePropagationBroughtThere() {
+    Specs.Checked c =
+        Specs.check(
+            """
+            source s { wavelength 633 nm; power 1 mW; polarization linear 0 deg }
+            splitter split { ratio 50 %; aoi 45 deg }
+            splitter $0recombine { ratio 50 %; aoi 45 deg }
+            waveplate hwp { retardance 0.5 wave at 633 nm; fast_axis 30 deg }
+            detector d1
+            detector d2
+            train mz {
+              s -> 100 mm -> split.through -> 300 mm -> recombine.through -> 100 mm -> d1
+              split.reflected -> 150 mm -> hwp -> 150 mm -> recombine.side -> 100 mm -> d2
+            }
+            """);
+    String md =
+        EditorFeatures.standard().hover(c.result(), c.file(), c.offset()).orElseThrow().markdown();
+    // A half-wave plate at 30°: one arm turned by 60°, V = |cos 60°| = 0.5 at zero path difference
+    // (definition of the overlap of linear states; Hecht, Optics, 5th ed., §8.7.1, from memory).
+    assertTrue(
+        md.contains("Interference at `through`: line 633 nm, 2 beams meet; visibility 0.5;"), md);
+    assertTrue(
+        md.contains("Interference at `reflected`: line 633 nm, 2 beams meet; visibility 0.5;"), md);
+  }
+
+  @Test
   void aSourceShowsTheCoherenceLengthOfItsLines() {
     Specs.Checked c =
         Specs.check("source $0s { wavelength 633 nm; power 1 mW; linewidth 1 MHz }\n");
