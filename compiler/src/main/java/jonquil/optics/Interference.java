@@ -137,7 +137,7 @@ public final class Interference {
         }
       }
     }
-    double min = Math.max(0, incoherent - swing);
+    double min = darkest(incoherent, swing);
     return new PowerRange(min, incoherent + swing, incoherent, pairs <= 1);
   }
 
@@ -172,7 +172,15 @@ public final class Interference {
         }
       }
     }
-    return new PowerRange(Math.max(0, incoherent - swing), incoherent + swing, incoherent, false);
+    return new PowerRange(darkest(incoherent, swing), incoherent + swing, incoherent, false);
+  }
+
+  /**
+   * The dark end of a range: a swing within rounding of the incoherent sum (the sums of a beam's
+   * powers along different routes) is a fully dark fringe, not a few attowatts.
+   */
+  private static double darkest(double incoherent, double swing) {
+    return incoherent - swing <= 1e-12 * incoherent ? 0 : incoherent - swing;
   }
 
   /**

@@ -1,6 +1,7 @@
 package jonquil.analysis;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
@@ -179,6 +180,77 @@ class MachZehnderNetworkTest {
     assertEquals(1e-3, c.solution().port("bs2.through").orElseThrow().power(), 1e-15);
     assertEquals(RequirementStatus.FAIL, c.requirement(0).status(), c.requirement(0).reason());
     assertEquals(P_IN, c.requirement(0).value().getAsDouble(), 1e-15); // the bright fringe
+  }
+
+  @Test
+  void partiallyPolarizedArmsHaveNoVisibilityAndAnEnclosingRange() {
+    // Half of one arm's light leaves a depolarizer unpolarized: how its parts pair with the other
+    // arm is not followed, so the visibility fails closed and the power range encloses the truth.
+    Checked c =
+        check(
+            """
+            source s { wavelength 633 nm; power 2 mW; polarization linear 0 deg }
+            splitter bs1 { ratio 50 %; aoi 45 deg }
+            splitter bs2 { ratio 50 %; aoi 45 deg }
+            depolarizer dp { depolarization 50 % }
+            detector d1
+            detector d2
+            train mz {
+              s -> 100 mm -> bs1.through -> 300 mm -> bs2.through -> 100 mm -> d1
+              bs1.reflected -> 150 mm -> dp -> 150 mm -> bs2.side -> 100 mm -> d2
+            }
+            require {
+              visibility at d1 >= 0.1
+            }
+            """);
+    RequirementOutcome v = c.requirement(0);
+    assertEquals(RequirementStatus.NOT_EVALUATED, v.status(), v.reason());
+    assertTrue(v.reason().contains("partially polarized"), v.reason());
+    PortInterference i = c.at("d1");
+    assertFalse(i.range().exact());
+    // The polarized quarter of the second arm (0.25 mW) meets the first (0.5 mW), the rest adds
+    // as power: 1 mW ± 2√(0.5 · 0.25) mW (Born & Wolf, Principles of Optics, 7th ed., §10.4.1,
+    // from memory); the enclosure holds that range.
+    double swing = 2 * Math.sqrt(0.5e-3 * 0.25e-3);
+    assertTrue(i.range().max() >= 1e-3 + swing, i.range().toString());
+    assertTrue(i.range().min() <= 1e-3 - swing, i.range().toString());
+    assertEquals(1e-3, i.range().incoherent(), 1e-15); // definition: powers add
+  }
+
+  @Test
+  void aLoopsManyBeamsReachTheResonantMaximumOfAFabryPerot() {
+    double r1 = 0.9;
+    double r2 = 0.8;
+    Checked c =
+        check(
+            """
+            source s { wavelength 1064 nm; power 1 W; polarization linear 0 deg }
+            splitter m1 { ratio 90 %; aoi 0 deg }
+            splitter m2 { ratio 80 %; aoi 0 deg }
+            probe out
+            dump d1
+            train t {
+              s -> 100 mm -> m1 -> 50 mm -> m2 -> 100 mm -> out
+              m2.reflected -> 50 mm -> m1.back
+              m1.side -> 50 mm -> m2.front
+              m1.reflected -> 100 mm -> d1
+            }
+            require {
+              power at out <= 1 W
+            }
+            """);
+    assertTrue(c.solution().arrivalsAt("out").size() > 64, "round trips summed pair by pair");
+    PortInterference i = c.at("out");
+    // Airy transmission of a Fabry–Perot: T1T2/(1 ∓ √(R1R2))² at resonance and between (Born &
+    // Wolf, Principles of Optics, 7th ed., §7.6.1, from memory). The loop stops once below 1e-12 of
+    // the source in power, so 1e-6 in amplitude, which the tolerance allows.
+    double t1t2 = (1 - r1) * (1 - r2);
+    double resonant = t1t2 / Math.pow(1 - Math.sqrt(r1 * r2), 2);
+    double between = t1t2 / Math.pow(1 + Math.sqrt(r1 * r2), 2);
+    assertEquals(resonant, i.range().max(), 1e-4 * resonant);
+    assertTrue(i.range().min() <= between, i.range().toString());
+    assertEquals(t1t2 / (1 - r1 * r2), i.range().incoherent(), 1e-11); // incoherent Airy sum
+    assertTrue(i.visibility().isEmpty(), "a visibility is judged for two beams");
   }
 
   @Test
