@@ -19,8 +19,8 @@ import org.junit.jupiter.api.Test;
 
 /**
  * Requirements at a port where two beams of one line meet, judged on arrivals placed there by hand
- * (as the propagation through a network will place them): the two arms of a Mach–Zehnder-like pair,
- * 0.5 mW each, the second through a half-wave plate at θ.
+ * (as the propagation through a network places them: MachZehnderNetworkTest): the two arms of a
+ * Mach–Zehnder-like pair, 0.5 mW each, the second through a half-wave plate at θ.
  */
 class InterferenceRequirementsTest {
   static final Path ROOT = Path.of("/virtual/interference").toAbsolutePath();

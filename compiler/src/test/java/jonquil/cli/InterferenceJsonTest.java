@@ -20,7 +20,7 @@ import org.junit.jupiter.api.Test;
 
 /**
  * The JSON report shows each line's visibility and power range where beams of one line meet, with
- * arrivals placed by hand as the network propagation will place them.
+ * arrivals placed by hand as the network propagation places them (InterferenceNetworkCliTest).
  */
 class InterferenceJsonTest {
   static final Path ROOT = Path.of("/virtual/interference-json").toAbsolutePath();
