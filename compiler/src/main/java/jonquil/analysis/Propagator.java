@@ -347,7 +347,7 @@ final class Propagator {
     for (String port : element.kind().ports()) {
       atPorts.put(port, new ArrayList<>());
     }
-    incident.put(name, value(name, "", placed.symbol(), placed.range(), beams));
+    incident.merge(name, value(name, "", placed.symbol(), placed.range(), beams), Propagator::plus);
     if (placed.symbol().category() != Category.TERMINAL) {
       arrive(name, beams); // a terminal's light is kept where it stops, below
     }
@@ -709,10 +709,6 @@ final class Propagator {
   }
 
   /**
-   * The light of all lines at one place, in the table frame. Its mode and pulses are those of the
-   * strongest line (exposure is judged on one beam size; lines usually share it).
-   */
-  /**
    * Keeps each beam arriving at a place, for interference where beams of one line meet again; only
    * a network (a spec with entries) can bring them together. A beam of no light does not arrive.
    */
@@ -745,6 +741,10 @@ final class Propagator {
         pure);
   }
 
+  /**
+   * The light of all lines at one place, in the table frame. Its mode and pulses are those of the
+   * strongest line (exposure is judged on one beam size; lines usually share it).
+   */
   private PortValue value(
       String element,
       String port,

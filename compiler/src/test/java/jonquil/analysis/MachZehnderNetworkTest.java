@@ -183,6 +183,21 @@ class MachZehnderNetworkTest {
   }
 
   @Test
+  void aDumpAfterTheMeetingTakesBothArmsAndIsRatedAtTheBrightFringe() {
+    String spec =
+        spec(0.5, 0.5, Double.NaN, 0, "", "  power at d1 <= 2 W\n")
+            .replace("detector d1\n", "dump d1 { rating 1.5 mW }\n");
+    Checked c = check(spec);
+    // The light arriving at the dump is both arms, 1 mW together when they add as powers.
+    assertEquals(1e-3, c.solution().incidentAt("d1").orElseThrow().power(), 1e-15);
+    // At the bright fringe it takes 2 mW (Hecht §9.1, from memory), above its 1.5 mW rating.
+    assertTrue(
+        c.result().diagnostics().stream()
+            .anyMatch(d -> d.message().contains("dump 'd1' takes 2 mW, above its rating")),
+        c.result().diagnostics().toString());
+  }
+
+  @Test
   void partiallyPolarizedArmsHaveNoVisibilityAndAnEnclosingRange() {
     // Half of one arm's light leaves a depolarizer unpolarized: how its parts pair with the other
     // arm is not followed, so the visibility fails closed and the power range encloses the truth.
