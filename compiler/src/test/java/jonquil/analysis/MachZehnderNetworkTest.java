@@ -188,7 +188,8 @@ class MachZehnderNetworkTest {
         spec(0.5, 0.5, Double.NaN, 0, "", "  power at d1 <= 2 W\n")
             .replace("detector d1\n", "dump d1 { rating 1.5 mW }\n");
     Checked c = check(spec);
-    // The light arriving at the dump is both arms, 1 mW together when they add as powers.
+    // The light arriving at the dump is both arms, 1 mW together when they add as powers
+    // (definition: 2 mW halved twice, each arm a quarter).
     assertEquals(1e-3, c.solution().incidentAt("d1").orElseThrow().power(), 1e-15);
     // At the bright fringe it takes 2 mW (Hecht §9.1, from memory), above its 1.5 mW rating.
     assertTrue(
