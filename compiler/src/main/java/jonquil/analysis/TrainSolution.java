@@ -74,9 +74,11 @@ public record TrainSolution(
    * The beams of one line that meet at a place, in the order light reached it; empty where none
    * meet. The key is that of the place's {@link PortValue#key()}: "element.port" for light leaving
    * a port (the element alone when it has no port), and "element" for the light arriving at an
-   * element with ports, as {@link #incidentAt} keys it. Beams that met travel on together, so every
-   * place downstream of a meeting lists them too; the port's {@link PortValue} keeps their
-   * incoherent sum, which the interference range is centred on.
+   * element with ports by its front face (a first pass, a loop coming round), as {@link
+   * #incidentAt} keys it; light entering by another face runs another way and is met at the ports
+   * it leaves by. Beams that met travel on together, so every place downstream of a meeting lists
+   * them too; the port's {@link PortValue} keeps their incoherent sum, which the interference range
+   * is centred on.
    */
   public List<PortArrival> arrivalsAt(String port) {
     return arrivals.getOrDefault(port, List.of());
