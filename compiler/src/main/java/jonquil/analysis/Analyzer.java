@@ -145,6 +145,7 @@ public final class Analyzer {
         .ifPresent(diagnostics::add);
     diagnostics.addAll(TerminalLimits.check(model, solution));
     diagnostics.addAll(StrayNotes.of(solution));
+    diagnostics.addAll(CoherenceNotes.of(model, solution));
     for (Clip c : solution.clips()) {
       diagnostics.add(
           Diagnostic.of(

@@ -30,6 +30,12 @@ public record PortValue(
     return mode.map(m -> BeamExposure.of(power(), m.radius(), pulses, index));
   }
 
+  /** The same light and beam with its power multiplied by {@code k} (a fringe of interference). */
+  public PortValue scaledBy(double k) {
+    return new PortValue(
+        element, port, file, range, light.scaled(k), vertical, mode, pulses, index, wavelength);
+  }
+
   /** "element.port", or the element alone for its only port. */
   public String key() {
     return port.isEmpty() ? element : element + "." + port;

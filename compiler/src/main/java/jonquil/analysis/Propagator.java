@@ -161,19 +161,21 @@ final class Propagator {
         surfaces,
         returned,
         passes,
-        arrivals.values().stream().filter(Propagator::meet).flatMap(List::stream).toList(),
+        meetings(),
         unsettled.stream().map(ResolvedTrain.Entry::range).toList());
   }
 
-  /** Whether two beams of one line arrive at one port. */
-  private static boolean meet(List<PortArrival> at) {
-    java.util.Set<String> lines = new java.util.HashSet<>();
-    for (PortArrival a : at) {
-      if (!lines.add(a.source().name() + "#" + a.line())) {
-        return true;
-      }
-    }
-    return false;
+  /** The places where two beams of one line arrive, with every beam that arrives there. */
+  private Map<String, List<PortArrival>> meetings() {
+    Map<String, List<PortArrival>> out = new LinkedHashMap<>();
+    arrivals.forEach(
+        (key, at) -> {
+          java.util.Set<String> lines = new java.util.HashSet<>();
+          if (!at.stream().allMatch(a -> lines.add(a.line()))) {
+            out.put(key, at);
+          }
+        });
+    return out;
   }
 
   /** Going on along {@code path} from step {@code from}, the element before it as the last. */
@@ -345,7 +347,10 @@ final class Propagator {
     for (String port : element.kind().ports()) {
       atPorts.put(port, new ArrayList<>());
     }
-    incident.put(name, value(name, "", placed.symbol(), placed.range(), beams));
+    incident.merge(name, value(name, "", placed.symbol(), placed.range(), beams), Propagator::plus);
+    if (placed.symbol().category() != Category.TERMINAL) {
+      arrive(name, beams); // a terminal's light is kept where it stops, below
+    }
     double clippedMost = 0;
     for (TracedBeam b : beams) {
       totals[0] += b.power();
@@ -465,6 +470,9 @@ final class Propagator {
     }
     PortValue in = value(name, "", entry.symbol(), entry.range(), beams);
     incident.merge(name, in, Propagator::plus);
+    if (entry.face().equals("front")) {
+      arrive(name, beams); // with the first pass: light by another face runs another way
+    }
     ElementOptics.FaceFrames faces =
         frames.getOrDefault(
             entry.symbol(),
@@ -682,12 +690,7 @@ final class Propagator {
 
   private void record(String element, String port, Exit placed, List<TracedBeam> beams) {
     String key = port.isEmpty() ? element : element + "." + port;
-    if (!entered.isEmpty()) {
-      List<PortArrival> here = arrivals.computeIfAbsent(key, k -> new ArrayList<>());
-      for (TracedBeam b : beams) {
-        here.add(arrival(key, b));
-      }
-    }
+    arrive(key, beams);
     PortValue v = value(element, port, placed.symbol(), placed.range(), beams);
     Coherency total = portLight.merge(key, v.light(), Coherency::plus);
     ports.put(
@@ -706,25 +709,42 @@ final class Propagator {
   }
 
   /**
+   * Keeps each beam arriving at a place, for interference where beams of one line meet again; only
+   * a network (a spec with entries) can bring them together. A beam of no light does not arrive.
+   */
+  private void arrive(String key, List<TracedBeam> beams) {
+    if (entered.isEmpty()) {
+      return;
+    }
+    List<PortArrival> here = arrivals.computeIfAbsent(key, k -> new ArrayList<>());
+    for (TracedBeam b : beams) {
+      if (b.power() > 0) {
+        here.add(arrival(b));
+      }
+    }
+  }
+
+  /**
+   * A beam's arrival, its field in the table frame. Partially polarized light arrives as its two
+   * polarized parts, which a coherency matrix cannot pair between routes (PortArrival).
+   */
+  private static PortArrival arrival(TracedBeam b) {
+    Coherency c = b.light().inFrameRotatedBy(b.frame().tableAngle());
+    List<jonquil.optics.JonesVector> parts = c.polarizedParts();
+    boolean pure = c.dop() > 1 - 1e-9;
+    return new PortArrival(
+        PortArrival.lineKey(b.source().name(), b.line()),
+        b.wavelength(),
+        parts.get(0),
+        b.opticalPath(),
+        pure ? jonquil.optics.JonesVector.ZERO : parts.get(1),
+        pure);
+  }
+
+  /**
    * The light of all lines at one place, in the table frame. Its mode and pulses are those of the
    * strongest line (exposure is judged on one beam size; lines usually share it).
    */
-  /** A beam's arrival at a port, its field in the table frame when it is fully polarized. */
-  private static PortArrival arrival(String key, TracedBeam b) {
-    Coherency c = b.light().inFrameRotatedBy(b.frame().tableAngle());
-    Optional<double[]> field = Optional.empty();
-    if (c.power() > 0 && c.dop() > 1 - 1e-9) {
-      // Ex real and non-negative; Ey from Φxy = Ex·Ey*.
-      if (c.xx() > 0) {
-        double ex = Math.sqrt(c.xx());
-        field = Optional.of(new double[] {ex, 0, c.xyRe() / ex, -c.xyIm() / ex});
-      } else {
-        field = Optional.of(new double[] {0, 0, Math.sqrt(c.yy()), 0});
-      }
-    }
-    return new PortArrival(key, b.source(), b.line(), b.wavelength(), field, b.opticalPath());
-  }
-
   private PortValue value(
       String element,
       String port,

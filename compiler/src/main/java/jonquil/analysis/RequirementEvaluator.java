@@ -168,17 +168,33 @@ final class RequirementEvaluator {
           yield unreached(r);
         }
         double p = at.get().power();
+        jonquil.optics.PowerRange range = PortInterference.powerRange(model, s, at.get().key(), p);
+        if (range.varies()) {
+          yield overPhase(c, range, s.sourcePower());
+        }
         yield c.relativeToSource()
             ? compare(c, s.sourcePower() == 0 ? 0 : p / s.sourcePower(), "", "of the source power")
             : compare(c, p, "W", "");
       }
+      case VISIBILITY -> at.isEmpty() ? unreached(r) : visibility(c, s, model, at.get().key());
       case TRANSMISSION -> {
         Optional<PortValue> a = r.from().flatMap(t -> s.port(Propagator.key(t.symbol(), t.port())));
         Optional<PortValue> b = r.to().flatMap(t -> s.port(Propagator.key(t.symbol(), t.port())));
         if (a.isEmpty() || b.isEmpty()) {
           yield unreached(r);
         }
-        yield compare(c, a.get().power() == 0 ? 0 : b.get().power() / a.get().power(), "", "");
+        double in = a.get().power();
+        jonquil.optics.PowerRange out =
+            PortInterference.powerRange(model, s, b.get().key(), b.get().power());
+        if (out.varies() && in > 0) {
+          Verdict low = compare(c, out.min() / in, "", "over the unknown phase of beams that meet");
+          Verdict high =
+              compare(c, out.max() / in, "", "over the unknown phase of beams that meet");
+          yield low.pass() != high.pass()
+              ? (low.pass() ? high : low)
+              : (low.margin() <= high.margin() ? low : high);
+        }
+        yield compare(c, in == 0 ? 0 : b.get().power() / in, "", "");
       }
       case STRAY -> compare(c, s.strayPower(), "W", "");
       case BACK_REFLECTION -> {
@@ -197,19 +213,65 @@ final class RequirementEvaluator {
               : compare(c, nearBound(c, at.get().light().azimuth()), "rad", "");
       case ELLIPTICITY -> at.isEmpty() ? unreached(r) : EllipticityBound.judge(c, at.get().light());
       case POLARIZATION, HANDEDNESS -> at.isEmpty() ? unreached(r) : state(c, at.get().light());
-      case IRRADIANCE -> exposure(r, c, s, e -> OptionalDouble.of(e.averageIrradiance()), "W/m2");
+      case IRRADIANCE ->
+          exposure(r, c, s, model, e -> OptionalDouble.of(e.averageIrradiance()), "W/m2");
       case PEAK_IRRADIANCE ->
-          exposure(r, c, s, e -> OptionalDouble.of(e.timeAndSpacePeakIrradiance()), "W/m2");
+          exposure(r, c, s, model, e -> OptionalDouble.of(e.timeAndSpacePeakIrradiance()), "W/m2");
       case AVERAGE_PEAK_IRRADIANCE ->
-          exposure(r, c, s, e -> OptionalDouble.of(e.peakIrradiance()), "W/m2");
-      case FLUENCE -> exposure(r, c, s, BeamExposure::peakFluence, "J/m2");
-      case PEAK_FIELD -> exposure(r, c, s, e -> OptionalDouble.of(e.peakField()), "V/m");
-      case PEAK_POWER -> exposure(r, c, s, BeamExposure::peakPower, "W");
-      case PULSE_ENERGY -> exposure(r, c, s, BeamExposure::pulseEnergy, "J");
-      case BEAM_RADIUS -> exposure(r, c, s, e -> OptionalDouble.of(e.beamRadius()), "m");
+          exposure(r, c, s, model, e -> OptionalDouble.of(e.peakIrradiance()), "W/m2");
+      case FLUENCE -> exposure(r, c, s, model, BeamExposure::peakFluence, "J/m2");
+      case PEAK_FIELD -> exposure(r, c, s, model, e -> OptionalDouble.of(e.peakField()), "V/m");
+      case PEAK_POWER -> exposure(r, c, s, model, BeamExposure::peakPower, "W");
+      case PULSE_ENERGY -> exposure(r, c, s, model, BeamExposure::pulseEnergy, "J");
+      case BEAM_RADIUS -> exposure(r, c, s, model, e -> OptionalDouble.of(e.beamRadius()), "m");
       case DAMAGE_MARGIN -> damage(r, c, s, model);
       case HAZARD_CLASS, NOHD, EXPOSURE, EYEWEAR_OD -> SafetyVerdicts.evaluate(r, c, s, model);
     };
+  }
+
+  /**
+   * A power bound where beams of one line meet: it must hold over the whole range the unknown phase
+   * sweeps, so both ends are judged and the worse one reported.
+   */
+  private static Verdict overPhase(
+      Criterion c, jonquil.optics.PowerRange range, double sourcePower) {
+    boolean relative = c.relativeToSource();
+    double scale = relative ? (sourcePower == 0 ? 0 : 1 / sourcePower) : 1;
+    String unit = relative ? "" : "W";
+    String note =
+        "over the unknown phase of beams that meet here: "
+            + VerdictText.format(range.min(), "W")
+            + " .. "
+            + VerdictText.format(range.max(), "W")
+            + (range.exact() ? "" : " (an enclosure)")
+            + (relative ? " of the source power" : "");
+    Verdict low = compare(c, range.min() * scale, unit, note);
+    Verdict high = compare(c, range.max() * scale, unit, note);
+    if (low.pass() != high.pass()) {
+      return low.pass() ? high : low;
+    }
+    return low.margin() <= high.margin() ? low : high;
+  }
+
+  /** The fringe visibility of every line whose beams meet at a port; the worst line counts. */
+  private static Verdict visibility(
+      Criterion c, TrainSolution s, ResolvedModel model, String port) {
+    java.util.List<PortInterference> lines = PortInterference.at(model, s, port);
+    if (lines.isEmpty()) {
+      return Verdict.notEvaluated(PortInterference.NONE_MEET);
+    }
+    Verdict worst = null;
+    for (PortInterference i : lines) {
+      if (i.visibility().isEmpty()) {
+        return Verdict.notEvaluated(i.unknownReason());
+      }
+      Verdict v =
+          compare(c, i.visibility().getAsDouble(), "", "line " + LineSafety.name(i.wavelength()));
+      if (worst == null || (worst.pass() && !v.pass()) || v.margin() < worst.margin()) {
+        worst = v;
+      }
+    }
+    return worst;
   }
 
   /**
@@ -220,6 +282,7 @@ final class RequirementEvaluator {
       ResolvedRequirement r,
       Criterion c,
       TrainSolution s,
+      ResolvedModel model,
       Function<BeamExposure, OptionalDouble> quantity,
       String unit) {
     java.util.List<PortValue> places = new java.util.ArrayList<>();
@@ -236,7 +299,7 @@ final class RequirementEvaluator {
       return unreached(r);
     }
     Verdict worst = null;
-    for (PortValue p : places) {
+    for (PortValue p : atPhaseExtremes(places, s, model)) {
       Optional<BeamExposure> e = p.exposure();
       if (e.isEmpty()) {
         return Verdict.notEvaluated(
@@ -256,6 +319,25 @@ final class RequirementEvaluator {
     return worst;
   }
 
+  /**
+   * Each place as light at both ends of its interference range (power scaled, beam unchanged) where
+   * beams of one line meet there, else as it is: a bound must hold at every phase.
+   */
+  private static java.util.List<PortValue> atPhaseExtremes(
+      java.util.List<PortValue> places, TrainSolution s, ResolvedModel model) {
+    java.util.List<PortValue> out = new java.util.ArrayList<>();
+    for (PortValue p : places) {
+      jonquil.optics.PowerRange range = PortInterference.powerRange(model, s, p.key(), p.power());
+      if (!range.varies() || p.power() <= 0) {
+        out.add(p);
+        continue;
+      }
+      out.add(p.scaledBy(range.min() / p.power()));
+      out.add(p.scaledBy(range.max() / p.power()));
+    }
+    return out;
+  }
+
   /** The smallest damage margin at a part, or over every part that declares thresholds. */
   private static Verdict damage(
       ResolvedRequirement r, Criterion c, TrainSolution s, ResolvedModel model) {
@@ -268,7 +350,7 @@ final class RequirementEvaluator {
     Verdict worst = null;
     for (String name : names) {
       Optional<jonquil.resolve.ResolvedElement> part = model.element(name);
-      Optional<PortValue> in = s.incidentAt(name);
+      Optional<PortValue> in = s.incidentAt(name).map(v -> PortInterference.brightest(model, s, v));
       if (part.isEmpty() || in.isEmpty()) {
         continue;
       }

@@ -62,7 +62,8 @@ final class SafetyVerdicts {
       return RequirementEvaluator.Verdict.notEvaluated(
           "'" + m.word() + "' is a property of a source; name the source");
     }
-    PortValue at = scaled(lightAt(r, m, s).orElseThrow(), powerScale);
+    PortValue at =
+        scaled(PortInterference.brightest(model, s, lightAt(r, m, s).orElseThrow()), powerScale);
     SafetyStandard standard = model.standard();
     ResolvedElement place = element.get();
     ViewingSafety.Setting setting = ViewingSafety.setting(r.viewing(), place, at);

@@ -29,7 +29,10 @@ final class TerminalLimits {
       if (e.kind() != ElementKind.DUMP && e.kind() != ElementKind.DETECTOR) {
         continue;
       }
-      Optional<PortValue> in = solution.incidentAt(e.symbol().name());
+      Optional<PortValue> in =
+          solution
+              .incidentAt(e.symbol().name())
+              .map(v -> PortInterference.brightest(model, solution, v));
       if (in.isEmpty()) {
         continue;
       }

@@ -22,7 +22,7 @@ public record TrainSolution(
     Map<String, SurfaceAtAngle> surfaces,
     Map<String, jonquil.optics.Coherency> returned,
     List<ElementPass> passes,
-    List<PortArrival> arrivals,
+    Map<String, List<PortArrival>> arrivals,
     List<jonquil.source.TextRange> unsettledLoops) {
 
   /**
@@ -39,13 +39,49 @@ public record TrainSolution(
     clips = List.copyOf(clips);
     returned = jonquil.source.InOrder.copyOf(returned);
     passes = List.copyOf(passes);
-    arrivals = List.copyOf(arrivals);
+    Map<String, List<PortArrival>> arriving = new java.util.LinkedHashMap<>();
+    arrivals.forEach((port, list) -> arriving.put(port, List.copyOf(list)));
+    arrivals = java.util.Collections.unmodifiableMap(arriving);
     unsettledLoops = List.copyOf(unsettledLoops);
+  }
+
+  /** The same solution with {@code next} as the beams that meet, by place (tests place them). */
+  public TrainSolution withArrivals(Map<String, List<PortArrival>> next) {
+    return new TrainSolution(
+        ports,
+        incident,
+        budgets,
+        stray,
+        clips,
+        sourcePower,
+        absorbed,
+        stopped,
+        observedAtPathEnds,
+        jones,
+        surfaces,
+        returned,
+        passes,
+        next,
+        unsettledLoops);
   }
 
   /** The passes of light through one element, in the order light takes them. */
   public List<ElementPass> passesOf(String element) {
     return passes.stream().filter(p -> p.element().equals(element)).toList();
+  }
+
+  /**
+   * The beams of one line that meet at a place, in the order light reached it; empty where none
+   * meet. The key is that of the place's {@link PortValue#key()}: "element.port" for light leaving
+   * a port (the element alone when it has no port), and "element" for the light arriving at an
+   * element with ports by its front face (a first pass, a loop coming round), as {@link
+   * #incidentAt} keys it; light entering by another face runs another way and is met at the ports
+   * it leaves by. Beams that met travel on together, so every place downstream of a meeting lists
+   * them too; the port's {@link PortValue} keeps their incoherent sum, which the interference range
+   * is centred on.
+   */
+  public List<PortArrival> arrivalsAt(String port) {
+    return arrivals.getOrDefault(port, List.of());
   }
 
   /** The light arriving at an element, before it acts. */

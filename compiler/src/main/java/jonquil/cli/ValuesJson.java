@@ -8,6 +8,7 @@ import com.google.gson.JsonPrimitive;
 import java.nio.file.Path;
 import java.util.Map;
 import jonquil.analysis.ElementBudget;
+import jonquil.analysis.PortInterference;
 import jonquil.analysis.PortValue;
 import jonquil.analysis.SafetySummary;
 import jonquil.analysis.StrayBeam;
@@ -46,7 +47,11 @@ final class ValuesJson {
               if (!key.equals(value.key())) {
                 return; // aliases ("element" for its exit port) are not repeated
               }
-              ports.add(port(value));
+              JsonObject j = port(value);
+              if (model != null) {
+                interference(j, PortInterference.at(model, s, key));
+              }
+              ports.add(j);
             });
     o.add("ports", ports);
     JsonArray incident = new JsonArray();
@@ -180,6 +185,31 @@ final class ValuesJson {
       j.addProperty("not_evaluated", o.reason());
     }
     return j;
+  }
+
+  /** Each line whose beams meet at the port: its visibility and the power range over phase. */
+  private static void interference(JsonObject port, java.util.List<PortInterference> lines) {
+    if (lines.isEmpty()) {
+      return;
+    }
+    JsonArray out = new JsonArray();
+    for (PortInterference i : lines) {
+      JsonObject j = new JsonObject();
+      j.addProperty("line", i.line());
+      j.add("wavelength_m", number(i.wavelength()));
+      j.addProperty("beams", i.beams());
+      j.add(
+          "visibility",
+          i.visibility().isPresent() ? number(i.visibility().getAsDouble()) : JsonNull.INSTANCE);
+      if (i.visibility().isEmpty()) {
+        j.addProperty("visibility_unknown", i.unknownReason());
+      }
+      j.add("power_min_W", number(i.range().min()));
+      j.add("power_max_W", number(i.range().max()));
+      j.addProperty("range_exact", i.range().exact());
+      out.add(j);
+    }
+    port.add("interference", out);
   }
 
   private static JsonObject port(PortValue v) {

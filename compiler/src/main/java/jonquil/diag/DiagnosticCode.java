@@ -126,6 +126,10 @@ public enum DiagnosticCode {
       Severity.ERROR,
       "The power budget does not close: the model created or lost light (a checker fault)"),
   UNKNOWN_LINE("J619", Severity.ERROR, "A requirement names a laser line the source does not have"),
+  COHERENCE_UNUSED(
+      "J626",
+      Severity.WARNING,
+      "A source states a linewidth or coherence length, but no two beams of one of its lines meet"),
 
   // Limits and internals: J9xx
   INTERNAL_ERROR("J901", Severity.ERROR, "The checker failed internally; please report it"),

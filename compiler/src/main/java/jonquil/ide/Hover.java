@@ -81,6 +81,7 @@ final class Hover {
       } else {
         if (s.kind().get() == ElementKind.SOURCE) {
           model.element(s).ifPresent(e -> lines(md, e));
+          coherence(md, model, s.name());
         }
         LightText.append(md, model, OwningModels.solution(r, model), s.name(), s.kind().get());
         OpticsText.append(
@@ -103,6 +104,20 @@ final class Hover {
       }
     }
     return models.isEmpty() ? null : models.get(0);
+  }
+
+  /** A source's coherence length, when it states one or a linewidth. */
+  private static void coherence(StringBuilder md, ResolvedModel model, String source) {
+    jonquil.analysis.PortInterference.coherenceOf(model, source)
+        .coherenceLength()
+        .ifPresent(
+            lc ->
+                MarkdownText.para(md)
+                    .append("**Coherence length**: ")
+                    .append(MarkdownText.q(lc, jonquil.units.Dimension.LENGTH))
+                    .append(
+                        " per line (Lorentzian line: |γ| = exp(−ΔL/Lc), Lc = c/(πΔν)); beams of one"
+                            + " line that meet again interfere by it"));
   }
 
   /** A source's emission lines: one wavelength and power each. */

@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import jonquil.analysis.BeamExposure;
+import jonquil.analysis.PortInterference;
 import jonquil.analysis.PortValue;
 import jonquil.analysis.SafetySummary;
 import jonquil.analysis.TrainSolution;
@@ -101,6 +102,7 @@ final class LightText {
           .append(MarkdownText.num(margins.get(name)))
           .append(" (threshold ÷ exposure)\n");
     }
+    interference(md, model, s, name, kind);
     polarization(md, rows);
     passes(md, s.passesOf(name));
     s.returnedTo(name)
@@ -136,6 +138,35 @@ final class LightText {
           .append(" | ")
           .append(InlayHints.polarization(p.out()))
           .append(" |\n");
+    }
+  }
+
+  /** Where beams of one line meet at a port of the element: visibility and power over phase. */
+  private static void interference(
+      StringBuilder md, ResolvedModel model, TrainSolution s, String name, ElementKind kind) {
+    // An element without ports (a detector) is its own one place.
+    List<String> ports = kind.ports().isEmpty() ? List.of("") : kind.exits();
+    for (String port : ports) {
+      String key = port.isEmpty() ? name : name + "." + port;
+      for (PortInterference i : PortInterference.at(model, s, key)) {
+        md.append("\nInterference")
+            .append(port.isEmpty() ? "" : " at `" + port + "`")
+            .append(": line ")
+            .append(MarkdownText.q(i.wavelength(), Dimension.LENGTH))
+            .append(", ")
+            .append(i.beams())
+            .append(" beams meet; visibility ")
+            .append(
+                i.visibility().isPresent()
+                    ? MarkdownText.num(i.visibility().getAsDouble())
+                    : "unknown (" + i.unknownReason() + ")")
+            .append("; power ")
+            .append(MarkdownText.q(i.range().min(), Dimension.POWER))
+            .append(" .. ")
+            .append(MarkdownText.q(i.range().max(), Dimension.POWER))
+            .append(i.range().exact() ? "" : " (an enclosure)")
+            .append(" over their relative phase\n");
+      }
     }
   }
 

@@ -101,6 +101,39 @@ public final class Coherency {
         exIm * eyRe - exRe * eyIm);
   }
 
+  /**
+   * Two orthogonal fully polarized fields, strongest first, that are mutually incoherent and
+   * together are this light: the eigenvectors of Φ scaled by the square roots of their eigenvalues
+   * (Φ = Σ λ v v†). Each travels as its own Jones vector, so beams of one line that meet again
+   * interfere part by part. The second is zero for fully polarized light.
+   */
+  public java.util.List<JonesVector> polarizedParts() {
+    double half = (xx - yy) / 2;
+    double root = Math.sqrt(half * half + xyRe * xyRe + xyIm * xyIm);
+    double mean = (xx + yy) / 2;
+    double major = Math.max(0, mean + root);
+    double minor = Math.max(0, mean - root);
+    if (root <= 1e-15 * Math.abs(mean) || Math.hypot(xyRe, xyIm) <= 1e-300) {
+      // Diagonal (or unpolarized): the table axes are eigenvectors, larger first.
+      JonesVector x = new JonesVector(Math.sqrt(Math.max(0, xx)), 0, 0, 0);
+      JonesVector y = new JonesVector(0, 0, Math.sqrt(Math.max(0, yy)), 0);
+      return xx >= yy ? java.util.List.of(x, y) : java.util.List.of(y, x);
+    }
+    return java.util.List.of(eigenField(major), eigenField(minor));
+  }
+
+  /** √λ times the unit eigenvector of Φ for eigenvalue λ, from the better-conditioned row. */
+  private JonesVector eigenField(double lambda) {
+    // Row 1 gives v = (Φxy, λ − Φxx); row 2 gives v = (λ − Φyy, Φxy*). Take the longer one.
+    double r1 = Math.hypot(Math.hypot(xyRe, xyIm), lambda - xx);
+    double r2 = Math.hypot(lambda - yy, Math.hypot(xyRe, xyIm));
+    double a = Math.sqrt(lambda);
+    if (r1 >= r2) {
+      return new JonesVector(a * xyRe / r1, a * xyIm / r1, a * (lambda - xx) / r1, 0);
+    }
+    return new JonesVector(a * (lambda - yy) / r2, 0, a * xyRe / r2, -a * xyIm / r2);
+  }
+
   /** J Φ J†: the light after the element. */
   public Coherency transform(Jones j) {
     double ar = j.aRe();

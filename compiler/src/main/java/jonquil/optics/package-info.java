@@ -34,6 +34,11 @@
  *       in the (p, s) basis its Jones matrix is diag(rp, rs). With this rp sign a perfect mirror at
  *       normal incidence is diag(1, −1) and turns right circular into left: that is the intended
  *       physics, not an artefact.
+ *   <li><b>Interference.</b> A beam that travelled the optical path L carries e^{ik₀L} on top of
+ *       its Jones vector, so two beams of one line meeting after ΔL have the cross term 2 Re(E1†E2
+ *       e^{ik₀ΔL})|γ(ΔL)|. The phase k₀ΔL is unknown unless stated (distances are not known to a
+ *       wavelength): powers are then ranges, and the fringe visibility is their contrast ({@link
+ *       jonquil.optics.Interference}, {@link jonquil.optics.TemporalCoherence}).
  * </ul>
  *
  * <p>Units are SI throughout: metres, radians, watts. Values are immutable; nothing here does I/O

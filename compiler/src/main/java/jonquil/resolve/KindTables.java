@@ -110,7 +110,10 @@ final class KindTables {
             List.of(
                 List.of(Param.WAVELENGTH, Param.LINE),
                 List.of(Param.POWER, Param.PULSE_ENERGY, Param.LINE)),
-            List.of(List.of(Param.WAVELENGTH, Param.LINE), List.of(Param.POWER, Param.LINE))),
+            List.of(
+                List.of(Param.WAVELENGTH, Param.LINE),
+                List.of(Param.POWER, Param.LINE),
+                List.of(Param.LINEWIDTH, Param.COHERENCE_LENGTH))),
         optional(Param.WAVELENGTH, WAVELENGTH_Q, "emission wavelength"),
         repeatable(
             Param.LINE,
@@ -133,6 +136,16 @@ final class KindTables {
             q("rate", Dimension.FREQUENCY, Bounds.POSITIVE, "1 kHz"),
             "pulse repetition rate"),
         optional(Param.POLARIZATION, STATE, "polarization state at the exit"),
+        optional(
+            Param.LINEWIDTH,
+            q("linewidth", Dimension.FREQUENCY, Bounds.POSITIVE, "1 MHz"),
+            "spectral width (FWHM) of each line, taken as Lorentzian: coherence length c/(πΔν),"
+                + " which sets how beams of one line interfere where they meet again"),
+        optional(
+            Param.COHERENCE_LENGTH,
+            q("length", Dimension.LENGTH, Bounds.POSITIVE, "30 cm"),
+            "coherence length Lc of each line: beams of one line meeting after path difference ΔL"
+                + " interfere with |γ| = exp(−ΔL/Lc)"),
         optional(
             Param.BEAM,
             keyed(

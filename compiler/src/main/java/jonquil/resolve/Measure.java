@@ -43,7 +43,13 @@ public enum Measure {
   ELLIPTICITY(Bound.ANGLE, Where.AT, "ellipticity"),
   HANDEDNESS(Bound.HANDEDNESS, Where.AT, "handedness"),
   EXTINCTION(Bound.RATIO_OR_DB, Where.AT, "'>= 1000' or '>= 30 dB'", List.of("extinction")),
-  DOP(Bound.RATIO, Where.AT, "dop", "degree of polarization");
+  DOP(Bound.RATIO, Where.AT, "dop", "degree of polarization"),
+  /**
+   * The contrast (Pmax − Pmin)/(Pmax + Pmin) of the fringes where two beams of one laser line meet
+   * again, over their unknown relative phase: power balance × polarization overlap × coherence
+   * factor ({@link jonquil.optics.Interference}).
+   */
+  VISIBILITY(Bound.RATIO, Where.AT, "'>= 0.9' or '>= 90 %'", List.of("visibility"));
 
   /**
    * How the bound is written: the dimension of its number (none for plain numbers, ratios, classes
@@ -178,7 +184,8 @@ public enum Measure {
           ELLIPTICITY,
           HANDEDNESS,
           EXTINCTION,
-          DOP ->
+          DOP,
+          VISIBILITY ->
           false;
     };
   }

@@ -21,6 +21,8 @@ public enum Param {
   PULSE_ENERGY("pulse_energy"),
   PULSE_DURATION("pulse_duration"),
   REPETITION_RATE("repetition_rate"),
+  LINEWIDTH("linewidth"),
+  COHERENCE_LENGTH("coherence_length"),
   POLARIZATION("polarization"),
   BEAM("beam"),
   CATALOG("catalog"),

@@ -165,22 +165,7 @@ class AdditionRecipeTest {
           case NONE, OPTIONAL_AT -> "";
         };
     String bound = m.example().split("' or '")[0].replace("'", "");
-    Result r =
-        Bench.check(
-            """
-            source s { wavelength 1064 nm; pulse_energy 1 mJ; pulse_duration 10 ns
-                       repetition_rate 1 kHz; beam waist 1 mm; polarization linear 0 deg }
-            polarizer pol { axis 0 deg; damage 5 J/cm2 for 10 ns at 1064 nm }
-            probe p { aperture 7 mm; exposure_time 0.25 s }
-            train t { s -> 10 mm -> pol -> 10 mm -> p }
-            require {
-            """
-                + "  "
-                + m.word()
-                + " "
-                + place
-                + bound
-                + "\n}\n");
+    Result r = Bench.check(benchFor(m) + "  " + m.word() + " " + place + bound + "\n}\n");
     assertEquals(1, r.requirements().size(), m + ": " + r.diagnostics());
     RequirementOutcome o = r.requirements().get(0);
     assertFalse(
@@ -189,6 +174,69 @@ class AdditionRecipeTest {
                 d -> d.code().id().startsWith("J6") && !d.code().id().matches("J609|J610|J611")),
         m + ": " + r.diagnostics());
     assertTrue(o.status() != RequirementStatus.NOT_EVALUATED, m + ": " + o.reason());
+  }
+
+  /** A pulsed source with a stated beam on one path; its two arms meet again for a visibility. */
+  private static String benchFor(Measure m) {
+    String source =
+        """
+        source s { wavelength 1064 nm; pulse_energy 1 mJ; pulse_duration 10 ns
+                   repetition_rate 1 kHz; beam waist 1 mm; polarization linear 0 deg }
+        """;
+    return switch (m) {
+      case VISIBILITY ->
+          source
+              + """
+              splitter bs1 { ratio 50 %; aoi 45 deg }
+              splitter bs2 { ratio 50 %; aoi 45 deg }
+              probe p { aperture 7 mm; exposure_time 0.25 s }
+              dump d
+              train t {
+                s -> 10 mm -> bs1.through -> 20 mm -> bs2.through -> 10 mm -> p
+                bs1.reflected -> 20 mm -> bs2.side -> 10 mm -> d
+              }
+              require {
+              """;
+      case POWER,
+          TRANSMISSION,
+          STRAY,
+          BACK_REFLECTION,
+          AZIMUTH,
+          ELLIPTICITY,
+          POLARIZATION,
+          HANDEDNESS,
+          IRRADIANCE,
+          PEAK_IRRADIANCE,
+          AVERAGE_PEAK_IRRADIANCE,
+          FLUENCE,
+          PEAK_FIELD,
+          PEAK_POWER,
+          PULSE_ENERGY,
+          BEAM_RADIUS,
+          DAMAGE_MARGIN,
+          HAZARD_CLASS,
+          NOHD,
+          EXPOSURE,
+          EYEWEAR_OD,
+          EXTINCTION,
+          DOP ->
+          source
+              + """
+              polarizer pol { axis 0 deg; damage 5 J/cm2 for 10 ns at 1064 nm }
+              probe p { aperture 7 mm; exposure_time 0.25 s }
+              train t { s -> 10 mm -> pol -> 10 mm -> p }
+              require {
+              """;
+    };
+  }
+
+  /** Where no two beams of one line meet, a visibility is not evaluated, so not met. */
+  @Test
+  void aVisibilityOnOnePathFailsClosed() {
+    Result r = Bench.check(benchFor(Measure.POWER) + "  visibility at p >= 0.9\n}\n");
+    RequirementOutcome o = r.requirements().get(0);
+    assertEquals(RequirementStatus.NOT_EVALUATED, o.status(), o.reason());
+    assertEquals(PortInterference.NONE_MEET, o.reason());
   }
 
   private static String placeFor(Measure m) {

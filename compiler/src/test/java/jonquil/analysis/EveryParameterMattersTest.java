@@ -69,6 +69,11 @@ class EveryParameterMattersTest {
     change("source", "wavelength", src, "wavelength 1030 nm");
     change("source", "power", src, "power 2 W");
     change("source", "polarization", src, "polarization linear 45 deg");
+    // Where no beams of one line meet (this single path) a coherence figure warns that it
+    // changes nothing (J626); where they meet it sets the visibility
+    // (InterferenceRequirementsTest).
+    change("source", "linewidth", src, "linewidth 1 MHz");
+    change("source", "coherence_length", src, "coherence_length 30 cm");
     change("source", "beam", src, "beam waist 2 mm");
     change("source", "beam", src, "beam waist 1 mm, waist_at 500 mm");
     change("source", "beam", src, "beam waist 1 mm, m2 1.5");
