@@ -10,8 +10,9 @@ import java.util.function.DoubleBinaryOperator;
  * (repetitive exposure). The limiting apertures are stated in the aperture column of Tables 2.2–2.4
  * and their notes.
  *
- * <p>Where the directive's tables were read (the Official Journal prints Tables 2.2–2.4 as images,
- * so every reading below is of a public text restatement with the directive's own numbering):
+ * <p>Where the directive's tables were read (the copies of the directive reachable here,
+ * legislation.gov.uk and EUR-Lex, did not yield the rows of Tables 2.2–2.4 as text, so every
+ * reading below is of a public restatement that keeps the directive's own numbering):
  *
  * <ul>
  *   <li>[FR] the French transposition, Code du travail, regulatory part, Book IV, Title V, Chapter
