@@ -69,7 +69,9 @@ final class Ed3 {
    *       t^0.75 C4 J/m² (confirmed); 10 s–3×10⁴ s: 10 C4 C7 W/m² (from memory; = 18·T2^-0.25 with
    *       T2 = 10 s, rounded down).
    *   <li>1050–1250 nm: 10 ps–13 µs: 2×10⁻² C7 J/m² (from memory); 13 µs–10 s: 90 t^0.75 C7 J/m² (=
-   *       18·C4 t^0.75 with C4 = 5; from memory); 10 s–3×10⁴ s: 10 C4 C7 W/m² (from memory).
+   *       18·C4 t^0.75 with C4 = 5; from memory; cross-checked: the same formula is Directive
+   *       2006/25/EC, Annex II, Table 2.2, row 1050–1400 nm, 5×10⁻⁵–10 s, 90 t^0.75 C_C, which the
+   *       directive starts at 50 µs instead of 13 µs); 10 s–3×10⁴ s: 10 C4 C7 W/m² (from memory).
    * </ul>
    */
   static double retinalThermal(double lambda, double t) {
@@ -160,7 +162,10 @@ final class Ed3 {
    * Table 7: 2 C_A×10⁻² J/cm², 1.1 C_A t^0.25 J/cm², 0.2 C_A W/cm²): below 1 ns: 2×10¹¹ C4 W/m²
    * (from memory; joins 200 C4 J/m² at 1 ns); 1 ns–100 ns: 200 C4 J/m²; 100 ns–10 s: 1.1×10⁴ C4
    * t^0.25 J/m²; 10 s–3×10⁴ s: 2000 C4 W/m². Ultraviolet and far infrared: {@link Ed3Ultraviolet},
-   * {@link Ed3Infrared}, the same rows as the eye there.
+   * {@link Ed3Infrared}, the same rows as the eye there. Cross-checked, all four rows: they are
+   * Directive 2006/25/EC, Annex II, Table 2.4, rows 400–700 and 700–1400 nm (2×10¹¹ C_A W/m² below
+   * 10⁻⁹ s, 200 C_A J/m² to 10⁻⁷ s, 1.1×10⁴ C_A t^0.25 J/m² to 10 s, 2×10³ C_A W/m² to 3×10⁴ s), as
+   * read in its public text (see {@code jonquil.safety.directive.AnnexII}).
    */
   static double skinMpe(double lambda, double t) {
     return skinLimit(lambda, t).exposure();

@@ -20,6 +20,12 @@ package jonquil.safety;
  * s^0.25 = 9958 = 996 W/m² × 10 s); the bands themselves step at 1500, 1800 and 2600 nm for pulses,
  * as the tables do. Above 10 s over a large skin area the tables lower the limit further; that
  * large-area row is not implemented (the 1000 W/m² row assumes a small exposed area).
+ *
+ * <p>Cross-checked, value for value, against the directive's tables as read in their public text
+ * (see {@code jonquil.safety.directive.AnnexII}): every row below 10 s is Directive 2006/25/EC,
+ * Annex II, Table 2.2, rows 1400–1500, 1500–1800, 1800–2600 and 2600–10⁶ nm (and the sub-ns
+ * irradiances also Table 2.4, those rows, &lt; 10⁻⁹ s). The 1000 W/m² beyond 10 s is the
+ * directive's Table 2.3, which could not be read, so it is not cross-checked.
  */
 final class Ed3Infrared {
   private Ed3Infrared() {}

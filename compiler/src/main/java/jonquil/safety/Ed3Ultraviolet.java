@@ -19,6 +19,13 @@ package jonquil.safety;
  *
  * The rows join within the tables' rounding: 3×10¹⁰ × 1 ns = 30 J/m², C1(1 ns) = 31.5 J/m²,
  * C2(302.5 nm) = 31.6 J/m², C2(315 nm) = 10⁴ J/m², C1(10 s) = 9.96×10³ J/m².
+ *
+ * <p>Cross-checked, value for value, against the directive's Table 2.2 as read in its public text
+ * (see {@code jonquil.safety.directive.AnnexII}): the 3×10¹⁰ W/m² below 1 ns (rows 180–400 nm,
+ * 10⁻¹³–10⁻⁹ s), C1 (row 315–400 nm, 10⁻⁹–10 s, written out as 5.6×10³ t^0.25) and the 30 J/m² dose
+ * (rows 180–280 and 280–302 nm, 10⁻⁹–10 s). Not C2 and T1: the directive lists one rounded dose and
+ * T1 per nanometre for 303–314 nm instead (60 J/m² at 304 nm against C2 = 63.1 J/m²), and starts
+ * them at 303 nm rather than 302.5 nm.
  */
 final class Ed3Ultraviolet {
   private Ed3Ultraviolet() {}
@@ -26,7 +33,10 @@ final class Ed3Ultraviolet {
   static final String PHOTOCHEMICAL = "ultraviolet photochemical (cornea, lens, skin)";
   static final String THERMAL = "ultraviolet thermal";
 
-  /** C1 = 5.6×10³ t^0.25 J/m² (Ed. 3 Table 9; from memory). */
+  /**
+   * C1 = 5.6×10³ t^0.25 J/m² (Ed. 3 Table 9; from memory; cross-checked: the same formula is
+   * Directive 2006/25/EC, Annex II, Table 2.2, row 315–400 nm, 10⁻⁹–10 s).
+   */
   static double c1(double t) {
     return 5.6e3 * Math.pow(t, 0.25);
   }

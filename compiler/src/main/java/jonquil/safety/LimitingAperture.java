@@ -10,6 +10,13 @@ package jonquil.safety;
  *       1.5·10^0.375 = 3.55). Eye, 100 µm–1 mm: 11 mm.
  *   <li>Skin, 180 nm–100 µm: 3.5 mm. Skin, 100 µm–1 mm: 11 mm.
  * </ul>
+ *
+ * Cross-checked where Directive 2006/25/EC, Annex II has the same value (its Tables 2.2 and 2.4 as
+ * read in their public text, see {@code jonquil.safety.directive.AnnexII}): eye 400–1400 nm, 7 mm
+ * (Table 2.2, aperture column, rows 400–1400 nm); eye 100 µm–1 mm, 11 mm (Table 2.2, note b); skin
+ * 180 nm–100 µm, 3.5 mm (Table 2.4, aperture column). The others differ: the directive grows the
+ * ultraviolet eye aperture like the infrared one, starts the growth at 0.3 s, and keeps 3.5 mm for
+ * the skin up to 1 mm.
  */
 public final class LimitingAperture {
   private LimitingAperture() {}

@@ -44,8 +44,10 @@ final class PulseRules {
    * CorrectionFactors#pulseGroupTime} for 400–1400 nm; 1 ms for 1400–1500 nm; 10 s for 1500–1800
    * nm; 1 ms for 1800–2600 nm; 100 ns for 2600 nm–1 mm. The ultraviolet and infrared values are
    * confirmed by Directive 2006/25/EC, Annex II, Table 2.6 (T_min: 1 ns for 315–400 nm, 1 ms for
-   * 1400–1500 nm, 10 s for 1500–1800 nm); 180–315 nm, 1800 nm–1 mm, and that Ed. 3 keeps them, are
-   * from memory. They match the row breakpoints of Table A.1.
+   * 1400–1500 nm, 10 s for 1500–1800 nm) and so are 1800 nm–1 mm (cross-checked: Table 2.6, rows
+   * 1800–2600 nm, T_min = 1 ms, and 2600–10⁶ nm, T_min = 100 ns, as read in the directive's public
+   * text, see {@code jonquil.safety.directive.AnnexII}); 180–315 nm, where the directive gives no
+   * T_min, and that Ed. 3 keeps them, are from memory. They match the row breakpoints of Table A.1.
    */
   static double groupTime(double lambda) {
     double n = CorrectionFactors.nm(lambda);

@@ -32,23 +32,34 @@ public final class TableScope {
 
   /**
    * Limiting aperture for the eye, 400–1400 nm: 7 mm (IEC Table A.3, ANSI Table 8; both from
-   * memory; the 7 mm pupil is confirmed by the sources cited in Ed3).
+   * memory; the 7 mm pupil is confirmed by the sources cited in Ed3; cross-checked: Directive
+   * 2006/25/EC, Annex II, Table 2.2, aperture column, rows 400–1400 nm).
    */
   public static final double APERTURE_EYE = 7e-3;
 
-  /** Limiting aperture for the skin, 400–1400 nm: 3.5 mm (IEC Table A.3, ANSI Table 8; memory). */
+  /**
+   * Limiting aperture for the skin, 400–1400 nm: 3.5 mm (IEC Table A.3, ANSI Table 8; memory;
+   * cross-checked: Directive 2006/25/EC, Annex II, Table 2.4, aperture column, rows 400–1400 nm).
+   */
   public static final double APERTURE_SKIN = 3.5e-3;
 
   /**
    * Shortest exposure the IEC 60825-1:2014 (Ed. 3) tables cover, s: 10⁻¹³ s (100 fs), Table A.1 and
-   * A.5 (from memory).
+   * A.5 (from memory; cross-checked: Directive 2006/25/EC, Annex II, Table 2.2, first column,
+   * 10⁻¹³–10⁻¹¹ s).
    */
   public static final double T_MIN_IEC = 1e-13;
 
-  /** Shortest wavelength of the IEC tables, m (180 nm, Table A.1; from memory). */
+  /**
+   * Shortest wavelength of the IEC tables, m (180 nm, Table A.1; from memory; cross-checked:
+   * Directive 2006/25/EC, Annex II, Table 2.2, first row, 180–280 nm).
+   */
   public static final double LAMBDA_MIN_IEC = 180e-9;
 
-  /** Longest wavelength of the IEC tables, m (1 mm, Table A.1; from memory). */
+  /**
+   * Longest wavelength of the IEC tables, m (1 mm, Table A.1; from memory; cross-checked: Directive
+   * 2006/25/EC, Annex II, Table 2.2, last row, 2600–10⁶ nm).
+   */
   public static final double LAMBDA_MAX_IEC = 1e-3;
 
   /** What an MPE protects: its limiting aperture and the shortest pulse its rows cover (s). */

@@ -76,7 +76,7 @@ abstract class AnnexIILimit extends MpeCalculator {
 
   /**
    * Rule 3 of Table 2.6: each pulse ≤ the single-pulse limit × C_P, N the number of pulses; pulses
-   * closer than T_min count as one pulse T_min long. None below 315 nm, where Table 2.6 gives no
+   * closer than T_min count as one pulse T_min long. None up to 315 nm, where Table 2.6 gives no
    * T_min. Applied to every limit from 315 nm, thermal or not: C_P ≤ 1, so where the directive
    * would not apply it this is stricter than the directive, never more lenient.
    */

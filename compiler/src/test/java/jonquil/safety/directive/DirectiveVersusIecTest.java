@@ -23,7 +23,10 @@ import org.junit.jupiter.params.provider.CsvSource;
  * t^0.75 C_A, 90 t^0.75 C_C, 10 C_A C_C W/m², 100 C_B J/m², 1 C_B W/m²); skin, 400–1400 nm, 1 ns to
  * 3×10⁴ s. They differ: single pulses below 18 µs (50 µs beyond 1050 nm), where the 2014 IEC
  * edition lowered the nanosecond limit and moved T_i to 5 µs (13 µs), and pulse trains, where the
- * directive's rule 3 multiplies by C_P = N^−0.25 and IEC Ed. 3 sets C5 = 1 for a point source.
+ * directive's rule 3 multiplies by C_P = N^−0.25 and IEC Ed. 3 sets C5 = 1 for a point source;
+ * 302–315 nm, where the directive lists one rounded dose per nanometre (Table 2.2 rows 303–314 nm,
+ * read in the French transposition, see {@link AnnexII}) and IEC the C2 formula; and the skin's
+ * aperture beyond 100 µm (3.5 mm in Table 2.4, 11 mm in IEC Ed. 3).
  */
 class DirectiveVersusIecTest {
   /**
@@ -75,6 +78,30 @@ class DirectiveVersusIecTest {
     double directive = DirectiveEyeLimit.at(e, 1).get().radiantExposure();
     double iec = OcularMpe.at(e, 1).get().radiantExposure();
     assertEquals(ratio, directive / iec, ratio * 1e-3, why);
+  }
+
+  @ParameterizedTest(name = "{0} nm over {1} s: directive/IEC = {2} ({3})")
+  @CsvSource({
+    // nm, t (s), directive / IEC, why
+    "304,   1, 0.950936, Table 2.2 row 304 nm 60 J/m2 against IEC C2 = 10^1.8 = 63.1 (from memory)",
+    "308,   1, 1.004755, Table 2.2 row 308 nm 400 J/m2 against IEC C2 = 10^2.6 = 398.1",
+    "302.7, 1, 0.865209, Table 2.2 row 280-302 nm 30 J/m2 (note a) against IEC C2 = 10^1.54",
+    "314.5, 5, 0.793123, Table 2.2 row 314 nm 6.3e3 J/m2 (note a) against IEC C2 = 10^3.9"
+  })
+  void ultravioletBDiffers(double nm, double t, double ratio, String why) {
+    Emission e = Emission.continuous(nm * 1e-9, 1e-3);
+    double directive = DirectiveEyeLimit.at(e, t).get().radiantExposure();
+    double iec = OcularMpe.at(e, t).get().radiantExposure();
+    assertEquals(ratio, directive / iec, ratio * 1e-5, why);
+  }
+
+  @Test
+  void theSkinApertureDiffersBeyondAHundredMicrometres() {
+    // Directive 2006/25/EC Annex II Table 2.4, aperture column: 3.5 mm at every wavelength (read
+    // in the French transposition); IEC 60825-1:2014 Table A.3: 11 mm from 100 um (from memory).
+    Emission e = Emission.continuous(500e-6, 1e-3);
+    assertEquals(3.5e-3, DirectiveSkinLimit.at(e, 10).get().apertureDiameter(), 1e-9);
+    assertEquals(11e-3, SkinMpe.at(e, 10).get().apertureDiameter(), 1e-9);
   }
 
   @Test
