@@ -2,7 +2,6 @@ package jonquil;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
@@ -95,7 +94,7 @@ public final class Checker {
       BiConsumer<Path, Throwable> onInternalError,
       boolean keep,
       Consumer<CheckedRoot> onRoot) {
-    Map<Path, ParseResult> parsed = new HashMap<>();
+    Map<Path, ParseResult> parsed = new LinkedHashMap<>();
     Map<Path, SourceFile> read = new LinkedHashMap<>();
     Set<Diagnostic> diagnostics = new LinkedHashSet<>();
     List<RequirementOutcome> requirements = new ArrayList<>();

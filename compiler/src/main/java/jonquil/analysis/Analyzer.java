@@ -2,7 +2,7 @@ package jonquil.analysis;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.HashMap;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.OptionalDouble;
@@ -84,7 +84,8 @@ public final class Analyzer {
       java.util.function.BooleanSupplier superseded) {
     MaterialModel materials = new MaterialModel(model);
     ElementOptics optics = new ElementOptics(materials, new SurfaceModel(model, materials));
-    Map<OptionalDouble, TrainSolution> solved = new HashMap<>();
+    // In the order solved, so the first solve that does not close is reported, whatever the JVM.
+    Map<OptionalDouble, TrainSolution> solved = new LinkedHashMap<>();
     java.util.function.Function<OptionalDouble, TrainSolution> solve =
         wl -> solved.computeIfAbsent(wl, w -> new Propagator(model, optics, materials).solve(w));
     TrainSolution solution = solve.apply(OptionalDouble.empty());

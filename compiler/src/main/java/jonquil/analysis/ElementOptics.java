@@ -13,6 +13,7 @@ import jonquil.resolve.ResolvedElement;
 import jonquil.resolve.SplitterFractions;
 import jonquil.resolve.Symbol;
 import jonquil.resolve.Value;
+import jonquil.source.InOrder;
 import org.apache.commons.math3.complex.Complex;
 
 /**
@@ -321,8 +322,8 @@ final class ElementOptics {
     TracedBeam reflected = in.with(in.light().transform(reflect), in.frame().reflect(aoi, plane));
     if (e.param(Param.COATING).isEmpty()) {
       return Response.balance(
-              in, Map.of("through", in.with(through), "reflected", reflected), List.of())
-          .withJones(Map.of("through", pass, "reflected", reflect));
+              in, InOrder.of("through", in.with(through), "reflected", reflected), List.of())
+          .withJones(InOrder.of("through", pass, "reflected", reflect));
     }
     // A coating is on the cube's outer faces (glass of n = 1.5 assumed, as for a coated plate),
     // met at normal incidence: once on entry (its reflection heads back) and once at each exit
@@ -334,7 +335,7 @@ final class ElementOptics {
     double exitLoss = t * face.rs() * (through.power() + reflected.power());
     return Response.balance(
             in,
-            Map.of(
+            InOrder.of(
                 "through",
                 in.with(through.scaled(t * t)),
                 "reflected",
@@ -348,7 +349,7 @@ final class ElementOptics {
                     "exit face reflections",
                     in.with(in.light().scaled(exitLoss / Math.max(in.power(), Double.MIN_VALUE))),
                     false)))
-        .withJones(Map.of("through", pass.scaled(t), "reflected", reflect.scaled(t)));
+        .withJones(InOrder.of("through", pass.scaled(t), "reflected", reflect.scaled(t)));
   }
 
   private Response mirror(ResolvedElement e, TracedBeam in, double plane) {
@@ -429,8 +430,8 @@ final class ElementOptics {
                             g.intoMedium(ng.getReal())
                                 .propagate(thickness)
                                 .intoMedium(n3.getReal())));
-    return Response.balance(in, Map.of("through", out, "reflected", reflected), List.of())
-        .withJones(Map.of("through", pass, "reflected", reflect));
+    return Response.balance(in, InOrder.of("through", out, "reflected", reflected), List.of())
+        .withJones(InOrder.of("through", pass, "reflected", reflect));
   }
 
   /**
@@ -484,8 +485,8 @@ final class ElementOptics {
     TracedBeam reflected = in.with(in.light().transform(reflect), in.frame().reflect(aoi, plane));
     TracedBeam out =
         in.with(through).in(Medium.of(to)).withMode(in.mode().map(g -> g.intoMedium(n2.getReal())));
-    return Response.balance(in, Map.of("through", out, "reflected", reflected), List.of())
-        .withJones(Map.of("through", pass, "reflected", reflect))
+    return Response.balance(in, InOrder.of("through", out, "reflected", reflected), List.of())
+        .withJones(InOrder.of("through", pass, "reflected", reflect))
         .withSurface(
             new SurfaceAtAngle(
                 wl,

@@ -2,7 +2,6 @@ package jonquil.analysis;
 
 import java.util.Optional;
 import jonquil.optics.beam.Irradiance;
-import jonquil.resolve.Param;
 import jonquil.resolve.ResolvedElement;
 import jonquil.resolve.SafetyStandard;
 import jonquil.safety.Classifier;
@@ -53,15 +52,6 @@ final class SafetyModel {
       return Emission.singlePulse(wavelength, p.energy(power), p.duration());
     }
     return Emission.pulseTrain(wavelength, p.energy(power), p.duration(), p.repetitionRate());
-  }
-
-  static double wavelength(ResolvedElement source) {
-    return source
-        .number(Param.WAVELENGTH, "wavelength")
-        .orElse(
-            source.all(Param.LINE).isEmpty()
-                ? 0
-                : source.all(Param.LINE).get(0).number("wavelength").orElse(0));
   }
 
   static Outcome<HazardClass> hazardClass(ResolvedElement source, PortValue exit) {

@@ -45,7 +45,9 @@ public final class SafetySummary {
       if (exit.isEmpty()) {
         continue;
       }
-      double wl = SafetyModel.wavelength(e);
+      // The wavelength the exit's figures describe (its strongest line; a line's own in the
+      // solution of that line alone), the one the class and NOHD are judged at too.
+      double wl = exit.get().wavelength();
       jonquil.safety.ExposureDuration d = SafetyModel.defaultExposure(wl);
       double t = d.seconds();
       var emission = SafetyModel.emission(wl, exit.get().power(), exit.get().pulses());

@@ -18,9 +18,13 @@ public record CodeActionInfo(
     Map<Path, List<Edit>> edits) {
   public CodeActionInfo {
     edits =
-        edits.entrySet().stream()
-            .collect(
-                java.util.stream.Collectors.toUnmodifiableMap(
-                    Map.Entry::getKey, e -> List.copyOf(e.getValue())));
+        jonquil.source.InOrder.copyOf(
+            edits.entrySet().stream()
+                .collect(
+                    java.util.stream.Collectors.toMap(
+                        Map.Entry::getKey,
+                        e -> List.copyOf(e.getValue()),
+                        (a, b) -> a,
+                        java.util.LinkedHashMap::new)));
   }
 }

@@ -281,7 +281,7 @@ final class Completions {
 
   static List<CompletionItemInfo> parameters(ElementKind kind, Set<String> skip) {
     List<CompletionItemInfo> out = new ArrayList<>();
-    for (ParamSpec p : kind.params()) {
+    for (ParamSpec p : kind.takenParams()) {
       if (!skip.contains(p.name())) {
         String how = p.required() ? "required" : p.repeatable() ? "repeatable" : "optional";
         out.add(

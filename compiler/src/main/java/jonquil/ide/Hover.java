@@ -50,6 +50,13 @@ final class Hover {
     if (requirement.isPresent()) {
       return Optional.of(RequirementText.hover(r, file, requirement.get()));
     }
+    var port = NodeAtCursor.port(f, offset);
+    if (port.isPresent()) {
+      TextRange at = port.get().port().get().range();
+      return SymbolUses.of(r)
+          .at(file, port.get().name().range().start())
+          .map(o -> port(r, file, o.symbol(), port.get().port().get().text(), at));
+    }
     return NodeAtCursor.kindWord(f, offset)
         .flatMap(d -> SymbolUses.of(r).at(file, d.name().range().start()))
         .map(o -> symbol(r, file, o.symbol(), o.range()));
@@ -79,18 +86,54 @@ final class Hover {
       if (model == null) {
         md.append("\n\n").append(LightText.NO_ANALYSIS);
       } else {
-        if (s.kind().get() == ElementKind.SOURCE) {
+        ElementKind kind = s.kind().get();
+        var solution = OwningModels.solution(r, model);
+        var lines = LineText.at(model, solution, s.name(), kind);
+        if (kind == ElementKind.SOURCE) {
           model.element(s).ifPresent(e -> lines(md, e));
           coherence(md, model, s.name());
         }
-        LightText.append(md, model, OwningModels.solution(r, model), s.name(), s.kind().get());
-        OpticsText.append(
-            md, model.ambient(), OwningModels.solution(r, model), s.name(), s.kind().get());
-        if (s.kind().get() == ElementKind.SOURCE) {
-          SafetyText.append(md, model, OwningModels.solution(r, model), s.name());
+        LightText.append(md, model, solution, s.name(), kind);
+        OpticsText.append(md, model.ambient(), solution, s.name(), kind, !lines.isEmpty());
+        if (kind == ElementKind.SOURCE) {
+          SafetyText.append(md, model, solution, s.name(), !lines.isEmpty());
         }
+        LineText.append(md, model, lines, s.name(), kind);
       }
     }
+    return new HoverInfo(md.toString().stripTrailing(), range);
+  }
+
+  /**
+   * The light leaving one port of an element, in total and, where several lines leave by it, each
+   * line's own; a port no light leaves by (a face light enters by) shows the element instead.
+   */
+  private static HoverInfo port(Result r, Path file, Symbol s, String port, TextRange range) {
+    if (s.kind().isEmpty() || !s.category().placeable()) {
+      return symbol(r, file, s, range);
+    }
+    ResolvedModel model = lightModel(r, OwningModels.reading(r, s.file()), s.name());
+    var solution =
+        model == null
+            ? Optional.<jonquil.analysis.TrainSolution>empty()
+            : OwningModels.solution(r, model);
+    String key = s.name() + "." + port;
+    if (solution.isEmpty() || solution.get().port(key).isEmpty()) {
+      return symbol(r, file, s, range);
+    }
+    StringBuilder md =
+        new StringBuilder("**port** ")
+            .append(MarkdownText.code(key))
+            .append(" of ")
+            .append(s.kind().get().word())
+            .append(' ')
+            .append(MarkdownText.code(s.name()));
+    LightText.port(
+        md,
+        solution.get(),
+        key,
+        "**Light** leaving it (in the table frame, summed over the lines)");
+    LineText.port(md, model, key);
     return new HoverInfo(md.toString().stripTrailing(), range);
   }
 

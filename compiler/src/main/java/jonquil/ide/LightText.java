@@ -51,6 +51,56 @@ final class LightText {
     }
     MarkdownText.para(md)
         .append("**Light** (power in the table frame, summed over the source's lines)\n\n");
+    light(md, rows);
+    Map<String, Double> margins = SafetySummary.damageMargins(model, s);
+    if (margins.containsKey(name)) {
+      md.append("\nDamage margin: ")
+          .append(MarkdownText.num(margins.get(name)))
+          .append(" (threshold ÷ exposure)\n");
+    }
+    interference(md, model, s, name, kind);
+    polarization(md, rows);
+    passes(md, s.passesOf(name));
+    s.returnedTo(name)
+        .ifPresent(
+            back ->
+                md.append("\nReturned to its output (traced back through the train): ")
+                    .append(MarkdownText.q(back.power(), Dimension.POWER))
+                    .append(", ")
+                    .append(InlayHints.polarization(back))
+                    .append('\n'));
+  }
+
+  /** Whether any light of {@code s} is at the element: arriving, or leaving one of its ports. */
+  static boolean lit(TrainSolution s, String name, ElementKind kind) {
+    return rows(s, name, kind).stream().anyMatch(r -> r.value().power() > 0);
+  }
+
+  /**
+   * The power, beam and polarization at every port of the element in the solution of one line
+   * alone.
+   */
+  static void line(StringBuilder md, TrainSolution line, String name, ElementKind kind) {
+    List<Row> rows = rows(line, name, kind);
+    MarkdownText.para(md).append("**Light** (this line alone, in the table frame)\n\n");
+    light(md, rows);
+    polarization(md, rows);
+  }
+
+  /** The light leaving by one port ("element.port") under {@code title}, if any leaves. */
+  static void port(StringBuilder md, TrainSolution s, String key, String title) {
+    s.port(key)
+        .ifPresent(
+            v -> {
+              List<Row> rows = List.of(new Row("out `" + v.port() + "`", v));
+              MarkdownText.para(md).append(title).append("\n\n");
+              light(md, rows);
+              polarization(md, rows);
+            });
+  }
+
+  /** The table of power, beam radius, irradiance and field, then the pulses where pulsed. */
+  private static void light(StringBuilder md, List<Row> rows) {
     md.append(
         "| | power | beam radius | irradiance avg / avg peak | peak field |\n"
             + "|---|---|---|---|---|\n");
@@ -96,23 +146,6 @@ final class LightText {
                       .append(MarkdownText.q(x.peakFluence().getAsDouble(), Dimension.FLUENCE))
                       .append('\n'));
     }
-    Map<String, Double> margins = SafetySummary.damageMargins(model, s);
-    if (margins.containsKey(name)) {
-      md.append("\nDamage margin: ")
-          .append(MarkdownText.num(margins.get(name)))
-          .append(" (threshold ÷ exposure)\n");
-    }
-    interference(md, model, s, name, kind);
-    polarization(md, rows);
-    passes(md, s.passesOf(name));
-    s.returnedTo(name)
-        .ifPresent(
-            back ->
-                md.append("\nReturned to its output (traced back through the train): ")
-                    .append(MarkdownText.q(back.power(), Dimension.POWER))
-                    .append(", ")
-                    .append(InlayHints.polarization(back))
-                    .append('\n'));
   }
 
   /** Each pass of light through an element met more than once, in the order light takes them. */

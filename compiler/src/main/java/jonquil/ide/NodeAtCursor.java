@@ -36,6 +36,22 @@ final class NodeAtCursor {
     return Optional.empty();
   }
 
+  /** The element and port of a path step whose port name is under the cursor. */
+  static Optional<Arg.RefArg> port(SpecFile f, int offset) {
+    for (TrainDecl t : f.trains()) {
+      for (TrainDecl.BeamPath path : t.paths()) {
+        for (TrainDecl.Step step : path.steps()) {
+          if (step instanceof TrainDecl.Place p
+              && p.ref().port().isPresent()
+              && p.ref().port().get().range().contains(offset)) {
+            return Optional.of(p.ref());
+          }
+        }
+      }
+    }
+    return Optional.empty();
+  }
+
   static Optional<Arg.QuantityArg> quantity(SpecFile f, int offset) {
     return quantities(f).stream().filter(q -> q.range().contains(offset)).findFirst();
   }

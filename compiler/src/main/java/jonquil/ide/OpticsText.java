@@ -17,17 +17,32 @@ import org.apache.commons.math3.complex.Complex;
 final class OpticsText {
   private OpticsText() {}
 
+  /**
+   * The surface figures and Jones matrices of the element; with {@code matricesPerLine} the
+   * matrices are left to each line's own figures (LineText), as they differ from line to line.
+   */
   static void append(
       StringBuilder md,
       Ambient ambient,
       Optional<TrainSolution> solution,
       String name,
-      ElementKind kind) {
+      ElementKind kind,
+      boolean matricesPerLine) {
     if (solution.isEmpty() || solution.get().incidentAt(name).isEmpty()) {
       return;
     }
     TrainSolution s = solution.get();
     s.surfaceOf(name).ifPresent(f -> surface(md, f, ambient));
+    if (!matricesPerLine) {
+      jones(md, s, name, kind);
+    }
+  }
+
+  /** The Jones matrix behind each port of the element, at the wavelength of the solution. */
+  static void jones(StringBuilder md, TrainSolution s, String name, ElementKind kind) {
+    if (s.incidentAt(name).isEmpty()) {
+      return;
+    }
     if (kind == ElementKind.DEPOLARIZER) {
       MarkdownText.para(md)
           .append(

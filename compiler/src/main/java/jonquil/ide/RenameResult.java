@@ -12,10 +12,14 @@ import jonquil.diag.Edit;
 public record RenameResult(Map<Path, List<Edit>> edits, String error) {
   public RenameResult {
     edits =
-        edits.entrySet().stream()
-            .collect(
-                java.util.stream.Collectors.toUnmodifiableMap(
-                    Map.Entry::getKey, e -> List.copyOf(e.getValue())));
+        jonquil.source.InOrder.copyOf(
+            edits.entrySet().stream()
+                .collect(
+                    java.util.stream.Collectors.toMap(
+                        Map.Entry::getKey,
+                        e -> List.copyOf(e.getValue()),
+                        (a, b) -> a,
+                        java.util.LinkedHashMap::new)));
   }
 
   static RenameResult refused(String error) {

@@ -3,10 +3,16 @@ package jonquil.ide;
 import java.nio.file.Path;
 import java.util.Optional;
 import jonquil.Result;
+import jonquil.analysis.LineSolutions;
 import jonquil.analysis.RequirementOutcome;
 import jonquil.analysis.VerdictText;
 import jonquil.diag.Diagnostic;
 import jonquil.diag.DiagnosticCode;
+import jonquil.resolve.ElementKind;
+import jonquil.resolve.ResolvedElement;
+import jonquil.resolve.ResolvedModel;
+import jonquil.resolve.ResolvedRequirement;
+import jonquil.resolve.Symbol;
 import jonquil.syntax.Requirement;
 
 /** The verdict on a requirement line: status, value, bound, margin, reason and its finding. */
@@ -68,6 +74,7 @@ final class RequirementText {
         md.append("\n").append(o.reason()).append('\n');
       }
     }
+    lineFigures(md, r, file, req);
     r.diagnostics().stream()
         .filter(d -> d.file().equals(file) && d.range().equals(req.range()))
         .filter(
@@ -84,5 +91,45 @@ final class RequirementText {
                     .append(d.message())
                     .append('\n'));
     return new HoverInfo(md.toString().stripTrailing(), req.range());
+  }
+
+  /**
+   * For a requirement on one line of a spec of several ('for line'), that line's own figures at the
+   * place it names: what the verdict judged, where the other hovers show the lines' total.
+   */
+  private static void lineFigures(StringBuilder md, Result r, Path file, Requirement req) {
+    for (ResolvedModel m : OwningModels.reading(r, file)) {
+      for (ResolvedRequirement q : m.requirements()) {
+        if (!q.file().equals(file) || !q.syntax().range().equals(req.range())) {
+          continue;
+        }
+        if (q.line().isEmpty()
+            || q.at().isEmpty()
+            || q.at().get().symbol().kind().isEmpty()
+            || OwningModels.solution(r, m).isEmpty()) {
+          return;
+        }
+        Symbol at = q.at().get().symbol();
+        ElementKind kind = at.kind().get();
+        LineSolutions.of(m)
+            .forEach(
+                (wavelength, line) -> {
+                  if (ResolvedElement.sameLine(wavelength, q.line().getAsDouble())) {
+                    LineText.one(
+                        md,
+                        m,
+                        wavelength,
+                        line,
+                        at.name(),
+                        kind,
+                        " at " + MarkdownText.code(at.name()));
+                    if (kind == ElementKind.SOURCE) {
+                      SafetyText.caution(md);
+                    }
+                  }
+                });
+        return;
+      }
+    }
   }
 }

@@ -14,7 +14,37 @@ import jonquil.units.Dimension;
 final class SafetyText {
   private SafetyText() {}
 
+  /**
+   * The beam at the source's exit and its eye-safety figures, then the caution. A source of several
+   * lines has no figures of its own here: each line's are given under that line (LineText), and a
+   * safety requirement on several lines adds the lines that act on the same tissue.
+   */
   static void append(
+      StringBuilder md,
+      ResolvedModel model,
+      Optional<TrainSolution> solution,
+      String source,
+      boolean perLine) {
+    if (perLine) {
+      beam(md, solution, source);
+      MarkdownText.para(md)
+          .append(
+              "**Eye safety**: each line's own figures follow under its wavelength; a safety"
+                  + " requirement on several lines adds the lines that act on the same tissue"
+                  + " (IEC 60825-1:2014, 4.3)");
+      return;
+    }
+    figures(md, model, solution, source);
+    caution(md);
+  }
+
+  /** The caution every set of eye-safety figures ends with. */
+  static void caution(StringBuilder md) {
+    MarkdownText.para(md).append("> ").append(Outcome.CAUTION);
+  }
+
+  /** The beam at the exit and the hazard class, MPE and NOHD of the light of {@code solution}. */
+  static void figures(
       StringBuilder md, ResolvedModel model, Optional<TrainSolution> solution, String source) {
     beam(md, solution, source);
     MarkdownText.para(md).append("**Eye safety** (IEC 60825-1:2014, at the source's exit)\n\n");
@@ -48,7 +78,6 @@ final class SafetyText {
           .append(figure(s.nohd(), d -> MarkdownText.q(d, Dimension.LENGTH)))
           .append('\n');
     }
-    MarkdownText.para(md).append("> ").append(Outcome.CAUTION);
   }
 
   /** The source's lines and the Gaussian beam leaving it. */

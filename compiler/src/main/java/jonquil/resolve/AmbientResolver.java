@@ -1,6 +1,6 @@
 package jonquil.resolve;
 
-import java.util.HashMap;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
@@ -110,34 +110,17 @@ final class AmbientResolver {
   private static Ambient air(Declaration d, Sink sink, Scope scope) {
     ValueChecker values = new ValueChecker(sink, scope);
     Ambient base = Ambient.DEFAULT;
-    Map<String, Double> given = new HashMap<>();
-    Map<String, Property> seen = new HashMap<>();
+    Map<String, Double> given = new LinkedHashMap<>();
+    Map<String, Property> seen = new LinkedHashMap<>();
     for (Property p : d.properties()) {
       String key = p.key().text();
       if (!CONDITIONS.contains(key)) {
-        Optional<String> close = Suggest.closest(key, CONDITIONS);
-        sink.report(
-            DiagnosticCode.UNKNOWN_PARAMETER,
-            p.key().range(),
-            "'"
-                + key
-                + "' is not a condition of the ambient air"
-                + close
-                    .map(c -> "; did you mean '" + c + "'?")
-                    .orElse("; it takes " + ShapeMatcher.quoteList(CONDITIONS)),
-            Resolver.replacement(sink.file, p.key().range(), key, close));
+        KeyReports.unknown(sink, p.key(), "a condition of the ambient air", CONDITIONS);
         continue;
       }
       Property earlier = seen.putIfAbsent(key, p);
       if (earlier != null) {
-        var diag =
-            sink.report(
-                DiagnosticCode.DUPLICATE_PARAMETER,
-                p.key().range(),
-                "'" + key + "' is given twice for the ambient; keep one");
-        sink.replace(
-            diag,
-            diag.withRelated(new Related(sink.file, earlier.key().range(), "first given here")));
+        KeyReports.givenTwice(sink, p.key(), earlier.key(), "the ambient");
         continue;
       }
       if (p.args().stream()

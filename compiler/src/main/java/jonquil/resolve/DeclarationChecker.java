@@ -1,7 +1,6 @@
 package jonquil.resolve;
 
 import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -38,41 +37,26 @@ final class DeclarationChecker {
 
   ResolvedElement check(Symbol symbol, ElementKind kind, Declaration decl) {
     Map<String, List<Value.Group>> params = new LinkedHashMap<>();
-    Map<String, Property> firstSeen = new HashMap<>();
+    Map<String, Property> firstSeen = new LinkedHashMap<>();
+    String owner = kind.word() + " '" + symbol.name() + "'";
     for (Property p : properties(kind, decl)) {
       String key = p.key().text();
       Optional<ParamSpec> spec = kind.param(key);
       if (spec.isEmpty()) {
-        List<String> names = kind.params().stream().map(ParamSpec::name).toList();
-        Optional<String> close = Suggest.closest(key, names);
-        sink.report(
-            DiagnosticCode.UNKNOWN_PARAMETER,
-            p.key().range(),
-            "'"
-                + key
-                + "' is not a parameter of "
-                + ShapeMatcher.article(kind.word())
-                + close
-                    .map(n -> "; did you mean '" + n + "'?")
-                    .orElse("; it takes " + ShapeMatcher.quoteList(names)),
-            Resolver.replacement(sink.file, p.key().range(), key, close));
+        KeyReports.unknown(
+            sink,
+            p.key(),
+            "a parameter of " + ShapeMatcher.article(kind.word()),
+            kind.takenParams().stream().map(ParamSpec::name).toList());
+        continue;
+      }
+      if (spec.get().refusal().isPresent()) {
+        KeyReports.notModelled(sink, p, owner, spec.get().refusal().get());
         continue;
       }
       Property earlier = firstSeen.putIfAbsent(key, p);
       if (earlier != null && !spec.get().repeatable()) {
-        var d =
-            sink.report(
-                DiagnosticCode.DUPLICATE_PARAMETER,
-                p.key().range(),
-                "'"
-                    + key
-                    + "' is given twice for "
-                    + kind.word()
-                    + " '"
-                    + symbol.name()
-                    + "'; keep one");
-        sink.replace(
-            d, d.withRelated(new Related(sink.file, earlier.key().range(), "first given here")));
+        KeyReports.givenTwice(sink, p.key(), earlier.key(), owner);
         continue;
       }
       if (spec.get().shape() instanceof Shape.Seq seq && seq.parts().isEmpty()) {

@@ -122,8 +122,14 @@ public enum ElementKind {
     };
   }
 
+  /** Every parameter of this kind's table, those it refuses (with their reasons) included. */
   public List<ParamSpec> params() {
     return KindTables.params(this);
+  }
+
+  /** The parameters this kind takes: its table without those it refuses. */
+  public List<ParamSpec> takenParams() {
+    return params().stream().filter(ParamSpec::taken).toList();
   }
 
   public KindRules rules() {

@@ -67,35 +67,14 @@ final class KindChecks {
                 }
                 splitterConserves(sink, who, params, given);
               };
-          case WINDOW, PLATE ->
-              () ->
-                  refused(
-                      sink,
-                      who,
-                      given,
-                      Param.WEDGE,
-                      "Jonquil does not model a wedge (the deviation of the beam and of its"
-                          + " ghosts); give the faces' tilt with 'aoi'");
           case LENS -> () -> needs(sink, who, decl, given, Param.THICKNESS, Param.MATERIAL);
           case WAVEPLATE -> () -> needs(sink, who, decl, given, Param.THICKNESS, Param.MATERIAL);
-          case DETECTOR ->
-              () -> {
-                refused(
-                    sink,
-                    who,
-                    given,
-                    Param.APERTURE,
-                    "a detector takes the whole beam; clipping at its active area is not"
-                        + " modelled (place an 'aperture' before it)");
-                refused(
-                    sink,
-                    who,
-                    given,
-                    Param.RESPONSIVITY,
-                    "no figure Jonquil computes uses it (there is no photocurrent measure)");
-              };
-          // The tables and KindRules say all there is to check of these.
-          case COATING,
+          // The tables (with the parameters they refuse) and KindRules say all there is to check
+          // of these.
+          case WINDOW,
+              PLATE,
+              DETECTOR,
+              COATING,
               INTERFACE,
               POLARIZER,
               ROTATOR,
@@ -134,13 +113,11 @@ final class KindChecks {
         entry == null || !entry.isCatalog() ? Optional.empty() : ThermoOptic.of(entry.name());
     Property line = given.get(Param.TEMPERATURE.word());
     if (thermo.isEmpty()) {
-      sink.report(
-          DiagnosticCode.PARAMETER_NOT_MODELLED,
-          line.range(),
-          "'temperature' in "
-              + who
-              + " is not modelled: "
-              + (entry == null || !entry.isCatalog()
+      KeyReports.notModelled(
+          sink,
+          line,
+          who,
+          (entry == null || !entry.isCatalog()
                   ? "an index written in the spec holds as given"
                   : "catalog entry '" + entry.name() + "' has no published dn/dT in Jonquil")
               + "; a temperature is taken only by the catalog entries "
@@ -172,10 +149,7 @@ final class KindChecks {
   private static void refused(
       Sink sink, String who, Map<String, Property> given, Param param, String why) {
     if (given.containsKey(param.word())) {
-      sink.report(
-          DiagnosticCode.PARAMETER_NOT_MODELLED,
-          given.get(param.word()).range(),
-          "'" + param.word() + "' in " + who + " is not modelled: " + why);
+      KeyReports.notModelled(sink, given.get(param.word()), who, why);
     }
   }
 

@@ -1,6 +1,7 @@
 package jonquil.resolve;
 
 import static jonquil.resolve.ParamSpec.optional;
+import static jonquil.resolve.ParamSpec.refused;
 import static jonquil.resolve.ParamSpec.repeatable;
 import static jonquil.resolve.ParamSpec.required;
 import static jonquil.resolve.Shape.keyed;
@@ -336,10 +337,12 @@ final class KindTables {
                 Param.THEN,
                 ref("medium", Category.MATERIAL),
                 "medium behind the exit face (default: the medium before)"),
-            optional(
+            refused(
                 Param.WEDGE,
                 q("wedge", Dimension.ANGLE, Bounds.NON_NEGATIVE, "0.5 deg"),
-                "wedge angle"),
+                "wedge angle",
+                "Jonquil does not model a wedge (the deviation of the beam and of its ghosts);"
+                    + " give the faces' tilt with 'aoi'"),
             AOI_PARAM,
             PLANE,
             COATING_PARAM,
@@ -437,14 +440,17 @@ final class KindTables {
     put(
         ElementKind.DETECTOR,
         KindRules.NONE,
-        optional(
+        refused(
             Param.APERTURE,
             q("diameter", Dimension.LENGTH, Bounds.POSITIVE, "10 mm"),
-            "active area diameter"),
-        optional(
+            "active area diameter",
+            "a detector takes the whole beam; clipping at its active area is not modelled (place"
+                + " an 'aperture' before it)"),
+        refused(
             Param.RESPONSIVITY,
             q("r", Dimension.RESPONSIVITY, Bounds.POSITIVE, "0.6 A/W"),
-            "responsivity"),
+            "responsivity",
+            "no figure Jonquil computes uses it (there is no photocurrent measure)"),
         DAMAGE_PARAM);
     put(
         ElementKind.DUMP,

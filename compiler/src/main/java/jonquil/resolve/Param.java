@@ -103,7 +103,7 @@ public enum Param {
                         .filter(java.util.Objects::nonNull)
                         .forEach(out::add));
       }
-      s = Set.copyOf(out);
+      s = java.util.Collections.unmodifiableSet(new java.util.TreeSet<>(out));
       slots = s;
     }
     return s;

@@ -15,4 +15,15 @@ public final class InOrder {
   public static <K, V> Map<K, V> copyOf(Map<K, V> m) {
     return Collections.unmodifiableMap(new LinkedHashMap<>(m));
   }
+
+  /** Two entries in the order given (Map.of would iterate them in a per-JVM order). */
+  public static <K, V> Map<K, V> of(K k1, V v1, K k2, V v2) {
+    Map<K, V> m = new LinkedHashMap<>();
+    m.put(k1, v1);
+    m.put(k2, v2);
+    if (m.size() != 2) {
+      throw new IllegalArgumentException("duplicate key: " + k1);
+    }
+    return Collections.unmodifiableMap(m);
+  }
 }

@@ -43,21 +43,28 @@ class EveryParameterMattersTest {
               + " has none of; LightAsANetworkTest shows a Faraday and a reciprocal double pass"
               + " differ");
 
-  /** Parameters refused wherever written: the physics they ask for is not modelled (J410). */
-  static final List<Change> REFUSED =
-      List.of(
-          new Change(
-              "window",
-              "wedge",
-              "material glass; thickness 3 mm",
-              "material glass; thickness 3 mm; wedge 0.5 deg"),
-          new Change(
-              "plate",
-              "wedge",
-              "material glass; thickness 3 mm",
-              "material glass; thickness 3 mm; wedge 0.5 deg"),
-          new Change("detector", "aperture", "", "aperture 3 mm"),
-          new Change("detector", "responsivity", "", "responsivity 0.4 A/W"));
+  /**
+   * A valid declaration of each kind whose table refuses a parameter (the refused one is added to
+   * it); the refused parameters themselves, and why, are read from the kind tables.
+   */
+  static final Map<String, String> REFUSAL_BASES =
+      Map.of("window", "material glass; thickness 3 mm", "plate", "material glass; thickness 3 mm");
+
+  /** Parameters refused wherever written (J410), from the kind tables, each written once. */
+  static final List<Change> REFUSED = new ArrayList<>();
+
+  static {
+    for (ElementKind kind : ElementKind.values()) {
+      for (ParamSpec p : kind.params()) {
+        if (p.refusal().isPresent()) {
+          String base = REFUSAL_BASES.getOrDefault(kind.word(), "");
+          String line = p.name() + " " + AdditionRecipeTest.example(p.shape());
+          REFUSED.add(
+              new Change(kind.word(), p.name(), base, base.isEmpty() ? line : base + "; " + line));
+        }
+      }
+    }
+  }
 
   static final List<Change> CHANGES = new ArrayList<>();
 
@@ -272,14 +279,54 @@ class EveryParameterMattersTest {
   }
 
   @Test
-  void aParameterThatIsNotModelledIsRefusedWhereverWritten() {
+  void aParameterThatIsNotModelledIsRefusedWhereverWrittenWithTheReasonInItsTable() {
+    assertTrue(
+        REFUSED.size() >= 4,
+        "the tables refuse window/plate 'wedge', detector 'aperture' and more");
     for (Change c : REFUSED) {
+      String why = kind(c.kind()).param(c.param()).orElseThrow().refusal().orElseThrow();
       Result r = run(c.kind(), c.after());
       assertTrue(
-          r.diagnostics().stream().anyMatch(d -> d.code().id().equals("J410")),
-          c.kind() + "." + c.param() + " is accepted: " + r.diagnostics());
+          r.diagnostics().stream()
+              .anyMatch(
+                  d ->
+                      d.code().id().equals("J410")
+                          && d.message()
+                              .equals(
+                                  "'"
+                                      + c.param()
+                                      + "' in "
+                                      + c.kind()
+                                      + " 'x' is not modelled: "
+                                      + why)),
+          c.kind() + "." + c.param() + " is not refused with its reason: " + r.diagnostics());
       assertNotEquals(computed(c.kind(), c.before()), computed(c.kind(), c.after()));
     }
+  }
+
+  @Test
+  void anUnknownParameterListsWhatTheKindTakesAndNotWhatItRefuses() {
+    for (String kind : List.of("detector", "window")) {
+      String base = REFUSAL_BASES.getOrDefault(kind, "");
+      Result r = run(kind, base.isEmpty() ? "zzz 1" : base + "; zzz 1");
+      String message =
+          r.diagnostics().stream()
+              .filter(d -> d.code().id().equals("J401"))
+              .findFirst()
+              .orElseThrow(() -> new AssertionError(kind + ": no J401 " + r.diagnostics()))
+              .message();
+      assertTrue(message.contains("; it takes "), message);
+      for (ParamSpec p : kind(kind).params()) {
+        assertEquals(
+            p.taken(),
+            message.contains("'" + p.name() + "'"),
+            kind + "." + p.name() + (p.taken() ? " is not listed: " : " is listed: ") + message);
+      }
+    }
+  }
+
+  private static ElementKind kind(String word) {
+    return ElementKind.byWord(word).orElseThrow();
   }
 
   @Test

@@ -33,6 +33,12 @@ record CliProcess(int exitCode, byte[] out, byte[] err) {
   /** Runs {@code command} as it stands (e.g. through 'sh -c' to set a limit first). */
   static CliProcess run(Path cwd, Map<String, String> env, List<String> command)
       throws IOException, InterruptedException {
+    return run(cwd, env, command, 60);
+  }
+
+  /** Runs {@code command}, failing when it has not finished within {@code seconds}. */
+  static CliProcess run(Path cwd, Map<String, String> env, List<String> command, int seconds)
+      throws IOException, InterruptedException {
     ProcessBuilder builder = new ProcessBuilder(command).directory(cwd.toFile());
     builder.environment().putAll(env);
     Path out = java.nio.file.Files.createTempFile("cli-out", ".bin");
@@ -40,9 +46,10 @@ record CliProcess(int exitCode, byte[] out, byte[] err) {
     try {
       builder.redirectOutput(out.toFile()).redirectError(err.toFile());
       Process process = builder.start();
-      if (!process.waitFor(60, TimeUnit.SECONDS)) {
+      if (!process.waitFor(seconds, TimeUnit.SECONDS)) {
         process.destroyForcibly();
-        throw new AssertionError("the child JVM did not finish within 60 s: " + command);
+        throw new AssertionError(
+            "the child JVM did not finish within " + seconds + " s: " + command);
       }
       return new CliProcess(
           process.exitValue(),

@@ -1,5 +1,6 @@
 package jonquil.ide;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Path;
@@ -109,6 +110,59 @@ class HoverTest {
     String md = hover(bench("seed", 0));
     assertTrue(md.contains(Outcome.CAUTION));
     Golden.check(GOLDEN.resolve("source.md"), md);
+  }
+
+  /** The two-line bench (lines.jonq) with $0 placed before the n-th occurrence of a word. */
+  private static String twoLines(String word, int nth) {
+    String text = Specs.read("lines.jonq");
+    int at = -1;
+    for (int i = 0; i <= nth; i++) {
+      at = text.indexOf(word, at + 1);
+    }
+    return text.substring(0, at) + "$0" + text.substring(at);
+  }
+
+  @Test
+  void aSourceOfSeveralLinesShowsEachLinesOwnFigures() {
+    String md = hover(twoLines("duo", 1));
+    assertTrue(md.contains("### Line 488 nm") && md.contains("### Line 561 nm"), md);
+    // Each line's own stated power (definition of 'line'), not only their 50 mW total.
+    assertTrue(md.contains("| out `out` | 20 mW |") && md.contains("| out `out` | 30 mW |"), md);
+    // Each line's own far-field divergence θ = λ/(π w0) (A. E. Siegman, Lasers, 1986, ch. 17):
+    // 488 nm / (π · 0.5 mm) = 0.3106 mrad, 561 nm / (π · 0.5 mm) = 0.357 mrad.
+    assertTrue(md.contains("0.3106 mrad") && md.contains("0.357 mrad"), md);
+    // Eye safety is each line's own: one set of figures per line, one caution after them all.
+    assertEquals(2, md.split("- hazard class: ", -1).length - 1, md);
+    assertEquals(1, md.split(java.util.regex.Pattern.quote(Outcome.CAUTION), -1).length - 1, md);
+    Golden.check(GOLDEN.resolve("source-lines.md"), md);
+  }
+
+  @Test
+  void anElementOnTheLightOfSeveralLinesShowsEachLinesOwnFigures() {
+    String md = hover(twoLines("dc", 1));
+    // Inside its band the splitter reflects 'ratio' (90 % of 30 mW = 27 mW); outside it, what it
+    // reflected it transmits (90 % of 20 mW = 18 mW): the dichroic rule (definition, README).
+    assertTrue(md.contains("| out `reflected` | 27 mW |"), md);
+    assertTrue(md.contains("| out `through` | 18 mW |"), md);
+    assertTrue(md.contains("out `through` at 488 nm") && md.contains("out `through` at 561 nm"));
+    Golden.check(GOLDEN.resolve("element-lines.md"), md);
+  }
+
+  @Test
+  void aPortOnTheLightOfSeveralLinesShowsEachLinesOwnFigures() {
+    String md = hover(twoLines("through", 1));
+    // 10 % of 30 mW and 90 % of 20 mW leave by 'through' (definition of the dichroic split).
+    assertTrue(md.contains("| out `through` | 3 mW |") && md.contains("| out `through` | 18 mW |"));
+    Golden.check(GOLDEN.resolve("port-lines.md"), md);
+  }
+
+  @Test
+  void aRequirementOnOneLineShowsThatLinesFigures() {
+    String md = hover(twoLines("power at spot", 0));
+    assertTrue(md.contains("### Line 561 nm at `spot`"), md);
+    // 10 % of the 561 nm line's 30 mW passes the dichroic (definition of 'ratio').
+    assertTrue(md.contains("| in | 3 mW |"), md);
+    Golden.check(GOLDEN.resolve("requirement-line.md"), md);
   }
 
   @Test

@@ -38,7 +38,11 @@ class HoverGoldenTest {
           new Case("material-catalog.md", "bench.jonq", "silver", 0),
           new Case("quantity.md", "bench.jonq", "5 kW/cm2", 0),
           new Case("requirement.md", "bench.jonq", "power at spot >= 1.95", 0),
-          new Case("interface.md", "interface.jonq", "$0", 0));
+          new Case("interface.md", "interface.jonq", "$0", 0),
+          new Case("source-lines.md", "lines.jonq", "duo", 1),
+          new Case("element-lines.md", "lines.jonq", "dc", 1),
+          new Case("port-lines.md", "lines.jonq", "through", 1),
+          new Case("requirement-line.md", "lines.jonq", "power at spot", 0));
 
   @TempDir Path dir;
 
