@@ -100,6 +100,7 @@ public final class Checker {
     List<RequirementOutcome> requirements = new ArrayList<>();
     Map<Path, ResolvedModel> models = new LinkedHashMap<>();
     Map<Path, TrainSolution> solutions = new LinkedHashMap<>();
+    Map<Path, Map<Double, TrainSolution>> lineSolutions = new LinkedHashMap<>();
     Map<Path, SourceFile> dataSources = new LinkedHashMap<>();
     for (Path file : files) {
       if (superseded.getAsBoolean()) {
@@ -163,6 +164,7 @@ public final class Checker {
         solution = analysis.solution().orElse(null);
         if (keep && solution != null) {
           solutions.put(root, solution);
+          lineSolutions.put(root, analysis.lines());
         }
       } catch (jonquil.analysis.CheckSuperseded stale) {
         return Optional.empty();
@@ -207,7 +209,8 @@ public final class Checker {
         });
     dataSources.forEach(sources::putIfAbsent);
     return Optional.of(
-        new Result(sources, trees, capped(diagnostics), requirements, models, solutions));
+        new Result(
+            sources, trees, capped(diagnostics), requirements, models, solutions, lineSolutions));
   }
 
   private static List<Diagnostic> capped(Set<Diagnostic> all) {

@@ -15,8 +15,9 @@ import jonquil.syntax.SpecFile;
 /**
  * Everything one check produced: the texts it read, the syntax tree of each spec file among them,
  * its diagnostics (sorted), and the verdict on every requirement, plus the resolved model (with its
- * name tables) and the solved trains of each checked root. CLI formats, reports and the language
- * server all read this one value, so they cannot disagree, and editor answers never parse again.
+ * name tables) and the solved trains of each checked root (and of each of its lines alone, where
+ * its sources carry several). CLI formats, reports and the language server all read this one value,
+ * so they cannot disagree, and editor answers never parse again.
  */
 public record Result(
     Map<Path, SourceFile> files,
@@ -24,7 +25,8 @@ public record Result(
     List<Diagnostic> diagnostics,
     List<RequirementOutcome> requirements,
     Map<Path, ResolvedModel> models,
-    Map<Path, TrainSolution> solutions) {
+    Map<Path, TrainSolution> solutions,
+    Map<Path, Map<Double, TrainSolution>> lineSolutions) {
   public Result {
     files = byPath(files);
     trees = byPath(trees);
@@ -32,6 +34,18 @@ public record Result(
     requirements = List.copyOf(requirements);
     models = byPath(models);
     solutions = byPath(solutions);
+    lineSolutions = byPath(lineSolutions);
+  }
+
+  /** Without each line's own solution (a spec of one line, or a caller that needs none). */
+  public Result(
+      Map<Path, SourceFile> files,
+      Map<Path, SpecFile> trees,
+      List<Diagnostic> diagnostics,
+      List<RequirementOutcome> requirements,
+      Map<Path, ResolvedModel> models,
+      Map<Path, TrainSolution> solutions) {
+    this(files, trees, diagnostics, requirements, models, solutions, Map.of());
   }
 
   /** A result without trees or resolved models, e.g. when nothing could be read. */

@@ -27,12 +27,17 @@ public final class Analyzer {
   public static final double CONSERVATION_TOLERANCE = 1e-9;
 
   /** What analysing one spec gives; no solution when the physics refused the model. */
+  /**
+   * @param lines the trains solved for each laser line alone, shortest first, where the sources
+   *     carry two or more lines (the editor shows each line's figures from them); else empty
+   */
   public record Analysis(
       java.util.Optional<TrainSolution> solution,
       List<RequirementOutcome> outcomes,
-      List<Diagnostic> diagnostics) {
+      List<Diagnostic> diagnostics,
+      Map<Double, TrainSolution> lines) {
     Analysis(TrainSolution solution, List<RequirementOutcome> outcomes, List<Diagnostic> found) {
-      this(java.util.Optional.of(solution), outcomes, found);
+      this(java.util.Optional.of(solution), outcomes, found, Map.of());
     }
   }
 
@@ -73,7 +78,8 @@ public final class Analyzer {
       return new Analysis(
           java.util.Optional.empty(),
           RequirementOutcome.noneEvaluated(model, "not evaluated: " + refused.getMessage()),
-          List.of(refused.diagnostic()));
+          List.of(refused.diagnostic()),
+          Map.of());
     }
   }
 
@@ -179,7 +185,11 @@ public final class Analyzer {
                               + QuantityFormat.format(o.valid().max(), Dimension.LENGTH)
                               + "); its index there is extrapolated")));
     }
-    return new Analysis(solution, outcomes, diagnostics.stream().distinct().toList());
+    return new Analysis(
+        java.util.Optional.of(solution),
+        outcomes,
+        diagnostics.stream().distinct().toList(),
+        LineSolutions.of(model, solve));
   }
 
   /**

@@ -4,14 +4,16 @@ import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.OptionalDouble;
+import java.util.function.Function;
 import jonquil.resolve.ResolvedModel;
 
 /**
  * The trains solved for each laser line alone, for the figures that hold per line (its power, its
  * beam, its polarization, its eye-safety figures) where the full solution adds the lines up. The
- * same solve a requirement 'for line' judges.
+ * same solve a requirement 'for line' judges (the analyzer's cache), done once per check so that
+ * the editor reads them from the {@code Result} and computes no physics of its own.
  */
-public final class LineSolutions {
+final class LineSolutions {
   private LineSolutions() {}
 
   /**
@@ -19,17 +21,16 @@ public final class LineSolutions {
    * that line alone; empty when the model has one line or none (the full solution is that line's).
    * A line whose solve the physics refuses is left out: the full check reports why.
    */
-  public static Map<Double, TrainSolution> of(ResolvedModel model) {
+  static Map<Double, TrainSolution> of(
+      ResolvedModel model, Function<OptionalDouble, TrainSolution> solve) {
     java.util.List<Double> lines = SourceBeams.lines(model);
     if (lines.size() < 2) {
       return Map.of();
     }
-    MaterialModel materials = new MaterialModel(model);
-    ElementOptics optics = new ElementOptics(materials, new SurfaceModel(model, materials));
     Map<Double, TrainSolution> out = new LinkedHashMap<>();
     for (double wl : lines) {
       try {
-        out.put(wl, new Propagator(model, optics, materials).solve(OptionalDouble.of(wl)));
+        out.put(wl, solve.apply(OptionalDouble.of(wl)));
       } catch (UnphysicalModel refused) {
         // Not this line's figures; the check that solved all lines carries the finding.
       }

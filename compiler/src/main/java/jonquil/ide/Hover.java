@@ -88,7 +88,7 @@ final class Hover {
       } else {
         ElementKind kind = s.kind().get();
         var solution = OwningModels.solution(r, model);
-        var lines = LineText.at(model, solution, s.name(), kind);
+        var lines = LineText.at(r, model, solution, s.name(), kind);
         if (kind == ElementKind.SOURCE) {
           model.element(s).ifPresent(e -> lines(md, e));
           coherence(md, model, s.name());
@@ -133,7 +133,7 @@ final class Hover {
         solution.get(),
         key,
         "**Light** leaving it (in the table frame, summed over the lines)");
-    LineText.port(md, model, key);
+    LineText.port(md, r, model, key);
     return new HoverInfo(md.toString().stripTrailing(), range);
   }
 

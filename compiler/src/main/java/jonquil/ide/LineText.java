@@ -3,7 +3,7 @@ package jonquil.ide;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Optional;
-import jonquil.analysis.LineSolutions;
+import jonquil.Result;
 import jonquil.analysis.TrainSolution;
 import jonquil.resolve.ElementKind;
 import jonquil.resolve.ResolvedModel;
@@ -23,12 +23,16 @@ final class LineText {
    * alone; empty when fewer than two are (the totals are then that line's figures).
    */
   static Map<Double, TrainSolution> at(
-      ResolvedModel model, Optional<TrainSolution> solution, String name, ElementKind kind) {
+      Result r,
+      ResolvedModel model,
+      Optional<TrainSolution> solution,
+      String name,
+      ElementKind kind) {
     if (solution.isEmpty()) {
       return Map.of();
     }
     Map<Double, TrainSolution> out = new LinkedHashMap<>();
-    LineSolutions.of(model)
+    OwningModels.lines(r, model)
         .forEach(
             (wavelength, line) -> {
               if (LightText.lit(line, name, kind)) {
@@ -69,9 +73,9 @@ final class LineText {
   }
 
   /** Each line's own light leaving by one port ("element.port"), where two or more lines do. */
-  static void port(StringBuilder md, ResolvedModel model, String key) {
+  static void port(StringBuilder md, Result r, ResolvedModel model, String key) {
     Map<Double, TrainSolution> lines = new LinkedHashMap<>();
-    LineSolutions.of(model)
+    OwningModels.lines(r, model)
         .forEach(
             (wavelength, line) -> {
               if (line.port(key).filter(v -> v.power() > 0).isPresent()) {

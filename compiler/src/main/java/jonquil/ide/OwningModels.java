@@ -3,6 +3,7 @@ package jonquil.ide;
 import java.nio.file.Path;
 import java.util.Comparator;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import jonquil.Result;
 import jonquil.analysis.TrainSolution;
@@ -37,6 +38,14 @@ final class OwningModels {
 
   static Optional<TrainSolution> solution(Result r, ResolvedModel m) {
     return Optional.ofNullable(r.solutions().get(m.root()));
+  }
+
+  /**
+   * Each line's own solution, shortest first, as the check solved it; empty for a model of one
+   * line.
+   */
+  static Map<Double, TrainSolution> lines(Result r, ResolvedModel m) {
+    return r.lineSolutions().getOrDefault(m.root(), Map.of());
   }
 
   /** The syntax tree the check built for a spec file; none for a data file or an unread one. */

@@ -3,7 +3,6 @@ package jonquil.ide;
 import java.nio.file.Path;
 import java.util.Optional;
 import jonquil.Result;
-import jonquil.analysis.LineSolutions;
 import jonquil.analysis.RequirementOutcome;
 import jonquil.analysis.VerdictText;
 import jonquil.diag.Diagnostic;
@@ -111,7 +110,7 @@ final class RequirementText {
         }
         Symbol at = q.at().get().symbol();
         ElementKind kind = at.kind().get();
-        LineSolutions.of(m)
+        OwningModels.lines(r, m)
             .forEach(
                 (wavelength, line) -> {
                   if (ResolvedElement.sameLine(wavelength, q.line().getAsDouble())) {
