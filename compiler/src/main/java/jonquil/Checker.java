@@ -110,6 +110,7 @@ public final class Checker {
       int requirementsBefore = requirements.size();
       ResolvedModel model = null;
       TrainSolution solution = null;
+      Map<Double, TrainSolution> lines = Map.of();
       try {
         SpecLoader loader = new SpecLoader(workspace, parsed);
         boolean loaded = loader.load(root);
@@ -162,9 +163,10 @@ public final class Checker {
         diagnostics.addAll(analysis.diagnostics());
         requirements.addAll(analysis.outcomes());
         solution = analysis.solution().orElse(null);
+        lines = analysis.lines();
         if (keep && solution != null) {
           solutions.put(root, solution);
-          lineSolutions.put(root, analysis.lines());
+          lineSolutions.put(root, lines);
         }
       } catch (jonquil.analysis.CheckSuperseded stale) {
         return Optional.empty();
@@ -173,6 +175,7 @@ public final class Checker {
         // Fail closed: the file's requirements stay in the summary, none of them judged.
         requirements.subList(requirementsBefore, requirements.size()).clear();
         solution = null;
+        lines = Map.of();
         if (model != null) {
           requirements.addAll(
               RequirementOutcome.noneEvaluated(
@@ -194,7 +197,8 @@ public final class Checker {
             read.putIfAbsent(root, own.source());
           }
           onRoot.accept(
-              new CheckedRoot(root, Optional.ofNullable(model), Optional.ofNullable(solution)));
+              new CheckedRoot(
+                  root, Optional.ofNullable(model), Optional.ofNullable(solution), lines));
         }
       }
     }

@@ -28,14 +28,55 @@ public final class SafetySummary {
       Outcome<jonquil.safety.MaximumPermissibleExposure> mpe,
       Outcome<jonquil.safety.MaximumPermissibleExposure> skinMpe,
       Outcome<jonquil.safety.MaximumPermissibleExposure> ansiMpe,
+      Outcome<jonquil.safety.MaximumPermissibleExposure> directiveMpe,
       Outcome<Double> nohd,
       Outcome<jonquil.safety.OpticalDensity> eyewear,
       double exposureTime,
-      String exposureTimeReason) {}
+      String exposureTimeReason,
+      List<SourceSafety> lines) {
+    public SourceSafety {
+      lines = List.copyOf(lines);
+    }
+
+    SourceSafety withLines(List<SourceSafety> own) {
+      return new SourceSafety(
+          source,
+          wavelength,
+          hazardClass,
+          mpe,
+          skinMpe,
+          ansiMpe,
+          directiveMpe,
+          nohd,
+          eyewear,
+          exposureTime,
+          exposureTimeReason,
+          own);
+    }
+  }
 
   private SafetySummary() {}
 
-  public static List<SourceSafety> sources(ResolvedModel model, TrainSolution s) {
+  /**
+   * The figures of every source at its exit; a source whose light is of several lines also lists
+   * each line's own figures (from {@code lines}, each line solved alone), since the figures of the
+   * summed light, taken at its strongest line's wavelength, are no line's.
+   */
+  public static List<SourceSafety> sources(
+      ResolvedModel model, TrainSolution s, Map<Double, TrainSolution> lines) {
+    List<SourceSafety> out = new ArrayList<>();
+    for (SourceSafety total : sources(model, s)) {
+      List<SourceSafety> own = new ArrayList<>();
+      lines.values().stream()
+          .flatMap(line -> sources(model, line).stream())
+          .filter(l -> l.source().equals(total.source()))
+          .forEach(own::add);
+      out.add(own.size() < 2 ? total : total.withLines(own));
+    }
+    return out;
+  }
+
+  private static List<SourceSafety> sources(ResolvedModel model, TrainSolution s) {
     List<SourceSafety> out = new ArrayList<>();
     for (ResolvedElement e : model.elements().values()) {
       if (e.kind() != ElementKind.SOURCE) {
@@ -59,10 +100,12 @@ public final class SafetySummary {
               jonquil.safety.OcularMpe.at(emission, t),
               jonquil.safety.SkinMpe.at(emission, t),
               jonquil.safety.ansi.AnsiOcularMpe.at(emission, t),
+              jonquil.safety.directive.DirectiveEyeLimit.at(emission, t),
               SafetyModel.nohd(SafetyStandard.IEC_60825_1, e, exit.get()),
               SafetyModel.eyewear(SafetyStandard.IEC_60825_1, wl, exit.get(), t),
               t,
-              d.reason()));
+              d.reason(),
+              List.of()));
     }
     return out;
   }

@@ -209,7 +209,8 @@ final class CheckCommand implements Callable<Integer> {
       case JSON ->
           perFile.put(
               checked.file(),
-              JsonReport.valuesEntry(ValuesJson.of(projectRoot, checked.file(), model, solution)));
+              JsonReport.valuesEntry(
+                  ValuesJson.of(projectRoot, checked.file(), model, solution, checked.lines())));
       case SARIF -> {} // SARIF carries findings only
     }
   }

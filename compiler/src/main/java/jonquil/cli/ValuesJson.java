@@ -38,6 +38,16 @@ final class ValuesJson {
 
   /** The values of one checked root file ({@code model} null when it has none). */
   static JsonObject of(Path root, Path file, ResolvedModel model, TrainSolution s) {
+    return of(root, file, model, s, java.util.Map.of());
+  }
+
+  /** As above, with each line's own solution where the sources carry several lines. */
+  static JsonObject of(
+      Path root,
+      Path file,
+      ResolvedModel model,
+      TrainSolution s,
+      java.util.Map<Double, TrainSolution> lines) {
     JsonObject o = new JsonObject();
     o.addProperty("path", PathText.relative(root, file));
     JsonArray ports = new JsonArray();
@@ -133,7 +143,7 @@ final class ValuesJson {
     o.add("conservation", conservation);
     JsonArray safety = new JsonArray();
     if (model != null) {
-      for (SafetySummary.SourceSafety src : SafetySummary.sources(model, s)) {
+      for (SafetySummary.SourceSafety src : SafetySummary.sources(model, s, lines)) {
         safety.add(safety(src));
       }
     }
@@ -150,6 +160,7 @@ final class ValuesJson {
     j.add("hazard_class", outcome(s.hazardClass(), c -> new JsonPrimitive(c.label())));
     j.add("mpe", outcome(s.mpe(), ValuesJson::mpe));
     j.add("mpe_ansi_z136_1", outcome(s.ansiMpe(), ValuesJson::mpe));
+    j.add("mpe_directive_2006_25", outcome(s.directiveMpe(), ValuesJson::mpe));
     j.add("skin_mpe", outcome(s.skinMpe(), ValuesJson::mpe));
     j.add("nohd_m", outcome(s.nohd(), ValuesJson::number));
     j.add(
@@ -162,6 +173,11 @@ final class ValuesJson {
               o.add("at_beam_peak", number(od.atPeak()));
               return o;
             }));
+    if (!s.lines().isEmpty()) {
+      JsonArray lines = new JsonArray();
+      s.lines().forEach(l -> lines.add(safety(l)));
+      j.add("lines", lines);
+    }
     j.addProperty("caution", jonquil.safety.Outcome.CAUTION);
     return j;
   }

@@ -51,7 +51,7 @@ final class SafetyText {
     Optional<SafetySummary.SourceSafety> found =
         solution.flatMap(
             s ->
-                SafetySummary.sources(model, s).stream()
+                SafetySummary.sources(model, s, java.util.Map.of()).stream()
                     .filter(x -> x.source().equals(source))
                     .findFirst());
     if (found.isEmpty()) {

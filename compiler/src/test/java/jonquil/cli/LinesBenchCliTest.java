@@ -29,6 +29,54 @@ class LinesBenchCliTest {
   }
 
   @Test
+  void jsonGivesEachLinesOwnSafetyFiguresBesideTheSummedOnes() {
+    CliRun run = CliRun.of(Repo.root(), "check", "--format", "json", BENCH);
+    assertEquals(0, run.exitCode(), run.err());
+    JsonObject engine =
+        JsonParser.parseString(run.out())
+            .getAsJsonObject()
+            .getAsJsonArray("values")
+            .get(0)
+            .getAsJsonObject()
+            .getAsJsonArray("safety")
+            .get(0)
+            .getAsJsonObject();
+    var lines = engine.getAsJsonArray("lines");
+    assertEquals(3, lines.size(), engine.toString());
+    // Each line alone, in wavelength order: 488, 561 and 808 nm (the source's own lines, by
+    // definition of the bench).
+    assertEquals(488e-9, lines.get(0).getAsJsonObject().get("wavelength_m").getAsDouble(), 1e-15);
+    assertEquals(808e-9, lines.get(2).getAsJsonObject().get("wavelength_m").getAsDouble(), 1e-15);
+    // 6 mW at 488 nm is above the 5 mW Class 3R limit of the visible: Class 3B (IEC
+    // 60825-1:2014, Table 7, from memory), whatever the other lines add.
+    assertEquals(
+        "3B",
+        lines.get(0).getAsJsonObject().getAsJsonObject("hazard_class").get("value").getAsString());
+    // The ocular MPE differs per line: 25.46 W/m2 in the visible for 0.25 s (18 t^0.75 / t,
+    // IEC 60825-1:2014 Table A.1), lower at 808 nm for its 10 s default duration.
+    double visible =
+        lines
+            .get(0)
+            .getAsJsonObject()
+            .getAsJsonObject("mpe")
+            .getAsJsonObject("value")
+            .get("irradiance_W_m2")
+            .getAsDouble();
+    double infrared =
+        lines
+            .get(2)
+            .getAsJsonObject()
+            .getAsJsonObject("mpe")
+            .getAsJsonObject("value")
+            .get("irradiance_W_m2")
+            .getAsDouble();
+    // 18 t^0.75 J/m2 over t = 0.25 s (IEC 60825-1:2014 Table A.1, 400-700 nm, from memory).
+    assertEquals(18 * Math.pow(0.25, 0.75) / 0.25, visible, 1e-9);
+    assertTrue(infrared < visible, infrared + " vs " + visible);
+    assertTrue(engine.has("mpe_directive_2006_25"), engine.toString());
+  }
+
+  @Test
   void jsonCarriesEachLinesValueAndValidates() {
     CliRun run = CliRun.of(Repo.root(), "check", "--format", "json", BENCH);
     assertEquals(0, run.exitCode(), run.err());
