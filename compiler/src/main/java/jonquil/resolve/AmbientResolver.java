@@ -100,7 +100,7 @@ final class AmbientResolver {
             "the ambient is 'air' or 'vacuum', not '"
                 + d.name().text()
                 + "'"
-                + close.map(c -> "; did you mean '" + c + "'?").orElse(""),
+                + Suggest.hintOr(close, ""),
             Resolver.replacement(sink.file, d.name().range(), d.name().text(), close));
         yield Ambient.DEFAULT;
       }

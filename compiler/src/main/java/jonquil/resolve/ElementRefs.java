@@ -85,9 +85,7 @@ record ElementRefs(Sink sink, Scope scope) {
               + " has no port '"
               + port
               + "'"
-              + close
-                  .map(x -> "; did you mean '" + x + "'?")
-                  .orElse("; its ports are " + ShapeMatcher.quoteList(ports)),
+              + Suggest.hintOr(close, "; its ports are " + ShapeMatcher.quoteList(ports)),
           Resolver.replacement(sink.file, ref.port().get().range(), port, close));
       return Optional.empty();
     }

@@ -25,9 +25,7 @@ final class KeyReports {
             + key.text()
             + "' is not "
             + notWhat
-            + close
-                .map(n -> "; did you mean '" + n + "'?")
-                .orElse("; it takes " + ShapeMatcher.quoteList(takes)),
+            + Suggest.hintOr(close, "; it takes " + ShapeMatcher.quoteList(takes)),
         Resolver.replacement(sink.file, key.range(), key.text(), close));
   }
 

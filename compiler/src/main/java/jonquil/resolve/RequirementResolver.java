@@ -240,15 +240,12 @@ final class RequirementResolver {
           "'"
               + written.text()
               + "' is not a quantity a requirement can bound"
-              + close
-                  .map(x -> "; did you mean '" + x + "'?")
-                  .orElse(
-                      "; the measures are "
-                          + String.join(
-                              ", ",
-                              java.util.Arrays.stream(Measure.values())
-                                  .map(Measure::word)
-                                  .toList())),
+              + Suggest.hintOr(
+                  close,
+                  "; the measures are "
+                      + String.join(
+                          ", ",
+                          java.util.Arrays.stream(Measure.values()).map(Measure::word).toList())),
           Resolver.replacement(sink.file, written.range(), written.text(), close));
     }
     return m;

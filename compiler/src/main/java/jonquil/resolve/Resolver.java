@@ -188,9 +188,8 @@ public final class Resolver {
             "unknown kind '"
                 + decl.kind().text()
                 + "'"
-                + close
-                    .map(k -> "; did you mean '" + k + "'?")
-                    .orElse("; the kinds are " + String.join(", ", ElementKind.words())),
+                + Suggest.hintOr(
+                    close, "; the kinds are " + String.join(", ", ElementKind.words())),
             replacement(sink.file, decl.kind().range(), decl.kind().text(), close));
       }
       Category category = kind.map(ElementKind::category).orElse(Category.OPTIC);

@@ -28,7 +28,12 @@ public final class Suggest {
 
   /** "; did you mean 'x'?" or nothing. */
   public static String hint(String word, Collection<String> candidates) {
-    return closest(word, candidates).map(s -> "; did you mean '" + s + "'?").orElse("");
+    return hintOr(closest(word, candidates), "");
+  }
+
+  /** "; did you mean 'x'?" for the closest name found, else {@code otherwise} (e.g. the list). */
+  public static String hintOr(java.util.Optional<String> close, String otherwise) {
+    return close.map(s -> "; did you mean '" + s + "'?").orElse(otherwise);
   }
 
   /** Optimal string alignment distance (Levenshtein plus adjacent transpositions). */

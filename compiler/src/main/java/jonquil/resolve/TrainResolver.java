@@ -280,9 +280,7 @@ final class TrainResolver {
                   + " face '"
                   + face
                   + "'"
-                  + close
-                      .map(c -> "; did you mean '" + c + "'?")
-                      .orElse("; its faces are " + ShapeMatcher.quoteList(faces)),
+                  + Suggest.hintOr(close, "; its faces are " + ShapeMatcher.quoteList(faces)),
           Resolver.replacement(sink.file, at, face, close));
       return Optional.empty();
     }

@@ -587,9 +587,7 @@ final class ValueChecker {
           "'"
               + name
               + "' is neither a declared material nor in the material catalog"
-              + close
-                  .map(s -> "; did you mean '" + s + "'?")
-                  .orElse("; the catalog has " + String.join(", ", catalog)),
+              + Suggest.hintOr(close, "; the catalog has " + String.join(", ", catalog)),
           Resolver.replacement(sink.file, ref.name().range(), name, close));
       return Optional.empty();
     }

@@ -136,9 +136,7 @@ final class ViewingTermsResolver {
           "the viewing is one of "
               + String.join(", ", Viewing.words())
               + (written == null ? "" : "; '" + written + "' is not")
-              + Suggest.closest(written == null ? "" : written, Viewing.words())
-                  .map(c -> "; did you mean '" + c + "'?")
-                  .orElse(""));
+              + Suggest.hint(written == null ? "" : written, Viewing.words()));
     }
     return v;
   }
