@@ -17,14 +17,6 @@ public record CodeActionInfo(
     Diagnostic diagnostic,
     Map<Path, List<Edit>> edits) {
   public CodeActionInfo {
-    edits =
-        jonquil.source.InOrder.copyOf(
-            edits.entrySet().stream()
-                .collect(
-                    java.util.stream.Collectors.toMap(
-                        Map.Entry::getKey,
-                        e -> List.copyOf(e.getValue()),
-                        (a, b) -> a,
-                        java.util.LinkedHashMap::new)));
+    edits = jonquil.source.InOrder.copyOfLists(edits);
   }
 }

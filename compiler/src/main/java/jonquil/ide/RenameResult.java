@@ -11,15 +11,7 @@ import jonquil.diag.Edit;
  */
 public record RenameResult(Map<Path, List<Edit>> edits, String error) {
   public RenameResult {
-    edits =
-        jonquil.source.InOrder.copyOf(
-            edits.entrySet().stream()
-                .collect(
-                    java.util.stream.Collectors.toMap(
-                        Map.Entry::getKey,
-                        e -> List.copyOf(e.getValue()),
-                        (a, b) -> a,
-                        java.util.LinkedHashMap::new)));
+    edits = jonquil.source.InOrder.copyOfLists(edits);
   }
 
   static RenameResult refused(String error) {

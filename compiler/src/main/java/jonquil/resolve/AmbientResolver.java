@@ -5,7 +5,6 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import jonquil.diag.DiagnosticCode;
-import jonquil.diag.Related;
 import jonquil.optics.material.CiddorAir;
 import jonquil.source.TextRange;
 import jonquil.syntax.Arg;
@@ -35,40 +34,15 @@ final class AmbientResolver {
 
   /** The ambient of the root file; its {@code ambient} lines are checked here. */
   static Ambient resolve(List<Declaration> declarations, Sink sink, Scope scope) {
-    Ambient result = Ambient.DEFAULT;
-    Declaration first = null;
-    for (Declaration d : declarations) {
-      if (!isAmbient(d)) {
-        continue;
-      }
-      if (first != null) {
-        var diag =
-            sink.report(
-                DiagnosticCode.DUPLICATE_PARAMETER,
-                d.kind().range(),
-                "the ambient is stated twice; keep one 'ambient' line");
-        sink.replace(
-            diag, diag.withRelated(new Related(sink.file, first.range(), "first stated here")));
-        continue;
-      }
-      first = d;
-      result = one(d, sink, scope);
-    }
-    return result;
+    return BenchLines.once(declarations, sink, WORD, "the ambient is stated", "first stated here")
+        .map(d -> one(d, sink, scope))
+        .orElse(Ambient.DEFAULT);
   }
 
   /** An 'ambient' in a used file would set another bench's medium, so it is refused there. */
   static void refuseInLibrary(List<Declaration> declarations, Sink sink, String usedBy) {
-    for (Declaration d : declarations) {
-      if (isAmbient(d)) {
-        sink.report(
-            DiagnosticCode.USED_FILE_HAS_TRAIN,
-            d.range(),
-            "this file is used as a part library by '"
-                + usedBy
-                + "', so it may only declare parts; state the ambient in the main spec");
-      }
-    }
+    BenchLines.refuseInLibrary(
+        declarations, sink, usedBy, WORD, "state the ambient in the main spec");
   }
 
   private static Ambient one(Declaration d, Sink sink, Scope scope) {

@@ -36,23 +36,17 @@ public record MaximumPermissibleExposure(
 
   /** The same MPE averaged over another aperture and with its governing effect named. */
   public MaximumPermissibleExposure with(double aperture, String governing) {
-    return new MaximumPermissibleExposure(
-        radiantExposure,
-        irradiance,
-        exposureDuration,
-        aperture,
-        singlePulse,
-        averagePower,
-        repetitivePulse,
-        limitingCriterion,
-        table,
-        governing);
+    return copy(aperture, table, governing);
   }
 
   /**
    * The same MPE over another aperture, cited from {@code cited}: another standard's restatement.
    */
   public MaximumPermissibleExposure restated(double aperture, String cited) {
+    return copy(aperture, cited, governingLimit);
+  }
+
+  private MaximumPermissibleExposure copy(double aperture, String cited, String governing) {
     return new MaximumPermissibleExposure(
         radiantExposure,
         irradiance,
@@ -63,7 +57,7 @@ public record MaximumPermissibleExposure(
         repetitivePulse,
         limitingCriterion,
         cited,
-        governingLimit);
+        governing);
   }
 
   /** The caution that goes with every MPE. */

@@ -2,6 +2,7 @@ package jonquil.source;
 
 import java.util.Collections;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 
 /**
@@ -14,6 +15,13 @@ public final class InOrder {
 
   public static <K, V> Map<K, V> copyOf(Map<K, V> m) {
     return Collections.unmodifiableMap(new LinkedHashMap<>(m));
+  }
+
+  /** A copy in the same order whose values are lists copied too: edits per file, for example. */
+  public static <K, V> Map<K, List<V>> copyOfLists(Map<K, List<V>> m) {
+    Map<K, List<V>> out = new LinkedHashMap<>();
+    m.forEach((k, v) -> out.put(k, List.copyOf(v)));
+    return Collections.unmodifiableMap(out);
   }
 
   /** Two entries in the order given (Map.of would iterate them in a per-JVM order). */
