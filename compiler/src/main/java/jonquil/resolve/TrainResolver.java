@@ -140,8 +140,11 @@ final class TrainResolver {
       }
       if (first && ref.port().isPresent()) {
         String word = ref.port().get().text();
-        if (!kind.exits().contains(word) && kind.exits().size() > kind.ports().size()) {
-          // A path may start at the returning light's exits too: suggest among all of them.
+        if (!kind.exits().contains(word)
+            && kind.exits().size() > kind.ports().size()
+            && (kind.ports().size() < 2 || Suggest.closest(word, kind.ports()).isEmpty())) {
+          // A path may start at the returning light's exits too: suggest among all of them
+          // (a word close to a forward port keeps the port's own message).
           badStart(ref, s, kind, word);
           inThisPath.add(s);
           continue;
