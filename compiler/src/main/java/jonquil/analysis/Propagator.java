@@ -230,7 +230,8 @@ final class Propagator {
    * the path backwards, entering each element before it by the face its light had left by, to the
    * path's start (a source, or the port a branch left by). A {@code ghost} is light no path names
    * (a first pass's backward ghost or port): it takes the same way back, but the elements it
-   * crosses do not list it among their passes, which are the ones the spec writes.
+   * crosses neither list it among their passes nor add it to the light incident on them (their
+   * exposure, hover and Jones report read the passes the spec writes).
    */
   private record Retrace(ResolvedTrain.BeamPath path, int at, List<TracedBeam> beams, boolean ghost)
       implements Work {}
@@ -464,8 +465,9 @@ final class Propagator {
     for (String port : element.kind().exits()) {
       atPorts.put(port, new ArrayList<>());
     }
-    PortValue in = value(name, "", entry.symbol(), entry.range(), beams);
-    incident.merge(name, in, Propagator::plus);
+    if (!ghost) {
+      incident.merge(name, value(name, "", entry.symbol(), entry.range(), beams), Propagator::plus);
+    }
     ElementOptics.FaceFrames faces =
         frames.getOrDefault(
             entry.symbol(),
