@@ -192,6 +192,15 @@ final class ElementOptics {
    */
   record FaceFrames(BeamFrame in, BeamFrame out) {}
 
+  /**
+   * The fraction {@code r} of a beam that a face sends straight back, as a mirror at normal
+   * incidence leaves it: in the mirrored frame with its x axis reversed (the frame a return pass
+   * reads, {@link #respondFrom}), so a ghost passes back through a polarizer as it came.
+   */
+  private static TracedBeam straightBack(TracedBeam in, double r) {
+    return in.with(mirrored(in.light()).scaled(r), in.frame().mirrored());
+  }
+
   /** Light described with its x axis reversed: M·Φ·M with M = diag(−1, 1). */
   private static Coherency mirrored(Coherency c) {
     return Coherency.of(c.xx(), c.yy(), -c.xyRe(), -c.xyIm());
@@ -341,10 +350,7 @@ final class ElementOptics {
                 "reflected",
                 reflected.with(reflected.light().scaled(t * t))),
             List.of(
-                new Ghost(
-                    "entry face reflection",
-                    in.with(in.light().scaled(face.rs()), in.frame().reflect(0, 0)),
-                    true),
+                new Ghost("entry face reflection", straightBack(in, face.rs()), true),
                 new Ghost(
                     "exit face reflections",
                     in.with(in.light().scaled(exitLoss / Math.max(in.power(), Double.MIN_VALUE))),
@@ -441,7 +447,7 @@ final class ElementOptics {
   private static Response betweenFaces(TracedBeam in, Jones j, SurfaceModel.Powers face) {
     double[] pair = plate(face.rs(), face.ts(), face.rs(), face.ts(), 1);
     TracedBeam out = in.with(in.light().transform(j).scaled(pair[0]));
-    TracedBeam back = in.with(in.light().scaled(pair[1]), in.frame().reflect(0, 0));
+    TracedBeam back = straightBack(in, pair[1]);
     return Response.balance(
             in, Map.of("out", out), List.of(new Ghost("face reflections", back, true)))
         .withJones(Map.of("out", j.scaled(Math.sqrt(pair[0]))));
@@ -540,7 +546,7 @@ final class ElementOptics {
             .orElse(1.0);
     double[] pair = plate(s1.rs(), s1.ts(), s1.rs(), s1.ts(), tau);
     TracedBeam out = in.with(in.light().scaled(pair[0]));
-    TracedBeam back = in.with(in.light().scaled(pair[1]), in.frame().reflect(0, 0));
+    TracedBeam back = straightBack(in, pair[1]);
     return Response.balance(
         in, Map.of("out", out), List.of(new Ghost("surface reflections", back, true)));
   }

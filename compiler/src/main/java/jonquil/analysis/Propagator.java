@@ -51,6 +51,9 @@ final class Propagator {
   /** Light that ran back along its paths to a source's output, by source, in the table frame. */
   private final Map<String, Coherency> returned = new LinkedHashMap<>();
 
+  /** Light each element sent heading back on its first pass (backward ghosts and ports), watts. */
+  private final Map<String, Double> sentBack = new LinkedHashMap<>();
+
   private final Map<ResolvedTrain.Entry, int[]> visits = new HashMap<>();
   private final java.util.Set<Symbol> entered = new java.util.HashSet<>();
   private final List<ElementPass> passes = new ArrayList<>();
@@ -160,6 +163,7 @@ final class Propagator {
         jones,
         surfaces,
         returned,
+        sentBack,
         passes,
         meetings(),
         unsettled.stream().map(ResolvedTrain.Entry::range).toList());
@@ -226,9 +230,12 @@ final class Propagator {
   /**
    * Light heading back out of the front of the element at step {@code at} of {@code path}: it runs
    * the path backwards, entering each element before it by the face its light had left by, to the
-   * path's start (a source, or the port a branch left by).
+   * path's start (a source, or the port a branch left by). A {@code ghost} is light no path names
+   * (a first pass's backward ghost or port): it takes the same way back, but the elements it
+   * crosses neither list it among their passes nor add it to the light incident on them (their
+   * exposure, hover and Jones report read the passes the spec writes).
    */
-  private record Retrace(ResolvedTrain.BeamPath path, int at, List<TracedBeam> beams)
+  private record Retrace(ResolvedTrain.BeamPath path, int at, List<TracedBeam> beams, boolean ghost)
       implements Work {}
 
   /** Go on along {@code path} from step {@code from}, with {@code last} the element before it. */
@@ -259,7 +266,7 @@ final class Propagator {
         }
         boolean inline = i + 1 < path.steps().size();
         List<Work> sideways = new ArrayList<>();
-        beams = enter(element.get(), entry, beams, sideways, inline);
+        beams = enter(element.get(), entry, beams, sideways, inline, false);
         last = new Exit(entry.symbol(), entry.exitPort(), entry.range());
         if (!inline || beams.isEmpty()) {
           pushAll(stack, sideways, null);
@@ -378,18 +385,7 @@ final class Propagator {
       }
       r.ports()
           .forEach((port, beam) -> atPorts.computeIfAbsent(port, k -> new ArrayList<>()).add(beam));
-      for (Ghost g : r.ghosts()) {
-        totals[2] += g.beam().power();
-        stray.add(
-            new StrayBeam(
-                name,
-                g.label() + " of '" + name + "'" + (g.backward() ? ", heading back" : ""),
-                g.beam().power(),
-                g.backward(),
-                placed.symbol().file(),
-                placed.range(),
-                java.util.OptionalDouble.of(b.wavelength())));
-      }
+      ghosts(placed.symbol(), placed.range(), r, b.wavelength(), totals, sideways, true);
     }
     if (jonquil.optics.beam.Clipping.significant(1 - clippedMost)) {
       clips.add(new Clip(name, clippedMost, placed.symbol().file(), placed.range()));
@@ -420,6 +416,11 @@ final class Propagator {
         Vec3 arriving = beams.isEmpty() ? Vec3.Z : beams.get(0).frame().k();
         boolean backward =
             e.getValue().stream().anyMatch(b -> b.frame().k().dot(arriving) < -0.999);
+        if (backward) {
+          // Straight back (a window or plate at normal incidence): back through the train.
+          sideways.add(headingBack(placed.symbol(), e.getValue()));
+          continue;
+        }
         sideways.add(
             new Leak(
                 new StrayBeam(
@@ -444,7 +445,8 @@ final class Propagator {
       ResolvedTrain.Entry entry,
       List<TracedBeam> beams,
       List<Work> sideways,
-      boolean inline) {
+      boolean inline,
+      boolean ghost) {
     String name = entry.symbol().name();
     double arriving = beams.stream().mapToDouble(TracedBeam::power).sum();
     int[] count = visits.computeIfAbsent(entry, k -> new int[1]);
@@ -468,10 +470,11 @@ final class Propagator {
     for (String port : element.kind().exits()) {
       atPorts.put(port, new ArrayList<>());
     }
-    PortValue in = value(name, "", entry.symbol(), entry.range(), beams);
-    incident.merge(name, in, Propagator::plus);
-    if (entry.face().equals("front")) {
-      arrive(name, beams); // with the first pass: light by another face runs another way
+    if (!ghost) {
+      incident.merge(name, value(name, "", entry.symbol(), entry.range(), beams), Propagator::plus);
+      if (entry.face().equals("front")) {
+        arrive(name, beams); // with the first pass: light by another face runs another way
+      }
     }
     ElementOptics.FaceFrames faces =
         frames.getOrDefault(
@@ -492,31 +495,22 @@ final class Propagator {
       absorbed += r.absorbed();
       r.ports()
           .forEach((port, beam) -> atPorts.computeIfAbsent(port, k -> new ArrayList<>()).add(beam));
-      for (Ghost g : r.ghosts()) {
-        totals[2] += g.beam().power();
-        stray.add(
-            new StrayBeam(
-                name,
-                g.label() + " of '" + name + "'" + (g.backward() ? ", heading back" : ""),
-                g.beam().power(),
-                g.backward(),
-                entry.symbol().file(),
-                entry.range(),
-                OptionalDouble.of(b.wavelength())));
-      }
+      ghosts(entry.symbol(), entry.range(), r, b.wavelength(), totals, sideways, false);
     }
     for (Map.Entry<String, List<TracedBeam>> e : atPorts.entrySet()) {
       double p = e.getValue().stream().mapToDouble(TracedBeam::power).sum();
       byPort.merge(e.getKey(), p, Double::sum);
       record(name, e.getKey(), at, e.getValue());
     }
-    passes.add(
-        passOf(
-            name,
-            entry.face(),
-            entry.face().equals("back") || entry.face().equals("reflected"),
-            beams,
-            atPorts));
+    if (!ghost) {
+      passes.add(
+          passOf(
+              name,
+              entry.face(),
+              entry.face().equals("back") || entry.face().equals("reflected"),
+              beams,
+              atPorts));
+    }
     for (Map.Entry<String, List<TracedBeam>> e : atPorts.entrySet()) {
       if (inline && e.getKey().equals(entry.exitPort())) {
         continue;
@@ -530,7 +524,7 @@ final class Propagator {
       if (next != null) {
         sideways.add(next.with(e.getValue()));
       } else if (e.getKey().equals("front") && placement != null) {
-        sideways.add(new Retrace(placement.path(), placement.from(), e.getValue()));
+        sideways.add(new Retrace(placement.path(), placement.from(), e.getValue(), ghost));
       } else {
         double p = e.getValue().stream().mapToDouble(TracedBeam::power).sum();
         sideways.add(
@@ -576,6 +570,9 @@ final class Propagator {
           c = c.plus(b.light().inFrameRotatedBy(b.frame().tableAngle()));
         }
         returned.merge(el.symbol().name(), c, Coherency::plus);
+        // One line's light (a ghost of that line) keeps its wavelength, for the note's by-line
+        // list.
+        double[] lines = beams.stream().mapToDouble(TracedBeam::wavelength).distinct().toArray();
         stray.add(
             new StrayBeam(
                 el.symbol().name(),
@@ -583,7 +580,8 @@ final class Propagator {
                 p,
                 true,
                 el.symbol().file(),
-                el.range()));
+                el.range(),
+                lines.length == 1 ? OptionalDouble.of(lines[0]) : OptionalDouble.empty()));
         return;
       }
       String face = el.exitPort().equals("reflected") ? "reflected" : "back";
@@ -591,7 +589,7 @@ final class Propagator {
         stray.add(backLeak(el.symbol(), el.range(), beams));
         return;
       }
-      reenter(el.symbol(), face, el.range(), beams, stack);
+      reenter(el.symbol(), face, el.range(), beams, back.ghost(), stack);
       return;
     }
     if (beams.isEmpty() || path.branchFrom().isEmpty()) {
@@ -605,7 +603,7 @@ final class Propagator {
           case "side" -> "side";
           default -> "front";
         };
-    reenter(from.element(), face, from.range(), beams, stack);
+    reenter(from.element(), face, from.range(), beams, back.ghost(), stack);
   }
 
   /**
@@ -617,6 +615,7 @@ final class Propagator {
       String face,
       jonquil.source.TextRange range,
       List<TracedBeam> beams,
+      boolean ghost,
       Deque<Work> stack) {
     Optional<ResolvedElement> element = model.element(symbol);
     if (element.isEmpty()) {
@@ -629,8 +628,58 @@ final class Propagator {
         new ResolvedTrain.Entry(symbol, face, kind.exitFor(face, kind.ports().get(0)), range),
         beams,
         sideways,
-        false);
+        false,
+        ghost);
     pushAll(stack, sideways, null);
+  }
+
+  /**
+   * Books the ghosts of one element's response to one beam. On a first pass ({@code traced}) a
+   * backward ghost runs back through the train ({@link #headingBack}); a forward ghost, and every
+   * ghost of light meeting an element again (second order: a reverse pass that a face reflects
+   * forward again), is booked as stray where it arises.
+   */
+  private void ghosts(
+      Symbol symbol,
+      jonquil.source.TextRange range,
+      Response r,
+      double wavelength,
+      double[] totals,
+      List<Work> sideways,
+      boolean traced) {
+    String name = symbol.name();
+    for (Ghost g : r.ghosts()) {
+      totals[2] += g.beam().power();
+      if (traced && g.backward()) {
+        sideways.add(headingBack(symbol, List.of(g.beam())));
+        continue;
+      }
+      stray.add(
+          new StrayBeam(
+              name,
+              g.label() + " of '" + name + "'" + (g.backward() ? ", heading back" : ""),
+              g.beam().power(),
+              g.backward(),
+              symbol.file(),
+              range,
+              OptionalDouble.of(wavelength)));
+    }
+  }
+
+  /**
+   * Light a first pass sends straight back out of the element's entry face, which no path names:
+   * where a path starts at the element's {@code front} it goes on along it; otherwise it runs back
+   * along the path that placed the element, through the real elements before it, to the source's
+   * output, a dump, or a port no path follows (see {@link #retrace}).
+   */
+  private Work headingBack(Symbol symbol, List<TracedBeam> beams) {
+    sentBack.merge(symbol.name(), beams.stream().mapToDouble(TracedBeam::power).sum(), Double::sum);
+    Resume next = continuations.get(symbol.name() + ".front");
+    if (next != null) {
+      return next.with(beams);
+    }
+    Resume placement = placements.get(symbol);
+    return new Retrace(placement.path(), placement.from(), beams, true);
   }
 
   private static StrayBeam backLeak(

@@ -21,6 +21,7 @@ public record TrainSolution(
     Map<String, PortJones> jones,
     Map<String, SurfaceAtAngle> surfaces,
     Map<String, jonquil.optics.Coherency> returned,
+    Map<String, Double> sentBack,
     List<ElementPass> passes,
     Map<String, List<PortArrival>> arrivals,
     List<jonquil.source.TextRange> unsettledLoops) {
@@ -38,10 +39,9 @@ public record TrainSolution(
     stray = List.copyOf(stray);
     clips = List.copyOf(clips);
     returned = jonquil.source.InOrder.copyOf(returned);
+    sentBack = jonquil.source.InOrder.copyOf(sentBack);
     passes = List.copyOf(passes);
-    Map<String, List<PortArrival>> arriving = new java.util.LinkedHashMap<>();
-    arrivals.forEach((port, list) -> arriving.put(port, List.copyOf(list)));
-    arrivals = java.util.Collections.unmodifiableMap(arriving);
+    arrivals = jonquil.source.InOrder.copyOfLists(arrivals);
     unsettledLoops = List.copyOf(unsettledLoops);
   }
 
@@ -60,6 +60,7 @@ public record TrainSolution(
         jones,
         surfaces,
         returned,
+        sentBack,
         passes,
         next,
         unsettledLoops);
@@ -115,22 +116,32 @@ public record TrainSolution(
   }
 
   /**
-   * The light heading back from one place: an element's own backward ghosts and ports. At a source
-   * (or with no place): every backward beam of the train, which is what returns to the source's
-   * output where light is traced back through the elements before it (a return pass, or a face
-   * entered from behind; "returns to source" in the stray list) and an upper bound where it is not
-   * (a ghost, or a port no path follows, heading back).
+   * The light heading back from one place. At an element: what its first pass sent back (its
+   * backward ghosts and ports, traced on through the train) and the backward light booked as stray
+   * there. At a source: the power that returned to its output, traced back through the real
+   * elements before it by the same reverse pass as a written return pass (ghosts included, so an
+   * isolator upstream blocks a downstream window's ghost), plus any light heading back that the
+   * walk could not follow to its end (into a step reached from elsewhere), counted as if it
+   * returned. With no place: every backward beam of the train.
    */
   public double backReflected(Optional<jonquil.resolve.Symbol> at) {
-    if (at.isEmpty() || at.get().category() == jonquil.resolve.Category.SOURCE) {
+    if (at.isEmpty()) {
       return backReflected();
     }
     String name = at.get().name();
-    return stray.stream()
-        .filter(StrayBeam::backward)
-        .filter(b -> b.origin().equals(name) || b.origin().startsWith(name + "."))
-        .mapToDouble(StrayBeam::power)
-        .sum();
+    if (at.get().category() == jonquil.resolve.Category.SOURCE) {
+      return stray.stream()
+          .filter(StrayBeam::backward)
+          .filter(b -> b.origin().equals(name) || !returned.containsKey(b.origin()))
+          .mapToDouble(StrayBeam::power)
+          .sum();
+    }
+    return sentBack.getOrDefault(name, 0.0)
+        + stray.stream()
+            .filter(StrayBeam::backward)
+            .filter(b -> b.origin().equals(name) || b.origin().startsWith(name + "."))
+            .mapToDouble(StrayBeam::power)
+            .sum();
   }
 
   /** The light that ran back along its paths to a source's output, in the table frame. */

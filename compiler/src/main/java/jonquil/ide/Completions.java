@@ -42,7 +42,11 @@ final class Completions {
       }
       Vocabulary v = Vocabulary.of(r, file);
       List<CompletionItemInfo> out =
-          c.dotted().isPresent() ? ports(v, c.dotted().get()) : choose(c, v);
+          c.dotted().isPresent()
+              ? c.block() == CursorContext.Block.TRAIN
+                  ? faces(v, c.dotted().get())
+                  : ports(v, c.dotted().get())
+              : choose(c, v);
       return unique(out);
     } catch (RuntimeException e) {
       return List
@@ -277,6 +281,42 @@ final class Completions {
                                 ""))
                     .toList())
         .orElse(List.of());
+  }
+
+  /**
+   * In a path, what may follow {@code element.}: the ports that choose how the beam leaves it (on
+   * an element with more than one), the faces light enters it by again, and the ports a path may
+   * start at, each word once with what it means there.
+   */
+  private static List<CompletionItemInfo> faces(Vocabulary v, String element) {
+    Optional<ElementKind> kind = v.named(element).flatMap(Vocabulary.Named::kind);
+    if (kind.isEmpty()) {
+      return List.of();
+    }
+    ElementKind k = kind.get();
+    List<String> words = new ArrayList<>();
+    if (k.ports().size() > 1) {
+      words.addAll(k.ports());
+    }
+    words.addAll(k.entryFaces());
+    words.addAll(k.exits().stream().filter(x -> !k.ports().contains(x)).toList());
+    return words.stream()
+        .distinct()
+        .map(w -> new CompletionItemInfo(w, CompletionItemInfo.Kind.PORT, faceDetail(k, w), ""))
+        .toList();
+  }
+
+  /** What one word after an element's name means in a path, in a few words. */
+  private static String faceDetail(ElementKind k, String word) {
+    String straight = k.ports().size() > 1 ? k.ports().get(0) : "out";
+    return switch (word) {
+      case "front" -> "face: again the way the first pass came in; port: light heading back out";
+      case "back" -> "face: a return pass, against the light that left by '" + straight + "'";
+      case "side" ->
+          "face: the fourth face, a second input joining '" + straight + "'; port: its exit";
+      case "reflected" -> "port: the reflected light; face: against it";
+      default -> "port: the light leaving by '" + word + "'";
+    };
   }
 
   static List<CompletionItemInfo> parameters(ElementKind kind, Set<String> skip) {

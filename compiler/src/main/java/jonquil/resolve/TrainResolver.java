@@ -140,6 +140,15 @@ final class TrainResolver {
       }
       if (first && ref.port().isPresent()) {
         String word = ref.port().get().text();
+        if (!kind.exits().contains(word)
+            && kind.exits().size() > kind.ports().size()
+            && (kind.ports().size() < 2 || Suggest.closest(word, kind.ports()).isEmpty())) {
+          // A path may start at the returning light's exits too: suggest among all of them
+          // (a word close to a forward port keeps the port's own message).
+          badStart(ref, s, kind, word);
+          inThisPath.add(s);
+          continue;
+        }
         Optional<String> leaving =
             kind.exits().contains(word) && !kind.ports().contains(word)
                 ? Optional.of(word)
@@ -347,6 +356,31 @@ final class TrainResolver {
    * The port written after the name, checked; an element named with a bad port is remembered, so
    * its path is not followed.
    */
+  /** A path starting at a port the element does not have, with the closest of its exits. */
+  private void badStart(Arg.RefArg ref, Symbol s, ElementKind kind, String word) {
+    TextRange at = ref.port().orElseThrow().range();
+    // A one-port element's forward exit is not written: the path starts at its returning exits.
+    List<String> starts =
+        kind.ports().size() > 1
+            ? kind.exits()
+            : kind.exits().stream().filter(x -> !kind.ports().contains(x)).toList();
+    Optional<String> close = Suggest.closest(word, starts);
+    badPorts.add(s);
+    sink.report(
+        DiagnosticCode.UNKNOWN_PORT,
+        at,
+        kind.word()
+            + " '"
+            + s.name()
+            + "' has no port '"
+            + word
+            + "' to start a path at"
+            + close
+                .map(c -> "; did you mean '" + c + "'?")
+                .orElse("; its ports are " + ShapeMatcher.quoteList(starts)),
+        Resolver.replacement(sink.file, at, word, close));
+  }
+
   private Optional<String> portOf(Arg.RefArg ref, ElementKind kind) {
     Optional<String> port = refs.port(ref, kind);
     if (ref.port().isPresent() && port.isEmpty()) {

@@ -120,9 +120,27 @@ class CompletionTest {
   }
 
   @Test
-  void afterADotThePortsOfThatElement() {
+  void afterADotInARequirementThePortsOfThatElement() {
     assertEquals(
-        List.of("through", "reflected"), labels(at(BENCH.replace("pbs.reflected", "pbs.$0"))));
+        List.of("through", "reflected"),
+        labels(at(BENCH.replace("power at spot", "power at pbs.$0"))));
+  }
+
+  @Test
+  void afterADotInAPathTheElementsPortsAndFacesEachWithWhatItMeans() {
+    // A four-port: its two ports, then the faces light enters by again, then the side exit.
+    List<CompletionItemInfo> splitter = at(BENCH.replace("pbs.reflected", "pbs.$0"));
+    assertEquals(List.of("through", "reflected", "front", "back", "side"), labels(splitter));
+    assertEquals(
+        "face: a return pass, against the light that left by 'through'",
+        splitter.stream().filter(i -> i.label().equals("back")).findFirst().orElseThrow().detail());
+    assertTrue(splitter.stream().allMatch(i -> i.kind() == CompletionItemInfo.Kind.PORT));
+    // A lens has one way out, which is not written: only its faces, front also as a path start.
+    List<CompletionItemInfo> lens = at(BENCH.replace("-> 50 mm -> spot", "-> 50 mm -> l1.$0"));
+    assertEquals(List.of("front", "back"), labels(lens));
+    assertTrue(lens.stream().allMatch(i -> !i.detail().isEmpty()), lens.toString());
+    // A dump stops the light: nothing follows its name.
+    assertEquals(List.of(), at(BENCH.replace("-> 30 mm -> d1", "-> 30 mm -> d1.$0")));
   }
 
   @Test

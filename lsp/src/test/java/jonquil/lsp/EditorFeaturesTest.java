@@ -229,6 +229,24 @@ class EditorFeaturesTest {
   }
 
   @Test
+  void afterAnElementsDotInAPathItsPortsAndFacesComeWithTheirMeaning() throws Exception {
+    String text = BENCH.replace("-> 50 mm -> spot", "-> 50 mm -> spot\n  pbs.");
+    String uri = write("faces.jonq", text);
+    try (LspHarness h = new LspHarness(EditorFeatures.standard())) {
+      h.initialize(dir, modernClient(false));
+      h.open(uri, 1, text);
+      List<CompletionItem> items =
+          complete(h, uri, text, text.indexOf("  pbs.") + "  pbs.".length());
+      assertEquals(
+          List.of("through", "reflected", "front", "back", "side"),
+          labels(items, CompletionItemKind.Field));
+      assertTrue(
+          items.stream().allMatch(i -> i.getDetail() != null && !i.getDetail().isEmpty()),
+          items.toString());
+    }
+  }
+
+  @Test
   void aClientThatDoesNotResolveGetsTheDocumentationAtOnce() throws Exception {
     String text = BENCH.replace("focal 100 mm }", "focal 100 mm\n  \n}");
     String uri = write("eager.jonq", text);
