@@ -570,6 +570,7 @@ final class Propagator {
           c = c.plus(b.light().inFrameRotatedBy(b.frame().tableAngle()));
         }
         returned.merge(el.symbol().name(), c, Coherency::plus);
+        arrive(TrainSolution.returnKey(el.symbol().name()), beams);
         // One line's light (a ghost of that line) keeps its wavelength, for the note's by-line
         // list.
         double[] lines = beams.stream().mapToDouble(TracedBeam::wavelength).distinct().toArray();

@@ -199,6 +199,20 @@ final class RequirementEvaluator {
       case STRAY -> compare(c, s.strayPower(), "W", "");
       case BACK_REFLECTION -> {
         double back = s.backReflected(r.at().map(t -> t.symbol()));
+        // Beams of one line that return to a source meet at its output: what comes back is judged
+        // over their relative phase, the bright fringe included (fail closed).
+        java.util.Optional<String> source =
+            r.at()
+                .map(t -> t.symbol())
+                .filter(x -> x.category() == jonquil.resolve.Category.SOURCE)
+                .map(x -> x.name());
+        jonquil.optics.PowerRange range =
+            source.isPresent()
+                ? PortInterference.powerRange(model, s, TrainSolution.returnKey(source.get()), back)
+                : jonquil.optics.PowerRange.of(back);
+        if (range.varies()) {
+          yield overPhase(c, range, s.sourcePower());
+        }
         yield c.relativeToSource()
             ? compare(
                 c, s.sourcePower() == 0 ? 0 : back / s.sourcePower(), "", "of the source power")

@@ -144,6 +144,15 @@ public record TrainSolution(
             .sum();
   }
 
+  /**
+   * Where the beams that run back to a source's output are kept for interference: two beams of one
+   * line that return (the two arms of a Michelson, say) meet there, and the power they bring back
+   * depends on their relative phase like any port's where beams meet.
+   */
+  public static String returnKey(String source) {
+    return source + ".back";
+  }
+
   /** The light that ran back along its paths to a source's output, in the table frame. */
   public Optional<jonquil.optics.Coherency> returnedTo(String source) {
     return Optional.ofNullable(returned.get(source));
