@@ -56,6 +56,10 @@ final class Propagator {
 
   private final Map<ResolvedTrain.Entry, int[]> visits = new HashMap<>();
   private final java.util.Set<Symbol> entered = new java.util.HashSet<>();
+
+  /** Each path's place in the order the trains write them (ghosts waiting run back in it). */
+  private final Map<ResolvedTrain.BeamPath, Integer> pathOrder = new HashMap<>();
+
   private final List<ElementPass> passes = new ArrayList<>();
   private final Map<String, List<PortArrival>> arrivals = new LinkedHashMap<>();
   private final List<ResolvedTrain.Entry> unsettled = new ArrayList<>();
@@ -91,6 +95,7 @@ final class Propagator {
     }
     for (ResolvedTrain train : model.trains()) {
       for (ResolvedTrain.BeamPath path : train.paths()) {
+        pathOrder.putIfAbsent(path, pathOrder.size());
         for (int i = 0; i < path.steps().size(); i++) {
           if (path.steps().get(i) instanceof ResolvedTrain.Element el) {
             placements.putIfAbsent(el.symbol(), new Resume(path, i, List.of(), null));
@@ -211,17 +216,77 @@ final class Propagator {
    */
   private void walk(ResolvedTrain.BeamPath path, int from, List<TracedBeam> arriving) {
     Deque<Work> stack = new ArrayDeque<>();
+    // Ghosts running back wait here, by the step they run back from, until the light going
+    // forward is done; then the one furthest along goes first, and every ghost waiting at a step
+    // crosses the elements before it together with the others, as one beam per line. The reverse
+    // pass is linear in the light, so n ghosts of a chain cost n element passes instead of n²/2.
+    java.util.TreeMap<WaitingGhosts, List<TracedBeam>> waiting = new java.util.TreeMap<>();
     stack.push(new Resume(path, from, arriving, null));
-    while (!stack.isEmpty()) {
-      Work next = stack.pop();
-      if (next instanceof Resume r) {
-        resume(r, stack);
-      } else if (next instanceof Leak l) {
-        stray.add(l.beam());
-      } else if (next instanceof Retrace back) {
-        retrace(back, stack);
+    while (true) {
+      while (!stack.isEmpty()) {
+        Work next = stack.pop();
+        if (next instanceof Resume r) {
+          resume(r, stack);
+        } else if (next instanceof Leak l) {
+          stray.add(l.beam());
+        } else if (next instanceof Retrace back && back.ghost() && entered.isEmpty()) {
+          waiting
+              .computeIfAbsent(
+                  new WaitingGhosts(back.at(), pathOrder.get(back.path()), back.path()),
+                  k -> new ArrayList<>())
+              .addAll(back.beams());
+        } else if (next instanceof Retrace back) {
+          retrace(back, stack);
+        }
       }
+      if (waiting.isEmpty()) {
+        return;
+      }
+      Map.Entry<WaitingGhosts, List<TracedBeam>> first = waiting.pollFirstEntry();
+      retrace(
+          new Retrace(first.getKey().path(), first.getKey().at(), together(first.getValue()), true),
+          stack);
     }
+  }
+
+  /**
+   * Ghosts waiting to run back from step {@code at} of a path; the furthest step first, then the
+   * paths in the order the trains write them.
+   */
+  private record WaitingGhosts(int at, int order, ResolvedTrain.BeamPath path)
+      implements Comparable<WaitingGhosts> {
+    @Override
+    public int compareTo(WaitingGhosts o) {
+      return at != o.at ? Integer.compare(o.at, at) : Integer.compare(order, o.order);
+    }
+  }
+
+  /**
+   * Ghost beams of one line in one frame and medium added into one, in the order they came. Only a
+   * spec where no beams meet waits its ghosts ({@code entered} is empty): there no arrival records
+   * their optical paths, and a ghost adds to no element's incident light, so the merged beam keeps
+   * the size and path of its strongest part (they matter only for clipping at an aperture).
+   */
+  private static List<TracedBeam> together(List<TracedBeam> beams) {
+    Map<List<Object>, TracedBeam> by = new LinkedHashMap<>();
+    for (TracedBeam b : beams) {
+      by.merge(
+          List.of(b.source(), b.line(), b.wavelength(), b.frame(), b.medium()),
+          b,
+          (a, c) -> {
+            TracedBeam strong = a.power() >= c.power() ? a : c;
+            return new TracedBeam(
+                a.source(),
+                a.line(),
+                a.wavelength(),
+                a.light().plus(c.light()),
+                a.frame(),
+                a.medium(),
+                strong.mode(),
+                strong.opticalPath());
+          });
+    }
+    return List.copyOf(by.values());
   }
 
   /** What is left to do: a path to go on with, or light to book as stray at its turn. */
@@ -564,25 +629,29 @@ final class Propagator {
       }
       ResolvedTrain.Element el = (ResolvedTrain.Element) step;
       if (el.symbol().category() == Category.SOURCE) {
-        double p = beams.stream().mapToDouble(TracedBeam::power).sum();
         Coherency c = Coherency.ZERO;
         for (TracedBeam b : beams) {
           c = c.plus(b.light().inFrameRotatedBy(b.frame().tableAngle()));
         }
         returned.merge(el.symbol().name(), c, Coherency::plus);
         arrive(TrainSolution.returnKey(el.symbol().name()), beams);
-        // One line's light (a ghost of that line) keeps its wavelength, for the note's by-line
-        // list.
-        double[] lines = beams.stream().mapToDouble(TracedBeam::wavelength).distinct().toArray();
-        stray.add(
-            new StrayBeam(
-                el.symbol().name(),
-                "returns to source '" + el.symbol().name() + "' along its path",
-                p,
-                true,
-                el.symbol().file(),
-                el.range(),
-                lines.length == 1 ? OptionalDouble.of(lines[0]) : OptionalDouble.empty()));
+        // Each line's light keeps its wavelength, for the note's by-line list (ghosts of several
+        // lines may run back together).
+        Map<Double, Double> byLine = new LinkedHashMap<>();
+        for (TracedBeam b : beams) {
+          byLine.merge(b.wavelength(), b.power(), Double::sum);
+        }
+        byLine.forEach(
+            (wl, power) ->
+                stray.add(
+                    new StrayBeam(
+                        el.symbol().name(),
+                        "returns to source '" + el.symbol().name() + "' along its path",
+                        power,
+                        true,
+                        el.symbol().file(),
+                        el.range(),
+                        OptionalDouble.of(wl))));
         return;
       }
       String face = el.exitPort().equals("reflected") ? "reflected" : "back";
