@@ -55,26 +55,17 @@ public record PortInterference(
             ? Interference.range(beams, coherence)
             : Interference.enclosure(beams, coherence);
     double wavelength = arrivals.get(0).wavelength();
-    if (!paired) {
+    // A visibility is judged for two beams, each with its polarization followed along its route.
+    String unknown =
+        !paired
+            ? "the light of this line is partially polarized here, and which of its polarized parts"
+                + " meets which is not followed along the routes"
+            : arrivals.size() > 2
+                ? arrivals.size() + " beams of this line meet here; a visibility is judged for two"
+                : null;
+    if (unknown != null) {
       return new PortInterference(
-          port,
-          line,
-          wavelength,
-          arrivals.size(),
-          range,
-          OptionalDouble.empty(),
-          "the light of this line is partially polarized here, and which of its polarized parts"
-              + " meets which is not followed along the routes");
-    }
-    if (arrivals.size() > 2) {
-      return new PortInterference(
-          port,
-          line,
-          wavelength,
-          arrivals.size(),
-          range,
-          OptionalDouble.empty(),
-          arrivals.size() + " beams of this line meet here; a visibility is judged for two");
+          port, line, wavelength, arrivals.size(), range, OptionalDouble.empty(), unknown);
     }
     double dl = arrivals.get(1).opticalPath() - arrivals.get(0).opticalPath();
     OptionalDouble gamma = coherence.factor(dl);

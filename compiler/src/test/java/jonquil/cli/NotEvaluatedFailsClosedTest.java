@@ -6,7 +6,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import com.google.gson.JsonObject;
 import com.google.gson.JsonParser;
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import org.junit.jupiter.api.Test;
@@ -43,13 +42,7 @@ class NotEvaluatedFailsClosedTest {
           + "  nohd <= 1 m at s\n}\n";
 
   private CliRun run(String spec, String... options) throws IOException {
-    Files.writeString(dir.resolve(".jonquil-root"), "");
-    Files.writeString(dir.resolve("bench.jonq"), spec);
-    String[] args = new String[options.length + 2];
-    args[0] = "check";
-    System.arraycopy(options, 0, args, 1, options.length);
-    args[args.length - 1] = "bench.jonq";
-    return CliRun.of(dir, args);
+    return CliRun.checkSpec(dir, spec, options);
   }
 
   @Test

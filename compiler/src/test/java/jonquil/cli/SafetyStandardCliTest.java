@@ -46,13 +46,7 @@ class SafetyStandardCliTest {
           + "require {\n  exposure at eye <= 100 %\n}\n";
 
   private CliRun run(String spec, String... options) throws IOException {
-    Files.writeString(dir.resolve(".jonquil-root"), "");
-    Files.writeString(dir.resolve("bench.jonq"), spec);
-    String[] args = new String[options.length + 2];
-    args[0] = "check";
-    System.arraycopy(options, 0, args, 1, options.length);
-    args[args.length - 1] = "bench.jonq";
-    return CliRun.of(dir, args);
+    return CliRun.checkSpec(dir, spec, options);
   }
 
   @Test
