@@ -563,6 +563,25 @@ final class ElementOptics {
     Complex outside = real(materials.index(in.medium(), wl));
     double aoi = e.number(Param.AOI, "angle").orElse(0);
     int reflections = (int) e.number(Param.REFLECTIONS, "n").orElse(2);
+    if (!(n.getReal() * Math.sin(aoi) > outside.getReal())) {
+      // No total internal reflection (the medium around it is as dense, or the angle is below the
+      // critical one): the faces would pass most of the light out sideways, which this model of a
+      // retarder does not follow, so the element is refused rather than guessed.
+      throw new UnphysicalModel(
+          jonquil.diag.DiagnosticCode.OUT_OF_RANGE,
+          e.symbol().file(),
+          e.symbol().declaration().map(d -> d.range()).orElse(jonquil.source.TextRange.EMPTY),
+          String.format(
+              java.util.Locale.ROOT,
+              "rhomb '%s' retards by total internal reflection, which needs n sin(aoi) above the"
+                  + " index around it: here %.4f x sin %.1f deg = %.4f, around it %.4f; use a"
+                  + " denser glass or a larger 'aoi', or place it in air",
+              e.symbol().name(),
+              n.getReal(),
+              Math.toDegrees(aoi),
+              n.getReal() * Math.sin(aoi),
+              outside.getReal()));
+    }
     Fresnel.Coefficients tir = Fresnel.at(n, outside, aoi);
     Complex rp = tir.rp().pow(reflections);
     Complex rs = tir.rs().pow(reflections);

@@ -54,7 +54,8 @@ final class SourceBeams {
               light,
               BeamFrame.SOURCE,
               Medium.AMBIENT,
-              mode(source, wavelength, ambientIndex)));
+              mode(source, wavelength, ambientIndex),
+              0)); // no optical path run yet
     }
     return beams;
   }

@@ -21,18 +21,6 @@ public record TracedBeam(
     Optional<GaussianBeam> mode,
     double opticalPath) {
 
-  /** A beam just leaving its source. */
-  public TracedBeam(
-      Symbol source,
-      int line,
-      double wavelength,
-      Coherency light,
-      BeamFrame frame,
-      Medium medium,
-      Optional<GaussianBeam> mode) {
-    this(source, line, wavelength, light, frame, medium, mode, 0);
-  }
-
   public TracedBeam with(Coherency next) {
     return new TracedBeam(source, line, wavelength, next, frame, medium, mode, opticalPath);
   }
