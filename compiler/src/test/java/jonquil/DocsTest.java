@@ -24,6 +24,21 @@ class DocsTest {
   }
 
   @Test
+  void everySampleBenchIsListedInTheReadme() throws IOException {
+    String readme = readme();
+    List<String> missing = new ArrayList<>();
+    try (var files = Files.list(Repo.samples())) {
+      files
+          .filter(p -> p.toString().endsWith(".jonq"))
+          .map(p -> p.getFileName().toString())
+          .sorted()
+          .filter(name -> !readme.contains("(`" + name + "`)"))
+          .forEach(missing::add);
+    }
+    assertEquals(List.of(), missing, "samples not listed under 'Samples' in README.md");
+  }
+
+  @Test
   void theReadmeOpensWithTheJobAndGivesExactlyTheTwoCommandsCiRuns() throws IOException {
     String readme = readme();
     String ci = Files.readString(Repo.root().resolve(".ci/run"));
