@@ -229,7 +229,7 @@ final class Propagator {
           resume(r, stack);
         } else if (next instanceof Leak l) {
           stray.add(l.beam());
-        } else if (next instanceof Retrace back && back.ghost() && entered.isEmpty()) {
+        } else if (next instanceof Retrace back && back.ghost()) {
           waiting
               .computeIfAbsent(
                   new WaitingGhosts(back.at(), pathOrder.get(back.path()), back.path()),
@@ -262,10 +262,10 @@ final class Propagator {
   }
 
   /**
-   * Ghost beams of one line in one frame and medium added into one, in the order they came. Only a
-   * spec where no beams meet waits its ghosts ({@code entered} is empty): there no arrival records
-   * their optical paths, and a ghost adds to no element's incident light, so the merged beam keeps
-   * the size and path of its strongest part (they matter only for clipping at an aperture).
+   * Ghost beams of one line in one frame and medium added into one, in the order they came. Ghosts
+   * add as power (they record no arrival, so their optical paths meet nothing) and add to no
+   * element's incident light, so the merged beam keeps the size and path of its strongest part
+   * (they matter only for clipping at an aperture).
    */
   private static List<TracedBeam> together(List<TracedBeam> beams) {
     Map<List<Object>, TracedBeam> by = new LinkedHashMap<>();
@@ -634,7 +634,11 @@ final class Propagator {
           c = c.plus(b.light().inFrameRotatedBy(b.frame().tableAngle()));
         }
         returned.merge(el.symbol().name(), c, Coherency::plus);
-        arrive(TrainSolution.returnKey(el.symbol().name()), beams);
+        if (!back.ghost()) {
+          // Written return passes meet there and interfere (a Michelson's arms); ghosts add as
+          // power, here as everywhere: their phases are set by no path the spec writes.
+          arrive(TrainSolution.returnKey(el.symbol().name()), beams);
+        }
         // Each line's light keeps its wavelength, for the note's by-line list (ghosts of several
         // lines may run back together).
         Map<Double, Double> byLine = new LinkedHashMap<>();
