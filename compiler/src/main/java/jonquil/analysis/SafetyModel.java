@@ -44,6 +44,12 @@ final class SafetyModel {
 
   /** The emission of a source, or at a place carrying {@code power} of it. */
   static Emission emission(double wavelength, double power, Optional<Pulses> pulses) {
+    if (!(power > 0)) {
+      // A place no light reaches (after a 0 % mirror, say): the emission of nothing, whatever its
+      // source's pulses, so its exposure, OD and NOHD are zero (a pulse train of no energy is no
+      // emission the safety core takes).
+      return Emission.continuous(wavelength, 0);
+    }
     if (pulses.isEmpty()) {
       return Emission.continuous(wavelength, power);
     }
